@@ -1,0 +1,48 @@
+// Lint: TypeScript rules plus the one-way import flow ui → state → worker → io → core.
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import globals from 'globals';
+
+const noImportsFrom = (patterns, message) => ({
+  'no-restricted-imports': ['error', { patterns: [{ group: patterns, message }] }],
+});
+
+export default tseslint.config(
+  { ignores: ['dist/**', 'node_modules/**', 'coverage/**', 'test-results/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { globals: { ...globals.browser, ...globals.node } },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/consistent-type-imports': 'error',
+    },
+  },
+  {
+    files: ['src/core/**/*.ts'],
+    rules: noImportsFrom(
+      ['node:*', 'fs', 'path', 'os', 'react', 'react-dom', 'react-dom/*', 'plotly.js*', 'zustand', 'papaparse',
+        '**/io/**', '**/worker/**', '**/state/**', '**/ui/**', '**/cli/**'],
+      'src/core is pure numerics: no DOM, React, Node, I/O or app layers.',
+    ),
+  },
+  {
+    files: ['src/io/**/*.ts'],
+    rules: noImportsFrom(['node:*', 'fs', 'path', 'react', 'react-dom', '**/worker/**', '**/state/**', '**/ui/**', '**/cli/**'],
+      'src/io may import only src/core and parsing libraries.'),
+  },
+  {
+    files: ['src/worker/**/*.ts'],
+    rules: noImportsFrom(['node:*', 'fs', 'react', 'react-dom', '**/state/**', '**/ui/**', '**/cli/**'],
+      'src/worker may import io and core only.'),
+  },
+  {
+    files: ['src/state/**/*.ts'],
+    rules: noImportsFrom(['node:*', 'fs', '**/ui/**', '**/cli/**'], 'src/state may not import UI or CLI.'),
+  },
+  {
+    files: ['src/ui/**/*.{ts,tsx}'],
+    rules: noImportsFrom(['node:*', 'fs', '**/cli/**', '**/io/**', '**/worker/**'],
+      'src/ui acts through src/state; core only as types.'),
+  },
+);

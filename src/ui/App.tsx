@@ -1,0 +1,7 @@
+export function App() {
+  return (
+    <main>
+      <h1>Halfwave</h1>
+    </main>
+  );
+}

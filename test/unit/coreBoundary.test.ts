@@ -1,0 +1,48 @@
+/**
+ * The numeric core must stay pure: no DOM, React, Node built-ins, timers, worker globals or app
+ * layers. This test reads every file under src/core and fails on a forbidden import or global.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const CORE = join(import.meta.dirname, '..', '..', 'src', 'core');
+
+function listTs(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const p = join(dir, name);
+    if (statSync(p).isDirectory()) return listTs(p);
+    return /\.tsx?$/.test(name) && !name.endsWith('.test.ts') ? [p] : [];
+  });
+}
+
+const FORBIDDEN_MODULES = /^(node:|fs$|path$|os$|child_process$|react|react-dom|zustand|plotly|papaparse)|\/(io|worker|state|ui|cli)\//;
+const FORBIDDEN_GLOBALS = /\b(document|window|self\.postMessage|localStorage|setTimeout|setInterval|process\.|require\()/;
+
+export function findViolations(source: string): string[] {
+  const out: string[] = [];
+  for (const m of source.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
+    const spec = m[1] ?? m[2] ?? '';
+    if (FORBIDDEN_MODULES.test(spec)) out.push(`imports ${spec}`);
+  }
+  const code = source.replace(/\/\*[\s\S]*?\*\//g, '').replace(/\/\/.*$/gm, '');
+  const g = code.match(FORBIDDEN_GLOBALS);
+  if (g) out.push(`uses ${g[0]}`);
+  return out;
+}
+
+describe('core purity (architecture rule of this project)', () => {
+  it('the detector catches a React import and a DOM global', () => {
+    expect(findViolations("import { useState } from 'react';")).toEqual(['imports react']);
+    expect(findViolations("import x from '../io/parseTable';")).toEqual(['imports ../io/parseTable']);
+    expect(findViolations('const el = document.body;')).toEqual(['uses document']);
+    expect(findViolations("import type { A } from './types';")).toEqual([]);
+  });
+
+  it('no file under src/core imports the DOM, React, Node or an app layer', () => {
+    const files = listTs(CORE);
+    expect(files.length).toBeGreaterThan(0);
+    const bad = files.flatMap((f) => findViolations(readFileSync(f, 'utf8')).map((v) => `${relative(CORE, f)}: ${v}`));
+    expect(bad).toEqual([]);
+  });
+});
