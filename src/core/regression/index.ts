@@ -1,0 +1,4 @@
+/** Public API of the regression helpers. */
+export { fitLine } from './fitLine';
+export type { FitLineOptions, FitLineResult } from './fitLine';
+export { logGamma, regularizedIncompleteBeta, studentTCdf, studentTQuantile } from './studentTQuantile';
