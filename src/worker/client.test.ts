@@ -1,0 +1,88 @@
+/**
+ * Round trip through the worker boundary: page → message → worker entry → core → message → page,
+ * with the real `analysis.worker.ts` running on a fake worker scope, and the in-thread transport.
+ * Expected values are worked by hand from the triangle waves below (no published source needed:
+ * vertex positions of a triangle wave are arithmetic).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { AnalysisError } from '../core/errors';
+import { createInThreadClient, createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
+import { CancelledError } from './errors';
+import type { PageToWorker, WorkerToPage } from './protocol';
+
+/** Two cycles 0 → 1 → 0 V in steps of 0.01 V: 401 points, vertices at 100, 200, 300. */
+function triangle(cycles: number): Float64Array {
+  const out: number[] = [];
+  for (let c = 0; c < cycles; c++) {
+    for (let i = c === 0 ? 0 : 1; i <= 100; i++) out.push(i / 100);
+    for (let i = 99; i >= 0; i--) out.push(i / 100);
+  }
+  return Float64Array.from(out);
+}
+
+/** Loads the real worker entry on a fake global scope connected to a WorkerLike. */
+async function loadWorkerEntry(): Promise<WorkerLike> {
+  const pageListeners: ((e: MessageEvent<WorkerToPage>) => void)[] = [];
+  const scope = {
+    onmessage: null as null | ((e: MessageEvent<PageToWorker>) => void),
+    postMessage(msg: WorkerToPage, transfer: Transferable[] = []) {
+      const copy = structuredClone(msg, { transfer }) as WorkerToPage;
+      setTimeout(() => pageListeners.forEach((l) => l({ data: copy } as MessageEvent<WorkerToPage>)), 0);
+    },
+  };
+  (globalThis as unknown as { self: unknown }).self = scope;
+  await import('./analysis.worker');
+  return {
+    postMessage(msg, transfer) {
+      const copy = structuredClone(msg, { transfer }) as PageToWorker;
+      setTimeout(() => scope.onmessage?.({ data: copy } as MessageEvent<PageToWorker>), 0);
+    },
+    addEventListener(_type, listener) {
+      pageListeners.push(listener);
+    },
+    terminate() {},
+  };
+}
+
+const transports: [string, () => Promise<AnalysisClient>][] = [
+  ['worker entry', async () => createWorkerClient(await loadWorkerEntry())],
+  ['in-thread', () => Promise.resolve(createInThreadClient())],
+];
+
+describe.each(transports)('analysis client over %s', (_name, make) => {
+  let client: AnalysisClient;
+  beforeAll(async () => {
+    client = await make();
+  });
+
+  it('splits a two-cycle triangle wave into four sweeps and two cycles', async () => {
+    const potentialV = triangle(2);
+    expect(potentialV.length).toBe(401);
+    const split = await client.request('segments', { potentialV, options: {} });
+    expect(split.segments.map((s) => [s.start, s.end, s.direction, s.cycle])).toEqual([
+      [0, 101, 'positive', 1],
+      [100, 201, 'negative', 1],
+      [200, 301, 'positive', 2],
+      [300, 401, 'negative', 2],
+    ]);
+    expect(split.cycles.map((c) => [c.index, c.start, c.end])).toEqual([
+      [1, 0, 200],
+      [2, 200, 401],
+    ]);
+  });
+
+  it('rethrows a core failure as AnalysisError with its code', async () => {
+    const flat = new Float64Array(10).fill(0.2);
+    const err = await client.request('segments', { potentialV: flat, options: {} }).catch((e: unknown) => e);
+    expect(err).toBeInstanceOf(AnalysisError);
+    expect((err as AnalysisError).code).toBe('OUT_OF_RANGE');
+    expect((err as AnalysisError).message).toMatch(/never changes/);
+  });
+
+  it('rejects with CancelledError when the signal is already aborted', async () => {
+    const ctrl = new AbortController();
+    ctrl.abort();
+    const err = await client.request('segments', { potentialV: triangle(1), options: {} }, { signal: ctrl.signal }).catch((e: unknown) => e);
+    expect(err).toBeInstanceOf(CancelledError);
+  });
+});

@@ -1,0 +1,108 @@
+/**
+ * Promise API over the analysis worker. `request(type, input, { onProgress, signal })` resolves
+ * with the handler's output or rejects with the same error class the handler threw
+ * (ImportError, AnalysisError) carrying its `code`; aborting the signal rejects with
+ * CancelledError at once and tells the worker to drop the work.
+ *
+ * Two transports share this API: a real Worker (the browser) and in-thread (Vitest, and the
+ * fallback where workers are unavailable). Both run the same handler table.
+ */
+import { CancelledError, describeError, reviveError } from './errors';
+import { runHandler } from './handlers';
+import { collectTransferables, type PageToWorker, type RequestInput, type RequestOutput, type RequestType, type WorkerToPage } from './protocol';
+
+export interface RequestOptions {
+  /** Called with fraction done (0…1) and a short stage text. */
+  onProgress?: (fraction: number, stage: string) => void;
+  /** Abort to cancel; the promise then rejects with CancelledError. */
+  signal?: AbortSignal;
+}
+
+export interface AnalysisClient {
+  request<K extends RequestType>(type: K, input: RequestInput<K>, options?: RequestOptions): Promise<RequestOutput<K>>;
+  /** 'worker' or 'in-thread', for the status line. */
+  readonly transport: 'worker' | 'in-thread';
+  dispose(): void;
+}
+
+/** The parts of a Worker the client uses, so tests can pass a fake. */
+export interface WorkerLike {
+  postMessage(message: PageToWorker, transfer: Transferable[]): void;
+  addEventListener(type: 'message', listener: (event: MessageEvent<WorkerToPage>) => void): void;
+  terminate(): void;
+}
+
+interface Pending {
+  resolve(value: unknown): void;
+  reject(reason: unknown): void;
+  onProgress?: RequestOptions['onProgress'];
+}
+
+export function createWorkerClient(worker: WorkerLike): AnalysisClient {
+  const pending = new Map<number, Pending>();
+  let nextId = 1;
+  worker.addEventListener('message', (event) => {
+    const msg = event.data;
+    const entry = pending.get(msg.requestId);
+    if (!entry) return;
+    if (msg.type === 'progress') {
+      entry.onProgress?.(msg.fraction, msg.stage);
+      return;
+    }
+    pending.delete(msg.requestId);
+    if (msg.type === 'result') entry.resolve(msg.output);
+    else entry.reject(reviveError(msg));
+  });
+  return {
+    transport: 'worker',
+    request(type, input, options = {}) {
+      const requestId = nextId++;
+      return new Promise((resolve, reject) => {
+        if (options.signal?.aborted) return reject(new CancelledError());
+        const entry: Pending = { resolve: resolve as (v: unknown) => void, reject };
+        if (options.onProgress) entry.onProgress = options.onProgress;
+        pending.set(requestId, entry);
+        options.signal?.addEventListener('abort', () => {
+          if (!pending.delete(requestId)) return;
+          worker.postMessage({ type: 'cancel', requestId }, []);
+          reject(new CancelledError());
+        }, { once: true });
+        const msg = { type, requestId, input } as PageToWorker;
+        worker.postMessage(msg, collectTransferables(input));
+      });
+    },
+    dispose() {
+      for (const entry of pending.values()) entry.reject(new CancelledError('the analysis worker was closed'));
+      pending.clear();
+      worker.terminate();
+    },
+  };
+}
+
+/** Runs requests on the calling thread through the same handlers and error path as the worker. */
+export function createInThreadClient(): AnalysisClient {
+  let nextId = 1;
+  return {
+    transport: 'in-thread',
+    async request(type, input, options = {}) {
+      const requestId = nextId++;
+      const check = () => {
+        if (options.signal?.aborted) throw new CancelledError();
+      };
+      try {
+        check();
+        const output = await runHandler(type, input, {
+          progress(fraction, stage) {
+            check();
+            options.onProgress?.(fraction, stage);
+          },
+        });
+        check();
+        return output;
+      } catch (err) {
+        throw reviveError(describeError(requestId, err));
+      }
+    },
+    dispose() {},
+  };
+}

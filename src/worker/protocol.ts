@@ -1,0 +1,80 @@
+/**
+ * Messages between the page and the analysis worker. Every request, progress report, result and
+ * error carries the `requestId` of the request it belongs to. Columns travel as typed arrays whose
+ * buffers are transferred, not copied (see `collectTransferables`).
+ *
+ * `RequestMap` is the single table of what the worker can do: the request `type`, its input and
+ * its output. The unions below are derived from it, so adding a line there types both ends.
+ */
+import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSweepSegments';
+
+export interface RequestMap {
+  /** Split a potential trace into sweeps and cycles (core/sweeps/findSweepSegments). */
+  segments: {
+    input: { potentialV: Float64Array; options: Omit<FindSweepSegmentsOptions, 'cycleColumn'> };
+    output: SweepSplit;
+  };
+}
+
+export type RequestType = keyof RequestMap;
+export type RequestInput<K extends RequestType> = RequestMap[K]['input'];
+export type RequestOutput<K extends RequestType> = RequestMap[K]['output'];
+
+/** A request from the page: `{ type, requestId, input }`, discriminated on `type`. */
+export type WorkerRequest = {
+  [K in RequestType]: { type: K; requestId: number; input: RequestInput<K> };
+}[RequestType];
+
+export interface CancelMessage {
+  type: 'cancel';
+  requestId: number;
+}
+
+export type PageToWorker = WorkerRequest | CancelMessage;
+
+export interface ProgressMessage {
+  type: 'progress';
+  requestId: number;
+  /** Fraction done, 0…1. */
+  fraction: number;
+  /** Short human-readable stage, e.g. "parsing rows". */
+  stage: string;
+}
+
+export type ResultMessage = {
+  [K in RequestType]: { type: 'result'; requestId: number; request: K; output: RequestOutput<K> };
+}[RequestType];
+
+/** Which error class the client should rebuild. */
+export type ErrorClassName = 'ImportError' | 'AnalysisError' | 'CancelledError' | 'Error';
+
+export interface ErrorMessage {
+  type: 'error';
+  requestId: number;
+  errorName: ErrorClassName;
+  code: string;
+  message: string;
+  fileName?: string;
+  line?: number;
+  column?: number;
+}
+
+export type WorkerToPage = ProgressMessage | ResultMessage | ErrorMessage;
+
+/**
+ * All distinct ArrayBuffers under `value` (typed-array views, nested objects and arrays), so the
+ * sender can transfer them instead of copying. Depth-limited: results are shallow trees.
+ */
+export function collectTransferables(value: unknown, depth = 6, into = new Set<ArrayBuffer>()): ArrayBuffer[] {
+  if (depth < 0 || value === null || typeof value !== 'object') return [...into];
+  if (ArrayBuffer.isView(value)) {
+    if (value.buffer instanceof ArrayBuffer) into.add(value.buffer);
+  } else if (value instanceof ArrayBuffer) {
+    into.add(value);
+  } else if (Array.isArray(value)) {
+    for (const item of value) collectTransferables(item, depth - 1, into);
+  } else {
+    for (const item of Object.values(value)) collectTransferables(item, depth - 1, into);
+  }
+  return [...into];
+}
