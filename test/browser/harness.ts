@@ -1,0 +1,75 @@
+/**
+ * Opens the built app in Debian's headless Chromium through playwright-core and records what a
+ * spec must assert on: console errors, uncaught page errors, and any request to a host other than
+ * this machine (such requests are also blocked, so a leak fails loudly instead of hanging).
+ */
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { inject } from 'vitest';
+
+export const CHROMIUM = process.env.HALFWAVE_CHROMIUM ?? '/usr/bin/chromium';
+const FLAGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export interface OpenedApp {
+  page: Page;
+  browser: Browser;
+  baseUrl: string;
+  consoleErrors: string[];
+  pageErrors: string[];
+  outsideRequests: string[];
+  close: () => Promise<void>;
+}
+
+let announced = false;
+
+/** True for URLs served by this machine (or in-page data/blob URLs). */
+export function isLocalUrl(url: string): boolean {
+  if (url.startsWith('data:') || url.startsWith('blob:') || url === 'about:blank') return true;
+  try {
+    const host = new URL(url).hostname;
+    return host === '127.0.0.1' || host === 'localhost' || host === '[::1]' || host === '::1';
+  } catch {
+    return false;
+  }
+}
+
+export async function openApp(path = '', viewport = { width: 1366, height: 768 }): Promise<OpenedApp> {
+  const baseUrl = inject('baseUrl');
+  const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: FLAGS });
+  if (!announced) {
+    console.log(`[browser] running in Chromium ${browser.version()} (${CHROMIUM}, headless) against ${baseUrl}`);
+    announced = true;
+  }
+  const context = await browser.newContext({ viewport, acceptDownloads: true });
+  const page = await context.newPage();
+  const consoleErrors: string[] = [];
+  const pageErrors: string[] = [];
+  const outsideRequests: string[] = [];
+  page.on('console', (msg) => {
+    if (msg.type() === 'error') consoleErrors.push(msg.text());
+  });
+  page.on('pageerror', (err) => pageErrors.push(err.message));
+  await context.route('**/*', async (route) => {
+    const url = route.request().url();
+    if (isLocalUrl(url)) return route.continue();
+    outsideRequests.push(url);
+    return route.abort('blockedbyclient');
+  });
+  await page.goto(new URL(path, baseUrl).toString(), { waitUntil: 'load' });
+  return {
+    page,
+    browser,
+    baseUrl,
+    consoleErrors,
+    pageErrors,
+    outsideRequests,
+    close: () => browser.close(),
+  };
+}
