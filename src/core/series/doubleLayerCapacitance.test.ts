@@ -1,0 +1,27 @@
+import { describe, expect, it } from 'vitest';
+import { AnalysisError } from '../errors';
+import { chargingCurrentA, doubleLayerCapacitance } from './doubleLayerCapacitance';
+
+describe('doubleLayerCapacitance', () => {
+  // Bard & Faulkner 2nd ed. §1.2 (from memory), worked example of check-values.md §9:
+  // A = 0.0707 cm², Cd = 20 µF/cm², v = 0.1 V/s → ic = 0.1414 µA, gap 0.2828 µA → 20.0 µF/cm².
+  it('charging current and Cd from one gap match the worked example', () => {
+    expect(Math.abs(chargingCurrentA(0.0707, 20e-6, 0.1) / 0.1414e-6 - 1)).toBeLessThan(1e-3);
+    const r = doubleLayerCapacitance({ scanRatesVPerS: [0.1], gapCurrentsA: [0.2828e-6], areaCm2: 0.0707 });
+    expect(Math.abs(r.capacitanceFPerCm2 / 20e-6 - 1)).toBeLessThan(1e-3);
+    expect(r.fit).toBeNull();
+  });
+  // Same relation over a series, with a constant leak that must land in the intercept.
+  it('recovers Cd from the slope of a series despite a constant offset', () => {
+    const v = [0.02, 0.05, 0.1, 0.2, 0.5];
+    const gap = v.map((s) => 2 * 0.0707 * 20e-6 * s + 4e-9);
+    const r = doubleLayerCapacitance({ scanRatesVPerS: v, gapCurrentsA: gap, areaCm2: 0.0707 });
+    expect(r.capacitanceFPerCm2).toBeCloseTo(20e-6, 12);
+    expect(r.fit?.intercept).toBeCloseTo(2e-9, 15);
+  });
+  it('rejects negative gaps and bad areas', () => {
+    expect(() => doubleLayerCapacitance({ scanRatesVPerS: [0.1], gapCurrentsA: [-1e-7], areaCm2: 1 })).toThrow(AnalysisError);
+    expect(() => doubleLayerCapacitance({ scanRatesVPerS: [0.1], gapCurrentsA: [1e-7], areaCm2: 0 })).toThrow(/areaCm2/);
+    expect(() => doubleLayerCapacitance({ scanRatesVPerS: [], gapCurrentsA: [], areaCm2: 1 })).toThrow(AnalysisError);
+  });
+});

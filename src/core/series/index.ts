@@ -1,0 +1,8 @@
+/** Public API of the scan-rate series methods. */
+export * from './randlesSevcik';
+export * from './lavironSurfaceWave';
+export * from './logLogSlope';
+export * from './peakPotentialVsLogScanRate';
+export * from './electroactiveAreaFromStandard';
+export * from './doubleLayerCapacitance';
+export * from './chargingCurrentGap';
