@@ -1,0 +1,4 @@
+/** Public API of the electrode-kinetics methods. */
+export * from './nicholsonPsi';
+export * from './nicholsonRateConstant';
+export * from './lavironRateConstant';
