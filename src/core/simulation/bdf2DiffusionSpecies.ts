@@ -1,0 +1,92 @@
+/**
+ * One dissolved species under planar semi-infinite diffusion (with an optional first-order
+ * homogeneous decay), advanced in time by the second-order backward differentiation formula
+ * (BDF2), fully implicit, on an expanding grid with a conservative three-point (finite-volume)
+ * discretisation. The first step uses backward Euler (BDF1), which needs no history.
+ * Source: BDF2 for electrochemical diffusion: D. Britz, T. Strutwolf, "Digital Simulation in
+ *   Electrochemistry", 4th ed., Springer (2016), chapter on implicit methods (from memory);
+ *   the scheme is A- and L-stable, so any time step is stable.
+ * Equation per node i (control volume V_i, spacings h): V_i·dc_i/dt = D[(c_{i+1}−c_i)/h_i −
+ *   (c_i−c_{i−1})/h_{i−1}] − k·V_i·c_i; at the surface node the second term is replaced by the
+ *   flux q (mol cm⁻² s⁻¹) of this species into the electrode. The bulk node holds c_bulk.
+ * Per step the surface concentration is a linear function of q: c_0 = intercept − q·slope.
+ */
+import type { ExpandingGrid } from './expandingGrid';
+import { eliminateFromBulkSide, factorThomasFromBulkSide, substituteTowardsBulk, type ThomasFactor } from './solveTridiagonalThomas';
+
+export class Bdf2DiffusionSpecies {
+  /** Concentrations at the latest completed step, mol/cm³ (nodes 0 … N−1). */
+  readonly current: Float64Array;
+  private readonly previous: Float64Array;
+  private readonly rhs: Float64Array;
+  private readonly u: Float64Array;
+  private readonly factorBdf1: ThomasFactor;
+  private readonly factorBdf2: ThomasFactor;
+  private active: ThomasFactor;
+  private steps = 0;
+  /** −D/h of the last interval: couples node N−1 to the fixed bulk node. */
+  private readonly bulkCoupling: number;
+  /** After prepareStep: surface value without flux, and dc_0/dq (positive). */
+  intercept = 0;
+  slope = 0;
+
+  constructor(
+    private readonly grid: ExpandingGrid,
+    diffusionCm2PerS: number,
+    private readonly bulkMolPerCm3: number,
+    decayRatePerS: number,
+    private readonly dtS: number,
+  ) {
+    const n = grid.volumeCm.length;
+    this.current = new Float64Array(n).fill(bulkMolPerCm3);
+    this.previous = new Float64Array(n).fill(bulkMolPerCm3);
+    this.rhs = new Float64Array(n);
+    this.u = new Float64Array(n);
+    this.factorBdf1 = this.factor(diffusionCm2PerS, decayRatePerS, 1 / dtS);
+    this.factorBdf2 = this.factor(diffusionCm2PerS, decayRatePerS, 1.5 / dtS);
+    this.active = this.factorBdf1;
+    this.bulkCoupling = -diffusionCm2PerS / (grid.spacingCm[n - 1] as number);
+  }
+
+  private factor(d: number, k: number, sigma: number): ThomasFactor {
+    const { spacingCm: h, volumeCm: v } = this.grid;
+    const n = v.length;
+    const lower = new Float64Array(n);
+    const diag = new Float64Array(n);
+    const upper = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const right = d / (h[i] as number);
+      const left = i === 0 ? 0 : d / (h[i - 1] as number);
+      lower[i] = -left;
+      upper[i] = -right;
+      diag[i] = (sigma + k) * (v[i] as number) + left + right;
+    }
+    return factorThomasFromBulkSide(lower, diag, upper);
+  }
+
+  /** Builds the right-hand side from the history and eliminates it; sets intercept and slope. */
+  prepareStep(): void {
+    const bdf2 = this.steps > 0;
+    this.active = bdf2 ? this.factorBdf2 : this.factorBdf1;
+    const v = this.grid.volumeCm;
+    const c = this.current;
+    const p = this.previous;
+    const rhs = this.rhs;
+    const n = rhs.length;
+    const inv = 1 / this.dtS;
+    for (let i = 0; i < n; i++) {
+      const history = bdf2 ? (2 * (c[i] as number) - 0.5 * (p[i] as number)) * inv : (c[i] as number) * inv;
+      rhs[i] = (v[i] as number) * history;
+    }
+    rhs[n - 1] = (rhs[n - 1] as number) - this.bulkCoupling * this.bulkMolPerCm3;
+    this.intercept = eliminateFromBulkSide(this.active, rhs, this.u);
+    this.slope = this.active.inverseDenominator[0] as number;
+  }
+
+  /** Completes the step once the flux into the electrode, q (mol cm⁻² s⁻¹), is known. */
+  finishStep(fluxIntoElectrode: number): void {
+    this.previous.set(this.current);
+    substituteTowardsBulk(this.active, this.u, this.intercept - fluxIntoElectrode * this.slope, this.current);
+    this.steps++;
+  }
+}

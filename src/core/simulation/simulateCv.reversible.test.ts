@@ -1,0 +1,71 @@
+/**
+ * Validation of the E mechanism in the reversible (Nernstian) limit against published values.
+ */
+import { describe, expect, it } from 'vitest';
+import { FARADAY_C_PER_MOL as F, inverseThermalVoltagePerV } from '../constants';
+import { simulateCv } from './simulateCv';
+import { cathodicFirstPeaks } from './simulationTestSupport';
+
+const f = inverseThermalVoltagePerV(298.15);
+const base = { k0CmPerS: Infinity, formalPotentialV: 0, startV: 0.4, switchV: -0.5, areaCm2: 0.0707, concentrationOMolPerCm3: 1e-6, diffusionOCm2PerS: 7.6e-6, diffusionRCm2PerS: 7.6e-6 };
+
+describe('simulateCv, E mechanism, reversible limit', () => {
+  // Nicholson & Shain, Anal. Chem. 36, 706 (1964), Table I; Bard & Faulkner, Electrochemical
+  // Methods, 2nd ed. (2001), §6.2 (eq. 6.2.18–6.2.19, numbering from memory): maximum of the
+  // Nernstian current function π^½χ = 0.4463.
+  it.each([
+    [1, 0.1],
+    [1, 1],
+    [2, 0.1],
+  ])('peak current is 0.4463·nFAC(nFvD/RT)^½ within 0.5 % (n = %i, v = %f V/s)', (n, v) => {
+    const r = simulateCv({ ...base, electronCount: n, scanRateVPerS: v });
+    const expected = 0.4463 * n * F * 0.0707 * 1e-6 * Math.sqrt(n * f * v * 7.6e-6);
+    const { cathodic } = cathodicFirstPeaks(r);
+    expect(Math.abs(-cathodic.currentA / expected - 1)).toBeLessThan(0.005);
+  });
+
+  // Bard & Faulkner 2nd ed. §6.2 (from memory): E_p = E_1/2 − 1.109 RT/(nF) for a reduction,
+  // E_1/2 = E°′ + (RT/2nF)·ln(D_R/D_O).
+  it('cathodic peak sits 1.109 RT/F below E½ (±0.2 mV), and E½ moves with ln(D_R/D_O)', () => {
+    const equal = cathodicFirstPeaks(simulateCv(base)).cathodic.potentialV;
+    expect(Math.abs(equal + 1.109 / f)).toBeLessThan(2e-4);
+    const unequal = cathodicFirstPeaks(simulateCv({ ...base, diffusionRCm2PerS: 7.6e-6 / 4 })).cathodic.potentialV;
+    expect(Math.abs(unequal - (equal + Math.log(1 / 4) / (2 * f)))).toBeLessThan(2e-4);
+  });
+
+  // Nicholson, Anal. Chem. 37, 1351 (1965), as tabulated in Bard & Faulkner 2nd ed. §6.5
+  // (Table 6.5.1, number from memory): n·ΔE_p against the switching potential. The table's first
+  // column is read as n(E_pc − E_λ), the distance past the forward peak; read as E_1/2 − E_λ the
+  // 71.5 mV row would be 1.5 mV off (checked with this simulator at 0.25 mV resolution).
+  it.each([
+    [71.5, 60.5],
+    [121.5, 59.2],
+    [171.5, 58.3],
+    [271.5, 57.8],
+  ])('ΔEp with E_λ %f mV past the cathodic peak is %f mV within 1 mV', (pastPeakMV, deltaMV) => {
+    const peakV = -1.109 / f;
+    const r = simulateCv({ ...base, switchV: peakV - pastPeakMV / 1000, stepV: 0.0005 });
+    const { cathodic, anodic } = cathodicFirstPeaks(r);
+    expect(Math.abs((anodic.potentialV - cathodic.potentialV) * 1000 - deltaMV)).toBeLessThan(1);
+  });
+
+  // Bard & Faulkner 2nd ed. §6.2 (Randles–Ševčík): i_p ∝ v^½, slope of log|i_p| vs log v = 0.5.
+  it('log|ip| against log v has slope 0.500 ± 0.002 over two decades', () => {
+    const rates = [0.01, 0.1, 1];
+    const logs = rates.map((v) => Math.log10(-cathodicFirstPeaks(simulateCv({ ...base, scanRateVPerS: v })).cathodic.currentA));
+    const slope = ((logs[2] as number) - (logs[0] as number)) / 2;
+    expect(Math.abs(slope - 0.5)).toBeLessThan(0.002);
+  });
+
+  it('starting with R instead of O mirrors the voltammogram (anodic peak at +1.109 RT/F)', () => {
+    const r = simulateCv({ ...base, concentrationOMolPerCm3: 0, concentrationRMolPerCm3: 1e-6, startV: -0.4, switchV: 0.5 });
+    const o = simulateCv(base);
+    let maxA = 0;
+    let minO = 0;
+    for (let i = 0; i < r.currentA.length; i++) {
+      maxA = Math.max(maxA, r.currentA[i] as number);
+      minO = Math.min(minO, o.currentA[i] as number);
+    }
+    expect(maxA / -minO).toBeCloseTo(1, 6);
+  });
+});
