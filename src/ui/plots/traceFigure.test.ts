@@ -1,0 +1,59 @@
+/**
+ * Trace figure builder as a pure function. Sign conventions: IUPAC, "Terminology of
+ * electrochemical methods of analysis (IUPAC Recommendations 2019)", Pure Appl. Chem. 92 (2020)
+ * 641 — anodic current positive; the polarographic (classical American) plot shows cathodic
+ * current up with potential increasing to the left (from memory).
+ */
+import { describe, expect, it } from 'vitest';
+import type { PeakResult, VoltammogramAnalysis } from '../../core/analysis/types';
+import { buildTraceFigure, type TraceFigureInput } from './traceFigure';
+
+const potentialV = Float64Array.from([0, 0.1, 0.2, 0.1, 0]);
+const currentA = Float64Array.from([0, 1e-6, 5e-6, -2e-6, -1e-6]);
+const base: TraceFigureInput = {
+  fileName: 'a.csv', potentialV, currentA, cycles: [{ index: 1, start: 0, end: 5 }], analysis: null, cycle: 1,
+  convention: 'iupac', showSmoothed: false, showBaselines: true, dragMode: 'zoom', peakWindows: [],
+  potentialOffsetV: 0, potentialAxisTitle: 'E vs SCE / V',
+};
+
+const peak = {
+  direction: 'anodic', potentialV: 0.2, heightA: 4e-6, rawCurrentA: 5e-6, baselineCurrentA: 1e-6,
+  baseline: { method: 'linear', potentialV: Float64Array.from([0.1, 0.2]), currentA: Float64Array.from([0.5e-6, 1e-6]), startIndex: 1, endIndex: 3, anchors: [], description: '' },
+} as unknown as PeakResult;
+const analysis = { cycles: [{ index: 1, peaks: [peak], couples: [], warnings: [] }], smoothed: null } as unknown as VoltammogramAnalysis;
+
+function ys(fig: ReturnType<typeof buildTraceFigure>, k: number): unknown[] {
+  return (fig.data[k] as { y: unknown[] }).y;
+}
+
+describe('buildTraceFigure', () => {
+  it('IUPAC: µA scale, anodic up, potential increasing to the right', () => {
+    const fig = buildTraceFigure(base);
+    expect(fig.scale.unit).toBe('µA');
+    expect(ys(fig, 0)).toEqual([0, 1, 5, -2, -1].map((v) => expect.closeTo(v, 12)));
+    expect(fig.layout.xaxis?.autorange).toBe(true);
+    expect(fig.layout.yaxis?.title).toEqual({ text: 'i / µA (anodic up)' });
+  });
+
+  it('polarographic: current sign flipped and the potential axis reversed', () => {
+    const fig = buildTraceFigure({ ...base, convention: 'polarographic' });
+    expect(ys(fig, 0)).toEqual([0, -1, -5, 2, 1].map((v) => expect.closeTo(v, 12)));
+    expect(fig.layout.xaxis?.autorange).toBe('reversed');
+  });
+
+  it('draws the baseline as subtracted and a stem from baseline to peak', () => {
+    const fig = buildTraceFigure({ ...base, analysis });
+    const names = fig.data.map((d) => (d as { name: string }).name);
+    expect(names).toEqual(['cycle 1', 'baseline (as subtracted)', 'anodic peaks (Epa, ipa)', 'cathodic peaks (Epc, ipc)']);
+    expect(ys(fig, 1)).toEqual([expect.closeTo(0.5, 12), expect.closeTo(1, 12)]);
+    expect(ys(fig, 2)).toEqual([expect.closeTo(1, 12), expect.closeTo(5, 12), null]);
+    const hidden = buildTraceFigure({ ...base, analysis, showBaselines: false });
+    expect(hidden.data).toHaveLength(3);
+  });
+
+  it('shifts potentials to the display scale and shades peak windows', () => {
+    const fig = buildTraceFigure({ ...base, potentialOffsetV: 0.2, peakWindows: [{ direction: 'cathodic', fromV: 0.05, toV: 0.15 }] });
+    expect((fig.data[0] as { x: number[] }).x[2]).toBeCloseTo(0.4, 12);
+    expect(fig.layout.shapes?.[0]).toMatchObject({ x0: expect.closeTo(0.25, 12), x1: expect.closeTo(0.35, 12) });
+  });
+});

@@ -1,0 +1,127 @@
+/**
+ * Turns one voltammogram and its analysis into Plotly data and layout: the measured trace per
+ * cycle, optional smoothed curve, the baselines exactly as subtracted, and peak markers with a
+ * stem from baseline to peak (the drawn ip). Sign conventions: IUPAC plots i with anodic up on
+ * a potential axis increasing to the right; the polarographic choice plots −i (cathodic up) on
+ * a potential axis increasing to the left. Pure: no DOM, no Plotly import.
+ */
+import type { Data, Layout, Shape } from 'plotly.js';
+import type { PeakResult, PeakWindow, VoltammogramAnalysis } from '../../core/analysis/types';
+import type { CycleRange } from '../../core/types';
+import { chooseCurrentScale, maxAbs, type UnitScale } from './currentScale';
+import { decimateMinMax } from './decimate';
+import { baseFont, markers, palette, traceColour } from './palette';
+
+export interface TraceFigureInput {
+  fileName: string;
+  potentialV: Float64Array;
+  currentA: Float64Array;
+  cycles: CycleRange[];
+  analysis: VoltammogramAnalysis | null;
+  /** 1-based cycle, or 0 for all. */
+  cycle: number;
+  convention: 'iupac' | 'polarographic';
+  showSmoothed: boolean;
+  showBaselines: boolean;
+  dragMode: 'zoom' | 'window';
+  peakWindows: PeakWindow[];
+  /** Added to every potential for display on another reference scale (V). */
+  potentialOffsetV: number;
+  /** e.g. "E vs SCE / V". */
+  potentialAxisTitle: string;
+  /** Most points drawn per trace. @default 6000 */
+  maxPoints?: number;
+}
+
+export interface TraceFigure {
+  data: Data[];
+  layout: Partial<Layout>;
+  scale: UnitScale;
+}
+
+export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
+  const cycles = input.cycle === 0 ? input.cycles : input.cycles.filter((c) => c.index === input.cycle);
+  const scale = chooseCurrentScale(Math.max(0, ...cycles.map((c) => maxAbs(input.currentA, c.start, c.end))));
+  const sign = input.convention === 'polarographic' ? -1 : 1;
+  const tx = (v: number) => v + input.potentialOffsetV;
+  const ty = (a: number) => sign * a * scale.factor;
+  const data: Data[] = [];
+  cycles.forEach((c, k) => data.push(line(input, c.start, c.end, `cycle ${c.index}`, traceColour(k), tx, ty)));
+  const smoothed = input.analysis?.smoothed;
+  if (input.showSmoothed && smoothed) {
+    for (const c of cycles) {
+      data.push(line({ ...input, currentA: smoothed.currentA }, c.start, c.end, `smoothed, cycle ${c.index}`, palette.smoothed, tx, ty, 1.2));
+    }
+  }
+  const shown = new Set(cycles.map((c) => c.index));
+  const peaks = (input.analysis?.cycles ?? []).filter((c) => shown.has(c.index)).flatMap((c) => c.peaks);
+  if (input.showBaselines) data.push(...peaks.map((p, k) => baselineTrace(p, k === 0, tx, ty)));
+  data.push(...(['anodic', 'cathodic'] as const).map((d) => peakTrace(peaks.filter((p) => p.direction === d), d, tx, ty, scale)));
+  return { data, layout: traceLayout(input, scale, tx), scale };
+}
+
+type Map1 = (v: number) => number;
+
+function line(input: TraceFigureInput, start: number, end: number, name: string, color: string, tx: Map1, ty: Map1, width = 1.6): Data {
+  const xy = decimateMinMax(input.potentialV, input.currentA, start, end, input.maxPoints ?? 6000);
+  return {
+    type: 'scatter', mode: 'lines', name, x: xy.x.map(tx), y: xy.y.map(ty),
+    line: { color, width }, hovertemplate: 'E %{x:.4f} V<br>i %{y:.4g}<extra>%{fullData.name}</extra>',
+  };
+}
+
+function baselineTrace(p: PeakResult, first: boolean, tx: Map1, ty: Map1): Data {
+  const b = p.baseline;
+  return {
+    type: 'scatter', mode: 'lines', name: 'baseline (as subtracted)', legendgroup: 'baseline', showlegend: first,
+    x: Array.from(b.potentialV, tx), y: Array.from(b.currentA, ty),
+    line: { color: palette.baseline, width: 1.3, dash: 'dash' }, hovertemplate: `${b.method} baseline<extra></extra>`,
+  };
+}
+
+function peakTrace(peaks: PeakResult[], direction: 'anodic' | 'cathodic', tx: Map1, ty: Map1, scale: UnitScale): Data {
+  // Stems from baseline to peak: pairs of points separated by nulls (gaps) in one trace.
+  const x: (number | null)[] = [];
+  const y: (number | null)[] = [];
+  for (const p of peaks) {
+    x.push(tx(p.potentialV), tx(p.potentialV), null);
+    y.push(ty(p.baselineCurrentA), ty(p.rawCurrentA), null);
+  }
+  const color = direction === 'anodic' ? palette.anodic : palette.cathodic;
+  return {
+    type: 'scatter', mode: 'lines+markers', name: direction === 'anodic' ? 'anodic peaks (Epa, ipa)' : 'cathodic peaks (Epc, ipc)',
+    x, y, connectgaps: false, line: { color, width: 1.5 },
+    marker: { symbol: [...peaks.flatMap(() => ['line-ew', markers[direction], 'circle'])], size: peaks.flatMap(() => [8, 11, 0]), color },
+    customdata: peaks.flatMap((p) => [p.heightA * scale.factor, p.heightA * scale.factor, null]),
+    hovertemplate: `Ep %{x:.4f} V<br>ip %{customdata:.4g} ${scale.unit}<extra>${direction}</extra>`,
+  } as Data;
+}
+
+function traceLayout(input: TraceFigureInput, scale: UnitScale, tx: Map1): Partial<Layout> {
+  const polarographic = input.convention === 'polarographic';
+  const shapes: Partial<Shape>[] = input.peakWindows.map((w) => ({
+    type: 'rect', xref: 'x', yref: 'paper', x0: tx(w.fromV), x1: tx(w.toV), y0: 0, y1: 1, line: { width: 0 },
+    fillcolor: w.direction === 'anodic' ? palette.anodicWindow : palette.cathodicWindow, layer: 'below',
+  }));
+  return {
+    font: baseFont,
+    paper_bgcolor: '#ffffff',
+    plot_bgcolor: palette.plotBackground,
+    margin: { l: 64, r: 16, t: 28, b: 48 },
+    showlegend: true,
+    legend: { orientation: 'h', x: 0, y: 1.02, yanchor: 'bottom', font: { size: 11 } },
+    xaxis: {
+      title: { text: input.potentialAxisTitle }, autorange: polarographic ? 'reversed' : true,
+      gridcolor: palette.grid, zeroline: false, showline: true, linecolor: palette.ink, ticks: 'outside', mirror: true,
+    },
+    yaxis: {
+      title: { text: polarographic ? `−i / ${scale.unit} (cathodic up)` : `i / ${scale.unit} (anodic up)` },
+      gridcolor: palette.grid, zeroline: true, zerolinecolor: '#b9bcb2', showline: true, linecolor: palette.ink, ticks: 'outside', mirror: true,
+    },
+    dragmode: input.dragMode === 'window' ? 'select' : 'zoom',
+    selectdirection: 'h',
+    hovermode: 'closest',
+    shapes,
+    uirevision: `${input.fileName}|${input.convention}`,
+  };
+}
