@@ -1,0 +1,126 @@
+/**
+ * Gives every table column a role (potential, current, time, cycle, index, other) and a unit:
+ * the user's override first, then the header text, then the shape of the numbers. Each choice
+ * carries a sentence saying why, so the user can see and correct it.
+ */
+import { columnStats, looksLikeCycle, looksLikeIndex, looksLikeTime } from './columnStats';
+import type { ColumnStats } from './columnStats';
+import { ImportError, makeWarning } from './errors';
+import type { ImportWarning } from './errors';
+import { readHeader } from './headerNames';
+import type { HeaderReading } from './headerNames';
+import type { ColumnRole, DetectedColumn, ImportOverrides } from './types';
+
+export interface RoleAssignment {
+  columns: DetectedColumn[];
+  potential: number;
+  current: number;
+  time: number | null;
+  cycle: number | null;
+  headers: (HeaderReading | null)[];
+  stats: ColumnStats[];
+  warnings: ImportWarning[];
+}
+
+type Slot = { role: ColumnRole | null; why: string };
+const OVERRIDE_KEYS = [['potential', 'potentialColumn'], ['current', 'currentColumn'], ['time', 'timeColumn'], ['cycle', 'cycleColumn']] as const;
+
+export function assignColumns(fileName: string, names: string[] | null, columns: Float64Array[], overrides: ImportOverrides): RoleAssignment {
+  const k = columns.length;
+  const headers = Array.from({ length: k }, (_, j) => (names?.[j] ? readHeader(names[j] as string) : null));
+  const stats = columns.map((c) => columnStats(c));
+  const slots: Slot[] = headers.map((h, j) => slotFromHeader(h, stats[j] as ColumnStats));
+  dedupeRoles(slots, headers);
+  applyOverrides(fileName, slots, stats, overrides);
+  const warnings: ImportWarning[] = [];
+  inferMissing(slots, stats, warnings, fileName);
+  const find = (r: ColumnRole) => slots.findIndex((s) => s.role === r);
+  const potential = find('potential');
+  const current = find('current');
+  if (potential < 0 || current < 0) {
+    const numeric = stats.filter((s) => s.finite > 0).length;
+    const list = slots.map((s, j) => `${j + 1}: ${names?.[j] ?? 'unnamed'} (${s.role ?? 'unknown'})`).join('; ');
+    throw new ImportError(numeric < 2 ? 'ONE_COLUMN' : 'NO_TABLE', fileName, `could not tell which column is the ${potential < 0 ? 'potential' : 'current'} (columns ${list}); choose it with a column override`);
+  }
+  const time = find('time');
+  const cycle = find('cycle');
+  const detected: DetectedColumn[] = slots.map((s, j) => ({
+    index: j,
+    name: names?.[j]?.trim() || `column ${j + 1}`,
+    role: s.role ?? 'other',
+    unit: headers[j]?.unit?.symbol ?? '',
+    explanation: s.why,
+  }));
+  return { columns: detected, potential, current, time: time < 0 ? null : time, cycle: cycle < 0 ? null : cycle, headers, stats, warnings };
+}
+
+function slotFromHeader(h: HeaderReading | null, s: ColumnStats): Slot {
+  if (s.finite === 0) return { role: 'other', why: 'holds no numbers, ignored' };
+  if (!h) return { role: null, why: '' };
+  if (h.secondary) return { role: 'other', why: `header "${h.label}" names a second electrode or copy; kept as an extra column` };
+  if (!h.role) return { role: null, why: '' };
+  const unit = h.unitText ? ` with unit ${h.unit?.symbol ?? h.unitText}` : '';
+  return { role: h.role, why: `${h.role} — header "${h.label || h.unitText}"${unit}` };
+}
+
+function dedupeRoles(slots: Slot[], headers: (HeaderReading | null)[]): void {
+  const taken = new Set<ColumnRole>();
+  slots.forEach((s, j) => {
+    if (!s.role || s.role === 'other' || s.role === 'index') return;
+    if (taken.has(s.role)) {
+      slots[j] = { role: 'other', why: `a second ${s.role} column ("${headers[j]?.label ?? ''}"); the first one is used, this one is kept as an extra column` };
+    } else taken.add(s.role);
+  });
+}
+
+function applyOverrides(fileName: string, slots: Slot[], stats: ColumnStats[], o: ImportOverrides): void {
+  for (const [role, key] of OVERRIDE_KEYS) {
+    const idx = o[key];
+    if (idx === undefined) continue;
+    if (role === 'cycle' && idx === -1) {
+      slots.forEach((s, j) => { if (s.role === 'cycle') slots[j] = { role: 'other', why: 'cycle column ignored (set by the user)' }; });
+      continue;
+    }
+    if (!Number.isInteger(idx) || idx < 0 || idx >= slots.length) {
+      throw new ImportError('BAD_OVERRIDE', fileName, `the ${role} column was set to ${Number.isInteger(idx) ? idx + 1 : idx}, but the table has ${slots.length} columns`);
+    }
+    if ((stats[idx] as ColumnStats).finite === 0) {
+      throw new ImportError('BAD_OVERRIDE', fileName, `the ${role} column was set to column ${idx + 1}, which holds no numbers`, { column: idx + 1 });
+    }
+    slots.forEach((s, j) => { if (s.role === role && j !== idx) slots[j] = { role: 'other', why: `was taken for ${role}, but the user chose column ${idx + 1}` }; });
+    slots[idx] = { role, why: `${role} (set by the user)` };
+  }
+}
+
+function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarning[], fileName: string): void {
+  const has = (r: ColumnRole) => slots.some((s) => s.role === r);
+  const free = () => slots.map((s, j) => (s.role === null ? j : -1)).filter((j) => j >= 0);
+  const rows = Math.max(...stats.map((s) => s.finite));
+  const guessed: string[] = [];
+  const set = (j: number, role: ColumnRole, why: string) => {
+    slots[j] = { role, why };
+    guessed.push(`column ${j + 1} → ${role}`);
+  };
+  // Counters, cycle numbers and time only when enough columns remain for potential and current.
+  const spare = () => free().length - (has('potential') ? 0 : 1) - (has('current') ? 0 : 1);
+  for (const j of free()) if (spare() > 0 && looksLikeIndex(stats[j] as ColumnStats)) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
+  for (const j of free()) if (spare() > 0 && !has('cycle') && looksLikeCycle(stats[j] as ColumnStats, rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${(stats[j] as ColumnStats).distinct} values)`);
+  for (const j of free()) if (spare() > 0 && !has('time') && looksLikeTime(stats[j] as ColumnStats)) set(j, 'time', 'time — rises steadily from row to row');
+  const cands = free();
+  if (!has('potential') && cands.length) {
+    const first = cands[0] as number;
+    const alt = cands.find((j) => j !== first && (stats[j] as ColumnStats).wander * 3 < (stats[first] as ColumnStats).wander);
+    const j = alt ?? first;
+    set(j, 'potential', alt === undefined ? 'potential — the first unnamed numeric column (the usual order is potential, then current)' : `potential — it rises and falls smoothly (${fmt((stats[j] as ColumnStats).wander)} spans of travel against ${fmt((stats[first] as ColumnStats).wander)} for column ${first + 1})`);
+  }
+  const rest = free();
+  if (!has('current') && rest.length) set(rest[0] as number, 'current', 'current — the next unnamed numeric column after the potential');
+  slots.forEach((s, j) => { if (s.role === null) slots[j] = { role: 'other', why: 'not recognised; kept as an extra column' }; });
+  if (guessed.length) {
+    warnings.push(makeWarning('ROLE_GUESSED', `${fileName}: column roles guessed from the numbers, not from a header (${guessed.join(', ')}); check them and override if wrong`));
+  }
+}
+
+function fmt(x: number): string {
+  return Number.isFinite(x) ? x.toFixed(1) : '∞';
+}

@@ -1,0 +1,71 @@
+/**
+ * The scan rate and where it came from, in the order the user expects: their own entry, the
+ * time column (core scanRateFromTime), a preamble line, the file name. Every source that is
+ * present is read, so that a disagreement between them can be reported.
+ */
+import { AnalysisError } from '../core/errors';
+import { scanRateFromTime } from '../core/sweeps/scanRateFromTime';
+import type { ScanRateSource, SweepSegment } from '../core/types';
+import { ImportError, makeWarning } from './errors';
+import type { ImportWarning } from './errors';
+import { scanRateFromFileName } from './scanRateFromFileName';
+import type { Guess, PreambleValue } from './types';
+
+export interface ScanRateChoice {
+  guess: Guess<number | null>;
+  source: ScanRateSource | null;
+}
+
+interface Input {
+  fileName: string;
+  override: number | undefined;
+  potentialV: Float64Array;
+  timeS: Float64Array | null;
+  segments: SweepSegment[];
+  preamble: PreambleValue | null;
+}
+
+const fmt = (v: number) => `${+(v * 1000).toPrecision(4)} mV/s`;
+
+export function chooseScanRate(input: Input, warnings: ImportWarning[]): ScanRateChoice {
+  const { fileName } = input;
+  if (input.override !== undefined && !(input.override > 0 && Number.isFinite(input.override))) {
+    throw new ImportError('BAD_OVERRIDE', fileName, `the scan rate must be a positive number of V/s, got ${input.override}`);
+  }
+  const fromTime = timeRate(input, warnings);
+  const fromName = scanRateFromFileName(fileName);
+  const found: { source: ScanRateSource; value: number; why: string }[] = [];
+  if (input.override !== undefined) found.push({ source: 'option', value: input.override, why: 'entered by the user' });
+  if (fromTime) found.push({ source: 'time', value: fromTime.value, why: fromTime.why });
+  if (input.preamble) found.push({ source: 'metadata', value: input.preamble.value, why: `from line ${input.preamble.line}: "${input.preamble.text}"` });
+  if (fromName) found.push({ source: 'filename', value: fromName.scanRateVPerS, why: `from the file name ("${fromName.match}")` });
+  const chosen = found[0];
+  if (!chosen) {
+    warnings.push(makeWarning('NO_SCAN_RATE', `${fileName}: no scan rate found (no time column, no "scan rate" line, none in the file name); enter it to use rate-dependent analyses`));
+    return { guess: { value: null, overridden: false, explanation: 'scan rate unknown — no time column, no scan-rate line in the preamble, none in the file name' }, source: null };
+  }
+  for (const other of found.slice(1)) {
+    if (Math.abs(other.value - chosen.value) > 0.05 * chosen.value) {
+      warnings.push(makeWarning('SCAN_RATE_DISAGREES', `${fileName}: scan rate ${fmt(chosen.value)} (${chosen.source}) differs from ${fmt(other.value)} (${other.source}, ${other.why}); ${fmt(chosen.value)} is used`));
+    }
+  }
+  const others = found.slice(1).map((f) => `${f.source} says ${fmt(f.value)}`).join('; ');
+  return {
+    guess: { value: chosen.value, overridden: chosen.source === 'option', explanation: `scan rate ${fmt(chosen.value)} — ${chosen.why}${others ? ` (also: ${others})` : ''}` },
+    source: chosen.source,
+  };
+}
+
+function timeRate(input: Input, warnings: ImportWarning[]): { value: number; why: string } | null {
+  if (!input.timeS) return null;
+  try {
+    const r = scanRateFromTime(input.potentialV, input.timeS, input.segments);
+    if (r.relativeSpread > 0.1) {
+      warnings.push(makeWarning('SCAN_RATE_UNEVEN', `${input.fileName}: the sweeps ran at different rates (${r.perSegmentVPerS.map(fmt).join(', ')}); the median ${fmt(r.scanRateVPerS)} is used`));
+    }
+    return { value: r.scanRateVPerS, why: `from the time column: median of ${r.perSegmentVPerS.length} per-sweep fits of |dE/dt|` };
+  } catch (err) {
+    if (!(err instanceof AnalysisError)) throw err;
+    return null;
+  }
+}

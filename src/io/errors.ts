@@ -1,0 +1,75 @@
+/**
+ * Typed errors and warnings of the importer. An ImportError is thrown only when nothing usable
+ * is left in a file; everything the importer can work around becomes an ImportWarning instead.
+ * The CLI maps `name === 'ImportError'` to exit code 2; the worker forwards `code`.
+ */
+
+export type ImportErrorCode =
+  | 'EMPTY'
+  | 'BINARY'
+  | 'SPREADSHEET_BINARY'
+  | 'IMAGE'
+  | 'ENCODING'
+  | 'NO_TABLE'
+  | 'ONE_COLUMN'
+  | 'TOO_FEW_POINTS'
+  | 'CONSTANT_POTENTIAL'
+  | 'BAD_OVERRIDE'
+  | 'INTERNAL';
+
+export class ImportError extends Error {
+  readonly code: ImportErrorCode;
+  readonly fileName: string;
+  /** 1-based line of the file the error points at, when there is one. */
+  readonly line: number | undefined;
+  /** 1-based column (field) of the table the error points at, when there is one. */
+  readonly column: number | undefined;
+  constructor(code: ImportErrorCode, fileName: string, message: string, where: { line?: number; column?: number } = {}) {
+    const at = [where.line !== undefined ? `line ${where.line}` : '', where.column !== undefined ? `column ${where.column}` : '']
+      .filter(Boolean)
+      .join(', ');
+    super(`${fileName}${at ? ` (${at})` : ''}: ${message}`);
+    this.name = 'ImportError';
+    this.code = code;
+    this.fileName = fileName;
+    this.line = where.line;
+    this.column = where.column;
+  }
+}
+
+export type ImportWarningCode =
+  | 'SKIPPED_ROWS'
+  | 'REPEATED_HEADER'
+  | 'ENCODING_GUESSED'
+  | 'UNIT_ASSUMED'
+  | 'ROLE_GUESSED'
+  | 'CURRENT_DENSITY'
+  | 'NO_SCAN_RATE'
+  | 'SCAN_RATE_DISAGREES'
+  | 'SCAN_RATE_UNEVEN'
+  | 'TIME_NOT_MONOTONIC'
+  | 'CYCLE_COLUMN_IGNORED';
+
+export interface ImportWarning {
+  code: ImportWarningCode;
+  /** Plain-language sentence, naming the file. */
+  message: string;
+  /** 1-based lines concerned (at most the first 20 are listed). */
+  lines?: number[];
+  /** How many rows or lines the warning covers, when it counts something. */
+  count?: number;
+}
+
+/** Builds a warning; keeps the line list short so that a million bad rows stay cheap. */
+export function makeWarning(code: ImportWarningCode, message: string, lines?: number[], count?: number): ImportWarning {
+  const w: ImportWarning = { code, message };
+  if (lines && lines.length) w.lines = lines.slice(0, 20);
+  if (count !== undefined) w.count = count;
+  return w;
+}
+
+/** Formats a list of line numbers for a message: "12, 13, 40 and 7 more". */
+export function describeLines(lines: number[], total: number): string {
+  const shown = lines.slice(0, 5).join(', ');
+  return total > 5 ? `${shown} and ${total - 5} more` : shown;
+}

@@ -1,0 +1,118 @@
+/**
+ * Reads the free-text lines above the table: key/value pairs ("Operator: A. N. Other",
+ * "scan rate = 100 mV/s", "Area;0,0707;cm2"), and from them the scan rate, reference electrode,
+ * temperature, electrode area, concentration and the file's current sign convention.
+ * Unit factors: BIPM SI Brochure, 9th ed. (2019), Table 7; 0 °C = 273.15 K (SI Brochure sect. 2.3.1).
+ * 1 mM = 1e-6 mol/cm³ (1 L = 1000 cm³, SI Brochure Table 8).
+ */
+import type { CurrentConvention, PreambleValue } from './types';
+import { scanRateUnitFactor } from './units';
+
+export interface PreambleReading {
+  metadata: Record<string, string>;
+  scanRateVPerS: PreambleValue | null;
+  referenceElectrode: { value: string; line: number } | null;
+  temperatureK: PreambleValue | null;
+  areaCm2: PreambleValue | null;
+  concentrationMolPerCm3: PreambleValue | null;
+  convention: { value: CurrentConvention; line: number; text: string } | null;
+}
+
+const NUMBER = '([+-]?(?:\\d+[.,]?\\d*|[.,]\\d+)(?:[eE][+-]?\\d+)?)';
+
+/** `lines` are the preamble lines; `firstLine` is the 1-based file line of lines[0]. */
+export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
+  const out: PreambleReading = { metadata: {}, scanRateVPerS: null, referenceElectrode: null, temperatureK: null, areaCm2: null, concentrationMolPerCm3: null, convention: null };
+  lines.forEach((raw, i) => {
+    const line = firstLine + i;
+    const text = raw.replace(/^\s*(#|%|\/\/|;|!)+\s*/, '').trim();
+    if (!text) return;
+    const kv = splitKeyValue(text);
+    if (kv) addMetadata(out.metadata, kv.key, kv.value);
+    out.scanRateVPerS ??= readScanRate(text, line);
+    out.convention ??= readConvention(text, line);
+    if (!kv) return;
+    const key = kv.key.toLowerCase();
+    const value = kv.value;
+    if (!out.referenceElectrode && /\bref(erence)?\b|^re$/.test(key) && !/\d\s*(v|mv)\b/i.test(value)) out.referenceElectrode = { value, line };
+    if (/temp/.test(key)) out.temperatureK ??= readTemperature(`${key} ${value}`, line, text);
+    if (/area/.test(key)) out.areaCm2 ??= readArea(`${key} ${value}`, line, text);
+    if (/conc|^c$|^c0$/.test(key)) out.concentrationMolPerCm3 ??= readConcentration(`${key} ${value}`, line, text);
+  });
+  return out;
+}
+
+function splitKeyValue(text: string): { key: string; value: string } | null {
+  const m = /^([^:=\t;,]{1,60}?)\s*(?::|=|\t|;|,)\s*(.*)$/.exec(text);
+  if (!m) return null;
+  const key = (m[1] as string).trim();
+  const value = (m[2] as string).replace(/[;,\t]+/g, ' ').trim();
+  if (!key || /^\d/.test(key)) return null;
+  return { key, value };
+}
+
+function addMetadata(md: Record<string, string>, key: string, value: string): void {
+  let k = key;
+  for (let n = 2; k in md; n++) k = `${key} (${n})`;
+  md[k] = value;
+}
+
+function toNumber(s: string): number {
+  return Number(s.replace(',', '.'));
+}
+
+function readScanRate(text: string, line: number): PreambleValue | null {
+  if (!/(scan|sweep)\s*-?\s*rate|scanrate|sweeprate|^\s*v\s*[=:(]/i.test(text)) return null;
+  const re = new RegExp(`${NUMBER}\\s*\\(?\\s*((?:[mµu]?V)\\s*(?:/\\s*s(?:ec)?|s\\^?-1|s⁻¹|·s⁻¹|ps)?)`, 'i');
+  const m = re.exec(text);
+  let value: number | null = null;
+  if (m) {
+    const f = scanRateUnitFactor(m[2] as string);
+    if (f !== null) value = toNumber(m[1] as string) * f;
+  }
+  if (value === null) {
+    // The unit may stand in the key, "Scan rate (mV/s): 100", or be missing.
+    const unitInKey = /\(\s*([mµu]?V\s*\/\s*s)\s*\)|\[\s*([mµu]?V\s*\/\s*s)\s*\]/i.exec(text);
+    const num = new RegExp(`[:=\\t;,]\\s*${NUMBER}`).exec(text);
+    if (!num) return null;
+    const f = unitInKey ? scanRateUnitFactor((unitInKey[1] ?? unitInKey[2]) as string) : null;
+    if (f === null) return null;
+    value = toNumber(num[1] as string) * f;
+  }
+  return Number.isFinite(value) && value > 0 ? { value, line, text } : null;
+}
+
+function readConvention(text: string, line: number): PreambleReading['convention'] {
+  if (/polarographic|classical\s+convention|us\s+convention|cathodic\s+(currents?\s+)?(are\s+|is\s+)?positive|anodic\s+(currents?\s+)?(are\s+|is\s+)?negative/i.test(text)) return { value: 'polarographic', line, text };
+  if (/\biupac\b|anodic\s+(currents?\s+)?(are\s+|is\s+)?positive|cathodic\s+(currents?\s+)?(are\s+|is\s+)?negative/i.test(text)) return { value: 'iupac', line, text };
+  return null;
+}
+
+function readTemperature(s: string, line: number, text: string): PreambleValue | null {
+  const m = new RegExp(`${NUMBER}\\s*(°\\s*C|ºC|deg\\s*C|C|K|°\\s*F|F)?\\b`, 'i').exec(s.replace(/^[a-z\s.]*?(?=[+-]?\d)/i, ''));
+  if (!m) return null;
+  const v = toNumber(m[1] as string);
+  const unit = (m[2] ?? '').replace(/[\s°º]|deg/gi, '').toUpperCase();
+  const k = unit === 'K' ? v : unit === 'F' ? ((v - 32) * 5) / 9 + 273.15 : v + 273.15;
+  return Number.isFinite(k) && k > 0 ? { value: k, line, text } : null;
+}
+
+function readArea(s: string, line: number, text: string): PreambleValue | null {
+  const m = new RegExp(`${NUMBER}\\s*(cm\\^?2|cm²|mm\\^?2|mm²|m\\^?2|m²)?`, 'i').exec(s.replace(/^[^\d+-]*/, ''));
+  if (!m) return null;
+  const v = toNumber(m[1] as string);
+  const u = (m[2] ?? 'cm2').toLowerCase();
+  const f = u.startsWith('mm') ? 0.01 : u.startsWith('cm') ? 1 : 1e4;
+  const keyUnit = /\(\s*mm\^?[2²]\s*\)/i.test(s) ? 0.01 : 1;
+  return Number.isFinite(v) && v > 0 ? { value: v * (m[2] ? f : keyUnit), line, text } : null;
+}
+
+function readConcentration(s: string, line: number, text: string): PreambleValue | null {
+  const m = new RegExp(`${NUMBER}\\s*(mM|µM|uM|nM|M|mmol\\s*/\\s*L|mol\\s*/\\s*L|mol\\s*/\\s*cm3|mol\\s*/\\s*cm³|mol\\s*dm-3)\\b`, 'i').exec(s);
+  if (!m) return null;
+  const v = toNumber(m[1] as string);
+  const u = (m[2] as string).replace(/\s/g, '');
+  const perL: Record<string, number> = { mM: 1e-3, mm: 1e-3, 'µM': 1e-6, uM: 1e-6, um: 1e-6, nM: 1e-9, nm: 1e-9, M: 1, m: 1 };
+  const molPerL = perL[u] ?? (/^mmol/i.test(u) ? 1e-3 : /cm/i.test(u) ? 1000 : 1);
+  return Number.isFinite(v) && v >= 0 ? { value: (v * molPerL) / 1000, line, text } : null;
+}

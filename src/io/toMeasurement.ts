@@ -1,0 +1,130 @@
+/**
+ * Turns the parsed table and the column roles into core columns: keeps rows whose potential,
+ * current (and time, cycle) are finite, converts to V, A and s, stores currents in the IUPAC
+ * convention, and splits sweeps and cycles with the core's findSweepSegments.
+ * Unit factors: BIPM SI Brochure, 9th ed. (2019), Table 7 (prefixes).
+ */
+import { findSweepSegments } from '../core/sweeps/findSweepSegments';
+import type { SweepSplit } from '../core/sweeps/findSweepSegments';
+import type { RoleAssignment } from './assignColumns';
+import { describeLines, ImportError, makeWarning } from './errors';
+import type { ImportWarning } from './errors';
+import type { ParsedTable } from './parseTable';
+import type { CurrentConvention, CurrentUnit, Guess, ImportOverrides, PotentialUnit, PreambleValue, TimeUnit } from './types';
+import { CURRENT_FACTORS, POTENTIAL_FACTORS, TIME_FACTORS } from './units';
+
+export interface UnitChoice {
+  potential: Guess<PotentialUnit>;
+  current: Guess<CurrentUnit>;
+  /** Current column holds a density (A/cm² after the factor). */
+  currentDensity: boolean;
+  /** Factor from file values to A (or A/cm² for a density). */
+  currentFactor: number;
+  time: Guess<TimeUnit> | null;
+}
+
+export interface CoreColumns {
+  potentialV: Float64Array;
+  currentA: Float64Array;
+  timeS: Float64Array | null;
+  cycleColumn: Float64Array | null;
+  extraColumns: Record<string, Float64Array>;
+  split: SweepSplit;
+  rowsKept: number;
+  rowsDropped: number;
+}
+
+/** Picks units for potential, current and time from overrides, header units or magnitudes. */
+export function chooseUnits(fileName: string, a: RoleAssignment, o: ImportOverrides, warnings: ImportWarning[]): UnitChoice {
+  const pHead = a.headers[a.potential]?.unit;
+  const pStats = a.stats[a.potential];
+  let potential: Guess<PotentialUnit>;
+  if (o.potentialUnit) potential = { value: o.potentialUnit, overridden: true, explanation: `potential unit ${o.potentialUnit} (set by the user)` };
+  else if (pHead?.kind === 'potential' && pHead.symbol in POTENTIAL_FACTORS) potential = { value: pHead.symbol as PotentialUnit, overridden: false, explanation: `potential unit ${pHead.symbol} — from the header` };
+  else {
+    const mv = (pStats?.maxAbs ?? 0) > 20;
+    potential = { value: mv ? 'mV' : 'V', overridden: false, explanation: mv ? `potential unit mV — no unit in the file and values reach ${pStats?.maxAbs}, too large for volts` : 'potential unit V — no unit in the file; values lie within ±20, as volts do' };
+    warnings.push(makeWarning('UNIT_ASSUMED', `${fileName}: no potential unit found; read as ${potential.value}`));
+  }
+  const cHead = a.headers[a.current]?.unit;
+  let current: Guess<CurrentUnit>;
+  let density = false;
+  let currentFactor: number;
+  if (o.currentUnit) {
+    current = { value: o.currentUnit, overridden: true, explanation: `current unit ${o.currentUnit} (set by the user)` };
+    currentFactor = CURRENT_FACTORS[o.currentUnit];
+  } else if (cHead && (cHead.kind === 'current' || cHead.kind === 'currentDensity')) {
+    density = cHead.kind === 'currentDensity';
+    const base = cHead.symbol.replace(/\/.*$/, '') as CurrentUnit;
+    current = { value: base, overridden: false, explanation: `current unit ${cHead.symbol} — from the header${density ? ' (a current density)' : ''}` };
+    currentFactor = cHead.factor;
+  } else {
+    const max = a.stats[a.current]?.maxAbs ?? 0;
+    current = { value: 'A', overridden: false, explanation: 'current unit A — no unit in the file, amperes assumed' };
+    currentFactor = 1;
+    const odd = max > 1 ? ` — values reach ${max}, which would be ${max} A: probably µA or mA, set the unit` : '';
+    warnings.push(makeWarning('UNIT_ASSUMED', `${fileName}: no current unit found; read as A${odd}`));
+  }
+  return { potential, current, currentDensity: density, currentFactor, time: chooseTimeUnit(a, o) };
+}
+
+function chooseTimeUnit(a: RoleAssignment, o: ImportOverrides): Guess<TimeUnit> | null {
+  if (a.time === null) return null;
+  if (o.timeUnit) return { value: o.timeUnit, overridden: true, explanation: `time unit ${o.timeUnit} (set by the user)` };
+  const h = a.headers[a.time]?.unit;
+  if (h?.kind === 'time') return { value: h.symbol as TimeUnit, overridden: false, explanation: `time unit ${h.symbol} — from the header` };
+  return { value: 's', overridden: false, explanation: 'time unit s — no unit in the file, seconds assumed' };
+}
+
+/** Builds the core columns; throws TOO_FEW_POINTS or CONSTANT_POTENTIAL when nothing usable is left. */
+export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment, u: UnitChoice, convention: CurrentConvention, areaCm2: PreambleValue | null, warnings: ImportWarning[]): CoreColumns {
+  const needed = [a.potential, a.current, a.time, a.cycle].filter((j): j is number => j !== null);
+  const keep = new Uint8Array(t.rowCount);
+  let kept = 0;
+  const dropped: number[] = [];
+  let droppedCount = 0;
+  for (let i = 0; i < t.rowCount; i++) {
+    let ok = true;
+    for (const j of needed) if (!Number.isFinite((t.columns[j] as Float64Array)[i] as number)) ok = false;
+    if (ok) { keep[i] = 1; kept++; } else { droppedCount++; if (dropped.length < 20) dropped.push(t.lineOfRow[i] as number); }
+  }
+  if (droppedCount) warnings.push(makeWarning('SKIPPED_ROWS', `${fileName}: ${droppedCount} rows skipped because a needed value was not a finite number (NaN, Inf or empty) — lines ${describeLines(dropped, droppedCount)}`, dropped, droppedCount));
+  if (kept < 3) throw new ImportError('TOO_FEW_POINTS', fileName, `only ${kept} usable rows with a finite potential and current; a voltammogram needs at least 3`, { line: t.lineOfRow[0] ?? 1 });
+  const pick = (j: number, factor: number) => {
+    const src = t.columns[j] as Float64Array;
+    const out = new Float64Array(kept);
+    for (let i = 0, n = 0; i < t.rowCount; i++) if (keep[i]) out[n++] = (src[i] as number) * factor;
+    return out;
+  };
+  const potentialV = pick(a.potential, POTENTIAL_FACTORS[u.potential.value]);
+  assertPotentialChanges(fileName, potentialV, a.potential, t.lineOfRow[0] ?? 1);
+  const sign = convention === 'polarographic' ? -1 : 1;
+  let currentFactor = u.currentFactor * sign;
+  if (u.currentDensity && areaCm2) currentFactor *= areaCm2.value;
+  const currentA = pick(a.current, currentFactor);
+  const timeS = a.time !== null && u.time ? pick(a.time, TIME_FACTORS[u.time.value]) : null;
+  const cycleColumn = a.cycle !== null ? pick(a.cycle, 1) : null;
+  const extraColumns: Record<string, Float64Array> = {};
+  a.columns.forEach((c) => {
+    if ((c.role === 'other' || c.role === 'index') && (a.stats[c.index]?.finite ?? 0) > 0) {
+      let key = c.name;
+      for (let n = 2; key in extraColumns; n++) key = `${c.name} (${n})`;
+      extraColumns[key] = pick(c.index, 1);
+    }
+  });
+  const split = findSweepSegments(potentialV, { cycleColumn });
+  return { potentialV, currentA, timeS, cycleColumn, extraColumns, split, rowsKept: kept, rowsDropped: droppedCount };
+}
+
+function assertPotentialChanges(fileName: string, e: Float64Array, column: number, line: number): void {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < e.length; i++) {
+    const v = e[i] as number;
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  if (!(hi > lo)) {
+    throw new ImportError('CONSTANT_POTENTIAL', fileName, `the potential column never changes (always ${lo} V), so this is not a voltammogram — is another column the potential?`, { line, column: column + 1 });
+  }
+}
