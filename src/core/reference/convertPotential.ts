@@ -1,0 +1,102 @@
+/**
+ * Converts a potential from one reference scale to another, always through SHE:
+ *   E(vs to) = E(vs from) + E(from vs SHE) − E(to vs SHE).
+ * In: valueV on the `from` scale (V), reference ids, and a context for the scales that need one
+ *   (pH and temperature for RHE; the measured E½ of ferrocene, or an offset, for Fc⁺/Fc; user
+ *   overrides of any tabulated value). Out: V on the `to` scale.
+ * Sources: table in referenceElectrodes.ts (check-values.md §10); RHE from the Nernst equation,
+ *   E(RHE vs SHE) = −(ln 10)·RT/F·pH (1 bar H₂, ideal), slope taken at the given temperature;
+ *   Fc⁺/Fc: IUPAC recommendation of an internal reference (Gritzner & Kůta 1984, from memory) and
+ *   the typical +0.40 V vs SCE in MeCN/0.1 M Bu₄NPF₆ (Connelly & Geiger, Chem. Rev. 96, 877
+ *   (1996), from memory), used only when nothing was measured and labelled "typical".
+ * Difference: tabulated offsets are 25 °C values and are not corrected for temperature.
+ */
+import { AnalysisError } from '../errors';
+import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
+import { REFERENCE_ELECTRODES, findReferenceElectrode } from './referenceElectrodes';
+import type { ReferenceId } from './referenceElectrodes';
+
+/** Typical E½ of Fc⁺/Fc in MeCN / 0.1 M Bu₄NPF₆, V vs SCE (Connelly & Geiger 1996, from memory). */
+export const TYPICAL_FERROCENE_VS_SCE_V = 0.4;
+
+export interface InternalStandard {
+  /** Measured E½ of the internal standard (V) on the scale `scale`. */
+  eHalfV: number;
+  scale: ReferenceId;
+  /** Where the E½ came from (file name, "user"). */
+  origin: string;
+}
+
+export interface ConversionContext {
+  /** pH of the solution, needed for RHE. */
+  pH?: number;
+  /** Temperature in K for the RHE slope. @default 298.15 */
+  temperatureK?: number;
+  /** Fc⁺/Fc position; the typical MeCN value is used when absent. */
+  internalStandard?: InternalStandard;
+  /** User values of E vs SHE (V) that replace the tabulated ones. */
+  overridesVsSheV?: Partial<Record<ReferenceId, number>>;
+}
+
+export interface ReferencePosition {
+  eVsSheV: number;
+  /** How the value was obtained, in plain words (shown in provenance). */
+  basis: string;
+  /** True when a typical, not measured, value was used. */
+  typical: boolean;
+}
+
+/** Resolves a name or id to a ReferenceId, or throws UNKNOWN_REFERENCE listing the choices. */
+export function resolveReferenceId(name: string): ReferenceId {
+  const hit = findReferenceElectrode(name);
+  if (!hit) {
+    throw new AnalysisError('UNKNOWN_REFERENCE', `unknown reference electrode "${name}"; known: ${REFERENCE_ELECTRODES.map((r) => r.id).join(', ')}`);
+  }
+  return hit.id;
+}
+
+/** Potential of a reference electrode against SHE (V) in the given context. */
+export function referenceVsShe(id: ReferenceId, context: ConversionContext = {}): ReferencePosition {
+  const override = context.overridesVsSheV?.[id];
+  if (override !== undefined) {
+    if (!Number.isFinite(override)) throw new AnalysisError('BAD_OPTION', `override for ${id} must be finite, got ${override}`);
+    return { eVsSheV: override, basis: `${id}: user value ${override} V vs SHE`, typical: false };
+  }
+  if (id === 'RHE') return rheVsShe(context);
+  if (id === 'Fc') return ferroceneVsShe(context);
+  const entry = REFERENCE_ELECTRODES.find((r) => r.id === id);
+  if (!entry || entry.eVsSheV === null) throw new AnalysisError('UNKNOWN_REFERENCE', `no tabulated value for ${id}`);
+  return { eVsSheV: entry.eVsSheV, basis: `${entry.label}: ${entry.eVsSheV} V vs SHE (${entry.source})`, typical: false };
+}
+
+function rheVsShe(context: ConversionContext): ReferencePosition {
+  const pH = context.pH;
+  if (pH === undefined || !Number.isFinite(pH) || pH < -2 || pH > 16) {
+    throw new AnalysisError('BAD_OPTION', `the RHE scale needs the pH of the solution (-2…16), got ${String(pH)}`);
+  }
+  const t = context.temperatureK ?? STANDARD_TEMPERATURE_K;
+  const e = -Math.LN10 * thermalVoltageV(t) * pH;
+  return { eVsSheV: e, basis: `RHE at pH ${pH}, ${(t - 273.15).toFixed(1)} °C: ${e.toFixed(4)} V vs SHE (Nernst)`, typical: false };
+}
+
+function ferroceneVsShe(context: ConversionContext): ReferencePosition {
+  const std = context.internalStandard;
+  if (std) {
+    if (std.scale === 'Fc') throw new AnalysisError('BAD_OPTION', 'the internal standard must be measured against a real reference, not Fc itself');
+    const scale = referenceVsShe(std.scale, context);
+    return { eVsSheV: std.eHalfV + scale.eVsSheV, basis: `Fc⁺/Fc: E½ = ${std.eHalfV.toFixed(4)} V vs ${std.scale} measured (${std.origin})`, typical: scale.typical };
+  }
+  const sce = referenceVsShe('SCE', context);
+  return {
+    eVsSheV: TYPICAL_FERROCENE_VS_SCE_V + sce.eVsSheV,
+    basis: `Fc⁺/Fc: typical +${TYPICAL_FERROCENE_VS_SCE_V} V vs SCE for MeCN/0.1 M Bu₄NPF₆ (Connelly & Geiger 1996), not measured — published values span +0.38…+0.45 V`,
+    typical: true,
+  };
+}
+
+/** E on the `to` scale (V) from E on the `from` scale (V). */
+export function convertPotential(valueV: number, from: ReferenceId, to: ReferenceId, context: ConversionContext = {}): number {
+  if (!Number.isFinite(valueV)) throw new AnalysisError('NON_FINITE', `potential to convert must be finite, got ${valueV}`);
+  if (from === to) return valueV;
+  return valueV + referenceVsShe(from, context).eVsSheV - referenceVsShe(to, context).eVsSheV;
+}

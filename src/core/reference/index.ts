@@ -1,0 +1,3 @@
+/** Public API of the reference-scale conversions. */
+export * from './referenceElectrodes';
+export * from './convertPotential';
