@@ -1,0 +1,55 @@
+/**
+ * Sub-sample peak position: a least-squares parabola I = c0 + c1·x + c2·x² (x = E − E_centre)
+ * fitted to the raw points around a located extremum; its vertex gives Ep and the peak current.
+ * Source: local quadratic (parabolic) interpolation of an extremum (common practice, no source);
+ *   fit by ml-regression-polynomial.
+ * In: potential (V) and current (A, IUPAC) columns, the window [from, to) of point indices, and
+ *   whether a maximum (+1, anodic) or a minimum (−1, cathodic) is sought.
+ * Out: { potentialV, currentA } of the vertex, or null when the parabola opens the wrong way or
+ *   its vertex falls outside the window (the caller then keeps the data point).
+ */
+import { PolynomialRegression } from 'ml-regression-polynomial';
+import { AnalysisError } from '../errors';
+
+export interface RefinePeakQuadraticInput {
+  potentialV: ArrayLike<number>;
+  currentA: ArrayLike<number>;
+  from: number;
+  to: number;
+}
+
+export interface RefinePeakQuadraticOptions {
+  /** +1 for a maximum, −1 for a minimum. @default 1 */
+  orientation?: 1 | -1;
+}
+
+export interface QuadraticVertex {
+  potentialV: number;
+  currentA: number;
+}
+
+export function refinePeakQuadratic(input: RefinePeakQuadraticInput, options: RefinePeakQuadraticOptions = {}): QuadraticVertex | null {
+  const { from, to } = input;
+  if (to - from < 3) throw new AnalysisError('TOO_FEW_POINTS', `a quadratic peak fit needs at least 3 points, got ${to - from}`);
+  const orientation = options.orientation ?? 1;
+  const centre = input.potentialV[(from + to) >> 1] as number;
+  const x: number[] = [];
+  const y: number[] = [];
+  for (let k = from; k < to; k++) {
+    const e = input.potentialV[k] as number;
+    const i = input.currentA[k] as number;
+    if (Number.isFinite(e) && Number.isFinite(i)) {
+      x.push(e - centre);
+      y.push(i);
+    }
+  }
+  if (x.length < 3) return null;
+  const fit = new PolynomialRegression(x, y, 2);
+  const [c0 = NaN, c1 = NaN, c2 = NaN] = fit.coefficients;
+  if (!(orientation * c2 < 0)) return null;
+  const xv = -c1 / (2 * c2);
+  const lo = Math.min(...x);
+  const hi = Math.max(...x);
+  if (!(xv >= lo && xv <= hi)) return null;
+  return { potentialV: centre + xv, currentA: c0 + c1 * xv + c2 * xv * xv };
+}
