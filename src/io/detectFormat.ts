@@ -106,7 +106,11 @@ function better(a: Scored, b: Scored | null): boolean {
 
 /** Chooses delimiter and decimal mark; throws NO_TABLE / ONE_COLUMN when there is no table. */
 export function detectLayout(fileName: string, lines: string[], overrides: ImportOverrides = {}): TableLayout {
-  const startAt = overrides.headerLine && overrides.headerLine > 0 ? overrides.headerLine : 0;
+  const h = overrides.headerLine;
+  if (h !== undefined && (!Number.isInteger(h) || h < 0 || h >= lines.length)) {
+    throw new ImportError('BAD_OVERRIDE', fileName, `the header line was set to ${h}, but the table must start below it and the file's first ${lines.length} lines were searched`);
+  }
+  const startAt = h && h > 0 ? h : 0;
   const body = lines.slice(startAt);
   let best: Scored | null = null;
   for (const delimiter of overrides.delimiter ? [overrides.delimiter] : DELIMITERS) {
