@@ -12,13 +12,12 @@
  * Per step the surface concentration is a linear function of q: c_0 = intercept − q·slope.
  */
 import type { ExpandingGrid } from './expandingGrid';
-import { eliminateFromBulkSide, factorThomasFromBulkSide, substituteTowardsBulk, type ThomasFactor } from './solveTridiagonalThomas';
+import { factorThomasFromBulkSide, substituteTowardsBulk, type ThomasFactor } from './solveTridiagonalThomas';
 
 export class Bdf2DiffusionSpecies {
   /** Concentrations at the latest completed step, mol/cm³ (nodes 0 … N−1). */
-  readonly current: Float64Array;
-  private readonly previous: Float64Array;
-  private readonly rhs: Float64Array;
+  current: Float64Array;
+  private previous: Float64Array;
   private readonly u: Float64Array;
   private readonly factorBdf1: ThomasFactor;
   private readonly factorBdf2: ThomasFactor;
@@ -40,7 +39,6 @@ export class Bdf2DiffusionSpecies {
     const n = grid.volumeCm.length;
     this.current = new Float64Array(n).fill(bulkMolPerCm3);
     this.previous = new Float64Array(n).fill(bulkMolPerCm3);
-    this.rhs = new Float64Array(n);
     this.u = new Float64Array(n);
     this.factorBdf1 = this.factor(diffusionCm2PerS, decayRatePerS, 1 / dtS);
     this.factorBdf2 = this.factor(diffusionCm2PerS, decayRatePerS, 1.5 / dtS);
@@ -64,28 +62,39 @@ export class Bdf2DiffusionSpecies {
     return factorThomasFromBulkSide(lower, diag, upper);
   }
 
-  /** Builds the right-hand side from the history and eliminates it; sets intercept and slope. */
+  /**
+   * Builds the right-hand side from the history and eliminates it (one fused pass from the bulk
+   * towards the electrode); sets intercept and slope.
+   */
   prepareStep(): void {
     const bdf2 = this.steps > 0;
-    this.active = bdf2 ? this.factorBdf2 : this.factorBdf1;
+    const f = bdf2 ? this.factorBdf2 : this.factorBdf1;
+    this.active = f;
     const v = this.grid.volumeCm;
     const c = this.current;
     const p = this.previous;
-    const rhs = this.rhs;
-    const n = rhs.length;
-    const inv = 1 / this.dtS;
-    for (let i = 0; i < n; i++) {
-      const history = bdf2 ? (2 * (c[i] as number) - 0.5 * (p[i] as number)) * inv : (c[i] as number) * inv;
-      rhs[i] = (v[i] as number) * history;
+    const u = this.u;
+    const upper = f.upper;
+    const invDen = f.inverseDenominator;
+    const a = bdf2 ? 2 / this.dtS : 1 / this.dtS;
+    const b = bdf2 ? -0.5 / this.dtS : 0;
+    const last = u.length - 1;
+    let uNext = ((v[last] as number) * (a * (c[last] as number) + b * (p[last] as number)) - this.bulkCoupling * this.bulkMolPerCm3) * (invDen[last] as number);
+    u[last] = uNext;
+    for (let i = last - 1; i >= 0; i--) {
+      uNext = ((v[i] as number) * (a * (c[i] as number) + b * (p[i] as number)) - (upper[i] as number) * uNext) * (invDen[i] as number);
+      u[i] = uNext;
     }
-    rhs[n - 1] = (rhs[n - 1] as number) - this.bulkCoupling * this.bulkMolPerCm3;
-    this.intercept = eliminateFromBulkSide(this.active, rhs, this.u);
-    this.slope = this.active.inverseDenominator[0] as number;
+    this.intercept = uNext;
+    this.slope = invDen[0] as number;
   }
 
   /** Completes the step once the flux into the electrode, q (mol cm⁻² s⁻¹), is known. */
   finishStep(fluxIntoElectrode: number): void {
-    this.previous.set(this.current);
+    // Swap buffers: the old "current" becomes the history, the new solution overwrites the older one.
+    const older = this.previous;
+    this.previous = this.current;
+    this.current = older;
     substituteTowardsBulk(this.active, this.u, this.intercept - fluxIntoElectrode * this.slope, this.current);
     this.steps++;
   }

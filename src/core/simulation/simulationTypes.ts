@@ -84,7 +84,7 @@ export interface SimulateCvOptions {
   /**
    * Largest potential move per time step, in units of RT/(nF) (used when substepsPerPoint is 0).
    * The surface mechanism reports step-mean currents (half-step lag), so it steps finer.
-   * @default 0.02 (0.002 for the surface mechanism)
+   * @default 0.04 (0.002 for the surface mechanism)
    */
   maxStepThermal?: number;
   /**
