@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { thermalVoltageV } from '../constants';
+import { classifyCouple, type ClassifyCoupleInput } from './classifyCouple';
+
+const u = thermalVoltageV(298.15);
+const base: ClassifyCoupleInput = {
+  deltaEpV: 0.0592,
+  ratio: 1.0,
+  halfPeakWidthsV: { anodic: 0.0565, cathodic: 0.0565 },
+  fwhmV: { anodic: null, cathodic: null },
+  switchPastPeakV: 0.1215,
+  hasAnodic: true,
+  hasCathodic: true,
+};
+
+describe('classifyCouple', () => {
+  // Nicholson 1965 via B&F §6.5 (from memory), check-values §3: 59.2 mV at 121.5 mV past the peak.
+  it('ΔEp at the tabulated reversible value and ratio 1 → nernstian, with the numbers', () => {
+    const v = classifyCouple(base);
+    expect(v.category).toBe('nernstian');
+    expect(v.evidence.reversibleDeltaEpAtSwitchV! * 1000).toBeCloseTo(59.2, 6);
+    expect(v.evidence.reversibleDeltaEpLimitV * 1000).toBeCloseTo(56.99, 1);
+    expect(v.reasons[0]).toMatch(/ΔEp = 59\.2 mV/);
+  });
+
+  // Nicholson 1965 Table I (check-values §5): n·ΔEp = 84 mV ↔ ψ = 1, a quasi-reversible couple.
+  it('ΔEp = 84 mV → sluggish; 250 mV → one-way; one peak → one-way', () => {
+    expect(classifyCouple({ ...base, deltaEpV: 0.084 }).category).toBe('sluggish');
+    expect(classifyCouple({ ...base, deltaEpV: 0.25 }).category).toBe('one-way');
+    expect(classifyCouple({ ...base, hasCathodic: false, deltaEpV: null, ratio: null }).category).toBe('one-way');
+  });
+
+  it('ratio 0.6 → follow-up-loss; ratio 1.4 → follow-up-loss with the larger-return label', () => {
+    expect(classifyCouple({ ...base, ratio: 0.6 }).category).toBe('follow-up-loss');
+    const big = classifyCouple({ ...base, ratio: 1.4 });
+    expect(big.category).toBe('follow-up-loss');
+    expect(big.label).toMatch(/larger/);
+  });
+
+  // Bard & Faulkner 2nd ed. §14.3 (from memory), check-values §7: ideal adsorbed FWHM 90.58/n mV.
+  it('ΔEp ≈ 0 with FWHM 90.6 mV → adsorbed; with FWHM 200 mV → inconclusive', () => {
+    const ads = classifyCouple({ ...base, deltaEpV: 0.002, fwhmV: { anodic: 0.0906, cathodic: 0.0905 } });
+    expect(ads.category).toBe('adsorbed');
+    expect(ads.evidence.adsorbedFwhmV * 1000).toBeCloseTo(90.58, 1);
+    expect(classifyCouple({ ...base, deltaEpV: 0.002, fwhmV: { anodic: 0.2, cathodic: null } }).category).toBe('inconclusive');
+  });
+
+  it('thresholds follow the temperature and n (RT/nF units)', () => {
+    const hot = classifyCouple({ ...base, deltaEpV: (0.0592 * 323.15) / 298.15, switchPastPeakV: (0.1215 * 323.15) / 298.15 }, { temperatureK: 323.15 });
+    expect(hot.category).toBe('nernstian');
+    const n2 = classifyCouple({ ...base, deltaEpV: 0.0296, switchPastPeakV: 0.06075 }, { electronCount: 2 });
+    expect(n2.category).toBe('nernstian');
+    expect(n2.evidence.reversibleHalfPeakWidthV).toBeCloseTo((2.2 * u) / 2, 12);
+  });
+});

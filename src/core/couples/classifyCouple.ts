@@ -1,0 +1,121 @@
+/**
+ * Single-voltammogram verdict on a redox couple, with the numbers behind it.
+ * Diagnostic values (all multiples of RT/nF, so they follow the stated temperature):
+ *   reversible ΔEp = 2.218·RT/nF in the large-switch limit, and the switch-dependent value of
+ *     Nicholson, Anal. Chem. 37 (1965) 1351 (reversibleDeltaEpAtSwitch.ts);
+ *   reversible |Ep − Ep/2| = 2.20·RT/nF (Nicholson & Shain, Anal. Chem. 36 (1964) 706; Bard &
+ *     Faulkner 2nd ed. §6.2, from memory);
+ *   ideal adsorbed peak: ΔEp = 0, FWHM = 4·ln(1 + √2)·RT/nF = 3.5255·RT/nF (Bard & Faulkner 2nd ed.
+ *     §14.3; Laviron, J. Electroanal. Chem. 52 (1974) 355, from memory);
+ *   return/forward ratio = 1 for a chemically stable product (Wang, Analytical Electrochemistry,
+ *     2nd ed. (2000) §2-1.1.1).
+ * Thresholds (common practice, no source): 'nernstian' when ΔEp ≤ the switch-dependent value
+ *   + 0.31·RT/nF (8/n mV at 25 °C); 'one-way' beyond 8.25·RT/nF (212/n mV at 25 °C, the last row
+ *   of Nicholson's ψ table, ψ = 0.1) or with one peak only; 'follow-up-loss' when the ratio lies
+ *   outside 0.8…1.2; 'adsorbed' when |ΔEp| ≤ 1.109·RT/nF and each measurable FWHM lies within
+ *   ±25 % of 3.5255·RT/nF.
+ */
+import { thermalVoltageV } from '../constants';
+import type { Verdict, VerdictCategory, VerdictEvidence } from '../analysis/types';
+import { reversibleDeltaEpAtSwitch, reversibleDeltaEpLimitV } from './reversibleDeltaEpAtSwitch';
+
+export const VERDICT_LABELS: Record<VerdictCategory, string> = {
+  nernstian: 'reversible (diffusion, fast electron transfer)',
+  sluggish: 'quasi-reversible (diffusion, slower electron transfer)',
+  'one-way': 'irreversible (no usable return peak or very slow electron transfer)',
+  'follow-up-loss': 'chemically coupled (return peak differs from forward peak)',
+  adsorbed: 'surface-confined (adsorbed redox species)',
+  inconclusive: 'not classified (the numbers do not fit one picture)',
+};
+
+export interface ClassifyCoupleInput {
+  deltaEpV: number | null;
+  ratio: number | null;
+  halfPeakWidthsV: { anodic: number | null; cathodic: number | null };
+  fwhmV: { anodic: number | null; cathodic: number | null };
+  /** Distance of the switch past the forward peak (V), when known. */
+  switchPastPeakV: number | null;
+  /** Which peaks exist. */
+  hasAnodic: boolean;
+  hasCathodic: boolean;
+}
+
+export interface ClassifyCoupleOptions {
+  /** @default 298.15 */
+  temperatureK?: number;
+  /** @default 1 */
+  electronCount?: number;
+}
+
+const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
+
+export function classifyCouple(input: ClassifyCoupleInput, options: ClassifyCoupleOptions = {}): Verdict {
+  const temperatureK = options.temperatureK ?? 298.15;
+  const n = options.electronCount ?? 1;
+  const u = thermalVoltageV(temperatureK) / n;
+  const atSwitch = input.switchPastPeakV === null ? null : reversibleDeltaEpAtSwitch(input.switchPastPeakV, { electronCount: n, temperatureK }).deltaEpV;
+  const evidence: VerdictEvidence = {
+    temperatureK,
+    electronCount: n,
+    deltaEpV: input.deltaEpV,
+    reversibleDeltaEpLimitV: reversibleDeltaEpLimitV(n, temperatureK),
+    reversibleDeltaEpAtSwitchV: atSwitch,
+    reversibleHalfPeakWidthV: 2.2 * u,
+    halfPeakWidthsV: input.halfPeakWidthsV,
+    ratio: input.ratio,
+    fwhmV: input.fwhmV,
+    adsorbedFwhmV: 3.5255 * u,
+  };
+  const verdict = (category: VerdictCategory, reasons: string[], label = VERDICT_LABELS[category]): Verdict => ({ category, label, reasons, evidence });
+  if (!input.hasAnodic || !input.hasCathodic || input.deltaEpV === null) {
+    const missing = input.hasAnodic ? 'cathodic' : 'anodic';
+    return verdict('one-way', [`no ${missing} partner peak was found for this wave`], 'irreversible (no return peak)');
+  }
+  const dEp = input.deltaEpV;
+  const expected = atSwitch ?? evidence.reversibleDeltaEpLimitV;
+  const expectText = atSwitch === null ? `2.218RT/nF = ${mv(expected)}` : `${mv(expected)} expected for a reversible couple at this switching potential (2.218RT/nF = ${mv(evidence.reversibleDeltaEpLimitV)})`;
+  const dEpReason = `ΔEp = ${mv(dEp)} against ${expectText}`;
+  const ratioReason = input.ratio === null ? 'return/forward ratio not measurable' : `return/forward peak-current ratio = ${input.ratio.toFixed(3)} (1 for a stable product)`;
+  const widthReasons = halfWidthReasons(input, evidence);
+  if (dEp >= 8.25 * u) {
+    return verdict('one-way', [`${dEpReason}: beyond ${mv(8.25 * u)}, the end of Nicholson's ψ table`, ratioReason, ...widthReasons], 'irreversible (very slow electron transfer)');
+  }
+  if (Math.abs(dEp) <= 1.109 * u) return classifySmallSeparation(verdict, input, evidence, dEpReason, ratioReason);
+  if (input.ratio !== null && (input.ratio < 0.8 || input.ratio > 1.2)) {
+    const label = input.ratio < 1 ? 'chemically coupled (product consumed by a follow-up reaction)' : 'chemically coupled or product adsorbed (return peak larger than forward)';
+    return verdict('follow-up-loss', [`${ratioReason}: outside 0.8…1.2`, dEpReason, ...widthReasons], label);
+  }
+  if (dEp < expected - 0.4 * u) {
+    return verdict('inconclusive', [`${dEpReason}: smaller than diffusion theory allows, yet too large for an adsorbed layer`, ratioReason, ...widthReasons]);
+  }
+  if (dEp <= expected + 0.31 * u) return verdict('nernstian', [`${dEpReason}: within ${mv(0.31 * u)}`, ratioReason, ...widthReasons]);
+  return verdict('sluggish', [`${dEpReason}: wider by ${mv(dEp - expected)}, below the irreversible limit ${mv(8.25 * u)}`, ratioReason, ...widthReasons]);
+}
+
+function halfWidthReasons(input: ClassifyCoupleInput, e: VerdictEvidence): string[] {
+  const out: string[] = [];
+  for (const side of ['anodic', 'cathodic'] as const) {
+    const w = input.halfPeakWidthsV[side];
+    if (w !== null) out.push(`${side} |Ep − Ep/2| = ${mv(w)} (reversible: 2.20RT/nF = ${mv(e.reversibleHalfPeakWidthV)})`);
+  }
+  return out;
+}
+
+function classifySmallSeparation(
+  verdict: (c: VerdictCategory, r: string[], l?: string) => Verdict,
+  input: ClassifyCoupleInput,
+  e: VerdictEvidence,
+  dEpReason: string,
+  ratioReason: string,
+): Verdict {
+  const reasons = [`${dEpReason}: close to 0, as for an adsorbed layer`, ratioReason];
+  let fitsShape = true;
+  for (const side of ['anodic', 'cathodic'] as const) {
+    const w = input.fwhmV[side];
+    if (w === null) continue;
+    reasons.push(`${side} FWHM = ${mv(w)} (ideal adsorbed layer: 3.53RT/nF = ${mv(e.adsorbedFwhmV)})`);
+    if (Math.abs(w / e.adsorbedFwhmV - 1) > 0.25) fitsShape = false;
+  }
+  if (input.fwhmV.anodic === null && input.fwhmV.cathodic === null) reasons.push('FWHM not measurable on either peak');
+  return fitsShape ? verdict('adsorbed', reasons) : verdict('inconclusive', [...reasons, 'peak widths do not match an ideal adsorbed layer']);
+}

@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { pairPeaksIntoCouples } from './pairPeaksIntoCouples';
+
+describe('pairPeaksIntoCouples', () => {
+  it('pairs one couple', () => {
+    expect(pairPeaksIntoCouples([0.23], [0.17])).toEqual([{ anodic: 0, cathodic: 0 }]);
+  });
+
+  // Hand example: two slow couples with ΔEp = 0.2 V whose E½ differ by 0.15 V. Nearest-first
+  // greedy pairing would join Epa = 0.30 with Epc = 0.25; order-preserving pairing does not.
+  it('keeps couples in order where nearest-first pairing would cross them', () => {
+    const pairs = pairPeaksIntoCouples([0.45, 0.3], [0.1, 0.25]);
+    expect(pairs).toEqual([
+      { anodic: 1, cathodic: 0 },
+      { anodic: 0, cathodic: 1 },
+    ]);
+  });
+
+  it('leaves a peak without a partner unpaired, and respects maxDeltaEpV', () => {
+    expect(pairPeaksIntoCouples([0.5], [])).toEqual([{ anodic: 0, cathodic: null }]);
+    expect(pairPeaksIntoCouples([0.9], [0.1], { maxDeltaEpV: 0.5 })).toEqual([
+      { anodic: null, cathodic: 0 },
+      { anodic: 0, cathodic: null },
+    ]);
+  });
+
+  it('allows a small negative ΔEp (adsorbed layer) but not a large one', () => {
+    expect(pairPeaksIntoCouples([0.099], [0.1])).toEqual([{ anodic: 0, cathodic: 0 }]);
+    expect(pairPeaksIntoCouples([0.0], [0.1])).toHaveLength(2);
+    expect(() => pairPeaksIntoCouples([0], [0], { maxDeltaEpV: 0 })).toThrow(/maxDeltaEpV/);
+  });
+});

@@ -1,0 +1,61 @@
+/**
+ * Pairs anodic and cathodic peaks into redox couples. Both lists are sorted by potential and
+ * matched without crossings (the k-th couple's peaks lie between those of the couples on either
+ * side), by dynamic programming that minimises Σ|ΔEp| over pairs plus a penalty of `maxDeltaEpV`
+ * for each unpaired peak. A pair is allowed only when −`maxNegativeDeltaEpV` ≤ Epa − Epc ≤
+ * `maxDeltaEpV`.
+ * Method: order-preserving assignment (common practice, no source); limits are ours.
+ * In: peak potentials (V) of each kind. Out: pairs of indices into the input lists, unpaired
+ *   peaks as pairs with null on the missing side, sorted by mid-potential.
+ */
+import { AnalysisError } from '../errors';
+
+export interface PairPeaksOptions {
+  /** Largest allowed Epa − Epc (V). @default 0.6 */
+  maxDeltaEpV?: number;
+  /** Largest allowed Epc − Epa (V); adsorbed couples sit near ΔEp = 0. @default 0.03 */
+  maxNegativeDeltaEpV?: number;
+}
+
+export interface PeakPair {
+  anodic: number | null;
+  cathodic: number | null;
+}
+
+export function pairPeaksIntoCouples(anodicV: readonly number[], cathodicV: readonly number[], options: PairPeaksOptions = {}): PeakPair[] {
+  const maxDelta = options.maxDeltaEpV ?? 0.6;
+  const maxNegative = options.maxNegativeDeltaEpV ?? 0.03;
+  if (!(maxDelta > 0) || !(maxNegative >= 0)) throw new AnalysisError('BAD_OPTION', `maxDeltaEpV must be > 0 and maxNegativeDeltaEpV ≥ 0, got ${maxDelta}, ${maxNegative}`);
+  const a = anodicV.map((v, i) => ({ v, i })).sort((p, q) => p.v - q.v);
+  const c = cathodicV.map((v, i) => ({ v, i })).sort((p, q) => p.v - q.v);
+  const cost = (x: number, y: number) => {
+    const d = a[x]!.v - c[y]!.v;
+    return d <= maxDelta && d >= -maxNegative ? Math.abs(d) : Infinity;
+  };
+  // best[x][y]: least cost of matching the first x anodic with the first y cathodic peaks.
+  const best = Array.from({ length: a.length + 1 }, (_, x) => Array.from({ length: c.length + 1 }, (_, y) => (x + y) * maxDelta));
+  for (let x = 1; x <= a.length; x++) {
+    for (let y = 1; y <= c.length; y++) {
+      best[x]![y] = Math.min(best[x - 1]![y]! + maxDelta, best[x]![y - 1]! + maxDelta, best[x - 1]![y - 1]! + cost(x - 1, y - 1));
+    }
+  }
+  const pairs: PeakPair[] = [];
+  let x = a.length;
+  let y = c.length;
+  while (x > 0 || y > 0) {
+    const here = best[x]![y]!;
+    if (x > 0 && y > 0 && here === best[x - 1]![y - 1]! + cost(x - 1, y - 1)) {
+      pairs.push({ anodic: a[--x]!.i, cathodic: c[--y]!.i });
+    } else if (x > 0 && here === best[x - 1]![y]! + maxDelta) {
+      pairs.push({ anodic: a[--x]!.i, cathodic: null });
+    } else {
+      pairs.push({ anodic: null, cathodic: c[--y]!.i });
+    }
+  }
+  const mid = (p: PeakPair) => {
+    const va = p.anodic === null ? null : anodicV[p.anodic]!;
+    const vc = p.cathodic === null ? null : cathodicV[p.cathodic]!;
+    return va !== null && vc !== null ? (va + vc) / 2 : (va ?? vc ?? 0);
+  };
+  return pairs.sort((p, q) => mid(p) - mid(q));
+}
