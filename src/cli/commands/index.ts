@@ -1,4 +1,5 @@
 /** Registry of CLI commands. Each command lives in its own file in this folder. */
 import type { CliCommand } from '../command';
+import { simulateCommand } from './simulate';
 
-export const commands: CliCommand[] = [];
+export const commands: CliCommand[] = [simulateCommand];
