@@ -1,0 +1,117 @@
+import { describe, expect, it } from 'vitest';
+import { thermalVoltageV } from '../constants';
+import { AnalysisError } from '../errors';
+import { lavironPeakPotentials, lavironRateConstant, nicholsonRateConstant } from '../kinetics';
+import { irreversiblePeakShiftVPerDecade, randlesSevcikPeakCurrent, surfaceCharge, surfacePeakCurrent } from '../series';
+import { analyzeSeries } from './analyzeSeries';
+import { fakeAnalysis } from './seriesTestSupport';
+
+const v = [0.025, 0.05, 0.1, 0.2, 0.4];
+const cell = { electronCount: 1, areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 };
+const opts = { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 };
+const rev = (s: number) => randlesSevcikPeakCurrent({ ...cell, diffusionCm2PerS: 7.6e-6, scanRateVPerS: s });
+
+describe('analyzeSeries', () => {
+  // check-values.md §2 (Bard & Faulkner §6.2): five reversible points → D = 7.600e-6 cm²/s,
+  // log–log slope 0.500, intercept 0; a second couple is matched separately by E½.
+  it('recovers D and the log–log slope of a reversible couple, and keeps two couples apart', () => {
+    const files = v.map((s, i) => ({
+      fileName: `f${i}.csv`, scanRateVPerS: s,
+      analysis: fakeAnalysis([
+        { epaV: 0.5295, epcV: 0.4705, ipaA: rev(s), ipcA: rev(s) },
+        { epaV: 0.0295, epcV: -0.0295, ipaA: 2 * rev(s), ipcA: 2 * rev(s) },
+      ]),
+    }));
+    const r = analyzeSeries(files, opts);
+    expect(r.couples).toHaveLength(2);
+    const [low, high] = r.couples;
+    expect(low?.eHalfV).toBeCloseTo(0, 10);
+    expect(high?.eHalfV).toBeCloseTo(0.5, 10);
+    expect(Math.abs((high?.diffusion?.diffusionCm2PerS ?? 0) / 7.6e-6 - 1)).toBeLessThan(1e-6);
+    expect(high?.diffusion?.form).toBe('reversible');
+    expect(high?.logLog?.slope).toBeCloseTo(0.5, 3);
+    expect(high?.logLog?.reading).toBe('diffusion');
+    expect(Math.abs(high?.forwardFit?.intercept ?? 1)).toBeLessThan(1e-12);
+    // 4× D for the second couple (ip doubled).
+    expect(Math.abs((low?.diffusion?.diffusionCm2PerS ?? 0) / (4 * 7.6e-6) - 1)).toBeLessThan(1e-6);
+    // ΔEp = 59 mV < 61 mV: k° not determinable, only a lower bound.
+    expect(high?.rateConstant?.k0CmPerS).toBeNull();
+    expect(high?.rateConstant?.lowerBoundCmPerS).toBeGreaterThan(0);
+  });
+
+  // Nicholson 1965 table (check-values.md §5, from memory): ΔEp = 84 mV → ψ = 1; with the
+  // Lavagnini fit ψ = 1.0570 → k° = 1.0190e-2 cm/s at 0.1 V/s for D = 7.6e-6 cm²/s.
+  it('gives Nicholson k° for a quasi-reversible couple', () => {
+    const files = [0.1, 0.1 * 1.0001].map((s, i) => ({
+      fileName: `q${i}`, scanRateVPerS: s,
+      analysis: fakeAnalysis([{ epaV: 0.042, epcV: -0.042, ipaA: rev(s), ipcA: rev(s), verdict: 'sluggish' }]),
+    }));
+    const r = analyzeSeries(files, { diffusionCm2PerS: 7.6e-6 });
+    const k = r.couples[0]?.rateConstant;
+    expect(r.couples[0]?.kineticClass).toBe('quasi-reversible');
+    expect(Math.abs((k?.perFile[0]?.k0CmPerS ?? 0) / 1.019e-2 - 1)).toBeLessThan(1e-3);
+    expect(k?.diffusionSource).toBe('given by the user');
+    // Reference value from the same formula (Nicholson 1965), for the median.
+    const k0 = nicholsonRateConstant({ psi: 1.057, diffusionOxCm2PerS: 7.6e-6, scanRateVPerS: 0.1, electronCount: 1 });
+    expect(Math.abs((k?.k0CmPerS ?? 0) / k0 - 1)).toBeLessThan(1e-3);
+  });
+
+  // Wang (2000) eq. 2-5; Bard & Faulkner §6.3: a one-way, broad reduction peak moving −59.16 mV per
+  // decade gives α = 0.5; D then comes from the irreversible form (0.4958).
+  it('uses the irreversible form with the measured α for a totally irreversible couple', () => {
+    const irr = (s: number) => randlesSevcikPeakCurrent({ ...cell, diffusionCm2PerS: 7.6e-6, scanRateVPerS: s }, { form: 'irreversible', alpha: 0.5 });
+    const files = v.map((s, i) => ({
+      fileName: `i${i}`, scanRateVPerS: s,
+      analysis: fakeAnalysis([{
+        epaV: null, epcV: -0.4 - irreversiblePeakShiftVPerDecade(0.5) * Math.log10(s), ipaA: null, ipcA: irr(s),
+        forward: 'cathodic', verdict: 'one-way', halfPeakWidthV: 1.857 * thermalVoltageV(298.15) / 0.5,
+      }]),
+    }));
+    const c = analyzeSeries(files, opts).couples[0];
+    expect(c?.kineticClass).toBe('irreversible');
+    expect(c?.alpha).toBeCloseTo(0.5, 6);
+    expect(c?.diffusion?.form).toBe('irreversible');
+    expect(Math.abs((c?.diffusion?.diffusionCm2PerS ?? 0) / 7.6e-6 - 1)).toBeLessThan(1e-6);
+    expect(c?.rateConstant).toBeNull();
+  });
+
+  // Laviron 1974 / Bard & Faulkner §14.3 (ip ∝ v, Q = nFAΓ) and Laviron 1979 (k_s from ΔEp > 200 mV).
+  it('reports Γ from charge and slope and Laviron k_s for an adsorbed couple', () => {
+    const gamma = 1e-10;
+    const sv = [1, 3, 10, 30];
+    const files = sv.map((s, i) => {
+      const ip = surfacePeakCurrent({ electronCount: 1, areaCm2: 0.0707, coverageMolPerCm2: gamma, scanRateVPerS: s });
+      const p = lavironPeakPotentials({ formalPotentialV: 0.1, rateConstantPerS: 5, scanRateVPerS: s, electronCount: 1 });
+      return {
+        fileName: `s${i}`, scanRateVPerS: s,
+        analysis: fakeAnalysis([{ epaV: p.epaV, epcV: p.epcV, ipaA: ip, ipcA: ip, verdict: 'adsorbed', chargeC: surfaceCharge({ electronCount: 1, areaCm2: 0.0707, coverageMolPerCm2: gamma }) }]),
+      };
+    });
+    const c = analyzeSeries(files, { areaCm2: 0.0707 }).couples[0];
+    expect(c?.regime).toBe('surface');
+    expect(c?.surface?.coverageFromChargeMolPerCm2).toBeCloseTo(gamma, 16);
+    expect(c?.surface?.coverageFromSlopeMolPerCm2).toBeCloseTo(gamma, 16);
+    expect(c?.logLog?.reading).toBe('adsorbed-or-capacitive');
+    expect(c?.surface?.lavironAlpha).toBeCloseTo(0.5, 8);
+    expect(c?.surface?.ksPerS).toBeCloseTo(5, 6);
+    // Cross-check of the k_s path against the standalone function.
+    expect(lavironRateConstant({ deltaEpV: 0.3, scanRateVPerS: 10, electronCount: 1 })).toBeGreaterThan(0);
+  });
+
+  it('warns about missing area, concentration and single scan rate', () => {
+    const one = [{ fileName: 'a', scanRateVPerS: 0.1, analysis: fakeAnalysis([{ epaV: 0.03, epcV: -0.03, ipaA: 1e-6, ipcA: 1e-6 }]) }];
+    const r1 = analyzeSeries(one);
+    expect(r1.warnings.map((w) => w.code)).toContain('SINGLE_SCAN_RATE');
+    const two = [0.1, 0.2].map((s) => ({ fileName: `${s}`, scanRateVPerS: s, analysis: fakeAnalysis([{ epaV: 0.03, epcV: -0.03, ipaA: rev(s), ipcA: rev(s) }]) }));
+    const r2 = analyzeSeries(two);
+    expect(r2.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['NO_AREA', 'NO_CONCENTRATION']));
+    expect(r2.couples[0]?.diffusion).toBeNull();
+  });
+
+  it('rejects an empty series and bad options', () => {
+    expect(() => analyzeSeries([])).toThrow(AnalysisError);
+    const one = [{ fileName: 'a', scanRateVPerS: 0.1, analysis: fakeAnalysis([]) }];
+    expect(() => analyzeSeries(one, { areaCm2: -1 })).toThrow(/areaCm2/);
+    expect(() => analyzeSeries([{ ...one[0]!, scanRateVPerS: 0 }])).toThrow(/scan rate of a/);
+  });
+});

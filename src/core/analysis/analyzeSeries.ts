@@ -1,0 +1,148 @@
+/**
+ * Scan-rate series analysis: follows each redox couple across voltammograms recorded at
+ * different scan rates and derives what the series can tell and a single trace cannot.
+ * In: per file its scan rate (V/s) and its per-trace analysis (analyzeVoltammogram); options with
+ *   n, area (cm²), concentration (mol/cm³), temperature (K), α, D_O/D_R.
+ * Out: per series couple the fits (|ip| vs v^½, log|ip| vs log v, Ep vs log v), D by
+ *   Randles–Ševčík (reversible or irreversible form by kinetic class), α, Nicholson k° per file and
+ *   median, Γ and Laviron k_s for surface couples, plain diagnostics; plus warnings.
+ * Sources: in the methods called (series/, kinetics/, regression/); the couple matching and the
+ *   class rules are design choices documented in matchSeriesCouples.ts and seriesClassify.ts.
+ */
+import { STANDARD_TEMPERATURE_K } from '../constants';
+import { AnalysisError, assertFiniteInRange } from '../errors';
+import { matchSeriesCouples, median } from './matchSeriesCouples';
+import type { CoupleRef } from './matchSeriesCouples';
+import { classifyCouple } from './seriesClassify';
+import { describeSeriesCouple } from './seriesDiagnostics';
+import { fitAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
+import type { ResolvedSeriesOptions } from './seriesFits';
+import { seriesRateConstant, seriesSurface } from './seriesKinetics';
+import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesPoint, SeriesWarning } from './seriesTypes';
+import type { CycleAnalysis } from './types';
+
+export function resolveSeriesOptions(options: AnalyzeSeriesOptions): ResolvedSeriesOptions {
+  const o: ResolvedSeriesOptions = {
+    electronCount: options.electronCount ?? 1,
+    areaCm2: options.areaCm2 ?? null,
+    concentrationMolPerCm3: options.concentrationMolPerCm3 ?? null,
+    temperatureK: options.temperatureK ?? STANDARD_TEMPERATURE_K,
+    alpha: options.alpha ?? null,
+    transferElectronCount: options.transferElectronCount ?? 1,
+    diffusionRatio: options.diffusionRatio ?? 1,
+    diffusionCm2PerS: options.diffusionCm2PerS ?? null,
+    cycle: options.cycle ?? 1,
+    matchToleranceV: options.matchToleranceV ?? 0.12,
+  };
+  assertFiniteInRange('electronCount', o.electronCount, 0.5, 10);
+  assertFiniteInRange('temperatureK', o.temperatureK, 200, 500);
+  assertFiniteInRange('transferElectronCount', o.transferElectronCount, 0.5, 10);
+  assertFiniteInRange('diffusionRatio', o.diffusionRatio, 1e-3, 1e3);
+  assertFiniteInRange('matchToleranceV', o.matchToleranceV, 0, 2);
+  if (o.areaCm2 !== null) assertFiniteInRange('areaCm2', o.areaCm2, Number.MIN_VALUE);
+  if (o.concentrationMolPerCm3 !== null) assertFiniteInRange('concentrationMolPerCm3', o.concentrationMolPerCm3, Number.MIN_VALUE);
+  if (o.alpha !== null) assertFiniteInRange('alpha', o.alpha, 0.01, 0.99);
+  if (o.diffusionCm2PerS !== null) assertFiniteInRange('diffusionCm2PerS', o.diffusionCm2PerS, Number.MIN_VALUE);
+  return o;
+}
+
+function chooseCycle(analysis: SeriesFileInput['analysis'], cycle: number): CycleAnalysis | null {
+  return analysis.cycles.find((c) => c.index === cycle) ?? null;
+}
+
+function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): SeriesPoint {
+  const c = ref.couple;
+  const forwardIndex = c.forwardDirection === 'anodic' ? c.anodicPeak : c.cathodicPeak;
+  const fwd = forwardIndex === null ? null : (cycle.peaks[forwardIndex] ?? null);
+  return {
+    fileIndex: ref.fileIndex,
+    fileName: file.fileName,
+    scanRateVPerS: file.scanRateVPerS,
+    cycle: cycle.index,
+    epaV: c.epaV,
+    epcV: c.epcV,
+    eHalfV: c.eHalfV,
+    deltaEpV: c.deltaEpV,
+    ipaA: c.ipaA,
+    ipcA: c.ipcA,
+    forwardIpA: fwd?.heightA ?? (c.forwardDirection === 'anodic' ? c.ipaA : c.ipcA),
+    forwardHalfPeakWidthV: fwd?.halfPeakWidthV ?? null,
+    forwardChargeC: fwd?.chargeC ?? null,
+    verdict: c.verdict.category,
+  };
+}
+
+function buildCouple(index: number, points: SeriesPoint[], forward: SeriesCouple['forwardDirection'], o: ResolvedSeriesOptions): SeriesCouple {
+  const { regime, kineticClass } = classifyCouple(points, o.electronCount, o.temperatureK);
+  const forwardFit = fitAgainstSqrtScanRate(points, (p) => p.forwardIpA);
+  const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
+  const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
+  const surface = regime === 'surface' ? seriesSurface(points, o) : null;
+  const diffusion = regime === 'diffusion' ? seriesDiffusion(forwardFit, kineticClass, forwardShift, points, o).diffusion : null;
+  const rateConstant = regime === 'diffusion' && kineticClass !== 'irreversible' ? seriesRateConstant(points, forward, diffusion, o) : null;
+  const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
+  const couple: SeriesCouple = {
+    index,
+    eHalfV: halves.length ? median(halves) : null,
+    forwardDirection: forward,
+    points,
+    regime,
+    kineticClass,
+    forwardFit,
+    anodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipaA),
+    cathodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipcA),
+    diffusion,
+    logLog: fitLogLog(points),
+    peakShift,
+    alpha: regime === 'diffusion' && kineticClass === 'irreversible' ? (diffusion?.alphaUsed ?? forwardShift?.alpha ?? null) : null,
+    rateConstant,
+    surface,
+    diagnostics: [],
+  };
+  couple.diagnostics = describeSeriesCouple(couple, o);
+  return couple;
+}
+
+export function analyzeSeries(files: SeriesFileInput[], options: AnalyzeSeriesOptions = {}): SeriesAnalysis {
+  if (!files.length) throw new AnalysisError('EMPTY_INPUT', 'a series needs at least one analysed voltammogram');
+  const o = resolveSeriesOptions(options);
+  const warnings: SeriesWarning[] = [];
+  files.forEach((f, i) => assertFiniteInRange(`scan rate of ${f.fileName || `file ${i + 1}`}`, f.scanRateVPerS, Number.MIN_VALUE));
+  const cycles = files.map((f) => {
+    const c = chooseCycle(f.analysis, o.cycle);
+    if (!c) warnings.push({ code: 'MISSING_CYCLE', message: `${f.fileName} has no cycle ${o.cycle}; it is left out of the series` });
+    return c;
+  });
+  const groups = matchSeriesCouples(files.map((f, i) => ({ scanRateVPerS: f.scanRateVPerS, couples: cycles[i]?.couples ?? [] })), o.matchToleranceV);
+  const couples = groups.map((g, index) => {
+    const points = g.map((ref) => toPoint(ref, files[ref.fileIndex] as SeriesFileInput, cycles[ref.fileIndex] as CycleAnalysis));
+    return buildCouple(index, points, (g[0] as CoupleRef).couple.forwardDirection, o);
+  });
+  warnings.push(...seriesWarnings(files, couples, o));
+  return { couples, warnings };
+}
+
+function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: ResolvedSeriesOptions): SeriesWarning[] {
+  const out: SeriesWarning[] = [];
+  const rates = files.map((f) => f.scanRateVPerS);
+  if (new Set(rates).size < 2) {
+    out.push({ code: 'SINGLE_SCAN_RATE', message: 'only one scan rate: no slope, D, log–log slope or Ep–log v line can be fitted' });
+  } else if (new Set(rates).size < rates.length) {
+    out.push({ code: 'DUPLICATE_SCAN_RATE', message: 'several files share a scan rate; each enters the fits as its own point' });
+  }
+  const needsD = couples.some((c) => c.regime === 'diffusion' && c.forwardFit);
+  if (needsD && o.areaCm2 === null) out.push({ code: 'NO_AREA', message: 'no electrode area given (--area): D and Γ are not reported' });
+  if (needsD && o.concentrationMolPerCm3 === null) out.push({ code: 'NO_CONCENTRATION', message: 'no concentration given (--conc): D is not reported' });
+  for (const c of couples) {
+    if (c.points.length < files.length && files.length > 1) {
+      out.push({ code: 'UNMATCHED_COUPLE', couple: c.index, message: `couple ${c.index} (E½ ≈ ${c.eHalfV?.toFixed(3) ?? '?'} V) is found in ${c.points.length} of ${files.length} files` });
+    }
+    if (c.rateConstant && c.rateConstant.k0CmPerS === null && c.kineticClass === 'quasi-reversible') {
+      out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: k° not determinable (${c.rateConstant.perFile.find((f) => f.reason)?.reason ?? 'no D available'})` });
+    }
+    if (c.forwardFit && c.forwardFit.pointCount >= 3 && c.forwardFit.r2 < 0.98) {
+      out.push({ code: 'NONLINEAR', couple: c.index, message: `couple ${c.index}: ip against v^½ is not straight (R² = ${c.forwardFit.r2.toFixed(3)})` });
+    }
+  }
+  return out;
+}

@@ -1,0 +1,61 @@
+/**
+ * Groups the couples of several voltammograms of one scan-rate series into series couples.
+ * In: per file, its scan rate and the couples of the chosen cycle (each with a position: E½, or
+ *   Ep of a lone peak, in V). Out: groups of (fileIndex, couple) with at most one couple per file.
+ * Method (design, common practice, no source): files are visited from the slowest scan rate up;
+ *   each couple joins the group whose latest position is nearest, within `toleranceV`, so that a
+ *   couple whose peaks drift with scan rate (slow kinetics) is still followed; otherwise it opens
+ *   a new group. Groups are returned in order of their median position.
+ */
+import type { CoupleResult } from './types';
+
+export interface CoupleRef {
+  fileIndex: number;
+  couple: CoupleResult;
+  positionV: number;
+}
+
+/** E½ when both peaks exist, else the lone peak's potential; null when neither. */
+export function couplePositionV(c: CoupleResult): number | null {
+  return c.eHalfV ?? c.epaV ?? c.epcV ?? null;
+}
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? (s[m] as number) : ((s[m - 1] as number) + (s[m] as number)) / 2;
+}
+
+export function matchSeriesCouples(
+  files: Array<{ scanRateVPerS: number; couples: CoupleResult[] }>,
+  toleranceV: number,
+): CoupleRef[][] {
+  const order = files.map((f, i) => ({ i, v: f.scanRateVPerS })).sort((a, b) => a.v - b.v || a.i - b.i);
+  const groups: CoupleRef[][] = [];
+  for (const { i } of order) {
+    const refs = (files[i]?.couples ?? []).flatMap((couple) => {
+      const positionV = couplePositionV(couple);
+      return positionV === null ? [] : [{ fileIndex: i, couple, positionV }];
+    });
+    const taken = new Set<number>();
+    // Closest pairs first, so two nearby couples do not steal each other's group.
+    const pairs = refs.flatMap((r, k) => groups.map((g, gi) => ({ k, gi, d: Math.abs((g[g.length - 1] as CoupleRef).positionV - r.positionV) })));
+    pairs.sort((a, b) => a.d - b.d);
+    const placed = new Set<number>();
+    for (const p of pairs) {
+      if (p.d > toleranceV || placed.has(p.k) || taken.has(p.gi)) continue;
+      (groups[p.gi] as CoupleRef[]).push(refs[p.k] as CoupleRef);
+      placed.add(p.k);
+      taken.add(p.gi);
+    }
+    refs.forEach((r, k) => {
+      if (!placed.has(k)) groups.push([r]);
+    });
+  }
+  return groups
+    .map((g) => ({ g, m: median(g.map((r) => r.positionV)) }))
+    .sort((a, b) => a.m - b.m)
+    .map(({ g }) => g.sort((a, b) => (files[a.fileIndex]?.scanRateVPerS ?? 0) - (files[b.fileIndex]?.scanRateVPerS ?? 0)));
+}
+
+export { median };

@@ -1,0 +1,76 @@
+/**
+ * Settles the transport regime and kinetic class of a series couple from the per-file verdicts
+ * and peak separations, and picks the transfer coefficient for the irreversible Randles–Ševčík form.
+ * Rules (design; thresholds named with their sources):
+ *   - surface when most files call the couple adsorbed;
+ *   - 'sluggish' couples with median n·ΔEp above 212 mV at 25 °C (the end of Nicholson's 1965
+ *     table) are irreversible, quasi-reversible otherwise;
+ *   - a one-way couple is irreversible when its forward peak is broader than 1.25× the reversible
+ *     |Ep − Ep/2| = 2.20·RT/nF (Nicholson & Shain 1964; the 1.25 margin is common practice, no
+ *     source); otherwise the loss of the return peak is put down to chemistry and the forward
+ *     peak is treated as reversible.
+ * α for the irreversible form: the user's value; else from Ep against log v (Wang 2000 eq. 2-5);
+ *   else from |Ep − Ep/2| = 1.857·RT/(α nₐ F) (Bard & Faulkner 2nd ed. §6.3, from memory); else 0.5.
+ */
+import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
+import type { PeakPotentialVsLogScanRateResult } from '../series';
+import { median } from './matchSeriesCouples';
+import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from './seriesTypes';
+import type { VerdictCategory } from './types';
+
+function mostCommon(categories: VerdictCategory[]): VerdictCategory {
+  const counts = new Map<VerdictCategory, number>();
+  for (const c of categories) counts.set(c, (counts.get(c) ?? 0) + 1);
+  let best: VerdictCategory = 'inconclusive';
+  let bestCount = 0;
+  for (const [c, k] of counts) if (k > bestCount || (k === bestCount && c !== 'inconclusive')) { best = c; bestCount = k; }
+  return best;
+}
+
+export function classifyCouple(
+  points: SeriesPoint[],
+  electronCount: number,
+  temperatureK: number,
+): { regime: SeriesRegime; kineticClass: SeriesKineticClass; majority: VerdictCategory } {
+  const majority = mostCommon(points.map((p) => p.verdict));
+  if (majority === 'adsorbed') return { regime: 'surface', kineticClass: 'unknown', majority };
+  const rt = thermalVoltageV(temperatureK);
+  const deltas = points.flatMap((p) => (p.deltaEpV === null ? [] : [electronCount * p.deltaEpV * (STANDARD_TEMPERATURE_K / temperatureK)]));
+  const widths = points.flatMap((p) => (p.forwardHalfPeakWidthV === null ? [] : [p.forwardHalfPeakWidthV]));
+  switch (majority) {
+    case 'nernstian':
+    case 'follow-up-loss':
+      return { regime: 'diffusion', kineticClass: 'reversible', majority };
+    case 'sluggish':
+      return { regime: 'diffusion', kineticClass: deltas.length && median(deltas) > 0.212 ? 'irreversible' : 'quasi-reversible', majority };
+    case 'one-way': {
+      const broad = widths.length > 0 && median(widths) > 1.25 * (2.2 * rt) / electronCount;
+      return { regime: 'diffusion', kineticClass: broad ? 'irreversible' : 'reversible', majority };
+    }
+    default:
+      return { regime: 'diffusion', kineticClass: 'unknown', majority };
+  }
+}
+
+/** α·nₐ from the forward peak's |Ep − Ep/2| (Bard & Faulkner §6.3: 1.857·RT/(α nₐ F)). */
+export function alphaFromHalfPeakWidth(halfPeakWidthV: number, temperatureK: number): number {
+  return (1.857 * thermalVoltageV(temperatureK)) / halfPeakWidthV;
+}
+
+export function chooseIrreversibleAlpha(
+  userAlpha: number | null,
+  shift: PeakPotentialVsLogScanRateResult | null,
+  points: SeriesPoint[],
+  transferElectronCount: number,
+  temperatureK: number,
+): { alpha: number; source: string } {
+  if (userAlpha !== null) return { alpha: userAlpha, source: 'given by the user' };
+  const a = shift?.alpha ?? null;
+  if (a !== null && a > 0.1 && a < 0.9) return { alpha: a, source: 'from Ep against log v (Wang 2000 eq. 2-5)' };
+  const widths = points.flatMap((p) => (p.forwardHalfPeakWidthV === null ? [] : [p.forwardHalfPeakWidthV]));
+  if (widths.length) {
+    const w = alphaFromHalfPeakWidth(median(widths), temperatureK) / transferElectronCount;
+    if (w > 0.1 && w < 0.9) return { alpha: w, source: 'from |Ep − Ep/2| (Bard & Faulkner §6.3)' };
+  }
+  return { alpha: 0.5, source: 'assumed 0.5 (no usable measurement)' };
+}

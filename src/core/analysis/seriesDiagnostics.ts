@@ -1,0 +1,67 @@
+/**
+ * Plain-words statements of what a scan-rate series shows for one couple, each with its number
+ * and the expectation it is compared with.
+ * Expectations: reversible Ep independent of v and ip ∝ v^½ (J. Wang, Analytical
+ *   Electrochemistry 2nd ed. (2000) §2-1.1.1); irreversible |dEp/d log v| = 29.58/(α nₐ) mV per
+ *   decade at 25 °C (Wang eq. 2-5); log–log slope 0.5 diffusion, 1 adsorbed (bands: common
+ *   practice, no source); linearity threshold R² ≥ 0.98 is common practice, no source.
+ */
+import type { ResolvedSeriesOptions } from './seriesFits';
+import type { SeriesCouple } from './seriesTypes';
+
+const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
+const sci = (v: number, d = 3) => v.toExponential(d - 1);
+
+function describeDrift(c: SeriesCouple): string[] {
+  const out: string[] = [];
+  const halves = c.points.flatMap((p) => (p.eHalfV === null ? [] : [p.eHalfV]));
+  if (halves.length >= 2) out.push(`E½ spans ${mv(Math.max(...halves) - Math.min(...halves))} over the series`);
+  const shift = c.forwardDirection === 'anodic' ? c.peakShift.anodic : c.peakShift.cathodic;
+  if (shift) {
+    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate (reversible: 0; totally irreversible: ±29.6/(αnₐ) mV)`);
+  }
+  return out;
+}
+
+function describeLines(c: SeriesCouple): string[] {
+  const out: string[] = [];
+  const f = c.forwardFit;
+  if (f) {
+    const maxIp = Math.max(...c.points.map((p) => p.forwardIpA ?? 0));
+    const rel = maxIp > 0 ? Math.abs(f.intercept) / maxIp : 0;
+    out.push(`|ip| against v^½: R² = ${f.r2.toFixed(4)}, intercept ${(rel * 100).toFixed(1)} % of the largest peak`);
+  }
+  if (c.logLog) {
+    const ci = c.logLog.fit.slopeInterval;
+    const range = ci ? ` (95 % CI ${ci[0].toFixed(2)}–${ci[1].toFixed(2)})` : '';
+    out.push(`log|ip| against log v: slope ${c.logLog.slope.toFixed(3)}${range} — ${c.logLog.reading}`);
+  }
+  return out;
+}
+
+function describeResults(c: SeriesCouple, o: ResolvedSeriesOptions): string[] {
+  const out: string[] = [];
+  if (c.diffusion) {
+    const a = c.diffusion.alphaUsed === null ? '' : `, α = ${c.diffusion.alphaUsed.toFixed(2)} ${c.diffusion.alphaSource ?? ''}`;
+    out.push(`D = ${sci(c.diffusion.diffusionCm2PerS)} cm²/s (Randles–Ševčík, ${c.diffusion.form} form${a})`);
+    if (c.diffusion.note) out.push(c.diffusion.note);
+  }
+  const k = c.rateConstant;
+  if (k?.k0CmPerS != null) {
+    const used = k.perFile.filter((f) => f.k0CmPerS !== null).length;
+    out.push(`k° = ${sci(k.k0CmPerS)} cm/s (Nicholson ψ, median of ${used} file${used > 1 ? 's' : ''}; α = ${(o.alpha ?? 0.5).toFixed(2)}, D_O/D_R = ${o.diffusionRatio})`);
+  } else if (k?.lowerBoundCmPerS != null) {
+    out.push(`ΔEp stays below the range of Nicholson's method: k° > ${sci(k.lowerBoundCmPerS, 2)} cm/s`);
+  }
+  const s = c.surface;
+  if (s) {
+    if (s.coverageFromChargeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromChargeMolPerCm2)} mol/cm² from the peak charge`);
+    if (s.coverageFromSlopeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromSlopeMolPerCm2)} mol/cm² from the slope of ip against v (ideal Nernstian film)`);
+    if (s.ksPerS !== null) out.push(`Laviron k_s = ${sci(s.ksPerS)} 1/s (files with n·ΔEp > 200 mV)`);
+  }
+  return out;
+}
+
+export function describeSeriesCouple(c: SeriesCouple, o: ResolvedSeriesOptions): string[] {
+  return [`${c.regime}, ${c.kineticClass}`, ...describeDrift(c), ...describeLines(c), ...describeResults(c, o)];
+}

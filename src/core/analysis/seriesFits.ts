@@ -1,0 +1,102 @@
+/**
+ * The straight lines of a series couple: |ip| against v^½ (anodic, cathodic, forward), log|ip|
+ * against log v, Ep against log v, and D from the forward slope by Randles–Ševčík in the form
+ * the kinetic class calls for. Sources are in the called methods (series/, regression/).
+ */
+import { fitLine } from '../regression';
+import type { FitLineResult } from '../regression';
+import { logLogSlope, peakPotentialVsLogScanRate, randlesSevcikDiffusion } from '../series';
+import type { PeakPotentialVsLogScanRateResult } from '../series';
+import { chooseIrreversibleAlpha } from './seriesClassify';
+import type { SeriesCouple, SeriesDiffusion, SeriesKineticClass, SeriesPoint } from './seriesTypes';
+
+export interface ResolvedSeriesOptions {
+  electronCount: number;
+  areaCm2: number | null;
+  concentrationMolPerCm3: number | null;
+  temperatureK: number;
+  alpha: number | null;
+  transferElectronCount: number;
+  diffusionRatio: number;
+  diffusionCm2PerS: number | null;
+  cycle: number;
+  matchToleranceV: number;
+}
+
+type Pick = (p: SeriesPoint) => number | null;
+
+/** Pairs (x, y) of the points where `y` is known, when at least two distinct x remain. */
+function pairs(points: SeriesPoint[], x: (p: SeriesPoint) => number, y: Pick): { x: number[]; y: number[] } | null {
+  const xs: number[] = [];
+  const ys: number[] = [];
+  for (const p of points) {
+    const v = y(p);
+    if (v === null || !Number.isFinite(v)) continue;
+    xs.push(x(p));
+    ys.push(v);
+  }
+  return new Set(xs).size >= 2 ? { x: xs, y: ys } : null;
+}
+
+const sqrtV = (p: SeriesPoint) => Math.sqrt(p.scanRateVPerS);
+const scanRate = (p: SeriesPoint) => p.scanRateVPerS;
+
+/** |ip| against v^½ for the chosen current; null with fewer than two scan rates. */
+export function fitAgainstSqrtScanRate(points: SeriesPoint[], y: Pick): FitLineResult | null {
+  const d = pairs(points, sqrtV, y);
+  return d ? fitLine(d.x, d.y) : null;
+}
+
+/** |ip| against v; null with fewer than two scan rates. */
+export function fitAgainstScanRate(points: SeriesPoint[], y: Pick): FitLineResult | null {
+  const d = pairs(points, scanRate, y);
+  return d ? fitLine(d.x, d.y) : null;
+}
+
+export function fitLogLog(points: SeriesPoint[]): SeriesCouple['logLog'] {
+  const d = pairs(points, scanRate, (p) => (p.forwardIpA !== null && p.forwardIpA > 0 ? p.forwardIpA : null));
+  return d ? logLogSlope(d.x, d.y) : null;
+}
+
+export function fitPeakShift(points: SeriesPoint[], direction: 'anodic' | 'cathodic', o: ResolvedSeriesOptions): PeakPotentialVsLogScanRateResult | null {
+  const d = pairs(points, scanRate, (p) => (direction === 'anodic' ? p.epaV : p.epcV));
+  if (!d) return null;
+  return peakPotentialVsLogScanRate(
+    { scanRatesVPerS: d.x, peakPotentialsV: d.y, direction },
+    { transferElectronCount: o.transferElectronCount, temperatureK: o.temperatureK },
+  );
+}
+
+/** D of the bulk species from the forward slope, or null (with the reason) when it cannot be had. */
+export function seriesDiffusion(
+  fit: FitLineResult | null,
+  kineticClass: SeriesKineticClass,
+  shift: PeakPotentialVsLogScanRateResult | null,
+  points: SeriesPoint[],
+  o: ResolvedSeriesOptions,
+): { diffusion: SeriesDiffusion | null; reason: string | null } {
+  if (!fit) return { diffusion: null, reason: 'needs at least two scan rates' };
+  if (o.areaCm2 === null) return { diffusion: null, reason: 'needs the electrode area (--area)' };
+  if (o.concentrationMolPerCm3 === null) return { diffusion: null, reason: 'needs the bulk concentration (--conc)' };
+  const cell = { electronCount: o.electronCount, areaCm2: o.areaCm2, concentrationMolPerCm3: o.concentrationMolPerCm3 };
+  const irreversible = kineticClass === 'irreversible';
+  const a = irreversible ? chooseIrreversibleAlpha(o.alpha, shift, points, o.transferElectronCount, o.temperatureK) : null;
+  const rs = {
+    form: irreversible ? ('irreversible' as const) : ('reversible' as const),
+    temperatureK: o.temperatureK,
+    transferElectronCount: o.transferElectronCount,
+    ...(a ? { alpha: a.alpha } : {}),
+  };
+  const d = randlesSevcikDiffusion(fit.slope, cell, rs);
+  const ci = fit.slopeInterval;
+  const intervalCm2PerS: [number, number] | null = ci && ci[0] > 0
+    ? [randlesSevcikDiffusion(ci[0], cell, rs), randlesSevcikDiffusion(ci[1], cell, rs)]
+    : null;
+  const note = kineticClass === 'quasi-reversible'
+    ? 'quasi-reversible couple: the peak current lies below the reversible limit, so this D (reversible form) is a lower bound'
+    : kineticClass === 'unknown' ? 'kinetic class unclear: reversible form used' : null;
+  return {
+    diffusion: { diffusionCm2PerS: d, intervalCm2PerS, form: rs.form, alphaUsed: a?.alpha ?? null, alphaSource: a?.source ?? null, note },
+    reason: null,
+  };
+}

@@ -1,0 +1,132 @@
+/**
+ * Result and option types of the scan-rate series analysis (analyzeSeries) and the whole-run
+ * orchestration (analyzeRun). Units in every name; currents are positive magnitudes unless named
+ * signed; potentials in V on the scale the run reports (see AnalyzeRunResult.reference).
+ */
+import type { FitLineResult } from '../regression';
+import type { LogLogReading, PeakPotentialVsLogScanRateResult, RandlesSevcikForm } from '../series';
+import type { NicholsonPsiResult } from '../kinetics';
+import type { CoupleResult, PeakDirection, VerdictCategory, VoltammogramAnalysis } from './types';
+
+/** One voltammogram of a series, already analysed. */
+export interface SeriesFileInput {
+  fileName: string;
+  scanRateVPerS: number;
+  analysis: VoltammogramAnalysis;
+}
+
+export interface AnalyzeSeriesOptions {
+  /** Electrons per molecule n. @default 1 */
+  electronCount?: number;
+  /** Electrode area (cm²); D and Γ need it. @default null */
+  areaCm2?: number | null;
+  /** Bulk concentration of the species present (mol/cm³); D needs it. @default null */
+  concentrationMolPerCm3?: number | null;
+  /** Temperature (K). @default 298.15 */
+  temperatureK?: number;
+  /** Transfer coefficient α given by the user; measured or 0.5 otherwise. @default null */
+  alpha?: number | null;
+  /** Electrons in the rate-determining step nₐ (irreversible form). @default 1 */
+  transferElectronCount?: number;
+  /** D_O/D_R for Nicholson's k°. @default 1 */
+  diffusionRatio?: number;
+  /** Known D of the bulk species (cm²/s), used for k° when D cannot be fitted. @default null */
+  diffusionCm2PerS?: number | null;
+  /** 1-based cycle used from each file. @default 1 */
+  cycle?: number;
+  /** Largest E½ (or Ep) move between neighbouring scan rates for one couple (V). @default 0.12 */
+  matchToleranceV?: number;
+}
+
+/** One file's contribution to a series couple. */
+export interface SeriesPoint extends Pick<CoupleResult, 'epaV' | 'epcV' | 'eHalfV' | 'deltaEpV' | 'ipaA' | 'ipcA'> {
+  fileIndex: number;
+  fileName: string;
+  scanRateVPerS: number;
+  cycle: number;
+  /** Height of the first-sweep peak (A). */
+  forwardIpA: number | null;
+  /** |Ep − Ep/2| of the forward peak (V). */
+  forwardHalfPeakWidthV: number | null;
+  /** Charge under the forward peak (C). */
+  forwardChargeC: number | null;
+  verdict: VerdictCategory;
+}
+
+/** Transport regime and kinetic class the series settles on for a couple. */
+export type SeriesRegime = 'diffusion' | 'surface';
+export type SeriesKineticClass = 'reversible' | 'quasi-reversible' | 'irreversible' | 'unknown';
+
+export interface SeriesDiffusion {
+  diffusionCm2PerS: number;
+  /** From the ends of the slope's 95 % interval, when it has one. */
+  intervalCm2PerS: [number, number] | null;
+  form: RandlesSevcikForm;
+  /** α used by the irreversible form, with its origin. */
+  alphaUsed: number | null;
+  alphaSource: string | null;
+  note: string | null;
+}
+
+export interface SeriesRateConstant {
+  /** Median over the files where ψ was determinable (cm/s). */
+  k0CmPerS: number | null;
+  perFile: Array<{ fileIndex: number; k0CmPerS: number | null; psi: NicholsonPsiResult | null; reason: string | null }>;
+  /** When every ΔEp is below the table: k° is at least this (cm/s). */
+  lowerBoundCmPerS: number | null;
+  /** D_O used (cm²/s) and where it came from. */
+  diffusionOxCm2PerS: number | null;
+  diffusionSource: string | null;
+}
+
+export interface SeriesSurface {
+  coverageFromChargeMolPerCm2: number | null;
+  coverageFromSlopeMolPerCm2: number | null;
+  /** |ip| (A) of the forward peak against v (V/s). */
+  fit: FitLineResult | null;
+  /** Laviron k_s, median over files with n·ΔEp > 200 mV (1/s). */
+  ksPerS: number | null;
+  ksPerFile: Array<{ fileIndex: number; ksPerS: number | null }>;
+  /** α from the Laviron Ep–log v slopes, when both peaks move apart. */
+  lavironAlpha: number | null;
+}
+
+export interface SeriesCouple {
+  /** 0-based, in order of E½. */
+  index: number;
+  /** Median E½ (or lone Ep) over the files (V). */
+  eHalfV: number | null;
+  forwardDirection: PeakDirection;
+  points: SeriesPoint[];
+  regime: SeriesRegime;
+  kineticClass: SeriesKineticClass;
+  /** Forward-peak |ip| (A) against v^½ ((V/s)^½): the contract's slope/intercept/r2. */
+  forwardFit: FitLineResult | null;
+  anodicFit: FitLineResult | null;
+  cathodicFit: FitLineResult | null;
+  diffusion: SeriesDiffusion | null;
+  logLog: { slope: number; reading: LogLogReading; fit: FitLineResult } | null;
+  peakShift: { anodic: PeakPotentialVsLogScanRateResult | null; cathodic: PeakPotentialVsLogScanRateResult | null };
+  /** α of an irreversible diffusing couple from Ep against log v. */
+  alpha: number | null;
+  rateConstant: SeriesRateConstant | null;
+  surface: SeriesSurface | null;
+  /** Plain statements of what the series shows, each with its number. */
+  diagnostics: string[];
+}
+
+export type SeriesWarningCode =
+  | 'SINGLE_SCAN_RATE' | 'NO_AREA' | 'NO_CONCENTRATION' | 'UNMATCHED_COUPLE' | 'NOT_DETERMINABLE'
+  | 'NONLINEAR' | 'DUPLICATE_SCAN_RATE' | 'MISSING_CYCLE';
+
+export interface SeriesWarning {
+  code: SeriesWarningCode;
+  message: string;
+  /** Series couple index, when the warning belongs to one. */
+  couple?: number;
+}
+
+export interface SeriesAnalysis {
+  couples: SeriesCouple[];
+  warnings: SeriesWarning[];
+}
