@@ -1,5 +1,6 @@
 /** Registry of CLI commands. Each command lives in its own file in this folder. */
 import type { CliCommand } from '../command';
 import { simulateCommand } from './simulate';
+import { analyzeCommand } from './analyze';
 
-export const commands: CliCommand[] = [simulateCommand];
+export const commands: CliCommand[] = [simulateCommand, analyzeCommand];

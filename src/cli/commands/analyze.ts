@@ -1,0 +1,178 @@
+/**
+ * `halfwave analyze FILE...`: reads voltammograms through the importer. `--inspect` prints what
+ * the importer detected in each file. The analysis report itself is produced by one call in
+ * `run` below (see ANALYSIS BRANCH).
+ */
+import { parseArgs, optionNumberOrUndefined, optionString } from '../args';
+import type { OptionSpec, ParsedArgs } from '../args';
+import type { CliCommand, CliIo } from '../command';
+import { UsageError } from '../errors';
+import { formatInspectText, inspectJson } from '../inspect';
+import { readInputs } from '../readInputs';
+import { parseUnitOf } from '../../io';
+import type { CurrentUnit, DecimalMark, Delimiter, ImportOverrides, PotentialUnit, TextEncoding, TimeUnit } from '../../io';
+
+const SPEC: Record<string, OptionSpec> = {
+  area: { value: true }, conc: { value: true }, n: { value: true }, temp: { value: true }, 'scan-rate': { value: true },
+  json: { value: false }, csv: { value: true }, ref: { value: true }, inspect: { value: false },
+  delimiter: { value: true }, decimal: { value: true }, 'header-line': { value: true }, columns: { value: true },
+  'potential-unit': { value: true }, 'current-unit': { value: true }, 'time-unit': { value: true },
+  convention: { value: true }, encoding: { value: true },
+};
+
+/** Everything `analyze` was asked for, in core units. */
+export interface AnalyzeArgs {
+  files: string[];
+  overrides: ImportOverrides;
+  areaCm2?: number;
+  concentrationMolPerCm3?: number;
+  electronCount?: number;
+  temperatureK?: number;
+  scanRateVPerS?: number;
+  referenceElectrode?: string;
+  json: boolean;
+  csvPath?: string;
+  inspect: boolean;
+}
+
+const HELP = `Usage: halfwave analyze FILE|FOLDER... [options]
+
+Reads instrument text/CSV exports (a folder stands for its files, in natural order).
+
+Analysis options:
+  --area CM2            electrode area in cm²
+  --conc MM             bulk concentration in mM (mmol/L)
+  --n N                 electrons transferred
+  --temp CELSIUS        temperature in °C (default: the file's, else 25 °C)
+  --scan-rate V_PER_S   scan rate in V/s; beats the time column, preamble and file name
+  --ref NAME            reference electrode the potentials are measured against
+  --json                machine-readable output on stdout
+  --csv FILE            also write the results table to FILE
+  --inspect             print what was detected in each file (no analysis)
+
+Import overrides (each replaces one guess; see the --inspect report):
+  --delimiter D         comma | semicolon | tab | space (runs of spaces)
+  --decimal M           point | comma
+  --header-line N       1-based line of the column names; 0 = the file has none
+  --columns LIST        1-based columns, e.g. E=2,I=3,t=1,cycle=4 (cycle=0: split cycles from
+                        the potential instead of a cycle column)
+  --potential-unit U    V | mV | µV (or uV)
+  --current-unit U      A | mA | µA (or uA) | nA | pA
+  --time-unit U         s | ms | min | h
+  --convention C        iupac (anodic current positive) | polarographic (cathodic positive)
+  --encoding E          utf-8 | utf-16le | utf-16be | latin1
+
+Exit codes: 0 done, 1 internal fault, 2 bad arguments or a file that cannot be read.
+`;
+
+export const analyzeCommand: CliCommand = {
+  name: 'analyze',
+  summary: 'read voltammograms (use --inspect to see what was detected in each file)',
+  help: HELP,
+  run: async (argv: string[], io: CliIo) => {
+    const args = parseAnalyzeArgs(parseArgs(argv, SPEC));
+    if (args.inspect) return inspect(args, io);
+    const { measurements } = readInputs(args.files, { overrides: args.overrides });
+    // ANALYSIS BRANCH: replace the next line by `return runAnalysis(measurements, args, io);`
+    // imported from '../analyzeReport'.
+    return analysisUnavailable(measurements.length, io);
+  },
+};
+
+function analysisUnavailable(_count: number, io: CliIo): number {
+  io.stderr('halfwave analyze: analysis output is not available in this build (use --inspect to check the import)\n');
+  return 1;
+}
+
+function inspect(args: AnalyzeArgs, io: CliIo): number {
+  const read = readInputs(args.files, { overrides: args.overrides, keepGoing: true });
+  io.stdout(args.json ? `${JSON.stringify(inspectJson(read.outcomes), null, 2)}\n` : formatInspectText(read.outcomes));
+  return read.failures.length ? 2 : 0;
+}
+
+export function parseAnalyzeArgs(a: ParsedArgs): AnalyzeArgs {
+  const out: AnalyzeArgs = { files: a.positionals, overrides: parseOverrides(a), json: a.flags.has('json'), inspect: a.flags.has('inspect') };
+  const area = optionNumberOrUndefined(a, 'area', 1e-12, 1e6);
+  const conc = optionNumberOrUndefined(a, 'conc', 0, 1e5);
+  const n = optionNumberOrUndefined(a, 'n', 1, 10);
+  const temp = optionNumberOrUndefined(a, 'temp', -100, 500);
+  const rate = optionNumberOrUndefined(a, 'scan-rate', 1e-9, 1e7);
+  if (area !== undefined) out.areaCm2 = area;
+  if (conc !== undefined) out.concentrationMolPerCm3 = conc * 1e-6;
+  if (n !== undefined) {
+    if (!Number.isInteger(n)) throw new UsageError(`--n must be a whole number of electrons, got ${n}`);
+    out.electronCount = n;
+  }
+  if (temp !== undefined) out.temperatureK = temp + 273.15;
+  if (rate !== undefined) out.scanRateVPerS = rate;
+  const ref = optionString(a, 'ref');
+  if (ref !== undefined) out.referenceElectrode = ref;
+  const csv = optionString(a, 'csv');
+  if (csv !== undefined) out.csvPath = csv;
+  return out;
+}
+
+const DELIMITERS: Record<string, Delimiter> = { comma: ',', ',': ',', semicolon: ';', ';': ';', tab: '\t', '\\t': '\t', space: 'whitespace', spaces: 'whitespace', whitespace: 'whitespace' };
+const DECIMALS: Record<string, DecimalMark> = { point: '.', dot: '.', '.': '.', comma: ',', ',': ',' };
+const ENCODINGS: TextEncoding[] = ['utf-8', 'utf-16le', 'utf-16be', 'latin1'];
+const COLUMN_KEYS: Record<string, 'potentialColumn' | 'currentColumn' | 'timeColumn' | 'cycleColumn'> = {
+  e: 'potentialColumn', potential: 'potentialColumn', i: 'currentColumn', current: 'currentColumn', t: 'timeColumn', time: 'timeColumn', cycle: 'cycleColumn',
+};
+
+function pick<T>(a: ParsedArgs, name: string, table: Record<string, T>, values: string): T | undefined {
+  const raw = optionString(a, name);
+  if (raw === undefined) return undefined;
+  const v = table[raw.toLowerCase()] ?? table[raw];
+  if (v === undefined) throw new UsageError(`--${name} must be one of ${values}, got "${raw}"`);
+  return v;
+}
+
+function unitOption<K extends 'potential' | 'current' | 'time'>(a: ParsedArgs, kind: K, allowed: string): string | undefined {
+  const raw = optionString(a, `${kind}-unit`);
+  if (raw === undefined) return undefined;
+  const u = parseUnitOf(kind, raw);
+  if (!u) throw new UsageError(`--${kind}-unit must be one of ${allowed}, got "${raw}"`);
+  return u;
+}
+
+export function parseOverrides(a: ParsedArgs): ImportOverrides {
+  const o: ImportOverrides = {};
+  const delimiter = pick(a, 'delimiter', DELIMITERS, 'comma, semicolon, tab, space');
+  if (delimiter) o.delimiter = delimiter;
+  const decimal = pick(a, 'decimal', DECIMALS, 'point, comma');
+  if (decimal) o.decimalMark = decimal;
+  const header = optionNumberOrUndefined(a, 'header-line', 0, 1e7);
+  if (header !== undefined) {
+    if (!Number.isInteger(header)) throw new UsageError(`--header-line must be a whole line number, got ${header}`);
+    o.headerLine = header;
+  }
+  Object.assign(o, parseColumns(optionString(a, 'columns')));
+  const pu = unitOption(a, 'potential', 'V, mV, µV');
+  if (pu) o.potentialUnit = pu as PotentialUnit;
+  const cu = unitOption(a, 'current', 'A, mA, µA, nA, pA');
+  if (cu) o.currentUnit = cu as CurrentUnit;
+  const tu = unitOption(a, 'time', 's, ms, min, h');
+  if (tu) o.timeUnit = tu as TimeUnit;
+  const conv = pick(a, 'convention', { iupac: 'iupac', polarographic: 'polarographic' } as const, 'iupac, polarographic');
+  if (conv) o.currentConvention = conv;
+  const enc = pick(a, 'encoding', Object.fromEntries(ENCODINGS.map((e) => [e, e])) as Record<string, TextEncoding>, ENCODINGS.join(', '));
+  if (enc) o.encoding = enc;
+  const rate = optionNumberOrUndefined(a, 'scan-rate', 1e-9, 1e7);
+  if (rate !== undefined) o.scanRateVPerS = rate;
+  return o;
+}
+
+/** "E=2,I=3,t=1,cycle=4" (1-based) → 0-based column overrides; cycle=0 → -1 (ignore). */
+export function parseColumns(raw: string | undefined): ImportOverrides {
+  const o: ImportOverrides = {};
+  if (raw === undefined) return o;
+  for (const part of raw.split(',')) {
+    const m = /^\s*([a-z]+)\s*=\s*(\d+)\s*$/i.exec(part);
+    const key = m ? COLUMN_KEYS[(m[1] as string).toLowerCase()] : undefined;
+    if (!m || !key) throw new UsageError(`--columns takes pairs like E=2,I=3,t=1,cycle=4; could not read "${part.trim()}"`);
+    const n = Number(m[2]);
+    if (n === 0 && key !== 'cycleColumn') throw new UsageError(`--columns: column numbers start at 1, got ${part.trim()}`);
+    o[key] = n - 1;
+  }
+  return o;
+}

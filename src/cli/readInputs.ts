@@ -1,0 +1,77 @@
+/**
+ * Reads the files named on the command line (a folder stands for the files in it, sorted
+ * naturally: run2 before run10) and imports each through the importer. An unreadable path is a
+ * UsageError naming it. A file the importer rejects is an ImportError; with `keepGoing` it is
+ * collected instead and the other files are still read.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { basename, join } from 'node:path';
+import { importVoltammogram, ImportError } from '../io';
+import type { ImportOverrides, ImportResult, ImportWarning, Measurement } from '../io';
+import { UsageError } from './errors';
+
+export interface ReadInputsOptions {
+  overrides?: ImportOverrides;
+  /** Collect ImportErrors per file instead of throwing the first. @default false */
+  keepGoing?: boolean;
+}
+
+export type InputOutcome = { path: string; result: ImportResult } | { path: string; error: ImportError };
+
+export interface InputsRead {
+  measurements: Measurement[];
+  warnings: ImportWarning[];
+  failures: ImportError[];
+  /** One entry per file, in reading order. */
+  outcomes: InputOutcome[];
+}
+
+const natural = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' }).compare;
+
+/** Expands folders into their files (not recursive; hidden files and *.md notes left out). */
+export function expandPaths(paths: string[]): string[] {
+  const out: string[] = [];
+  for (const p of paths) {
+    let st;
+    try {
+      st = statSync(p);
+    } catch {
+      throw new UsageError(`cannot read "${p}": no such file or folder`);
+    }
+    if (!st.isDirectory()) {
+      out.push(p);
+      continue;
+    }
+    const names = readdirSync(p)
+      .filter((n) => !n.startsWith('.') && !/\.md$/i.test(n))
+      .filter((n) => statSync(join(p, n)).isFile())
+      .sort(natural);
+    if (!names.length) throw new UsageError(`the folder "${p}" holds no data files`);
+    out.push(...names.map((n) => join(p, n)));
+  }
+  return out;
+}
+
+export function readInputs(paths: string[], options: ReadInputsOptions = {}): InputsRead {
+  if (!paths.length) throw new UsageError('no input files given (see --help)');
+  const read: InputsRead = { measurements: [], warnings: [], failures: [], outcomes: [] };
+  for (const path of expandPaths(paths)) {
+    let bytes: Uint8Array;
+    try {
+      bytes = readFileSync(path);
+    } catch (err) {
+      throw new UsageError(`cannot read "${path}": ${(err as NodeJS.ErrnoException).code ?? String(err)}`);
+    }
+    try {
+      const result = importVoltammogram(basename(path), bytes, options.overrides ? { overrides: options.overrides } : {});
+      read.measurements.push(result.measurement);
+      read.warnings.push(...result.warnings);
+      read.outcomes.push({ path, result });
+    } catch (err) {
+      if (!(err instanceof ImportError) || !options.keepGoing) throw err;
+      read.failures.push(err);
+      read.outcomes.push({ path, error: err });
+    }
+  }
+  return read;
+}
