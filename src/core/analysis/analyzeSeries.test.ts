@@ -115,3 +115,16 @@ describe('analyzeSeries', () => {
     expect(() => analyzeSeries([{ ...one[0]!, scanRateVPerS: 0 }])).toThrow(/scan rate of a/);
   });
 });
+
+describe('analyzeSeries verdict refinement', () => {
+  // Wang (2000) §2-1.1.1: a reversible couple's Ep does not move with v; 30 mV/decade is kinetic.
+  it('turns a nernstian single-trace verdict into sluggish when Ep drifts with v', () => {
+    const files = v.map((s, i) => ({
+      fileName: `d${i}`, scanRateVPerS: s,
+      analysis: fakeAnalysis([{ epaV: 0.03 + 0.03 * Math.log10(s / 0.025), epcV: -0.03 - 0.03 * Math.log10(s / 0.025), ipaA: rev(s), ipcA: rev(s) }]),
+    }));
+    const c = analyzeSeries(files, opts).couples[0];
+    expect(c?.verdict.category).toBe('sluggish');
+    expect(c?.verdict.reasons.some((r) => /per decade/.test(r))).toBe(true);
+  });
+});

@@ -11,15 +11,16 @@
  */
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { AnalysisError, assertFiniteInRange } from '../errors';
+import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
 import { matchSeriesCouples, median } from './matchSeriesCouples';
 import type { CoupleRef } from './matchSeriesCouples';
 import { classifyCouple } from './seriesClassify';
 import { describeSeriesCouple } from './seriesDiagnostics';
-import { fitAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
+import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
 import { seriesRateConstant, seriesSurface } from './seriesKinetics';
 import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesPoint, SeriesWarning } from './seriesTypes';
-import type { CycleAnalysis } from './types';
+import type { CycleAnalysis, SeriesEvidence, Verdict } from './types';
 
 export function resolveSeriesOptions(options: AnalyzeSeriesOptions): ResolvedSeriesOptions {
   const o: ResolvedSeriesOptions = {
@@ -72,7 +73,21 @@ function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): S
   };
 }
 
-function buildCouple(index: number, points: SeriesPoint[], forward: SeriesCouple['forwardDirection'], o: ResolvedSeriesOptions): SeriesCouple {
+/** The single-trace verdict refined with what the series shows (two scan rates at least). */
+function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>): Verdict {
+  const e: SeriesEvidence = { count: new Set(c.points.map((p) => p.scanRateVPerS)).size };
+  if ((e.count ?? 0) < 2) return first;
+  if (c.logLog) e.logLogSlope = c.logLog.slope;
+  if (c.peakShift.anodic) e.epaShiftVPerDecade = c.peakShift.anodic.slopeVPerDecade;
+  if (c.peakShift.cathodic) e.epcShiftVPerDecade = c.peakShift.cathodic.slopeVPerDecade;
+  if (c.forwardFit) e.sqrtScanRateR2 = c.forwardFit.r2;
+  const linear = fitAgainstScanRate(c.points, (p) => p.forwardIpA);
+  if (linear) e.scanRateR2 = linear.r2;
+  return refineVerdictWithSeries(first, e);
+}
+
+function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
+  const forward = first.forwardDirection;
   const { regime, kineticClass } = classifyCouple(points, o.electronCount, o.temperatureK);
   const forwardFit = fitAgainstSqrtScanRate(points, (p) => p.forwardIpA);
   const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
@@ -81,7 +96,7 @@ function buildCouple(index: number, points: SeriesPoint[], forward: SeriesCouple
   const diffusion = regime === 'diffusion' ? seriesDiffusion(forwardFit, kineticClass, forwardShift, points, o).diffusion : null;
   const rateConstant = regime === 'diffusion' && kineticClass !== 'irreversible' ? seriesRateConstant(points, forward, diffusion, o) : null;
   const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
-  const couple: SeriesCouple = {
+  const couple: Omit<SeriesCouple, 'verdict'> = {
     index,
     eHalfV: halves.length ? median(halves) : null,
     forwardDirection: forward,
@@ -100,7 +115,7 @@ function buildCouple(index: number, points: SeriesPoint[], forward: SeriesCouple
     diagnostics: [],
   };
   couple.diagnostics = describeSeriesCouple(couple, o);
-  return couple;
+  return { ...couple, verdict: seriesVerdict(first.verdict, couple) };
 }
 
 export function analyzeSeries(files: SeriesFileInput[], options: AnalyzeSeriesOptions = {}): SeriesAnalysis {
@@ -116,7 +131,7 @@ export function analyzeSeries(files: SeriesFileInput[], options: AnalyzeSeriesOp
   const groups = matchSeriesCouples(files.map((f, i) => ({ scanRateVPerS: f.scanRateVPerS, couples: cycles[i]?.couples ?? [] })), o.matchToleranceV);
   const couples = groups.map((g, index) => {
     const points = g.map((ref) => toPoint(ref, files[ref.fileIndex] as SeriesFileInput, cycles[ref.fileIndex] as CycleAnalysis));
-    return buildCouple(index, points, (g[0] as CoupleRef).couple.forwardDirection, o);
+    return buildCouple(index, points, (g[0] as CoupleRef).couple, o);
   });
   warnings.push(...seriesWarnings(files, couples, o));
   return { couples, warnings };

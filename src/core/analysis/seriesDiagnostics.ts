@@ -12,7 +12,7 @@ import type { SeriesCouple } from './seriesTypes';
 const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
 const sci = (v: number, d = 3) => v.toExponential(d - 1);
 
-function describeDrift(c: SeriesCouple): string[] {
+function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const out: string[] = [];
   const halves = c.points.flatMap((p) => (p.eHalfV === null ? [] : [p.eHalfV]));
   if (halves.length >= 2) out.push(`E½ spans ${mv(Math.max(...halves) - Math.min(...halves))} over the series`);
@@ -23,7 +23,7 @@ function describeDrift(c: SeriesCouple): string[] {
   return out;
 }
 
-function describeLines(c: SeriesCouple): string[] {
+function describeLines(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const out: string[] = [];
   const f = c.forwardFit;
   if (f) {
@@ -39,7 +39,7 @@ function describeLines(c: SeriesCouple): string[] {
   return out;
 }
 
-function describeResults(c: SeriesCouple, o: ResolvedSeriesOptions): string[] {
+function describeResults(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {
   const out: string[] = [];
   if (c.diffusion) {
     const a = c.diffusion.alphaUsed === null ? '' : `, α = ${c.diffusion.alphaUsed.toFixed(2)} ${c.diffusion.alphaSource ?? ''}`;
@@ -62,6 +62,6 @@ function describeResults(c: SeriesCouple, o: ResolvedSeriesOptions): string[] {
   return out;
 }
 
-export function describeSeriesCouple(c: SeriesCouple, o: ResolvedSeriesOptions): string[] {
+export function describeSeriesCouple(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {
   return [`${c.regime}, ${c.kineticClass}`, ...describeDrift(c), ...describeLines(c), ...describeResults(c, o)];
 }

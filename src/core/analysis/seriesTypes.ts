@@ -6,7 +6,7 @@
 import type { FitLineResult } from '../regression';
 import type { LogLogReading, PeakPotentialVsLogScanRateResult, RandlesSevcikForm } from '../series';
 import type { NicholsonPsiResult } from '../kinetics';
-import type { CoupleResult, PeakDirection, VerdictCategory, VoltammogramAnalysis } from './types';
+import type { CoupleResult, PeakDirection, Verdict, VerdictCategory, VoltammogramAnalysis } from './types';
 
 /** One voltammogram of a series, already analysed. */
 export interface SeriesFileInput {
@@ -113,6 +113,8 @@ export interface SeriesCouple {
   surface: SeriesSurface | null;
   /** Plain statements of what the series shows, each with its number. */
   diagnostics: string[];
+  /** Verdict of the slowest-scan-rate voltammogram, refined with the series evidence. */
+  verdict: Verdict;
 }
 
 export type SeriesWarningCode =
