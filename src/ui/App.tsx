@@ -1,7 +1,40 @@
+/** Arranges the regions: intake (left), trace and readout (centre), method and cell (right). */
+import { useHalfwave } from '../state/react';
+import { CellPanel } from './components/CellPanel';
+import { IntakePanel } from './components/IntakePanel';
+import { MethodPanel } from './components/MethodPanel';
+import { NoticeBar } from './components/NoticeBar';
+import { ReadoutPanel } from './components/ReadoutPanel';
+import { SafetyDrawer } from './components/SafetyDrawer';
+import { TopBar } from './components/TopBar';
+import { TracePanel } from './components/TracePanel';
+
 export function App() {
+  const mainView = useHalfwave((s) => s.mainView);
   return (
-    <main>
-      <h1>Halfwave</h1>
-    </main>
+    <div className="app">
+      <TopBar />
+      <NoticeBar />
+      <main className="workspace">
+        <aside className="column left" aria-label="Files">
+          <IntakePanel />
+        </aside>
+        <div className="column centre">
+          {mainView === 'trace' ? (
+            <>
+              <TracePanel />
+              <ReadoutPanel />
+            </>
+          ) : (
+            <p className="empty">The scan-rate series view is being connected.</p>
+          )}
+        </div>
+        <aside className="column right" aria-label="Analysis settings">
+          <MethodPanel />
+          <CellPanel />
+        </aside>
+      </main>
+      <SafetyDrawer />
+    </div>
   );
 }

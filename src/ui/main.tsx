@@ -1,5 +1,15 @@
+import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { startApp } from '../state/app';
 import { App } from './App';
+import './styles.css';
 
 const root = document.getElementById('root');
-if (root) createRoot(root).render(<App />);
+if (root) {
+  createRoot(root).render(
+    <StrictMode>
+      <App />
+    </StrictMode>,
+  );
+  void startApp();
+}

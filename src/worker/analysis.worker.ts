@@ -8,7 +8,7 @@ import { runHandler } from './handlers';
 import { collectTransferables, type PageToWorker, type WorkerRequest, type WorkerToPage } from './protocol';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
-const cancelled = new Set<number>();
+const running = new Map<number, AbortController>();
 
 function post(msg: WorkerToPage, transfer: Transferable[] = []): void {
   scope.postMessage(msg, transfer);
@@ -16,24 +16,27 @@ function post(msg: WorkerToPage, transfer: Transferable[] = []): void {
 
 async function serve(req: WorkerRequest): Promise<void> {
   const { requestId } = req;
+  const ctrl = new AbortController();
+  running.set(requestId, ctrl);
   try {
     const output = await runHandler(req.type, req.input as never, {
+      signal: ctrl.signal,
       progress(fraction, stage) {
-        if (cancelled.has(requestId)) throw new CancelledError();
+        if (ctrl.signal.aborted) throw new CancelledError();
         post({ type: 'progress', requestId, fraction, stage });
       },
     });
-    if (cancelled.has(requestId)) throw new CancelledError();
+    if (ctrl.signal.aborted) throw new CancelledError();
     post({ type: 'result', requestId, request: req.type, output } as WorkerToPage, collectTransferables(output));
   } catch (err) {
     post(describeError(requestId, err));
   } finally {
-    cancelled.delete(requestId);
+    running.delete(requestId);
   }
 }
 
 scope.onmessage = (event: MessageEvent<PageToWorker>) => {
   const msg = event.data;
-  if (msg.type === 'cancel') cancelled.add(msg.requestId);
+  if (msg.type === 'cancel') running.get(msg.requestId)?.abort();
   else void serve(msg);
 };

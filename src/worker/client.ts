@@ -9,7 +9,7 @@
  */
 import { CancelledError, describeError, reviveError } from './errors';
 import { runHandler } from './handlers';
-import { collectTransferables, type PageToWorker, type RequestInput, type RequestOutput, type RequestType, type WorkerToPage } from './protocol';
+import { inputTransferables, type PageToWorker, type RequestInput, type RequestOutput, type RequestType, type WorkerRequest, type WorkerToPage } from './protocol';
 
 export interface RequestOptions {
   /** Called with fraction done (0…1) and a short stage text. */
@@ -67,8 +67,8 @@ export function createWorkerClient(worker: WorkerLike): AnalysisClient {
           worker.postMessage({ type: 'cancel', requestId }, []);
           reject(new CancelledError());
         }, { once: true });
-        const msg = { type, requestId, input } as PageToWorker;
-        worker.postMessage(msg, collectTransferables(input));
+        const msg = { type, requestId, input } as WorkerRequest;
+        worker.postMessage(msg, inputTransferables(msg));
       });
     },
     dispose() {
@@ -86,12 +86,14 @@ export function createInThreadClient(): AnalysisClient {
     transport: 'in-thread',
     async request(type, input, options = {}) {
       const requestId = nextId++;
+      const signal = options.signal ?? new AbortController().signal;
       const check = () => {
-        if (options.signal?.aborted) throw new CancelledError();
+        if (signal.aborted) throw new CancelledError();
       };
       try {
         check();
         const output = await runHandler(type, input, {
+          signal,
           progress(fraction, stage) {
             check();
             options.onProgress?.(fraction, stage);

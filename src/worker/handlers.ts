@@ -3,21 +3,60 @@
  * inside the worker (analysis.worker.ts) and in-thread (client.ts), so Vitest exercises exactly the
  * code the browser runs.
  */
+import { analyzeVoltammogram } from '../core/analysis/analyzeVoltammogram';
+import { iRCorrect } from '../core/conventions/iRCorrect';
 import { findSweepSegments } from '../core/sweeps/findSweepSegments';
+import { importVoltammogramAsync } from '../io';
+import { CancelledError } from './errors';
 import type { RequestInput, RequestOutput, RequestType } from './protocol';
 
 export interface HandlerContext {
   /** Report progress, 0…1, with a short stage text. Throws CancelledError once cancelled. */
   progress(fraction: number, stage: string): void;
+  /** Aborted when the caller cancels; long handlers stop at their next turn. */
+  signal: AbortSignal;
 }
 
 type Handler<K extends RequestType> = (input: RequestInput<K>, ctx: HandlerContext) => RequestOutput<K> | Promise<RequestOutput<K>>;
 
 export const handlers: { [K in RequestType]: Handler<K> } = {
   segments: (input) => findSweepSegments(input.potentialV, input.options),
+  import: async (input, ctx) => {
+    // Hash first: the importer may keep views on the buffer, and the digest needs it intact.
+    const sha256 = await sha256Hex(input.data);
+    ctx.progress(0, 'reading');
+    // The async form yields between chunks, so a cancel message is seen mid-file.
+    const result = await importVoltammogramAsync(input.fileName, input.data, {
+      overrides: input.overrides,
+      signal: ctx.signal,
+      onProgress: (fraction: number) => ctx.progress(fraction, 'reading rows'),
+    });
+    return { ...result, sha256 };
+  },
+  analyze: (input) => {
+    const v = input.voltammogram;
+    const correctedPotentialV = input.resistanceOhm > 0 ? iRCorrect(v.potentialV, v.currentA, input.resistanceOhm) : null;
+    const analysis = analyzeVoltammogram(correctedPotentialV ? { ...v, potentialV: correctedPotentialV } : v, input.options);
+    return { analysis, correctedPotentialV };
+  },
 };
 
-export function runHandler<K extends RequestType>(type: K, input: RequestInput<K>, ctx: HandlerContext): Promise<RequestOutput<K>> {
+/** Hex SHA-256 of the bytes (FIPS 180-4), or null where Web Crypto is unavailable. */
+export async function sha256Hex(data: ArrayBuffer): Promise<string | null> {
+  const subtle = globalThis.crypto?.subtle as SubtleCrypto | undefined;
+  if (!subtle) return null;
+  const digest = new Uint8Array(await subtle.digest('SHA-256', data));
+  return Array.from(digest, (b) => b.toString(16).padStart(2, '0')).join('');
+}
+
+/** Runs the handler; any failure after the signal was aborted becomes CancelledError. */
+export async function runHandler<K extends RequestType>(type: K, input: RequestInput<K>, ctx: HandlerContext): Promise<RequestOutput<K>> {
   const handler = handlers[type] as Handler<K>;
-  return Promise.resolve().then(() => handler(input, ctx));
+  try {
+    ctx.signal.throwIfAborted();
+    return await handler(input, ctx);
+  } catch (err) {
+    if (ctx.signal.aborted) throw new CancelledError();
+    throw err;
+  }
 }

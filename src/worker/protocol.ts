@@ -6,13 +6,30 @@
  * `RequestMap` is the single table of what the worker can do: the request `type`, its input and
  * its output. The unions below are derived from it, so adding a line there types both ends.
  */
+import type { AnalyzeVoltammogramOptions, VoltammogramAnalysis } from '../core/analysis/types';
 import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSweepSegments';
+import type { Voltammogram } from '../core/types';
+import type { ImportOverrides, ImportResult } from '../io/types';
 
 export interface RequestMap {
   /** Split a potential trace into sweeps and cycles (core/sweeps/findSweepSegments). */
   segments: {
     input: { potentialV: Float64Array; options: Omit<FindSweepSegmentsOptions, 'cycleColumn'> };
     output: SweepSplit;
+  };
+  /** Read one export file (io/importVoltammogram); `data` is transferred. */
+  import: {
+    input: { fileName: string; data: ArrayBuffer; overrides: ImportOverrides };
+    output: ImportResult & { sha256: string | null };
+  };
+  /**
+   * Peaks, baselines, couples and verdicts of one voltammogram (core/analysis), after iR
+   * correction of the potential when `resistanceOhm` > 0 (the corrected potential comes back so
+   * the plot shows what was analysed).
+   */
+  analyze: {
+    input: { voltammogram: Voltammogram; options: AnalyzeVoltammogramOptions; resistanceOhm: number };
+    output: { analysis: VoltammogramAnalysis; correctedPotentialV: Float64Array | null };
   };
 }
 
@@ -60,6 +77,15 @@ export interface ErrorMessage {
 }
 
 export type WorkerToPage = ProgressMessage | ResultMessage | ErrorMessage;
+
+/**
+ * Buffers of a request that may be moved to the worker. Only the import's file bytes: they were
+ * read for this request alone. Voltammogram columns stay with the page (the plot shows them), so
+ * they are copied.
+ */
+export function inputTransferables(request: WorkerRequest): ArrayBuffer[] {
+  return request.type === 'import' ? [request.input.data] : [];
+}
 
 /**
  * All distinct ArrayBuffers under `value` (typed-array views, nested objects and arrays), so the

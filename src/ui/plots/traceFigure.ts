@@ -5,7 +5,7 @@
  * a potential axis increasing to the right; the polarographic choice plots −i (cathodic up) on
  * a potential axis increasing to the left. Pure: no DOM, no Plotly import.
  */
-import type { Data, Layout, Shape } from 'plotly.js';
+import type { Data, Layout, Shape } from 'plotly.js-dist-min';
 import type { PeakResult, PeakWindow, VoltammogramAnalysis } from '../../core/analysis/types';
 import type { CycleRange } from '../../core/types';
 import { chooseCurrentScale, maxAbs, type UnitScale } from './currentScale';

@@ -1,0 +1,72 @@
+/**
+ * Analysis settings and results. Every settings change is recorded for undo and re-runs the
+ * analysis in the worker; a newer run for a file cancels the older one, so results always match
+ * the settings on screen.
+ */
+import type { Voltammogram } from '../core/types';
+import { CancelledError } from '../worker/errors';
+import { defaultSettings, emptyFileSettings, toAnalyzeOptions } from './settings';
+import { toUserError, type AnalysisSlice, type HistorySnapshot, type SliceCreator } from './types';
+
+const HISTORY_LIMIT = 100;
+
+export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps) => {
+  const running = new Map<string, AbortController>();
+
+  function record(): void {
+    const { settings, fileSettings } = get();
+    const snapshot: HistorySnapshot = { settings, fileSettings };
+    set((s) => ({ past: [...s.past, snapshot].slice(-HISTORY_LIMIT), future: [] }));
+  }
+
+  return {
+    settings: defaultSettings,
+    fileSettings: {},
+    results: {},
+
+    async analyzeFile(id) {
+      const m = get().files[id]?.measurement;
+      if (!m) return;
+      running.get(id)?.abort();
+      const ctrl = new AbortController();
+      running.set(id, ctrl);
+      const prev = get().results[id];
+      set((s) => ({ results: { ...s.results, [id]: { status: 'running', analysis: prev?.analysis ?? null, correctedPotentialV: prev?.correctedPotentialV ?? null, error: null } } }));
+      const voltammogram: Voltammogram = {
+        potentialV: m.potentialV, currentA: m.currentA, timeS: m.timeS, segments: m.segments, cycles: m.cycles,
+        scanRateVPerS: m.scanRateVPerS, scanRateSource: m.scanRateSource,
+      };
+      const { settings } = get();
+      const options = toAnalyzeOptions(settings, get().fileSettings[id] ?? emptyFileSettings);
+      const resistanceOhm = settings.chemistry.resistanceOhm;
+      try {
+        const out = await deps.client.request('analyze', { voltammogram, options, resistanceOhm }, { signal: ctrl.signal });
+        set((s) => ({ results: { ...s.results, [id]: { status: 'ready', ...out, error: null } } }));
+      } catch (err) {
+        if (err instanceof CancelledError) return;
+        set((s) => ({ results: { ...s.results, [id]: { status: 'error', analysis: null, correctedPotentialV: null, error: toUserError(err) } } }));
+      } finally {
+        if (running.get(id) === ctrl) running.delete(id);
+      }
+    },
+
+    async analyzeAll() {
+      const { selectedFileId, fileOrder } = get();
+      // The file on screen first, so the numbers the user is looking at update soonest.
+      const order = selectedFileId ? [selectedFileId, ...fileOrder.filter((f) => f !== selectedFileId)] : fileOrder;
+      await Promise.all(order.map((id) => get().analyzeFile(id)));
+    },
+
+    updateSettings(change) {
+      record();
+      set((s) => ({ settings: change(s.settings) }));
+      return get().analyzeAll();
+    },
+
+    updateFileSettings(id, change) {
+      record();
+      set((s) => ({ fileSettings: { ...s.fileSettings, [id]: change(s.fileSettings[id] ?? emptyFileSettings) } }));
+      return get().analyzeFile(id);
+    },
+  };
+};

@@ -1,0 +1,105 @@
+/**
+ * Loaded files: queue many imports through the worker one at a time (so 100+ files and
+ * million-row files never block the page), track per-file progress and errors, re-import with
+ * overrides, and group files into scan-rate series. A failed import never removes anything that
+ * was already loaded: a failed re-import keeps the previous measurement beside its error.
+ */
+import type { ImportOverrides } from '../io/types';
+import { emptyFileSettings } from './settings';
+import { toUserError, type FileEntry, type FileInput, type FilesSlice, type SliceCreator } from './types';
+
+export const DEFAULT_GROUP = 'series 1';
+
+export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
+  let nextId = 1;
+  let queue: Promise<void> = Promise.resolve();
+
+  const patch = (id: string, change: Partial<FileEntry>) =>
+    set((s) => {
+      const entry = s.files[id];
+      return entry ? { files: { ...s.files, [id]: { ...entry, ...change } } } : {};
+    });
+
+  async function importOne(id: string, overrides: ImportOverrides): Promise<void> {
+    const entry = get().files[id];
+    if (!entry) return;
+    patch(id, { status: 'importing', progress: 0 });
+    try {
+      const data = await entry.source.arrayBuffer();
+      const out = await deps.client.request('import', { fileName: entry.fileName, data, overrides }, {
+        onProgress: (fraction) => patch(id, { progress: fraction }),
+      });
+      patch(id, { status: 'ready', progress: 1, error: null, measurement: out.measurement, warnings: out.warnings, sha256: out.sha256, overrides });
+      applyRemembered(id);
+      if (get().selectedFileId === null) get().selectFile(id);
+      await get().analyzeFile(id);
+    } catch (err) {
+      const kept = get().files[id]?.measurement ?? null;
+      patch(id, { status: kept ? 'ready' : 'error', progress: 0, error: toUserError(err) });
+    }
+  }
+
+  /** A file whose SHA-256 matches a remembered session record gets its group and settings back. */
+  function applyRemembered(id: string): void {
+    const entry = get().files[id];
+    const record = entry?.sha256 ? get().remembered.find((r) => r.sha256 === entry.sha256) : undefined;
+    if (!entry || !record) return;
+    set((s) => ({
+      remembered: s.remembered.filter((r) => r !== record),
+      files: { ...s.files, [id]: { ...entry, group: record.group } },
+      fileSettings: { ...s.fileSettings, [id]: { ...emptyFileSettings, ...(record.analysis as object) } },
+    }));
+    if (Object.keys(record.overrides).length > 0 && Object.keys(entry.overrides).length === 0) {
+      queue = queue.then(() => importOne(id, record.overrides));
+    }
+  }
+
+  function enqueue(id: string, overrides: ImportOverrides): Promise<void> {
+    queue = queue.then(() => importOne(id, overrides));
+    return queue;
+  }
+
+  return {
+    files: {},
+    fileOrder: [],
+    importBatch: null,
+    remembered: [],
+
+    async addFiles(inputs: FileInput[], group = DEFAULT_GROUP) {
+      const entries: FileEntry[] = inputs.map((input) => {
+        const source = typeof input.data === 'string' ? new Blob([input.data], { type: 'text/plain' }) : input.data;
+        return {
+          id: `file-${nextId++}`, fileName: input.name, sizeBytes: source.size, source, sha256: null, group,
+          status: 'queued', progress: 0, error: null, measurement: null, warnings: [], overrides: {},
+        };
+      });
+      set((s) => ({
+        files: { ...s.files, ...Object.fromEntries(entries.map((e) => [e.id, e])) },
+        fileOrder: [...s.fileOrder, ...entries.map((e) => e.id)],
+        importBatch: { done: s.importBatch?.done ?? 0, total: (s.importBatch?.total ?? 0) + entries.length },
+      }));
+      await Promise.all(entries.map((e) => enqueue(e.id, {}).then(() => set((s) => ({
+        importBatch: s.importBatch ? { ...s.importBatch, done: s.importBatch.done + 1 } : null,
+      })))));
+      set((s) => (s.importBatch && s.importBatch.done >= s.importBatch.total ? { importBatch: null } : {}));
+      return entries.map((e) => e.id);
+    },
+
+    reimportFile(id, overrides) {
+      return enqueue(id, overrides);
+    },
+
+    removeFile(id) {
+      set((s) => {
+        const { [id]: _gone, ...files } = s.files;
+        const { [id]: _r, ...results } = s.results;
+        const order = s.fileOrder.filter((f) => f !== id);
+        return { files, results, fileOrder: order, selectedFileId: s.selectedFileId === id ? (order[0] ?? null) : s.selectedFileId };
+      });
+    },
+
+    setFileGroup(id, group) {
+      patch(id, { group: group.trim() || DEFAULT_GROUP });
+    },
+  };
+};

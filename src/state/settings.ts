@@ -1,0 +1,134 @@
+/**
+ * Analysis settings the user edits, in the units of the forms (mM, °C, Ω), and their mapping to
+ * the core's options (mol/cm³, K). Global settings apply to every file; peak windows and baseline
+ * choices are per file because potential ranges differ between files.
+ */
+import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
+import type { AnalyzeVoltammogramOptions, BaselineMethod, BaselineSpec, PeakWindow, SmoothingSetting } from '../core/analysis/types';
+
+export interface ChemistrySettings {
+  /** Electrons per molecule, n. */
+  electronCount: number;
+  /** Electrode area (cm²). */
+  areaCm2: number;
+  /** Bulk concentration of the analyte (mM = µmol/cm³ × 1000). */
+  concentrationMM: number;
+  /** Cell temperature (°C). */
+  temperatureC: number;
+  /** Transfer coefficient α, for the Laviron analysis. */
+  alpha: number;
+  /** Uncompensated resistance Ru (Ω) for iR correction; 0 = none. */
+  resistanceOhm: number;
+}
+
+export interface ReferenceSettings {
+  /** Reference electrode the files were recorded against (id of the electrode table). */
+  fileReference: ReferenceId;
+  /** Scale on which potentials are shown and exported. */
+  displayReference: ReferenceId;
+  /** Electrolyte pH, for the RHE scale. */
+  pH: number;
+  /** Measured E½ of ferrocene on the file's scale (V), for the internal-standard scale. */
+  ferroceneHalfWaveV: number | null;
+}
+
+export interface AnalysisSettings {
+  smoothing: SmoothingSetting | 'off';
+  forwardBaseline: Exclude<BaselineMethod, 'nicholson' | 'two-point'>;
+  returnBaseline: Exclude<BaselineMethod, 'two-point'>;
+  /** Peaks must stand this many noise standard deviations above their surroundings. */
+  minSignalToNoise: number;
+  chemistry: ChemistrySettings;
+  reference: ReferenceSettings;
+}
+
+export interface FileAnalysisSettings {
+  peakWindows: PeakWindow[];
+  baselines: BaselineSpec[];
+}
+
+export const defaultSettings: AnalysisSettings = {
+  smoothing: { window: 5, order: 2 },
+  forwardBaseline: 'linear',
+  returnBaseline: 'nicholson',
+  minSignalToNoise: 8,
+  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: 0.5, resistanceOhm: 0 },
+  reference: { fileReference: 'AgCl-3M', displayReference: 'AgCl-3M', pH: 7, ferroceneHalfWaveV: null },
+};
+
+const REFERENCE_IDS: readonly ReferenceId[] = REFERENCE_ELECTRODES.map((r) => r.id);
+
+export const emptyFileSettings: FileAnalysisSettings = { peakWindows: [], baselines: [] };
+
+/** 25 °C → 298.15 K (BIPM, SI Brochure 9th ed. 2019: T/K = t/°C + 273.15). */
+export function celsiusToKelvin(temperatureC: number): number {
+  return temperatureC + 273.15;
+}
+
+/** 1 mM = 1 mmol/L = 1e-6 mol/cm³. */
+export function millimolarToMolPerCm3(concentrationMM: number): number {
+  return concentrationMM * 1e-6;
+}
+
+export function toAnalyzeOptions(settings: AnalysisSettings, file: FileAnalysisSettings): AnalyzeVoltammogramOptions {
+  return {
+    temperatureK: celsiusToKelvin(settings.chemistry.temperatureC),
+    electronCount: settings.chemistry.electronCount,
+    smoothing: settings.smoothing,
+    currentConvention: 'iupac',
+    peakWindows: file.peakWindows,
+    baselines: file.baselines,
+    forwardBaseline: settings.forwardBaseline,
+    returnBaseline: settings.returnBaseline,
+    minSignalToNoise: settings.minSignalToNoise,
+  };
+}
+
+/**
+ * Lays stored JSON over the defaults, keeping only fields of the right type, so an old or
+ * hand-edited session cannot put a text where a number belongs.
+ */
+export function mergeSettings(base: AnalysisSettings, stored: unknown): AnalysisSettings {
+  const s = asRecord(stored);
+  const chem = asRecord(s.chemistry);
+  const ref = asRecord(s.reference);
+  return {
+    smoothing: mergeSmoothing(base.smoothing, s.smoothing),
+    forwardBaseline: pick(s.forwardBaseline, ['linear', 'polynomial'] as const, base.forwardBaseline),
+    returnBaseline: pick(s.returnBaseline, ['linear', 'polynomial', 'nicholson'] as const, base.returnBaseline),
+    minSignalToNoise: num(s.minSignalToNoise, base.minSignalToNoise),
+    chemistry: {
+      electronCount: num(chem.electronCount, base.chemistry.electronCount),
+      areaCm2: num(chem.areaCm2, base.chemistry.areaCm2),
+      concentrationMM: num(chem.concentrationMM, base.chemistry.concentrationMM),
+      temperatureC: num(chem.temperatureC, base.chemistry.temperatureC),
+      alpha: num(chem.alpha, base.chemistry.alpha),
+      resistanceOhm: num(chem.resistanceOhm, base.chemistry.resistanceOhm),
+    },
+    reference: {
+      fileReference: pick(ref.fileReference, REFERENCE_IDS, base.reference.fileReference),
+      displayReference: pick(ref.displayReference, REFERENCE_IDS, base.reference.displayReference),
+      pH: num(ref.pH, base.reference.pH),
+      ferroceneHalfWaveV: ref.ferroceneHalfWaveV === null ? null : num(ref.ferroceneHalfWaveV, base.reference.ferroceneHalfWaveV),
+    },
+  };
+}
+
+function asRecord(v: unknown): Record<string, unknown> {
+  return typeof v === 'object' && v !== null && !Array.isArray(v) ? (v as Record<string, unknown>) : {};
+}
+
+function num<T extends number | null>(v: unknown, fallback: T): number | T {
+  return typeof v === 'number' && Number.isFinite(v) ? v : fallback;
+}
+
+function pick<T extends string>(v: unknown, allowed: readonly T[], fallback: T): T {
+  return allowed.includes(v as T) ? (v as T) : fallback;
+}
+
+function mergeSmoothing(base: SmoothingSetting | 'off', v: unknown): SmoothingSetting | 'off' {
+  if (v === 'off') return 'off';
+  const r = asRecord(v);
+  if (typeof r.window === 'number' && typeof r.order === 'number') return { window: r.window, order: r.order };
+  return base;
+}

@@ -1,0 +1,19 @@
+/**
+ * The one Halfwave store, built from slices. `createHalfwaveStore` takes its dependencies (the
+ * analysis client and the autosave storage) so tests run it without React, in-thread.
+ */
+import { createStore } from 'zustand/vanilla';
+import { createAnalysisSlice } from './analysisSlice';
+import { createFilesSlice } from './filesSlice';
+import { createHistorySlice } from './historySlice';
+import type { HalfwaveState, HalfwaveStore, StoreDeps } from './types';
+import { createViewSlice } from './viewSlice';
+
+export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
+  return createStore<HalfwaveState>()((set, get) => ({
+    ...createFilesSlice(set, get, deps),
+    ...createAnalysisSlice(set, get, deps),
+    ...createViewSlice(set, get, deps),
+    ...createHistorySlice(set, get, deps),
+  }));
+}

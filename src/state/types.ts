@@ -1,0 +1,133 @@
+/**
+ * Shape of the one store: files, analysis, series, view and history slices. Actions sit beside
+ * the state they change; each slice file builds its part.
+ */
+import type { StoreApi } from 'zustand/vanilla';
+import type { VoltammogramAnalysis } from '../core/analysis/types';
+import type { ImportWarning } from '../io/errors';
+import type { SessionFileRecord } from '../io/session';
+import type { ImportOverrides, Measurement } from '../io/types';
+import type { AnalysisClient } from '../worker/client';
+import type { AnalysisSettings, FileAnalysisSettings } from './settings';
+import type { StorageAdapter } from './storage';
+
+/** An error as the UI shows it: what, where, and its stable code. */
+export interface UserError {
+  code: string;
+  message: string;
+  line?: number;
+  column?: number;
+}
+
+export type FileStatus = 'queued' | 'importing' | 'ready' | 'error';
+
+export interface FileEntry {
+  id: string;
+  fileName: string;
+  sizeBytes: number;
+  /** The original bytes, kept (as a Blob: cheap) so the file can be re-imported with overrides. */
+  source: Blob;
+  sha256: string | null;
+  group: string;
+  status: FileStatus;
+  /** Import progress, 0…1. */
+  progress: number;
+  /** Last import failure; with status 'ready' it means a re-import failed and the previous result is kept. */
+  error: UserError | null;
+  measurement: Measurement | null;
+  warnings: ImportWarning[];
+  overrides: ImportOverrides;
+}
+
+export interface FileInput {
+  name: string;
+  data: Blob | string;
+}
+
+export interface FilesSlice {
+  files: Record<string, FileEntry>;
+  fileOrder: string[];
+  /** Files of the running import batch: how many are done out of how many. */
+  importBatch: { done: number; total: number } | null;
+  /** Session records waiting for their file (matched by SHA-256 when it is loaded). */
+  remembered: SessionFileRecord[];
+  addFiles(inputs: FileInput[], group?: string): Promise<string[]>;
+  reimportFile(id: string, overrides: ImportOverrides): Promise<void>;
+  removeFile(id: string): void;
+  setFileGroup(id: string, group: string): void;
+}
+
+export interface AnalysisEntry {
+  status: 'running' | 'ready' | 'error';
+  analysis: VoltammogramAnalysis | null;
+  /** Potential after iR correction (V), when Ru > 0; the plot and tables use it. */
+  correctedPotentialV: Float64Array | null;
+  error: UserError | null;
+}
+
+export interface AnalysisSlice {
+  settings: AnalysisSettings;
+  fileSettings: Record<string, FileAnalysisSettings>;
+  results: Record<string, AnalysisEntry>;
+  analyzeFile(id: string): Promise<void>;
+  analyzeAll(): Promise<void>;
+  updateSettings(change: (s: AnalysisSettings) => AnalysisSettings): Promise<void>;
+  updateFileSettings(id: string, change: (s: FileAnalysisSettings) => FileAnalysisSettings): Promise<void>;
+}
+
+export type CurrentDisplay = 'iupac' | 'polarographic';
+
+export interface ViewSlice {
+  selectedFileId: string | null;
+  /** 1-based cycle shown, or 0 for all cycles. */
+  selectedCycle: number;
+  convention: CurrentDisplay;
+  showSmoothed: boolean;
+  showBaselines: boolean;
+  /** Drag on the plot zooms, or marks a peak window of `windowDirection`. */
+  dragMode: 'zoom' | 'window';
+  windowDirection: 'anodic' | 'cathodic';
+  mainView: 'trace' | 'series';
+  safetyOpen: boolean;
+  notice: string | null;
+  setView(patch: Partial<Omit<ViewSlice, 'setView' | 'selectFile'>>): void;
+  selectFile(id: string | null): void;
+}
+
+export interface HistorySnapshot {
+  settings: AnalysisSettings;
+  fileSettings: Record<string, FileAnalysisSettings>;
+}
+
+export interface HistorySlice {
+  past: HistorySnapshot[];
+  future: HistorySnapshot[];
+  undo(): Promise<void>;
+  redo(): Promise<void>;
+}
+
+export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice;
+export type HalfwaveStore = StoreApi<HalfwaveState>;
+
+export interface StoreDeps {
+  client: AnalysisClient;
+  /** Where autosave writes; null disables autosave. */
+  storage: StorageAdapter | null;
+}
+
+export type SliceCreator<T> = (set: HalfwaveStore['setState'], get: () => HalfwaveState, deps: StoreDeps) => T;
+
+export function toUserError(err: unknown): UserError {
+  const e = (typeof err === 'object' && err !== null ? err : {}) as Partial<UserError> & { message?: unknown };
+  const out: UserError = {
+    code: typeof e.code === 'string' ? e.code : 'INTERNAL',
+    message: typeof e.message === 'string' ? e.message : String(err),
+  };
+  if (typeof e.line === 'number') out.line = e.line;
+  if (typeof e.column === 'number') out.column = e.column;
+  return out;
+}
+
+/** Importer types the UI shows (re-exported: the UI reaches io only through state). */
+export type { CurrentUnit, Guess, ImportDetection, ImportOverrides, Measurement, PotentialUnit } from '../io/types';
+export type { AnalysisSettings, FileAnalysisSettings } from './settings';

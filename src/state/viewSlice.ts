@@ -1,0 +1,21 @@
+/** What is on screen: selected file and cycle, current sign convention, overlays, drag mode. */
+import type { SliceCreator, ViewSlice } from './types';
+
+export const createViewSlice: SliceCreator<ViewSlice> = (set) => ({
+  selectedFileId: null,
+  selectedCycle: 1,
+  convention: 'iupac',
+  showSmoothed: false,
+  showBaselines: true,
+  dragMode: 'zoom',
+  windowDirection: 'anodic',
+  mainView: 'trace',
+  safetyOpen: false,
+  notice: null,
+  setView(patch) {
+    set(patch);
+  },
+  selectFile(id) {
+    set({ selectedFileId: id, selectedCycle: 1 });
+  },
+});

@@ -1,0 +1,52 @@
+/** What the importer guessed for the selected file, why, and whether the user forced it. */
+import type { Guess } from '../../state/types';
+import { useSelection } from './useSelection';
+import { OverrideForm } from './OverrideForm';
+
+const DELIMITERS: Record<string, string> = { ',': 'comma', ';': 'semicolon', '\t': 'tab', whitespace: 'spaces' };
+
+function show(value: unknown): string {
+  if (value === null || value === undefined) return 'none';
+  if (typeof value === 'string' && value in DELIMITERS) return DELIMITERS[value] as string;
+  return String(value);
+}
+
+export function ImportDecisions() {
+  const { file } = useSelection();
+  const d = file?.measurement?.detection;
+  if (!file || !d) return <p className="empty">No file selected.</p>;
+  const guesses: [string, Guess<unknown>][] = [
+    ['Text encoding', d.encoding], ['Line ending', d.lineEnding], ['Delimiter', d.delimiter], ['Decimal mark', d.decimalMark],
+    ['Header line', d.headerLine], ['Potential unit', d.potentialUnit], ['Current unit', d.currentUnit],
+    ...(d.timeUnit ? [['Time unit', d.timeUnit] as [string, Guess<unknown>]] : []),
+    ['Current sign convention', d.currentConvention],
+    ['Scan rate (V/s)', d.scanRate],
+  ];
+  return (
+    <div className="decisions" data-testid="import-decisions">
+      <p className="summary">
+        Table on lines {d.tableLines.first}–{d.tableLines.last}: {d.rowsRead.toLocaleString('en')} rows read, {d.rowsSkipped} skipped, {d.cycleCount} cycle{d.cycleCount === 1 ? '' : 's'}.
+        {file.measurement?.referenceElectrode ? ` Reference named in the file: ${file.measurement.referenceElectrode}.` : ''}
+      </p>
+      <table className="data compact">
+        <thead><tr><th scope="col">Decision</th><th scope="col">Value</th><th scope="col">Set by</th><th scope="col">Why</th></tr></thead>
+        <tbody>
+          {guesses.map(([label, g]) => (
+            <tr key={label} data-testid={`guess-${label.toLowerCase().replace(/[^a-z]+/g, '-')}`}>
+              <th scope="row">{label}</th><td>{show(g.value)}</td><td>{g.overridden ? 'you' : 'detected'}</td><td className="wrap">{g.explanation}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <table className="data compact" data-testid="column-roles">
+        <thead><tr><th scope="col">#</th><th scope="col">Column</th><th scope="col">Role</th><th scope="col">Unit</th><th scope="col">Why</th></tr></thead>
+        <tbody>
+          {d.columns.map((c) => (
+            <tr key={c.index}><td>{c.index + 1}</td><td>{c.name}</td><td>{c.role}</td><td>{c.unit || '—'}</td><td className="wrap">{c.explanation}</td></tr>
+          ))}
+        </tbody>
+      </table>
+      <OverrideForm key={file.id} file={file} />
+    </div>
+  );
+}

@@ -1,0 +1,41 @@
+/** "Method": smoothing, baselines and peak-finding threshold, applied to every file. */
+import type { AnalysisSettings } from '../../state/types';
+import { halfwaveActions, useHalfwave } from '../../state/react';
+import { NumberField } from './NumberField';
+import { SelectField } from './SelectField';
+import { WindowsEditor } from './WindowsEditor';
+
+export function MethodPanel() {
+  const s = useHalfwave((st) => st.settings);
+  const update = (change: (x: AnalysisSettings) => AnalysisSettings) => void halfwaveActions().updateSettings(change);
+  const smoothing = s.smoothing === 'off' ? null : s.smoothing;
+  return (
+    <section className="panel method" aria-labelledby="method-title">
+      <h2 id="method-title">Method</h2>
+      <div className="field-grid">
+        <label className="check">
+          <input type="checkbox" checked={smoothing !== null} data-testid="smoothing-on"
+            onChange={(e) => update((x) => ({ ...x, smoothing: e.target.checked ? { window: 5, order: 2 } : 'off' }))} />
+          Savitzky–Golay smoothing
+        </label>
+        {smoothing ? (
+          <>
+            <NumberField label="Window" unit="points, odd" value={smoothing.window} min={3} max={501} testId="smoothing-window"
+              onCommit={(v) => v !== null && update((x) => ({ ...x, smoothing: { window: v % 2 === 1 ? v : v + 1, order: Math.min(smoothing.order, v - 1) } }))} />
+            <NumberField label="Polynomial order" value={smoothing.order} min={0} max={Math.min(10, smoothing.window - 1)} testId="smoothing-order"
+              onCommit={(v) => v !== null && update((x) => ({ ...x, smoothing: { window: smoothing.window, order: Math.round(v) } }))} />
+          </>
+        ) : null}
+        <SelectField label="Forward-peak baseline" value={s.forwardBaseline} testId="forward-baseline"
+          options={[{ value: 'linear', label: 'straight line before the peak' }, { value: 'polynomial', label: 'polynomial before the peak' }]}
+          onChange={(v) => update((x) => ({ ...x, forwardBaseline: v }))} />
+        <SelectField label="Return-peak baseline" value={s.returnBaseline} testId="return-baseline"
+          options={[{ value: 'nicholson', label: 'decay of the forward sweep (Nicholson)' }, { value: 'linear', label: 'straight line before the peak' }, { value: 'polynomial', label: 'polynomial before the peak' }]}
+          onChange={(v) => update((x) => ({ ...x, returnBaseline: v }))} />
+        <NumberField label="Peak must exceed noise by" unit="× σ" value={s.minSignalToNoise} min={1} max={1000} testId="min-snr"
+          onCommit={(v) => v !== null && update((x) => ({ ...x, minSignalToNoise: v }))} />
+      </div>
+      <WindowsEditor />
+    </section>
+  );
+}

@@ -1,0 +1,37 @@
+/** Every peak found, with how it was found, its baseline and how sure the finder is. */
+import { chooseCurrentScale } from '../plots/currentScale';
+import { fixed, sig } from '../format';
+import { useSelection } from './useSelection';
+
+export function PeaksTable() {
+  const { result, cycle, scale } = useSelection();
+  const cycles = (result?.analysis?.cycles ?? []).filter((c) => cycle === 0 || c.index === cycle);
+  const rows = cycles.flatMap((c) => c.peaks.map((p, k) => ({ cycle: c.index, p, k })));
+  if (rows.length === 0) return <p className="empty">No peaks.</p>;
+  const cur = chooseCurrentScale(Math.max(...rows.map(({ p }) => p.heightA)));
+  return (
+    <table className="data" data-testid="peaks-table">
+      <thead>
+        <tr>
+          <th scope="col">Cycle</th><th scope="col">Kind</th><th scope="col">Ep / V vs {scale.name}</th><th scope="col">ip / {cur.unit}</th>
+          <th scope="col">Ep/2 / V</th><th scope="col">FWHM / mV</th><th scope="col">S/N</th><th scope="col">Confidence</th><th scope="col">Baseline</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map(({ cycle: c, p, k }) => (
+          <tr key={`${c}-${k}`}>
+            <td>{c}</td>
+            <td className={p.direction}>{p.direction}{p.origin === 'window' ? ' (window)' : ''}</td>
+            <td>{fixed(p.potentialV + scale.offsetV, 4)}</td>
+            <td>{sig(p.heightA, 4, cur.factor)}</td>
+            <td>{fixed(p.halfPeakPotentialV === null ? null : p.halfPeakPotentialV + scale.offsetV, 4)}</td>
+            <td>{fixed(p.fwhmV, 1, 1000)}</td>
+            <td>{fixed(p.signalToNoise, 0)}</td>
+            <td>{p.confidence}</td>
+            <td className="wrap">{p.baseline.description}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

@@ -1,0 +1,51 @@
+/** "Trace": the selected voltammogram with peaks, baselines and (optionally) the smoothed curve. */
+import { useMemo } from 'react';
+import { displayScale } from '../../state/display';
+import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
+import { buildTraceFigure } from '../plots/traceFigure';
+import { PlotlyChart } from './PlotlyChart';
+import { TraceToolbar } from './TraceToolbar';
+
+export function TracePanel() {
+  const id = useHalfwave((s) => s.selectedFileId);
+  const file = useHalfwave((s) => (id ? s.files[id] : undefined));
+  const result = useHalfwave((s) => (id ? s.results[id] : undefined));
+  const windows = useHalfwave((s) => (id ? s.fileSettings[id]?.peakWindows : undefined));
+  const settings = useHalfwave((s) => s.settings);
+  const view = useHalfwaveShallow((s) => ({ cycle: s.selectedCycle, convention: s.convention, showSmoothed: s.showSmoothed, showBaselines: s.showBaselines, dragMode: s.dragMode, dir: s.windowDirection }));
+  const scale = useMemo(() => displayScale(settings), [settings]);
+  const m = file?.measurement ?? null;
+  const corrected = result?.correctedPotentialV ?? null;
+
+  const figure = useMemo(() => {
+    if (!m) return null;
+    return buildTraceFigure({
+      fileName: m.fileName, potentialV: corrected ?? m.potentialV, currentA: m.currentA, cycles: m.cycles,
+      analysis: result?.analysis ?? null, cycle: view.cycle, convention: view.convention,
+      showSmoothed: view.showSmoothed, showBaselines: view.showBaselines, dragMode: view.dragMode,
+      peakWindows: windows ?? [], potentialOffsetV: scale.offsetV,
+      potentialAxisTitle: `E${corrected ? ' (iR-corrected)' : ''} vs ${scale.name} / V`,
+    });
+  }, [m, corrected, result?.analysis, view, windows, scale]);
+
+  const onRangeSelect = (a: number, b: number) => {
+    if (!id || view.dragMode !== 'window') return;
+    const fromV = Math.min(a, b) - scale.offsetV;
+    const toV = Math.max(a, b) - scale.offsetV;
+    void halfwaveActions().updateFileSettings(id, (fs) => ({ ...fs, peakWindows: [...fs.peakWindows, { direction: view.dir, fromV, toV }] }));
+  };
+
+  return (
+    <section className="panel trace" aria-labelledby="trace-title">
+      <h2 id="trace-title" className="visually-hidden">Trace</h2>
+      <TraceToolbar cycles={m?.cycles.map((c) => c.index) ?? []} status={result?.status ?? null} />
+      {figure ? (
+        <PlotlyChart data={figure.data} layout={figure.layout} testId="trace-plot" label={`Voltammogram of ${m?.fileName ?? ''}`} onRangeSelect={onRangeSelect} />
+      ) : (
+        <p className="empty plot-empty">Load or select a file to see its voltammogram.</p>
+      )}
+      {result?.error ? <p className="error-text" role="alert">Analysis failed: {result.error.message}</p> : null}
+      {!scale.ok ? <p className="warn-text">{scale.basis}</p> : null}
+    </section>
+  );
+}

@@ -1,0 +1,41 @@
+/** Controls above the trace: cycle, overlays, and what a drag on the plot does. */
+import { halfwaveActions, useHalfwave } from '../../state/react';
+
+export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'running' | 'ready' | 'error' | null }) {
+  const cycle = useHalfwave((s) => s.selectedCycle);
+  const showSmoothed = useHalfwave((s) => s.showSmoothed);
+  const showBaselines = useHalfwave((s) => s.showBaselines);
+  const dragMode = useHalfwave((s) => s.dragMode);
+  const dir = useHalfwave((s) => s.windowDirection);
+  const set = halfwaveActions().setView;
+  const drag = dragMode === 'zoom' ? 'zoom' : dir;
+  return (
+    <div className="toolbar" role="toolbar" aria-label="Trace display">
+      <label>
+        Cycle{' '}
+        <select value={cycle} data-testid="cycle-select" onChange={(e) => set({ selectedCycle: Number(e.target.value) })}>
+          {cycles.map((c) => <option key={c} value={c}>{c}</option>)}
+          {cycles.length > 1 ? <option value={0}>all</option> : null}
+        </select>
+      </label>
+      <label><input type="checkbox" checked={showSmoothed} data-testid="show-smoothed" onChange={(e) => set({ showSmoothed: e.target.checked })} /> smoothed</label>
+      <label><input type="checkbox" checked={showBaselines} onChange={(e) => set({ showBaselines: e.target.checked })} /> baselines</label>
+      <label>
+        Drag to{' '}
+        <select
+          value={drag}
+          data-testid="drag-mode"
+          onChange={(e) => {
+            const v = e.target.value;
+            set(v === 'zoom' ? { dragMode: 'zoom' } : { dragMode: 'window', windowDirection: v === 'cathodic' ? 'cathodic' : 'anodic' });
+          }}
+        >
+          <option value="zoom">zoom</option>
+          <option value="anodic">mark an anodic peak window</option>
+          <option value="cathodic">mark a cathodic peak window</option>
+        </select>
+      </label>
+      <span className="status" role="status" data-testid="analysis-status">{status === 'running' ? 'analysing…' : status === 'ready' ? 'analysis up to date' : ''}</span>
+    </div>
+  );
+}

@@ -1,0 +1,21 @@
+/** The selected file with its analysis and the display scale, shared by the readout tables. */
+import { useMemo } from 'react';
+import { displayScale, type DisplayScale } from '../../state/display';
+import { useHalfwave } from '../../state/react';
+import type { AnalysisEntry, FileEntry } from '../../state/types';
+
+export interface Selection {
+  file: FileEntry | undefined;
+  result: AnalysisEntry | undefined;
+  cycle: number;
+  scale: DisplayScale;
+}
+
+export function useSelection(): Selection {
+  const file = useHalfwave((s) => (s.selectedFileId ? s.files[s.selectedFileId] : undefined));
+  const result = useHalfwave((s) => (s.selectedFileId ? s.results[s.selectedFileId] : undefined));
+  const cycle = useHalfwave((s) => s.selectedCycle);
+  const settings = useHalfwave((s) => s.settings);
+  const scale = useMemo(() => displayScale(settings), [settings]);
+  return { file, result, cycle, scale };
+}
