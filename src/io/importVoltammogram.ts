@@ -12,7 +12,7 @@ import { chooseScanRate } from './chooseScanRate';
 import { checkText, decodeBytes, rejectKnownBinaryText } from './decodeText';
 import type { DecodedText } from './decodeText';
 import { detectHeader } from './detectHeader';
-import { detectLayout } from './detectFormat';
+import { describeDelimiter, detectLayout } from './detectFormat';
 import { describeLines, ImportError, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
 import { measurementId } from './measurementId';
@@ -102,6 +102,7 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): 
     step = tableSteps.next();
   }
   const table = step.value;
+  layout.delimiter.explanation = describeDelimiter(layout.delimiter.value, layout.delimiter.overridden, table.rowCount, table.rowCount + table.skippedCount + table.repeatedHeaderCount, layout.fieldCount, layout.firstDataLine + 1);
   tableWarnings(fileName, table, warnings);
   const roles = assignColumns(fileName, header.names, table.columns, o);
   warnings.push(...roles.warnings);

@@ -55,7 +55,11 @@ export function splitFields(line: string, delimiter: Delimiter): string[] {
     const t = line.trim();
     return t === '' ? [] : t.split(/\s+/);
   }
-  if (line.indexOf('"') === -1) return line.split(delimiter).map((f) => f.trim());
+  if (line.indexOf('"') === -1) {
+    const parts = line.split(delimiter);
+    for (let i = 0; i < parts.length; i++) parts[i] = (parts[i] as string).trim();
+    return parts;
+  }
   return splitQuoted(line, delimiter).map((f) => f.trim());
 }
 
