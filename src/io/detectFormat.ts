@@ -128,7 +128,8 @@ function detectIn(fileName: string, lines: string[], overrides: ImportOverrides)
   const body = lines.slice(startAt);
   let best: Scored | null = null;
   for (const delimiter of overrides.delimiter ? [overrides.delimiter] : DELIMITERS) {
-    const decimals: DecimalMark[] = overrides.decimalMark ? [overrides.decimalMark] : delimiter === ',' ? ['.'] : ['.', ','];
+    // With ',' as delimiter a decimal comma is possible only inside quoted fields ("0,12","3,4").
+    const decimals: DecimalMark[] = overrides.decimalMark ? [overrides.decimalMark] : ['.', ','];
     for (const decimal of decimals) {
       const s = scoreCandidate(body, { delimiter, decimal });
       if (s && better(s, best)) best = s;
@@ -156,7 +157,8 @@ export function describeDelimiter(d: Delimiter, forced: boolean, good: number, t
 
 function decimalExplanation(c: Candidate, rows: string[], forced: boolean): string {
   if (forced) return `decimal mark '${c.decimal}' (set by the user)`;
-  if (c.delimiter === ',') return "decimal mark '.' — the delimiter is ',' so commas cannot be decimal marks";
+  if (c.delimiter === ',' && c.decimal === ',') return "decimal mark ',' — the numbers are quoted (\"0,12\") so the commas inside them are decimal marks";
+  if (c.delimiter === ',') return "decimal mark '.' — the delimiter is ',' so unquoted commas cannot be decimal marks";
   const withComma = rows.filter((r) => /\d,\d/.test(r)).length;
   const withPoint = rows.filter((r) => /\d\.\d/.test(r)).length;
   if (c.decimal === ',') return `decimal mark ',' — ${withComma} of ${rows.length} data lines hold numbers like 1,5`;

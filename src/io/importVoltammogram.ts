@@ -66,7 +66,8 @@ function guard<T>(fileName: string, step: () => T): T {
 function decode(fileName: string, data: ImportInput, o: ImportOverrides): DecodedText {
   if (typeof data === 'string') {
     rejectKnownBinaryText(fileName, data);
-    return { text: checkText(fileName, data), encoding: { value: 'utf-8', overridden: false, explanation: 'text handed over already decoded (encoding chosen by the caller)' } };
+    const ignored = o.encoding ? `; the encoding override ${o.encoding} cannot apply to text that is already decoded — pass the bytes instead` : '';
+    return { text: checkText(fileName, data), encoding: { value: 'utf-8', overridden: false, explanation: `text handed over already decoded (encoding chosen by the caller)${ignored}` } };
   }
   const bytes = data instanceof Uint8Array ? data : new Uint8Array(data);
   const d = decodeBytes(fileName, bytes, o.encoding);
