@@ -51,3 +51,28 @@ describe('simulateCv, surface mechanism', () => {
     expect(Math.abs(Math.log10(ip(1) / ip(0.01)) / 2 - 1)).toBeLessThan(0.002);
   });
 });
+
+describe('simulateCv, repeated cycles', () => {
+  it('a Nernstian film returns to its starting state: cycle 2 repeats cycle 1 (1e-9 relative)', () => {
+    const r = simulateCv({ ...base, surfaceRatePerS: Infinity, cycles: 2 });
+    const perCycle = (r.currentA.length - 1) / 2;
+    let worst = 0;
+    for (let i = 1; i <= perCycle; i++) worst = Math.max(worst, Math.abs((r.currentA[i] as number) - (r.currentA[i + perCycle] as number)));
+    expect(worst / Math.abs(cathodicFirstPeaks(r).cathodic.currentA)).toBeLessThan(1e-9);
+  });
+
+  // Common practice, no source: in solution the second forward peak is lower, because the
+  // diffusion layer left by the first cycle is not replenished.
+  it('a dissolved couple gives a lower forward peak on cycle 2 than on cycle 1', () => {
+    const r = simulateCv({ k0CmPerS: Infinity, startV: 0.4, switchV: -0.4, cycles: 2 });
+    const perCycle = (r.currentA.length - 1) / 2;
+    let first = 0;
+    let second = 0;
+    for (let i = 0; i <= perCycle / 2; i++) {
+      first = Math.min(first, r.currentA[i] as number);
+      second = Math.min(second, r.currentA[i + perCycle] as number);
+    }
+    expect(-second).toBeLessThan(-first * 0.95);
+    expect(-second).toBeGreaterThan(-first * 0.5);
+  });
+});

@@ -108,7 +108,7 @@ export interface CvSimulationResult {
   timeS: Float64Array;
   /** Applied potential, V. */
   potentialV: Float64Array;
-  /** Total current (faradaic + charging), A, anodic positive. */
+  /** Total current (faradaic + charging), A, anodic positive; point 0 repeats the first time step's value. */
   currentA: Float64Array;
   /** Potential across the interface, E_applied − i·R_u, V. */
   interfacialPotentialV: Float64Array;

@@ -27,6 +27,7 @@ describe('simulateCv input checks', () => {
   it('rejects bad numerical options', () => {
     expect(() => simulateCv({}, { substepsPerPoint: 1.5 })).toThrow(/substepsPerPoint/);
     expect(() => simulateCv({}, { gridExpansion: 0.9 })).toThrow(/gridExpansion/);
+    expect(() => simulateCv({ stepV: 1e-5 }, { gridExpansion: 1.001, firstSpacingFraction: 0.001 })).toThrow(/node-steps/);
   });
 
   it('defaults give 601 + 600 points and a finite current everywhere', () => {
