@@ -236,6 +236,8 @@ export interface AnalyzeVoltammogramOptions {
   minSignalToNoise?: number;
   /** Minimum absolute prominence (A). @default 0 */
   minProminenceA?: number;
+  /** Minimum prominence as a fraction of the voltammogram's current range. @default 0.01 */
+  minRelativeProminence?: number;
   /** Largest Epa − Epc allowed within a couple (V). @default 0.6 */
   maxDeltaEpV?: number;
   /** Scan rate (V/s) when the voltammogram carries none and has no time column. */
@@ -258,6 +260,8 @@ export interface ResolvedAnalyzeOptions {
   returnBaseline: Exclude<BaselineMethod, 'two-point'>;
   minSignalToNoise: number;
   minProminenceA: number;
+  /** Added after the first release of these types, hence optional; always set by analyzeVoltammogram. */
+  minRelativeProminence?: number;
   maxDeltaEpV: number;
   scanRateVPerS: number | null;
   cycles: number[];
@@ -269,6 +273,8 @@ export interface VoltammogramAnalysis {
   smoothed: { currentA: Float64Array; derivativeAPerV: Float64Array } | null;
   /** Robust estimate of the current noise standard deviation (A). */
   noiseA: number;
+  /** Prominence a feature needed to count as a peak (A). Always set by analyzeVoltammogram. */
+  peakThresholdA?: number;
   options: ResolvedAnalyzeOptions;
   warnings: AnalysisWarning[];
 }

@@ -1,0 +1,120 @@
+/**
+ * One cycle of the per-voltammogram analysis: locate peaks on each sweep, pair them, draw the
+ * baselines (forward sweeps first, so that the return peak can extend the forward decay), measure
+ * the peaks and build the couples. Called by analyzeVoltammogram.ts; methods and sources are in
+ * the files it calls.
+ */
+import type { BaselineMethod, BaselineSpec, CoupleResult, CycleAnalysis, AnalysisWarning, PeakResult, PeakWindow, ResolvedAnalyzeOptions } from './types';
+import type { CycleRange } from '../types';
+import type { SweepSignals } from '../peaks/sweepSignals';
+import { locatePeaksInSweep, type PeakCandidate } from '../peaks/locatePeaksInSweep';
+import { measurePeak } from '../peaks/measurePeak';
+import { baselineForPeak } from '../baseline/baselineForPeak';
+import type { BaselineCurve } from './types';
+import { pairPeaksIntoCouples, type PeakPair } from '../couples/pairPeaksIntoCouples';
+import { buildCouple } from '../couples/buildCouple';
+import { thermalVoltageV } from '../constants';
+
+const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
+
+export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAnalyzeOptions, thresholdA: number): CycleAnalysis {
+  const warnings: AnalysisWarning[] = [];
+  const warn = (code: AnalysisWarning['code'], message: string) => warnings.push({ code, message, cycle: cycle.index });
+  const segIdx = sig.segments.flatMap((s, k) => (s.cycle === cycle.index ? [k] : []));
+  const candidates = segIdx.flatMap((k) => locateOnSweep(sig, k, cycle.index, o, thresholdA, warn));
+  const anodic = candidates.filter((c) => c.direction === 'anodic');
+  const cathodic = candidates.filter((c) => c.direction === 'cathodic');
+  const pairs = pairPeaksIntoCouples(anodic.map((c) => c.potentialV), cathodic.map((c) => c.potentialV), { maxDeltaEpV: o.maxDeltaEpV });
+  const partner = new Map<PeakCandidate, PeakCandidate>();
+  for (const p of pairs) {
+    if (p.anodic === null || p.cathodic === null) continue;
+    partner.set(anodic[p.anodic]!, cathodic[p.cathodic]!);
+    partner.set(cathodic[p.cathodic]!, anodic[p.anodic]!);
+  }
+  const firstSeg = segIdx[0];
+  const ordered = [...candidates].sort((a, b) => a.index - b.index);
+  const curves = new Map<PeakCandidate, BaselineCurve>();
+  const measured = new Map<PeakCandidate, PeakResult>();
+  for (const cand of ordered) {
+    const onFirst = cand.segmentIndex === firstSeg;
+    const spec = findSpec(o.baselines, cand, cycle.index);
+    const method = chooseMethod(spec, onFirst, o, cand, ordered, partner);
+    const fwd = partner.get(cand);
+    const forward = method === 'nicholson' && fwd && curves.has(fwd) ? { peak: fwd, baseline: curves.get(fwd)! } : null;
+    const marginPoints = footMarginPoints(sig, cand, o);
+    const outcome = baselineForPeak(sig, cand, { method, spec, regionStart: regionStartFor(sig, cand, ordered), marginPoints, forward });
+    if (outcome.fallbackReason) warn('BASELINE_FALLBACK', `${cand.direction} peak at ${mv(cand.potentialV)}: Nicholson baseline not possible (${outcome.fallbackReason}); linear pre-peak line used`);
+    curves.set(cand, outcome.curve);
+    const peak = measurePeak(sig, cand, outcome.curve, onFirst);
+    if (peak) measured.set(cand, peak);
+    else warn('LOW_SIGNAL', `${cand.direction} feature at ${mv(cand.potentialV)} does not rise above its baseline; dropped`);
+  }
+  const peaks = ordered.flatMap((c) => (measured.has(c) ? [measured.get(c)!] : []));
+  const couples = buildCouples(sig, peaks, pairs, anodic, cathodic, measured, firstSeg, o, warn);
+  if (peaks.length === 0) warn('NO_PEAKS', `no peak rose ${thresholdA.toExponential(3)} A above its surroundings in cycle ${cycle.index}`);
+  return { index: cycle.index, peaks, couples, warnings };
+}
+
+function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedAnalyzeOptions, thresholdA: number, warn: (c: AnalysisWarning['code'], m: string) => void): PeakCandidate[] {
+  const seg = sig.segments[k]!;
+  const direction = seg.direction === 'positive' ? 'anodic' : 'cathodic';
+  if (seg.end - seg.start < 7) {
+    warn('SHORT_SEGMENT', `sweep ${k} has only ${seg.end - seg.start} points; not searched for peaks`);
+    return [];
+  }
+  const forDirection = o.peakWindows.filter((w) => w.direction === direction);
+  const windows: PeakWindow[] | null = forDirection.length ? forDirection.filter((w) => w.cycle === undefined || w.cycle === cycle) : null;
+  const found = locatePeaksInSweep(sig, k, { windows, minProminenceA: thresholdA, locatingWindow: o.locatingSmoothing.window });
+  if (windows && windows.length > 0 && found.length < windows.length) warn('WINDOW_EMPTY', `a ${direction} peak window on sweep ${k} holds fewer than 3 points`);
+  return found;
+}
+
+function findSpec(specs: BaselineSpec[], c: PeakCandidate, cycle: number): BaselineSpec | null {
+  return specs.find((s) => s.direction === c.direction && (s.cycle === undefined || s.cycle === cycle) && c.potentialV >= Math.min(s.fromV, s.toV) && c.potentialV <= Math.max(s.fromV, s.toV)) ?? null;
+}
+
+/** Nicholson's extended decay applies to the return peak next to the switch whose partner is the forward sweep's last peak. */
+function chooseMethod(spec: BaselineSpec | null, onFirst: boolean, o: ResolvedAnalyzeOptions, c: PeakCandidate, all: PeakCandidate[], partner: Map<PeakCandidate, PeakCandidate>): BaselineMethod {
+  if (spec) return spec.method;
+  if (onFirst) return o.forwardBaseline;
+  if (o.returnBaseline !== 'nicholson') return o.returnBaseline;
+  const fwd = partner.get(c);
+  const firstOnSweep = all.find((p) => p.segmentIndex === c.segmentIndex) === c;
+  const lastOnForward = fwd ? all.filter((p) => p.segmentIndex === fwd.segmentIndex).at(-1) === fwd : false;
+  return fwd && fwd.segmentIndex === c.segmentIndex - 1 && firstOnSweep && lastOnForward ? 'nicholson' : 'linear';
+}
+
+/** 2·RT/nF of potential, in points of the peak's sweep. */
+function footMarginPoints(sig: SweepSignals, c: PeakCandidate, o: ResolvedAnalyzeOptions): number {
+  const seg = sig.segments[c.segmentIndex]!;
+  const stepV = Math.abs(sig.potentialV[seg.end - 1]! - sig.potentialV[seg.start]!) / Math.max(1, seg.end - seg.start - 1);
+  return stepV > 0 ? Math.round((2 * thermalVoltageV(o.temperatureK)) / o.electronCount / stepV) : 0;
+}
+
+/** The pre-peak window starts 2 % into the sweep, or halfway from the previous peak on the sweep. */
+function regionStartFor(sig: SweepSignals, c: PeakCandidate, all: PeakCandidate[]): number {
+  const seg = sig.segments[c.segmentIndex]!;
+  const prev = all.filter((p) => p.segmentIndex === c.segmentIndex && p.index < c.index).at(-1);
+  if (prev) return prev.index + Math.floor((c.index - prev.index) / 2);
+  return seg.start + Math.max(1, Math.round(0.02 * (seg.end - seg.start)));
+}
+
+function buildCouples(
+  sig: SweepSignals, peaks: PeakResult[], pairs: PeakPair[], anodic: PeakCandidate[], cathodic: PeakCandidate[],
+  measured: Map<PeakCandidate, PeakResult>, firstSeg: number | undefined, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void,
+): CoupleResult[] {
+  const forwardDirection = firstSeg !== undefined && sig.segments[firstSeg]!.direction === 'negative' ? 'cathodic' : 'anodic';
+  const indexOf = (c: PeakCandidate | undefined) => {
+    const p = c ? measured.get(c) : undefined;
+    return p ? peaks.indexOf(p) : null;
+  };
+  const out: CoupleResult[] = [];
+  for (const pair of pairs) {
+    const mapped = { anodic: indexOf(pair.anodic === null ? undefined : anodic[pair.anodic]), cathodic: indexOf(pair.cathodic === null ? undefined : cathodic[pair.cathodic]) };
+    if (mapped.anodic === null && mapped.cathodic === null) continue;
+    const couple = buildCouple(sig, peaks, mapped, forwardDirection, o);
+    if (mapped.anodic === null || mapped.cathodic === null) warn('UNPAIRED_PEAK', `${mapped.anodic === null ? 'cathodic' : 'anodic'} peak at ${mv((couple.epaV ?? couple.epcV)!)} has no partner`);
+    out.push({ index: out.length, ...couple });
+  }
+  return out;
+}

@@ -1,0 +1,125 @@
+/**
+ * Per-voltammogram analysis: for each cycle, locate anodic and cathodic peaks on every sweep, draw
+ * the baseline under each, measure it, pair peaks into couples and give each couple a verdict.
+ * The raw columns are never modified; the shown smoothing and dI/dE come back as separate arrays.
+ * Methods and sources live in the files this one calls: ../peaks (location, measurement),
+ *   ../baseline (pre-peak line, polynomial, two-point, Nicholson's extended decay), ../couples
+ *   (pairing, metrics, verdict), ../smoothing (Savitzky–Golay).
+ * In: a Voltammogram with its sweep segments and cycles (see ../types.ts); currents in the
+ *   convention named by `currentConvention`. Out: VoltammogramAnalysis (IUPAC signs, positive
+ *   peak heights; see ./types.ts), including the option values used.
+ * Defaults (common practice, no source): light 5-point quadratic smoothing for display; peaks
+ *   located on a 15/n mV quadratic smoothing; a peak needs a prominence of max(8σ, 1 % of the
+ *   current range, minProminenceA); forward peaks on a linear pre-peak baseline, the return peak
+ *   next to the switch on Nicholson's extended forward decay.
+ */
+import { AnalysisError, assertFiniteInRange, assertSameLength } from '../errors';
+import { toIupacCurrent } from '../conventions/currentConvention';
+import type { Voltammogram } from '../types';
+import { prepareSweepSignals, windowForSpan, type SweepSignals } from '../peaks/sweepSignals';
+import { analyzeCycle } from './analyzeCycle';
+import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, VoltammogramAnalysis } from './types';
+
+export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogramOptions = {}): VoltammogramAnalysis {
+  checkVoltammogram(v);
+  const draft = resolveOptions(v, options);
+  const first = v.segments[0]!;
+  const locatingSmoothing = { window: windowForSpan(v.potentialV, first, 0.015 / draft.electronCount), order: 2 };
+  const resolved: ResolvedAnalyzeOptions = { ...draft, locatingSmoothing };
+  const sig = prepareSweepSignals(
+    { potentialV: v.potentialV, currentA: toIupacCurrent(v.currentA, resolved.currentConvention), timeS: v.timeS, scanRateVPerS: resolved.scanRateVPerS, segments: v.segments },
+    resolved.smoothing,
+    (seg) => ({ window: windowForSpan(v.potentialV, seg, 0.015 / resolved.electronCount), order: 2 }),
+  );
+  const warnings: AnalysisWarning[] = [];
+  if (!sig.timeKnown) warnings.push({ code: 'NO_TIME_AXIS', message: 'no time column and no scan rate: peak charges are not computed' });
+  const range = currentRange(sig);
+  if (!(range > 10 * sig.noiseA) || range === 0) {
+    warnings.push({ code: 'FLAT_TRACE', message: `current range ${range.toExponential(3)} A is within 10× the noise (${sig.noiseA.toExponential(3)} A): no peaks can be told from noise` });
+  }
+  const peakThresholdA = Math.max(resolved.minSignalToNoise * sig.noiseA, resolved.minProminenceA, (resolved.minRelativeProminence ?? 0.01) * range, Number.MIN_VALUE);
+  const cycles = v.cycles
+    .filter((c) => resolved.cycles.includes(c.index))
+    .map((c) => analyzeCycle(sig, c, resolved, peakThresholdA));
+  return {
+    cycles,
+    smoothed: resolved.smoothing === 'off' ? null : { currentA: sig.shownA, derivativeAPerV: sig.shownSlopeAPerV },
+    noiseA: sig.noiseA,
+    peakThresholdA,
+    options: resolved,
+    warnings,
+  };
+}
+
+function currentRange(sig: SweepSignals): number {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const i of sig.locatingA) {
+    if (i < lo) lo = i;
+    if (i > hi) hi = i;
+  }
+  return hi - lo;
+}
+
+function checkVoltammogram(v: Voltammogram): void {
+  assertSameLength({ potentialV: v.potentialV, currentA: v.currentA, ...(v.timeS ? { timeS: v.timeS } : {}) }, 5);
+  for (const [name, col] of [['potentialV', v.potentialV], ['currentA', v.currentA], ['timeS', v.timeS]] as const) {
+    if (!col) continue;
+    for (let k = 0; k < col.length; k++) {
+      if (!Number.isFinite(col[k]!)) throw new AnalysisError('NON_FINITE', `${name} is not finite at point ${k} (value ${col[k]})`);
+    }
+  }
+  if (v.segments.length === 0) throw new AnalysisError('EMPTY_INPUT', 'the voltammogram has no sweep segments (split it with findSweepSegments first)');
+  for (const [k, seg] of v.segments.entries()) {
+    if (!(seg.start >= 0 && seg.end <= v.potentialV.length && seg.end - seg.start >= 2)) {
+      throw new AnalysisError('OUT_OF_RANGE', `segment ${k} [${seg.start}, ${seg.end}) is not a valid range of ${v.potentialV.length} points`);
+    }
+  }
+}
+
+function resolveOptions(v: Voltammogram, o: AnalyzeVoltammogramOptions): Omit<ResolvedAnalyzeOptions, 'locatingSmoothing'> {
+  const temperatureK = o.temperatureK ?? 298.15;
+  assertFiniteInRange('temperatureK', temperatureK, 1, 2000);
+  const electronCount = o.electronCount ?? 1;
+  if (!Number.isInteger(electronCount) || electronCount < 1 || electronCount > 12) {
+    throw new AnalysisError('BAD_OPTION', `electronCount must be an integer in [1, 12], got ${electronCount}`);
+  }
+  const smoothing = o.smoothing ?? { window: 5, order: 2 };
+  if (smoothing !== 'off') {
+    const { window, order } = smoothing;
+    if (!Number.isInteger(window) || window < 3 || window % 2 === 0 || !Number.isInteger(order) || order < 0 || order >= window) {
+      throw new AnalysisError('BAD_OPTION', `smoothing needs an odd window ≥ 3 and an order in [0, window − 1], got window ${window}, order ${order}`);
+    }
+  }
+  const minSignalToNoise = o.minSignalToNoise ?? 8;
+  assertFiniteInRange('minSignalToNoise', minSignalToNoise, 0);
+  const minProminenceA = o.minProminenceA ?? 0;
+  assertFiniteInRange('minProminenceA', minProminenceA, 0);
+  const minRelativeProminence = o.minRelativeProminence ?? 0.01;
+  assertFiniteInRange('minRelativeProminence', minRelativeProminence, 0, 1);
+  const maxDeltaEpV = o.maxDeltaEpV ?? 0.6;
+  assertFiniteInRange('maxDeltaEpV', maxDeltaEpV, 1e-6);
+  const scanRateVPerS = o.scanRateVPerS ?? v.scanRateVPerS;
+  if (scanRateVPerS !== null) assertFiniteInRange('scanRateVPerS', scanRateVPerS, 1e-9);
+  for (const w of o.peakWindows ?? []) {
+    if (!Number.isFinite(w.fromV) || !Number.isFinite(w.toV) || w.fromV === w.toV) {
+      throw new AnalysisError('BAD_OPTION', `peak window ${w.direction} [${w.fromV}, ${w.toV}] V must have two different finite ends`);
+    }
+  }
+  return {
+    temperatureK,
+    electronCount,
+    smoothing,
+    currentConvention: o.currentConvention ?? 'iupac',
+    peakWindows: o.peakWindows ?? [],
+    baselines: o.baselines ?? [],
+    forwardBaseline: o.forwardBaseline ?? 'linear',
+    returnBaseline: o.returnBaseline ?? 'nicholson',
+    minSignalToNoise,
+    minProminenceA,
+    minRelativeProminence,
+    maxDeltaEpV,
+    scanRateVPerS,
+    cycles: o.cycles ?? v.cycles.map((c) => c.index),
+  };
+}

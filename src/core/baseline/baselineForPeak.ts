@@ -1,0 +1,153 @@
+/**
+ * Draws the baseline under one located peak with the requested method, choosing fit windows from
+ * the data when the user gave none. Falls back to the linear pre-peak line (with a warning) when the
+ * requested method lacks the points it needs, and to a flat line through the lowest point before
+ * the peak when even that is impossible.
+ * Methods: linearPrePeakBaseline.ts, polynomialBaseline.ts, twoPointBaseline.ts,
+ *   nicholsonReturnBaseline.ts; windows: findPrePeakWindow.ts.
+ */
+import { AnalysisError } from '../errors';
+import type { BaselineCurve, BaselineMethod, BaselineSpec } from '../analysis/types';
+import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
+import type { SweepSignals } from '../peaks/sweepSignals';
+import { baselineAt, sampleBaseline } from './baselineCurve';
+import { findPrePeakWindow } from './findPrePeakWindow';
+import { linearPrePeakBaseline } from './linearPrePeakBaseline';
+import { nicholsonReturnBaseline } from './nicholsonReturnBaseline';
+import { polynomialBaseline } from './polynomialBaseline';
+import { twoPointBaseline } from './twoPointBaseline';
+
+export interface BaselineRequest {
+  method: BaselineMethod;
+  spec: BaselineSpec | null;
+  /** First point (voltammogram index) the pre-peak window may use. */
+  regionStart: number;
+  /** Points trimmed from the end of an automatic pre-peak window (see findPrePeakWindow.ts). */
+  marginPoints: number;
+  /** For 'nicholson': the forward peak of the couple and its baseline. */
+  forward: { peak: PeakCandidate; baseline: BaselineCurve } | null;
+}
+
+export interface BaselineOutcome {
+  curve: BaselineCurve;
+  /** Set when the requested method could not be used. */
+  fallbackReason: string | null;
+}
+
+export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request: BaselineRequest): BaselineOutcome {
+  const { method, spec } = request;
+  if (method === 'two-point') return { curve: twoPointFromSpec(sig, peak, spec), fallbackReason: null };
+  if (method === 'nicholson') {
+    const fw = request.forward;
+    const curve = fw ? nicholsonCurve(sig, peak, fw) : null;
+    if (curve) return { curve, fallbackReason: null };
+    const linear = linearCurve(sig, peak, request, spec);
+    return { curve: linear, fallbackReason: fw ? 'too few points between the forward peak and the switch for the extended decay' : 'no forward peak on the preceding sweep to extend' };
+  }
+  if (method === 'polynomial') return { curve: polynomialCurve(sig, peak, request, spec), fallbackReason: null };
+  return { curve: linearCurve(sig, peak, request, spec), fallbackReason: null };
+}
+
+/** Local (sweep-relative) range [a, b) of the points whose potential lies between two values. */
+function rangeBetween(sig: SweepSignals, peak: PeakCandidate, v1: number, v2: number): [number, number] | null {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const lo = Math.min(v1, v2);
+  const hi = Math.max(v1, v2);
+  let a = -1;
+  let b = -1;
+  for (let k = seg.start; k < seg.end; k++) {
+    const e = sig.potentialV[k]!;
+    if (e >= lo && e <= hi) {
+      if (a < 0) a = k;
+      b = k + 1;
+    }
+  }
+  return a >= 0 ? [a, b] : null;
+}
+
+function preWindow(sig: SweepSignals, peak: PeakCandidate, regionStart: number, spec: BaselineSpec | null, marginPoints: number): [number, number] | null {
+  if (spec?.anchorsV) return rangeBetween(sig, peak, spec.anchorsV[0], spec.anchorsV[1]);
+  const seg = sig.segments[peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  const y = sig.locatingA.subarray(seg.start, seg.end).map((v) => s * v);
+  const w = findPrePeakWindow(y, regionStart - seg.start, peak.index - seg.start, { noise: sig.noiseA, marginPoints });
+  return w ? [seg.start + w.start, seg.start + w.end] : null;
+}
+
+type WindowRequest = Pick<BaselineRequest, 'regionStart' | 'marginPoints'>;
+
+function linearCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, spec: BaselineSpec | null): BaselineCurve {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const w = preWindow(sig, peak, r.regionStart, spec, r.marginPoints);
+  if (!w || w[1] - w[0] < 2) return flatCurve(sig, peak, r.regionStart);
+  const spanStart = Math.min(w[0], peak.index);
+  return linearPrePeakBaseline({ ...sig, fitStart: w[0], fitEnd: w[1], spanStart, spanEnd: seg.end }).curve;
+}
+
+function polynomialCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, spec: BaselineSpec | null): BaselineCurve {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const degree = spec?.degree ?? 2;
+  const w = preWindow(sig, peak, r.regionStart, spec, r.marginPoints);
+  if (!w || w[1] - w[0] < degree + 2) return linearCurve(sig, peak, r, spec);
+  return polynomialBaseline({ ...sig, fitRanges: [w], spanStart: Math.min(w[0], peak.index), spanEnd: seg.end }, { degree });
+}
+
+function twoPointFromSpec(sig: SweepSignals, peak: PeakCandidate, spec: BaselineSpec | null): BaselineCurve {
+  if (!spec?.anchorsV) throw new AnalysisError('BAD_OPTION', `two-point baseline for the ${peak.direction} peak near ${peak.potentialV.toFixed(3)} V needs anchorsV`);
+  const seg = sig.segments[peak.segmentIndex]!;
+  const anchors = spec.anchorsV.map((v, j) => {
+    const explicit = spec.anchorCurrentsA?.[j];
+    return { potentialV: v, currentA: explicit ?? currentAtPotential(sig, seg.start, seg.end, v) };
+  }) as [{ potentialV: number; currentA: number }, { potentialV: number; currentA: number }];
+  const span = rangeBetween(sig, peak, anchors[0].potentialV, anchors[1].potentialV);
+  if (!span || peak.index < span[0] || peak.index >= span[1]) {
+    throw new AnalysisError('BAD_OPTION', `two-point anchors ${spec.anchorsV.join(' V and ')} V must lie on the peak's sweep on either side of ${peak.potentialV.toFixed(3)} V`);
+  }
+  return twoPointBaseline({ potentialV: sig.potentialV, spanStart: span[0], spanEnd: span[1], anchors });
+}
+
+/** Shown (smoothed) current at a potential on a sweep, by linear interpolation. */
+export function currentAtPotential(sig: SweepSignals, start: number, end: number, potentialV: number): number {
+  for (let k = start; k + 1 < end; k++) {
+    const e0 = sig.potentialV[k]!;
+    const e1 = sig.potentialV[k + 1]!;
+    if ((potentialV - e0) * (potentialV - e1) <= 0 && e0 !== e1) {
+      return sig.shownA[k]! + ((sig.shownA[k + 1]! - sig.shownA[k]!) * (potentialV - e0)) / (e1 - e0);
+    }
+  }
+  throw new AnalysisError('OUT_OF_RANGE', `potential ${potentialV} V is not on the peak's sweep`);
+}
+
+function nicholsonCurve(sig: SweepSignals, peak: PeakCandidate, fw: { peak: PeakCandidate; baseline: BaselineCurve }): BaselineCurve | null {
+  const fSeg = sig.segments[fw.peak.segmentIndex]!;
+  const rSeg = sig.segments[peak.segmentIndex]!;
+  const vertex = fSeg.end - 1;
+  const ePeak = fw.peak.potentialV;
+  const half = 0.5 * Math.abs(sig.potentialV[vertex]! - ePeak);
+  let fitStart = vertex;
+  while (fitStart > fw.peak.index && Math.abs(sig.potentialV[fitStart - 1]! - ePeak) >= half) fitStart--;
+  if (vertex + 1 - fitStart < 5) return null;
+  const bg = (k: number) => baselineAt(fw.baseline, k);
+  const known = bg(fitStart) !== null && bg(vertex) !== null;
+  return nicholsonReturnBaseline({
+    ...sig,
+    forwardFitStart: fitStart,
+    forwardFitEnd: vertex + 1,
+    vertexIndex: vertex,
+    spanEnd: rSeg.end,
+    ...(known ? { forwardBackgroundA: (k: number) => bg(k) ?? 0 } : {}),
+  }).curve;
+}
+
+function flatCurve(sig: SweepSignals, peak: PeakCandidate, regionStart: number): BaselineCurve {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  let low = Math.min(regionStart, peak.index);
+  for (let k = low; k <= peak.index; k++) if (s * sig.locatingA[k]! < s * sig.locatingA[low]!) low = k;
+  const level = sig.locatingA[low]!;
+  return sampleBaseline(sig.potentialV, low, seg.end, () => level, {
+    method: 'linear',
+    anchors: [{ potentialV: sig.potentialV[low]!, currentA: level, index: low }],
+    description: 'flat line through the lowest point before the peak (too few points for a fitted line)',
+  });
+}

@@ -1,0 +1,71 @@
+/**
+ * Turns a pair of measured peaks into a couple: Epa, Epc, E½ = (Epa + Epc)/2, ΔEp = Epa − Epc,
+ * baseline-corrected ipa and ipc, the return/forward ratio, Nicholson's (1966) empirical ratio
+ * from the switching current, |Ep − Ep/2| of each peak, the charges, and the verdict.
+ * Sources: E½ as the peak midpoint, Wang, Analytical Electrochemistry, 2nd ed. (2000) eq. 2-2;
+ *   ratio measured from the extended forward decay, Nicholson, Anal. Chem. 38 (1966) 1406
+ *   (nicholsonPeakRatio.ts for the empirical form); verdict, classifyCouple.ts.
+ * In: the cycle's measured peaks, the pair (indices into them), the forward direction and the
+ *   sweep signals. Out: CoupleResult (currents as positive magnitudes, potentials in V).
+ */
+import type { CoupleResult, PeakDirection, PeakResult } from '../analysis/types';
+import { nicholsonPeakRatio } from '../baseline/nicholsonPeakRatio';
+import type { SweepSignals } from '../peaks/sweepSignals';
+import { classifyCouple } from './classifyCouple';
+import type { PeakPair } from './pairPeaksIntoCouples';
+
+export interface BuildCoupleOptions {
+  temperatureK: number;
+  electronCount: number;
+}
+
+export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPair, forwardDirection: PeakDirection, options: BuildCoupleOptions): Omit<CoupleResult, 'index'> {
+  const a = pair.anodic === null ? null : peaks[pair.anodic]!;
+  const c = pair.cathodic === null ? null : peaks[pair.cathodic]!;
+  const fwd = forwardDirection === 'anodic' ? a : c;
+  const ret = forwardDirection === 'anodic' ? c : a;
+  const both = a !== null && c !== null;
+  const consecutive = fwd !== null && ret !== null && ret.segmentIndex === fwd.segmentIndex + 1;
+  const vertex = fwd ? sig.segments[fwd.segmentIndex]!.end - 1 : -1;
+  const ratio = fwd && ret ? ret.heightA / fwd.heightA : null;
+  const verdict = classifyCouple(
+    {
+      deltaEpV: both ? a.potentialV - c.potentialV : null,
+      ratio,
+      halfPeakWidthsV: { anodic: a?.halfPeakWidthV ?? null, cathodic: c?.halfPeakWidthV ?? null },
+      fwhmV: { anodic: a?.fwhmV ?? null, cathodic: c?.fwhmV ?? null },
+      switchPastPeakV: consecutive ? Math.abs(sig.potentialV[vertex]! - fwd.potentialV) : null,
+      hasAnodic: a !== null,
+      hasCathodic: c !== null,
+    },
+    options,
+  );
+  return {
+    epaV: a?.potentialV ?? null,
+    epcV: c?.potentialV ?? null,
+    eHalfV: both ? (a.potentialV + c.potentialV) / 2 : null,
+    deltaEpV: both ? a.potentialV - c.potentialV : null,
+    ipaA: a?.heightA ?? null,
+    ipcA: c?.heightA ?? null,
+    ratio,
+    nicholsonRatio: consecutive ? empiricalRatio(sig, fwd, ret, vertex) : null,
+    forwardDirection,
+    anodicPeak: pair.anodic,
+    cathodicPeak: pair.cathodic,
+    anodicHalfPeakWidthV: a?.halfPeakWidthV ?? null,
+    cathodicHalfPeakWidthV: c?.halfPeakWidthV ?? null,
+    anodicChargeC: a?.chargeC ?? null,
+    cathodicChargeC: c?.chargeC ?? null,
+    verdict,
+  };
+}
+
+/** Nicholson (1966): return peak and switching current from zero, signed along each sweep. */
+function empiricalRatio(sig: SweepSignals, fwd: PeakResult, ret: PeakResult, vertex: number): number {
+  const sFwd = fwd.direction === 'anodic' ? 1 : -1;
+  return nicholsonPeakRatio({
+    forwardPeakA: fwd.heightA,
+    returnPeakFromZeroA: -sFwd * ret.rawCurrentA,
+    switchingCurrentFromZeroA: sFwd * sig.currentA[vertex]!,
+  });
+}
