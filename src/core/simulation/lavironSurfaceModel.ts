@@ -50,10 +50,23 @@ export class LavironSurfaceModel implements FaradaicModel {
   }
 
   currentAt(interfacialV: number): number {
-    return (this.chargePerMol * (this.oxidisedAfterStep(interfacialV) - this.oxidisedMolPerCm2)) / this.dtS;
+    return (this.chargePerMol * (this.cachedAfterStep(interfacialV) - this.oxidisedMolPerCm2)) / this.dtS;
   }
 
   finishStep(interfacialV: number): void {
-    this.oxidisedMolPerCm2 = this.oxidisedAfterStep(interfacialV);
+    this.oxidisedMolPerCm2 = this.cachedAfterStep(interfacialV);
+    this.cacheV = Number.NaN;
+  }
+
+  /** The loop asks for the same potential in currentAt and finishStep; compute it once. */
+  private cacheV = Number.NaN;
+  private cacheValue = 0;
+
+  private cachedAfterStep(interfacialV: number): number {
+    if (interfacialV !== this.cacheV) {
+      this.cacheValue = this.oxidisedAfterStep(interfacialV);
+      this.cacheV = interfacialV;
+    }
+    return this.cacheValue;
   }
 }
