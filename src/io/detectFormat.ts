@@ -42,8 +42,7 @@ interface LineClass {
   data: boolean;
 }
 
-function classify(line: string, c: Candidate): LineClass {
-  const fields = splitFields(line, c.delimiter);
+function classify(fields: string[], c: Candidate): LineClass {
   let numbers = 0;
   let numericLike = 0;
   for (const f of fields) {
@@ -64,8 +63,8 @@ interface Scored {
   numericFraction: number;
 }
 
-function scoreCandidate(lines: string[], c: Candidate): Scored | null {
-  const cls = lines.map((l) => classify(l, c));
+function scoreCandidate(lines: string[], split: string[][], c: Candidate): Scored | null {
+  const cls = split.map((f) => classify(f, c));
   const widths = new Map<number, number>();
   for (const x of cls) if (x.data) widths.set(x.fields, (widths.get(x.fields) ?? 0) + 1);
   let k = 0;
@@ -128,10 +127,11 @@ function detectIn(fileName: string, lines: string[], overrides: ImportOverrides)
   const body = lines.slice(startAt);
   let best: Scored | null = null;
   for (const delimiter of overrides.delimiter ? [overrides.delimiter] : DELIMITERS) {
+    const split = body.map((l) => splitFields(l, delimiter));
     // With ',' as delimiter a decimal comma is possible only inside quoted fields ("0,12","3,4").
     const decimals: DecimalMark[] = overrides.decimalMark ? [overrides.decimalMark] : ['.', ','];
     for (const decimal of decimals) {
-      const s = scoreCandidate(body, { delimiter, decimal });
+      const s = scoreCandidate(body, split, { delimiter, decimal });
       if (s && better(s, best)) best = s;
     }
   }

@@ -20,7 +20,7 @@ export interface HeaderReading {
 }
 
 const ROLE_WORDS: [ColumnRole, RegExp][] = [
-  ['cycle', /^(cycle|cyc|scan|sweep|loop|segment|seg)s?\.?\s*(no\.?|number|nr\.?|#|index|count|n)?$/i],
+  ['cycle', /^(cycle|cyc|scan|sweep|loop)s?\.?\s*(no\.?|number|nr\.?|#|index|count|n)?$/i],
   ['time', /^(time|t|elapsed\s*time|elapsed|timestamp|time\s*elapsed|runtime)$/i],
   ['potential', /^(potential|e|ewe|we\s*potential|we\s*\(?1\)?\s*potential|working\s*electrode\s*potential|voltage|volt|u|e\s*applied|applied\s*potential|e\s*measured|measured\s*potential|e\s*we|v|vf|e1|potential\s*applied|potential\s*measured)$/i],
   ['current', /^(current|i|iwe|i\s*we|we\s*current|working\s*electrode\s*current|amps?|i1|current\s*1|we\s*\(?1\)?\s*current|cell\s*current|current\s*measured)$/i],

@@ -27,7 +27,8 @@ describe('importVoltammogramAsync and importBatch', () => {
   });
 
   it('a batch of 120 files with one bad file: 119 results, one ImportError in its slot', async () => {
-    const files = Array.from({ length: 120 }, (_, i) => ({ name: `run${i + 1}_20mVs.txt`, data: i === 57 ? 'no numbers here' : text }));
+    const small = writeLayout(makeSyntheticCv({ cycles: 1, stepV: 0.005 }), { delimiter: ',', header: { potential: 'E (V)', current: 'I (A)' }, columns: ['potential', 'current'] });
+    const files = Array.from({ length: 120 }, (_, i) => ({ name: `run${i + 1}_20mVs.txt`, data: i === 57 ? 'no numbers here' : small }));
     let last = 0;
     const items = await importBatch(files, { onProgress: (p) => (last = p) });
     expect(items.filter((x) => x.ok).length).toBe(119);

@@ -7,6 +7,7 @@
 import { ImportError } from './errors';
 import { importVoltammogramAsync } from './importVoltammogram';
 import type { ImportInput } from './importVoltammogram';
+import { createYielder } from './timeSlice';
 import type { ImportOverrides, ImportResult } from './types';
 
 export interface BatchFile {
@@ -28,6 +29,7 @@ export interface BatchOptions {
 
 export async function importBatch(files: BatchFile[], options: BatchOptions = {}): Promise<BatchItem[]> {
   const items: BatchItem[] = [];
+  const maybeYield = createYielder();
   for (let i = 0; i < files.length; i++) {
     const f = files[i] as BatchFile;
     const overrides = typeof options.overrides === 'function' ? options.overrides(f.name) : options.overrides;
@@ -37,6 +39,7 @@ export async function importBatch(files: BatchFile[], options: BatchOptions = {}
         ...(overrides ? { overrides } : {}),
         ...(options.signal ? { signal: options.signal } : {}),
         onProgress: (p) => options.onProgress?.((i + p) / files.length),
+        maybeYield,
       });
       item = { fileName: f.name, ok: true, result };
     } catch (err) {
@@ -47,6 +50,7 @@ export async function importBatch(files: BatchFile[], options: BatchOptions = {}
     items.push(item);
     options.onItem?.(item, i);
     options.onProgress?.((i + 1) / files.length);
+    await maybeYield();
   }
   return items;
 }

@@ -107,6 +107,16 @@ describe('importVoltammogram: layout table (SI units back within 1e-9 relative)'
     });
   }
 
+  it('two whole exports joined, each with its own preamble and header: one measurement, two cycles', () => {
+    const one = makeSyntheticCv({ cycles: 1, stepV: 0.005 });
+    const part = writeLayout(one, { delimiter: ';', decimalComma: true, header: { potential: 'E (V)', current: 'I (A)' }, columns: ['potential', 'current'], preamble: ['Lab export', 'scan rate = 50 mV/s'] });
+    const r = importVoltammogram('joined.txt', `${part}\n${part}\n`);
+    expect(r.measurement.potentialV.length).toBe(2 * one.potentialV.length);
+    expectClose(r.measurement.currentA.subarray(one.currentA.length), one.currentA);
+    expect(r.measurement.cycles.length).toBe(2);
+    expect(r.warnings.map((w) => w.code)).toEqual(['REPEATED_HEADER']);
+  });
+
   it('one file per sweep: a single forward sweep is one segment in one cycle', () => {
     const one = makeSyntheticCv({ cycles: 1, stepV: 0.005 });
     const n = 161;

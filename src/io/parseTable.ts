@@ -28,7 +28,10 @@ export interface ParsedTable {
   rowCount: number;
   skippedLines: number[];
   skippedCount: number;
+  /** Seams where another export's header (and preamble) sits inside the table. */
   repeatedHeaderCount: number;
+  /** Lines in those seams. */
+  seamLines: number;
   footerLines: number;
   firstFooterLine: number | null;
   lastDataLine: number;
@@ -68,7 +71,7 @@ interface Pending {
 export function* parseTable(text: string, spec: TableSpec): Generator<number, ParsedTable> {
   const k = spec.fieldCount;
   const store = new Growable(k, Math.max(1024, Math.min(1 << 20, Math.ceil((text.length - spec.startOffset) / 16))));
-  const out: ParsedTable = { columns: [], lineOfRow: new Int32Array(0), rowCount: 0, skippedLines: [], skippedCount: 0, repeatedHeaderCount: 0, footerLines: 0, firstFooterLine: null, lastDataLine: 0 };
+  const out: ParsedTable = { columns: [], lineOfRow: new Int32Array(0), rowCount: 0, skippedLines: [], skippedCount: 0, repeatedHeaderCount: 0, seamLines: 0, footerLines: 0, firstFooterLine: null, lastDataLine: 0 };
   let pending: Pending[] = [];
   const values = new Float64Array(k);
   let pos = spec.startOffset;
@@ -106,13 +109,19 @@ export function* parseTable(text: string, spec: TableSpec): Generator<number, Pa
   return out;
 }
 
+/**
+ * Text lines between two data rows. A group that holds a copy of the header line is the seam of
+ * two joined exports (their preamble and header), not damaged data, so it is not counted as skipped.
+ */
 function flushPending(out: ParsedTable, pending: Pending[]): void {
+  if (pending.some((p) => p.header)) {
+    out.repeatedHeaderCount++;
+    out.seamLines += pending.length;
+    return;
+  }
   for (const p of pending) {
-    if (p.header) out.repeatedHeaderCount++;
-    else {
-      out.skippedCount++;
-      if (out.skippedLines.length < 20) out.skippedLines.push(p.line);
-    }
+    out.skippedCount++;
+    if (out.skippedLines.length < 20) out.skippedLines.push(p.line);
   }
 }
 
