@@ -34,9 +34,9 @@ describe('simulateCv, charging current and ohmic drop', () => {
     }
   });
 
-  it('applied potential = interfacial potential + i·Ru at every point (to 1 nV)', () => {
+  it.each(['E', 'EC', 'surface'] as const)('%s: applied potential = interfacial potential + i·Ru at every point (to 1 nV)', (mechanism) => {
     const ru = 500;
-    const r = simulateCv({ k0CmPerS: 0.05, doubleLayerFPerCm2: cdl, uncompensatedOhm: ru, cycles: 2 });
+    const r = simulateCv({ mechanism, k0CmPerS: 0.05, surfaceRatePerS: 20, coverageMolPerCm2: 1e-9, doubleLayerFPerCm2: cdl, uncompensatedOhm: ru, cycles: 2 });
     for (let k = 1; k < r.currentA.length; k++) {
       expect(Math.abs((r.potentialV[k] as number) - (r.interfacialPotentialV[k] as number) - (r.currentA[k] as number) * ru)).toBeLessThan(1e-9);
       expect(r.currentA[k]).toBeCloseTo((r.faradaicCurrentA[k] as number) + (r.chargingCurrentA[k] as number), 15);
