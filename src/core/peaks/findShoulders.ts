@@ -40,7 +40,7 @@ export function findShoulders(d: ArrayLike<number>, options: FindShouldersOption
     let r = k;
     while (r < end && Math.sign(d[r] as number) === sign) r++;
     if (sign !== 0) {
-      const best = flattestInteriorPoint(d, k, r, sign, minBracket);
+      const best = flattestInteriorPoint(d, k, r, sign, minBracket, { start, end });
       if (best && best.slopeRatio <= maxRatio) out.push({ ...best, flank: sign > 0 ? 'rising' : 'falling' });
     }
     k = r;
@@ -54,17 +54,22 @@ function largestMagnitude(d: ArrayLike<number>, start: number, end: number): num
   return m;
 }
 
-/** Within one same-sign run [a, b), the flattest point with a steep stretch on both sides. */
-function flattestInteriorPoint(d: ArrayLike<number>, a: number, b: number, sign: number, minBracket: number) {
+/**
+ * Within one same-sign run [a, b), the flattest point with a steep stretch on both sides. A steep
+ * stretch that is steepest at the very start or end of the range (e.g. the decay right after a
+ * vertex) is not a wave's flank and does not count as a bracket.
+ */
+function flattestInteriorPoint(d: ArrayLike<number>, a: number, b: number, sign: number, minBracket: number, range: { start: number; end: number }) {
   let best: { index: number; slopeRatio: number } | null = null;
   const mag = (j: number) => sign * (d[j] as number);
   for (let k = a + 1; k < b - 1; k++) {
     if (!(mag(k) <= mag(k - 1) && mag(k) < mag(k + 1))) continue;
-    let left = 0;
-    for (let j = a; j < k; j++) left = Math.max(left, mag(j));
-    let right = 0;
-    for (let j = k + 1; j < b; j++) right = Math.max(right, mag(j));
-    const bracket = Math.min(left, right);
+    let left = a;
+    for (let j = a; j < k; j++) if (mag(j) > mag(left)) left = j;
+    let right = k + 1;
+    for (let j = k + 1; j < b; j++) if (mag(j) > mag(right)) right = j;
+    if (left <= range.start + 2 || right >= range.end - 3) continue;
+    const bracket = Math.min(mag(left), mag(right));
     if (bracket < minBracket) continue;
     const ratio = mag(k) / bracket;
     if (!best || ratio < best.slopeRatio) best = { index: k, slopeRatio: ratio };

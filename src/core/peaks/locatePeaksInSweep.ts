@@ -12,7 +12,7 @@
  */
 import type { PeakConfidence, PeakDirection, PeakWindow } from '../analysis/types';
 import { savitzkyGolayDerivative } from '../smoothing/savitzkyGolaySmooth';
-import { findProminentMaxima } from './findProminentMaxima';
+import { findProminentMaxima, type ProminentMaximum } from './findProminentMaxima';
 import { findShoulders } from './findShoulders';
 import { refinePeakQuadratic } from './refinePeakQuadratic';
 import type { SweepSignals } from './sweepSignals';
@@ -71,10 +71,28 @@ function searchAutomatically(y: Float64Array, options: LocatePeaksOptions): Foun
   const d = savitzkyGolayDerivative(y, { window: options.locatingWindow, order: 2 });
   for (const sh of findShoulders(d)) {
     if (maxima.some((m) => Math.abs(m.index - sh.index) <= options.locatingWindow)) continue;
+    if (!onFlankOfMaximum(y, sh.index, sh.flank, maxima)) continue;
     const prominence = shoulderHeight(y, sh.index, sh.flank, maxima.map((m) => m.index));
     if (prominence >= min) out.push({ local: sh.index, prominence, confidence: 'shoulder', shoulder: true });
   }
   return out.sort((a, b) => a.local - b.local);
+}
+
+/**
+ * A shoulder must sit on the flank of a located maximum (the next one for a rising flank, the
+ * previous one for a falling flank) within three of that maximum's half-widths at half
+ * prominence; a flat stretch far from any peak (e.g. where a current has decayed to zero
+ * between two waves) is not a shoulder. Limit: our choice, common practice, no source.
+ */
+function onFlankOfMaximum(y: Float64Array, k: number, flank: 'rising' | 'falling', maxima: ProminentMaximum[]): boolean {
+  const m = flank === 'rising' ? maxima.find((p) => p.index > k) : maxima.filter((p) => p.index < k).at(-1);
+  if (!m) return false;
+  const half = y[m.index]! - m.prominence / 2;
+  const dir = flank === 'rising' ? -1 : 1;
+  let j = m.index;
+  while (j + dir >= 0 && j + dir < y.length && y[j + dir]! >= half) j += dir;
+  const halfWidth = Math.max(1, Math.abs(j - m.index));
+  return Math.abs(k - m.index) <= 3 * halfWidth;
 }
 
 /** Rise of the shoulder above the lowest point between it and the neighbouring maximum or sweep end. */

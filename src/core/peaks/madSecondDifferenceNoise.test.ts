@@ -1,18 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { madSecondDifferenceNoise, median } from './madSecondDifferenceNoise';
+import { seededGaussian } from './simulatedVoltammogram';
 
-/** Seeded normal deviates (mulberry32 + Box–Muller), for reproducible noise. */
-function seededNormal(seed: number): () => number {
-  let a = seed >>> 0;
-  const uniform = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-  return () => Math.sqrt(-2 * Math.log(1 - uniform())) * Math.cos(2 * Math.PI * uniform());
-}
 
 describe('madSecondDifferenceNoise', () => {
   it('median of small lists', () => {
@@ -23,7 +12,7 @@ describe('madSecondDifferenceNoise', () => {
   // Hampel 1974 (MAD consistency 1.4826) and var(second difference) = 6σ²: with 20 000 seeded
   // normal deviates of σ = 1e-8 A the estimate lies within 3 % of σ (sampling error ~1 %).
   it('recovers σ of seeded Gaussian noise on a smooth wave within 3 %', () => {
-    const rnd = seededNormal(42);
+    const rnd = seededGaussian(42);
     const n = 20000;
     const y = Float64Array.from({ length: n }, (_, k) => 1e-6 * Math.sin(k / 800) + 1e-8 * rnd());
     expect(madSecondDifferenceNoise(y) / 1e-8).toBeGreaterThan(0.97);

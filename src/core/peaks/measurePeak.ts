@@ -6,7 +6,7 @@
  *   ed. §6.2, from memory); charge Q = ∫|I − I_baseline| dt (Faraday's law).
  * Charge limits (our choice): from the last point before the peak where the corrected current is
  *   ≤ 0 (or the baseline's start) to the first point after it where the corrected current falls
- *   below 5 % of ip (or the end of the sweep / baseline). For a diffusion wave the latter is usually
+ *   below 1 % of ip (or the end of the sweep / baseline). For a diffusion wave the latter is usually
  *   the switch, so Q is "charge passed under the wave up to the switch".
  * In: sweep signals, the located peak and its baseline. Out: the PeakResult, or null when the
  *   corrected height is not positive (the peak does not rise above its own baseline).
@@ -83,7 +83,7 @@ function chargeUnderPeak(sig: SweepSignals, corrected: (k: number) => number, pe
   let a = peak;
   while (a > lo && corrected(a - 1) > 0) a--;
   let b = peak;
-  while (b < hi - 1 && corrected(b + 1) > 0.05 * heightA) b++;
+  while (b < hi - 1 && corrected(b + 1) > 0.01 * heightA) b++;
   let q = 0;
   for (let k = a; k < b; k++) q += 0.5 * (corrected(k) + corrected(k + 1)) * (sig.timeS[k + 1]! - sig.timeS[k]!);
   return Math.abs(q);

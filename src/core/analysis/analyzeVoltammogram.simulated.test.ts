@@ -1,0 +1,137 @@
+/**
+ * analyzeVoltammogram against this project's simulator (src/core/simulation, itself validated
+ * against Randles–Ševčík 0.4463 and Nicholson's ΔEp table) and the published values it encodes.
+ * Tolerances: E½ 2 mV noise-free and 4 mV with noise (issue); ΔEp 1.5 mV (peak location on a
+ * 1 mV grid plus the table's own 0.1 mV rounding); ip 2 % (baseline extrapolation from a finite
+ * pre-peak window, measured here at −0.2 %; the simulator is within 0.1 % of 0.4463); ratio 3 %.
+ */
+import { describe, expect, it } from 'vitest';
+import { FARADAY_C_PER_MOL as F, inverseThermalVoltagePerV, thermalVoltageV } from '../constants';
+import { reversibleDeltaEpAtSwitch } from '../couples/reversibleDeltaEpAtSwitch';
+import { simulatedVoltammogram } from '../peaks/simulatedVoltammogram';
+import { analyzeVoltammogram } from './analyzeVoltammogram';
+
+const A = 0.0707;
+const C = 1e-6;
+const D = 7.6e-6;
+const u = thermalVoltageV(298.15);
+const base = { k0CmPerS: Infinity, formalPotentialV: 0, startV: 0.4, switchV: -0.4, areaCm2: A, concentrationOMolPerCm3: C, diffusionOCm2PerS: D, diffusionRCm2PerS: D };
+const randlesSevcikA = (n: number, v: number) => 0.4463 * n * F * A * C * Math.sqrt(n * inverseThermalVoltagePerV(298.15) * v * D);
+const firstCouple = (a: ReturnType<typeof analyzeVoltammogram>) => {
+  const cycle = a.cycles[0]!;
+  expect(cycle.couples.length).toBeGreaterThanOrEqual(1);
+  return { cycle, couple: cycle.couples[0]! };
+};
+
+describe('analyzeVoltammogram on simulated reversible couples', () => {
+  // Bard & Faulkner 2nd ed. §6.2 (from memory): E½ = E°′ when D_O = D_R; Randles–Ševčík
+  // ip = 0.4463 nFAC(nFvD/RT)^½ (check-values §2); Nicholson 1965 ΔEp vs switch (check-values §3).
+  it.each([
+    [1, 0.05],
+    [1, 0.1],
+    [1, 1],
+    [2, 0.1],
+  ])('n = %i, v = %f V/s: E½ ±2 mV, ΔEp vs table ±1.5 mV, ipc vs Randles–Ševčík ±2 %, ratio 1 ±3 %', (n, v) => {
+    const a = analyzeVoltammogram(simulatedVoltammogram({ ...base, electronCount: n, scanRateVPerS: v }), { electronCount: n });
+    const { couple } = firstCouple(a);
+    expect(Math.abs(couple.eHalfV!)).toBeLessThan(0.002);
+    const past = Math.abs(-0.4 - couple.epcV!);
+    expect(Math.abs(couple.deltaEpV! - reversibleDeltaEpAtSwitch(past, { electronCount: n }).deltaEpV)).toBeLessThan(0.0015);
+    expect(Math.abs(couple.ipcA! / randlesSevcikA(n, v) - 1)).toBeLessThan(0.02);
+    expect(Math.abs(couple.ratio! - 1)).toBeLessThan(0.03);
+    expect(couple.verdict.category).toBe('nernstian');
+    expect(couple.forwardDirection).toBe('cathodic');
+  });
+
+  // Nicholson & Shain 1964; B&F §6.2 (from memory), check-values §3: |Ep − Ep/2| = 2.20 RT/nF.
+  it('|Ep − Ep/2| of both peaks is 2.20 RT/F = 56.5 mV within 1.5 mV', () => {
+    const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram(base)));
+    expect(Math.abs(couple.cathodicHalfPeakWidthV! - 2.2 * u)).toBeLessThan(0.0015);
+    expect(Math.abs(couple.anodicHalfPeakWidthV! - 2.2 * u)).toBeLessThan(0.0015);
+  });
+
+  // B&F §6.2 (from memory), check-values §3: E½ = E°′ + (RT/2nF) ln(D_R/D_O); D_R = D_O/4 moves
+  // E½ by −17.8 mV.
+  it('unequal diffusion coefficients: E½ = E°′ + (RT/2F) ln(D_R/D_O) within 2 mV', () => {
+    const a = analyzeVoltammogram(simulatedVoltammogram({ ...base, diffusionRCm2PerS: D / 4 }));
+    expect(Math.abs(firstCouple(a).couple.eHalfV! - (u / 2) * Math.log(1 / 4))).toBeLessThan(0.002);
+  });
+
+  // With seeded white noise of 0.1 µA (0.6 % of ip) and a 20 µF/cm² double layer (charging
+  // current 0.14 µA, check-values §9): E½ within 4 mV and ipc within 3 % for three seeds.
+  it.each([7, 11, 23])('noise (seed %i) and charging background: E½ ±4 mV, ipc ±3 %', (seed) => {
+    const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 20e-6 }, { noiseA: 1e-7, seed });
+    const { couple } = firstCouple(analyzeVoltammogram(v));
+    expect(Math.abs(couple.eHalfV!)).toBeLessThan(0.004);
+    expect(Math.abs(couple.ipcA! / randlesSevcikA(1, 0.1) - 1)).toBeLessThan(0.03);
+    expect(Math.abs(couple.ratio! - 1)).toBeLessThan(0.05);
+  });
+
+  // A sweep that starts with the reduced form present runs anodic first; the ratio is ipc/ipa.
+  it('anodic-first voltammogram: forward direction anodic and the same metrics mirrored', () => {
+    const v = simulatedVoltammogram({ ...base, startV: -0.4, switchV: 0.4, concentrationOMolPerCm3: 0, concentrationRMolPerCm3: C });
+    const { couple } = firstCouple(analyzeVoltammogram(v));
+    expect(couple.forwardDirection).toBe('anodic');
+    expect(Math.abs(couple.eHalfV!)).toBeLessThan(0.002);
+    expect(Math.abs(couple.ipaA! / randlesSevcikA(1, 0.1) - 1)).toBeLessThan(0.02);
+  });
+
+  // Two independent couples 250 mV apart (currents add): each E½ within 2 mV.
+  it('two couples on one trace are both found and paired in order', () => {
+    const v = simulatedVoltammogram({ ...base, switchV: -0.6 }, { extra: [{ formalPotentialV: -0.25 }] });
+    const couples = analyzeVoltammogram(v).cycles[0]!.couples;
+    expect(couples).toHaveLength(2);
+    expect(Math.abs(couples[0]!.eHalfV! + 0.25)).toBeLessThan(0.002);
+    expect(Math.abs(couples[1]!.eHalfV!)).toBeLessThan(0.002);
+  });
+});
+
+describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', () => {
+  // Nicholson 1965 Table I (check-values §5): ψ = k°/(πDnFv/RT)^½ = 0.005/0.00964 = 0.52 → n·ΔEp
+  // between the ψ = 0.75 (92 mV) and ψ = 0.35 (121 mV) rows.
+  it('k° = 0.005 cm/s: ΔEp between 92 and 121 mV, verdict sluggish', () => {
+    const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram({ ...base, k0CmPerS: 0.005 })));
+    expect(couple.deltaEpV!).toBeGreaterThan(0.092);
+    expect(couple.deltaEpV!).toBeLessThan(0.121);
+    expect(couple.verdict.category).toBe('sluggish');
+  });
+
+  // B&F §6.3 (from memory), check-values §4: |Ep − Ep/2| = 1.857 RT/(αF) = 95.4 mV at α = 0.5;
+  // irreversible ip = 0.4958 nFAC(αFvD/RT)^½ = 13.007 µA (check-values §2 worked example).
+  it('k° = 1e-5 cm/s: one-way verdict, |Ep − Ep/2| = 95.4 mV ±2 mV, ip = 13.007 µA ±2 %', () => {
+    const cycle = analyzeVoltammogram(simulatedVoltammogram({ ...base, k0CmPerS: 1e-5, switchV: -0.9 })).cycles[0]!;
+    const forward = cycle.couples.find((c) => c.cathodicPeak !== null)!;
+    expect(forward.verdict.category).toBe('one-way');
+    expect(Math.abs(forward.cathodicHalfPeakWidthV! - (1.857 * u) / 0.5)).toBeLessThan(0.002);
+    expect(Math.abs(forward.ipcA! / 13.007e-6 - 1)).toBeLessThan(0.02);
+  });
+
+  // Nicholson & Shain 1964 (EC): a follow-up reaction consumes the product, so the return peak is
+  // smaller; with k_f = 0.5 /s and a 4 s excursion past E½ the ratio falls well below 0.8.
+  it('EC with k_f = 0.5 /s: ratio < 0.8 and verdict follow-up-loss', () => {
+    const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram({ ...base, mechanism: 'EC', followUpRatePerS: 0.5 })));
+    expect(couple.ratio!).toBeLessThan(0.8);
+    expect(couple.verdict.category).toBe('follow-up-loss');
+  });
+
+  // B&F §14.3; Laviron 1974 (from memory), check-values §7: ip = n²F²AΓv/(4RT) = 0.6638 µA,
+  // Q = nFAΓ = 0.6822 µC, FWHM = 90.58 mV for Γ = 1e-10 mol/cm², v = 0.1 V/s.
+  it('Nernstian adsorbed layer: adsorbed, FWHM 90.6 mV ±1.5 mV, ip ±2 %, Q ±3 %, ΔEp < 2 mV', () => {
+    const { couple, cycle } = firstCouple(analyzeVoltammogram(simulatedVoltammogram({ ...base, mechanism: 'surface', surfaceRatePerS: Infinity })));
+    expect(couple.verdict.category).toBe('adsorbed');
+    expect(Math.abs(couple.deltaEpV!)).toBeLessThan(0.002);
+    for (const p of cycle.peaks) expect(Math.abs(p.fwhmV! - 4 * Math.log(1 + Math.SQRT2) * u)).toBeLessThan(0.0015);
+    expect(Math.abs(couple.ipcA! / 0.6638e-6 - 1)).toBeLessThan(0.02);
+    expect(Math.abs(couple.cathodicChargeC! / 0.6822e-6 - 1)).toBeLessThan(0.03);
+  });
+});
+
+describe('current sign convention (check-values §14; IUPAC Gold Book; ASDL plotting conventions)', () => {
+  it('the same voltammogram in IUPAC and polarographic convention gives identical Epa, Epc, |ipa|, |ipc|', () => {
+    const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 20e-6 }, { noiseA: 5e-8, seed: 3 });
+    const polar = { ...v, currentA: v.currentA.map((i) => -i) };
+    const a = firstCouple(analyzeVoltammogram(v)).couple;
+    const b = firstCouple(analyzeVoltammogram(polar, { currentConvention: 'polarographic' })).couple;
+    expect([b.epaV, b.epcV, b.ipaA, b.ipcA]).toEqual([a.epaV, a.epcV, a.ipaA, a.ipcA]);
+  });
+});
