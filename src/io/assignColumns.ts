@@ -106,12 +106,9 @@ function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarni
   for (const j of free()) if (spare() > 0 && looksLikeIndex(stats[j] as ColumnStats)) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
   for (const j of free()) if (spare() > 0 && !has('cycle') && looksLikeCycle(stats[j] as ColumnStats, rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${(stats[j] as ColumnStats).distinct} values)`);
   for (const j of free()) if (spare() > 0 && !has('time') && looksLikeTime(stats[j] as ColumnStats)) set(j, 'time', 'time — rises steadily from row to row');
-  const cands = free();
-  if (!has('potential') && cands.length) {
-    const first = cands[0] as number;
-    const alt = cands.find((j) => j !== first && (stats[j] as ColumnStats).wander * 3 < (stats[first] as ColumnStats).wander);
-    const j = alt ?? first;
-    set(j, 'potential', alt === undefined ? 'potential — the first unnamed numeric column (the usual order is potential, then current)' : `potential — it rises and falls smoothly (${fmt((stats[j] as ColumnStats).wander)} spans of travel against ${fmt((stats[first] as ColumnStats).wander)} for column ${first + 1})`);
+  if (!has('potential') && free().length) {
+    const [j, why] = guessPotential(free(), stats);
+    set(j, 'potential', why);
   }
   const rest = free();
   if (!has('current') && rest.length) set(rest[0] as number, 'current', 'current — the next unnamed numeric column after the potential');
@@ -121,6 +118,25 @@ function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarni
   }
 }
 
+/**
+ * The potential among unnamed columns: the first one (potential-then-current is the usual order),
+ * unless the first is tiny (below 0.01, as currents in amperes are) while another is not, or
+ * another rises and falls far more smoothly.
+ */
+function guessPotential(cands: number[], stats: ColumnStats[]): [number, string] {
+  const first = cands[0] as number;
+  const s0 = stats[first] as ColumnStats;
+  const larger = cands.find((j) => j !== first && s0.maxAbs < 0.01 && (stats[j] as ColumnStats).maxAbs >= 0.05);
+  if (larger !== undefined) {
+    return [larger, `potential — values reach ${fmt((stats[larger] as ColumnStats).maxAbs)}, while column ${first + 1} stays below 0.01 as currents in amperes do`];
+  }
+  const smoother = cands.find((j) => j !== first && (stats[j] as ColumnStats).wander * 3 < s0.wander);
+  if (smoother !== undefined) {
+    return [smoother, `potential — it rises and falls smoothly (${fmt((stats[smoother] as ColumnStats).wander)} spans of travel against ${fmt(s0.wander)} for column ${first + 1})`];
+  }
+  return [first, 'potential — the first unnamed numeric column (the usual order is potential, then current)'];
+}
+
 function fmt(x: number): string {
-  return Number.isFinite(x) ? x.toFixed(1) : '∞';
+  return Number.isFinite(x) ? String(+x.toPrecision(3)) : '∞';
 }

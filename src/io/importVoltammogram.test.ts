@@ -48,6 +48,16 @@ const rows: Row[] = [
   { name: 'tab with decimal comma, i / µA', layout: { delimiter: '\t', decimalComma: true, header: { potential: 'E / V', current: 'i / µA' }, columns: ['potential', 'current'], currentScale: 1e6 } },
   { name: 'runs of spaces, no header', layout: { delimiter: 'spaces', columns: ['potential', 'current'] },
     check: (r) => expect(r.measurement.detection.headerLine.value).toBeNull() },
+  { name: 'no header: time, potential in mV, current — roles and mV read from the numbers', layout: { delimiter: '\t', columns: ['time', 'potential', 'current'], potentialScale: 1e3 },
+    check: (r) => {
+      expect(r.measurement.detection.columns.map((c) => c.role)).toEqual(['time', 'potential', 'current']);
+      expect(r.measurement.detection.potentialUnit.value).toBe('mV');
+      expect(r.warnings.map((w) => w.code)).toContain('ROLE_GUESSED');
+    } },
+  { name: 'no header: index, time, potential, current, cycle', layout: { delimiter: ',', columns: ['index', 'time', 'potential', 'current', 'cycle'] },
+    check: (r) => expect(r.measurement.detection.columns.map((c) => c.role)).toEqual(['index', 'time', 'potential', 'current', 'cycle']) },
+  { name: 'no header: current (A) before potential', layout: { delimiter: ';', columns: ['current', 'potential'] },
+    check: (r) => expect(r.measurement.detection.columns.map((c) => c.role)).toEqual(['current', 'potential']) },
   { name: 'scientific notation 1.23E-05', layout: { delimiter: ',', header: H, columns: ['potential', 'current'], exponent: true } },
   { name: 'scientific notation with decimal comma 1,23E-05', layout: { delimiter: ';', decimalComma: true, header: H, columns: ['potential', 'current'], exponent: true } },
   { name: 'preamble, footer and trailing blank lines', layout: { delimiter: ',', header: H, columns: ['potential', 'current'], preamble: ['Operator: A. Tester', 'Sample: ferrocene in MeCN', 'Electrode: glassy carbon, 3 mm', 'scan rate = 100 mV/s', 'Date: 2026-03-04 10:15'], footer: ['', 'End of measurement', '', ''] },
