@@ -42,6 +42,8 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       try {
         const out = await deps.client.request('analyze', { voltammogram, options, resistanceOhm }, { signal: ctrl.signal });
         set((s) => ({ results: { ...s.results, [id]: { status: 'ready', ...out, error: null } } }));
+        const group = get().files[id]?.group;
+        if (group) get().scheduleGroup(group);
       } catch (err) {
         if (err instanceof CancelledError) return;
         set((s) => ({ results: { ...s.results, [id]: { status: 'error', analysis: null, correctedPotentialV: null, error: toUserError(err) } } }));

@@ -21,8 +21,21 @@ export async function startApp(store: HalfwaveStore = getAppStore(), storage = d
   await restoreAutosave(store, storage);
   attachAutosave(store, storage);
   const demo = await loadDemoInputs();
-  if (demo.length > 0) {
-    store.setState({ notice: `Loaded ${demo.length} demo voltammograms (simulated, not measured).` });
-    await store.getState().addFiles(demo, 'demo series');
+  if (demo.length === 0) return;
+  store.setState({ notice: `Loading ${demo.length} demo voltammograms, simulated by Halfwave (not measurements).` });
+  // One scan-rate series per demo scenario: the file name up to its scan-rate part.
+  const groups = new Map<string, typeof demo>();
+  for (const input of demo) {
+    const group = demoGroup(input.name);
+    groups.set(group, [...(groups.get(group) ?? []), input]);
   }
+  // The well-behaved probe couple first, so the first trace on screen is the easiest to read.
+  const ordered = [...groups].sort(([a], [b]) => Number(b.startsWith('probe')) - Number(a.startsWith('probe')));
+  await Promise.all(ordered.map(([group, inputs]) => store.getState().addFiles(inputs, group)));
+  store.setState({ notice: `${demo.length} demo voltammograms loaded: simulated by Halfwave in ${groups.size} scan-rate series, not measurements.` });
+}
+
+/** "probe_RuHex_100mVs.csv" → "probe RuHex". */
+export function demoGroup(fileName: string): string {
+  return fileName.replace(/\.[^.]+$/, '').split('_').slice(0, 2).join(' ');
 }

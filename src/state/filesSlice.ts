@@ -90,16 +90,23 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     },
 
     removeFile(id) {
+      const group = get().files[id]?.group;
       set((s) => {
         const { [id]: _gone, ...files } = s.files;
         const { [id]: _r, ...results } = s.results;
         const order = s.fileOrder.filter((f) => f !== id);
         return { files, results, fileOrder: order, selectedFileId: s.selectedFileId === id ? (order[0] ?? null) : s.selectedFileId };
       });
+      if (group) get().scheduleGroup(group);
     },
 
     setFileGroup(id, group) {
-      patch(id, { group: group.trim() || DEFAULT_GROUP });
+      const before = get().files[id]?.group;
+      const after = group.trim() || DEFAULT_GROUP;
+      if (before === after) return;
+      patch(id, { group: after });
+      if (before) get().scheduleGroup(before);
+      get().scheduleGroup(after);
     },
   };
 };

@@ -7,6 +7,7 @@ import { createAnalysisSlice } from './analysisSlice';
 import { createFilesSlice } from './filesSlice';
 import { createHistorySlice } from './historySlice';
 import type { HalfwaveState, HalfwaveStore, StoreDeps } from './types';
+import { createSeriesSlice } from './seriesSlice';
 import { createViewSlice } from './viewSlice';
 
 export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
@@ -15,5 +16,6 @@ export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
     ...createAnalysisSlice(set, get, deps),
     ...createViewSlice(set, get, deps),
     ...createHistorySlice(set, get, deps),
+    ...createSeriesSlice(set, get, deps),
   }));
 }

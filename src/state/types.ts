@@ -3,6 +3,7 @@
  * the state they change; each slice file builds its part.
  */
 import type { StoreApi } from 'zustand/vanilla';
+import type { SeriesAnalysis } from '../core/analysis/seriesTypes';
 import type { VoltammogramAnalysis } from '../core/analysis/types';
 import type { ImportWarning } from '../io/errors';
 import type { SessionFileRecord } from '../io/session';
@@ -106,7 +107,26 @@ export interface HistorySlice {
   redo(): Promise<void>;
 }
 
-export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice;
+export interface SeriesEntry {
+  status: 'running' | 'ready' | 'error';
+  result: SeriesAnalysis | null;
+  error: UserError | null;
+  /** Files that went into the series, in order. */
+  fileIds: string[];
+}
+
+export interface SeriesSlice {
+  series: Record<string, SeriesEntry>;
+  selectedGroup: string | null;
+  selectGroup(group: string): void;
+  /** Groups of the loaded files, in load order. */
+  groups(): string[];
+  analyzeGroup(group: string): Promise<void>;
+  /** Re-runs the group's series after a short quiet time (edits come in bursts). */
+  scheduleGroup(group: string, delayMs?: number): void;
+}
+
+export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice & SeriesSlice;
 export type HalfwaveStore = StoreApi<HalfwaveState>;
 
 export interface StoreDeps {
@@ -131,3 +151,5 @@ export function toUserError(err: unknown): UserError {
 /** Importer types the UI shows (re-exported: the UI reaches io only through state). */
 export type { CurrentUnit, Guess, ImportDetection, ImportOverrides, Measurement, PotentialUnit } from '../io/types';
 export type { AnalysisSettings, FileAnalysisSettings } from './settings';
+export type { SeriesAnalysis, SeriesCouple, SeriesPoint } from '../core/analysis/seriesTypes';
+export type { BaselineMethod, BaselineSpec, CoupleResult, PeakResult, PeakWindow, VoltammogramAnalysis } from '../core/analysis/types';

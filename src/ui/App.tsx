@@ -5,6 +5,7 @@ import { IntakePanel } from './components/IntakePanel';
 import { MethodPanel } from './components/MethodPanel';
 import { NoticeBar } from './components/NoticeBar';
 import { ReadoutPanel } from './components/ReadoutPanel';
+import { SeriesView } from './components/SeriesView';
 import { SafetyDrawer } from './components/SafetyDrawer';
 import { TopBar } from './components/TopBar';
 import { TracePanel } from './components/TracePanel';
@@ -26,7 +27,7 @@ export function App() {
               <ReadoutPanel />
             </>
           ) : (
-            <p className="empty">The scan-rate series view is being connected.</p>
+            <SeriesView />
           )}
         </div>
         <aside className="column right" aria-label="Analysis settings">

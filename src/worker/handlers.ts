@@ -3,6 +3,7 @@
  * inside the worker (analysis.worker.ts) and in-thread (client.ts), so Vitest exercises exactly the
  * code the browser runs.
  */
+import { analyzeSeries } from '../core/analysis/analyzeSeries';
 import { analyzeVoltammogram } from '../core/analysis/analyzeVoltammogram';
 import { iRCorrect } from '../core/conventions/iRCorrect';
 import { findSweepSegments } from '../core/sweeps/findSweepSegments';
@@ -39,6 +40,7 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
     const analysis = analyzeVoltammogram(correctedPotentialV ? { ...v, potentialV: correctedPotentialV } : v, input.options);
     return { analysis, correctedPotentialV };
   },
+  series: (input) => analyzeSeries(input.files, input.options),
 };
 
 /** Hex SHA-256 of the bytes (FIPS 180-4), or null where Web Crypto is unavailable. */

@@ -6,6 +6,7 @@
  * `RequestMap` is the single table of what the worker can do: the request `type`, its input and
  * its output. The unions below are derived from it, so adding a line there types both ends.
  */
+import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesFileInput } from '../core/analysis/seriesTypes';
 import type { AnalyzeVoltammogramOptions, VoltammogramAnalysis } from '../core/analysis/types';
 import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSweepSegments';
 import type { Voltammogram } from '../core/types';
@@ -30,6 +31,11 @@ export interface RequestMap {
   analyze: {
     input: { voltammogram: Voltammogram; options: AnalyzeVoltammogramOptions; resistanceOhm: number };
     output: { analysis: VoltammogramAnalysis; correctedPotentialV: Float64Array | null };
+  };
+  /** Scan-rate series over already analysed files (core/analysis/analyzeSeries). */
+  series: {
+    input: { files: SeriesFileInput[]; options: AnalyzeSeriesOptions };
+    output: SeriesAnalysis;
   };
 }
 

@@ -30,7 +30,7 @@ function FileRow({ id }: { id: string }) {
       <div className="file-meta">
         <span>{statusText(file, result?.status)}</span>
         <span>{bytes(file.sizeBytes)}</span>
-        {file.measurement?.scanRateVPerS ? <span>{(file.measurement.scanRateVPerS * 1000).toPrecision(3)} mV/s</span> : null}
+        {file.measurement?.scanRateVPerS ? <span>{Number((file.measurement.scanRateVPerS * 1000).toPrecision(3))} mV/s</span> : null}
       </div>
       {file.status === 'importing' ? <progress max={1} value={file.progress} aria-label={`reading ${file.fileName}`} /> : null}
       {file.error ? (

@@ -20,22 +20,26 @@ export function TopBar() {
         <button type="button" disabled={!canRedo} data-testid="redo" onClick={() => void act.redo()}>Redo</button>
       </div>
       <div className="group segmented" role="radiogroup" aria-label="Current sign convention">
+        <span className="group-label">Current sign</span>
         {(['iupac', 'polarographic'] as const).map((c) => (
           <button key={c} type="button" role="radio" aria-checked={convention === c} data-testid={`convention-${c}`}
+            title={c === 'iupac' ? 'anodic current up, potential increasing to the right' : 'cathodic current up, potential increasing to the left'}
             onClick={() => act.setView({ convention: c })}>
-            {c === 'iupac' ? 'IUPAC: anodic up' : 'Polarographic: cathodic up'}
+            {c === 'iupac' ? 'IUPAC' : 'Polarographic'}
           </button>
         ))}
       </div>
       <div className="group segmented" role="radiogroup" aria-label="Main view">
-        <button type="button" role="radio" aria-checked={mainView === 'trace'} data-testid="view-trace" onClick={() => act.setView({ mainView: 'trace' })}>Single trace</button>
-        <button type="button" role="radio" aria-checked={mainView === 'series'} data-testid="view-series" onClick={() => act.setView({ mainView: 'series' })}>Scan-rate series</button>
+        <span className="group-label">View</span>
+        <button type="button" role="radio" aria-checked={mainView === 'trace'} data-testid="view-trace" onClick={() => act.setView({ mainView: 'trace' })}>Trace</button>
+        <button type="button" role="radio" aria-checked={mainView === 'series'} data-testid="view-series" onClick={() => act.setView({ mainView: 'series' })}>Series</button>
       </div>
       <span className="spacer" />
       <div className="group" role="group" aria-label="Session">
-        <button type="button" data-testid="save-session" onClick={() => void save(false)} title="Settings, file names and checksums">Save session</button>
-        <button type="button" onClick={() => void save(true)} title="Also embeds the original files">…with data</button>
-        <button type="button" onClick={() => sessionInput.current?.click()}>Open session…</button>
+        <span className="group-label">Session</span>
+        <button type="button" data-testid="save-session" onClick={() => void save(false)} title="Settings, file names and checksums">Save</button>
+        <button type="button" onClick={() => void save(true)} title="Also embeds the original files">Save + data</button>
+        <button type="button" onClick={() => sessionInput.current?.click()}>Open…</button>
         <input ref={sessionInput} type="file" accept=".json,application/json" className="visually-hidden" data-testid="session-input" aria-label="Open a session file"
           onChange={(e) => {
             const f = e.target.files?.[0];

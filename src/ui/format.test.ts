@@ -1,0 +1,22 @@
+/** Table formatting (hand-worked cases; common practice, no source). */
+import { describe, expect, it } from 'vitest';
+import { bytes, fixed, sci, sig } from './format';
+
+describe('format', () => {
+  it('fixed and sig show a dash for missing values', () => {
+    expect(fixed(null, 3)).toBe('—');
+    expect(sig(Number.NaN)).toBe('—');
+    expect(fixed(0.0601, 1, 1000)).toBe('60.1');
+    expect(sig(4.9489e-6, 4, 1e6)).toBe('4.949');
+  });
+  it('sci writes powers of ten with superscripts outside 1e-3…1e4', () => {
+    expect(sci(6.46e-6)).toBe('6.46 × 10⁻⁶');
+    expect(sci(1.2e-10)).toBe('1.20 × 10⁻¹⁰');
+    expect(sci(0.0501)).toBe('0.0501');
+    expect(sci(25000)).toBe('2.50 × 10⁴');
+  });
+  it('bytes', () => {
+    expect(bytes(512)).toBe('512 B');
+    expect(bytes(62_200)).toBe('60.7 kB');
+  });
+});

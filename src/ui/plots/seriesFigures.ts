@@ -1,0 +1,100 @@
+/**
+ * Scan-rate series plots as pure functions: peak current against v½ (or against v for a surface
+ * wave) with the fitted line, log₁₀|ip| against log₁₀ v with its fit, and Ep against log₁₀ v.
+ * Fit lines are drawn from the series result's own slope and intercept over the data range, so
+ * the picture shows exactly the fit that produced the numbers in the table.
+ */
+import type { Data, Layout } from 'plotly.js-dist-min';
+import type { FitLineResult } from '../../core/regression/fitLine';
+import type { SeriesCouple, SeriesPoint } from '../../core/analysis/seriesTypes';
+import { chooseCurrentScale } from './currentScale';
+import { baseFont, markers, palette } from './palette';
+
+export interface Figure {
+  data: Data[];
+  layout: Partial<Layout>;
+}
+
+export interface SeriesFigures {
+  current: Figure;
+  logLog: Figure;
+  peakPotential: Figure;
+}
+
+type Getter = (p: SeriesPoint) => number | null;
+
+export function buildSeriesFigures(couple: SeriesCouple, potentialOffsetV: number, scaleName: string): SeriesFigures {
+  return {
+    current: currentFigure(couple),
+    logLog: logLogFigure(couple),
+    peakPotential: peakPotentialFigure(couple, potentialOffsetV, scaleName),
+  };
+}
+
+function currentFigure(c: SeriesCouple): Figure {
+  const surface = c.regime === 'surface';
+  const xOf = (p: SeriesPoint) => (surface ? p.scanRateVPerS : Math.sqrt(p.scanRateVPerS));
+  const scale = chooseCurrentScale(Math.max(0, ...c.points.map((p) => Math.max(p.ipaA ?? 0, p.ipcA ?? 0))));
+  const fit = surface ? c.surface?.fit ?? null : c.forwardFit;
+  const data: Data[] = [
+    points(c.points, xOf, (p) => p.ipaA, scale.factor, 'ipa', palette.anodic, markers.anodic),
+    points(c.points, xOf, (p) => p.ipcA, scale.factor, 'ipc', palette.cathodic, markers.cathodic),
+  ];
+  if (fit) data.push(fitLine(fit, c.points.map(xOf), scale.factor, `forward-peak fit, R² ${fit.r2.toFixed(4)}`));
+  const xTitle = surface ? 'v / (V s⁻¹)' : 'v½ / (V s⁻¹)½';
+  return { data, layout: layout(xTitle, `|ip| / ${scale.unit}`, false) };
+}
+
+function logLogFigure(c: SeriesCouple): Figure {
+  const log = (v: number | null) => (v !== null && v > 0 ? Math.log10(v) : null);
+  const data: Data[] = [points(c.points, (p) => Math.log10(p.scanRateVPerS), (p) => log(p.forwardIpA), 1, 'forward peak', palette.traces[0], 'circle')];
+  if (c.logLog) data.push(fitLine(c.logLog.fit, c.points.map((p) => Math.log10(p.scanRateVPerS)), 1, `slope ${c.logLog.slope.toFixed(3)}`));
+  return { data, layout: layout('log₁₀(v / V s⁻¹)', 'log₁₀(|ip| / A)', false) };
+}
+
+function peakPotentialFigure(c: SeriesCouple, offsetV: number, scaleName: string): Figure {
+  const lx = (p: SeriesPoint) => Math.log10(p.scanRateVPerS);
+  const shift = (g: Getter): Getter => (p) => {
+    const v = g(p);
+    return v === null ? null : v + offsetV;
+  };
+  const data: Data[] = [
+    points(c.points, lx, shift((p) => p.epaV), 1, 'Epa', palette.anodic, markers.anodic),
+    points(c.points, lx, shift((p) => p.epcV), 1, 'Epc', palette.cathodic, markers.cathodic),
+  ];
+  const xs = c.points.map(lx);
+  for (const [dir, r] of [['anodic', c.peakShift.anodic], ['cathodic', c.peakShift.cathodic]] as const) {
+    if (r) data.push(fitLine({ ...r.fit, intercept: r.fit.intercept + offsetV }, xs, 1, `${dir}: ${(r.slopeVPerDecade * 1000).toFixed(1)} mV/decade`));
+  }
+  return { data, layout: layout('log₁₀(v / V s⁻¹)', `Ep vs ${scaleName} / V`, false) };
+}
+
+function points(ps: SeriesPoint[], x: (p: SeriesPoint) => number, y: Getter, factor: number, name: string, color: string | undefined, symbol: string): Data {
+  const kept = ps.filter((p) => y(p) !== null);
+  return {
+    type: 'scatter', mode: 'markers', name, x: kept.map(x), y: kept.map((p) => (y(p) as number) * factor),
+    text: kept.map((p) => p.fileName), marker: { color: color ?? palette.ink, symbol, size: 9 },
+    hovertemplate: '%{text}<br>x %{x:.4g}, y %{y:.4g}<extra></extra>',
+  } as Data;
+}
+
+function fitLine(fit: FitLineResult, xs: number[], factor: number, name: string): Data {
+  const lo = Math.min(...xs);
+  const hi = Math.max(...xs);
+  const x = [lo, hi];
+  return {
+    type: 'scatter', mode: 'lines', name, x, y: x.map((v) => (fit.slope * v + fit.intercept) * factor),
+    line: { color: palette.fit, width: 1.2, dash: 'dot' }, hoverinfo: 'skip',
+  } as Data;
+}
+
+function layout(xTitle: string, yTitle: string, legendInside: boolean): Partial<Layout> {
+  return {
+    font: { ...baseFont, size: 11 }, paper_bgcolor: '#ffffff', plot_bgcolor: palette.plotBackground,
+    margin: { l: 58, r: 10, t: 26, b: 42 },
+    legend: legendInside ? { x: 0.02, y: 0.98 } : { orientation: 'h', x: 0, y: 1.02, yanchor: 'bottom', font: { size: 10 } },
+    xaxis: { title: { text: xTitle }, gridcolor: palette.grid, zeroline: false, showline: true, linecolor: palette.ink, ticks: 'outside', mirror: true },
+    yaxis: { title: { text: yTitle }, gridcolor: palette.grid, zeroline: false, showline: true, linecolor: palette.ink, ticks: 'outside', mirror: true },
+    hovermode: 'closest',
+  };
+}
