@@ -9,7 +9,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { simulateCv } from '../src/core/simulation';
 import { formatTrace, type DemoTrace } from './demoData/layouts';
-import { demoReadme, truthJson } from './demoData/readme';
+import { demoReadme } from './demoData/readme';
 import { MASTER_SEED, SERIES, type DemoSeries } from './demoData/scenario';
 import { createGaussian } from './demoData/seededNoise';
 
@@ -25,7 +25,8 @@ function simulateTrace(series: DemoSeries, scanRateVPerS: number, seed: number):
   const cycle = new Int32Array(n);
   for (let i = 0; i < n; i++) {
     currentA[i] = (r.currentA[i] as number) + series.noiseA * noise();
-    cycle[i] = i === 0 ? 1 : Math.ceil(i / perCycle);
+    // The point back at the start potential opens the next cycle (the last point closes the run).
+    cycle[i] = Math.min(Math.floor(i / perCycle) + 1, series.truth.cycles ?? 1);
   }
   return { timeS: r.timeS, potentialV: r.potentialV, currentA, cycle };
 }
@@ -38,7 +39,7 @@ function recordedAt(seriesIndex: number, run: number): string {
 
 function main(): void {
   mkdirSync(OUT, { recursive: true });
-  for (const name of readdirSync(OUT)) if (DATA_FILE.test(name)) rmSync(join(OUT, name));
+  for (const name of readdirSync(OUT)) if (DATA_FILE.test(name) || name === 'truth.json') rmSync(join(OUT, name));
   const written: { file: string; bytes: number }[] = [];
   SERIES.forEach((series, s) => {
     series.scanRatesVPerS.forEach((v, i) => {
@@ -51,7 +52,6 @@ function main(): void {
     });
   });
   writeFileSync(join(OUT, 'README.md'), demoReadme(), 'utf8');
-  writeFileSync(join(OUT, 'truth.json'), truthJson(), 'utf8');
   const total = written.reduce((a, w) => a + w.bytes, 0);
   process.stdout.write(`demo-data: ${written.length} files, ${(total / 1024).toFixed(0)} KiB, seed ${MASTER_SEED}\n`);
 }

@@ -1,5 +1,5 @@
 /**
- * Text of demo-data/README.md and demo-data/truth.json, built from the scenario table so that the
+ * Text of demo-data/README.md, built from the scenario table so that the
  * documented "truth" can never drift from the parameters the files were simulated with.
  */
 import { FARADAY_C_PER_MOL as F, inverseThermalVoltagePerV } from '../../src/core/constants';
@@ -20,10 +20,6 @@ function fmt(x: unknown): string {
   if (typeof x !== 'number') return String(x);
   const r = Number(x.toPrecision(6));
   return r !== 0 && Math.abs(r) < 1e-3 ? r.toExponential() : String(r);
-}
-
-function truthOf(s: DemoSeries): Record<string, unknown> {
-  return { ...DEFAULT_SIMULATION, ...s.truth, scanRateVPerS: undefined };
 }
 
 function expectations(s: DemoSeries): string[] {
@@ -104,8 +100,9 @@ coating. All potentials are against Ag/AgCl (3 M KCl), 25 °C; currents follow t
 \`npm run --silent cli -- analyze demo-data --inspect\`. Regenerate with \`npm run demo-data\`.
 
 Each file carries a double-layer charging background, an uncompensated resistance and seeded
-white noise, as a measurement would. The "truth" below (also in \`truth.json\`) is what the analysis
-should recover, within what noise, charging and ohmic drop allow.
+white noise, as a measurement would. The "truth" below is what the analysis should recover, within what
+noise, charging and ohmic drop allow; tests can import the same table from
+\`scripts/demoData/scenario.ts\` (\`SERIES\`, with \`DEFAULT_SIMULATION\` for unlisted fields).
 
 ## Series
 
@@ -122,15 +119,4 @@ Follow your institution's rules and licensed practice; these notes do not replac
 - The reference here is Ag/AgCl, without mercury. If you use a calomel electrode instead, treat
   it as mercury-containing waste.
 `;
-}
-
-export function truthJson(): string {
-  const out = SERIES.map((s) => ({
-    series: s.key,
-    layout: s.layout,
-    files: s.scanRatesVPerS.map((v, i) => ({ file: s.fileName(v, i + 1), scanRateVPerS: v })),
-    truth: truthOf(s),
-    noiseA: s.noiseA,
-  }));
-  return `${JSON.stringify({ seed: MASTER_SEED, potentialScale: 'Ag/AgCl (3 M KCl)', currentConvention: 'IUPAC', series: out }, null, 2)}\n`;
 }
