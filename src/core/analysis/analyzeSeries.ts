@@ -51,6 +51,11 @@ function chooseCycle(analysis: SeriesFileInput['analysis'], cycle: number): Cycl
   return analysis.cycles.find((c) => c.index === cycle) ?? null;
 }
 
+function fwdCharge(c: CoupleRef['couple'], cycle: CycleAnalysis, direction: 'anodic' | 'cathodic'): number | null {
+  const k = direction === 'anodic' ? c.anodicPeak : c.cathodicPeak;
+  return k === null ? null : (cycle.peaks[k]?.chargeC ?? null);
+}
+
 function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): SeriesPoint {
   const c = ref.couple;
   const forwardIndex = c.forwardDirection === 'anodic' ? c.anodicPeak : c.cathodicPeak;
@@ -66,6 +71,8 @@ function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): S
     deltaEpV: c.deltaEpV,
     ipaA: c.ipaA,
     ipcA: c.ipcA,
+    anodicChargeC: c.anodicChargeC ?? fwdCharge(c, cycle, 'anodic'),
+    cathodicChargeC: c.cathodicChargeC ?? fwdCharge(c, cycle, 'cathodic'),
     forwardIpA: fwd?.heightA ?? (c.forwardDirection === 'anodic' ? c.ipaA : c.ipcA),
     forwardHalfPeakWidthV: fwd?.halfPeakWidthV ?? null,
     forwardChargeC: fwd?.chargeC ?? null,
@@ -88,13 +95,14 @@ function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>): Verdic
 
 function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
   const forward = first.forwardDirection;
-  const { regime, kineticClass } = classifyCouple(points, o.electronCount, o.temperatureK);
+  const logLog = fitLogLog(points);
+  const { regime, kineticClass } = classifyCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
   const forwardFit = fitAgainstSqrtScanRate(points, (p) => p.forwardIpA);
   const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
   const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
   const surface = regime === 'surface' ? seriesSurface(points, o) : null;
   const diffusion = regime === 'diffusion' ? seriesDiffusion(forwardFit, kineticClass, forwardShift, points, o).diffusion : null;
-  const rateConstant = regime === 'diffusion' && kineticClass !== 'irreversible' ? seriesRateConstant(points, forward, diffusion, o) : null;
+  const rateConstant = regime === 'diffusion' ? seriesRateConstant(points, forward, diffusion, o, forwardShift?.alpha ?? null) : null;
   const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
   const couple: Omit<SeriesCouple, 'verdict'> = {
     index,
@@ -107,7 +115,7 @@ function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['cou
     anodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipaA),
     cathodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipcA),
     diffusion,
-    logLog: fitLogLog(points),
+    logLog,
     peakShift,
     alpha: regime === 'diffusion' && kineticClass === 'irreversible' ? (diffusion?.alphaUsed ?? forwardShift?.alpha ?? null) : null,
     rateConstant,
@@ -152,10 +160,10 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
     if (c.points.length < files.length && files.length > 1) {
       out.push({ code: 'UNMATCHED_COUPLE', couple: c.index, message: `couple ${c.index} (E½ ≈ ${c.eHalfV?.toFixed(3) ?? '?'} V) is found in ${c.points.length} of ${files.length} files` });
     }
-    if (c.rateConstant && c.rateConstant.k0CmPerS === null && c.kineticClass === 'quasi-reversible') {
+    if (c.rateConstant && c.rateConstant.k0CmPerS === null && c.kineticClass !== 'reversible') {
       out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: k° not determinable (${c.rateConstant.perFile.find((f) => f.reason)?.reason ?? 'no D available'})` });
     }
-    if (c.forwardFit && c.forwardFit.pointCount >= 3 && c.forwardFit.r2 < 0.98) {
+    if (c.regime === 'diffusion' && c.forwardFit && c.forwardFit.pointCount >= 3 && c.forwardFit.r2 < 0.98) {
       out.push({ code: 'NONLINEAR', couple: c.index, message: `couple ${c.index}: ip against v^½ is not straight (R² = ${c.forwardFit.r2.toFixed(3)})` });
     }
   }

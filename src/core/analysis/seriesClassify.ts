@@ -2,7 +2,9 @@
  * Settles the transport regime and kinetic class of a series couple from the per-file verdicts
  * and peak separations, and picks the transfer coefficient for the irreversible Randles–Ševčík form.
  * Rules (design; thresholds named with their sources):
- *   - surface when most files call the couple adsorbed;
+ *   - surface when most files call the couple adsorbed, or when over three or more scan rates
+ *     log|ip| rises with log v at a slope of 0.85–1.15 (ip ∝ v, Laviron 1974; band: common
+ *     practice, no source) — a slow surface couple does not look adsorbed on a single trace;
  *   - 'sluggish' couples with median n·ΔEp above 212 mV at 25 °C (the end of Nicholson's 1965
  *     table) are irreversible, quasi-reversible otherwise;
  *   - a one-way couple is irreversible when its forward peak is broader than 1.25× the reversible
@@ -31,9 +33,12 @@ export function classifyCouple(
   points: SeriesPoint[],
   electronCount: number,
   temperatureK: number,
+  logLogSlope: number | null = null,
 ): { regime: SeriesRegime; kineticClass: SeriesKineticClass; majority: VerdictCategory } {
   const majority = mostCommon(points.map((p) => p.verdict));
-  if (majority === 'adsorbed') return { regime: 'surface', kineticClass: 'unknown', majority };
+  const rates = new Set(points.map((p) => p.scanRateVPerS)).size;
+  const linearInV = logLogSlope !== null && rates >= 3 && logLogSlope >= 0.85 && logLogSlope <= 1.15;
+  if (majority === 'adsorbed' || linearInV) return { regime: 'surface', kineticClass: 'unknown', majority };
   const rt = thermalVoltageV(temperatureK);
   const deltas = points.flatMap((p) => (p.deltaEpV === null ? [] : [electronCount * p.deltaEpV * (STANDARD_TEMPERATURE_K / temperatureK)]));
   const widths = points.flatMap((p) => (p.forwardHalfPeakWidthV === null ? [] : [p.forwardHalfPeakWidthV]));

@@ -67,6 +67,11 @@ export function fitPeakShift(points: SeriesPoint[], direction: 'anodic' | 'catho
   );
 }
 
+function slowestPoint(points: SeriesPoint[]): SeriesPoint | null {
+  const usable = points.filter((p) => p.forwardIpA !== null && p.forwardIpA > 0);
+  return usable.sort((a, b) => a.scanRateVPerS - b.scanRateVPerS)[0] ?? null;
+}
+
 /** D of the bulk species from the forward slope, or null (with the reason) when it cannot be had. */
 export function seriesDiffusion(
   fit: FitLineResult | null,
@@ -87,13 +92,18 @@ export function seriesDiffusion(
     transferElectronCount: o.transferElectronCount,
     ...(a ? { alpha: a.alpha } : {}),
   };
-  const d = randlesSevcikDiffusion(fit.slope, cell, rs);
+  // A quasi-reversible couple comes closest to the reversible limit at the slowest scan rate,
+  // where its ip/v^½ is largest; the slope of the whole series is pulled down further.
+  const slowest = kineticClass === 'quasi-reversible' ? slowestPoint(points) : null;
+  const d = slowest
+    ? randlesSevcikDiffusion((slowest.forwardIpA as number) / Math.sqrt(slowest.scanRateVPerS), cell, rs)
+    : randlesSevcikDiffusion(fit.slope, cell, rs);
   const ci = fit.slopeInterval;
-  const intervalCm2PerS: [number, number] | null = ci && ci[0] > 0
+  const intervalCm2PerS: [number, number] | null = !slowest && ci && ci[0] > 0
     ? [randlesSevcikDiffusion(ci[0], cell, rs), randlesSevcikDiffusion(ci[1], cell, rs)]
     : null;
   const note = kineticClass === 'quasi-reversible'
-    ? 'quasi-reversible couple: the peak current lies below the reversible limit, so this D (reversible form) is a lower bound'
+    ? `quasi-reversible couple: D from the slowest scan rate (${slowest?.scanRateVPerS ?? '?'} V/s) with the reversible form; the peak current lies below the reversible limit, so this D is a lower bound`
     : kineticClass === 'unknown' ? 'kinetic class unclear: reversible form used' : null;
   return {
     diffusion: { diffusionCm2PerS: d, intervalCm2PerS, form: rs.form, alphaUsed: a?.alpha ?? null, alphaSource: a?.source ?? null, note },

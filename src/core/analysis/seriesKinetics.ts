@@ -1,10 +1,13 @@
 /**
- * Rate constants and coverage of a series couple: Nicholson's k° per file and its median for a
- * diffusing couple, Γ (from charge and from the ip–v slope) and Laviron's k_s for a surface one.
+ * Rate constants and coverage of a series couple: k° per file (Nicholson's ψ inside its range,
+ * the two-peak irreversible lines beyond it) and its median for a diffusing couple; Γ (from the
+ * forward peak's charge and from the ip–v slope) and Laviron's k_s for a surface one.
  * Sources are in the called methods (kinetics/, series/lavironSurfaceWave.ts).
  */
 import { AnalysisError } from '../errors';
-import { LAVIRON_MIN_N_DELTA_EP_V, TABLE_RANGE_MV, lavironRateConstant, lavironTransferCoefficient, nicholsonPsi, nicholsonRateConstant } from '../kinetics';
+import {
+  LAVIRON_MIN_N_DELTA_EP_V, TABLE_RANGE_MV, irreversibleRateConstant, lavironRateConstant, lavironTransferCoefficient, nicholsonPsi, nicholsonRateConstant,
+} from '../kinetics';
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { surfaceCoverageFromCharge, surfaceCoverageFromSlope } from '../series';
 import { median } from './matchSeriesCouples';
@@ -24,39 +27,66 @@ function diffusionPair(dBulk: number, forward: PeakDirection, ratio: number): { 
   return forward === 'cathodic' ? { dO: dBulk, dR: dBulk / ratio } : { dO: dBulk * ratio, dR: dBulk };
 }
 
+type PerFile = SeriesRateConstant['perFile'][number];
+
+/** k° of one file: Nicholson's ψ inside 61–212 mV, both-peak irreversible lines beyond. */
+function returnRatio(p: SeriesPoint, forward: PeakDirection): number {
+  const [f, r] = forward === 'anodic' ? [p.ipaA, p.ipcA] : [p.ipcA, p.ipaA];
+  return f && r ? r / f : 0;
+}
+
+function fileRateConstant(p: SeriesPoint, forward: PeakDirection, dO: number, dR: number, alphaMeasured: number | null, o: ResolvedSeriesOptions): PerFile {
+  const none = { fileIndex: p.fileIndex, k0CmPerS: null, method: null, psi: null };
+  if (p.deltaEpV === null || p.epaV === null || p.epcV === null) return { ...none, reason: 'no peak pair, so no ΔEp' };
+  if (p.verdict === 'one-way' && returnRatio(p, forward) < 0.5) {
+    return { ...none, reason: 'the return peak is under half the forward one (one-way couple), so ΔEp is not a kinetic measure' };
+  }
+  const x25 = o.electronCount * p.deltaEpV * 1000 * (STANDARD_TEMPERATURE_K / o.temperatureK);
+  try {
+    if (x25 > TABLE_RANGE_MV[1]) {
+      const alpha = o.alpha ?? alphaMeasured ?? 0.5;
+      const r = irreversibleRateConstant(
+        { epaV: p.epaV, epcV: p.epcV, scanRateVPerS: p.scanRateVPerS, diffusionOxCm2PerS: dO, diffusionRedCm2PerS: dR },
+        { alpha, transferElectronCount: o.transferElectronCount, temperatureK: o.temperatureK },
+      );
+      return { fileIndex: p.fileIndex, k0CmPerS: r.k0CmPerS, method: 'irreversible', psi: null, reason: null };
+    }
+    const psi = nicholsonPsi(p.deltaEpV, { electronCount: o.electronCount, temperatureK: o.temperatureK });
+    const k0CmPerS = nicholsonRateConstant(
+      { psi: psi.psi, diffusionOxCm2PerS: dO, diffusionRedCm2PerS: dR, scanRateVPerS: p.scanRateVPerS, electronCount: o.electronCount },
+      { alpha: o.alpha ?? 0.5, temperatureK: o.temperatureK },
+    );
+    return { fileIndex: p.fileIndex, k0CmPerS, method: 'nicholson', psi, reason: null };
+  } catch (err) {
+    return { ...none, reason: reasonOf(err) };
+  }
+}
+
 export function seriesRateConstant(
   points: SeriesPoint[],
   forward: PeakDirection,
   diffusion: SeriesDiffusion | null,
   o: ResolvedSeriesOptions,
+  alphaMeasured: number | null,
 ): SeriesRateConstant {
-  const dBulk = diffusion?.diffusionCm2PerS ?? o.diffusionCm2PerS;
-  const diffusionSource = diffusion ? 'fitted from this series (Randles–Ševčík)' : o.diffusionCm2PerS !== null ? 'given by the user' : null;
-  const alpha = o.alpha ?? 0.5;
+  // A D the user knows beats one estimated from peak heights (biased low for slow couples).
+  const dBulk = o.diffusionCm2PerS ?? diffusion?.diffusionCm2PerS ?? null;
+  const diffusionSource = o.diffusionCm2PerS !== null ? 'given by the user' : diffusion ? 'fitted from this series (Randles–Ševčík)' : null;
   if (dBulk === null) {
     return { k0CmPerS: null, perFile: [], lowerBoundCmPerS: null, diffusionOxCm2PerS: null, diffusionSource: null };
   }
   const { dO, dR } = diffusionPair(dBulk, forward, o.diffusionRatio);
-  const kOf = (psi: number, v: number) => nicholsonRateConstant(
-    { psi, diffusionOxCm2PerS: dO, diffusionRedCm2PerS: dR, scanRateVPerS: v, electronCount: o.electronCount },
-    { alpha, temperatureK: o.temperatureK },
-  );
-  const perFile = points.map((p) => {
-    if (p.deltaEpV === null) return { fileIndex: p.fileIndex, k0CmPerS: null, psi: null, reason: 'no peak pair, so no ΔEp' };
-    try {
-      const psi = nicholsonPsi(p.deltaEpV, { electronCount: o.electronCount, temperatureK: o.temperatureK });
-      return { fileIndex: p.fileIndex, k0CmPerS: kOf(psi.psi, p.scanRateVPerS), psi, reason: null };
-    } catch (err) {
-      return { fileIndex: p.fileIndex, k0CmPerS: null, psi: null, reason: reasonOf(err) };
-    }
-  });
+  const perFile = points.map((p) => fileRateConstant(p, forward, dO, dR, alphaMeasured, o));
   const ks = perFile.flatMap((f) => (f.k0CmPerS === null ? [] : [f.k0CmPerS]));
   const narrow = points.filter((p) => p.deltaEpV !== null && o.electronCount * p.deltaEpV * (STANDARD_TEMPERATURE_K / o.temperatureK) * 1000 < TABLE_RANGE_MV[0]);
   let lowerBoundCmPerS: number | null = null;
   if (!ks.length && narrow.length) {
     // ψ ≥ 20 (the table's first row) at the fastest scan rate that still looks reversible.
     const vMax = Math.max(...narrow.map((p) => p.scanRateVPerS));
-    lowerBoundCmPerS = kOf(20, vMax);
+    lowerBoundCmPerS = nicholsonRateConstant(
+      { psi: 20, diffusionOxCm2PerS: dO, diffusionRedCm2PerS: dR, scanRateVPerS: vMax, electronCount: o.electronCount },
+      { alpha: o.alpha ?? 0.5, temperatureK: o.temperatureK },
+    );
   }
   return { k0CmPerS: ks.length ? median(ks) : null, perFile, lowerBoundCmPerS, diffusionOxCm2PerS: dO, diffusionSource };
 }
@@ -64,7 +94,12 @@ export function seriesRateConstant(
 export function seriesSurface(points: SeriesPoint[], o: ResolvedSeriesOptions): SeriesSurface {
   const fit = fitAgainstScanRate(points, (p) => p.forwardIpA);
   const cell = o.areaCm2 === null ? null : { electronCount: o.electronCount, areaCm2: o.areaCm2 };
-  const charges = points.flatMap((p) => (p.forwardChargeC === null ? [] : [p.forwardChargeC]));
+  // The forward peak's baseline is drawn on its own sweep; the return peak's is carried across
+  // the switch, where the charging current changes sign, so the forward charge is the safer one.
+  const charges = points.flatMap((p) => {
+    const q = p.forwardChargeC ?? (p.anodicChargeC ?? p.cathodicChargeC);
+    return q === null ? [] : [q];
+  });
   const coverageFromChargeMolPerCm2 = cell && charges.length ? median(charges.map((q) => surfaceCoverageFromCharge(q, cell))) : null;
   const coverageFromSlopeMolPerCm2 = cell && fit ? surfaceCoverageFromSlope(fit.slope, cell, { temperatureK: o.temperatureK }) : null;
   const wide = points.filter((p) => p.deltaEpV !== null && o.electronCount * p.deltaEpV > LAVIRON_MIN_N_DELTA_EP_V);

@@ -39,7 +39,7 @@ export interface AnalyzeSeriesOptions {
 }
 
 /** One file's contribution to a series couple. */
-export interface SeriesPoint extends Pick<CoupleResult, 'epaV' | 'epcV' | 'eHalfV' | 'deltaEpV' | 'ipaA' | 'ipcA'> {
+export interface SeriesPoint extends Pick<CoupleResult, 'epaV' | 'epcV' | 'eHalfV' | 'deltaEpV' | 'ipaA' | 'ipcA' | 'anodicChargeC' | 'cathodicChargeC'> {
   fileIndex: number;
   fileName: string;
   scanRateVPerS: number;
@@ -71,7 +71,14 @@ export interface SeriesDiffusion {
 export interface SeriesRateConstant {
   /** Median over the files where ψ was determinable (cm/s). */
   k0CmPerS: number | null;
-  perFile: Array<{ fileIndex: number; k0CmPerS: number | null; psi: NicholsonPsiResult | null; reason: string | null }>;
+  perFile: Array<{
+    fileIndex: number;
+    k0CmPerS: number | null;
+    /** 'nicholson' inside 61–212 mV, 'irreversible' (both peaks, Wang eq. 2-5) beyond. */
+    method: 'nicholson' | 'irreversible' | null;
+    psi: NicholsonPsiResult | null;
+    reason: string | null;
+  }>;
   /** When every ΔEp is below the table: k° is at least this (cm/s). */
   lowerBoundCmPerS: number | null;
   /** D_O used (cm²/s) and where it came from. */

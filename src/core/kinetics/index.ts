@@ -2,3 +2,4 @@
 export * from './nicholsonPsi';
 export * from './nicholsonRateConstant';
 export * from './lavironRateConstant';
+export * from './irreversibleRateConstant';
