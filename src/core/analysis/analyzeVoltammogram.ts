@@ -34,13 +34,15 @@ export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogra
   const warnings: AnalysisWarning[] = [];
   if (!sig.timeKnown) warnings.push({ code: 'NO_TIME_AXIS', message: 'no time column and no scan rate: peak charges are not computed' });
   const range = currentRange(sig);
-  if (!(range > 10 * sig.noiseA) || range === 0) {
+  const scale = Math.max(...[currentRangeEnd(sig, 1), -currentRangeEnd(sig, -1)].map(Math.abs));
+  const flat = !(range > 10 * sig.noiseA) || !(range > 1e-9 * scale);
+  if (flat) {
     warnings.push({ code: 'FLAT_TRACE', message: `current range ${range.toExponential(3)} A is within 10× the noise (${sig.noiseA.toExponential(3)} A): no peaks can be told from noise` });
   }
   const peakThresholdA = Math.max(resolved.minSignalToNoise * sig.noiseA, resolved.minProminenceA, (resolved.minRelativeProminence ?? 0.01) * range, Number.MIN_VALUE);
   const cycles = v.cycles
     .filter((c) => resolved.cycles.includes(c.index))
-    .map((c) => analyzeCycle(sig, c, resolved, peakThresholdA));
+    .map((c) => (flat ? { index: c.index, peaks: [], couples: [], warnings: [{ code: 'NO_PEAKS' as const, message: 'flat trace: no peaks searched', cycle: c.index }] } : analyzeCycle(sig, c, resolved, peakThresholdA)));
   return {
     cycles,
     smoothed: resolved.smoothing === 'off' ? null : { currentA: sig.shownA, derivativeAPerV: sig.shownSlopeAPerV },
@@ -51,14 +53,15 @@ export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogra
   };
 }
 
+/** Largest (sign 1) or smallest (sign −1) located current. */
+function currentRangeEnd(sig: SweepSignals, sign: 1 | -1): number {
+  let best = -Infinity;
+  for (const i of sig.locatingA) best = Math.max(best, sign * i);
+  return sign * best;
+}
+
 function currentRange(sig: SweepSignals): number {
-  let lo = Infinity;
-  let hi = -Infinity;
-  for (const i of sig.locatingA) {
-    if (i < lo) lo = i;
-    if (i > hi) hi = i;
-  }
-  return hi - lo;
+  return currentRangeEnd(sig, 1) - currentRangeEnd(sig, -1);
 }
 
 function checkVoltammogram(v: Voltammogram): void {
