@@ -7,23 +7,22 @@
  * `importVoltammogramAsync` gives the event loop a turn between chunks.
  */
 import { AnalysisError } from '../core/errors';
-import { assignColumns } from './assignColumns';
-import { chooseScanRate } from './chooseScanRate';
+import { assembleMeasurement } from './assembleMeasurement';
 import { checkText, decodeBytes, rejectKnownBinaryText } from './decodeText';
 import type { DecodedText } from './decodeText';
 import { detectHeader } from './detectHeader';
+import type { HeaderFound } from './detectHeader';
 import { describeDelimiter, detectLayout } from './detectFormat';
+import type { TableLayout } from './detectFormat';
 import { describeLines, ImportError, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
-import { measurementId } from './measurementId';
 import { createYielder } from './timeSlice';
 import { parseTable } from './parseTable';
 import type { ParsedTable } from './parseTable';
 import { readPreamble } from './readPreamble';
 import type { PreambleReading } from './readPreamble';
 import { normaliseLineEnds, sampleLines } from './textLines';
-import { buildColumns, chooseUnits } from './toMeasurement';
-import type { CurrentConvention, Guess, ImportOptions, ImportOverrides, ImportResult, Measurement } from './types';
+import type { ImportDetection, ImportOptions, ImportOverrides, ImportResult } from './types';
 
 export type ImportInput = string | ArrayBuffer | Uint8Array;
 
@@ -78,28 +77,44 @@ function decode(fileName: string, data: ImportInput, o: ImportOverrides): Decode
   return { text: checkText(fileName, d.text), encoding: d.encoding };
 }
 
-function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): Generator<number, ImportResult> {
-  const warnings: ImportWarning[] = [];
+/** Everything known before the table is tokenised. */
+export interface FrontMatter {
+  decoded: DecodedText;
+  text: string;
+  lineEnding: ImportDetection['lineEnding'];
+  layout: TableLayout;
+  header: HeaderFound;
+  preambleLines: string[];
+  pre: PreambleReading;
+  startOffset: number;
+}
+
+function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides, warnings: ImportWarning[]): FrontMatter {
   const decoded = decode(fileName, data, o);
   if (decoded.encoding.value === 'latin1' && !decoded.encoding.overridden) {
     warnings.push(makeWarning('ENCODING_GUESSED', `${fileName}: not valid UTF-8, read as Latin-1; check characters such as µ and °`));
   }
   const { text, lineEnding } = normaliseLineEnds(decoded.text);
-  yield 0.05;
   const sample = sampleLines(text);
   const layout = detectLayout(fileName, sample.lines, o);
   const decimalComma = layout.decimalMark.value === ',';
   const header = detectHeader(fileName, sample.lines, layout.firstDataLine, layout.delimiter.value, decimalComma, layout.fieldCount, o);
   const preambleLines = sample.lines.slice(0, header.preambleEnd);
-  const pre = readPreamble(preambleLines, 1);
+  return { decoded, text, lineEnding, layout, header, preambleLines, pre: readPreamble(preambleLines, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
+}
+
+function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): Generator<number, ImportResult> {
+  const warnings: ImportWarning[] = [];
+  const front = readFrontMatter(fileName, data, o, warnings);
+  const { layout } = front;
   yield 0.1;
-  const tableSteps = parseTable(text, {
+  const tableSteps = parseTable(front.text, {
     delimiter: layout.delimiter.value,
-    decimalComma,
+    decimalComma: layout.decimalMark.value === ',',
     fieldCount: layout.fieldCount,
-    startOffset: sample.offsets[layout.firstDataLine] ?? 0,
+    startOffset: front.startOffset,
     startLine: layout.firstDataLine + 1,
-    headerText: header.headerKey,
+    headerText: front.header.headerKey,
   });
   let step = tableSteps.next();
   while (!step.done) {
@@ -109,58 +124,8 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): 
   const table = step.value;
   layout.delimiter.explanation = describeDelimiter(layout.delimiter.value, layout.delimiter.overridden, table.rowCount, table.rowCount + table.skippedCount, layout.fieldCount, layout.firstDataLine + 1);
   tableWarnings(fileName, table, warnings);
-  const roles = assignColumns(fileName, header.names, table.columns, o);
-  warnings.push(...roles.warnings);
-  const convention = chooseConvention(o, pre);
-  const units = chooseUnits(fileName, roles, o, warnings);
-  if (units.currentDensity) {
-    warnings.push(makeWarning('CURRENT_DENSITY', pre.areaCm2
-      ? `${fileName}: the current column is a current density; multiplied by the area ${pre.areaCm2.value} cm² from line ${pre.areaCm2.line}`
-      : `${fileName}: the current column is a current density and the file states no electrode area; values are kept per cm² (as if the area were 1 cm²)`));
-  }
-  const cols = buildColumns(fileName, table, roles, units, convention.value, pre.areaCm2, warnings);
-  const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: pre.scanRateVPerS }, warnings);
-  if (cols.timeS && !isNonDecreasing(cols.timeS)) {
-    warnings.push(makeWarning('TIME_NOT_MONOTONIC', `${fileName}: the time column goes backwards in places (restarts per cycle?); it is kept as read`));
-  }
+  const measurement = assembleMeasurement(fileName, front, table, o, warnings);
   yield 1;
-  const measurement: Measurement = {
-    id: measurementId(fileName, text),
-    fileName,
-    potentialV: cols.potentialV,
-    currentA: cols.currentA,
-    timeS: cols.timeS,
-    segments: cols.split.segments,
-    cycles: cols.split.cycles,
-    scanRateVPerS: scan.guess.value,
-    scanRateSource: scan.source,
-    metadata: pre.metadata,
-    preamble: preambleLines,
-    currentConvention: convention.value,
-    referenceElectrode: pre.referenceElectrode?.value ?? roles.headers[roles.potential]?.reference ?? null,
-    temperatureK: pre.temperatureK,
-    areaCm2: pre.areaCm2,
-    concentrationMolPerCm3: pre.concentrationMolPerCm3,
-    cycleColumn: cols.cycleColumn,
-    extraColumns: cols.extraColumns,
-    detection: {
-      encoding: decoded.encoding,
-      lineEnding,
-      delimiter: layout.delimiter,
-      decimalMark: layout.decimalMark,
-      headerLine: header.guess,
-      columns: roles.columns,
-      potentialUnit: units.potential,
-      currentUnit: units.current,
-      timeUnit: units.time,
-      currentConvention: convention,
-      scanRate: scan.guess,
-      tableLines: { first: layout.firstDataLine + 1, last: table.lastDataLine },
-      rowsRead: cols.rowsKept,
-      rowsSkipped: table.skippedCount + cols.rowsDropped,
-      cycleCount: cols.split.cycles.length,
-    },
-  };
   return { measurement, warnings };
 }
 
@@ -171,15 +136,4 @@ function tableWarnings(fileName: string, t: ParsedTable, warnings: ImportWarning
   if (t.repeatedHeaderCount) {
     warnings.push(makeWarning('REPEATED_HEADER', `${fileName}: the header line appears ${t.repeatedHeaderCount} more time(s) inside the table (several exports joined); ${t.seamLines} header/preamble lines at those seams were passed over`, undefined, t.repeatedHeaderCount));
   }
-}
-
-function chooseConvention(o: ImportOverrides, pre: PreambleReading): Guess<CurrentConvention> {
-  if (o.currentConvention) return { value: o.currentConvention, overridden: true, explanation: `current convention ${o.currentConvention} (set by the user)` };
-  if (pre.convention) return { value: pre.convention.value, overridden: false, explanation: `current convention ${pre.convention.value} — line ${pre.convention.line}: "${pre.convention.text}"` };
-  return { value: 'iupac', overridden: false, explanation: 'current convention IUPAC (anodic positive) — the file does not say otherwise' };
-}
-
-function isNonDecreasing(a: Float64Array): boolean {
-  for (let i = 1; i < a.length; i++) if ((a[i] as number) < (a[i - 1] as number)) return false;
-  return true;
 }
