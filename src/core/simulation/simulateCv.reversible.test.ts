@@ -49,6 +49,16 @@ describe('simulateCv, E mechanism, reversible limit', () => {
     expect(Math.abs((anodic.potentialV - cathodic.potentialV) * 1000 - deltaMV)).toBeLessThan(1);
   });
 
+  // Same sources: the current function and the peak offset scale with RT, so at 37 °C
+  // i_p = 0.4463·nFAC(nFvD/RT)^½ and E_p − E½ = −1.109 RT/nF with T = 310.15 K.
+  it('at 37 °C the peak current and position follow RT (0.5 % and 0.2 mV)', () => {
+    const t = 310.15;
+    const ft = inverseThermalVoltagePerV(t);
+    const { cathodic } = cathodicFirstPeaks(simulateCv({ ...base, temperatureK: t }));
+    expect(Math.abs(-cathodic.currentA / (0.4463 * F * 0.0707 * 1e-6 * Math.sqrt(ft * 0.1 * 7.6e-6)) - 1)).toBeLessThan(0.005);
+    expect(Math.abs(cathodic.potentialV + 1.109 / ft)).toBeLessThan(2e-4);
+  });
+
   // Bard & Faulkner 2nd ed. §6.2 (Randles–Ševčík): i_p ∝ v^½, slope of log|i_p| vs log v = 0.5.
   it('log|ip| against log v has slope 0.500 ± 0.002 over two decades', () => {
     const rates = [0.01, 0.1, 1];
