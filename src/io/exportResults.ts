@@ -1,0 +1,124 @@
+/**
+ * The results sheet of an analysis run, as CSV (for spreadsheets) and as JSON (everything, for
+ * scripts). Both carry the method, the parameters, the software version and where each file came
+ * from (name, size, SHA-256, scan-rate source, detected layout), so a number can be traced back.
+ * CSV layout (our own): '#'-prefixed header lines, then four tables separated by a blank line and
+ * a '# table: …' line: peaks, couples (one row per file × cycle × couple), k0 per file, series.
+ * Units are in the column names. Signed currents follow the run's sign convention; peak heights
+ * and couple currents are positive magnitudes.
+ */
+import { currentInConvention } from '../core/conventions';
+import type { AnalyzeRunResult, RunFileResult } from '../core/analysis/runTypes';
+import type { SeriesCouple } from '../core/analysis/seriesTypes';
+
+export interface ResultsSheetMeta {
+  /** ISO time the sheet was made; left out when absent (keeps output reproducible). */
+  createdAt?: string;
+  /** The command line or action that produced the run. */
+  command?: string;
+}
+
+type Cell = string | number | null | undefined;
+
+function cell(v: Cell): string {
+  if (v === null || v === undefined || (typeof v === 'number' && !Number.isFinite(v))) return '';
+  const s = typeof v === 'number' ? String(Number(v.toPrecision(10))) : v;
+  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+const row = (cells: Cell[]) => cells.map(cell).join(',');
+
+function headerLines(r: AnalyzeRunResult, meta: ResultsSheetMeta): string[] {
+  const lines = [row(['# results sheet', r.provenance.software.name, r.provenance.software.version])];
+  if (meta.createdAt) lines.push(row(['# created', meta.createdAt]));
+  if (meta.command) lines.push(row(['# command', meta.command]));
+  lines.push(row(['# current sign convention', r.convention === 'iupac' ? 'IUPAC (anodic positive)' : 'polarographic (cathodic positive)']));
+  lines.push(row(['# potential scale', r.reference.output ?? "each file's own"]));
+  for (const b of r.reference.basis) lines.push(row(['# reference', b]));
+  for (const [k, v] of Object.entries(r.provenance.options)) lines.push(row(['# parameter', k, typeof v === 'object' ? JSON.stringify(v) : String(v)]));
+  for (const m of r.provenance.methods) lines.push(row(['# method', m]));
+  for (const f of r.files) {
+    const p = f.provenance;
+    lines.push(row(['# file', f.fileName, 'role', f.role, 'size_bytes', p.sizeBytes, 'sha256', p.sha256, 'scan_rate_V_per_s', f.scanRateVPerS,
+      'scan_rate_source', f.scanRateSource, 'points', f.pointCount, 'input_reference', f.inputReference, 'offset_V', f.offsetV, 'layout', p.layout]));
+  }
+  for (const w of r.warnings) lines.push(row(['# warning', w.fileName ?? '', w.message]));
+  return lines;
+}
+
+function peakTable(r: AnalyzeRunResult): string[] {
+  const out = [row(['file', 'cycle', 'direction', 'Ep_V', 'ip_A', 'i_at_Ep_A', 'baseline_at_Ep_A', 'Ep_half_V', 'Ep_minus_Ep_half_V', 'fwhm_V', 'charge_C', 'confidence', 'baseline'])];
+  for (const f of r.files) {
+    for (const c of f.analysis.cycles) {
+      for (const p of c.peaks) {
+        out.push(row([f.fileName, c.index, p.direction, p.potentialV, p.heightA, currentInConvention(p.rawCurrentA, r.convention),
+          currentInConvention(p.baselineCurrentA, r.convention), p.halfPeakPotentialV, p.halfPeakWidthV, p.fwhmV, p.chargeC, p.confidence, p.baseline.description]));
+      }
+    }
+  }
+  return out;
+}
+
+function coupleTable(r: AnalyzeRunResult): string[] {
+  const out = [row(['file', 'scan_rate_V_per_s', 'cycle', 'couple', 'Epa_V', 'Epc_V', 'E_half_V', 'dEp_V', 'ipa_A', 'ipc_A', 'ratio_return_over_forward', 'nicholson_1966_ratio', 'Qa_C', 'Qc_C', 'verdict', 'verdict_text'])];
+  for (const f of r.files) {
+    for (const cy of f.analysis.cycles) {
+      for (const c of cy.couples) {
+        out.push(row([f.fileName, f.scanRateVPerS, cy.index, c.index, c.epaV, c.epcV, c.eHalfV, c.deltaEpV, c.ipaA, c.ipcA, c.ratio, c.nicholsonRatio,
+          c.anodicChargeC, c.cathodicChargeC, c.verdict.category, c.verdict.label]));
+      }
+    }
+  }
+  return out;
+}
+
+function rateTable(r: AnalyzeRunResult, files: RunFileResult[]): string[] {
+  const out = [row(['series_couple', 'file', 'scan_rate_V_per_s', 'dEp_V', 'psi', 'psi_source', 'method', 'k0_cm_per_s', 'not_determined_because'])];
+  for (const c of r.series.couples) {
+    for (const k of c.rateConstant?.perFile ?? []) {
+      const p = c.points.find((x) => x.fileIndex === k.fileIndex);
+      out.push(row([c.index, p?.fileName ?? files[k.fileIndex]?.fileName, p?.scanRateVPerS, p?.deltaEpV, k.psi?.psi, k.psi?.source, k.method, k.k0CmPerS, k.reason]));
+    }
+  }
+  return out;
+}
+
+const SERIES_COLUMNS = ['couple', 'E_half_V', 'files', 'regime', 'kinetic_class', 'verdict', 'slope_ip_vs_sqrt_v_A_s05_V05', 'slope_ci95_low', 'slope_ci95_high',
+  'intercept_A', 'r2', 'D_cm2_per_s', 'D_ci95_low', 'D_ci95_high', 'D_form', 'alpha', 'log_log_slope', 'log_log_reading', 'Epa_shift_V_per_decade',
+  'Epc_shift_V_per_decade', 'k0_cm_per_s', 'k0_lower_bound_cm_per_s', 'D_used_for_k0_cm2_per_s', 'gamma_from_charge_mol_per_cm2',
+  'gamma_from_slope_mol_per_cm2', 'ks_per_s', 'diagnostics'];
+
+function seriesRow(c: SeriesCouple): Cell[] {
+  const f = c.forwardFit;
+  return [c.index, c.eHalfV, c.points.length, c.regime, c.kineticClass, c.verdict.category, f?.slope, f?.slopeInterval?.[0], f?.slopeInterval?.[1],
+    f?.intercept, f?.r2, c.diffusion?.diffusionCm2PerS, c.diffusion?.intervalCm2PerS?.[0], c.diffusion?.intervalCm2PerS?.[1], c.diffusion?.form,
+    c.alpha ?? c.diffusion?.alphaUsed, c.logLog?.slope, c.logLog?.reading, c.peakShift.anodic?.slopeVPerDecade, c.peakShift.cathodic?.slopeVPerDecade,
+    c.rateConstant?.k0CmPerS, c.rateConstant?.lowerBoundCmPerS, c.rateConstant?.diffusionOxCm2PerS, c.surface?.coverageFromChargeMolPerCm2,
+    c.surface?.coverageFromSlopeMolPerCm2, c.surface?.ksPerS, c.diagnostics.join('; ')];
+}
+
+/** The results sheet as CSV text (CRLF-free, UTF-8 characters as they are). */
+export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}): string {
+  const parts = [
+    headerLines(result, meta),
+    ['# table: peaks', ...peakTable(result)],
+    ['# table: couples', ...coupleTable(result)],
+    ['# table: k0 per file', ...rateTable(result, result.files)],
+    ['# table: series', row(SERIES_COLUMNS), ...result.series.couples.map((c) => row(seriesRow(c)))],
+  ];
+  if (result.capacitance) {
+    const cd = result.capacitance;
+    parts.push(['# table: double-layer capacitance', row(['Cd_F_per_cm2', 'intercept_A', 'r2']), row([cd.capacitanceFPerCm2, cd.fit?.intercept, cd.fit?.r2])]);
+  }
+  return `${parts.map((p) => p.join('\n')).join('\n\n')}\n`;
+}
+
+/** Drops typed arrays (baseline curves, smoothed traces) so the JSON stays a sheet, not a dump. */
+function plain(_key: string, value: unknown): unknown {
+  return ArrayBuffer.isView(value) ? undefined : value;
+}
+
+/** The results sheet as JSON text: the whole run result without point arrays, plus meta. */
+export function resultsSheetJson(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}): string {
+  return `${JSON.stringify({ sheet: 'halfwave-results', version: 1, ...meta, ...result }, plain, 2)}\n`;
+}
