@@ -161,8 +161,8 @@ function decimalExplanation(c: Candidate, rows: string[], forced: boolean): stri
   if (c.delimiter === ',') return "decimal mark '.' — the delimiter is ',' so unquoted commas cannot be decimal marks";
   const withComma = rows.filter((r) => /\d,\d/.test(r)).length;
   const withPoint = rows.filter((r) => /\d\.\d/.test(r)).length;
-  if (c.decimal === ',') return `decimal mark ',' — ${withComma} of ${rows.length} data lines hold numbers like 1,5`;
-  if (withPoint) return `decimal mark '.' — ${withPoint} of ${rows.length} data lines hold numbers like 1.5`;
+  if (c.decimal === ',') return `decimal mark ',' — ${withComma} of the first ${rows.length} table lines hold numbers like 1,5`;
+  if (withPoint) return `decimal mark '.' — ${withPoint} of the first ${rows.length} table lines hold numbers like 1.5`;
   return "decimal mark '.' — the numbers have no fractional part, so either mark reads them the same";
 }
 

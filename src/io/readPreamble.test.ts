@@ -9,6 +9,13 @@ describe('readPreamble', () => {
     expect(r.metadata).toEqual({ Operator: 'A. Tester', Sample: 'invented couple', Electrode: 'Pt disc', Note: 'first run', 'Note (2)': 'second' });
   });
 
+  it('keeps commas inside values and does not split prose at a comma', () => {
+    const r = readPreamble(['Demo export (simulated data, see README.md)', 'Working electrode: carbon paste, 3 mm disk (0.0707 cm2)', 'Area;0,0707;cm2']);
+    expect(r.metadata).toEqual({ 'Working electrode': 'carbon paste, 3 mm disk (0.0707 cm2)', Area: '0,0707 cm2' });
+    expect(r.areaCm2?.value).toBeCloseTo(0.0707, 12);
+    expect(r.areaCm2?.line).toBe(2);
+  });
+
   const rates: [string, number][] = [
     ['scan rate = 100 mV/s', 0.1],
     ['Scan rate: 0,05 V/s', 0.05],

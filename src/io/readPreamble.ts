@@ -37,18 +37,27 @@ export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
     if (!out.referenceElectrode && /\bref(erence)?\b|^re$/.test(key) && !/\d\s*(v|mv)\b/i.test(value)) out.referenceElectrode = { value, line };
     if (/temp/.test(key)) out.temperatureK ??= readTemperature(`${key} ${value}`, line, text);
     if (/area/.test(key)) out.areaCm2 ??= readArea(`${key} ${value}`, line, text);
+    // "Working electrode: carbon paste, 3 mm disk (0.0707 cm2)": an area in squared units.
+    const squared = /(\d+(?:[.,]\d+)?(?:[eE][+-]?\d+)?)\s*(cm\^?2|cm²|mm\^?2|mm²)/.exec(value);
+    if (squared && /electrode|disk|disc|\bwe\b/.test(key)) out.areaCm2 ??= readArea(squared[0], line, text);
     if (/conc|^c$|^c0$/.test(key)) out.concentrationMolPerCm3 ??= readConcentration(`${key} ${value}`, line, text);
   });
   return out;
 }
 
+/**
+ * "Key: value" and "Key = value" first; otherwise a delimited "Key;value;unit" line, whose key
+ * must look like a label (short, no unbalanced bracket), so prose with a comma is not split.
+ */
 function splitKeyValue(text: string): { key: string; value: string } | null {
-  const m = /^([^:=\t;,]{1,60}?)\s*(?::|=|\t|;|,)\s*(.*)$/.exec(text);
-  if (!m) return null;
-  const key = (m[1] as string).trim();
-  const value = (m[2] as string).replace(/[;,\t]+/g, ' ').trim();
-  if (!key || /^\d/.test(key)) return null;
-  return { key, value };
+  const named = /^([^:=]{1,60}?)\s*[:=]\s*(.*)$/.exec(text);
+  if (named && !/^\d/.test(named[1] as string) && !/[([][^)\]]*$/.test(named[1] as string)) {
+    return { key: (named[1] as string).trim(), value: (named[2] as string).replace(/[;,\t\s]+$/, '').trim() };
+  }
+  const fields = text.split(/\t|;|,(?!\d)/).map((f) => f.trim()).filter(Boolean);
+  const key = fields[0] ?? '';
+  if (fields.length < 2 || fields.length > 4 || key.length > 40 || /^\d/.test(key) || /[([][^)\]]*$/.test(key)) return null;
+  return { key, value: fields.slice(1).join(' ') };
 }
 
 function addMetadata(md: Record<string, string>, key: string, value: string): void {
