@@ -1,0 +1,75 @@
+/**
+ * Helpers for the workbench flow specs: how many demo files the build bundles, waiting until the
+ * app has read and analysed them, and reading what Plotly drew (Plotly keeps the figure on its
+ * host element as `data` and `layout`).
+ */
+import { readdirSync } from 'node:fs';
+import { resolve } from 'node:path';
+import type { Page } from 'playwright-core';
+import { simulateCv } from '../../src/core/simulation';
+
+export function demoFileCount(): number {
+  return readdirSync(resolve(import.meta.dirname, '../../demo-data')).filter((f) => /\.(csv|txt|tsv|dat)$/.test(f)).length;
+}
+
+/** Waits until `count` file rows are ready and the selected file's couples table is shown. */
+export async function waitForFiles(page: Page, count: number, timeout = 90_000): Promise<void> {
+  await page.waitForFunction(
+    (n) => document.querySelectorAll('[data-testid=file-row][data-status=ready], [data-testid=file-row][data-status=error]').length >= n
+      && !document.querySelector('[data-testid=import-progress]'),
+    count, { timeout, polling: 250 },
+  );
+  await page.getByTestId('couples-table').waitFor({ timeout });
+  await waitForAnalysis(page);
+}
+
+/** Waits until the selected file's analysis is up to date. */
+export async function waitForAnalysis(page: Page): Promise<void> {
+  await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent === 'analysis up to date', null, { timeout: 30_000, polling: 100 });
+}
+
+export interface DrawnTrace {
+  name: string;
+  x: (number | null)[];
+  y: (number | null)[];
+}
+
+export interface DrawnPlot {
+  traces: DrawnTrace[];
+  /** Shown x range [left, right]: left > right when the potential axis runs right to left. */
+  xRange: [number, number];
+  yTitle: string;
+  renders: number;
+}
+
+export async function readPlot(page: Page, testId = 'trace-plot'): Promise<DrawnPlot> {
+  return page.evaluate((id) => {
+    type Host = HTMLElement & {
+      data?: { name: string; x: unknown; y: unknown }[];
+      layout?: { xaxis?: { range?: [number, number] }; yaxis?: { title?: { text?: string } } };
+    };
+    const el = document.querySelector(`[data-testid=${id}]`) as Host | null;
+    const traces = (el?.data ?? []).map((d) => ({ name: d.name, x: Array.from(d.x as ArrayLike<number | null>), y: Array.from(d.y as ArrayLike<number | null>) }));
+    const range = el?.layout?.xaxis?.range ?? [Number.NaN, Number.NaN];
+    return { traces, xRange: [Number(range[0]), Number(range[1])] as [number, number], yTitle: el?.layout?.yaxis?.title?.text ?? '', renders: Number(el?.dataset.renders ?? 0) };
+  }, testId);
+}
+
+/** Waits for the plot to be drawn again after an action. */
+export async function waitForRedraw(page: Page, before: number, testId = 'trace-plot'): Promise<void> {
+  await page.waitForFunction(([id, n]) => Number((document.querySelector(`[data-testid=${id}]`) as HTMLElement | null)?.dataset.renders ?? 0) > Number(n), [testId, before] as const, { timeout: 30_000, polling: 100 });
+}
+
+/** A reversible one-electron couple from our own simulator, as a CSV export (time, E, I). */
+export function simulatedCsv(scanRateVPerS = 0.1): string {
+  const sim = simulateCv({ k0CmPerS: Infinity, scanRateVPerS });
+  const rows = ['Time (s),Potential (V),Current (A)'];
+  for (let i = 0; i < sim.potentialV.length; i++) rows.push(`${sim.timeS[i]},${sim.potentialV[i]},${sim.currentA[i]}`);
+  return `${rows.join('\n')}\n`;
+}
+
+/** Text of every cell with the test id in the couples table, as numbers. */
+export async function coupleCells(page: Page, testId: string): Promise<number[]> {
+  const texts = await page.getByTestId('couples-table').getByTestId(testId).allTextContents();
+  return texts.map(Number);
+}

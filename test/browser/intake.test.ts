@@ -1,0 +1,78 @@
+/**
+ * Intake flow: pick files through the file input (a good simulated export and two bad files),
+ * see each bad file's error beside it while everything already loaded stays, check the numbers of
+ * the new file against Randles–Ševčík, then override a detected unit and read the file again.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { coupleCells, demoFileCount, simulatedCsv, waitForAnalysis, waitForFiles } from './appHelpers';
+import { openApp, type OpenedApp } from './harness';
+
+const PNG_HEADER = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 0, 0, 0, 1, 0, 0, 0, 1]);
+
+describe('picking files', () => {
+  let app: OpenedApp;
+  const demo = demoFileCount();
+  beforeAll(async () => {
+    app = await openApp();
+    await waitForFiles(app.page, demo);
+    await app.page.getByTestId('file-input').setInputFiles([
+      { name: 'sim-reversible-100mVs.csv', mimeType: 'text/csv', buffer: Buffer.from(simulatedCsv(0.1)) },
+      { name: 'bench-photo.png', mimeType: 'image/png', buffer: PNG_HEADER },
+      { name: 'lab-notes.txt', mimeType: 'text/plain', buffer: Buffer.from('Electrode polished with alumina.\nNo data in this file.\n') },
+    ]);
+    await waitForFiles(app.page, demo + 3);
+  });
+  afterAll(async () => app?.close());
+
+  it('shows a clear error beside each bad file and keeps every loaded file', async () => {
+    const page = app.page;
+    for (const name of ['bench-photo.png', 'lab-notes.txt']) {
+      const row = page.locator(`[data-testid=file-row][data-file-name="${name}"]`);
+      expect(await row.getAttribute('data-status')).toBe('error');
+      expect(await row.getByTestId('file-error').textContent()).toContain(name);
+    }
+    expect(await page.locator('[data-testid=file-row][data-status=ready]').count()).toBe(demo + 1);
+  });
+
+  // Simulated Nernstian couple, E°′ = 0 V, 1 mM, 0.0707 cm², D = 1e-5 cm²/s, 0.1 V/s, 25 °C.
+  // E½ = E°′ for equal D (Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), §6.2.1, from
+  // memory); ip = 2.6865e5·n^3/2·A·C·D^½·v^½ = 18.99 µA (Randles–Ševčík, check-values.md §2);
+  // ΔEp ≈ 2.22·RT/nF = 57 mV for a large switching offset (Nicholson 1965, from memory) ± 4 mV.
+  it('analyses the picked file: E½, ipc and ΔEp match the published reversible values', async () => {
+    const page = app.page;
+    await page.locator('[data-testid=file-row][data-file-name="sim-reversible-100mVs.csv"] .file-name').click();
+    await waitForAnalysis(page);
+    const [eHalf] = await coupleCells(page, 'cell-ehalf');
+    const [ipc] = await coupleCells(page, 'cell-ipc');
+    const [dep] = await coupleCells(page, 'cell-dep');
+    expect(Math.abs(eHalf as number)).toBeLessThan(0.003);
+    expect(await page.getByTestId('couples-table').locator('th', { hasText: 'ipc /' }).textContent()).toBe('ipc / µA');
+    expect(Math.abs((ipc as number) / 18.99 - 1)).toBeLessThan(0.03);
+    expect(Math.abs((dep as number) - 57)).toBeLessThan(4);
+  });
+
+  it('shows each importer decision and reads the file again with an overridden current unit', async () => {
+    const page = app.page;
+    await page.getByTestId('tab-import').click();
+    const unitRow = page.getByTestId('guess-current-unit');
+    expect(await unitRow.locator('td').nth(0).textContent()).toBe('A');
+    expect(await unitRow.locator('td').nth(1).textContent()).toBe('detected');
+    expect(await page.getByTestId('column-roles').textContent()).toMatch(/potential/);
+    await page.getByTestId('override-current-unit').selectOption('mA');
+    await page.getByTestId('reimport').click();
+    await page.waitForFunction(() => document.querySelector('[data-testid=guess-current-unit] td:nth-of-type(2)')?.textContent === 'you', null, { timeout: 30_000 });
+    expect(await unitRow.locator('td').nth(0).textContent()).toBe('mA');
+    await waitForAnalysis(page);
+    await page.getByTestId('tab-couples').click();
+    // Same numbers read as mA instead of A: the peak current is now 1000× smaller, 18.99 nA.
+    expect(await page.getByTestId('couples-table').locator('th', { hasText: 'ipc /' }).textContent()).toBe('ipc / nA');
+    const [ipc] = await coupleCells(page, 'cell-ipc');
+    expect(Math.abs((ipc as number) / 18.99 - 1)).toBeLessThan(0.03);
+  });
+
+  it('stayed free of console errors, page errors and outside requests', () => {
+    expect(app.consoleErrors).toEqual([]);
+    expect(app.pageErrors).toEqual([]);
+    expect(app.outsideRequests).toEqual([]);
+  });
+});
