@@ -25,7 +25,7 @@ interface Input {
   preamble: PreambleValue | null;
 }
 
-const fmt = (v: number) => `${+(v * 1000).toPrecision(4)} mV/s`;
+const fmt = (v: number) => (v >= 1 ? `${+v.toPrecision(4)} V/s` : `${+(v * 1000).toPrecision(4)} mV/s`);
 
 export function chooseScanRate(input: Input, warnings: ImportWarning[]): ScanRateChoice {
   const { fileName } = input;
