@@ -117,7 +117,8 @@ function runTimeLoop(p: CvSimulationInput, model: FaradaicModel, appliedV: Float
       model.finishStep(eInt);
       ePrev = eNow;
       eNow = eInt;
-      if (step === 0) writePoint(out, 0, eInt, iF, iC);
+      // Point 0 reuses the first step's currents at its own applied potential (see header).
+      if (step === 0) writePoint(out, 0, (appliedV[0] as number) - (iF + iC) * p.uncompensatedOhm, iF, iC);
     }
     writePoint(out, k, eNow, iF, iC);
   }
