@@ -109,6 +109,20 @@ export function savitzkyGolayCoefficients(
   return out;
 }
 
+/** Weights depend only on (window, order, derivative, position): computed once, then reused. */
+const weightCache = new Map<string, Float64Array>();
+
+function cachedCoefficients(window: number, order: number, derivative: number, position: number): Float64Array {
+  const key = `${window}/${order}/${derivative}/${position}`;
+  let w = weightCache.get(key);
+  if (!w) {
+    w = savitzkyGolayCoefficients(window, order, { derivative, position });
+    if (weightCache.size > 4096) weightCache.clear();
+    weightCache.set(key, w);
+  }
+  return w;
+}
+
 function applyFilter(y: ArrayLike<number>, window: number, order: number, derivative: number): Float64Array {
   const n = y.length;
   const out = new Float64Array(n);
@@ -117,15 +131,15 @@ function applyFilter(y: ArrayLike<number>, window: number, order: number, deriva
     throw new AnalysisError('TOO_FEW_POINTS', `Savitzky–Golay window ${window} is longer than the ${n}-point signal`);
   }
   const m = (window - 1) / 2;
-  const centre = savitzkyGolayCoefficients(window, order, { derivative });
+  const centre = cachedCoefficients(window, order, derivative, 0);
   for (let i = m; i < n - m; i++) {
     let v = 0;
     for (let j = 0; j < window; j++) v += centre[j]! * (y[i - m + j] as number);
     out[i] = v;
   }
   for (let e = 0; e < m; e++) {
-    const left = savitzkyGolayCoefficients(window, order, { derivative, position: e - m });
-    const right = savitzkyGolayCoefficients(window, order, { derivative, position: m - e });
+    const left = cachedCoefficients(window, order, derivative, e - m);
+    const right = cachedCoefficients(window, order, derivative, m - e);
     let a = 0;
     let b = 0;
     for (let j = 0; j < window; j++) {
