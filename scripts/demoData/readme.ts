@@ -96,7 +96,8 @@ ferrocenyl-thiol monolayer on a 2 mm gold disk that will serve as the reference 
 coating. All potentials are against Ag/AgCl (3 M KCl), 25 °C; currents follow the IUPAC convention
 (anodic positive) in every file.
 
-**Start.** \`npm start\` opens the workbench with this scenario loaded. From the command line:
+**Start.** \`npm start\`, then open http://127.0.0.1:5173: the workbench starts with this scenario
+loaded. From the command line:
 \`npm run --silent cli -- analyze demo-data --inspect\`. Regenerate with \`npm run demo-data\`.
 
 Each file carries a double-layer charging background, an uncompensated resistance and seeded
