@@ -78,4 +78,15 @@ describe('simulateCv, E mechanism, reversible limit', () => {
     }
     expect(maxA / -minO).toBeCloseTo(1, 6);
   });
+
+  // Nernst equation (Bard & Faulkner 2nd ed. §2.1): with both forms present, the rest potential
+  // is E°′ + (RT/nF) ln(C_O/C_R); a sweep started there begins without a faradaic transient.
+  it('with both forms present a sweep started at the Nernst rest potential starts at zero current', () => {
+    const restV = Math.log(0.25e-6 / 1e-6) / f;
+    const mixed = { ...base, k0CmPerS: 0.1, concentrationOMolPerCm3: 0.25e-6, concentrationRMolPerCm3: 1e-6, startV: restV, switchV: restV + 0.05, stepV: 1e-5 };
+    const r = simulateCv(mixed, { substepsPerPoint: 1 });
+    const offRest = simulateCv({ ...mixed, startV: restV - 0.05, switchV: restV }, { substepsPerPoint: 1 });
+    // One 10 µV step from rest gives a tiny current; 50 mV off rest gives a large initial transient.
+    expect(Math.abs(r.currentA[1] as number)).toBeLessThan(1e-3 * Math.abs(offRest.currentA[1] as number));
+  });
 });
