@@ -63,11 +63,11 @@ describe('halfwave analyze --inspect', () => {
     expect(missing.stderr).toContain('no_such_file.csv');
   });
 
-  it('without --inspect, says plainly that analysis output is not in this build (exit 1)', async () => {
-    const r = await run('analyze', join(FIX, 'cv_tab_utf16le.txt'));
-    expect(r.code).toBe(1);
+  it('without --inspect, a file the importer rejects ends in one stderr line naming it, exit 2', async () => {
+    const r = await run('analyze', join(FIX, 'bad_constant_potential.csv'));
+    expect(r.code).toBe(2);
     expect(r.stdout).toBe('');
-    expect(r.stderr).toContain('analysis output is not available in this build');
+    expect(r.stderr.trim().split('\n')).toEqual([expect.stringContaining('bad_constant_potential.csv (line 2, column 1): the potential column never changes')]);
   });
 
   it('parseColumns turns 1-based pairs into 0-based overrides', () => {
