@@ -50,6 +50,16 @@ describe('findSweepSegments (common practice, no source: hysteresis vertex detec
     expect(findSweepSegments(e, { cycleColumn: col }).cycles.map((c) => c.start)).toEqual([0, 20]);
   });
 
+  it('a cycle column that turns over one point after the vertex makes no sliver sweep', () => {
+    const e = triangle(0, [1, 0, 1, 0], 0.1);
+    // Vertex back at 0 V is index 20; this column starts cycle 2 one point later.
+    const col = Array.from(e, (_, i) => (i <= 20 ? 1 : 2));
+    const { segments, cycles } = findSweepSegments(e, { cycleColumn: col });
+    expect(cycles.map((c) => c.start)).toEqual([0, 20]);
+    expect(segments.length).toBe(4);
+    expect(Math.min(...segments.map((s) => s.end - s.start))).toBe(11);
+  });
+
   it('rejects a constant potential and a single point', () => {
     expect(() => findSweepSegments(new Float64Array([0.1, 0.1, 0.1]))).toThrow(/never changes/);
     expect(() => findSweepSegments(new Float64Array([0.1]))).toThrow(/at least 2/);

@@ -35,7 +35,9 @@ export function findSweepSegments(potentialV: ArrayLike<number>, options: FindSw
     const direction: SweepDirection = (potentialV[b] as number) >= (potentialV[a] as number) ? 'positive' : 'negative';
     raw.push({ start: a, end: b + 1, direction });
   }
-  const cycleStarts = options.cycleColumn ? cycleStartsFromColumn(options.cycleColumn) : cycleStartsFromTrace(potentialV, raw);
+  const cycleStarts = options.cycleColumn
+    ? snapToVertices(cycleStartsFromColumn(options.cycleColumn), vertices)
+    : cycleStartsFromTrace(potentialV, raw);
   return assignCycles(raw, cycleStarts, n);
 }
 
@@ -81,6 +83,25 @@ function cycleStartsFromColumn(column: ArrayLike<number>): number[] {
     if (column[i] !== column[i - 1]) starts.push(i);
   }
   return starts;
+}
+
+/**
+ * Instruments disagree on whether the vertex point closes one cycle or opens the next, so a
+ * cycle-column boundary within a few points of a vertex is moved onto it; otherwise a sliver
+ * sweep of one or two points would appear at the joint.
+ */
+function snapToVertices(starts: number[], vertices: number[], reach = 3): number[] {
+  const snapped = starts.map((s) => {
+    if (s === 0) return 0;
+    let best = s;
+    let bestDistance = reach + 1;
+    for (const v of vertices) {
+      const d = Math.abs(v - s);
+      if (d < bestDistance) [best, bestDistance] = [v, d];
+    }
+    return best;
+  });
+  return snapped.filter((s, k) => k === 0 || s > (snapped[k - 1] as number));
 }
 
 function cycleStartsFromTrace(e: ArrayLike<number>, segs: Omit<SweepSegment, 'cycle'>[]): number[] {
