@@ -5,6 +5,7 @@
  */
 import type { SeriesFileInput } from '../core/analysis/seriesTypes';
 import { CancelledError } from '../worker/errors';
+import { exportRequest } from './exportRequest';
 import { celsiusToKelvin, millimolarToMolPerCm3 } from './settings';
 import { toUserError, type SeriesSlice, type SliceCreator } from './types';
 
@@ -58,6 +59,19 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
       } finally {
         if (running.get(group) === ctrl) running.delete(group);
       }
+    },
+
+    currentGroup() {
+      const s = get();
+      const groups = s.groups();
+      if (s.mainView === 'series') return s.selectedGroup && groups.includes(s.selectedGroup) ? s.selectedGroup : (groups[0] ?? null);
+      const file = s.selectedFileId ? s.files[s.selectedFileId] : undefined;
+      return file?.measurement ? file.group : (groups[0] ?? null);
+    },
+
+    async exportGroup(group, format) {
+      const out = await deps.client.request('export', exportRequest(get(), group, format, new Date().toISOString()));
+      return out.text;
     },
 
     scheduleGroup(group, delayMs = 150) {

@@ -15,8 +15,8 @@ export interface ChemistrySettings {
   concentrationMM: number;
   /** Cell temperature (°C). */
   temperatureC: number;
-  /** Transfer coefficient α, for the Laviron analysis. */
-  alpha: number;
+  /** Transfer coefficient α given by the user; null = measured from the data (else 0.5). */
+  alpha: number | null;
   /** Uncompensated resistance Ru (Ω) for iR correction; 0 = none. */
   resistanceOhm: number;
 }
@@ -52,7 +52,7 @@ export const defaultSettings: AnalysisSettings = {
   forwardBaseline: 'linear',
   returnBaseline: 'nicholson',
   minSignalToNoise: 8,
-  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: 0.5, resistanceOhm: 0 },
+  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: null, resistanceOhm: 0 },
   reference: { fileReference: 'AgCl-3M', displayReference: 'AgCl-3M', pH: 7, ferroceneHalfWaveV: null },
 };
 
@@ -102,7 +102,7 @@ export function mergeSettings(base: AnalysisSettings, stored: unknown): Analysis
       areaCm2: num(chem.areaCm2, base.chemistry.areaCm2),
       concentrationMM: num(chem.concentrationMM, base.chemistry.concentrationMM),
       temperatureC: num(chem.temperatureC, base.chemistry.temperatureC),
-      alpha: num(chem.alpha, base.chemistry.alpha),
+      alpha: chem.alpha === null ? null : num(chem.alpha, base.chemistry.alpha),
       resistanceOhm: num(chem.resistanceOhm, base.chemistry.resistanceOhm),
     },
     reference: {

@@ -122,6 +122,10 @@ export interface SeriesSlice {
   /** Groups of the loaded files, in load order. */
   groups(): string[];
   analyzeGroup(group: string): Promise<void>;
+  /** The group the screen is about: the series view's choice, else the selected file's group. */
+  currentGroup(): string | null;
+  /** Results sheet of a group as CSV or JSON text, made in the worker. */
+  exportGroup(group: string, format: 'csv' | 'json'): Promise<string>;
   /** Re-runs the group's series after a short quiet time (edits come in bursts). */
   scheduleGroup(group: string, delayMs?: number): void;
 }

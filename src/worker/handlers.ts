@@ -9,6 +9,7 @@ import { iRCorrect } from '../core/conventions/iRCorrect';
 import { findSweepSegments } from '../core/sweeps/findSweepSegments';
 import { importVoltammogramAsync } from '../io';
 import { CancelledError } from './errors';
+import { exportRun } from './exportRun';
 import type { RequestInput, RequestOutput, RequestType } from './protocol';
 
 export interface HandlerContext {
@@ -41,6 +42,7 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
     return { analysis, correctedPotentialV };
   },
   series: (input) => analyzeSeries(input.files, input.options),
+  export: (input) => ({ text: exportRun(input) }),
 };
 
 /** Hex SHA-256 of the bytes (FIPS 180-4), or null where Web Crypto is unavailable. */

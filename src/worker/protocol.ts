@@ -11,6 +11,7 @@ import type { AnalyzeVoltammogramOptions, VoltammogramAnalysis } from '../core/a
 import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSweepSegments';
 import type { Voltammogram } from '../core/types';
 import type { ImportOverrides, ImportResult } from '../io/types';
+import type { ExportRunInput } from './exportRun';
 
 export interface RequestMap {
   /** Split a potential trace into sweeps and cycles (core/sweeps/findSweepSegments). */
@@ -36,6 +37,11 @@ export interface RequestMap {
   series: {
     input: { files: SeriesFileInput[]; options: AnalyzeSeriesOptions };
     output: SeriesAnalysis;
+  };
+  /** Results sheet (CSV or JSON) of one group, through core analyzeRun and io/exportResults. */
+  export: {
+    input: ExportRunInput;
+    output: { text: string };
   };
 }
 

@@ -3,6 +3,7 @@ import { useRef } from 'react';
 import { loadSession, saveSession } from '../../state/commands';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import { downloadText, stamp } from '../download';
+import { ExportButtons } from './ExportButtons';
 
 export function TopBar() {
   const canUndo = useHalfwave((s) => s.past.length > 0);
@@ -35,6 +36,7 @@ export function TopBar() {
         <button type="button" role="radio" aria-checked={mainView === 'series'} data-testid="view-series" onClick={() => act.setView({ mainView: 'series' })}>Series</button>
       </div>
       <span className="spacer" />
+      <ExportButtons />
       <div className="group" role="group" aria-label="Session">
         <span className="group-label">Session</span>
         <button type="button" data-testid="save-session" onClick={() => void save(false)} title="Settings, file names and checksums">Save</button>
