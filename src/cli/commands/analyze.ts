@@ -9,6 +9,7 @@ import type { CliCommand, CliIo } from '../command';
 import { UsageError } from '../errors';
 import { formatInspectText, inspectJson } from '../inspect';
 import { readInputs } from '../readInputs';
+import { runAnalysis } from '../analyzeReport';
 import { parseUnitOf } from '../../io';
 import type { CurrentUnit, DecimalMark, Delimiter, ImportOverrides, PotentialUnit, TextEncoding, TimeUnit } from '../../io';
 
@@ -73,16 +74,10 @@ export const analyzeCommand: CliCommand = {
     const args = parseAnalyzeArgs(parseArgs(argv, SPEC));
     if (args.inspect) return inspect(args, io);
     const { measurements } = readInputs(args.files, { overrides: args.overrides });
-    // ANALYSIS BRANCH: replace the next line by `return runAnalysis(measurements, args, io);`
-    // imported from '../analyzeReport'.
-    return analysisUnavailable(measurements.length, io);
+    // ANALYSIS BRANCH (analysis helper): the run, its JSON/table output and the results sheet.
+    return runAnalysis(measurements, args, io);
   },
 };
-
-function analysisUnavailable(_count: number, io: CliIo): number {
-  io.stderr('halfwave analyze: analysis output is not available in this build (use --inspect to check the import)\n');
-  return 1;
-}
 
 function inspect(args: AnalyzeArgs, io: CliIo): number {
   const read = readInputs(args.files, { overrides: args.overrides, keepGoing: true });

@@ -1,0 +1,111 @@
+/**
+ * End-to-end check of `halfwave analyze … --json` on files written by this project's simulator
+ * (src/core/simulation; its own tests tie it to Randles–Ševčík 0.4463, Nicholson's ΔEp table and
+ * Laviron's surface wave). Targets from the issue: on noise-free series E½ within 2 mV, D within
+ * 5 %, k° within 30 %, Γ within 5 %; with seeded noise and charging current, twice that.
+ */
+import { createHash } from 'node:crypto';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { simulatedVoltammogram } from '../core/peaks/simulatedVoltammogram';
+import type { CvSimulationInput } from '../core/simulation';
+import { runCli } from './main';
+
+const dir = mkdtempSync(join(tmpdir(), 'halfwave-analyze-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+const RATES = [0.05, 0.1, 0.2, 0.5];
+const D = 1e-5;
+
+/** Writes one CSV per scan rate (time_s, potential_V, current_A) into a fresh folder. */
+function writeSeries(name: string, sim: Partial<CvSimulationInput>, noiseA = 0, cdl = 0): string {
+  const folder = join(dir, name);
+  rmSync(folder, { recursive: true, force: true });
+  mkdirSync(folder);
+  RATES.forEach((v, i) => {
+    const vg = simulatedVoltammogram({ diffusionOCm2PerS: D, diffusionRCm2PerS: D, ...sim, scanRateVPerS: v, doubleLayerFPerCm2: cdl }, { noiseA, seed: 100 + i });
+    const lines = ['time_s,potential_V,current_A'];
+    for (let k = 0; k < vg.potentialV.length; k++) lines.push(`${vg.timeS?.[k]},${vg.potentialV[k]},${vg.currentA[k]}`);
+    writeFileSync(join(folder, `${name}_${String(i + 1).padStart(2, '0')}.csv`), `${lines.join('\n')}\n`);
+  });
+  return folder;
+}
+
+async function cli(args: string[]): Promise<{ code: number; out: string; err: string }> {
+  let out = '';
+  let err = '';
+  const code = await runCli(args, { stdout: (t) => { out += t; }, stderr: (t) => { err += t; } });
+  return { code, out, err };
+}
+
+interface Contract {
+  files: Array<{ file: string; scanRate: number; scanRateSource: string; sha256: string; cycles: Array<{ index: number; peaks: Array<{ direction: string; E: number; ip: number }>; couples: Array<Record<string, number | string | null>> }> }>;
+  series: Array<{ couple: number; slope: number; intercept: number; r2: number; D: number | null; logLogSlope: number; k0: number | null; gamma: number | null; Ehalf: number }>;
+  warnings: string[];
+}
+
+async function analyzeJson(folder: string, extra: string[] = []): Promise<Contract> {
+  const r = await cli(['analyze', folder, '--area', '0.0707', '--conc', '1', '--json', ...extra]);
+  expect(r.err).toBe('');
+  expect(r.code).toBe(0);
+  return JSON.parse(r.out) as Contract;
+}
+
+const rel = (x: number | null | undefined, ref: number) => Math.abs((x ?? Number.NaN) / ref - 1);
+
+describe.each([['noise-free', 0, 0, 1], ['seeded noise and 20 µF/cm² charging', 6e-8, 20e-6, 2]] as const)('analyze --json, %s', (_label, noiseA, cdl, k) => {
+  const tag = k === 1 ? 'clean' : 'noisy';
+  it('reversible series: contract fields, E½ and D', async () => {
+    const doc = await analyzeJson(writeSeries(`rev-${tag}`, { k0CmPerS: Infinity, formalPotentialV: 0.2, startV: 0.5, switchV: -0.1 }, noiseA, cdl));
+    expect(doc.files).toHaveLength(RATES.length);
+    const f = doc.files[0];
+    expect(f?.scanRateSource).toBe('time');
+    expect(f?.scanRate).toBeCloseTo(0.05, 6);
+    const c = f?.cycles[0]?.couples[0];
+    for (const key of ['Epa', 'Epc', 'Ehalf', 'dEp', 'ipa', 'ipc', 'ratio', 'verdict']) expect(c).toHaveProperty(key);
+    expect(Number(c?.ipa)).toBeGreaterThan(0);
+    expect(Number(c?.ipc)).toBeGreaterThan(0);
+    const s = doc.series[0];
+    for (const key of ['couple', 'slope', 'intercept', 'r2', 'D', 'logLogSlope', 'k0', 'gamma']) expect(s).toHaveProperty(key);
+    expect(Math.abs((s?.Ehalf ?? 0) - 0.2)).toBeLessThan(0.002 * k);
+    expect(rel(s?.D, D)).toBeLessThan(0.05 * k);
+    expect(Math.abs((s?.logLogSlope ?? 0) - 0.5)).toBeLessThan(0.05 * k);
+  });
+  it('quasi-reversible series: k° from ΔEp (Nicholson)', async () => {
+    const doc = await analyzeJson(writeSeries(`quasi-${tag}`, { k0CmPerS: 0.01 }, noiseA, cdl));
+    expect(Math.abs(doc.series[0]?.Ehalf ?? 1)).toBeLessThan(0.002 * k);
+    expect(rel(doc.series[0]?.k0, 0.01)).toBeLessThan(0.3 * k);
+  });
+  it('adsorbed layer: Γ', async () => {
+    const doc = await analyzeJson(writeSeries(`surf-${tag}`, { mechanism: 'surface', coverageMolPerCm2: 1e-10, surfaceRatePerS: 1000 }, noiseA / 20, cdl));
+    expect(rel(doc.series[0]?.gamma, 1e-10)).toBeLessThan(0.05 * k);
+    expect(doc.series[0]?.D).toBeNull();
+  });
+});
+
+describe('analyze output options', () => {
+  const folder = writeSeries('opts', { k0CmPerS: Infinity });
+  it('writes the results sheet with the file hash (checked against node:crypto)', async () => {
+    const sheet = join(dir, 'sheet.csv');
+    const r = await cli(['analyze', folder, '--area', '0.0707', '--conc', '1', '--csv', sheet]);
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/Epa \(V\)/);
+    const text = readFileSync(sheet, 'utf8');
+    const first = join(folder, 'opts_01.csv');
+    expect(text).toContain(createHash('sha256').update(readFileSync(first)).digest('hex'));
+    expect(text).toContain('# table: series');
+  });
+  it('reports D as null with a warning when the area is missing', async () => {
+    const r = await cli(['analyze', folder, '--conc', '1', '--json']);
+    const doc = JSON.parse(r.out) as Contract;
+    expect(doc.series[0]?.D).toBeNull();
+    expect(doc.warnings.join(' ')).toMatch(/area/);
+  });
+  it('refuses --ref when the files do not say what they were measured against', async () => {
+    const r = await cli(['analyze', folder, '--ref', 'SHE', '--json']);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/cannot report on SHE/);
+  });
+});

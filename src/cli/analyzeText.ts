@@ -1,0 +1,48 @@
+/** The readable `analyze` report (no --json): a couple table per file and cycle, then the series. */
+import type { AnalyzeRunResult } from '../core/analysis/runTypes';
+import type { SeriesCouple } from '../core/analysis/seriesTypes';
+
+const f = (x: number | null | undefined, digits: number, scale = 1) =>
+  x === null || x === undefined || !Number.isFinite(x) ? '—' : (x * scale).toFixed(digits);
+const e = (x: number | null | undefined, digits = 3) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toExponential(digits - 1));
+
+const COLUMNS: Array<[string, number]> = [
+  ['file', 24], ['v (V/s)', 9], ['cyc', 4], ['Epa (V)', 9], ['Epc (V)', 9], ['E½ (V)', 9], ['ΔEp (mV)', 9], ['ipa (µA)', 10], ['ipc (µA)', 10], ['ratio', 7], ['verdict', 16],
+];
+const line = (cells: string[]) => cells.map((c, i) => c.padEnd(COLUMNS[i]?.[1] ?? 10)).join(' ').trimEnd();
+
+function coupleRows(r: AnalyzeRunResult): string[] {
+  const rows = [line(COLUMNS.map(([h]) => h))];
+  for (const file of r.files) {
+    for (const cy of file.analysis.cycles) {
+      if (!cy.couples.length) rows.push(line([file.fileName.slice(0, 24), f(file.scanRateVPerS, 4), String(cy.index), 'no peaks']));
+      for (const c of cy.couples) {
+        rows.push(line([file.fileName.slice(0, 24), f(file.scanRateVPerS, 4), String(cy.index), f(c.epaV, 4), f(c.epcV, 4), f(c.eHalfV, 4),
+          f(c.deltaEpV, 1, 1000), f(c.ipaA, 3, 1e6), f(c.ipcA, 3, 1e6), f(c.ratio, 3), c.verdict.category]));
+      }
+    }
+  }
+  return rows;
+}
+
+function seriesLines(c: SeriesCouple): string[] {
+  const fit = c.forwardFit;
+  const out = [`couple ${c.index}: E½ = ${f(c.eHalfV, 4)} V over ${c.points.length} file(s); ${c.verdict.label}`];
+  if (fit) {
+    const ci = fit.slopeInterval ? ` (95 % CI ${e(fit.slopeInterval[0])} to ${e(fit.slopeInterval[1])})` : '';
+    out.push(`  |ip| vs v^½: slope ${e(fit.slope)} A·(V/s)^-½${ci}, intercept ${e(fit.intercept)} A, R² ${f(fit.r2, 5)}`);
+  }
+  out.push(`  D = ${e(c.diffusion?.diffusionCm2PerS)} cm²/s   log–log slope = ${f(c.logLog?.slope, 3)}   k° = ${e(c.rateConstant?.k0CmPerS)} cm/s   Γ = ${e(c.surface?.coverageFromChargeMolPerCm2 ?? c.surface?.coverageFromSlopeMolPerCm2)} mol/cm²`);
+  for (const d of c.diagnostics) out.push(`  · ${d}`);
+  return out;
+}
+
+export function analyzeText(r: AnalyzeRunResult): string {
+  const scale = r.reference.output ? `potentials vs ${r.reference.output}` : "potentials on each file's own reference scale";
+  const parts = [`${scale}; currents as positive magnitudes`, '', ...coupleRows(r), '', 'Series:'];
+  if (!r.series.couples.length) parts.push('  no couples found');
+  for (const c of r.series.couples) parts.push(...seriesLines(c));
+  if (r.capacitance) parts.push('', `Double-layer capacitance: ${f(r.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
+  if (r.warnings.length) parts.push('', 'Warnings:', ...r.warnings.map((w) => `  - ${w.fileName ? `${w.fileName}: ` : ''}${w.message}`));
+  return `${parts.join('\n')}\n`;
+}
