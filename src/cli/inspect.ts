@@ -29,7 +29,8 @@ function formatOne(path: string, r: ImportResult): string {
   });
   out += row('units', [d.potentialUnit.explanation, d.currentUnit.explanation, d.timeUnit?.explanation].filter(Boolean).join('; '));
   out += row('convention', strip(d.currentConvention.explanation, 'current convention'));
-  out += row('rows', `${d.rowsRead} read, ${d.rowsSkipped} skipped (table on lines ${d.tableLines.first}–${d.tableLines.last})`);
+  const footer = d.footer.lines ? `; ${d.footer.lines} footer line(s) from line ${d.footer.firstLine} left out` : '';
+  out += row('rows', `${d.rowsRead} read, ${d.rowsSkipped} skipped (table on lines ${d.tableLines.first}–${d.tableLines.last}${footer})`);
   out += row('cycles', `${d.cycleCount} (${m.segments.length} sweeps)`);
   out += row('scan rate', `${strip(d.scanRate.explanation, 'scan rate')}${m.scanRateSource ? ` [source: ${m.scanRateSource}]` : ''}`);
   if (m.referenceElectrode) out += row('reference', m.referenceElectrode);

@@ -70,6 +70,8 @@ export interface ImportDetection {
   tableLines: { first: number; last: number };
   rowsRead: number;
   rowsSkipped: number;
+  /** Non-numeric lines after the last data row (left out, not counted as skipped). */
+  footer: { lines: number; firstLine: number | null };
   cycleCount: number;
 }
 
