@@ -9,8 +9,7 @@ import type { CycleRange } from '../types';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { locatePeaksInSweep, type PeakCandidate } from '../peaks/locatePeaksInSweep';
 import { measurePeak } from '../peaks/measurePeak';
-import { baselineForPeak } from '../baseline/baselineForPeak';
-import type { BaselineCurve } from './types';
+import { baselineForPeak, type BaselineRef } from '../baseline/baselineForPeak';
 import { pairPeaksIntoCouples, type PeakPair } from '../couples/pairPeaksIntoCouples';
 import { buildCouple } from '../couples/buildCouple';
 import { thermalVoltageV } from '../constants';
@@ -33,18 +32,20 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   }
   const firstSeg = segIdx[0];
   const ordered = [...candidates].sort((a, b) => a.index - b.index);
-  const curves = new Map<PeakCandidate, BaselineCurve>();
+  const refs = new Map<PeakCandidate, BaselineRef>();
   const measured = new Map<PeakCandidate, PeakResult>();
   for (const cand of ordered) {
     const onFirst = cand.segmentIndex === firstSeg;
     const spec = findSpec(o.baselines, cand, cycle.index);
     const method = chooseMethod(spec, onFirst, o, cand, ordered, partner);
     const fwd = partner.get(cand);
-    const forward = method === 'nicholson' && fwd && curves.has(fwd) ? { peak: fwd, baseline: curves.get(fwd)! } : null;
+    const forward = method === 'nicholson' && fwd ? (refs.get(fwd) ?? null) : null;
+    const before = previousOnSweep(cand, ordered);
+    const previous = method === 'nicholson' && spec === null && before ? (refs.get(before) ?? null) : null;
     const marginPoints = footMarginPoints(sig, cand, o);
-    const outcome = baselineForPeak(sig, cand, { method, spec, regionStart: regionStartFor(sig, cand, ordered), marginPoints, forward });
-    if (outcome.fallbackReason) warn('BASELINE_FALLBACK', `${cand.direction} peak at ${mv(cand.potentialV)}: Nicholson baseline not possible (${outcome.fallbackReason}); linear pre-peak line used`);
-    curves.set(cand, outcome.curve);
+    const outcome = baselineForPeak(sig, cand, { method, spec, regionStart: regionStartFor(sig, cand, ordered), marginPoints, forward, previous });
+    if (outcome.fallbackReason) warn('BASELINE_FALLBACK', `${cand.direction} peak at ${mv(cand.potentialV)}: extended-decay baseline not possible (${outcome.fallbackReason}); linear pre-peak line used`);
+    refs.set(cand, { peak: cand, evaluate: outcome.evaluate });
     const peak = measurePeak(sig, cand, outcome.curve, onFirst);
     if (peak) measured.set(cand, peak);
     else warn('LOW_SIGNAL', `${cand.direction} feature at ${mv(cand.potentialV)} does not rise above its baseline; dropped`);
@@ -73,11 +74,22 @@ function findSpec(specs: BaselineSpec[], c: PeakCandidate, cycle: number): Basel
   return specs.find((s) => s.direction === c.direction && (s.cycle === undefined || s.cycle === cycle) && c.potentialV >= Math.min(s.fromV, s.toV) && c.potentialV <= Math.max(s.fromV, s.toV)) ?? null;
 }
 
-/** Nicholson's extended decay applies to the return peak next to the switch whose partner is the forward sweep's last peak. */
+function previousOnSweep(c: PeakCandidate, all: PeakCandidate[]): PeakCandidate | undefined {
+  return all.filter((p) => p.segmentIndex === c.segmentIndex && p.index < c.index && p.confidence !== 'shoulder').at(-1);
+}
+
+/**
+ * Extended decay (Nicholson's convention) for a wave that follows another peak on its sweep, and
+ * for the return peak next to the switch whose partner is the forward sweep's last peak; the
+ * pre-peak line otherwise. With returnBaseline 'linear' or 'polynomial' only the forward-sweep
+ * rule remains.
+ */
 function chooseMethod(spec: BaselineSpec | null, onFirst: boolean, o: ResolvedAnalyzeOptions, c: PeakCandidate, all: PeakCandidate[], partner: Map<PeakCandidate, PeakCandidate>): BaselineMethod {
   if (spec) return spec.method;
-  if (onFirst) return o.forwardBaseline;
+  const following = previousOnSweep(c, all) !== undefined;
+  if (onFirst) return following && o.forwardBaseline === 'linear' ? 'nicholson' : o.forwardBaseline;
   if (o.returnBaseline !== 'nicholson') return o.returnBaseline;
+  if (following) return 'nicholson';
   const fwd = partner.get(c);
   const firstOnSweep = all.find((p) => p.segmentIndex === c.segmentIndex) === c;
   const lastOnForward = fwd ? all.filter((p) => p.segmentIndex === fwd.segmentIndex).at(-1) === fwd : false;

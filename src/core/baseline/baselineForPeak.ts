@@ -13,7 +13,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { baselineAt, sampleBaseline } from './baselineCurve';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
-import { nicholsonReturnBaseline } from './nicholsonReturnBaseline';
+import { nicholsonReturnBaseline, type NicholsonReturnBaselineResult } from './nicholsonReturnBaseline';
 import { polynomialBaseline } from './polynomialBaseline';
 import { twoPointBaseline } from './twoPointBaseline';
 
@@ -25,27 +25,44 @@ export interface BaselineRequest {
   /** Points trimmed from the end of an automatic pre-peak window (see findPrePeakWindow.ts). */
   marginPoints: number;
   /** For 'nicholson': the forward peak of the couple and its baseline. */
-  forward: { peak: PeakCandidate; baseline: BaselineCurve } | null;
+  forward: BaselineRef | null;
+  /**
+   * For 'nicholson' on a wave that follows another peak on the same sweep: that peak and its
+   * baseline. The earlier wave's decaying current is fitted between the two and extended under
+   * this one (Nicholson's convention applied within a sweep).
+   */
+  previous?: BaselineRef | null;
+}
+
+/** A peak with the baseline drawn under it and that baseline as a function of point index. */
+export interface BaselineRef {
+  peak: PeakCandidate;
+  /** Baseline current at point k (A), beyond the drawn span where the method extends in time. */
+  evaluate: (index: number) => number | null;
 }
 
 export interface BaselineOutcome {
   curve: BaselineCurve;
+  /** See BaselineRef.evaluate. */
+  evaluate: (index: number) => number | null;
   /** Set when the requested method could not be used. */
   fallbackReason: string | null;
 }
 
 export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request: BaselineRequest): BaselineOutcome {
   const { method, spec } = request;
-  if (method === 'two-point') return { curve: twoPointFromSpec(sig, peak, spec), fallbackReason: null };
+  const sampled = (curve: BaselineCurve, fallbackReason: string | null = null): BaselineOutcome => ({ curve, evaluate: (k) => baselineAt(curve, k), fallbackReason });
+  if (method === 'two-point') return sampled(twoPointFromSpec(sig, peak, spec));
   if (method === 'nicholson') {
     const fw = request.forward;
-    const curve = fw ? nicholsonCurve(sig, peak, fw) : null;
-    if (curve) return { curve, fallbackReason: null };
-    const linear = linearCurve(sig, peak, request, spec);
-    return { curve: linear, fallbackReason: fw ? 'too few points between the forward peak and the switch for the extended decay' : 'no forward peak on the preceding sweep to extend' };
+    const prev = request.previous ?? null;
+    const decay = prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? nicholsonCurve(sig, peak, fw) : null;
+    if (decay) return { curve: decay.curve, evaluate: decay.evaluate, fallbackReason: null };
+    const why = prev ? 'the current after the previous peak does not decay cleanly enough to extend' : fw ? 'too few points between the forward peak and the switch for the extended decay' : 'no forward peak on the preceding sweep to extend';
+    return sampled(linearCurve(sig, peak, request, spec), why);
   }
-  if (method === 'polynomial') return { curve: polynomialCurve(sig, peak, request, spec), fallbackReason: null };
-  return { curve: linearCurve(sig, peak, request, spec), fallbackReason: null };
+  if (method === 'polynomial') return sampled(polynomialCurve(sig, peak, request, spec));
+  return sampled(linearCurve(sig, peak, request, spec));
 }
 
 /** Local (sweep-relative) range [a, b) of the points whose potential lies between two values. */
@@ -118,7 +135,7 @@ export function currentAtPotential(sig: SweepSignals, start: number, end: number
   throw new AnalysisError('OUT_OF_RANGE', `potential ${potentialV} V is not on the peak's sweep`);
 }
 
-function nicholsonCurve(sig: SweepSignals, peak: PeakCandidate, fw: { peak: PeakCandidate; baseline: BaselineCurve }): BaselineCurve | null {
+function nicholsonCurve(sig: SweepSignals, peak: PeakCandidate, fw: BaselineRef): NicholsonReturnBaselineResult | null {
   const fSeg = sig.segments[fw.peak.segmentIndex]!;
   const rSeg = sig.segments[peak.segmentIndex]!;
   const vertex = fSeg.end - 1;
@@ -127,16 +144,35 @@ function nicholsonCurve(sig: SweepSignals, peak: PeakCandidate, fw: { peak: Peak
   let fitStart = vertex;
   while (fitStart > fw.peak.index && Math.abs(sig.potentialV[fitStart - 1]! - ePeak) >= half) fitStart--;
   if (vertex + 1 - fitStart < 5) return null;
-  const bg = (k: number) => baselineAt(fw.baseline, k);
-  const known = bg(fitStart) !== null && bg(vertex) !== null;
+  const known = fw.evaluate(fitStart) !== null && fw.evaluate(vertex) !== null;
+  // A decaying forward background extends past the switch; a sampled line stops at the vertex,
+  // and the charging step measured there then carries its value (held constant).
   return nicholsonReturnBaseline({
     ...sig,
     forwardFitStart: fitStart,
     forwardFitEnd: vertex + 1,
     vertexIndex: vertex,
     spanEnd: rSeg.end,
-    ...(known ? { forwardBackgroundA: (k: number) => bg(k) ?? 0 } : {}),
-  }).curve;
+    ...(known ? { forwardBackgroundA: (k: number) => (k <= vertex || fw.evaluate(k) !== null ? (fw.evaluate(k) ?? 0) : (fw.evaluate(vertex) ?? 0)) } : {}),
+  });
+}
+
+/** Decay of the previous wave, fitted between it and this wave's foot, extended under this wave. */
+function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev: BaselineRef, marginPoints: number): NicholsonReturnBaselineResult | null {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  const y = sig.locatingA.subarray(seg.start, seg.end).map((v) => s * v);
+  const from = prev.peak.index - seg.start + Math.round((peak.index - prev.peak.index) / 5);
+  const w = findPrePeakWindow(y, from, peak.index - seg.start, { noise: sig.noiseA, marginPoints });
+  if (!w || w.end - w.start < 5) return null;
+  const bg = prev.evaluate;
+  if (bg(seg.start + w.start) === null || bg(peak.index) === null) return null;
+  const fit = nicholsonReturnBaseline(
+    { ...sig, forwardFitStart: seg.start + w.start, forwardFitEnd: seg.start + w.end, vertexIndex: seg.start + w.end - 1, spanEnd: seg.end, forwardBackgroundA: (k) => bg(k) ?? 0 },
+    { switchStep: false },
+  );
+  // The earlier wave's current must be decaying in the sweep's direction of interest.
+  return s * fit.cottrellCoefficientA > 0 ? fit : null;
 }
 
 function flatCurve(sig: SweepSignals, peak: PeakCandidate, regionStart: number): BaselineCurve {

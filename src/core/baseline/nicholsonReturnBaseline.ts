@@ -36,6 +36,12 @@ export interface NicholsonReturnBaselineInput extends BaselineTrace {
 export interface NicholsonReturnBaselineOptions {
   /** Return points used to measure the charging step at the switch. @default 3 (at least 1) */
   stepPoints?: number;
+  /**
+   * Measure the charging step after `vertexIndex`. Off when the decay is extended within one sweep
+   * (a wave on the tail of an earlier one), where no switch reverses the charging current.
+   * @default true
+   */
+  switchStep?: boolean;
 }
 
 export interface NicholsonReturnBaselineResult {
@@ -45,6 +51,8 @@ export interface NicholsonReturnBaselineResult {
   constantA: number;
   cottrellCoefficientA: number;
   switchStepA: number;
+  /** The baseline at any point later than t0 (A): the decay keeps going beyond the drawn span. */
+  evaluate: (index: number) => number;
 }
 
 interface DecayFit { a: number; b: number; sse: number }
@@ -120,17 +128,25 @@ export function nicholsonReturnBaseline(
   const t0 = searchT0(t, y, freeConstant);
   const { a, b } = fitDecay(t, y, t0, freeConstant);
   const decay = (k: number) => bg(k) + a + b / Math.sqrt((input.timeS[k] as number) - t0);
-  const stepPoints = Math.max(1, Math.min(options.stepPoints ?? 3, spanEnd - v - 1));
-  const diffs: number[] = [];
-  for (let k = v + 1; k <= v + stepPoints; k++) diffs.push((input.currentA[k] as number) - decay(k));
-  diffs.sort((p, q) => p - q);
-  const step = diffs[Math.floor(diffs.length / 2)] ?? 0;
+  const step = options.switchStep === false ? 0 : switchStep(input, decay, options.stepPoints ?? 3);
   const curve = sampleBaseline(input.potentialV, fs, spanEnd, (k) => decay(k) + (k > v ? step : 0), {
     method: 'nicholson',
     anchors: [anchorAt(input, fs), anchorAt(input, v)],
     description:
-      `forward decay fitted as a + b/√(t − t0) on ${fe - fs} points from ${formatMv(input.potentialV[fs] as number)} to the switch ` +
-      `at ${formatMv(input.potentialV[v] as number)}, extended in time under the return peak; charging step at the switch ${step.toExponential(3)} A`,
+      `decay fitted as a + b/√(t − t0) on ${fe - fs} points from ${formatMv(input.potentialV[fs] as number)} to ` +
+      `${formatMv(input.potentialV[fe - 1] as number)}, extended in time under the peak` +
+      (options.switchStep === false ? '' : `; charging step at the switch ${step.toExponential(3)} A`),
   });
-  return { curve, t0S: t0, constantA: a, cottrellCoefficientA: b, switchStepA: step };
+  const evaluate = (k: number) => decay(k) + (k > v ? step : 0);
+  return { curve, t0S: t0, constantA: a, cottrellCoefficientA: b, switchStepA: step, evaluate };
+}
+
+/** Median difference between the first return points and the extended decay. */
+function switchStep(input: NicholsonReturnBaselineInput, decay: (k: number) => number, points: number): number {
+  const v = input.vertexIndex;
+  const count = Math.max(1, Math.min(points, input.spanEnd - v - 1));
+  const diffs: number[] = [];
+  for (let k = v + 1; k <= v + count; k++) diffs.push((input.currentA[k] as number) - decay(k));
+  diffs.sort((p, q) => p - q);
+  return diffs[Math.floor(diffs.length / 2)] ?? 0;
 }

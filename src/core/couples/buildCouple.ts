@@ -27,6 +27,8 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
   const both = a !== null && c !== null;
   const consecutive = fwd !== null && ret !== null && ret.segmentIndex === fwd.segmentIndex + 1;
   const vertex = fwd ? sig.segments[fwd.segmentIndex]!.end - 1 : -1;
+  // Nicholson's switching-current formula holds only for the couple whose peaks flank the switch.
+  const flanksSwitch = consecutive && !peaks.some((p) => (p.segmentIndex === fwd.segmentIndex && p.index > fwd.index) || (p.segmentIndex === ret.segmentIndex && p.index < ret.index));
   const ratio = fwd && ret ? ret.heightA / fwd.heightA : null;
   const verdict = classifyCouple(
     {
@@ -48,7 +50,7 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
     ipaA: a?.heightA ?? null,
     ipcA: c?.heightA ?? null,
     ratio,
-    nicholsonRatio: consecutive ? empiricalRatio(sig, fwd, ret, vertex) : null,
+    nicholsonRatio: flanksSwitch ? empiricalRatio(sig, fwd, ret, vertex) : null,
     forwardDirection,
     anodicPeak: pair.anodic,
     cathodicPeak: pair.cathodic,
