@@ -69,6 +69,7 @@ function seriesEntry(c: SeriesCouple) {
     })),
     gammaFromSlope: num(c.surface?.coverageFromSlopeMolPerCm2),
     ks: num(c.surface?.ksPerS),
+    electroactiveArea: num(c.electroactiveAreaCm2),
     diagnostics: c.diagnostics,
   };
 }

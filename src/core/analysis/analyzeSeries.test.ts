@@ -130,3 +130,13 @@ describe('analyzeSeries verdict refinement', () => {
     expect(c?.verdict.reasons.some((r) => /per decade/.test(r))).toBe(true);
   });
 });
+
+describe('analyzeSeries electroactive area', () => {
+  // check-values.md §2 (Bard & Faulkner §6.2): the five pairs belong to A = 0.0707 cm² at
+  // D = 7.6e-6 cm²/s and 1 mM; given D, the series returns that area.
+  it('returns 0.0707 cm² for a standard of known D', () => {
+    const files = v.map((s, i) => ({ fileName: `std${i}`, scanRateVPerS: s, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: rev(s), ipcA: rev(s) }]) }));
+    const c = analyzeSeries(files, { concentrationMolPerCm3: 1e-6, diffusionCm2PerS: 7.6e-6 }).couples[0];
+    expect(Math.abs((c?.electroactiveAreaCm2 ?? 0) / 0.0707 - 1)).toBeLessThan(1e-6);
+  });
+});

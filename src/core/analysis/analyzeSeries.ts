@@ -12,6 +12,7 @@
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { AnalysisError, assertFiniteInRange } from '../errors';
 import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
+import { electroactiveAreaFromStandard } from '../series';
 import { matchSeriesCouples, median } from './matchSeriesCouples';
 import type { CoupleRef } from './matchSeriesCouples';
 import { classifyCouple } from './seriesClassify';
@@ -80,6 +81,15 @@ function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): S
   };
 }
 
+/** A of a reversible standard of known D from its forward slope (electroactiveAreaFromStandard.ts). */
+function electroactiveArea(fit: SeriesCouple['forwardFit'], reversible: boolean, o: ResolvedSeriesOptions): number | null {
+  if (!fit || !reversible || o.diffusionCm2PerS === null || o.concentrationMolPerCm3 === null) return null;
+  return electroactiveAreaFromStandard(
+    { slopeAPerSqrtVPerS: fit.slope, electronCount: o.electronCount, concentrationMolPerCm3: o.concentrationMolPerCm3, diffusionCm2PerS: o.diffusionCm2PerS },
+    { temperatureK: o.temperatureK },
+  );
+}
+
 /** The single-trace verdict refined with what the series shows (two scan rates at least). */
 function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>): Verdict {
   const e: SeriesEvidence = { count: new Set(c.points.map((p) => p.scanRateVPerS)).size };
@@ -119,6 +129,7 @@ function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['cou
     peakShift,
     alpha: regime === 'diffusion' && kineticClass === 'irreversible' ? (diffusion?.alphaUsed ?? forwardShift?.alpha ?? null) : null,
     rateConstant,
+    electroactiveAreaCm2: electroactiveArea(forwardFit, regime === 'diffusion' && kineticClass === 'reversible', o),
     surface,
     diagnostics: [],
   };

@@ -46,6 +46,7 @@ function describeResults(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOpti
     out.push(`D = ${sci(c.diffusion.diffusionCm2PerS)} cm²/s (Randles–Ševčík, ${c.diffusion.form} form${a})`);
     if (c.diffusion.note) out.push(c.diffusion.note);
   }
+  if (c.electroactiveAreaCm2 !== null) out.push(`electroactive area ${c.electroactiveAreaCm2.toFixed(4)} cm² from the slope and the given D (${o.diffusionCm2PerS} cm²/s)`);
   const k = c.rateConstant;
   if (k?.k0CmPerS != null) {
     const used = k.perFile.filter((f) => f.k0CmPerS !== null).length;

@@ -103,7 +103,7 @@ export function seriesDiffusion(
     ? [randlesSevcikDiffusion(ci[0], cell, rs), randlesSevcikDiffusion(ci[1], cell, rs)]
     : null;
   const note = kineticClass === 'quasi-reversible'
-    ? `quasi-reversible couple: D from the slowest scan rate (${slowest?.scanRateVPerS ?? '?'} V/s) with the reversible form; the peak current lies below the reversible limit, so this D is a lower bound`
+    ? `quasi-reversible couple: D from the slowest scan rate (${slowest ? Number(slowest.scanRateVPerS.toPrecision(4)) : '?'} V/s) with the reversible form; the peak current lies below the reversible limit, so this D is a lower bound`
     : kineticClass === 'unknown' ? 'kinetic class unclear: reversible form used' : null;
   return {
     diffusion: { diffusionCm2PerS: d, intervalCm2PerS, form: rs.form, alphaUsed: a?.alpha ?? null, alphaSource: a?.source ?? null, note },

@@ -117,6 +117,11 @@ export interface SeriesCouple {
   /** α of an irreversible diffusing couple from Ep against log v. */
   alpha: number | null;
   rateConstant: SeriesRateConstant | null;
+  /**
+   * Electroactive area (cm²) from the forward slope when the user gave D and the concentration
+   * (a standard of known D); reversible diffusing couples only.
+   */
+  electroactiveAreaCm2: number | null;
   surface: SeriesSurface | null;
   /** Plain statements of what the series shows, each with its number. */
   diagnostics: string[];

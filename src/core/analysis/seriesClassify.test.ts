@@ -1,0 +1,42 @@
+import { describe, expect, it } from 'vitest';
+import { thermalVoltageV } from '../constants';
+import { alphaFromHalfPeakWidth, chooseIrreversibleAlpha, classifyCouple } from './seriesClassify';
+import type { SeriesPoint } from './seriesTypes';
+
+function point(over: Partial<SeriesPoint>): SeriesPoint {
+  return {
+    fileIndex: 0, fileName: 'f', scanRateVPerS: 0.1, cycle: 1, epaV: 0.03, epcV: -0.03, eHalfV: 0, deltaEpV: 0.06, ipaA: 1e-6, ipcA: 1e-6,
+    anodicChargeC: null, cathodicChargeC: null, forwardIpA: 1e-6, forwardHalfPeakWidthV: null, forwardChargeC: null, verdict: 'nernstian', ...over,
+  };
+}
+
+describe('classifyCouple', () => {
+  // End of Nicholson's 1965 table: n·ΔEp = 212 mV; beyond it the couple is treated as irreversible.
+  it('splits sluggish couples at n·ΔEp = 212 mV', () => {
+    expect(classifyCouple([point({ verdict: 'sluggish', deltaEpV: 0.15 })], 1, 298.15).kineticClass).toBe('quasi-reversible');
+    expect(classifyCouple([point({ verdict: 'sluggish', deltaEpV: 0.3 })], 1, 298.15).kineticClass).toBe('irreversible');
+  });
+  // Nicholson & Shain 1964: reversible |Ep − Ep/2| = 2.20 RT/nF (56.5 mV); irreversible is wider.
+  it('calls a broad one-way peak irreversible and a narrow one reversible', () => {
+    const rt = thermalVoltageV(298.15);
+    expect(classifyCouple([point({ verdict: 'one-way', forwardHalfPeakWidthV: 3.7 * rt })], 1, 298.15).kineticClass).toBe('irreversible');
+    expect(classifyCouple([point({ verdict: 'one-way', forwardHalfPeakWidthV: 2.2 * rt })], 1, 298.15).kineticClass).toBe('reversible');
+  });
+  // Laviron 1974: ip ∝ v for a surface couple; a log–log slope near 1 over ≥ 3 scan rates wins.
+  it('uses the log–log slope to recognise a surface couple', () => {
+    const pts = [0.1, 1, 10].map((s) => point({ scanRateVPerS: s, verdict: 'sluggish', deltaEpV: 0.1 }));
+    expect(classifyCouple(pts, 1, 298.15, 0.97).regime).toBe('surface');
+    expect(classifyCouple(pts, 1, 298.15, 0.5).regime).toBe('diffusion');
+  });
+});
+
+describe('chooseIrreversibleAlpha', () => {
+  // Bard & Faulkner §6.3 (from memory): |Ep − Ep/2| = 1.857 RT/(αnₐF) → 95.4 mV for α = 0.5.
+  it('reads α from the half-peak width when no Ep–log v line exists', () => {
+    const w = 1.857 * thermalVoltageV(298.15) / 0.5;
+    expect(alphaFromHalfPeakWidth(w, 298.15)).toBeCloseTo(0.5, 12);
+    expect(chooseIrreversibleAlpha(null, null, [point({ forwardHalfPeakWidthV: w })], 1, 298.15).alpha).toBeCloseTo(0.5, 12);
+    expect(chooseIrreversibleAlpha(0.4, null, [], 1, 298.15)).toEqual({ alpha: 0.4, source: 'given by the user' });
+    expect(chooseIrreversibleAlpha(null, null, [], 1, 298.15).alpha).toBe(0.5);
+  });
+});
