@@ -11,7 +11,10 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { simulatedVoltammogram } from '../core/peaks/simulatedVoltammogram';
 import type { CvSimulationInput } from '../core/simulation';
+import { ANALYSIS_OPTION_SPEC, parseAnalysisExtras, runAnalysis } from './analyzeReport';
+import { optionString, parseArgs } from './args';
 import { runCli } from './main';
+import { readInputs } from './readInputs';
 
 const dir = mkdtempSync(join(tmpdir(), 'halfwave-analyze-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -107,5 +110,41 @@ describe('analyze output options', () => {
     const r = await cli(['analyze', folder, '--ref', 'SHE', '--json']);
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/cannot report on SHE/);
+  });
+});
+
+describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysis)', () => {
+  const folder = writeSeries('extras', { k0CmPerS: Infinity, formalPotentialV: 0.1, startV: 0.4, switchV: -0.2 });
+  async function run(extraArgv: string[], base: string[] = ['--json']): Promise<Contract> {
+    const parsed = parseArgs([folder, ...base, ...extraArgv], { ...ANALYSIS_OPTION_SPEC, json: { value: false }, ref: { value: true }, area: { value: true } });
+    const args = { files: [folder], overrides: {}, json: true, inspect: false, ...(optionString(parsed, 'ref') ? { referenceElectrode: optionString(parsed, 'ref') as string } : {}) };
+    const { measurements } = readInputs([folder]);
+    let out = '';
+    const code = runAnalysis(measurements, args, { stdout: (t) => { out += t; }, stderr: () => undefined }, parseAnalysisExtras(parsed));
+    expect(code).toBe(0);
+    return JSON.parse(out) as Contract;
+  }
+  // check-values.md §10 (Bard & Faulkner inside cover): Ag/AgCl sat. = +0.197 V vs SHE;
+  // RHE at pH 7 sits 7 × 59.16 mV below SHE (Nernst).
+  it('--from-ref/--ref and --ph convert E½ through SHE', async () => {
+    const she = await run(['--from-ref', 'Ag/AgCl', '--ref', 'SHE']);
+    const rhe = await run(['--from-ref', 'Ag/AgCl', '--ref', 'RHE', '--ph', '7']);
+    expect((she.series[0]?.Ehalf ?? 0)).toBeCloseTo(0.1 + 0.197, 2);
+    expect((rhe.series[0]?.Ehalf ?? 0) - (she.series[0]?.Ehalf ?? 0)).toBeCloseTo(7 * 0.0591594, 5);
+  });
+  // check-values.md §14: the polarographic convention flips signed currents (iRaw), never ipa/ipc.
+  it('--out-convention polarographic flips signed currents only', async () => {
+    const iupac = await run([]);
+    const polar = await run(['--out-convention', 'polarographic']);
+    const a = iupac.files[0]?.cycles[0]?.peaks[0] as unknown as { iRaw: number; ip: number };
+    const b = polar.files[0]?.cycles[0]?.peaks[0] as unknown as { iRaw: number; ip: number };
+    expect(b.iRaw).toBeCloseTo(-a.iRaw, 18);
+    expect(b.ip).toBe(a.ip);
+  });
+  it('rejects contradictory or incomplete internal-standard options', () => {
+    expect(() => parseAnalysisExtras(parseArgs(['--fc-near', '0.1', '--fc-value', '0.4'], ANALYSIS_OPTION_SPEC))).toThrow(/not both/);
+    expect(() => parseAnalysisExtras(parseArgs(['--fc-value', '0.4'], ANALYSIS_OPTION_SPEC))).toThrow(/--from-ref/);
+    expect(() => parseAnalysisExtras(parseArgs(['--out-convention', 'upside-down'], ANALYSIS_OPTION_SPEC))).toThrow(/iupac or polarographic/);
+    expect(() => parseAnalysisExtras(parseArgs(['--alpha', '1.5'], ANALYSIS_OPTION_SPEC))).toThrow(/alpha/);
   });
 });
