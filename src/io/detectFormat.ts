@@ -72,18 +72,7 @@ function scoreCandidate(lines: string[], split: string[][], c: Candidate): Score
   for (const [w, count] of widths) if (count > best || (count === best && w > k)) [k, best] = [w, count];
   if (best === 0) return null;
   const isRow = (i: number) => cls[i]?.data === true && cls[i]?.fields === k;
-  const run = Math.min(3, best);
-  let first = -1;
-  for (let i = 0; i < cls.length && first < 0; i++) {
-    let ok = true;
-    for (let j = 0, seen = 0; seen < run; j++) {
-      if (i + j >= cls.length) { ok = false; break; }
-      if (lines[i + j]?.trim() === '') { if (j === 0) { ok = false; break; } continue; }
-      if (!isRow(i + j)) { ok = false; break; }
-      seen++;
-    }
-    if (ok) first = i;
-  }
+  const first = findTableStart(lines, isRow);
   if (first < 0) return null;
   let last = first;
   let rows = 0;
@@ -95,6 +84,26 @@ function scoreCandidate(lines: string[], split: string[][], c: Candidate): Score
     numbers += (cls[i] as LineClass).numbers;
   }
   return { c, k, first, last, rows, numericFraction: numbers / (rows * k) };
+}
+
+/**
+ * First row of the table: the start of the first run of consecutive rows (blank lines allowed
+ * inside) that is at least 3 rows and at least a tenth of the longest run long. A short block of
+ * numbers in the preamble (a settings table, a results summary) is thus not taken for the data,
+ * while exports joined one after another (blocks of similar length) all stay in.
+ */
+function findTableStart(lines: string[], isRow: (i: number) => boolean): number {
+  const runs: { start: number; length: number }[] = [];
+  let current: { start: number; length: number } | null = null;
+  for (let i = 0; i < lines.length; i++) {
+    if (isRow(i)) {
+      if (!current) runs.push((current = { start: i, length: 0 }));
+      current.length++;
+    } else if ((lines[i] as string).trim() !== '') current = null;
+  }
+  const longest = Math.max(0, ...runs.map((r) => r.length));
+  const need = Math.min(longest, Math.max(3, Math.ceil(longest / 10)));
+  return runs.find((r) => r.length >= need)?.start ?? -1;
 }
 
 function better(a: Scored, b: Scored | null): boolean {

@@ -129,6 +129,15 @@ describe('importVoltammogram: layout table (SI units back within 1e-9 relative)'
     expect(r.warnings.map((w) => w.code)).toEqual(['REPEATED_HEADER']);
   });
 
+  it('a short block of numbers in the preamble (a settings table) is not taken for the data', () => {
+    const settings = ['Vertex;Potential (V)', '1;0,6', '2;-0,2', '3;0,6', '4;-0,2', ''];
+    const layout: Layout = { delimiter: ';', decimalComma: true, header: H, columns: ['potential', 'current'], preamble: settings };
+    const r = importVoltammogram('settings.txt', writeLayout(cv, layout));
+    expectSameCv(r);
+    expect(r.measurement.detection.headerLine.value).toBe(7);
+    expect(r.warnings.filter((w) => w.code === 'SKIPPED_ROWS')).toEqual([]);
+  });
+
   it('one file per sweep: a single forward sweep is one segment in one cycle', () => {
     const one = makeSyntheticCv({ cycles: 1, stepV: 0.005 });
     const n = 161;
