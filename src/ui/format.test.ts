@@ -7,6 +7,8 @@ describe('format', () => {
     expect(fixed(null, 3)).toBe('—');
     expect(sig(Number.NaN)).toBe('—');
     expect(fixed(0.0601, 1, 1000)).toBe('60.1');
+    expect(fixed(-0.00001, 4)).toBe('0.0000');
+    expect(fixed(-0.0001, 4)).toBe('-0.0001');
     expect(sig(4.9489e-6, 4, 1e6)).toBe('4.949');
   });
   it('sci writes powers of ten with superscripts outside 1e-3…1e4', () => {

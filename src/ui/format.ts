@@ -2,7 +2,10 @@
 export const DASH = '—';
 
 export function fixed(value: number | null | undefined, digits: number, factor = 1): string {
-  return value === null || value === undefined || !Number.isFinite(value) ? DASH : (value * factor).toFixed(digits);
+  if (value === null || value === undefined || !Number.isFinite(value)) return DASH;
+  const text = (value * factor).toFixed(digits);
+  // A value that rounds to zero reads "0.0000", not "-0.0000".
+  return /^-0\.?0*$/.test(text) ? text.slice(1) : text;
 }
 
 /** Significant figures, for currents and charges whose magnitude varies. */

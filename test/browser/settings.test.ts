@@ -85,6 +85,26 @@ describe('changing settings, exporting, saving', () => {
     expect(doc.files[0].dataBase64).toBeUndefined();
   });
 
+  it('dragging across the plot in window mode adds a peak window of that file and re-analyses', async () => {
+    const page = app.page;
+    const before = await readPlot(page);
+    await page.getByTestId('drag-mode').selectOption('anodic');
+    await waitForRedraw(page, before.renders);
+    const box = await page.locator('[data-testid=trace-plot] .nsewdrag').first().boundingBox();
+    if (!box) throw new Error('plot drag layer not found');
+    const y = box.y + box.height / 2;
+    await page.mouse.move(box.x + box.width * 0.3, y);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width * 0.5, y, { steps: 8 });
+    await page.mouse.move(box.x + box.width * 0.7, y, { steps: 8 });
+    await page.mouse.up();
+    await page.getByTestId('peak-window').first().waitFor({ timeout: 10_000 });
+    expect(await page.getByTestId('peak-window').count()).toBe(1);
+    await waitForAnalysis(page);
+    await page.waitForFunction(() => ((document.querySelector('[data-testid=trace-plot]') as unknown as { layout?: { shapes?: unknown[] } })?.layout?.shapes ?? []).length === 1, null, { timeout: 10_000 });
+    await page.getByTestId('drag-mode').selectOption('zoom');
+  });
+
   it('stayed free of console errors, page errors and outside requests', () => {
     expect(app.consoleErrors).toEqual([]);
     expect(app.pageErrors).toEqual([]);

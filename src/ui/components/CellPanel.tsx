@@ -27,7 +27,7 @@ export function CellPanel() {
         <NumberField label="Area" unit="cm²" value={c.areaCm2} min={1e-9} testId="area" onCommit={(v) => v !== null && chem({ areaCm2: v })} />
         <NumberField label="Concentration" unit="mM" value={c.concentrationMM} min={1e-9} testId="concentration" onCommit={(v) => v !== null && chem({ concentrationMM: v })} />
         <NumberField label="Temperature" unit="°C" value={c.temperatureC} min={-60} max={200} testId="temperature" onCommit={(v) => v !== null && chem({ temperatureC: v })} />
-        <NumberField label="α" unit="empty = from data" value={c.alpha} min={0.05} max={0.95} allowEmpty title="transfer coefficient for the irreversible and Laviron analyses; leave empty to take it from the data (0.5 when it cannot be measured)" onCommit={(v) => chem({ alpha: v })} />
+        <NumberField label="α" placeholder="from the data" value={c.alpha} min={0.05} max={0.95} allowEmpty title="transfer coefficient for the irreversible and Laviron analyses; leave empty to take it from the data (0.5 when it cannot be measured)" onCommit={(v) => chem({ alpha: v })} />
         <NumberField label="Ru" unit="Ω" value={c.resistanceOhm} min={0} title="uncompensated resistance; potentials are corrected by −i·Ru before analysis" testId="resistance" onCommit={(v) => v !== null && chem({ resistanceOhm: v })} />
       </div>
       <h3>Potential scale</h3>

@@ -16,9 +16,10 @@ export interface NumberFieldProps {
   allowEmpty?: boolean;
   testId?: string;
   title?: string;
+  placeholder?: string;
 }
 
-export function NumberField({ label, unit, value, onCommit, min = -Infinity, max = Infinity, step, allowEmpty, testId, title }: NumberFieldProps) {
+export function NumberField({ label, unit, value, onCommit, min = -Infinity, max = Infinity, step, allowEmpty, testId, title, placeholder }: NumberFieldProps) {
   const id = useId();
   const [text, setText] = useState(value === null ? '' : String(value));
   const [problem, setProblem] = useState<string | null>(null);
@@ -49,6 +50,7 @@ export function NumberField({ label, unit, value, onCommit, min = -Infinity, max
         inputMode="decimal"
         value={text}
         step={step}
+        placeholder={placeholder}
         aria-invalid={problem !== null}
         data-testid={testId}
         onChange={(e) => setText(e.target.value)}
