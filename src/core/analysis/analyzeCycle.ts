@@ -75,7 +75,7 @@ function findSpec(specs: BaselineSpec[], c: PeakCandidate, cycle: number): Basel
 }
 
 function previousOnSweep(c: PeakCandidate, all: PeakCandidate[]): PeakCandidate | undefined {
-  return all.filter((p) => p.segmentIndex === c.segmentIndex && p.index < c.index && p.confidence !== 'shoulder').at(-1);
+  return all.filter((p) => p.segmentIndex === c.segmentIndex && p.index < c.index).at(-1);
 }
 
 /**

@@ -100,6 +100,21 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
   });
 });
 
+// Overlap (design check, common practice, no source): a half-strength second couple 120 mV below
+// the first merges into the first one's return wave. It must come back as a lower-confidence
+// shoulder, and the couple built on it must say "overlapping" instead of a confident verdict.
+describe('analyzeVoltammogram on overlapping couples', () => {
+  it('a return wave that is only a shoulder is flagged and its couple left unclassified', () => {
+    const v = simulatedVoltammogram({ ...base, switchV: -0.5 }, { extra: [{ formalPotentialV: -0.12, concentrationOMolPerCm3: C / 2 }] });
+    const cycle = analyzeVoltammogram(v).cycles[0]!;
+    const shoulder = cycle.peaks.findIndex((p) => p.confidence === 'shoulder');
+    expect(shoulder).toBeGreaterThanOrEqual(0);
+    const couple = cycle.couples.find((c) => c.anodicPeak === shoulder || c.cathodicPeak === shoulder)!;
+    expect(couple.verdict.category).toBe('inconclusive');
+    expect(couple.verdict.label).toMatch(/overlapping/);
+  });
+});
+
 describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', () => {
   // Nicholson 1965 Table I (check-values §5): ψ = k°/(πDnFv/RT)^½ = 0.005/0.00964 = 0.52 → n·ΔEp
   // between the ψ = 0.75 (92 mV) and ψ = 0.35 (121 mV) rows.

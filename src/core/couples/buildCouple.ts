@@ -39,6 +39,7 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
       switchPastPeakV: consecutive ? Math.abs(sig.potentialV[vertex]! - fwd.potentialV) : null,
       hasAnodic: a !== null,
       hasCathodic: c !== null,
+      overlapping: a?.confidence === 'shoulder' || c?.confidence === 'shoulder',
     },
     options,
   );

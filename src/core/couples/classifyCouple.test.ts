@@ -45,6 +45,12 @@ describe('classifyCouple', () => {
     expect(classifyCouple({ ...base, deltaEpV: 0.002, fwhmV: { anodic: 0.2, cathodic: null } }).category).toBe('inconclusive');
   });
 
+  it('a couple with a shoulder peak is inconclusive, with the plain-numbers verdict among the reasons', () => {
+    const v = classifyCouple({ ...base, ratio: 0.6, overlapping: true });
+    expect(v.category).toBe('inconclusive');
+    expect(v.reasons[1]).toMatch(/chemically coupled/);
+  });
+
   it('thresholds follow the temperature and n (RT/nF units)', () => {
     const hot = classifyCouple({ ...base, deltaEpV: (0.0592 * 323.15) / 298.15, switchPastPeakV: (0.1215 * 323.15) / 298.15 }, { temperatureK: 323.15 });
     expect(hot.category).toBe('nernstian');

@@ -38,6 +38,8 @@ export interface ClassifyCoupleInput {
   /** Which peaks exist. */
   hasAnodic: boolean;
   hasCathodic: boolean;
+  /** True when a peak of the couple is only a shoulder of another wave. @default false */
+  overlapping?: boolean;
 }
 
 export interface ClassifyCoupleOptions {
@@ -49,7 +51,19 @@ export interface ClassifyCoupleOptions {
 
 const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
 
+/**
+ * Verdict from the single-voltammogram numbers. A couple with a shoulder peak is reported as
+ * 'inconclusive' with the verdict the numbers alone would give among its reasons, because heights
+ * and ratio of overlapping waves are not trustworthy.
+ */
 export function classifyCouple(input: ClassifyCoupleInput, options: ClassifyCoupleOptions = {}): Verdict {
+  const v = classifyFromNumbers(input, options);
+  if (!input.overlapping) return v;
+  const reasons = ['a peak of this couple is only a shoulder of another wave: its height, ratio and width are unreliable', `the numbers alone would say: ${v.label}`, ...v.reasons];
+  return { ...v, category: 'inconclusive', label: 'not classified (overlapping waves)', reasons };
+}
+
+function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCoupleOptions): Verdict {
   const temperatureK = options.temperatureK ?? 298.15;
   const n = options.electronCount ?? 1;
   const u = thermalVoltageV(temperatureK) / n;
