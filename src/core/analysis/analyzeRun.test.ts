@@ -137,3 +137,11 @@ describe('analyzeRun conversions', () => {
     expect(() => analyzeRun([])).toThrow(AnalysisError);
   });
 });
+
+describe('analyzeRun input errors', () => {
+  it('names the file whose trace cannot be analysed', () => {
+    const good = simulatedVoltammogram({});
+    const bad = { ...good, currentA: good.currentA.map((i, k) => (k === 5 ? Number.NaN : i)) };
+    expect(() => analyzeRun([{ fileName: 'good.csv', voltammogram: good }, { fileName: 'broken.csv', voltammogram: bad }])).toThrow(/broken\.csv/);
+  });
+});

@@ -42,13 +42,19 @@ function prepare(input: RunInput, options: AnalyzeRunOptions): Prepared {
 function analyzeShifted(p: Prepared, offsetV: number, options: AnalyzeRunOptions) {
   const potentialV = offsetV === 0 ? p.potentialV : p.potentialV.map((e) => e + offsetV);
   const voltammogram: Voltammogram = { ...p.input.voltammogram, potentialV };
-  const analysis = analyzeVoltammogram(voltammogram, {
-    ...options.perTrace,
-    electronCount: options.electronCount ?? 1,
-    temperatureK: options.temperatureK ?? STANDARD_TEMPERATURE_K,
-    scanRateVPerS: p.scanRateVPerS,
-  });
-  return { voltammogram, analysis };
+  try {
+    const analysis = analyzeVoltammogram(voltammogram, {
+      ...options.perTrace,
+      electronCount: options.electronCount ?? 1,
+      temperatureK: options.temperatureK ?? STANDARD_TEMPERATURE_K,
+      scanRateVPerS: p.scanRateVPerS,
+    });
+    return { voltammogram, analysis };
+  } catch (err) {
+    // Name the file: the per-trace message alone does not say which of the series failed.
+    if (err instanceof AnalysisError) throw new AnalysisError(err.code, `${p.input.fileName}: ${err.message}`);
+    throw err;
+  }
 }
 
 function capacitanceOf(files: RunFileResult[], options: AnalyzeRunOptions, warnings: RunWarning[]): DoubleLayerCapacitanceResult | null {

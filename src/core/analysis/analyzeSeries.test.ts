@@ -140,3 +140,17 @@ describe('analyzeSeries electroactive area', () => {
     expect(Math.abs((c?.electroactiveAreaCm2 ?? 0) / 0.0707 - 1)).toBeLessThan(1e-6);
   });
 });
+
+describe('analyzeSeries with one scan rate', () => {
+  // check-values.md §2 worked example (Bard & Faulkner §6.2): 16.5581 µA at 0.1 V/s → D = 7.6e-6 cm²/s.
+  it('gives D from the single peak through the origin and says so', () => {
+    const one = [{ fileName: 'one', scanRateVPerS: 0.1, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: 16.5581e-6, ipcA: 16.5581e-6 }]) }];
+    const r = analyzeSeries(one, opts);
+    const c = r.couples[0];
+    expect(Math.abs((c?.diffusion?.diffusionCm2PerS ?? 0) / 7.6e-6 - 1)).toBeLessThan(1e-4);
+    expect(c?.diffusion?.note).toMatch(/single peak/);
+    expect(c?.forwardFit?.r2).toBeNaN();
+    expect(c?.logLog).toBeNull();
+    expect(r.warnings.map((w) => w.code)).toContain('SINGLE_SCAN_RATE');
+  });
+});

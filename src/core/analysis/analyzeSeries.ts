@@ -17,7 +17,7 @@ import { matchSeriesCouples, median } from './matchSeriesCouples';
 import type { CoupleRef } from './matchSeriesCouples';
 import { classifyCouple } from './seriesClassify';
 import { describeSeriesCouple } from './seriesDiagnostics';
-import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
+import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
 import { seriesRateConstant, seriesSurface } from './seriesKinetics';
 import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesPoint, SeriesWarning } from './seriesTypes';
@@ -107,7 +107,7 @@ function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['cou
   const forward = first.forwardDirection;
   const logLog = fitLogLog(points);
   const { regime, kineticClass } = classifyCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
-  const forwardFit = fitAgainstSqrtScanRate(points, (p) => p.forwardIpA);
+  const forwardFit = fitForwardAgainstSqrtScanRate(points);
   const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
   const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
   const surface = regime === 'surface' ? seriesSurface(points, o) : null;
@@ -160,7 +160,7 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
   const out: SeriesWarning[] = [];
   const rates = files.map((f) => f.scanRateVPerS);
   if (new Set(rates).size < 2) {
-    out.push({ code: 'SINGLE_SCAN_RATE', message: 'only one scan rate: no slope, D, log–log slope or Ep–log v line can be fitted' });
+    out.push({ code: 'SINGLE_SCAN_RATE', message: 'only one scan rate: slope and D come from a single peak through the origin; no linearity check, log–log slope or Ep–log v line' });
   } else if (new Set(rates).size < rates.length) {
     out.push({ code: 'DUPLICATE_SCAN_RATE', message: 'several files share a scan rate; each enters the fits as its own point' });
   }

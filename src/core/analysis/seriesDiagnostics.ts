@@ -26,7 +26,7 @@ function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
 function describeLines(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const out: string[] = [];
   const f = c.forwardFit;
-  if (f) {
+  if (f && f.pointCount > 1) {
     const maxIp = Math.max(...c.points.map((p) => p.forwardIpA ?? 0));
     const rel = maxIp > 0 ? Math.abs(f.intercept) / maxIp : 0;
     out.push(`|ip| against v^½: R² = ${f.r2.toFixed(4)}, intercept ${(rel * 100).toFixed(1)} % of the largest peak`);

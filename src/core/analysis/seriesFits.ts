@@ -47,6 +47,18 @@ export function fitAgainstSqrtScanRate(points: SeriesPoint[], y: Pick): FitLineR
   return d ? fitLine(d.x, d.y) : null;
 }
 
+/**
+ * The forward |ip| against v^½; with a single scan rate, the line through the origin and that
+ * one point (Randles–Ševčík has no intercept), with R² left undefined (NaN).
+ */
+export function fitForwardAgainstSqrtScanRate(points: SeriesPoint[]): FitLineResult | null {
+  const fit = fitAgainstSqrtScanRate(points, (p) => p.forwardIpA);
+  if (fit) return fit;
+  const one = points.find((p) => p.forwardIpA !== null && p.forwardIpA > 0);
+  if (!one || new Set(points.map((p) => p.scanRateVPerS)).size !== 1) return null;
+  return { ...fitLine([sqrtV(one)], [one.forwardIpA as number], { throughOrigin: true }), r2: Number.NaN };
+}
+
 /** |ip| against v; null with fewer than two scan rates. */
 export function fitAgainstScanRate(points: SeriesPoint[], y: Pick): FitLineResult | null {
   const d = pairs(points, scanRate, y);
@@ -104,7 +116,8 @@ export function seriesDiffusion(
     : null;
   const note = kineticClass === 'quasi-reversible'
     ? `quasi-reversible couple: D from the slowest scan rate (${slowest ? Number(slowest.scanRateVPerS.toPrecision(4)) : '?'} V/s) with the reversible form; the peak current lies below the reversible limit, so this D is a lower bound`
-    : kineticClass === 'unknown' ? 'kinetic class unclear: reversible form used' : null;
+    : kineticClass === 'unknown' ? 'kinetic class unclear: reversible form used'
+      : fit.pointCount === 1 ? 'one scan rate only: D from a single peak through the origin, with no check of linearity' : null;
   return {
     diffusion: { diffusionCm2PerS: d, intervalCm2PerS, form: rs.form, alphaUsed: a?.alpha ?? null, alphaSource: a?.source ?? null, note },
     reason: null,
