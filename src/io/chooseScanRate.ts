@@ -46,7 +46,7 @@ export function chooseScanRate(input: Input, warnings: ImportWarning[]): ScanRat
   }
   for (const other of found.slice(1)) {
     if (Math.abs(other.value - chosen.value) > 0.05 * chosen.value) {
-      warnings.push(makeWarning('SCAN_RATE_DISAGREES', `${fileName}: scan rate ${fmt(chosen.value)} (${chosen.source}) differs from ${fmt(other.value)} (${other.source}, ${other.why}); ${fmt(chosen.value)} is used`));
+      warnings.push(makeWarning('SCAN_RATE_DISAGREES', `${fileName}: scan rate ${fmt(chosen.value)} (${chosen.source}) differs from ${fmt(other.value)} (${other.source}, ${other.why}); ${fmt(chosen.value)} is used${unitHint(chosen, other.value)}`));
     }
   }
   const others = found.slice(1).map((f) => `${f.source} says ${fmt(f.value)}`).join('; ');
@@ -54,6 +54,16 @@ export function chooseScanRate(input: Input, warnings: ImportWarning[]): ScanRat
     guess: { value: chosen.value, overridden: chosen.source === 'option', explanation: `scan rate ${fmt(chosen.value)} — ${chosen.why}${others ? ` (also: ${others})` : ''}` },
     source: chosen.source,
   };
+}
+
+/** A disagreement by a factor of 1000 or 60 usually means the time column's unit is wrong. */
+function unitHint(chosen: { source: ScanRateSource; value: number }, other: number): string {
+  if (chosen.source !== 'time') return '';
+  const ratio = other / chosen.value;
+  const near = (f: number) => Math.abs(ratio / f - 1) < 0.05;
+  if (near(1000)) return ' — a factor of 1000: is the time column in ms? Set the time unit';
+  if (near(1 / 60)) return ' — a factor of 60: is the time column in minutes? Set the time unit';
+  return '';
 }
 
 function timeRate(input: Input, warnings: ImportWarning[]): { value: number; why: string } | null {

@@ -138,6 +138,15 @@ describe('importVoltammogram: layout table (SI units back within 1e-9 relative)'
     expect(r.warnings.filter((w) => w.code === 'SKIPPED_ROWS')).toEqual([]);
   });
 
+  it('a time column in ms without a unit: the scan rate disagrees with the file name by 1000 and says so', () => {
+    const r = importVoltammogram('cv_100mVs.csv', writeLayout(cv, { delimiter: ',', header: { time: 'Time', potential: 'E/V', current: 'I/A' }, columns: ['time', 'potential', 'current'], timeScale: 1e3 }));
+    expect(r.measurement.scanRateSource).toBe('time');
+    const w = r.warnings.find((x) => x.code === 'SCAN_RATE_DISAGREES');
+    expect(w?.message).toMatch(/factor of 1000/);
+    const fixed = importVoltammogram('cv_100mVs.csv', writeLayout(cv, { delimiter: ',', header: { time: 'Time', potential: 'E/V', current: 'I/A' }, columns: ['time', 'potential', 'current'], timeScale: 1e3 }), { overrides: { timeUnit: 'ms' } });
+    expect(Math.abs((fixed.measurement.scanRateVPerS as number) - 0.1) / 0.1).toBeLessThan(1e-6);
+  });
+
   it('one file per sweep: a single forward sweep is one segment in one cycle', () => {
     const one = makeSyntheticCv({ cycles: 1, stepV: 0.005 });
     const n = 161;
