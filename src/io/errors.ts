@@ -4,6 +4,15 @@
  * The CLI maps `name === 'ImportError'` to exit code 2; the worker forwards `code`.
  */
 
+/**
+ * EMPTY: no bytes or only blank lines. BINARY: not text (zero bytes, control characters, PDF).
+ * SPREADSHEET_BINARY: an .xlsx/.ods (ZIP) or .xls (OLE2) file. IMAGE: PNG, JPEG, GIF, TIFF, BMP,
+ * WebP. ENCODING: bytes invalid in the chosen encoding. NO_TABLE: no run of lines with two or
+ * more numeric fields, or no column could be made the potential/current. ONE_COLUMN: numbers,
+ * but one per line. TOO_FEW_POINTS: fewer than 3 usable rows. CONSTANT_POTENTIAL: the potential
+ * never changes. BAD_OVERRIDE: a user override that cannot apply. INTERNAL: a fault in the
+ * importer itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
+ */
 export type ImportErrorCode =
   | 'EMPTY'
   | 'BINARY'
