@@ -35,6 +35,7 @@ describe('importVoltammogram: typed errors', () => {
     ['a JPEG image', Uint8Array.from([0xff, 0xd8, 0xff, 0xe0, 0, 16, 0x4a, 0x46]), 'IMAGE'],
     ['prose with no numbers', 'This folder holds our notes.\nNothing to measure here.\n', 'NO_TABLE'],
     ['one numeric column', 'Potential/V\n0.1\n0.2\n0.3\n0.4\n', 'ONE_COLUMN'],
+    ['two rows only', 'E/V,I/A\n0.1,1e-6\n0.2,2e-6\n', 'TOO_FEW_POINTS'],
   ];
   for (const [what, data, code] of cases) {
     it(`${what} → ${code}`, () => expect(failure(data).code).toBe(code));
@@ -45,6 +46,11 @@ describe('importVoltammogram: typed errors', () => {
     expect(e.code).toBe('CONSTANT_POTENTIAL');
     expect(e.line).toBe(2);
     expect(e.column).toBe(1);
+  });
+
+  it('bytes that are not valid in a forced encoding → ENCODING', () => {
+    const oddUtf16 = Uint8Array.from([0x45, 0x00, 0x2c, 0x00, 0x49]);
+    expect(failure(oddUtf16, { encoding: 'utf-16le' }).code).toBe('ENCODING');
   });
 
   it('a column override outside the table → BAD_OVERRIDE', () => {
