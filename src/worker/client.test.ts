@@ -6,6 +6,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AnalysisError } from '../core/errors';
+import { ImportError } from '../io/errors';
 import { createInThreadClient, createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
 import { CancelledError } from './errors';
 import type { PageToWorker, WorkerToPage } from './protocol';
@@ -77,6 +78,17 @@ describe.each(transports)('analysis client over %s', (_name, make) => {
     expect(err).toBeInstanceOf(AnalysisError);
     expect((err as AnalysisError).code).toBe('OUT_OF_RANGE');
     expect((err as AnalysisError).message).toMatch(/never changes/);
+  });
+
+  it('rethrows an unreadable file as ImportError with its code, file and message intact', async () => {
+    const data = new TextEncoder().encode('only words here\nand no table at all\n').buffer;
+    const err = await client.request('import', { fileName: 'words.txt', data, overrides: {} }).catch((e: unknown) => e);
+    expect(err).toBeInstanceOf(ImportError);
+    const e = err as ImportError;
+    expect(e.fileName).toBe('words.txt');
+    expect(e.code).toMatch(/^[A-Z_]+$/);
+    expect(e.message.startsWith('words.txt')).toBe(true);
+    expect(e.message.indexOf('words.txt', 1)).toBe(-1);
   });
 
   it('rejects with CancelledError when the signal is already aborted', async () => {

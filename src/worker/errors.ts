@@ -5,6 +5,7 @@
  * in-thread.
  */
 import { AnalysisError, type AnalysisErrorCode } from '../core/errors';
+import { ImportError, type ImportErrorCode } from '../io/errors';
 import type { ErrorMessage } from './protocol';
 
 /** The request was cancelled by the caller before it finished. */
@@ -59,12 +60,12 @@ export function reviveError(msg: ErrorMessage): Error {
   }
 }
 
-function reviveImportError(msg: ErrorMessage): Error {
-  const err = new Error(msg.message) as Error & { code: string; fileName?: string; line?: number; column?: number };
-  err.name = 'ImportError';
-  err.code = msg.code;
-  if (msg.fileName !== undefined) err.fileName = msg.fileName;
-  if (msg.line !== undefined) err.line = msg.line;
-  if (msg.column !== undefined) err.column = msg.column;
+function reviveImportError(msg: ErrorMessage): ImportError {
+  const where: { line?: number; column?: number } = {};
+  if (msg.line !== undefined) where.line = msg.line;
+  if (msg.column !== undefined) where.column = msg.column;
+  const err = new ImportError(msg.code as ImportErrorCode, msg.fileName ?? '', msg.message, where);
+  // The message already names the file and position; the constructor would prefix them again.
+  err.message = msg.message;
   return err;
 }

@@ -83,6 +83,13 @@ describe('changing settings, exporting, saving', () => {
     expect(doc.files).toHaveLength(demoFileCount());
     expect(doc.files[0].sha256).toMatch(/^[0-9a-f]{64}$/);
     expect(doc.files[0].dataBase64).toBeUndefined();
+
+    // Change a setting, then open the saved session: the saved setting comes back.
+    await commitNumber(app, 'smoothing-window', '7');
+    await waitForAnalysis(page);
+    await page.getByTestId('session-input').setInputFiles(await download.path());
+    await page.waitForFunction(() => document.querySelector('[data-testid=notice]')?.textContent?.startsWith('Session loaded.'), null, { timeout: 30_000 });
+    expect(await page.getByTestId('smoothing-window').inputValue()).toBe('11');
   });
 
   it('dragging across the plot in window mode adds a peak window of that file and re-analyses', async () => {
