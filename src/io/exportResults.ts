@@ -86,7 +86,8 @@ function rateTable(r: AnalyzeRunResult, files: RunFileResult[]): string[] {
 const SERIES_COLUMNS = ['couple', 'E_half_V', 'files', 'regime', 'kinetic_class', 'verdict', 'slope_ip_vs_sqrt_v_A_s05_V05', 'slope_ci95_low', 'slope_ci95_high',
   'intercept_A', 'r2', 'D_cm2_per_s', 'D_ci95_low', 'D_ci95_high', 'D_form', 'alpha', 'log_log_slope', 'log_log_reading', 'Epa_shift_V_per_decade',
   'Epc_shift_V_per_decade', 'k0_cm_per_s', 'k0_lower_bound_cm_per_s', 'D_used_for_k0_cm2_per_s', 'gamma_from_charge_mol_per_cm2',
-  'gamma_from_slope_mol_per_cm2', 'ks_per_s', 'electroactive_area_cm2', 'diagnostics'];
+  'gamma_from_slope_mol_per_cm2', 'ks_per_s', 'electroactive_area_cm2', 'anodic_slope_A_s05_V05', 'anodic_r2',
+  'cathodic_slope_A_s05_V05', 'cathodic_r2', 'diagnostics'];
 
 function seriesRow(c: SeriesCouple): Cell[] {
   const f = c.forwardFit;
@@ -94,7 +95,8 @@ function seriesRow(c: SeriesCouple): Cell[] {
     f?.intercept, f?.r2, c.diffusion?.diffusionCm2PerS, c.diffusion?.intervalCm2PerS?.[0], c.diffusion?.intervalCm2PerS?.[1], c.diffusion?.form,
     c.alpha ?? c.diffusion?.alphaUsed, c.logLog?.slope, c.logLog?.reading, c.peakShift.anodic?.slopeVPerDecade, c.peakShift.cathodic?.slopeVPerDecade,
     c.rateConstant?.k0CmPerS, c.rateConstant?.lowerBoundCmPerS, c.rateConstant?.diffusionOxCm2PerS, c.surface?.coverageFromChargeMolPerCm2,
-    c.surface?.coverageFromSlopeMolPerCm2, c.surface?.ksPerS, c.electroactiveAreaCm2, c.diagnostics.join('; ')];
+    c.surface?.coverageFromSlopeMolPerCm2, c.surface?.ksPerS, c.electroactiveAreaCm2, c.anodicFit?.slope, c.anodicFit?.r2,
+    c.cathodicFit?.slope, c.cathodicFit?.r2, c.diagnostics.join('; ')];
 }
 
 /** The results sheet as CSV text (CRLF-free, UTF-8 characters as they are). */
