@@ -1,6 +1,6 @@
 /**
  * Reads the files named on the command line (a folder stands for the files in it, sorted
- * naturally: run2 before run10) and imports each through the importer. An unreadable path is a
+ * naturally: run2 before run10; "-" is standard input) and imports each through the importer. An unreadable path is a
  * UsageError naming it. A file the importer rejects is an ImportError; with `keepGoing` it is
  * collected instead and the other files are still read.
  */
@@ -32,6 +32,10 @@ const natural = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base
 export function expandPaths(paths: string[]): string[] {
   const out: string[] = [];
   for (const p of paths) {
+    if (p === '-') {
+      out.push(p);
+      continue;
+    }
     let st;
     try {
       st = statSync(p);
@@ -58,12 +62,13 @@ export function readInputs(paths: string[], options: ReadInputsOptions = {}): In
   for (const path of expandPaths(paths)) {
     let bytes: Uint8Array;
     try {
-      bytes = readFileSync(path);
+      // "-" is standard input, so that `halfwave simulate ... | halfwave analyze - --inspect` works.
+      bytes = readFileSync(path === '-' ? 0 : path);
     } catch (err) {
       throw new UsageError(`cannot read "${path}": ${(err as NodeJS.ErrnoException).code ?? String(err)}`);
     }
     try {
-      const result = importVoltammogram(basename(path), bytes, options.overrides ? { overrides: options.overrides } : {});
+      const result = importVoltammogram(path === '-' ? 'stdin' : basename(path), bytes, options.overrides ? { overrides: options.overrides } : {});
       read.measurements.push(result.measurement);
       read.warnings.push(...result.warnings);
       read.outcomes.push({ path, result });
