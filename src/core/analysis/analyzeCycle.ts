@@ -10,7 +10,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { locatePeaksInSweep, type PeakCandidate } from '../peaks/locatePeaksInSweep';
 import { measurePeak } from '../peaks/measurePeak';
 import { baselineForPeak, type BaselineRef } from '../baseline/baselineForPeak';
-import { pairPeaksIntoCouples, type PeakPair } from '../couples/pairPeaksIntoCouples';
+import { pairPeaksIntoCouples } from '../couples/pairPeaksIntoCouples';
 import { buildCouple } from '../couples/buildCouple';
 import { thermalVoltageV } from '../constants';
 
@@ -51,7 +51,7 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
     else warn('LOW_SIGNAL', `${cand.direction} feature at ${mv(cand.potentialV)} does not rise above its baseline; dropped`);
   }
   const peaks = ordered.flatMap((c) => (measured.has(c) ? [measured.get(c)!] : []));
-  const couples = buildCouples(sig, peaks, pairs, anodic, cathodic, measured, firstSeg, o, warn);
+  const couples = buildCouples(sig, peaks, firstSeg, o, warn);
   if (peaks.length === 0) warn('NO_PEAKS', `no peak rose ${thresholdA.toExponential(3)} A above its surroundings in cycle ${cycle.index}`);
   return { index: cycle.index, peaks, couples, warnings };
 }
@@ -111,22 +111,22 @@ function regionStartFor(sig: SweepSignals, c: PeakCandidate, all: PeakCandidate[
   return seg.start + Math.max(1, Math.round(0.02 * (seg.end - seg.start)));
 }
 
-function buildCouples(
-  sig: SweepSignals, peaks: PeakResult[], pairs: PeakPair[], anodic: PeakCandidate[], cathodic: PeakCandidate[],
-  measured: Map<PeakCandidate, PeakResult>, firstSeg: number | undefined, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void,
-): CoupleResult[] {
+/** Pairs the measured peaks (weighted by height, so small features stay single) and builds the couples. */
+function buildCouples(sig: SweepSignals, peaks: PeakResult[], firstSeg: number | undefined, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void): CoupleResult[] {
   const forwardDirection = firstSeg !== undefined && sig.segments[firstSeg]!.direction === 'negative' ? 'cathodic' : 'anodic';
-  const indexOf = (c: PeakCandidate | undefined) => {
-    const p = c ? measured.get(c) : undefined;
-    return p ? peaks.indexOf(p) : null;
-  };
-  const out: CoupleResult[] = [];
-  for (const pair of pairs) {
-    const mapped = { anodic: indexOf(pair.anodic === null ? undefined : anodic[pair.anodic]), cathodic: indexOf(pair.cathodic === null ? undefined : cathodic[pair.cathodic]) };
-    if (mapped.anodic === null && mapped.cathodic === null) continue;
+  const a = peaks.flatMap((p, k) => (p.direction === 'anodic' ? [k] : []));
+  const c = peaks.flatMap((p, k) => (p.direction === 'cathodic' ? [k] : []));
+  const top = Math.max(0, ...peaks.map((p) => p.heightA));
+  const weight = (k: number) => (top > 0 ? peaks[k]!.heightA / top : 1);
+  const pairs = pairPeaksIntoCouples(a.map((k) => peaks[k]!.potentialV), c.map((k) => peaks[k]!.potentialV), {
+    maxDeltaEpV: o.maxDeltaEpV,
+    anodicWeights: a.map(weight),
+    cathodicWeights: c.map(weight),
+  });
+  return pairs.map((pair, index) => {
+    const mapped = { anodic: pair.anodic === null ? null : a[pair.anodic]!, cathodic: pair.cathodic === null ? null : c[pair.cathodic]! };
     const couple = buildCouple(sig, peaks, mapped, forwardDirection, o);
     if (mapped.anodic === null || mapped.cathodic === null) warn('UNPAIRED_PEAK', `${mapped.anodic === null ? 'cathodic' : 'anodic'} peak at ${mv((couple.epaV ?? couple.epcV)!)} has no partner`);
-    out.push({ index: out.length, ...couple });
-  }
-  return out;
+    return { index, ...couple };
+  });
 }

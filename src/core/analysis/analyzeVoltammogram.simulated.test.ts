@@ -74,6 +74,18 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     expect(Math.abs(couple.ratio! - 1)).toBeLessThan(0.05);
   });
 
+  // Heavier noise (0.3 µA, 1.8 % of ip) on a 40 µF/cm² background, eight seeds: exactly two peaks
+  // (no noise feature survives the prominence and shoulder tests) and E½ within 4 mV.
+  it('heavier noise over eight seeds: exactly one couple, E½ ±4 mV', () => {
+    for (let seed = 1; seed <= 8; seed++) {
+      const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 40e-6 }, { noiseA: 3e-7, seed });
+      const cycle = analyzeVoltammogram(v).cycles[0]!;
+      expect(cycle.peaks).toHaveLength(2);
+      expect(cycle.couples).toHaveLength(1);
+      expect(Math.abs(cycle.couples[0]!.eHalfV!)).toBeLessThan(0.004);
+    }
+  });
+
   // A sweep that starts with the reduced form present runs anodic first; the ratio is ipc/ipa.
   it('anodic-first voltammogram: forward direction anodic and the same metrics mirrored', () => {
     const v = simulatedVoltammogram({ ...base, startV: -0.4, switchV: 0.4, concentrationOMolPerCm3: 0, concentrationRMolPerCm3: C });

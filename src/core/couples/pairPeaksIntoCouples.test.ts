@@ -24,6 +24,16 @@ describe('pairPeaksIntoCouples', () => {
     ]);
   });
 
+  // Hand example: two small features (weight 0.2) would pair with the large peaks at ΔEp 0.21 and
+  // 0.18 V (total 0.39) against 0.06 + 2·0.2·0.6 = 0.30 for the real couple plus two singles.
+  it('small features cannot pull a large couple apart when weighted', () => {
+    const anodic = [0.028, 0.148];
+    const cathodic = [-0.182, -0.031];
+    expect(pairPeaksIntoCouples(anodic, cathodic)).toContainEqual({ anodic: 0, cathodic: 0 });
+    const weighted = pairPeaksIntoCouples(anodic, cathodic, { anodicWeights: [1, 0.2], cathodicWeights: [0.2, 1] });
+    expect(weighted).toContainEqual({ anodic: 0, cathodic: 1 });
+  });
+
   it('allows a small negative ΔEp (adsorbed layer) but not a large one', () => {
     expect(pairPeaksIntoCouples([0.099], [0.1])).toEqual([{ anodic: 0, cathodic: 0 }]);
     expect(pairPeaksIntoCouples([0.0], [0.1])).toHaveLength(2);

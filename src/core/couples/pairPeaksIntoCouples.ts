@@ -1,8 +1,8 @@
 /**
  * Pairs anodic and cathodic peaks into redox couples. Both lists are sorted by potential and
  * matched without crossings (the k-th couple's peaks lie between those of the couples on either
- * side), by dynamic programming that minimises Σ|ΔEp| over pairs plus a penalty of `maxDeltaEpV`
- * for each unpaired peak. A pair is allowed only when −`maxNegativeDeltaEpV` ≤ Epa − Epc ≤
+ * side), by dynamic programming that minimises Σ|ΔEp| over pairs plus a penalty of
+ * weight·`maxDeltaEpV` for each unpaired peak. A pair is allowed only when −`maxNegativeDeltaEpV` ≤ Epa − Epc ≤
  * `maxDeltaEpV`.
  * Method: order-preserving assignment (common practice, no source); limits are ours.
  * In: peak potentials (V) of each kind. Out: pairs of indices into the input lists, unpaired
@@ -15,6 +15,13 @@ export interface PairPeaksOptions {
   maxDeltaEpV?: number;
   /** Largest allowed Epc − Epa (V); adsorbed couples sit near ΔEp = 0. @default 0.03 */
   maxNegativeDeltaEpV?: number;
+  /**
+   * Weight (0…1) of each peak, e.g. its height over the largest height: leaving a small peak
+   * unpaired costs only weight·maxDeltaEpV, so two small features cannot pull a large couple
+   * apart. @default 1 for every peak
+   */
+  anodicWeights?: readonly number[];
+  cathodicWeights?: readonly number[];
 }
 
 export interface PeakPair {
@@ -26,17 +33,22 @@ export function pairPeaksIntoCouples(anodicV: readonly number[], cathodicV: read
   const maxDelta = options.maxDeltaEpV ?? 0.6;
   const maxNegative = options.maxNegativeDeltaEpV ?? 0.03;
   if (!(maxDelta > 0) || !(maxNegative >= 0)) throw new AnalysisError('BAD_OPTION', `maxDeltaEpV must be > 0 and maxNegativeDeltaEpV ≥ 0, got ${maxDelta}, ${maxNegative}`);
-  const a = anodicV.map((v, i) => ({ v, i })).sort((p, q) => p.v - q.v);
-  const c = cathodicV.map((v, i) => ({ v, i })).sort((p, q) => p.v - q.v);
+  const a = anodicV.map((v, i) => ({ v, i, w: maxDelta * (options.anodicWeights?.[i] ?? 1) })).sort((p, q) => p.v - q.v);
+  const c = cathodicV.map((v, i) => ({ v, i, w: maxDelta * (options.cathodicWeights?.[i] ?? 1) })).sort((p, q) => p.v - q.v);
   const cost = (x: number, y: number) => {
     const d = a[x]!.v - c[y]!.v;
     return d <= maxDelta && d >= -maxNegative ? Math.abs(d) : Infinity;
   };
   // best[x][y]: least cost of matching the first x anodic with the first y cathodic peaks.
-  const best = Array.from({ length: a.length + 1 }, (_, x) => Array.from({ length: c.length + 1 }, (_, y) => (x + y) * maxDelta));
-  for (let x = 1; x <= a.length; x++) {
-    for (let y = 1; y <= c.length; y++) {
-      best[x]![y] = Math.min(best[x - 1]![y]! + maxDelta, best[x]![y - 1]! + maxDelta, best[x - 1]![y - 1]! + cost(x - 1, y - 1));
+  const best = Array.from({ length: a.length + 1 }, () => new Array<number>(c.length + 1).fill(0));
+  for (let x = 0; x <= a.length; x++) {
+    for (let y = 0; y <= c.length; y++) {
+      if (x === 0 && y === 0) continue;
+      best[x]![y] = Math.min(
+        x > 0 ? best[x - 1]![y]! + a[x - 1]!.w : Infinity,
+        y > 0 ? best[x]![y - 1]! + c[y - 1]!.w : Infinity,
+        x > 0 && y > 0 ? best[x - 1]![y - 1]! + cost(x - 1, y - 1) : Infinity,
+      );
     }
   }
   const pairs: PeakPair[] = [];
@@ -46,7 +58,7 @@ export function pairPeaksIntoCouples(anodicV: readonly number[], cathodicV: read
     const here = best[x]![y]!;
     if (x > 0 && y > 0 && here === best[x - 1]![y - 1]! + cost(x - 1, y - 1)) {
       pairs.push({ anodic: a[--x]!.i, cathodic: c[--y]!.i });
-    } else if (x > 0 && here === best[x - 1]![y]! + maxDelta) {
+    } else if (x > 0 && here === best[x - 1]![y]! + a[x - 1]!.w) {
       pairs.push({ anodic: a[--x]!.i, cathodic: null });
     } else {
       pairs.push({ anodic: null, cathodic: c[--y]!.i });

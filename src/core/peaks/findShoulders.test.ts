@@ -7,7 +7,7 @@ describe('findShoulders', () => {
   // Hand example: the slope falls from 4 to 0.5 and rises to 3 without changing sign.
   it('hand example: a dip of the slope to 0.5 between 4 and 3 is a rising-flank shoulder', () => {
     const d = [0, 0.5, 1, 2, 4, 2, 0.5, 1, 3, 1, -2, -1, -0.5, 0];
-    expect(findShoulders(d)).toEqual([{ index: 6, flank: 'rising', slopeRatio: 0.5 / 3 }]);
+    expect(findShoulders(d)).toEqual([{ index: 6, flank: 'rising', slopeRatio: 0.5 / 3, leftBracket: 4, rightBracket: 8 }]);
   });
 
   it('a slope that is steepest at the very start of the range is no bracket', () => {

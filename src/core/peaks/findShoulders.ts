@@ -14,6 +14,9 @@ export interface Shoulder {
   flank: 'rising' | 'falling';
   /** |d| at the shoulder over the smaller of the two bracketing steep slopes (0…1). */
   slopeRatio: number;
+  /** Indices of the steepest points on either side (the brackets). */
+  leftBracket: number;
+  rightBracket: number;
 }
 
 export interface FindShouldersOptions {
@@ -60,7 +63,7 @@ function largestMagnitude(d: ArrayLike<number>, start: number, end: number): num
  * vertex) is not a wave's flank and does not count as a bracket.
  */
 function flattestInteriorPoint(d: ArrayLike<number>, a: number, b: number, sign: number, minBracket: number, range: { start: number; end: number }) {
-  let best: { index: number; slopeRatio: number } | null = null;
+  let best: { index: number; slopeRatio: number; leftBracket: number; rightBracket: number } | null = null;
   const mag = (j: number) => sign * (d[j] as number);
   for (let k = a + 1; k < b - 1; k++) {
     if (!(mag(k) <= mag(k - 1) && mag(k) < mag(k + 1))) continue;
@@ -72,7 +75,7 @@ function flattestInteriorPoint(d: ArrayLike<number>, a: number, b: number, sign:
     const bracket = Math.min(mag(left), mag(right));
     if (bracket < minBracket) continue;
     const ratio = mag(k) / bracket;
-    if (!best || ratio < best.slopeRatio) best = { index: k, slopeRatio: ratio };
+    if (!best || ratio < best.slopeRatio) best = { index: k, slopeRatio: ratio, leftBracket: left, rightBracket: right };
   }
   return best;
 }

@@ -13,7 +13,7 @@
 import type { PeakConfidence, PeakDirection, PeakWindow } from '../analysis/types';
 import { savitzkyGolayDerivative } from '../smoothing/savitzkyGolaySmooth';
 import { findProminentMaxima, type ProminentMaximum } from './findProminentMaxima';
-import { findShoulders } from './findShoulders';
+import { findShoulders, type Shoulder } from './findShoulders';
 import { refinePeakQuadratic } from './refinePeakQuadratic';
 import type { SweepSignals } from './sweepSignals';
 
@@ -72,7 +72,7 @@ function searchAutomatically(y: Float64Array, options: LocatePeaksOptions): Foun
   for (const sh of findShoulders(d)) {
     if (maxima.some((m) => Math.abs(m.index - sh.index) <= options.locatingWindow)) continue;
     if (!onFlankOfMaximum(y, sh.index, sh.flank, maxima)) continue;
-    const prominence = shoulderHeight(y, sh.index, sh.flank, maxima.map((m) => m.index));
+    const prominence = shoulderHeight(y, sh);
     if (prominence >= min) out.push({ local: sh.index, prominence, confidence: 'shoulder', shoulder: true });
   }
   return out.sort((a, b) => a.local - b.local);
@@ -95,17 +95,16 @@ function onFlankOfMaximum(y: Float64Array, k: number, flank: 'rising' | 'falling
   return Math.abs(k - m.index) <= 3 * halfWidth;
 }
 
-/** Rise of the shoulder above the lowest point between it and the neighbouring maximum or sweep end. */
-function shoulderHeight(y: Float64Array, k: number, flank: 'rising' | 'falling', maxima: number[]): number {
-  let lo = y[k]!;
-  if (flank === 'rising') {
-    const from = Math.max(0, ...maxima.filter((m) => m < k));
-    for (let j = from; j < k; j++) lo = Math.min(lo, y[j]!);
-  } else {
-    const to = Math.min(y.length, ...maxima.filter((m) => m > k));
-    for (let j = k; j < to; j++) lo = Math.min(lo, y[j]!);
-  }
-  return y[k]! - lo;
+/**
+ * Size of a shoulder: how far the flattened stretch departs from the chord between the two steep
+ * points that bracket it. A flank without a second wave follows its chord closely; noise wiggles
+ * depart from it by about the noise. Our measure (common practice, no source).
+ */
+function shoulderHeight(y: Float64Array, sh: Shoulder): number {
+  const a = sh.leftBracket;
+  const b = sh.rightBracket;
+  const chord = y[a]! + ((y[b]! - y[a]!) * (sh.index - a)) / (b - a);
+  return Math.abs(y[sh.index]! - chord);
 }
 
 function searchWindow(sig: SweepSignals, start: number, y: Float64Array, w: PeakWindow): Found[] {
