@@ -49,8 +49,9 @@ function describeResults(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOpti
   if (c.electroactiveAreaCm2 !== null) out.push(`electroactive area ${c.electroactiveAreaCm2.toFixed(4)} cm² from the slope and the given D (${o.diffusionCm2PerS} cm²/s)`);
   const k = c.rateConstant;
   if (k?.k0CmPerS != null) {
-    const used = k.perFile.filter((f) => f.k0CmPerS !== null).length;
-    out.push(`k° = ${sci(k.k0CmPerS)} cm/s (Nicholson ψ, median of ${used} file${used > 1 ? 's' : ''}; α = ${(o.alpha ?? 0.5).toFixed(2)}, D_O/D_R = ${o.diffusionRatio})`);
+    const used = k.perFile.filter((f) => f.k0CmPerS !== null);
+    const names = [...new Set(used.map((f) => (f.method === 'irreversible' ? 'both irreversible peaks, Wang eq. 2-5' : "Nicholson's ψ")))].join(' and ');
+    out.push(`k° = ${sci(k.k0CmPerS)} cm/s (${names}; median of ${used.length} file${used.length > 1 ? 's' : ''}; D_O/D_R = ${o.diffusionRatio}; D ${k.diffusionSource ?? ''})`);
   } else if (k?.lowerBoundCmPerS != null) {
     out.push(`ΔEp stays below the range of Nicholson's method: k° > ${sci(k.lowerBoundCmPerS, 2)} cm/s`);
   }
