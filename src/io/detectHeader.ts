@@ -24,7 +24,7 @@ export function splitHeader(line: string, delimiter: Delimiter, k: number): stri
     return f.length === k || (f.length > k && f.slice(k).every((x) => x === '')) ? f.slice(0, k) : null;
   }
   const wide = line.trim().split(/\t|\s{2,}/);
-  if (wide.length === k) return wide.map((s) => s.trim());
+  if (wide.length === k) return wide.map((s) => s.trim().replace(/^"(.*)"$/, '$1'));
   const narrow = splitFields(line, 'whitespace');
   return narrow.length === k ? narrow : null;
 }

@@ -31,6 +31,7 @@ const layoutArb = fc.record({
   lineEnd: fc.constantFrom<NonNullable<Layout['lineEnd']>>('\n', '\r\n', '\r'),
   encoding: fc.constantFrom('utf8', 'utf8bom', 'utf16le', 'utf16be'),
   trailingBlank: fc.boolean(),
+  quoted: fc.boolean(),
 });
 
 const shapeArb = fc.record({
@@ -73,7 +74,8 @@ describe('importVoltammogram properties', () => {
         const header = lay.header ? Object.fromEntries(columns.map((c) => [c, HEADER_NAMES[c](pName, cName)])) : undefined;
         const layout: Layout = {
           delimiter: lay.delimiter,
-          decimalComma: lay.decimalComma && lay.delimiter !== ',',
+          decimalComma: lay.decimalComma && (lay.delimiter !== ',' || lay.quoted),
+          quoted: lay.quoted,
           columns,
           potentialScale: pScale,
           currentScale: cScale,

@@ -79,6 +79,9 @@ const rows: Row[] = [
       expect(r.measurement.cycles.length).toBe(2);
       expect(Object.keys(r.measurement.extraColumns).sort()).toEqual(['Charge/C', 'I2/A', 'Point']);
     } },
+  { name: 'every field quoted, comma delimiter', layout: { delimiter: ',', header: { potential: 'Potential, measured (V)', current: 'Current (A)' }, columns: ['potential', 'current'], quoted: true } },
+  { name: 'every field quoted, comma delimiter and decimal comma', layout: { delimiter: ',', decimalComma: true, header: H, columns: ['potential', 'current'], quoted: true },
+    check: (r) => expect(r.measurement.detection.decimalMark.value).toBe(',') },
   { name: 'UTF-8 with BOM', layout: { delimiter: ',', header: H, columns: ['potential', 'current'] }, bytes: (t) => encodeUtf8(t, true) },
   { name: 'UTF-16 LE with BOM', layout: { delimiter: '\t', header: H, columns: ['potential', 'current'], lineEnd: '\r\n' }, bytes: (t) => encodeUtf16(t, true),
     check: (r) => expect(r.measurement.detection.encoding.value).toBe('utf-16le') },

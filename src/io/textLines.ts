@@ -53,7 +53,7 @@ export function sampleLines(text: string, maxLines = 4000, maxChars = 1 << 20): 
 export function splitFields(line: string, delimiter: Delimiter): string[] {
   if (delimiter === 'whitespace') {
     const t = line.trim();
-    return t === '' ? [] : t.split(/\s+/);
+    return t === '' ? [] : t.split(/\s+/).map(unquote);
   }
   if (line.indexOf('"') === -1) {
     const parts = line.split(delimiter);
@@ -61,6 +61,10 @@ export function splitFields(line: string, delimiter: Delimiter): string[] {
     return parts;
   }
   return splitQuoted(line, delimiter).map((f) => f.trim());
+}
+
+function unquote(f: string): string {
+  return f.length >= 2 && f.charCodeAt(0) === 34 && f.charCodeAt(f.length - 1) === 34 ? f.slice(1, -1).replace(/""/g, '"') : f;
 }
 
 function splitQuoted(line: string, d: string): string[] {
