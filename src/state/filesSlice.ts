@@ -82,6 +82,11 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
         importBatch: s.importBatch ? { ...s.importBatch, done: s.importBatch.done + 1 } : null,
       })))));
       set((s) => (s.importBatch && s.importBatch.done >= s.importBatch.total ? { importBatch: null } : {}));
+      const failed = entries.filter((e) => get().files[e.id]?.status === 'error').map((e) => e.fileName);
+      if (failed.length > 0) {
+        const names = failed.length > 3 ? `${failed.slice(0, 3).join(', ')} and ${failed.length - 3} more` : failed.join(', ');
+        set({ notice: `${failed.length} of ${entries.length} file${entries.length === 1 ? '' : 's'} could not be read (${names}); the reason is shown beside each file. Everything else stays loaded.` });
+      }
       return entries.map((e) => e.id);
     },
 

@@ -66,6 +66,7 @@ describe('files and analysis', () => {
     expect(s.files[bad as string]?.error?.code).toMatch(/^[A-Z_]+$/);
     expect(s.files[good as string]?.status).toBe('ready');
     expect(s.results[good as string]?.status).toBe('ready');
+    expect(s.notice).toMatch(/^1 of 1 file could not be read \(notes\.csv\)/);
   });
 
   it('re-imports with an overridden unit; a failing override keeps the previous reading', async () => {
