@@ -15,7 +15,7 @@ import { savitzkyGolayDerivative } from '../smoothing/savitzkyGolaySmooth';
 import { findProminentMaxima, type ProminentMaximum } from './findProminentMaxima';
 import { findShoulders, type Shoulder } from './findShoulders';
 import { refinePeakQuadratic } from './refinePeakQuadratic';
-import type { SweepSignals } from './sweepSignals';
+import { ownStart, type SweepSignals } from './sweepSignals';
 
 export interface PeakCandidate {
   direction: PeakDirection;
@@ -39,15 +39,16 @@ export interface LocatePeaksOptions {
 
 export function locatePeaksInSweep(sig: SweepSignals, segmentIndex: number, options: LocatePeaksOptions): PeakCandidate[] {
   const seg = sig.segments[segmentIndex]!;
+  const start = ownStart(sig.segments, segmentIndex);
   const s = seg.direction === 'positive' ? 1 : -1;
   const direction: PeakDirection = s > 0 ? 'anodic' : 'cathodic';
-  const y = sig.locatingA.slice(seg.start, seg.end).map((v) => s * v);
+  const y = sig.locatingA.slice(start, seg.end).map((v) => s * v);
   const found = options.windows
-    ? options.windows.flatMap((w) => searchWindow(sig, seg.start, y, w))
+    ? options.windows.flatMap((w) => searchWindow(sig, start, y, w))
     : searchAutomatically(y, options);
   return found.map((f) => {
-    const refined = f.shoulder ? null : refine(sig, seg.start, y, f.local, f.prominence, s);
-    const index = seg.start + f.local;
+    const refined = f.shoulder ? null : refine(sig, start, y, f.local, f.prominence, s);
+    const index = start + f.local;
     return {
       direction,
       segmentIndex,

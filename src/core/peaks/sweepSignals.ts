@@ -1,8 +1,8 @@
 /**
  * The signals every later step of the per-voltammogram analysis reads: IUPAC current, a time axis,
  * the shown (user) smoothing, the heavier smoothing used only to locate features, dI/dE, and the
- * noise level. Smoothing runs sweep by sweep so that no window straddles a vertex; at a vertex
- * shared by two sweeps the later sweep's value is kept. The raw columns are never modified.
+ * noise level. Smoothing runs sweep by sweep so that no window straddles a vertex; a vertex shared
+ * by two sweeps belongs to the earlier one (see ownStart). The raw columns are never modified.
  * Methods: Savitzky–Golay (../smoothing/savitzkyGolaySmooth.ts), MAD noise
  *   (madSecondDifferenceNoise.ts). Time when the file has none: cumulative |ΔE|/v (exact for a
  *   linear sweep at constant rate).
@@ -46,6 +46,17 @@ export function windowForSpan(potentialV: Float64Array, segment: SweepSegment, s
   return Math.min(odd, n % 2 ? n : n - 1);
 }
 
+/**
+ * First point a sweep owns. A vertex shared with the previous sweep belongs to that sweep: the
+ * charging current reverses right after it, and a smoothing window that straddled the step
+ * would invent a bump at the start of the new sweep.
+ */
+export function ownStart(segments: SweepSegment[], k: number): number {
+  const seg = segments[k]!;
+  const prev = segments[k - 1];
+  return prev && prev.end - 1 === seg.start ? seg.start + 1 : seg.start;
+}
+
 function smoothSegments(
   y: Float64Array,
   segments: SweepSegment[],
@@ -53,20 +64,21 @@ function smoothSegments(
   derivativeOf?: Float64Array,
 ): Float64Array {
   const out = Float64Array.from(y);
-  for (const seg of segments) {
+  for (const [k, seg] of segments.entries()) {
     const setting = pick(seg);
-    const n = seg.end - seg.start;
+    const start = ownStart(segments, k);
+    const n = seg.end - start;
     if (!setting || n < setting.window || n < 3) continue;
-    const part = y.subarray(seg.start, seg.end);
+    const part = y.subarray(start, seg.end);
     let values: Float64Array;
     if (derivativeOf) {
       const dI = savitzkyGolayDerivative(part, { ...setting, order: Math.max(1, setting.order) });
-      const dE = savitzkyGolayDerivative(derivativeOf.subarray(seg.start, seg.end), { ...setting, order: Math.max(1, setting.order) });
+      const dE = savitzkyGolayDerivative(derivativeOf.subarray(start, seg.end), { ...setting, order: Math.max(1, setting.order) });
       values = dI.map((v, k) => (dE[k] !== 0 ? v / dE[k]! : 0));
     } else {
       values = savitzkyGolaySmooth(part, setting);
     }
-    out.set(values, seg.start);
+    out.set(values, start);
   }
   return out;
 }
