@@ -72,6 +72,7 @@ function buildDetection(front: FrontMatter, table: ParsedTable, roles: RoleAssig
     tableLines: { first: layout.firstDataLine + 1, last: table.lastDataLine },
     rowsRead: cols.rowsKept,
     rowsSkipped: table.skippedCount + cols.rowsDropped,
+    headLines: front.headLines,
     footer: { lines: table.footerLines, firstLine: table.firstFooterLine },
     cycleCount: cols.split.cycles.length,
   };

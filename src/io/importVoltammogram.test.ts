@@ -67,6 +67,7 @@ const rows: Row[] = [
       expect(r.measurement.metadata['Operator']).toBe('A. Tester');
       expect(r.measurement.detection.footer).toEqual({ lines: 1, firstLine: 5 + 1 + cv.potentialV.length + 2 });
       expect(r.measurement.detection.rowsSkipped).toBe(0);
+      expect(r.measurement.detection.headLines.slice(0, 2)).toEqual(['Operator: A. Tester', 'Sample: ferrocene in MeCN']);
     } },
   { name: 'any column order: time, current, potential in ms, µA, mV', layout: { delimiter: ',', header: { time: 't/ms', current: 'i / µA', potential: 'E (mV)' }, columns: ['time', 'current', 'potential'], timeScale: 1e3, potentialScale: 1e3, currentScale: 1e6 },
     check: (r) => {

@@ -85,6 +85,7 @@ export interface FrontMatter {
   layout: TableLayout;
   header: HeaderFound;
   preambleLines: string[];
+  headLines: string[];
   pre: PreambleReading;
   startOffset: number;
 }
@@ -100,7 +101,8 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   const decimalComma = layout.decimalMark.value === ',';
   const header = detectHeader(fileName, sample.lines, layout.firstDataLine, layout.delimiter.value, decimalComma, layout.fieldCount, o);
   const preambleLines = sample.lines.slice(0, header.preambleEnd);
-  return { decoded, text, lineEnding, layout, header, preambleLines, pre: readPreamble(preambleLines, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
+  const headLines = sample.lines.slice(0, 40).map((l) => (l.length > 240 ? `${l.slice(0, 240)}…` : l));
+  return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre: readPreamble(preambleLines, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
 }
 
 function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): Generator<number, ImportResult> {

@@ -70,6 +70,9 @@ export interface ImportDetection {
   tableLines: { first: number; last: number };
   rowsRead: number;
   rowsSkipped: number;
+  /** The file's first lines as decoded (at most 40, each cut at 240 characters), so a user can
+   * see the raw text next to the guesses and pick another header line. */
+  headLines: string[];
   /** Non-numeric lines after the last data row (left out, not counted as skipped). */
   footer: { lines: number; firstLine: number | null };
   cycleCount: number;
