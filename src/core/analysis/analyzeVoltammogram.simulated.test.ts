@@ -50,6 +50,16 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     expect(Math.abs(couple.anodicHalfPeakWidthV! - 2.2 * u)).toBeLessThan(0.0015);
   });
 
+  // Same sources; every diagnostic is a multiple of RT/nF, so at 50 °C ΔEp and |Ep − Ep/2| scale
+  // by 323.15/298.15 (2.20 RT/F = 61.26 mV).
+  it('at 323.15 K: ΔEp vs the scaled table ±1.5 mV, |Ep − Ep/2| = 2.20 RT/F ±1.5 mV, nernstian', () => {
+    const hot = analyzeVoltammogram(simulatedVoltammogram({ ...base, temperatureK: 323.15 }), { temperatureK: 323.15 });
+    const { couple } = firstCouple(hot);
+    expect(Math.abs(couple.deltaEpV! - couple.verdict.evidence.reversibleDeltaEpAtSwitchV!)).toBeLessThan(0.0015);
+    expect(Math.abs(couple.cathodicHalfPeakWidthV! - 2.2 * thermalVoltageV(323.15))).toBeLessThan(0.0015);
+    expect(couple.verdict.category).toBe('nernstian');
+  });
+
   // Nicholson, Anal. Chem. 38 (1966) 1406 (from memory), check-values §6: the empirical ratio from
   // the switching current is built to return about 1 for a simple reversible couple; 3 % here.
   it('Nicholson (1966) empirical ratio is 1 within 3 % for a reversible couple without charging', () => {

@@ -116,6 +116,7 @@ describe('analyzeVoltammogram: bad and empty input', () => {
     expect(() => analyzeVoltammogram(reversible, { smoothing: { window: 4, order: 2 } })).toThrow(/odd window/);
     expect(() => analyzeVoltammogram(reversible, { temperatureK: -5 })).toThrow(/temperatureK/);
     expect(() => analyzeVoltammogram(reversible, { peakWindows: [{ direction: 'anodic', fromV: 0.1, toV: 0.1 }] })).toThrow(/peak window/);
+    expect(() => analyzeVoltammogram(reversible, { cycles: [3] })).toThrow(/names cycle 3/);
   });
 
   it('fewer than 5 points is TOO_FEW_POINTS', () => {

@@ -109,6 +109,11 @@ function resolveOptions(v: Voltammogram, o: AnalyzeVoltammogramOptions): Omit<Re
       throw new AnalysisError('BAD_OPTION', `peak window ${w.direction} [${w.fromV}, ${w.toV}] V must have two different finite ends`);
     }
   }
+  const cycles = o.cycles ?? v.cycles.map((c) => c.index);
+  const missing = cycles.filter((k) => !v.cycles.some((c) => c.index === k));
+  if (missing.length) {
+    throw new AnalysisError('BAD_OPTION', `cycles option names cycle ${missing.join(', ')}, but the voltammogram has cycles ${v.cycles.map((c) => c.index).join(', ') || 'none'}`);
+  }
   return {
     temperatureK,
     electronCount,
@@ -123,6 +128,6 @@ function resolveOptions(v: Voltammogram, o: AnalyzeVoltammogramOptions): Omit<Re
     minRelativeProminence,
     maxDeltaEpV,
     scanRateVPerS,
-    cycles: o.cycles ?? v.cycles.map((c) => c.index),
+    cycles,
   };
 }

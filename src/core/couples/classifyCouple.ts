@@ -103,7 +103,12 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     return verdict('inconclusive', [`${dEpReason}: smaller than diffusion theory allows, yet too large for an adsorbed layer`, ratioReason, ...widthReasons]);
   }
   if (dEp <= expected + 0.31 * u) return verdict('nernstian', [`${dEpReason}: within ${mv(0.31 * u)}`, ratioReason, ...widthReasons]);
-  return verdict('sluggish', [`${dEpReason}: wider by ${mv(dEp - expected)}, below the irreversible limit ${mv(8.25 * u)}`, ratioReason, ...widthReasons]);
+  return verdict('sluggish', [
+    `${dEpReason}: wider by ${mv(dEp - expected)}, below the irreversible limit ${mv(8.25 * u)}`,
+    ratioReason,
+    ...widthReasons,
+    'uncompensated resistance widens ΔEp in the same way; correct for iR drop or check that ΔEp grows with scan rate before reading this as slow kinetics',
+  ]);
 }
 
 function halfWidthReasons(input: ClassifyCoupleInput, e: VerdictEvidence): string[] {
