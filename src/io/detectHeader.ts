@@ -21,6 +21,8 @@ export interface HeaderFound {
 export function splitHeader(line: string, delimiter: Delimiter, k: number): string[] | null {
   if (delimiter !== 'whitespace') {
     const f = splitFields(line, delimiter);
+    // One missing trailing name: the data rows end with a delimiter and the header does not.
+    if (f.length === k - 1 && k > 2) return [...f, ''];
     return f.length === k || (f.length > k && f.slice(k).every((x) => x === '')) ? f.slice(0, k) : null;
   }
   const wide = line.trim().split(/\t|\s{2,}/);

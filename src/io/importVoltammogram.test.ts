@@ -151,6 +151,16 @@ describe('importVoltammogram: layout table (SI units back within 1e-9 relative)'
     expect(Math.abs((fixed.measurement.scanRateVPerS as number) - 0.1) / 0.1).toBeLessThan(1e-6);
   });
 
+  it('a trailing delimiter on some rows only: every row is kept', () => {
+    const text = writeLayout(cv, { delimiter: ';', header: H, columns: ['potential', 'current'] })
+      .split('\n')
+      .map((l, i) => (i % 3 === 0 ? l : `${l};`))
+      .join('\n');
+    const r = importVoltammogram('ragged_100mVs.txt', text);
+    expectSameCv(r);
+    expect(r.warnings).toEqual([]);
+  });
+
   it('one file per sweep: a single forward sweep is one segment in one cycle', () => {
     const one = makeSyntheticCv({ cycles: 1, stepV: 0.005 });
     const n = 161;

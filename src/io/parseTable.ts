@@ -1,6 +1,6 @@
 /**
  * Tokenises the numeric table with papaparse, chunk by chunk, into one Float64Array per column.
- * Rows with too few fields, or fewer than two numbers, are skipped and located by line; a copy
+ * Rows with extra non-empty fields, or fewer than two numbers, are skipped and located by line; a copy
  * of the header line inside the table (files concatenated from several exports) is recognised;
  * non-numeric lines after the last data row are a footer. Written as a generator that yields its
  * progress, so that a synchronous and an asynchronous (yielding) driver share one code path.
@@ -129,11 +129,12 @@ function flushPending(out: ParsedTable, pending: Pending[]): void {
 function readRow(fields: string[], k: number, decimalComma: boolean, values: Float64Array): 'data' | 'blank' | 'bad' {
   const n = fields.length;
   if (n === 0 || (n === 1 && (fields[0] as string).trim() === '')) return 'blank';
-  if (n < k) return 'bad';
   for (let j = k; j < n; j++) if ((fields[j] as string).trim() !== '') return 'bad';
+  // A short row keeps its leading fields; the missing ones are NaN, and the row is dropped
+  // later only if one of them was needed (potential, current, time, cycle).
   let finite = 0;
   for (let j = 0; j < k; j++) {
-    const v = parseNumber(fields[j] as string, decimalComma);
+    const v = j < n ? parseNumber(fields[j] as string, decimalComma) : NaN;
     values[j] = v;
     if (Number.isFinite(v)) finite++;
   }
