@@ -154,3 +154,20 @@ describe('analyzeSeries with one scan rate', () => {
     expect(r.warnings.map((w) => w.code)).toContain('SINGLE_SCAN_RATE');
   });
 });
+
+describe('analyzeSeries k° for a reversible couple', () => {
+  // Nicholson 1965 table (from memory): 61 mV ↔ ψ = 20, 63 mV ↔ 7 — steep, so one file at 63 mV
+  // among reversible ones gives no k°, only the lower bound (design, common practice, no source).
+  it('ignores a single stray ΔEp just inside the table', () => {
+    const dEp = [0.059, 0.059, 0.059, 0.059, 0.063];
+    const files = v.map((s, i) => ({
+      fileName: `r${i}`, scanRateVPerS: s,
+      analysis: fakeAnalysis([{ epaV: (dEp[i] as number) / 2, epcV: -(dEp[i] as number) / 2, ipaA: rev(s), ipcA: rev(s) }]),
+    }));
+    const c = analyzeSeries(files, opts).couples[0];
+    expect(c?.kineticClass).toBe('reversible');
+    expect(c?.rateConstant?.k0CmPerS).toBeNull();
+    expect(c?.rateConstant?.perFile[4]?.k0CmPerS).toBeGreaterThan(0);
+    expect(c?.rateConstant?.lowerBoundCmPerS).toBeGreaterThan(0);
+  });
+});

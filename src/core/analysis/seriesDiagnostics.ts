@@ -53,7 +53,7 @@ function describeResults(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOpti
     const names = [...new Set(used.map((f) => (f.method === 'irreversible' ? 'both irreversible peaks, Wang eq. 2-5' : "Nicholson's ψ")))].join(' and ');
     out.push(`k° = ${sci(k.k0CmPerS)} cm/s (${names}; median of ${used.length} file${used.length > 1 ? 's' : ''}; D_O/D_R = ${o.diffusionRatio}; D ${k.diffusionSource ?? ''})`);
   } else if (k?.lowerBoundCmPerS != null) {
-    out.push(`ΔEp stays below the range of Nicholson's method: k° > ${sci(k.lowerBoundCmPerS, 2)} cm/s`);
+    out.push(`ΔEp stays near the reversible value (below the 61 mV start of Nicholson's table) at most scan rates: k° > ${sci(k.lowerBoundCmPerS, 2)} cm/s`);
   }
   const s = c.surface;
   if (s) {

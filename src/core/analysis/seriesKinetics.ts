@@ -68,6 +68,7 @@ export function seriesRateConstant(
   diffusion: SeriesDiffusion | null,
   o: ResolvedSeriesOptions,
   alphaMeasured: number | null,
+  reversible = false,
 ): SeriesRateConstant {
   // A D the user knows beats one estimated from peak heights (biased low for slow couples).
   const dBulk = o.diffusionCm2PerS ?? diffusion?.diffusionCm2PerS ?? null;
@@ -77,7 +78,11 @@ export function seriesRateConstant(
   }
   const { dO, dR } = diffusionPair(dBulk, forward, o.diffusionRatio);
   const perFile = points.map((p) => fileRateConstant(p, forward, dO, dR, alphaMeasured, o));
-  const ks = perFile.flatMap((f) => (f.k0CmPerS === null ? [] : [f.k0CmPerS]));
+  // A couple that reads as reversible at most scan rates: a ΔEp a few mV past 61 mV in one file is
+  // within measurement scatter, and ψ is steep there, so such stray values give no k°.
+  const determinable = perFile.filter((f) => f.k0CmPerS !== null).length;
+  const stray = reversible && determinable * 2 < points.length;
+  const ks = stray ? [] : perFile.flatMap((f) => (f.k0CmPerS === null ? [] : [f.k0CmPerS]));
   const narrow = points.filter((p) => p.deltaEpV !== null && o.electronCount * p.deltaEpV * (STANDARD_TEMPERATURE_K / o.temperatureK) * 1000 < TABLE_RANGE_MV[0]);
   let lowerBoundCmPerS: number | null = null;
   if (!ks.length && narrow.length) {
