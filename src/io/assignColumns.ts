@@ -105,7 +105,11 @@ function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarni
   const spare = () => free().length - (has('potential') ? 0 : 1) - (has('current') ? 0 : 1);
   for (const j of free()) if (spare() > 0 && looksLikeIndex(stats[j] as ColumnStats)) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
   for (const j of free()) if (spare() > 0 && !has('cycle') && looksLikeCycle(stats[j] as ColumnStats, rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${(stats[j] as ColumnStats).distinct} values)`);
-  for (const j of free()) if (spare() > 0 && !has('time') && looksLikeTime(stats[j] as ColumnStats)) set(j, 'time', 'time — rises steadily from row to row');
+  // Of several rising columns (a single forward sweep rises too), time is the one starting nearest 0.
+  const timeLike = free().filter((j) => looksLikeTime(stats[j] as ColumnStats));
+  const offset = (j: number) => Math.abs((stats[j] as ColumnStats).min) / ((stats[j] as ColumnStats).max - (stats[j] as ColumnStats).min);
+  const t = timeLike.sort((a, b) => offset(a) - offset(b))[0];
+  if (t !== undefined && spare() > 0 && !has('time')) set(t, 'time', 'time — rises steadily from row to row, starting nearest 0');
   if (!has('potential') && free().length) {
     const [j, why] = guessPotential(free(), stats);
     set(j, 'potential', why);

@@ -169,5 +169,9 @@ describe('importVoltammogram: layout table (SI units back within 1e-9 relative)'
     expectSameCv(r, sweep);
     expect(r.measurement.segments.length).toBe(1);
     expect(r.measurement.segments[0]?.direction).toBe('positive');
+    // Without a header the rising potential of one sweep must not be taken for the time.
+    const shifted: SyntheticCv = { ...sweep, potentialV: sweep.potentialV.map((e) => e + 0.3) };
+    const bare = importVoltammogram('sweep1.txt', writeLayout(shifted, { delimiter: '\t', columns: ['potential', 'current', 'time'] }));
+    expect(bare.measurement.detection.columns.map((c) => c.role)).toEqual(['potential', 'current', 'time']);
   });
 });
