@@ -8,6 +8,7 @@ import { createFilesSlice } from './filesSlice';
 import { createHistorySlice } from './historySlice';
 import type { HalfwaveState, HalfwaveStore, StoreDeps } from './types';
 import { createSeriesSlice } from './seriesSlice';
+import { createTheorySlice } from './theorySlice';
 import { createViewSlice } from './viewSlice';
 
 export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
@@ -17,5 +18,6 @@ export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
     ...createViewSlice(set, get, deps),
     ...createHistorySlice(set, get, deps),
     ...createSeriesSlice(set, get, deps),
+    ...createTheorySlice(set, get, deps),
   }));
 }

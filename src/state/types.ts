@@ -85,6 +85,8 @@ export interface ViewSlice {
   convention: CurrentDisplay;
   showSmoothed: boolean;
   showBaselines: boolean;
+  /** Overlay a simulated voltammogram with the fitted parameters. */
+  showTheory: boolean;
   /** Drag on the plot zooms, or marks a peak window of `windowDirection`. */
   dragMode: 'zoom' | 'window';
   windowDirection: 'anodic' | 'cathodic';
@@ -130,7 +132,21 @@ export interface SeriesSlice {
   scheduleGroup(group: string, delayMs?: number): void;
 }
 
-export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice & SeriesSlice;
+export interface TheoryEntry {
+  status: 'running' | 'ready' | 'error';
+  /** Simulated applied potential (V, files' scale) and current (A, IUPAC). */
+  curve: { potentialV: Float64Array; currentA: Float64Array } | null;
+  /** The parameters used, in words, shown beside the plot. */
+  description: string;
+  error: UserError | null;
+}
+
+export interface TheorySlice {
+  theory: Record<string, TheoryEntry>;
+  simulateTheory(id: string): Promise<void>;
+}
+
+export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice & SeriesSlice & TheorySlice;
 export type HalfwaveStore = StoreApi<HalfwaveState>;
 
 export interface StoreDeps {

@@ -7,6 +7,7 @@ export const createViewSlice: SliceCreator<ViewSlice> = (set) => ({
   convention: 'iupac',
   showSmoothed: false,
   showBaselines: true,
+  showTheory: false,
   dragMode: 'zoom',
   windowDirection: 'anodic',
   mainView: 'trace',

@@ -6,6 +6,7 @@
 import { analyzeSeries } from '../core/analysis/analyzeSeries';
 import { analyzeVoltammogram } from '../core/analysis/analyzeVoltammogram';
 import { iRCorrect } from '../core/conventions/iRCorrect';
+import { simulateCv } from '../core/simulation/simulateCv';
 import { findSweepSegments } from '../core/sweeps/findSweepSegments';
 import { importVoltammogramAsync } from '../io';
 import { CancelledError } from './errors';
@@ -43,6 +44,10 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
   },
   series: (input) => analyzeSeries(input.files, input.options),
   export: (input) => ({ text: exportRun(input) }),
+  simulate: (input) => {
+    const sim = simulateCv(input.params);
+    return { potentialV: sim.potentialV, currentA: sim.currentA };
+  },
 };
 
 /** Hex SHA-256 of the bytes (FIPS 180-4), or null where Web Crypto is unavailable. */

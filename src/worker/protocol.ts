@@ -11,6 +11,7 @@ import type { AnalyzeVoltammogramOptions, VoltammogramAnalysis } from '../core/a
 import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSweepSegments';
 import type { Voltammogram } from '../core/types';
 import type { ImportOverrides, ImportResult } from '../io/types';
+import type { CvSimulationInput } from '../core/simulation/simulationTypes';
 import type { ExportRunInput } from './exportRun';
 
 export interface RequestMap {
@@ -37,6 +38,11 @@ export interface RequestMap {
   series: {
     input: { files: SeriesFileInput[]; options: AnalyzeSeriesOptions };
     output: SeriesAnalysis;
+  };
+  /** Theoretical voltammogram (core/simulation) for overlaying on a measurement. */
+  simulate: {
+    input: { params: Partial<CvSimulationInput> };
+    output: { potentialV: Float64Array; currentA: Float64Array };
   };
   /** Results sheet (CSV or JSON) of one group, through core analyzeRun and io/exportResults. */
   export: {

@@ -1,5 +1,5 @@
 /** "Trace": the selected voltammogram with peaks, baselines and (optionally) the smoothed curve. */
-import { useMemo } from 'react';
+import { useEffect, useMemo } from 'react';
 import { displayScale } from '../../state/display';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
 import { buildTraceFigure } from '../plots/traceFigure';
@@ -14,6 +14,13 @@ export function TracePanel() {
   const settings = useHalfwave((s) => s.settings);
   const view = useHalfwaveShallow((s) => ({ cycle: s.selectedCycle, convention: s.convention, showSmoothed: s.showSmoothed, showBaselines: s.showBaselines, dragMode: s.dragMode, dir: s.windowDirection }));
   const scale = useMemo(() => displayScale(settings), [settings]);
+  const showTheory = useHalfwave((s) => s.showTheory);
+  const theory = useHalfwave((s) => (id ? s.theory[id] : undefined));
+  const seriesResult = useHalfwave((s) => (file ? s.series[file.group]?.result : undefined));
+  useEffect(() => {
+    if (showTheory && id && seriesResult) void halfwaveActions().simulateTheory(id);
+  }, [showTheory, id, seriesResult, settings]);
+  const theoryCurve = showTheory && theory?.curve ? { ...theory.curve, label: 'theory (simulated, fitted values)' } : null;
   const m = file?.measurement ?? null;
   const corrected = result?.correctedPotentialV ?? null;
 
@@ -25,8 +32,9 @@ export function TracePanel() {
       showSmoothed: view.showSmoothed, showBaselines: view.showBaselines, dragMode: view.dragMode,
       peakWindows: windows ?? [], potentialOffsetV: scale.offsetV,
       potentialAxisTitle: `E${corrected ? ' (iR-corrected)' : ''} vs ${scale.name} / V`,
+      theory: theoryCurve,
     });
-  }, [m, corrected, result?.analysis, view, windows, scale]);
+  }, [m, corrected, result?.analysis, view, windows, scale, theoryCurve?.currentA]);
 
   const onRangeSelect = (a: number, b: number) => {
     if (!id || view.dragMode !== 'window') return;
@@ -46,6 +54,11 @@ export function TracePanel() {
       )}
       {result?.error ? <p className="error-text" role="alert">Analysis failed: {result.error.message}</p> : null}
       {!scale.ok ? <p className="warn-text">{scale.basis}</p> : null}
+      {showTheory && theory ? (
+        <p className={theory.error ? 'warn-text' : 'hint'} data-testid="theory-note">
+          {theory.error ? theory.error.message : `Theory overlay, ${theory.description}.`}
+        </p>
+      ) : null}
     </section>
   );
 }

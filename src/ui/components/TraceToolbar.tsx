@@ -5,6 +5,7 @@ export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'ru
   const cycle = useHalfwave((s) => s.selectedCycle);
   const showSmoothed = useHalfwave((s) => s.showSmoothed);
   const showBaselines = useHalfwave((s) => s.showBaselines);
+  const showTheory = useHalfwave((s) => s.showTheory);
   const dragMode = useHalfwave((s) => s.dragMode);
   const dir = useHalfwave((s) => s.windowDirection);
   const set = halfwaveActions().setView;
@@ -20,6 +21,9 @@ export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'ru
       </label>
       <label><input type="checkbox" checked={showSmoothed} data-testid="show-smoothed" onChange={(e) => set({ showSmoothed: e.target.checked })} /> smoothed</label>
       <label><input type="checkbox" checked={showBaselines} onChange={(e) => set({ showBaselines: e.target.checked })} /> baselines</label>
+      <label title="simulated voltammogram with the parameters fitted from this file's scan-rate series">
+        <input type="checkbox" checked={showTheory} data-testid="show-theory" onChange={(e) => set({ showTheory: e.target.checked })} /> theory
+      </label>
       <label>
         Drag to{' '}
         <select

@@ -12,6 +12,7 @@ export const palette = {
   anodicWindow: 'rgba(180, 70, 26, 0.10)',
   cathodicWindow: 'rgba(43, 71, 160, 0.10)',
   fit: '#444444',
+  theory: '#111111',
 } as const;
 
 export const markers = {

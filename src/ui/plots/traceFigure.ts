@@ -29,6 +29,8 @@ export interface TraceFigureInput {
   potentialOffsetV: number;
   /** e.g. "E vs SCE / V". */
   potentialAxisTitle: string;
+  /** Simulated voltammogram to overlay (files' scale, IUPAC), with its legend text. */
+  theory?: { potentialV: Float64Array; currentA: Float64Array; label: string } | null;
   /** Most points drawn per trace. @default 6000 */
   maxPoints?: number;
 }
@@ -52,6 +54,14 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
     for (const c of cycles) {
       data.push(line({ ...input, currentA: smoothed.currentA }, c.start, c.end, `smoothed, cycle ${c.index}`, palette.smoothed, tx, ty, 1.2));
     }
+  }
+  if (input.theory) {
+    const t = input.theory;
+    const xy = decimateMinMax(t.potentialV, t.currentA, 0, t.potentialV.length, input.maxPoints ?? 6000);
+    data.push({
+      type: 'scatter', mode: 'lines', name: t.label, x: xy.x.map(tx), y: xy.y.map(ty),
+      line: { color: palette.theory, width: 1.6, dash: 'dot' }, hovertemplate: 'theory<br>E %{x:.4f} V<br>i %{y:.4g}<extra></extra>',
+    });
   }
   const shown = new Set(cycles.map((c) => c.index));
   const peaks = (input.analysis?.cycles ?? []).filter((c) => shown.has(c.index)).flatMap((c) => c.peaks);
