@@ -177,6 +177,19 @@ describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', 
   });
 });
 
+describe('polynomial baseline on a closed peak', () => {
+  // B&F §14.3 (from memory), check-values §7: ip = F²AΓv/(4RT) = 0.6638 µA for Γ = 1e-10 mol/cm²;
+  // the 40 µF/cm² charging background is fitted on both sides of the peak by a quadratic.
+  it('adsorbed layer on a charging background: quadratic through both sides gives ip ±2 %', () => {
+    const v = simulatedVoltammogram({ ...base, mechanism: 'surface', surfaceRatePerS: Infinity, doubleLayerFPerCm2: 40e-6 });
+    const a = analyzeVoltammogram(v, { forwardBaseline: 'polynomial', returnBaseline: 'polynomial' });
+    const { couple, cycle } = firstCouple(a);
+    expect(cycle.peaks.map((p) => p.baseline.method)).toEqual(['polynomial', 'polynomial']);
+    expect(Math.abs(couple.ipcA! / 0.6638e-6 - 1)).toBeLessThan(0.02);
+    expect(Math.abs(couple.ipaA! / 0.6638e-6 - 1)).toBeLessThan(0.02);
+  });
+});
+
 describe('current sign convention (check-values §14; IUPAC Gold Book; ASDL plotting conventions)', () => {
   it('the same voltammogram in IUPAC and polarographic convention gives identical Epa, Epc, |ipa|, |ipc|', () => {
     const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 20e-6 }, { noiseA: 5e-8, seed: 3 });

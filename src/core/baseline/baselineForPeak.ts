@@ -1,6 +1,7 @@
 /**
  * Draws the baseline under one located peak with the requested method, choosing fit windows from
- * the data when the user gave none. Falls back to the linear pre-peak line (with a warning) when the
+ * the data when the user gave none (for 'polynomial', the pre-peak window plus, for a peak that
+ * closes like an adsorbed layer's, an equally long window after it). Falls back to the linear pre-peak line (with a warning) when the
  * requested method lacks the points it needs, and to a flat line through the lowest point before
  * the peak when even that is impossible.
  * Methods: linearPrePeakBaseline.ts, polynomialBaseline.ts, twoPointBaseline.ts,
@@ -106,7 +107,26 @@ function polynomialCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowReques
   const degree = spec?.degree ?? 2;
   const w = preWindow(sig, peak, r.regionStart, spec, r.marginPoints);
   if (!w || w[1] - w[0] < degree + 2) return linearCurve(sig, peak, r, spec);
-  return polynomialBaseline({ ...sig, fitRanges: [w], spanStart: Math.min(w[0], peak.index), spanEnd: seg.end }, { degree });
+  const after = spec?.anchorsV ? null : postPeakWindow(sig, peak, w);
+  const fitRanges: Array<[number, number]> = after ? [w, after] : [w];
+  return polynomialBaseline({ ...sig, fitRanges, spanStart: Math.min(w[0], peak.index), spanEnd: after ? after[1] : seg.end }, { degree });
+}
+
+/**
+ * Background after a closed peak (one whose current falls back to within 5 % of its height over
+ * the pre-peak line, as an adsorbed layer's does): as many points as the pre-peak window, starting
+ * where the current has fallen back. Null for a diffusion wave, whose tail never falls back.
+ */
+function postPeakWindow(sig: SweepSignals, peak: PeakCandidate, pre: [number, number]): [number, number] | null {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  const line = linearPrePeakBaseline({ ...sig, fitStart: pre[0], fitEnd: pre[1], spanStart: peak.index, spanEnd: seg.end }).curve;
+  const excess = (k: number) => s * (sig.locatingA[k]! - (baselineAt(line, k) ?? NaN));
+  const height = excess(peak.index);
+  let k = peak.index;
+  while (k < seg.end - 1 && excess(k) > 0.05 * height) k++;
+  const end = Math.min(seg.end, k + (pre[1] - pre[0]));
+  return excess(k) <= 0.05 * height && end - k >= 5 ? [k, end] : null;
 }
 
 function twoPointFromSpec(sig: SweepSignals, peak: PeakCandidate, spec: BaselineSpec | null): BaselineCurve {
