@@ -26,7 +26,7 @@ describe('theory overlay', () => {
     await store.getState().simulateTheory(id);
     const t = store.getState().theory[id];
     expect(t?.status).toBe('ready');
-    expect(t?.description).toMatch(/^E mechanism: E°′ -?0\.00\d\d V, D \S+ cm²\/s, k° fast \(Nernstian\)/);
+    expect(t?.description).toMatch(/^E mechanism: E°′ -?0\.00\d\d V vs Ag\/AgCl, 3 M KCl, D \S+ cm²\/s, k° fast \(Nernstian\)/);
     // D recovered from the ip–v½ slope: simulated with 1e-5 cm²/s; ±3 %.
     const d = Number(/D (\S+) cm²/.exec(t?.description ?? '')?.[1]);
     expect(Math.abs(d / 1e-5 - 1)).toBeLessThan(0.03);

@@ -7,6 +7,7 @@
  */
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
+import { displayScale } from './display';
 import { celsiusToKelvin, millimolarToMolPerCm3 } from './settings';
 import type { HalfwaveState } from './types';
 
@@ -47,6 +48,8 @@ export function planTheory(state: HalfwaveState, fileId: string): TheoryPlan {
   const c = state.settings.chemistry;
   const { startV, switchV } = sweepOf(potentialV, cycle.start, cycle.end, first.direction);
   const alpha = couple.alpha ?? c.alpha ?? couple.diffusion?.alphaUsed ?? 0.5;
+  const scale = displayScale(state.settings);
+  const e0Text = `E°′ ${(eHalfV + scale.offsetV).toFixed(4)} V vs ${scale.name}`;
   const common: Partial<CvSimulationInput> = {
     formalPotentialV: eHalfV, alpha, electronCount: c.electronCount, areaCm2: c.areaCm2, temperatureK: celsiusToKelvin(c.temperatureC),
     scanRateVPerS: m.scanRateVPerS, startV, switchV, cycles: 1, stepV: Math.min(0.001, Math.abs(switchV - startV) / 200),
@@ -59,7 +62,7 @@ export function planTheory(state: HalfwaveState, fileId: string): TheoryPlan {
     return {
       ok: true,
       params: { ...common, mechanism: 'surface', coverageMolPerCm2: gamma, surfaceRatePerS: ks },
-      description: `adsorbed couple: E°′ ${eHalfV.toFixed(4)} V, Γ ${gamma.toExponential(2)} mol/cm², k_s ${Number.isFinite(ks) ? `${ks.toPrecision(3)} s⁻¹` : 'fast (Nernstian)'}, α ${alpha.toFixed(2)}`,
+      description: `adsorbed couple: ${e0Text}, Γ ${gamma.toExponential(2)} mol/cm², k_s ${Number.isFinite(ks) ? `${ks.toPrecision(3)} s⁻¹` : 'fast (Nernstian)'}, α ${alpha.toFixed(2)}`,
     };
   }
   const d = couple.diffusion?.diffusionCm2PerS ?? couple.rateConstant?.diffusionOxCm2PerS ?? null;
@@ -75,6 +78,6 @@ export function planTheory(state: HalfwaveState, fileId: string): TheoryPlan {
       ...common, mechanism: 'E', k0CmPerS: k0, diffusionOCm2PerS: d, diffusionRCm2PerS: d,
       concentrationOMolPerCm3: oxidisedInBulk ? conc : 0, concentrationRMolPerCm3: oxidisedInBulk ? 0 : conc,
     },
-    description: `E mechanism: E°′ ${eHalfV.toFixed(4)} V, D ${d.toExponential(2)} cm²/s, k° ${Number.isFinite(k0) ? `${k0.toExponential(2)} cm/s` : 'fast (Nernstian)'}, α ${alpha.toFixed(2)}, ${c.concentrationMM} mM`,
+    description: `E mechanism: ${e0Text}, D ${d.toExponential(2)} cm²/s, k° ${Number.isFinite(k0) ? `${k0.toExponential(2)} cm/s` : 'fast (Nernstian)'}, α ${alpha.toFixed(2)}, ${c.concentrationMM} mM`,
   };
 }

@@ -40,6 +40,20 @@ export function OverrideForm({ file }: { file: FileEntry }) {
         {sel('potentialUnit', 'Potential unit', (['V', 'mV', 'µV'] as PotentialUnit[]).map((u) => [u, u]), (s) => s as PotentialUnit, 'override-potential-unit')}
         {sel('currentUnit', 'Current unit', (['A', 'mA', 'µA', 'nA', 'pA'] as CurrentUnit[]).map((u) => [u, u]), (s) => s as CurrentUnit, 'override-current-unit')}
         {sel('currentConvention', 'Current sign in file', [['iupac', 'anodic positive (IUPAC)'], ['polarographic', 'cathodic positive']], (s) => s as Draft['currentConvention'])}
+        {sel('encoding', 'Text encoding', [['utf-8', 'UTF-8'], ['utf-16le', 'UTF-16 LE'], ['utf-16be', 'UTF-16 BE'], ['latin1', 'Latin-1']], (s) => s as Draft['encoding'])}
+        {sel('cycleColumn', 'Cycles from', [['-1', 'the potential trace (ignore any cycle column)'], ...colOptions], Number)}
+        <label className="field">
+          Header line (0 = none)
+          <input
+            inputMode="numeric"
+            data-testid="override-header-line"
+            defaultValue={draft.headerLine === undefined ? '' : String(draft.headerLine)}
+            onBlur={(e) => {
+              const v = Number(e.target.value);
+              setDraft(pickOne(draft, 'headerLine', e.target.value.trim() === '' || !Number.isInteger(v) || v < 0 ? AUTO : String(v), Number));
+            }}
+          />
+        </label>
         <label className="field">
           Scan rate (mV/s)
           <input

@@ -35,8 +35,8 @@ export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'ru
           }}
         >
           <option value="zoom">zoom</option>
-          <option value="anodic">mark an anodic peak window</option>
-          <option value="cathodic">mark a cathodic peak window</option>
+          <option value="anodic">mark anodic window</option>
+          <option value="cathodic">mark cathodic window</option>
         </select>
       </label>
       <span className="status" role="status" data-testid="analysis-status">{status === 'running' ? 'analysing…' : status === 'ready' ? 'analysis up to date' : ''}</span>
