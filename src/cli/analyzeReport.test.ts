@@ -80,6 +80,7 @@ describe.each([['noise-free', 0, 0, 1], ['seeded noise and 20 µF/cm² charging'
     const doc = await analyzeJson(writeSeries(`quasi-${tag}`, { k0CmPerS: 0.01 }, noiseA, cdl));
     expect(Math.abs(doc.series[0]?.Ehalf ?? 1)).toBeLessThan(0.002 * k);
     expect(rel(doc.series[0]?.k0, 0.01)).toBeLessThan(0.3 * k);
+    expect(rel(doc.series[0]?.D, D)).toBeLessThan(0.05 * k);
   });
   it('adsorbed layer: Γ', async () => {
     const doc = await analyzeJson(writeSeries(`surf-${tag}`, { mechanism: 'surface', coverageMolPerCm2: 1e-10, surfaceRatePerS: 1000 }, noiseA / 20, cdl));

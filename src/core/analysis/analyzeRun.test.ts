@@ -51,6 +51,8 @@ describe.each([['noise-free', QUIET, 1], ['noisy with charging', NOISY, 2]] as c
     expect(c?.kineticClass).toBe('quasi-reversible');
     expect(Math.abs(c?.eHalfV ?? 1)).toBeLessThan(0.002 * k);
     expect(rel(c?.rateConstant?.k0CmPerS, 0.01)).toBeLessThan(0.3 * k);
+    // Peak currents divided by K(ψ) before Randles–Ševčík (α = 0.5, as simulated).
+    expect(rel(c?.diffusion?.diffusionCm2PerS, D)).toBeLessThan(0.05 * k);
   });
   it('irreversible couple: D (irreversible form), α and k°', () => {
     const r = run({ k0CmPerS: 1e-4, startV: 0.8, switchV: -0.8 }, noise);

@@ -111,7 +111,7 @@ function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['cou
   const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
   const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
   const surface = regime === 'surface' ? seriesSurface(points, o) : null;
-  const diffusion = regime === 'diffusion' ? seriesDiffusion(forwardFit, kineticClass, forwardShift, points, o).diffusion : null;
+  const diffusion = regime === 'diffusion' ? seriesDiffusion(forwardFit, kineticClass, forwardShift, points, o, forward).diffusion : null;
   const rateConstant = regime === 'diffusion' ? seriesRateConstant(points, forward, diffusion, o, forwardShift?.alpha ?? null, kineticClass === 'reversible') : null;
   const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
   const couple: Omit<SeriesCouple, 'verdict'> = {

@@ -5,10 +5,13 @@
  */
 import { fitLine } from '../regression';
 import type { FitLineResult } from '../regression';
+import { STANDARD_TEMPERATURE_K } from '../constants';
+import { TABLE_RANGE_MV, kineticPeakCurrentRatio, nicholsonPsi } from '../kinetics';
 import { logLogSlope, peakPotentialVsLogScanRate, randlesSevcikDiffusion } from '../series';
 import type { PeakPotentialVsLogScanRateResult } from '../series';
 import { chooseIrreversibleAlpha } from './seriesClassify';
 import type { SeriesCouple, SeriesDiffusion, SeriesKineticClass, SeriesPoint } from './seriesTypes';
+import type { PeakDirection } from './types';
 
 export interface ResolvedSeriesOptions {
   electronCount: number;
@@ -79,9 +82,27 @@ export function fitPeakShift(points: SeriesPoint[], direction: 'anodic' | 'catho
   );
 }
 
-function slowestPoint(points: SeriesPoint[]): SeriesPoint | null {
-  const usable = points.filter((p) => p.forwardIpA !== null && p.forwardIpA > 0);
-  return usable.sort((a, b) => a.scanRateVPerS - b.scanRateVPerS)[0] ?? null;
+const alphaOf = (o: ResolvedSeriesOptions) => o.alpha ?? 0.5;
+
+/** K(ψ) of one file: 1 below Nicholson's table (reversible), null beyond it or without ΔEp. */
+function kineticRatio(p: SeriesPoint, o: ResolvedSeriesOptions, forwardAlpha: number): number | null {
+  if (p.deltaEpV === null) return null;
+  const x25 = o.electronCount * p.deltaEpV * 1000 * (STANDARD_TEMPERATURE_K / o.temperatureK);
+  if (x25 < TABLE_RANGE_MV[0]) return 1;
+  if (x25 > TABLE_RANGE_MV[1]) return null;
+  return kineticPeakCurrentRatio(nicholsonPsi(p.deltaEpV, { electronCount: o.electronCount, temperatureK: o.temperatureK }).psi, forwardAlpha);
+}
+
+/** |ip|/K(ψ) against v^½ over the files where ψ is known; null when none is. */
+function kineticallyCorrectedFit(points: SeriesPoint[], o: ResolvedSeriesOptions, forward: PeakDirection): FitLineResult | null {
+  // The forward wave of an oxidation runs with 1 − α (α is that of the reduction).
+  const forwardAlpha = forward === 'cathodic' ? alphaOf(o) : 1 - alphaOf(o);
+  const kept = points.flatMap((p) => {
+    if (p.forwardIpA === null || !(p.forwardIpA > 0)) return [];
+    const k = kineticRatio(p, o, forwardAlpha);
+    return k === null ? [] : [{ ...p, forwardIpA: p.forwardIpA / k }];
+  });
+  return fitForwardAgainstSqrtScanRate(kept);
 }
 
 /** D of the bulk species from the forward slope, or null (with the reason) when it cannot be had. */
@@ -91,6 +112,7 @@ export function seriesDiffusion(
   shift: PeakPotentialVsLogScanRateResult | null,
   points: SeriesPoint[],
   o: ResolvedSeriesOptions,
+  forward: PeakDirection = 'cathodic',
 ): { diffusion: SeriesDiffusion | null; reason: string | null } {
   if (!fit) return { diffusion: null, reason: 'needs at least two scan rates' };
   if (o.areaCm2 === null) return { diffusion: null, reason: 'needs the electrode area (--area)' };
@@ -104,18 +126,18 @@ export function seriesDiffusion(
     transferElectronCount: o.transferElectronCount,
     ...(a ? { alpha: a.alpha } : {}),
   };
-  // A quasi-reversible couple comes closest to the reversible limit at the slowest scan rate,
-  // where its ip/v^½ is largest; the slope of the whole series is pulled down further.
-  const slowest = kineticClass === 'quasi-reversible' ? slowestPoint(points) : null;
-  const d = slowest
-    ? randlesSevcikDiffusion((slowest.forwardIpA as number) / Math.sqrt(slowest.scanRateVPerS), cell, rs)
-    : randlesSevcikDiffusion(fit.slope, cell, rs);
-  const ci = fit.slopeInterval;
-  const intervalCm2PerS: [number, number] | null = !slowest && ci && ci[0] > 0
+  // A quasi-reversible peak is lower than the reversible one by K(ψ); divide it out first.
+  const corrected = kineticClass === 'quasi-reversible' ? kineticallyCorrectedFit(points, o, forward) : null;
+  const used = corrected ?? fit;
+  const d = randlesSevcikDiffusion(used.slope, cell, rs);
+  const ci = used.slopeInterval;
+  const intervalCm2PerS: [number, number] | null = ci && ci[0] > 0
     ? [randlesSevcikDiffusion(ci[0], cell, rs), randlesSevcikDiffusion(ci[1], cell, rs)]
     : null;
   const note = kineticClass === 'quasi-reversible'
-    ? `quasi-reversible couple: D from the slowest scan rate (${slowest ? Number(slowest.scanRateVPerS.toPrecision(4)) : '?'} V/s) with the reversible form; the peak current lies below the reversible limit, so this D is a lower bound`
+    ? corrected
+      ? `quasi-reversible couple: peak currents divided by K(ψ) (Nicholson's ψ from ΔEp, α = ${alphaOf(o)}; working curve from the simulator) before the reversible form`
+      : 'quasi-reversible couple: no ψ could be read, so the reversible form is used on the raw peaks and D is a lower bound'
     : kineticClass === 'unknown' ? 'kinetic class unclear: reversible form used'
       : fit.pointCount === 1 ? 'one scan rate only: D from a single peak through the origin, with no check of linearity' : null;
   return {

@@ -3,3 +3,4 @@ export * from './nicholsonPsi';
 export * from './nicholsonRateConstant';
 export * from './lavironRateConstant';
 export * from './irreversibleRateConstant';
+export * from './kineticPeakCurrentRatio';
