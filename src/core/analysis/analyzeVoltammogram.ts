@@ -18,7 +18,7 @@ import { toIupacCurrent } from '../conventions/currentConvention';
 import type { Voltammogram } from '../types';
 import { prepareSweepSignals, windowForSpan, type SweepSignals } from '../peaks/sweepSignals';
 import { analyzeCycle } from './analyzeCycle';
-import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, VoltammogramAnalysis } from './types';
+import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, SmoothingSetting, VoltammogramAnalysis } from './types';
 
 export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogramOptions = {}): VoltammogramAnalysis {
   checkVoltammogram(v);
@@ -80,20 +80,23 @@ function checkVoltammogram(v: Voltammogram): void {
   }
 }
 
+function checkCountAndSmoothing(electronCount: number, smoothing: SmoothingSetting | 'off'): void {
+  if (!Number.isInteger(electronCount) || electronCount < 1 || electronCount > 12) {
+    throw new AnalysisError('BAD_OPTION', `electronCount must be an integer in [1, 12], got ${electronCount}`);
+  }
+  if (smoothing === 'off') return;
+  const { window: points, order } = smoothing;
+  if (!Number.isInteger(points) || points < 3 || points % 2 === 0 || !Number.isInteger(order) || order < 0 || order >= points) {
+    throw new AnalysisError('BAD_OPTION', `smoothing needs an odd window ≥ 3 and an order in [0, window − 1], got window ${points}, order ${order}`);
+  }
+}
+
 function resolveOptions(v: Voltammogram, o: AnalyzeVoltammogramOptions): Omit<ResolvedAnalyzeOptions, 'locatingSmoothing'> {
   const temperatureK = o.temperatureK ?? 298.15;
   assertFiniteInRange('temperatureK', temperatureK, 1, 2000);
   const electronCount = o.electronCount ?? 1;
-  if (!Number.isInteger(electronCount) || electronCount < 1 || electronCount > 12) {
-    throw new AnalysisError('BAD_OPTION', `electronCount must be an integer in [1, 12], got ${electronCount}`);
-  }
   const smoothing = o.smoothing ?? { window: 5, order: 2 };
-  if (smoothing !== 'off') {
-    const { window, order } = smoothing;
-    if (!Number.isInteger(window) || window < 3 || window % 2 === 0 || !Number.isInteger(order) || order < 0 || order >= window) {
-      throw new AnalysisError('BAD_OPTION', `smoothing needs an odd window ≥ 3 and an order in [0, window − 1], got window ${window}, order ${order}`);
-    }
-  }
+  checkCountAndSmoothing(electronCount, smoothing);
   const minSignalToNoise = o.minSignalToNoise ?? 8;
   assertFiniteInRange('minSignalToNoise', minSignalToNoise, 0);
   const minProminenceA = o.minProminenceA ?? 0;

@@ -63,23 +63,29 @@ export function classifyCouple(input: ClassifyCoupleInput, options: ClassifyCoup
   return { ...v, category: 'inconclusive', label: 'not classified (overlapping waves)', reasons };
 }
 
-function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCoupleOptions): Verdict {
-  const temperatureK = options.temperatureK ?? 298.15;
-  const n = options.electronCount ?? 1;
+/** The measured numbers next to their theoretical values for this n and T. */
+function buildEvidence(input: ClassifyCoupleInput, temperatureK: number, n: number): VerdictEvidence {
   const u = thermalVoltageV(temperatureK) / n;
-  const atSwitch = input.switchPastPeakV === null ? null : reversibleDeltaEpAtSwitch(input.switchPastPeakV, { electronCount: n, temperatureK }).deltaEpV;
-  const evidence: VerdictEvidence = {
+  return {
     temperatureK,
     electronCount: n,
     deltaEpV: input.deltaEpV,
     reversibleDeltaEpLimitV: reversibleDeltaEpLimitV(n, temperatureK),
-    reversibleDeltaEpAtSwitchV: atSwitch,
+    reversibleDeltaEpAtSwitchV: input.switchPastPeakV === null ? null : reversibleDeltaEpAtSwitch(input.switchPastPeakV, { electronCount: n, temperatureK }).deltaEpV,
     reversibleHalfPeakWidthV: 2.2 * u,
     halfPeakWidthsV: input.halfPeakWidthsV,
     ratio: input.ratio,
     fwhmV: input.fwhmV,
     adsorbedFwhmV: 3.5255 * u,
   };
+}
+
+function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCoupleOptions): Verdict {
+  const temperatureK = options.temperatureK ?? 298.15;
+  const n = options.electronCount ?? 1;
+  const u = thermalVoltageV(temperatureK) / n;
+  const evidence = buildEvidence(input, temperatureK, n);
+  const atSwitch = evidence.reversibleDeltaEpAtSwitchV;
   const verdict = (category: VerdictCategory, reasons: string[], label = VERDICT_LABELS[category]): Verdict => ({ category, label, reasons, evidence });
   if (!input.hasAnodic || !input.hasCathodic || input.deltaEpV === null) {
     const missing = input.hasAnodic ? 'cathodic' : 'anodic';
