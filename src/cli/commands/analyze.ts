@@ -38,7 +38,8 @@ export interface AnalyzeArgs {
 
 const HELP = `Usage: halfwave analyze FILE|FOLDER... [options]
 
-Reads instrument text/CSV exports (a folder stands for its files, in natural order).
+Reads instrument text/CSV exports (a folder stands for its files, in natural order;
+"-" reads standard input, e.g. halfwave simulate | halfwave analyze - --inspect).
 
 Analysis options:
   --area CM2            electrode area in cm²
