@@ -31,7 +31,7 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     [1, 0.1],
     [1, 1],
     [2, 0.1],
-  ])('n = %i, v = %f V/s: E½ ±2 mV, ΔEp vs table ±1.5 mV, ipc vs Randles–Ševčík ±2 %, ratio 1 ±3 %', (n, v) => {
+  ])('n = %i, v = %f V/s: E½ ±2 mV, ΔEp vs table ±1.5 mV, ipc vs Randles–Ševčík ±2 %, ratio 1 ±3 %, |Ep − Ep/2| = 2.20RT/nF ±1.5 mV', (n, v) => {
     const a = analyzeVoltammogram(simulatedVoltammogram({ ...base, electronCount: n, scanRateVPerS: v }), { electronCount: n });
     const { couple } = firstCouple(a);
     expect(Math.abs(couple.eHalfV!)).toBeLessThan(0.002);
@@ -39,6 +39,7 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     expect(Math.abs(couple.deltaEpV! - reversibleDeltaEpAtSwitch(past, { electronCount: n }).deltaEpV)).toBeLessThan(0.0015);
     expect(Math.abs(couple.ipcA! / randlesSevcikA(n, v) - 1)).toBeLessThan(0.02);
     expect(Math.abs(couple.ratio! - 1)).toBeLessThan(0.03);
+    expect(Math.abs(couple.cathodicHalfPeakWidthV! - (2.2 * u) / n)).toBeLessThan(0.0015);
     expect(couple.verdict.category).toBe('nernstian');
     expect(couple.forwardDirection).toBe('cathodic');
   });
