@@ -46,6 +46,13 @@ describe('readPreamble', () => {
     expect(readPreamble(['Temp: 300 K']).temperatureK?.value).toBeCloseTo(300, 10);
   });
 
+  it('the analyte concentration from a sample line, unless a concentration line says it', () => {
+    const fromSample = readPreamble(['Sample: 0.5 mM invented compound in 0.1 M KCl']);
+    expect(fromSample.concentrationMolPerCm3?.value).toBeCloseTo(0.5e-6, 18);
+    const explicit = readPreamble(['Concentration: 2 mM', 'Sample: 0.5 mM invented compound']);
+    expect(explicit.concentrationMolPerCm3?.value).toBeCloseTo(2e-6, 18);
+  });
+
   it('the sign convention named in words', () => {
     expect(readPreamble(['Convention: cathodic current positive']).convention?.value).toBe('polarographic');
     expect(readPreamble(['Currents follow IUPAC']).convention?.value).toBe('iupac');

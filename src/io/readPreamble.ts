@@ -41,6 +41,8 @@ export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
     const squared = /(\d+(?:[.,]\d+)?(?:[eE][+-]?\d+)?)\s*(cm\^?2|cm²|mm\^?2|mm²)/.exec(value);
     if (squared && /electrode|disk|disc|\bwe\b/.test(key)) out.areaCm2 ??= readArea(squared[0], line, text);
     if (/conc|^c$|^c0$/.test(key)) out.concentrationMolPerCm3 ??= readConcentration(`${key} ${value}`, line, text);
+    // "Sample: 0.5 mM compound in 0.1 M KCl": the first concentration named is the analyte's.
+    if (/sample|analyte|solution/.test(key)) out.concentrationMolPerCm3 ??= readConcentration(value, line, text);
   });
   return out;
 }
