@@ -5,17 +5,12 @@
  * reference table), so E(vs SCE) = E(vs Ag/AgCl 3 M) − 0.0312 V.
  */
 import { describe, expect, it } from 'vitest';
-import { simulateCv } from '../core/simulation';
 import { createInThreadClient } from '../worker/client';
 import { describeLayout } from './exportRequest';
 import { createHalfwaveStore } from './store';
+import { simulatedCsv } from './testSupport';
 
-function csv(scanRateVPerS: number): string {
-  const sim = simulateCv({ k0CmPerS: Infinity, scanRateVPerS });
-  const rows = ['t/s,E/V,I/A'];
-  for (let i = 0; i < sim.potentialV.length; i++) rows.push(`${sim.timeS[i]},${sim.potentialV[i]},${sim.currentA[i]}`);
-  return rows.join('\n');
-}
+const csv = (scanRateVPerS: number) => simulatedCsv(scanRateVPerS, 't/s,E/V,I/A');
 
 /** Rows of the '# table: NAME' block as objects keyed by its header. */
 function table(sheet: string, name: string): Record<string, string>[] {

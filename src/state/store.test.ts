@@ -4,21 +4,16 @@
  * the numbers name their source.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { simulateCv } from '../core/simulation';
 import { createInThreadClient } from '../worker/client';
 import { AUTOSAVE_KEY, attachAutosave, loadSessionText, saveSessionText } from './sessionActions';
 import { memoryStorageAdapter } from './storage';
 import { createHalfwaveStore } from './store';
+import { simulatedCsv } from './testSupport';
 import type { HalfwaveStore } from './types';
 
-/** 1 mM, 3 mm disk, D = 1e-5 cm²/s, Nernstian, +0.3 → −0.3 → +0.3 V at 0.1 V/s (simulator defaults). */
-function simulatedCsv(potentialScale = 1): string {
-  const sim = simulateCv({ k0CmPerS: Infinity });
-  const rows = ['time/s,potential/V,current/A'.replace('potential/V', potentialScale === 1 ? 'potential/V' : 'potential')];
-  for (let i = 0; i < sim.potentialV.length; i++) {
-    rows.push(`${sim.timeS[i]},${(sim.potentialV[i] as number) * potentialScale},${sim.currentA[i]}`);
-  }
-  return `${rows.join('\n')}\n`;
+/** Same simulated couple; `potentialScale` 1000 writes the potential in mV under a unitless header. */
+function simulatedCsvIn(potentialScale = 1): string {
+  return simulatedCsv(0.1, potentialScale === 1 ? 'time/s,potential/V,current/A' : 'time/s,potential,current/A', potentialScale);
 }
 
 function newStore(): HalfwaveStore {
@@ -33,7 +28,7 @@ function firstCouple(store: HalfwaveStore, id: string) {
 
 let csv: string;
 beforeAll(() => {
-  csv = simulatedCsv();
+  csv = simulatedCsvIn();
 });
 
 describe('files and analysis', () => {
@@ -71,7 +66,7 @@ describe('files and analysis', () => {
 
   it('re-imports with an overridden unit; a failing override keeps the previous reading', async () => {
     const store = newStore();
-    const [id] = await store.getState().addFiles([{ name: 'millivolts.csv', data: simulatedCsv(1000) }]);
+    const [id] = await store.getState().addFiles([{ name: 'millivolts.csv', data: simulatedCsvIn(1000) }]);
     const key = id as string;
     await store.getState().reimportFile(key, { potentialUnit: 'mV' });
     const m = store.getState().files[key]?.measurement;

@@ -5,16 +5,11 @@
  * reproduce the measured peak within the fit's accuracy (3 %, common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
-import { simulateCv } from '../core/simulation';
 import { createInThreadClient } from '../worker/client';
 import { createHalfwaveStore } from './store';
+import { simulatedCsv } from './testSupport';
 
-function csv(scanRateVPerS: number): string {
-  const sim = simulateCv({ k0CmPerS: Infinity, scanRateVPerS });
-  const rows = ['t/s,E/V,I/A'];
-  for (let i = 0; i < sim.potentialV.length; i++) rows.push(`${sim.timeS[i]},${sim.potentialV[i]},${sim.currentA[i]}`);
-  return rows.join('\n');
-}
+const csv = (scanRateVPerS: number) => simulatedCsv(scanRateVPerS, 't/s,E/V,I/A');
 
 describe('theory overlay', () => {
   it('simulates the fitted couple and matches the measured cathodic peak', async () => {

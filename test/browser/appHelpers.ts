@@ -6,7 +6,6 @@
 import { readdirSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { Page } from 'playwright-core';
-import { simulateCv } from '../../src/core/simulation';
 
 export function demoFileCount(): number {
   return readdirSync(resolve(import.meta.dirname, '../../demo-data')).filter((f) => /\.(csv|txt|tsv|dat)$/.test(f)).length;
@@ -61,12 +60,7 @@ export async function waitForRedraw(page: Page, before: number, testId = 'trace-
 }
 
 /** A reversible one-electron couple from our own simulator, as a CSV export (time, E, I). */
-export function simulatedCsv(scanRateVPerS = 0.1): string {
-  const sim = simulateCv({ k0CmPerS: Infinity, scanRateVPerS });
-  const rows = ['Time (s),Potential (V),Current (A)'];
-  for (let i = 0; i < sim.potentialV.length; i++) rows.push(`${sim.timeS[i]},${sim.potentialV[i]},${sim.currentA[i]}`);
-  return `${rows.join('\n')}\n`;
-}
+export { simulatedCsv } from '../../src/state/testSupport';
 
 /** Text of every cell with the test id in the couples table, as numbers. */
 export async function coupleCells(page: Page, testId: string): Promise<number[]> {

@@ -1,0 +1,13 @@
+/**
+ * Test input shared by the store tests and the browser flows: a Nernstian one-electron couple
+ * from our own simulator (1 mM, 0.0707 cm², D = 1e-5 cm²/s, E°′ = 0 V, +0.3 → −0.3 → +0.3 V),
+ * written as a CSV export with time, potential and current columns.
+ */
+import { simulateCv } from '../core/simulation';
+
+export function simulatedCsv(scanRateVPerS = 0.1, header = 'Time (s),Potential (V),Current (A)', potentialFactor = 1): string {
+  const sim = simulateCv({ k0CmPerS: Infinity, scanRateVPerS });
+  const rows = [header];
+  for (let i = 0; i < sim.potentialV.length; i++) rows.push(`${sim.timeS[i]},${(sim.potentialV[i] as number) * potentialFactor},${sim.currentA[i]}`);
+  return `${rows.join('\n')}\n`;
+}
