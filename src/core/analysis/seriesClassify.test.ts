@@ -40,3 +40,14 @@ describe('chooseIrreversibleAlpha', () => {
     expect(chooseIrreversibleAlpha(null, null, [], 1, 298.15).alpha).toBe(0.5);
   });
 });
+
+describe('classifyCouple, peak separation first', () => {
+  // Nicholson 1965 table (from memory): ψ = 5 at 65 mV; a wider median ΔEp means slow transfer,
+  // whatever label the single traces carry.
+  it('calls a 90 mV couple quasi-reversible even when the traces say follow-up loss', () => {
+    const pts = [0.1, 0.2].map((s) => point({ scanRateVPerS: s, verdict: 'follow-up-loss', deltaEpV: 0.09 }));
+    expect(classifyCouple(pts, 1, 298.15).kineticClass).toBe('quasi-reversible');
+    const rev = [0.1, 0.2].map((s) => point({ scanRateVPerS: s, verdict: 'follow-up-loss', deltaEpV: 0.059 }));
+    expect(classifyCouple(rev, 1, 298.15).kineticClass).toBe('reversible');
+  });
+});

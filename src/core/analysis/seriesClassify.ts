@@ -5,8 +5,10 @@
  *   - surface when most files call the couple adsorbed, or when over three or more scan rates
  *     log|ip| rises with log v at a slope of 0.85–1.15 (ip ∝ v, Laviron 1974; band: common
  *     practice, no source) — a slow surface couple does not look adsorbed on a single trace;
- *   - 'sluggish' couples with median n·ΔEp above 212 mV at 25 °C (the end of Nicholson's 1965
- *     table) are irreversible, quasi-reversible otherwise;
+ *   - where most files have a peak pair, the median n·ΔEp (scaled to 25 °C) decides first: above
+ *     212 mV (the end of Nicholson's 1965 table) irreversible, above 65 mV (ψ below 5 in the same
+ *     table) quasi-reversible; otherwise the single-trace verdicts decide;
+ *   - 'sluggish' couples with median n·ΔEp above 212 mV are irreversible, quasi-reversible otherwise;
  *   - a one-way couple is irreversible when its forward peak is broader than 1.25× the reversible
  *     |Ep − Ep/2| = 2.20·RT/nF (Nicholson & Shain 1964; the 1.25 margin is common practice, no
  *     source); otherwise the loss of the return peak is put down to chemistry and the forward
@@ -42,6 +44,12 @@ export function classifyCouple(
   const rt = thermalVoltageV(temperatureK);
   const deltas = points.flatMap((p) => (p.deltaEpV === null ? [] : [electronCount * p.deltaEpV * (STANDARD_TEMPERATURE_K / temperatureK)]));
   const widths = points.flatMap((p) => (p.forwardHalfPeakWidthV === null ? [] : [p.forwardHalfPeakWidthV]));
+  // Where most files have a peak pair, the measured separation outranks the single-trace labels.
+  if (deltas.length * 2 >= points.length) {
+    const d = median(deltas);
+    if (d > 0.212) return { regime: 'diffusion', kineticClass: 'irreversible', majority };
+    if (d > 0.065) return { regime: 'diffusion', kineticClass: 'quasi-reversible', majority };
+  }
   switch (majority) {
     case 'nernstian':
     case 'follow-up-loss':
