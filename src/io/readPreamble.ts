@@ -23,6 +23,7 @@ const NUMBER = '([+-]?(?:\\d+[.,]?\\d*|[.,]\\d+)(?:[eE][+-]?\\d+)?)';
 /** `lines` are the preamble lines; `firstLine` is the 1-based file line of lines[0]. */
 export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
   const out: PreambleReading = { metadata: {}, scanRateVPerS: null, referenceElectrode: null, temperatureK: null, areaCm2: null, concentrationMolPerCm3: null, convention: null };
+  let fromSample: PreambleValue | null = null;
   lines.forEach((raw, i) => {
     const line = firstLine + i;
     const text = raw.replace(/^\s*(#|%|\/\/|;|!)+\s*/, '').trim();
@@ -42,8 +43,9 @@ export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
     if (squared && /electrode|disk|disc|\bwe\b/.test(key)) out.areaCm2 ??= readArea(squared[0], line, text);
     if (/conc|^c$|^c0$/.test(key)) out.concentrationMolPerCm3 ??= readConcentration(`${key} ${value}`, line, text);
     // "Sample: 0.5 mM compound in 0.1 M KCl": the first concentration named is the analyte's.
-    if (/sample|analyte|solution/.test(key)) out.concentrationMolPerCm3 ??= readConcentration(value, line, text);
+    if (/sample|analyte|solution/.test(key)) fromSample ??= readConcentration(value, line, text);
   });
+  out.concentrationMolPerCm3 ??= fromSample;
   return out;
 }
 
