@@ -86,6 +86,15 @@ describe('analyzeVoltammogram: user windows and baselines', () => {
     expect(() => analyzeVoltammogram(reversible, { baselines: [{ direction: 'cathodic', fromV: -0.1, toV: 0.05, method: 'two-point' }] })).toThrow(/needs anchorsV/);
   });
 
+  it('a time column that stalls near the switch makes the extended decay fall back with a warning', () => {
+    const timeS = Float64Array.from(reversible.timeS!);
+    const vertex = reversible.segments[0]!.end - 1;
+    timeS[vertex - 5] = timeS[vertex - 6]!;
+    const a = analyzeVoltammogram({ ...reversible, timeS });
+    expect(a.cycles[0]!.peaks.map((p) => p.baseline.method)).toEqual(['linear', 'linear']);
+    expect(a.cycles[0]!.warnings.map((w) => w.code)).toContain('BASELINE_FALLBACK');
+  });
+
   it('returnBaseline linear replaces the extended decay on the return peak', () => {
     const a = analyzeVoltammogram(reversible, { returnBaseline: 'linear' });
     expect(a.cycles[0]!.peaks.map((p) => p.baseline.method)).toEqual(['linear', 'linear']);

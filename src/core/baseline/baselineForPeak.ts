@@ -57,13 +57,23 @@ export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request:
   if (method === 'nicholson') {
     const fw = request.forward;
     const prev = request.previous ?? null;
-    const decay = prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? nicholsonCurve(sig, peak, fw) : null;
+    const decay = attempt(() => (prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? nicholsonCurve(sig, peak, fw) : null));
     if (decay) return { curve: decay.curve, evaluate: decay.evaluate, fallbackReason: null };
     const why = prev ? 'the current after the previous peak does not decay cleanly enough to extend' : fw ? 'too few points between the forward peak and the switch for the extended decay' : 'no forward peak on the preceding sweep to extend';
     return sampled(linearCurve(sig, peak, request, spec), why);
   }
   if (method === 'polynomial') return sampled(polynomialCurve(sig, peak, request, spec));
   return sampled(linearCurve(sig, peak, request, spec));
+}
+
+/** Runs a decay fit; a failure of the data (e.g. a time column that does not increase) means fallback, not abort. */
+function attempt<T>(fit: () => T | null): T | null {
+  try {
+    return fit();
+  } catch (e) {
+    if (e instanceof AnalysisError) return null;
+    throw e;
+  }
 }
 
 /** Local (sweep-relative) range [a, b) of the points whose potential lies between two values. */
