@@ -3,7 +3,7 @@ import type { FitLineResult } from '../../core/regression/fitLine';
 import type { SeriesAnalysis, SeriesCouple } from '../../state/types';
 import { DASH, fixed, sci, sig } from '../format';
 
-function fitText(fit: FitLineResult | null, factor: number, unit: string): string {
+function fitText(fit: FitLineResult | null | undefined, factor: number, unit: string): string {
   if (!fit) return DASH;
   const ci = fit.slopeInterval ? ` [${sig(fit.slopeInterval[0], 3, factor)}, ${sig(fit.slopeInterval[1], 3, factor)}]` : '';
   return `${sig(fit.slope, 4, factor)}${ci} ${unit}; intercept ${sig(fit.intercept, 3, factor)} µA; R² ${fixed(fit.r2, 4)}`;
@@ -16,7 +16,9 @@ function rows(c: SeriesCouple, offsetV: number): [string, string][] {
   return [
     ['E½ (median)', c.eHalfV === null ? DASH : `${fixed(c.eHalfV + offsetV, 4)} V`],
     ['Regime / kinetics', `${c.regime}, ${c.kineticClass}`],
-    ['Forward |ip| vs v½ (slope 95 % CI)', fitText(c.forwardFit, 1e6, 'µA (V/s)⁻½')],
+    c.regime === 'surface'
+      ? ['Forward |ip| vs v (slope 95 % CI)', fitText(s?.fit, 1e6, 'µA (V/s)⁻¹')]
+      : ['Forward |ip| vs v½ (slope 95 % CI)', fitText(c.forwardFit, 1e6, 'µA (V/s)⁻½')],
     ['D (Randles–Ševčík)', d ? `${sci(d.diffusionCm2PerS, 3)} cm²/s${d.intervalCm2PerS ? ` [${sci(d.intervalCm2PerS[0], 3)}, ${sci(d.intervalCm2PerS[1], 3)}]` : ''} (${d.form} form${d.alphaUsed !== null ? `, α ${fixed(d.alphaUsed, 2)}` : ''})` : DASH],
     ['log|ip| vs log v slope', c.logLog ? `${fixed(c.logLog.slope, 3)} → ${c.logLog.reading}` : DASH],
     ['dEpa / dlog v', c.peakShift.anodic ? `${fixed(c.peakShift.anodic.slopeVPerDecade, 1, 1000)} mV/decade` : DASH],
