@@ -5,7 +5,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createInThreadClient } from '../worker/client';
-import { AUTOSAVE_KEY, attachAutosave, loadSessionText, saveSessionText } from './sessionActions';
+import { AUTOSAVE_KEY, attachAutosave, loadSessionText, restoreAutosave, saveSessionText } from './sessionActions';
 import { memoryStorageAdapter } from './storage';
 import { createHalfwaveStore } from './store';
 import { simulatedCsv } from './testSupport';
@@ -123,6 +123,25 @@ describe('sessions', () => {
     await store.getState().addFiles([{ name: 'sim.csv', data: csv }]);
     const waiting = await loadSessionText(newStore(), await saveSessionText(store, false));
     expect(waiting).toEqual(['sim.csv']);
+  });
+
+  it('restores autosaved settings at start and gives a re-loaded file its windows back by SHA-256', async () => {
+    const first = newStore();
+    const storage = memoryStorageAdapter();
+    const [id] = await first.getState().addFiles([{ name: 'sim.csv', data: csv }], 'kept group');
+    await first.getState().updateSettings((s) => ({ ...s, chemistry: { ...s.chemistry, temperatureC: 30 } }));
+    await first.getState().updateFileSettings(id as string, (f) => ({ ...f, peakWindows: [{ direction: 'anodic', fromV: -0.1, toV: 0.2 }] }));
+    await storage.write(AUTOSAVE_KEY, await saveSessionText(first, false));
+
+    const second = newStore();
+    expect(await restoreAutosave(second, storage)).toBe(true);
+    expect(second.getState().settings.chemistry.temperatureC).toBe(30);
+    expect(second.getState().remembered).toHaveLength(1);
+    // The same bytes under another name are recognised by their checksum.
+    const [again] = await second.getState().addFiles([{ name: 'renamed.csv', data: csv }]);
+    expect(second.getState().files[again as string]?.group).toBe('kept group');
+    expect(second.getState().fileSettings[again as string]?.peakWindows).toEqual([{ direction: 'anodic', fromV: -0.1, toV: 0.2 }]);
+    expect(second.getState().remembered).toHaveLength(0);
   });
 
   it('autosaves the session text to the storage adapter', async () => {

@@ -9,9 +9,11 @@ import { SeriesView } from './components/SeriesView';
 import { SafetyDrawer } from './components/SafetyDrawer';
 import { TopBar } from './components/TopBar';
 import { TracePanel } from './components/TracePanel';
+import { useUndoKeys } from './useUndoKeys';
 
 export function App() {
   const mainView = useHalfwave((s) => s.mainView);
+  useUndoKeys();
   return (
     <div className="app">
       <TopBar />

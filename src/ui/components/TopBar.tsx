@@ -17,8 +17,8 @@ export function TopBar() {
     <header className="topbar">
       <h1>Halfwave <span className="tagline">voltammetry workbench</span></h1>
       <div className="group" role="group" aria-label="Undo">
-        <button type="button" disabled={!canUndo} data-testid="undo" onClick={() => void act.undo()} title="Undo the last settings change">Undo</button>
-        <button type="button" disabled={!canRedo} data-testid="redo" onClick={() => void act.redo()}>Redo</button>
+        <button type="button" disabled={!canUndo} data-testid="undo" onClick={() => void act.undo()} title="Undo the last settings change (Ctrl+Z)">Undo</button>
+        <button type="button" disabled={!canRedo} data-testid="redo" onClick={() => void act.redo()} title="Redo (Ctrl+Shift+Z)">Redo</button>
       </div>
       <div className="group segmented" role="radiogroup" aria-label="Current sign convention">
         <span className="group-label">Current sign</span>
