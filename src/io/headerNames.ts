@@ -22,12 +22,12 @@ export interface HeaderReading {
 const ROLE_WORDS: [ColumnRole, RegExp][] = [
   ['cycle', /^(cycle|cyc|scan|sweep|loop)s?\.?\s*(no\.?|number|nr\.?|#|index|count|n)?$/i],
   ['time', /^(time|t|elapsed\s*time|elapsed|timestamp|time\s*elapsed|runtime)$/i],
-  ['potential', /^(potential|e|ewe|we\s*potential|we\s*\(?1\)?\s*potential|working\s*electrode\s*potential|voltage|volt|u|e\s*applied|applied\s*potential|e\s*measured|measured\s*potential|e\s*we|v|vf|e1|potential\s*applied|potential\s*measured)$/i],
-  ['current', /^(current|i|iwe|i\s*we|we\s*current|working\s*electrode\s*current|amps?|i1|current\s*1|we\s*\(?1\)?\s*current|cell\s*current|current\s*measured)$/i],
+  ['potential', /^(potential|e|we\s*potential|working\s*electrode\s*potential|voltage|volt|u|e\s*applied|applied\s*potential|e\s*measured|measured\s*potential|e\s*we|v|e1|potential\s*applied|potential\s*measured)$/i],
+  ['current', /^(current|i|i\s*we|we\s*current|working\s*electrode\s*current|amps?|i1|current\s*1|cell\s*current|current\s*measured)$/i],
   ['index', /^(index|idx|point|points|pt|no\.?|nr\.?|#|n|row|number|data\s*point|sample)$/i],
 ];
 
-const SECONDARY = /^(i2|current\s*2|we\s*\(?2\)?\s*current|iwe2|e2|we\s*\(?2\)?\s*potential|potential\s*2|ewe2)$/i;
+const SECONDARY = /^(i2|current\s*2|we\s*2\s*current|e2|we\s*2\s*potential|potential\s*2)$/i;
 const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|power|resistance|freq|phase|ox\/red|control|status|flag|mode|comment/i;
 
 /** Splits "E vs Ag/AgCl (mV)" into label "E", unit "mV" and reference "Ag/AgCl". */

@@ -75,7 +75,7 @@ const rows: Row[] = [
       expect(r.measurement.scanRateSource).toBe('time');
       expect(Math.abs((r.measurement.scanRateVPerS as number) - 0.1) / 0.1).toBeLessThan(1e-6);
     } },
-  { name: 'extra columns: index, time, cycle, charge, second electrode', layout: { delimiter: '\t', header: { index: 'Point', time: 'Time (s)', cycle: 'Scan', potential: 'Ewe/V', current: 'I/A', charge: 'Charge/C', current2: 'I2/A' }, columns: ['index', 'time', 'cycle', 'potential', 'current', 'charge', 'current2'] },
+  { name: 'extra columns: index, time, cycle, charge, second electrode', layout: { delimiter: '\t', header: { index: 'Point', time: 'Time (s)', cycle: 'Scan', potential: 'E/V', current: 'I/A', charge: 'Charge/C', current2: 'I2/A' }, columns: ['index', 'time', 'cycle', 'potential', 'current', 'charge', 'current2'] },
     check: (r) => {
       expect(r.measurement.cycles.length).toBe(2);
       expect(Object.keys(r.measurement.extraColumns).sort()).toEqual(['Charge/C', 'I2/A', 'Point']);
