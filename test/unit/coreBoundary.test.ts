@@ -17,7 +17,7 @@ function listTs(dir: string): string[] {
 }
 
 const FORBIDDEN_MODULES = /^(node:|fs$|path$|os$|child_process$|react|react-dom|zustand|plotly|papaparse)|\/(io|worker|state|ui|cli)\//;
-const FORBIDDEN_GLOBALS = /\b(document|window|self\.postMessage|localStorage|setTimeout|setInterval|process\.|require\()/;
+const FORBIDDEN_GLOBALS = /\b(document\.|window\.|self\.|localStorage|sessionStorage|indexedDB|setTimeout|setInterval|requestAnimationFrame|process\.|require\(|fetch\()/;
 
 export function findViolations(source: string): string[] {
   const out: string[] = [];
@@ -35,7 +35,10 @@ describe('core purity (architecture rule of this project)', () => {
   it('the detector catches a React import and a DOM global', () => {
     expect(findViolations("import { useState } from 'react';")).toEqual(['imports react']);
     expect(findViolations("import x from '../io/parseTable';")).toEqual(['imports ../io/parseTable']);
-    expect(findViolations('const el = document.body;')).toEqual(['uses document']);
+    expect(findViolations('const el = document.body;')).toEqual(['uses document.']);
+    expect(findViolations('const w = window.innerWidth;')).toEqual(['uses window.']);
+    // A smoothing `window` field is a number of points, not the browser global.
+    expect(findViolations('const { window } = options; const n = window + 1;')).toEqual([]);
     expect(findViolations("import type { A } from './types';")).toEqual([]);
   });
 
