@@ -95,6 +95,22 @@ describe('analyzeVoltammogram: user windows and baselines', () => {
     expect(a.cycles[0]!.warnings.map((w) => w.code)).toContain('BASELINE_FALLBACK');
   });
 
+  it('a single linear sweep: the lone peak is not called irreversible, because nothing was reversed', () => {
+    const first = reversible.segments[0]!;
+    const half: Voltammogram = {
+      ...reversible,
+      potentialV: reversible.potentialV.slice(0, first.end),
+      currentA: reversible.currentA.slice(0, first.end),
+      timeS: reversible.timeS!.slice(0, first.end),
+      segments: [first],
+      cycles: [{ index: 1, start: 0, end: first.end }],
+    };
+    const couple = analyzeVoltammogram(half).cycles[0]!.couples[0]!;
+    expect(couple.epcV).not.toBeNull();
+    expect(couple.verdict.category).toBe('inconclusive');
+    expect(couple.verdict.label).toMatch(/no return sweep/);
+  });
+
   it('returnBaseline linear replaces the extended decay on the return peak', () => {
     const a = analyzeVoltammogram(reversible, { returnBaseline: 'linear' });
     expect(a.cycles[0]!.peaks.map((p) => p.baseline.method)).toEqual(['linear', 'linear']);

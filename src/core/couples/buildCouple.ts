@@ -40,6 +40,7 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
       hasAnodic: a !== null,
       hasCathodic: c !== null,
       overlapping: a?.confidence === 'shoulder' || c?.confidence === 'shoulder',
+      returnSweepRecorded: (fwd ?? ret)!.segmentIndex + 1 < sig.segments.length || !(fwd ?? ret)!.onFirstSweep,
     },
     options,
   );

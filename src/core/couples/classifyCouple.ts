@@ -40,6 +40,8 @@ export interface ClassifyCoupleInput {
   hasCathodic: boolean;
   /** True when a peak of the couple is only a shoulder of another wave. @default false */
   overlapping?: boolean;
+  /** False when the lone peak's sweep is never reversed (a single linear sweep). @default true */
+  returnSweepRecorded?: boolean;
 }
 
 export interface ClassifyCoupleOptions {
@@ -89,6 +91,9 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
   const verdict = (category: VerdictCategory, reasons: string[], label = VERDICT_LABELS[category]): Verdict => ({ category, label, reasons, evidence });
   if (!input.hasAnodic || !input.hasCathodic || input.deltaEpV === null) {
     const missing = input.hasAnodic ? 'cathodic' : 'anodic';
+    if (input.returnSweepRecorded === false) {
+      return verdict('inconclusive', [`no ${missing} peak can be looked for: the sweep was never reversed`], 'not classified (no return sweep recorded)');
+    }
     return verdict('one-way', [`no ${missing} partner peak was found for this wave`], 'irreversible (no return peak)');
   }
   const dEp = input.deltaEpV;
