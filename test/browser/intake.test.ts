@@ -70,6 +70,16 @@ describe('picking files', () => {
     expect(Math.abs((ipc as number) / 18.99 - 1)).toBeLessThan(0.03);
   });
 
+  it('a baseline chosen for one peak is the one the analysis uses for it', async () => {
+    const page = app.page;
+    await page.getByTestId('tab-peaks').click();
+    const row = page.getByTestId('peaks-table').locator('tbody tr').first();
+    await row.getByTestId('peak-baseline').selectOption('polynomial');
+    await page.waitForFunction(() => document.querySelector('[data-testid=peaks-table] tbody tr td:last-child')?.textContent?.startsWith('least-squares polynomial'), null, { timeout: 30_000 });
+    expect(await row.getByTestId('peak-baseline').inputValue()).toBe('polynomial');
+    await page.getByTestId('tab-couples').click();
+  });
+
   it('stayed free of console errors, page errors and outside requests', () => {
     expect(app.consoleErrors).toEqual([]);
     expect(app.pageErrors).toEqual([]);

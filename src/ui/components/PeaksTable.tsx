@@ -1,6 +1,7 @@
 /** Every peak found, with how it was found, its baseline and how sure the finder is. */
 import { chooseCurrentScale } from '../plots/currentScale';
 import { fixed, sig } from '../format';
+import { PeakBaselineSelect } from './PeakBaselineSelect';
 import { useSelection } from './useSelection';
 
 export function PeaksTable() {
@@ -14,7 +15,7 @@ export function PeaksTable() {
       <thead>
         <tr>
           <th scope="col">Cycle</th><th scope="col">Kind</th><th scope="col">Ep / V vs {scale.name}</th><th scope="col">ip / {cur.unit}</th>
-          <th scope="col">Ep/2 / V</th><th scope="col">FWHM / mV</th><th scope="col">S/N</th><th scope="col">Confidence</th><th scope="col">Baseline</th>
+          <th scope="col">Ep/2 / V</th><th scope="col">FWHM / mV</th><th scope="col">S/N</th><th scope="col">Confidence</th><th scope="col">Baseline choice</th><th scope="col">Baseline used</th>
         </tr>
       </thead>
       <tbody>
@@ -28,6 +29,7 @@ export function PeaksTable() {
             <td>{fixed(p.fwhmV, 1, 1000)}</td>
             <td>{fixed(p.signalToNoise, 0)}</td>
             <td>{p.confidence}</td>
+            <td><PeakBaselineSelect peak={p} label={`Baseline of the ${p.direction} peak at ${fixed(p.potentialV + scale.offsetV, 3)} V, cycle ${c}`} /></td>
             <td className="wrap">{p.baseline.description}</td>
           </tr>
         ))}

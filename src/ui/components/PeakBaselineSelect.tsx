@@ -1,0 +1,34 @@
+/**
+ * Baseline choice for one found peak: stored as a per-file baseline choice covering ±20 mV around
+ * its Ep (files' scale), which the analysis applies to the peak whose Ep falls inside.
+ */
+import { halfwaveActions, useHalfwave } from '../../state/react';
+import type { BaselineMethod, BaselineSpec, PeakResult } from '../../state/types';
+
+const HALF_RANGE_V = 0.02;
+const OPTIONS: { value: BaselineMethod | 'default'; label: string }[] = [
+  { value: 'default', label: 'method default' },
+  { value: 'linear', label: 'straight line' },
+  { value: 'polynomial', label: 'polynomial' },
+  { value: 'nicholson', label: 'forward decay' },
+];
+
+const covers = (b: BaselineSpec, p: PeakResult) =>
+  b.direction === p.direction && Math.min(b.fromV, b.toV) <= p.potentialV && p.potentialV <= Math.max(b.fromV, b.toV);
+
+export function PeakBaselineSelect({ peak, label }: { peak: PeakResult; label: string }) {
+  const id = useHalfwave((s) => s.selectedFileId);
+  const spec = useHalfwave((s) => (id ? s.fileSettings[id]?.baselines.find((b) => covers(b, peak)) : undefined));
+  if (!id) return null;
+  const choose = (m: BaselineMethod | 'default') => void halfwaveActions().updateFileSettings(id, (f) => {
+    const rest = f.baselines.filter((b) => !covers(b, peak));
+    const mine: BaselineSpec[] = m === 'default' ? [] : [{ direction: peak.direction, fromV: peak.potentialV - HALF_RANGE_V, toV: peak.potentialV + HALF_RANGE_V, method: m }];
+    return { ...f, baselines: [...rest, ...mine] };
+  });
+  return (
+    <select aria-label={label} value={spec?.method ?? 'default'} data-testid="peak-baseline" onChange={(e) => choose(e.target.value as BaselineMethod | 'default')}>
+      {OPTIONS.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+      {spec && !OPTIONS.some((o) => o.value === spec.method) ? <option value={spec.method}>{spec.method}</option> : null}
+    </select>
+  );
+}
