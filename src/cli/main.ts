@@ -44,7 +44,9 @@ export async function runCli(argv: string[], io: CliIo): Promise<number> {
 
 function reportError(err: unknown, command: string, debug: boolean, io: CliIo): number {
   const e = err instanceof Error ? err : new Error(String(err));
-  const isInput = err instanceof UsageError || err instanceof AnalysisError || (e.name === 'ImportError');
+  // An ImportError is bad input unless the importer itself reports an internal fault.
+  const importCode = e.name === 'ImportError' ? (e as Error & { code?: string }).code : undefined;
+  const isInput = err instanceof UsageError || err instanceof AnalysisError || (importCode !== undefined && importCode !== 'INTERNAL');
   io.stderr(`halfwave ${command}: ${isInput ? '' : 'internal error: '}${e.message.split('\n')[0]}\n`);
   if (debug && e.stack) io.stderr(`${e.stack}\n`);
   return isInput ? 2 : 1;

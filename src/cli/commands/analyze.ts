@@ -9,7 +9,7 @@ import type { CliCommand, CliIo } from '../command';
 import { UsageError } from '../errors';
 import { formatInspectText, inspectJson } from '../inspect';
 import { readInputs } from '../readInputs';
-import { runAnalysis } from '../analyzeReport';
+import { ANALYSIS_OPTION_HELP, ANALYSIS_OPTION_SPEC, parseAnalysisExtras, runAnalysis } from '../analyzeReport';
 import { parseUnitOf } from '../../io';
 import type { CurrentUnit, DecimalMark, Delimiter, ImportOverrides, PotentialUnit, TextEncoding, TimeUnit } from '../../io';
 
@@ -19,6 +19,7 @@ const SPEC: Record<string, OptionSpec> = {
   delimiter: { value: true }, decimal: { value: true }, 'header-line': { value: true }, columns: { value: true },
   'potential-unit': { value: true }, 'current-unit': { value: true }, 'time-unit': { value: true },
   convention: { value: true }, encoding: { value: true },
+  ...ANALYSIS_OPTION_SPEC,
 };
 
 /** Everything `analyze` was asked for, in core units. */
@@ -47,7 +48,7 @@ Analysis options:
   --n N                 electrons transferred
   --temp CELSIUS        temperature in °C (default: the file's, else 25 °C)
   --scan-rate V_PER_S   scan rate in V/s; beats the time column, preamble and file name
-  --ref NAME            reference electrode the potentials are measured against
+  --ref NAME            report potentials on this reference scale (see below)
   --json                machine-readable output on stdout
   --csv FILE            also write the results table to FILE
   --inspect             print what was detected in each file (no analysis)
@@ -64,6 +65,7 @@ Import overrides (each replaces one guess; see the --inspect report):
   --convention C        iupac (anodic current positive) | polarographic (cathodic positive)
   --encoding E          utf-8 | utf-16le | utf-16be | latin1
 
+${ANALYSIS_OPTION_HELP}
 Exit codes: 0 done, 1 internal fault, 2 bad arguments or a file that cannot be read.
 `;
 
@@ -72,11 +74,12 @@ export const analyzeCommand: CliCommand = {
   summary: 'read voltammograms (use --inspect to see what was detected in each file)',
   help: HELP,
   run: async (argv: string[], io: CliIo) => {
-    const args = parseAnalyzeArgs(parseArgs(argv, SPEC));
+    const parsed = parseArgs(argv, SPEC);
+    const args = parseAnalyzeArgs(parsed);
     if (args.inspect) return inspect(args, io);
+    const extras = parseAnalysisExtras(parsed);
     const { measurements } = readInputs(args.files, { overrides: args.overrides });
-    // ANALYSIS BRANCH (analysis helper): the run, its JSON/table output and the results sheet.
-    return runAnalysis(measurements, args, io);
+    return runAnalysis(measurements, args, io, extras);
   },
 };
 
