@@ -133,6 +133,16 @@ describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysi
     expect((she.series[0]?.Ehalf ?? 0)).toBeCloseTo(0.1 + 0.197, 2);
     expect((rhe.series[0]?.Ehalf ?? 0) - (she.series[0]?.Ehalf ?? 0)).toBeCloseTo(7 * 0.0591594, 5);
   });
+  // check-values.md §10 worked conversion (Bard & Faulkner inside cover; Sawyer et al. 1995):
+  // +0.300 V vs Ag/AgCl (sat. KCl) is +0.256 V vs SCE, i.e. SCE sits 0.041–0.044 V above it.
+  it('the analyze command itself accepts --from-ref, --ref and --ru', async () => {
+    const plain = await analyzeJson(folder);
+    const sce = await analyzeJson(folder, ['--from-ref', 'AgCl-sat', '--ref', 'SCE', '--ru', '0']);
+    expect((sce.series[0]?.Ehalf ?? 0) - (plain.series[0]?.Ehalf ?? 0)).toBeCloseTo(0.197 - 0.2412, 3);
+    const bad = await cli(['analyze', folder, '--ru', 'lots']);
+    expect(bad.code).toBe(2);
+    expect(bad.err).toMatch(/--ru/);
+  });
   // check-values.md §14: the polarographic convention flips signed currents (iRaw), never ipa/ipc.
   it('--out-convention polarographic flips signed currents only', async () => {
     const iupac = await run([]);
