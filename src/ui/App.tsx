@@ -4,6 +4,7 @@ import { CellPanel } from './components/CellPanel';
 import { IntakePanel } from './components/IntakePanel';
 import { MethodPanel } from './components/MethodPanel';
 import { NoticeBar } from './components/NoticeBar';
+import { PanelBoundary } from './components/PanelBoundary';
 import { ReadoutPanel } from './components/ReadoutPanel';
 import { SeriesView } from './components/SeriesView';
 import { SafetyDrawer } from './components/SafetyDrawer';
@@ -20,21 +21,21 @@ export function App() {
       <NoticeBar />
       <main className="workspace">
         <aside className="column left" aria-label="Files">
-          <IntakePanel />
+          <PanelBoundary name="intake"><IntakePanel /></PanelBoundary>
         </aside>
         <div className="column centre">
           {mainView === 'trace' ? (
             <>
-              <TracePanel />
-              <ReadoutPanel />
+              <PanelBoundary name="trace"><TracePanel /></PanelBoundary>
+              <PanelBoundary name="readout"><ReadoutPanel /></PanelBoundary>
             </>
           ) : (
-            <SeriesView />
+            <PanelBoundary name="series"><SeriesView /></PanelBoundary>
           )}
         </div>
         <aside className="column right" aria-label="Analysis settings">
-          <MethodPanel />
-          <CellPanel />
+          <PanelBoundary name="method"><MethodPanel /></PanelBoundary>
+          <PanelBoundary name="cell"><CellPanel /></PanelBoundary>
         </aside>
       </main>
       <SafetyDrawer />

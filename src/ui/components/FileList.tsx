@@ -42,7 +42,8 @@ function FileRow({ id }: { id: string }) {
       {file.measurement ? (
         <label className="group-field">
           series
-          <input defaultValue={file.group} aria-label={`Series group of ${file.fileName}`} onBlur={(e) => act.setFileGroup(id, e.target.value)} />
+          <input key={file.group} defaultValue={file.group} aria-label={`Series group of ${file.fileName}`} onBlur={(e) => act.setFileGroup(id, e.target.value)}
+            onKeyDown={(e) => e.key === 'Enter' && act.setFileGroup(id, e.currentTarget.value)} />
         </label>
       ) : null}
     </li>
