@@ -45,8 +45,8 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
     const marginPoints = footMarginPoints(sig, cand, o);
     const outcome = baselineForPeak(sig, cand, { method, spec, regionStart: regionStartFor(sig, cand, ordered), marginPoints, forward, previous });
     if (outcome.fallbackReason) warn('BASELINE_FALLBACK', `${cand.direction} peak at ${mv(cand.potentialV)}: extended-decay baseline not possible (${outcome.fallbackReason}); linear pre-peak line used`);
-    refs.set(cand, { peak: cand, evaluate: outcome.evaluate });
-    const peak = measurePeak(sig, cand, outcome.curve, onFirst);
+    refs.set(cand, { peak: cand, evaluate: outcome.evaluate, background: outcome.background });
+    const peak = measurePeak(sig, cand, outcome.curve, onFirst, outcome.background);
     if (peak) measured.set(cand, peak);
     else warn('LOW_SIGNAL', `${cand.direction} feature at ${mv(cand.potentialV)} does not rise above its baseline; dropped`);
   }

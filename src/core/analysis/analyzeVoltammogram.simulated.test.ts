@@ -85,6 +85,19 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     expect(Math.abs(couple.ratio! - 1)).toBeLessThan(0.05);
   });
 
+  // Sloping background: a leak of 20 µA/V added to both sweeps (16 µA across the window, as large
+  // as ip) on top of 20 µF/cm² charging and 0.1 µA noise. The pre-peak line takes the slope, the
+  // return baseline keeps it, and Ep is measured above it: E½ ±4 mV, ipc and ipa ±3 %.
+  it('sloping background: E½ ±4 mV, ipc and ipa vs Randles–Ševčík ±3 %, nernstian', () => {
+    const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 20e-6 }, { noiseA: 1e-7, seed: 4 });
+    const tilted = { ...v, currentA: v.currentA.map((i, k) => i + 2e-5 * (v.potentialV[k]! + 0.1)) };
+    const { couple } = firstCouple(analyzeVoltammogram(tilted));
+    expect(Math.abs(couple.eHalfV!)).toBeLessThan(0.004);
+    expect(Math.abs(couple.ipcA! / randlesSevcikA(1, 0.1) - 1)).toBeLessThan(0.03);
+    expect(Math.abs(couple.ipaA! / randlesSevcikA(1, 0.1) - 1)).toBeLessThan(0.03);
+    expect(couple.verdict.category).toBe('nernstian');
+  });
+
   // Heavier noise (0.3 µA, 1.8 % of ip) on a 40 µF/cm² background, eight seeds: exactly two peaks
   // (no noise feature survives the prominence and shoulder tests) and E½ within 4 mV.
   it('heavier noise over eight seeds: exactly one couple, E½ ±4 mV', () => {

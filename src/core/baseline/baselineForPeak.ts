@@ -40,30 +40,61 @@ export interface BaselineRef {
   peak: PeakCandidate;
   /** Baseline current at point k (A), beyond the drawn span where the method extends in time. */
   evaluate: (index: number) => number | null;
+  /**
+   * The non-faradaic part of that baseline (charging/leakage background; for an extended decay,
+   * the background under the decay, without the decay itself).
+   */
+  background: (index: number) => number | null;
 }
 
 export interface BaselineOutcome {
   curve: BaselineCurve;
-  /** See BaselineRef.evaluate. */
+  /** See BaselineRef.evaluate and BaselineRef.background. */
   evaluate: (index: number) => number | null;
+  background: (index: number) => number | null;
   /** Set when the requested method could not be used. */
   fallbackReason: string | null;
 }
 
 export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request: BaselineRequest): BaselineOutcome {
   const { method, spec } = request;
-  const sampled = (curve: BaselineCurve, fallbackReason: string | null = null): BaselineOutcome => ({ curve, evaluate: (k) => baselineAt(curve, k), fallbackReason });
+  const sampled = (curve: BaselineCurve, fallbackReason: string | null = null): BaselineOutcome => {
+    const evaluate = extendCurve(sig, curve);
+    return { curve, evaluate, background: evaluate, fallbackReason };
+  };
   if (method === 'two-point') return sampled(twoPointFromSpec(sig, peak, spec));
   if (method === 'nicholson') {
     const fw = request.forward;
     const prev = request.previous ?? null;
     const decay = attempt(() => (prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? nicholsonCurve(sig, peak, fw) : null));
-    if (decay) return { curve: decay.curve, evaluate: decay.evaluate, fallbackReason: null };
+    if (decay) {
+      const under = (prev ?? fw)!.background;
+      return { curve: decay.curve, evaluate: decay.evaluate, background: (k) => under(k) ?? under(peak.index), fallbackReason: null };
+    }
     const why = prev ? 'the current after the previous peak does not decay cleanly enough to extend' : fw ? 'too few points between the forward peak and the switch for the extended decay' : 'no forward peak on the preceding sweep to extend';
     return sampled(linearCurve(sig, peak, request, spec), why);
   }
   if (method === 'polynomial') return sampled(polynomialCurve(sig, peak, request, spec));
   return sampled(linearCurve(sig, peak, request, spec));
+}
+
+/**
+ * A straight baseline ('linear', 'two-point') continues as the same line in E beyond its span, so
+ * that a return-peak baseline can keep the forward background's slope (a tilted charging
+ * background: the slope is shared by both sweeps, the offset flips and is re-measured at the
+ * switch). Other curves exist only where they were drawn.
+ */
+function extendCurve(sig: SweepSignals, curve: BaselineCurve): (k: number) => number | null {
+  const n = curve.potentialV.length;
+  const e0 = curve.potentialV[0]!;
+  const e1 = curve.potentialV[n - 1]!;
+  const straight = (curve.method === 'linear' || curve.method === 'two-point') && n >= 2 && e1 !== e0;
+  const slope = straight ? (curve.currentA[n - 1]! - curve.currentA[0]!) / (e1 - e0) : 0;
+  return (k) => {
+    const inside = baselineAt(curve, k);
+    if (inside !== null || !straight) return inside;
+    return curve.currentA[0]! + slope * (sig.potentialV[k]! - e0);
+  };
 }
 
 /** Runs a decay fit; a failure of the data (e.g. a time column that does not increase) means fallback, not abort. */

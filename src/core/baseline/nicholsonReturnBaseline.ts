@@ -13,6 +13,8 @@
  *   a is held at 0.
  * Charging step: at the switch the double-layer current reverses, so the return baseline is
  *   shifted by the median difference between the first return points and the extended decay.
+ *   A forward background given as a function keeps being evaluated on the return sweep (a line in
+ *   E keeps its slope there); only its offset is re-measured by the step.
  * In: potential (V), current (A, IUPAC), time (s, or any monotonic time-like clock), the forward
  *   fit window [forwardFitStart, forwardFitEnd) ending at or before the vertex, the vertex index,
  *   and the end of the drawn span on the return sweep.

@@ -8,17 +8,26 @@
  *   ≤ 0 (or the baseline's start) to the first point after it where the corrected current falls
  *   below 1 % of ip (or the end of the sweep / baseline). For a diffusion wave the latter is usually
  *   the switch, so Q is "charge passed under the wave up to the switch".
- * In: sweep signals, the located peak and its baseline. Out: the PeakResult, or null when the
- *   corrected height is not positive (the peak does not rise above its own baseline).
+ * In: sweep signals, the located peak, its baseline and optionally the background part of that
+ *   baseline (Ep is then re-measured above the background). Out: the PeakResult, or null when
+ *   the corrected height is not positive (the peak does not rise above its own baseline).
  */
 import type { BaselineCurve, PeakResult } from '../analysis/types';
 import { baselineAt } from '../baseline/baselineCurve';
 import type { PeakCandidate } from './locatePeaksInSweep';
 import type { SweepSignals } from './sweepSignals';
+import { refinePeakQuadratic } from './refinePeakQuadratic';
 
-export function measurePeak(sig: SweepSignals, peak: PeakCandidate, baseline: BaselineCurve, onFirstSweep: boolean): PeakResult | null {
-  const seg = sig.segments[peak.segmentIndex]!;
+export function measurePeak(
+  sig: SweepSignals,
+  located: PeakCandidate,
+  baseline: BaselineCurve,
+  onFirstSweep: boolean,
+  background?: (index: number) => number | null,
+): PeakResult | null {
+  const seg = sig.segments[located.segmentIndex]!;
   const s = seg.direction === 'positive' ? 1 : -1;
+  const peak = background && located.confidence !== 'shoulder' && located.confidence !== 'low' ? relocateAboveBackground(sig, located, background, s) : located;
   const baseAtEp = baselineAtPotential(sig, baseline, peak);
   if (baseAtEp === null) return null;
   const heightA = s * (peak.currentA - baseAtEp);
@@ -47,6 +56,40 @@ export function measurePeak(sig: SweepSignals, peak: PeakCandidate, baseline: Ba
     signalToNoise: sig.noiseA > 0 ? peak.prominenceA / sig.noiseA : Infinity,
     origin: peak.origin,
   };
+}
+
+/**
+ * Ep measured on the current minus its background (a sloping charging current would otherwise
+ * pull the raw extremum sideways): the same parabola fit as in locatePeaksInSweep, on raw − background.
+ * An extended decay is not part of the background, so a return peak keeps the extremum of the
+ * total faradaic current that the published ΔEp tables refer to. Falls back to the located peak.
+ */
+function relocateAboveBackground(sig: SweepSignals, peak: PeakCandidate, background: (k: number) => number | null, s: 1 | -1): PeakCandidate {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const y = (k: number) => s * (sig.locatingA[k]! - (background(k) ?? NaN));
+  let k = peak.index;
+  while (k + 1 < seg.end && y(k + 1) > y(k)) k++;
+  while (k - 1 > seg.start && y(k - 1) > y(k)) k--;
+  const floor = y(k) - Math.max(0.01 * peak.prominenceA, 3 * sig.noiseA);
+  let a = k;
+  let b = k;
+  while (a - 1 > seg.start && k - a < 100 && y(a - 1) >= floor) a--;
+  while (b + 1 < seg.end && b - k < 100 && y(b + 1) >= floor) b++;
+  a = Math.max(seg.start, Math.min(a, k - 2));
+  b = Math.min(seg.end - 1, Math.max(b, k + 2));
+  const e = sig.potentialV.subarray(a, b + 1);
+  const c = Float64Array.from(e, (_, j) => sig.currentA[a + j]! - (background(a + j) ?? NaN));
+  if (!c.every(Number.isFinite) || c.length < 3) return peak;
+  const v = refinePeakQuadratic({ potentialV: e, currentA: c, from: 0, to: c.length }, { orientation: s });
+  if (!v) return peak;
+  const near = a + nearestIndex(e, v.potentialV);
+  return { ...peak, index: near, potentialV: v.potentialV, currentA: v.currentA + (background(near) ?? 0) };
+}
+
+function nearestIndex(e: Float64Array, potentialV: number): number {
+  let best = 0;
+  for (let j = 1; j < e.length; j++) if (Math.abs(e[j]! - potentialV) < Math.abs(e[best]! - potentialV)) best = j;
+  return best;
 }
 
 /** Baseline at Ep by linear interpolation between the two points around Ep. */
