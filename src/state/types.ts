@@ -87,6 +87,8 @@ export interface ViewSlice {
   showBaselines: boolean;
   /** Overlay a simulated voltammogram with the fitted parameters. */
   showTheory: boolean;
+  /** Draw the other files of the selected file's series behind it. */
+  showCompanions: boolean;
   /** Drag on the plot zooms, or marks a peak window of `windowDirection`. */
   dragMode: 'zoom' | 'window';
   windowDirection: 'anodic' | 'cathodic';

@@ -8,6 +8,7 @@ export const createViewSlice: SliceCreator<ViewSlice> = (set) => ({
   showSmoothed: false,
   showBaselines: true,
   showTheory: false,
+  showCompanions: false,
   dragMode: 'zoom',
   windowDirection: 'anodic',
   mainView: 'trace',

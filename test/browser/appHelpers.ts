@@ -24,7 +24,7 @@ export async function waitForFiles(page: Page, count: number, timeout = 90_000):
 
 /** Waits until the selected file's analysis is up to date. */
 export async function waitForAnalysis(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent === 'analysis up to date', null, { timeout: 30_000, polling: 100 });
+  await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent === 'up to date', null, { timeout: 30_000, polling: 100 });
 }
 
 export interface DrawnTrace {

@@ -20,6 +20,11 @@ export function TracePanel() {
   useEffect(() => {
     if (showTheory && id && seriesResult) void halfwaveActions().simulateTheory(id);
   }, [showTheory, id, seriesResult, settings]);
+  const companions = useHalfwaveShallow((s) => {
+    if (!s.showCompanions || !file) return [];
+    return s.fileOrder.filter((f) => f !== id && s.files[f]?.group === file.group && s.files[f]?.measurement).slice(0, 12)
+      .map((f) => s.files[f]?.measurement as NonNullable<typeof m>);
+  });
   const theoryCurve = showTheory && theory?.curve ? { ...theory.curve, label: 'theory (simulated, fitted values)' } : null;
   const m = file?.measurement ?? null;
   const corrected = result?.correctedPotentialV ?? null;
@@ -33,8 +38,9 @@ export function TracePanel() {
       peakWindows: windows ?? [], potentialOffsetV: scale.offsetV,
       potentialAxisTitle: `E${corrected ? ' (iR-corrected)' : ''} vs ${scale.name} / V`,
       theory: theoryCurve,
+      companions: companions.map((c) => ({ name: c.fileName, potentialV: c.potentialV, currentA: c.currentA, cycles: c.cycles })),
     });
-  }, [m, corrected, result?.analysis, view, windows, scale, theoryCurve?.currentA]);
+  }, [m, corrected, result?.analysis, view, windows, scale, theoryCurve?.currentA, companions]);
 
   const onRangeSelect = (a: number, b: number) => {
     if (!id || view.dragMode !== 'window') return;

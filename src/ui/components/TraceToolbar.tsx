@@ -6,6 +6,7 @@ export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'ru
   const showSmoothed = useHalfwave((s) => s.showSmoothed);
   const showBaselines = useHalfwave((s) => s.showBaselines);
   const showTheory = useHalfwave((s) => s.showTheory);
+  const showCompanions = useHalfwave((s) => s.showCompanions);
   const dragMode = useHalfwave((s) => s.dragMode);
   const dir = useHalfwave((s) => s.windowDirection);
   const set = halfwaveActions().setView;
@@ -21,11 +22,14 @@ export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'ru
       </label>
       <label><input type="checkbox" checked={showSmoothed} data-testid="show-smoothed" onChange={(e) => set({ showSmoothed: e.target.checked })} /> smoothed</label>
       <label><input type="checkbox" checked={showBaselines} onChange={(e) => set({ showBaselines: e.target.checked })} /> baselines</label>
+      <label title="draw the other files of this series behind the selected one (up to 12)">
+        <input type="checkbox" checked={showCompanions} data-testid="show-companions" onChange={(e) => set({ showCompanions: e.target.checked })} /> series
+      </label>
       <label title="simulated voltammogram with the parameters fitted from this file's scan-rate series">
         <input type="checkbox" checked={showTheory} data-testid="show-theory" onChange={(e) => set({ showTheory: e.target.checked })} /> theory
       </label>
       <label>
-        Drag to{' '}
+        Drag:{' '}
         <select
           value={drag}
           data-testid="drag-mode"
@@ -39,7 +43,7 @@ export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'ru
           <option value="cathodic">mark cathodic window</option>
         </select>
       </label>
-      <span className="status" role="status" data-testid="analysis-status">{status === 'running' ? 'analysing…' : status === 'ready' ? 'analysis up to date' : ''}</span>
+      <span className="status" role="status" data-testid="analysis-status" title="state of the analysis of this file">{status === 'running' ? 'analysing…' : status === 'ready' ? 'up to date' : ''}</span>
     </div>
   );
 }

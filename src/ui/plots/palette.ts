@@ -13,6 +13,7 @@ export const palette = {
   cathodicWindow: 'rgba(43, 71, 160, 0.10)',
   fit: '#444444',
   theory: '#111111',
+  companion: '#a7b4b9',
 } as const;
 
 export const markers = {

@@ -51,6 +51,14 @@ describe('buildTraceFigure', () => {
     expect(hidden.data).toHaveLength(3);
   });
 
+  it('draws companions of the series behind the trace and scales the current axis to them', () => {
+    const big = Float64Array.from([0, 1e-3, 2e-3, -1e-3, 0]);
+    const fig = buildTraceFigure({ ...base, companions: [{ name: 'b.csv', potentialV, currentA: big, cycles: base.cycles }] });
+    expect(fig.data[0]).toMatchObject({ name: 'other files of the series', showlegend: true, hovertemplate: expect.stringContaining('b.csv') });
+    expect(fig.scale.unit).toBe('mA');
+    expect(ys(fig, 1)).toEqual([0, 1e-3, 5e-3, -2e-3, -1e-3].map((v) => expect.closeTo(v, 12)));
+  });
+
   it('shifts potentials to the display scale and shades peak windows', () => {
     const fig = buildTraceFigure({ ...base, potentialOffsetV: 0.2, peakWindows: [{ direction: 'cathodic', fromV: 0.05, toV: 0.15 }] });
     expect((fig.data[0] as { x: number[] }).x[2]).toBeCloseTo(0.4, 12);

@@ -31,6 +31,8 @@ export interface TraceFigureInput {
   potentialAxisTitle: string;
   /** Simulated voltammogram to overlay (files' scale, IUPAC), with its legend text. */
   theory?: { potentialV: Float64Array; currentA: Float64Array; label: string } | null;
+  /** Other voltammograms of the same series drawn thinly behind (same cycle), for comparison. */
+  companions?: { name: string; potentialV: Float64Array; currentA: Float64Array; cycles: CycleRange[] }[];
   /** Most points drawn per trace. @default 6000 */
   maxPoints?: number;
 }
@@ -43,11 +45,22 @@ export interface TraceFigure {
 
 export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
   const cycles = input.cycle === 0 ? input.cycles : input.cycles.filter((c) => c.index === input.cycle);
-  const scale = chooseCurrentScale(Math.max(0, ...cycles.map((c) => maxAbs(input.currentA, c.start, c.end))));
+  const companions = (input.companions ?? []).map((c) => ({ ...c, range: pickCycle(c.cycles, input.cycle) }));
+  const scale = chooseCurrentScale(Math.max(0, ...cycles.map((c) => maxAbs(input.currentA, c.start, c.end)),
+    ...companions.map((c) => (c.range ? maxAbs(c.currentA, c.range.start, c.range.end) : 0))));
   const sign = input.convention === 'polarographic' ? -1 : 1;
   const tx = (v: number) => v + input.potentialOffsetV;
   const ty = (a: number) => sign * a * scale.factor;
   const data: Data[] = [];
+  companions.forEach((c, k) => {
+    if (!c.range) return;
+    const xy = decimateMinMax(c.potentialV, c.currentA, c.range.start, c.range.end, 1500);
+    // One legend entry for all of them; hovering names each file.
+    data.push({
+      type: 'scatter', mode: 'lines', name: 'other files of the series', legendgroup: 'series', showlegend: k === 0, x: xy.x.map(tx), y: xy.y.map(ty),
+      line: { color: palette.companion, width: 1 }, hovertemplate: `${c.name}<br>E %{x:.4f} V<br>i %{y:.4g}<extra></extra>`,
+    });
+  });
   cycles.forEach((c, k) => data.push(line(input, c.start, c.end, `cycle ${c.index}`, traceColour(k), tx, ty)));
   const smoothed = input.analysis?.smoothed;
   if (input.showSmoothed && smoothed) {
@@ -71,6 +84,11 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
 }
 
 type Map1 = (v: number) => number;
+
+/** The companion's range for the shown cycle (its first cycle when "all" is shown). */
+function pickCycle(cycles: CycleRange[], cycle: number): CycleRange | undefined {
+  return cycle === 0 ? cycles[0] : cycles.find((c) => c.index === cycle);
+}
 
 function line(input: TraceFigureInput, start: number, end: number, name: string, color: string, tx: Map1, ty: Map1, width = 1.6): Data {
   const xy = decimateMinMax(input.potentialV, input.currentA, start, end, input.maxPoints ?? 6000);
