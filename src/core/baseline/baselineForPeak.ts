@@ -14,7 +14,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { baselineAt, sampleBaseline } from './baselineCurve';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
-import { nicholsonReturnBaseline, type NicholsonReturnBaselineResult } from './nicholsonReturnBaseline';
+import { decayAfterPrevious, decayAfterSwitch, type BaselineRef } from './extendedDecayBaselines';
 import { polynomialBaseline } from './polynomialBaseline';
 import { twoPointBaseline } from './twoPointBaseline';
 
@@ -35,18 +35,6 @@ export interface BaselineRequest {
   previous?: BaselineRef | null;
 }
 
-/** A peak with the baseline drawn under it and that baseline as a function of point index. */
-export interface BaselineRef {
-  peak: PeakCandidate;
-  /** Baseline current at point k (A), beyond the drawn span where the method extends in time. */
-  evaluate: (index: number) => number | null;
-  /**
-   * The non-faradaic part of that baseline (charging/leakage background; for an extended decay,
-   * the background under the decay, without the decay itself).
-   */
-  background: (index: number) => number | null;
-}
-
 export interface BaselineOutcome {
   curve: BaselineCurve;
   /** See BaselineRef.evaluate and BaselineRef.background. */
@@ -55,6 +43,8 @@ export interface BaselineOutcome {
   /** Set when the requested method could not be used. */
   fallbackReason: string | null;
 }
+
+export type { BaselineRef };
 
 export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request: BaselineRequest): BaselineOutcome {
   const { method, spec } = request;
@@ -66,7 +56,7 @@ export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request:
   if (method === 'nicholson') {
     const fw = request.forward;
     const prev = request.previous ?? null;
-    const decay = attempt(() => (prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? nicholsonCurve(sig, peak, fw) : null));
+    const decay = attempt(() => (prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? decayAfterSwitch(sig, peak, fw) : null));
     if (decay) {
       const under = (prev ?? fw)!.background;
       return { curve: decay.curve, evaluate: decay.evaluate, background: (k) => under(k) ?? under(peak.index), fallbackReason: null };
@@ -194,46 +184,6 @@ export function currentAtPotential(sig: SweepSignals, start: number, end: number
     }
   }
   throw new AnalysisError('OUT_OF_RANGE', `potential ${potentialV} V is not on the peak's sweep`);
-}
-
-function nicholsonCurve(sig: SweepSignals, peak: PeakCandidate, fw: BaselineRef): NicholsonReturnBaselineResult | null {
-  const fSeg = sig.segments[fw.peak.segmentIndex]!;
-  const rSeg = sig.segments[peak.segmentIndex]!;
-  const vertex = fSeg.end - 1;
-  const ePeak = fw.peak.potentialV;
-  const half = 0.5 * Math.abs(sig.potentialV[vertex]! - ePeak);
-  let fitStart = vertex;
-  while (fitStart > fw.peak.index && Math.abs(sig.potentialV[fitStart - 1]! - ePeak) >= half) fitStart--;
-  if (vertex + 1 - fitStart < 5) return null;
-  const known = fw.evaluate(fitStart) !== null && fw.evaluate(vertex) !== null;
-  // A decaying forward background extends past the switch; a sampled line stops at the vertex,
-  // and the charging step measured there then carries its value (held constant).
-  return nicholsonReturnBaseline({
-    ...sig,
-    forwardFitStart: fitStart,
-    forwardFitEnd: vertex + 1,
-    vertexIndex: vertex,
-    spanEnd: rSeg.end,
-    ...(known ? { forwardBackgroundA: (k: number) => (k <= vertex || fw.evaluate(k) !== null ? (fw.evaluate(k) ?? 0) : (fw.evaluate(vertex) ?? 0)) } : {}),
-  });
-}
-
-/** Decay of the previous wave, fitted between it and this wave's foot, extended under this wave. */
-function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev: BaselineRef, marginPoints: number): NicholsonReturnBaselineResult | null {
-  const seg = sig.segments[peak.segmentIndex]!;
-  const s = seg.direction === 'positive' ? 1 : -1;
-  const y = sig.locatingA.subarray(seg.start, seg.end).map((v) => s * v);
-  const from = prev.peak.index - seg.start + Math.round((peak.index - prev.peak.index) / 5);
-  const w = findPrePeakWindow(y, from, peak.index - seg.start, { noise: sig.noiseA, marginPoints });
-  if (!w || w.end - w.start < 5) return null;
-  const bg = prev.evaluate;
-  if (bg(seg.start + w.start) === null || bg(peak.index) === null) return null;
-  const fit = nicholsonReturnBaseline(
-    { ...sig, forwardFitStart: seg.start + w.start, forwardFitEnd: seg.start + w.end, vertexIndex: seg.start + w.end - 1, spanEnd: seg.end, forwardBackgroundA: (k) => bg(k) ?? 0 },
-    { switchStep: false },
-  );
-  // The earlier wave's current must be decaying in the sweep's direction of interest.
-  return s * fit.cottrellCoefficientA > 0 ? fit : null;
 }
 
 function flatCurve(sig: SweepSignals, peak: PeakCandidate, regionStart: number): BaselineCurve {

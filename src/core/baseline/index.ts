@@ -12,6 +12,7 @@ export type { NicholsonPeakRatioInput } from './nicholsonPeakRatio';
 export { findPrePeakWindow } from './findPrePeakWindow';
 export type { FindPrePeakWindowOptions, PrePeakWindow } from './findPrePeakWindow';
 export { baselineForPeak } from './baselineForPeak';
+export { decayAfterPrevious, decayAfterSwitch } from './extendedDecayBaselines';
 export type { BaselineOutcome, BaselineRef, BaselineRequest } from './baselineForPeak';
 export { baselineAt } from './baselineCurve';
 export type { BaselineTrace } from './baselineCurve';
