@@ -27,7 +27,9 @@ export function measurePeak(
 ): PeakResult | null {
   const seg = sig.segments[located.segmentIndex]!;
   const s = seg.direction === 'positive' ? 1 : -1;
-  const peak = background && located.confidence !== 'shoulder' && located.confidence !== 'low' ? relocateAboveBackground(sig, located, background, s) : located;
+  // Peaks from user windows stay where the window put them.
+  const movable = located.origin === 'auto' && located.confidence !== 'shoulder' && located.confidence !== 'low';
+  const peak = background && movable ? relocateAboveBackground(sig, located, background, s) : located;
   const baseAtEp = baselineAtPotential(sig, baseline, peak);
   if (baseAtEp === null) return null;
   const heightA = s * (peak.currentA - baseAtEp);
