@@ -5,7 +5,7 @@
  * reference table), so E(vs SCE) = E(vs Ag/AgCl 3 M) − 0.0312 V.
  */
 import { describe, expect, it } from 'vitest';
-import { createInThreadClient } from '../worker/client';
+import { createInThreadClient } from '../worker/inThreadClient';
 import { describeLayout } from './exportRequest';
 import { createHalfwaveStore } from './store';
 import { simulatedCsv } from './testSupport';

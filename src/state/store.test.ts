@@ -4,7 +4,7 @@
  * the numbers name their source.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { createInThreadClient } from '../worker/client';
+import { createInThreadClient } from '../worker/inThreadClient';
 import { AUTOSAVE_KEY, attachAutosave, loadSessionText, restoreAutosave, saveSessionText } from './sessionActions';
 import { memoryStorageAdapter } from './storage';
 import { createHalfwaveStore } from './store';

@@ -5,7 +5,7 @@
  * reproduce the measured peak within the fit's accuracy (3 %, common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
-import { createInThreadClient } from '../worker/client';
+import { createInThreadClient } from '../worker/inThreadClient';
 import { createHalfwaveStore } from './store';
 import { simulatedCsv } from './testSupport';
 

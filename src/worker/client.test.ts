@@ -7,7 +7,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AnalysisError } from '../core/errors';
 import { ImportError } from '../io/errors';
-import { createInThreadClient, createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
+import { createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
+import { createInThreadClient } from './inThreadClient';
 import { CancelledError } from './errors';
 import type { PageToWorker, WorkerToPage } from './protocol';
 

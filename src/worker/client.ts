@@ -4,11 +4,11 @@
  * (ImportError, AnalysisError) carrying its `code`; aborting the signal rejects with
  * CancelledError at once and tells the worker to drop the work.
  *
- * Two transports share this API: a real Worker (the browser) and in-thread (Vitest, and the
- * fallback where workers are unavailable). Both run the same handler table.
+ * Two transports share this API: a real Worker (the browser, here) and in-thread (Vitest, and the
+ * fallback where workers are unavailable; inThreadClient.ts). Both run the same handler table.
+ * This file does not import the handlers, so the page bundle stays free of the analysis code.
  */
-import { CancelledError, describeError, reviveError } from './errors';
-import { runHandler } from './handlers';
+import { CancelledError, reviveError } from './errors';
 import { inputTransferables, type PageToWorker, type RequestInput, type RequestOutput, type RequestType, type WorkerRequest, type WorkerToPage } from './protocol';
 
 export interface RequestOptions {
@@ -76,35 +76,5 @@ export function createWorkerClient(worker: WorkerLike): AnalysisClient {
       pending.clear();
       worker.terminate();
     },
-  };
-}
-
-/** Runs requests on the calling thread through the same handlers and error path as the worker. */
-export function createInThreadClient(): AnalysisClient {
-  let nextId = 1;
-  return {
-    transport: 'in-thread',
-    async request(type, input, options = {}) {
-      const requestId = nextId++;
-      const signal = options.signal ?? new AbortController().signal;
-      const check = () => {
-        if (signal.aborted) throw new CancelledError();
-      };
-      try {
-        check();
-        const output = await runHandler(type, input, {
-          signal,
-          progress(fraction, stage) {
-            check();
-            options.onProgress?.(fraction, stage);
-          },
-        });
-        check();
-        return output;
-      } catch (err) {
-        throw reviveError(describeError(requestId, err));
-      }
-    },
-    dispose() {},
   };
 }
