@@ -22,13 +22,24 @@ function triangle(cycles: number): Float64Array {
   return Float64Array.from(out);
 }
 
-/** Loads the real worker entry on a fake global scope connected to a WorkerLike. */
-async function loadWorkerEntry(): Promise<WorkerLike> {
+/** Every message the fake worker scope posted, for checking what the worker did. */
+const posted: WorkerToPage[] = [];
+
+let entry: Promise<WorkerLike> | null = null;
+
+/** The real worker entry on a fake global scope (a module runs once, so it is made once). */
+function loadWorkerEntry(): Promise<WorkerLike> {
+  entry ??= makeWorkerEntry();
+  return entry;
+}
+
+async function makeWorkerEntry(): Promise<WorkerLike> {
   const pageListeners: ((e: MessageEvent<WorkerToPage>) => void)[] = [];
   const scope = {
     onmessage: null as null | ((e: MessageEvent<PageToWorker>) => void),
     postMessage(msg: WorkerToPage, transfer: Transferable[] = []) {
       const copy = structuredClone(msg, { transfer }) as WorkerToPage;
+      posted.push(copy);
       setTimeout(() => pageListeners.forEach((l) => l({ data: copy } as MessageEvent<WorkerToPage>)), 0);
     },
   };
@@ -97,5 +108,26 @@ describe.each(transports)('analysis client over %s', (_name, make) => {
     ctrl.abort();
     const err = await client.request('segments', { potentialV: triangle(1), options: {} }, { signal: ctrl.signal }).catch((e: unknown) => e);
     expect(err).toBeInstanceOf(CancelledError);
+  });
+});
+
+describe('cancelling an import in the worker', () => {
+  it('stops between chunks and answers with CancelledError, never a result', async () => {
+    const client = createWorkerClient(await loadWorkerEntry());
+    const rows = ['E/V,I/A'];
+    for (let i = 0; i < 200_000; i++) rows.push(`${((i % 2000) < 1000 ? i % 1000 : 1000 - (i % 1000)) / 1000},${Math.sin(i / 50) * 1e-6}`);
+    const data = new TextEncoder().encode(rows.join('\n')).buffer;
+    const ctrl = new AbortController();
+    const done = client.request('import', { fileName: 'long.csv', data, overrides: {} }, {
+      signal: ctrl.signal,
+      onProgress: (fraction) => fraction > 0 && ctrl.abort(),
+    }).catch((e: unknown) => e);
+    expect(await done).toBeInstanceOf(CancelledError);
+    // Let the worker reach its next chunk, see the cancel, and answer.
+    await new Promise((r) => setTimeout(r, 300));
+    const mine = posted.filter((m) => m.type !== 'progress' && 'requestId' in m);
+    const last = mine[mine.length - 1];
+    expect(last?.type).toBe('error');
+    expect(last && last.type === 'error' ? last.errorName : '').toBe('CancelledError');
   });
 });
