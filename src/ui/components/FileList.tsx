@@ -3,6 +3,10 @@ import { halfwaveActions, useHalfwave } from '../../state/react';
 import type { FileEntry } from '../../state/types';
 import { bytes } from '../format';
 
+const SOURCE_WORDS: Record<string, string> = {
+  option: 'your override', time: 'the time column', metadata: 'the file header', filename: 'the file name',
+};
+
 export function FileList() {
   const order = useHalfwave((s) => s.fileOrder);
   if (order.length === 0) return <p className="empty">No files yet.</p>;
@@ -30,7 +34,11 @@ function FileRow({ id }: { id: string }) {
       <div className="file-meta">
         <span>{statusText(file, result?.status)}</span>
         <span>{bytes(file.sizeBytes)}</span>
-        {file.measurement?.scanRateVPerS ? <span>{Number((file.measurement.scanRateVPerS * 1000).toPrecision(3))} mV/s</span> : null}
+        {file.measurement?.scanRateVPerS ? (
+          <span title={`scan rate taken from ${SOURCE_WORDS[file.measurement.scanRateSource ?? ''] ?? 'unknown source'}`}>
+            {Number((file.measurement.scanRateVPerS * 1000).toPrecision(3))} mV/s ({file.measurement.scanRateSource ?? '?'})
+          </span>
+        ) : file.measurement ? <span className="warn-text">no scan rate</span> : null}
       </div>
       {file.status === 'importing' ? <progress max={1} value={file.progress} aria-label={`reading ${file.fileName}`} /> : null}
       {file.error ? (
