@@ -76,11 +76,15 @@ export interface BaselineSpec {
 
 export interface PeakResult {
   direction: PeakDirection;
-  /** Peak potential Ep (V), from a local quadratic fit to the raw points. */
+  /**
+   * Peak potential Ep (V): vertex of a local parabola fitted to the raw points minus their
+   * background (charging/leakage line; an extended decay of an earlier wave is not removed, so a
+   * return peak's Ep is the extremum the published ΔEp tables refer to).
+   */
   potentialV: number;
   /** Baseline-corrected peak current, positive magnitude (A). */
   heightA: number;
-  /** Measured current at Ep (A, IUPAC sign), from the same quadratic fit. */
+  /** Measured current at Ep (A, IUPAC sign), from the same parabola (background added back). */
   rawCurrentA: number;
   /** Baseline current at Ep (A, IUPAC sign). */
   baselineCurrentA: number;
@@ -220,7 +224,10 @@ export interface AnalyzeVoltammogramOptions {
   temperatureK?: number;
   /** Electrons per molecule, n. @default 1 */
   electronCount?: number;
-  /** Savitzky–Golay smoothing of the shown curve, or 'off'. @default { window: 5, order: 2 } */
+  /**
+   * Savitzky–Golay smoothing of the shown curve, or 'off'. Ep/2, FWHM and the two-point anchor
+   * currents are read from this curve; Ep and ip come from the raw points. @default { window: 5, order: 2 }
+   */
   smoothing?: SmoothingSetting | 'off';
   /** Sign convention of `currentA` in the input. @default 'iupac' */
   currentConvention?: CurrentConvention;
