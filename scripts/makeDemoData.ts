@@ -11,7 +11,7 @@ import { simulateCv } from '../src/core/simulation';
 import { formatTrace, type DemoTrace } from './demoData/layouts';
 import { demoReadme } from './demoData/readme';
 import { MASTER_SEED, SERIES, type DemoSeries } from './demoData/scenario';
-import { createGaussian } from './demoData/seededNoise';
+import { seededGaussian as createGaussian } from '../src/core/random/seededGaussian';
 
 const OUT = join(dirname(fileURLToPath(import.meta.url)), '..', 'demo-data');
 const DATA_FILE = /\.(csv|txt|tsv|dat)$/i;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatTrace, type DemoTrace } from './layouts';
 import { SERIES } from './scenario';
-import { createGaussian } from './seededNoise';
+import { seededGaussian as createGaussian } from '../../src/core/random/seededGaussian';
 
 const trace: DemoTrace = {
   timeS: new Float64Array([0, 0.5, 1]),

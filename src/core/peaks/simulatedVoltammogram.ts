@@ -1,25 +1,14 @@
 /**
  * Test and benchmark support: a simulated voltammogram (this project's simulator) wrapped as a
  * Voltammogram with its sweeps, optionally with seeded Gaussian noise added to the current.
- * Noise: mulberry32 uniform generator (public-domain snippet by T. Ettinger, from memory) and the
- * Box–Muller transform (G. E. P. Box, M. E. Muller, Ann. Math. Statist. 29 (1958) 610).
+ * Noise: seeded Gaussian deviates (../random/seededGaussian).
  */
 import { simulateCv, type CvSimulationInput } from '../simulation';
 import { findSweepSegments } from '../sweeps/findSweepSegments';
 import type { Voltammogram } from '../types';
+import { seededGaussian } from '../random/seededGaussian';
 
-/** Seeded standard normal deviates. */
-export function seededGaussian(seed: number): () => number {
-  let state = seed >>> 0;
-  const uniform = () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-  return () => Math.sqrt(-2 * Math.log(Math.max(uniform(), 1e-300))) * Math.cos(2 * Math.PI * uniform());
-}
+export { seededGaussian };
 
 export interface SimulatedVoltammogramOptions {
   /** Standard deviation of added white noise (A). @default 0 */
