@@ -3,6 +3,9 @@
  * see each bad file's error beside it while everything already loaded stays, check the numbers of
  * the new file against Randles–Ševčík, then override a detected unit and read the file again.
  */
+import { mkdir, mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { coupleCells, demoFileCount, simulatedCsv, waitForAnalysis, waitForFiles } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
@@ -78,6 +81,23 @@ describe('picking files', () => {
     await page.waitForFunction(() => document.querySelector('[data-testid=peaks-table] tbody tr td:last-child')?.textContent?.startsWith('least-squares polynomial'), null, { timeout: 30_000 });
     expect(await row.getByTestId('peak-baseline').inputValue()).toBe('polynomial');
     await page.getByTestId('tab-couples').click();
+  });
+
+  it('a picked folder becomes a scan-rate series named after it', async () => {
+    const page = app.page;
+    const root = await mkdtemp(join(tmpdir(), 'halfwave-'));
+    const dir = join(root, 'mini series');
+    await mkdir(dir);
+    for (const v of [0.05, 0.2]) await writeFile(join(dir, `sim-${v * 1000}mVs.csv`), simulatedCsv(v));
+    await writeFile(join(dir, 'readme.md'), 'not a table');
+    await page.getByTestId('folder-input').setInputFiles(dir);
+    await waitForFiles(page, demo + 5);
+    await page.getByTestId('view-series').click();
+    await page.getByTestId('series-group').selectOption('mini series');
+    await page.getByTestId('series-table').waitFor({ timeout: 30_000 });
+    expect(await page.getByTestId('series-table').textContent()).toContain('2 scan rates');
+    await page.getByTestId('view-trace').click();
+    await rm(root, { recursive: true });
   });
 
   it('stayed free of console errors, page errors and outside requests', () => {

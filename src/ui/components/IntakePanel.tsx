@@ -1,17 +1,30 @@
 /** "Intake": drop or choose export files; shows the batch progress and the loaded files. */
-import { useRef, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { halfwaveActions, useHalfwave } from '../../state/react';
+import { batchesFromDrop, batchesFromFolderPick, type FolderBatch } from '../folderDrop';
 import { FileList } from './FileList';
+
+/** Each folder becomes its own series group; loose files join the default group. */
+function load(batches: FolderBatch[]): void {
+  for (const b of batches) {
+    if (b.files.length === 0) continue;
+    const inputs = b.files.map((f) => ({ name: f.name, data: f }));
+    void (b.folder ? halfwaveActions().addFiles(inputs, b.folder) : halfwaveActions().addFiles(inputs));
+  }
+}
 
 export function IntakePanel() {
   const input = useRef<HTMLInputElement>(null);
+  const folderInput = useRef<HTMLInputElement>(null);
+  // React has no typed prop for folder picking; the attribute is set directly.
+  useEffect(() => folderInput.current?.setAttribute('webkitdirectory', ''), []);
   const [over, setOver] = useState(false);
   const batch = useHalfwave((s) => s.importBatch);
   const count = useHalfwave((s) => s.fileOrder.length);
 
   const take = (list: FileList | null) => {
     if (!list || list.length === 0) return;
-    void halfwaveActions().addFiles(Array.from(list, (f) => ({ name: f.name, data: f })));
+    load([{ folder: null, files: Array.from(list) }]);
   };
 
   return (
@@ -28,11 +41,26 @@ export function IntakePanel() {
         onDrop={(e) => {
           e.preventDefault();
           setOver(false);
-          take(e.dataTransfer.files);
+          void batchesFromDrop(e.dataTransfer).then(load);
         }}
       >
-        <p>Drop potentiostat text exports here</p>
-        <button type="button" onClick={() => input.current?.click()}>Choose files…</button>
+        <p>Drop potentiostat text exports or folders here</p>
+        <div className="buttons">
+          <button type="button" onClick={() => input.current?.click()}>Choose files…</button>
+          <button type="button" onClick={() => folderInput.current?.click()} title="every table file in the folder; the folder becomes a series">Choose folder…</button>
+        </div>
+        <input
+          ref={folderInput}
+          type="file"
+          multiple
+          className="visually-hidden"
+          data-testid="folder-input"
+          aria-label="Choose a folder of voltammogram files"
+          onChange={(e) => {
+            if (e.target.files) load(batchesFromFolderPick(e.target.files));
+            e.target.value = '';
+          }}
+        />
         <input
           ref={input}
           type="file"
@@ -46,7 +74,7 @@ export function IntakePanel() {
             e.target.value = '';
           }}
         />
-        <p className="hint">CSV, TSV or text tables; many files at once. Nothing leaves this computer.</p>
+        <p className="hint">CSV, TSV or text tables; many files at once; a folder becomes a scan-rate series. Nothing leaves this computer.</p>
       </div>
       {batch ? (
         <div className="batch" data-testid="import-progress" role="status">
