@@ -7,6 +7,8 @@ const SOURCE_WORDS: Record<string, string> = {
   option: 'your override', time: 'the time column', metadata: 'the file header', filename: 'the file name',
 };
 
+const SOURCE_SHORT: Record<string, string> = { option: 'set', time: 'time', metadata: 'header', filename: 'name' };
+
 export function FileList() {
   const order = useHalfwave((s) => s.fileOrder);
   if (order.length === 0) return <p className="empty">No files yet.</p>;
@@ -36,7 +38,7 @@ function FileRow({ id }: { id: string }) {
         <span>{bytes(file.sizeBytes)}</span>
         {file.measurement?.scanRateVPerS ? (
           <span title={`scan rate taken from ${SOURCE_WORDS[file.measurement.scanRateSource ?? ''] ?? 'unknown source'}`}>
-            {Number((file.measurement.scanRateVPerS * 1000).toPrecision(3))} mV/s ({file.measurement.scanRateSource ?? '?'})
+            {Number((file.measurement.scanRateVPerS * 1000).toPrecision(3))} mV/s · {SOURCE_SHORT[file.measurement.scanRateSource ?? ''] ?? '?'}
           </span>
         ) : file.measurement ? <span className="warn-text">no scan rate</span> : null}
       </div>

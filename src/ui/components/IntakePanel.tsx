@@ -46,8 +46,8 @@ export function IntakePanel() {
       >
         <p>Drop potentiostat text exports or folders here</p>
         <div className="buttons">
-          <button type="button" onClick={() => input.current?.click()}>Choose files…</button>
-          <button type="button" onClick={() => folderInput.current?.click()} title="every table file in the folder; the folder becomes a series">Choose folder…</button>
+          <button type="button" onClick={() => input.current?.click()} title="choose one or many files">Files…</button>
+          <button type="button" onClick={() => folderInput.current?.click()} title="every table file in the folder; the folder becomes a series">Folder…</button>
         </div>
         <input
           ref={folderInput}
