@@ -23,7 +23,13 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const candidates = segIdx.flatMap((k) => locateOnSweep(sig, k, cycle.index, o, thresholdA, warn));
   const anodic = candidates.filter((c) => c.direction === 'anodic');
   const cathodic = candidates.filter((c) => c.direction === 'cathodic');
-  const pairs = pairPeaksIntoCouples(anodic.map((c) => c.potentialV), cathodic.map((c) => c.potentialV), { maxDeltaEpV: o.maxDeltaEpV });
+  const topProminence = Math.max(0, ...candidates.map((c) => c.prominenceA));
+  const byProminence = (c: PeakCandidate) => (topProminence > 0 ? c.prominenceA / topProminence : 1);
+  const pairs = pairPeaksIntoCouples(anodic.map((c) => c.potentialV), cathodic.map((c) => c.potentialV), {
+    maxDeltaEpV: o.maxDeltaEpV,
+    anodicWeights: anodic.map(byProminence),
+    cathodicWeights: cathodic.map(byProminence),
+  });
   const partner = new Map<PeakCandidate, PeakCandidate>();
   for (const p of pairs) {
     if (p.anodic === null || p.cathodic === null) continue;

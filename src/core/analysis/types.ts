@@ -245,7 +245,10 @@ export interface AnalyzeVoltammogramOptions {
   minProminenceA?: number;
   /** Minimum prominence as a fraction of the voltammogram's current range. @default 0.01 */
   minRelativeProminence?: number;
-  /** Largest Epa − Epc allowed within a couple (V). @default 0.6 */
+  /**
+   * Largest Epa − Epc allowed within a couple (V); when each direction has a single dominant peak
+   * (a totally irreversible couple) that pair may lie up to twice this apart. @default 0.6
+   */
   maxDeltaEpV?: number;
   /** Scan rate (V/s) when the voltammogram carries none and has no time column. */
   scanRateVPerS?: number;

@@ -22,7 +22,7 @@ import { reversibleDeltaEpAtSwitch, reversibleDeltaEpLimitV } from './reversible
 export const VERDICT_LABELS: Record<VerdictCategory, string> = {
   nernstian: 'reversible (diffusion, fast electron transfer)',
   sluggish: 'quasi-reversible (diffusion, slower electron transfer)',
-  'one-way': 'irreversible (no usable return peak or very slow electron transfer)',
+  'one-way': 'irreversible (slow electron transfer, or no usable return peak)',
   'follow-up-loss': 'chemically coupled (return peak differs from forward peak)',
   adsorbed: 'surface-confined (adsorbed redox species)',
   inconclusive: 'not classified (the numbers do not fit one picture)',
@@ -103,7 +103,13 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
   const ratioReason = input.ratio === null ? 'return/forward ratio not measurable' : `return/forward peak-current ratio = ${input.ratio.toFixed(3)} (1 for a stable product)`;
   const widthReasons = halfWidthReasons(input, evidence);
   if (dEp >= 8.25 * u) {
-    return verdict('one-way', [`${dEpReason}: beyond ${mv(8.25 * u)}, the end of Nicholson's ψ table`, ratioReason, ...widthReasons], 'irreversible (very slow electron transfer)');
+    return verdict('one-way', [
+      `${dEpReason}: beyond ${mv(8.25 * u)}, the end of Nicholson's ψ table`,
+      'both peaks are present: the return peak exists but lies far out, so electron transfer is slow (totally irreversible), not the product lost',
+      ratioReason,
+      ...widthReasons,
+      ...irreversibleWidthReasons(input, temperatureK),
+    ], 'irreversible (slow electron transfer)');
   }
   if (Math.abs(dEp) <= 1.109 * u) return classifySmallSeparation(verdict, input, evidence, dEpReason, ratioReason);
   if (input.ratio !== null && (input.ratio < 0.8 || input.ratio > 1.2)) {
@@ -120,6 +126,19 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     ...widthReasons,
     'uncompensated resistance widens ΔEp in the same way; correct for iR drop or check that ΔEp grows with scan rate before reading this as slow kinetics',
   ]);
+}
+
+/**
+ * αn from each peak's |Ep − Ep/2| = 1.857·RT/(αnF) (Bard & Faulkner 2nd ed. §6.3, from memory;
+ * Wang (2000) §2-1.1.2: 48/(αn) mV), the totally irreversible shape.
+ */
+function irreversibleWidthReasons(input: ClassifyCoupleInput, temperatureK: number): string[] {
+  const out: string[] = [];
+  for (const side of ['anodic', 'cathodic'] as const) {
+    const w = input.halfPeakWidthsV[side];
+    if (w !== null && w > 0) out.push(`${side} |Ep − Ep/2| = ${mv(w)} reads as αn = ${((1.857 * thermalVoltageV(temperatureK)) / w).toFixed(2)} for a totally irreversible wave (1.857RT/αnF)`);
+  }
+  return out;
 }
 
 function halfWidthReasons(input: ClassifyCoupleInput, e: VerdictEvidence): string[] {

@@ -16,9 +16,9 @@ describe('pairPeaksIntoCouples', () => {
     ]);
   });
 
-  it('leaves a peak without a partner unpaired, and respects maxDeltaEpV', () => {
+  it('leaves a peak without a partner unpaired, and respects maxDeltaEpV (wide limit set equal)', () => {
     expect(pairPeaksIntoCouples([0.5], [])).toEqual([{ anodic: 0, cathodic: null }]);
-    expect(pairPeaksIntoCouples([0.9], [0.1], { maxDeltaEpV: 0.5 })).toEqual([
+    expect(pairPeaksIntoCouples([0.9], [0.1], { maxDeltaEpV: 0.5, wideMaxDeltaEpV: 0.5 })).toEqual([
       { anodic: null, cathodic: 0 },
       { anodic: 0, cathodic: null },
     ]);
@@ -38,5 +38,20 @@ describe('pairPeaksIntoCouples', () => {
     expect(pairPeaksIntoCouples([0.099], [0.1])).toEqual([{ anodic: 0, cathodic: 0 }]);
     expect(pairPeaksIntoCouples([0.0], [0.1])).toHaveLength(2);
     expect(() => pairPeaksIntoCouples([0], [0], { maxDeltaEpV: 0 })).toThrow(/maxDeltaEpV/);
+  });
+});
+
+// Wang, Analytical Electrochemistry 2nd ed. (2000) eq. 2-5: a totally irreversible couple with
+// k° = 1e-5 cm/s, α = 0.5 at 0.1 V/s has its peaks ≈ ±0.35 V from E°′, so ΔEp ≈ 0.7 V.
+describe('pairPeaksIntoCouples with one dominant peak per direction', () => {
+  it('pairs a lone couple 0.7 V apart, and with a small extra feature beside it', () => {
+    expect(pairPeaksIntoCouples([0.35], [-0.35])).toEqual([{ anodic: 0, cathodic: 0 }]);
+    const withFeature = pairPeaksIntoCouples([0.35, 0.6], [-0.35], { anodicWeights: [1, 0.1], cathodicWeights: [1] });
+    expect(withFeature).toContainEqual({ anodic: 0, cathodic: 0 });
+  });
+  it('keeps the narrow limit when a direction has two comparable peaks, and beyond 2·maxDeltaEpV', () => {
+    expect(pairPeaksIntoCouples([0.35, 0.6], [-0.35], { anodicWeights: [1, 0.8] })).not.toContainEqual({ anodic: 0, cathodic: 0 });
+    expect(pairPeaksIntoCouples([0.7], [-0.6])).toHaveLength(2);
+    expect(() => pairPeaksIntoCouples([0], [0], { maxDeltaEpV: 0.5, wideMaxDeltaEpV: 0.4 })).toThrow(/wideMaxDeltaEpV/);
   });
 });
