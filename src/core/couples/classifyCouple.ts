@@ -12,11 +12,13 @@
  * Thresholds (common practice, no source): 'nernstian' when ΔEp ≤ the switch-dependent value
  *   + 0.31·RT/nF (8/n mV at 25 °C); 'one-way' beyond 8.25·RT/nF (212/n mV at 25 °C, the last row
  *   of Nicholson's ψ table, ψ = 0.1) or with one peak only; 'follow-up-loss' when the ratio lies
- *   outside 0.8…1.2; 'adsorbed' when |ΔEp| ≤ 1.109·RT/nF and each measurable FWHM lies within
+ *   outside 0.8…1.2 widened by what slow electron transfer alone does to it at the measured ΔEp
+ *   (kineticRatioEnvelope.ts: [0.8·low, 1.2·high]); 'adsorbed' when |ΔEp| ≤ 1.109·RT/nF and each measurable FWHM lies within
  *   ±25 % of 3.5255·RT/nF.
  */
 import { thermalVoltageV } from '../constants';
 import type { Verdict, VerdictCategory, VerdictEvidence } from '../analysis/types';
+import { kineticRatioEnvelope } from './kineticRatioEnvelope';
 import { reversibleDeltaEpAtSwitch, reversibleDeltaEpLimitV } from './reversibleDeltaEpAtSwitch';
 
 export const VERDICT_LABELS: Record<VerdictCategory, string> = {
@@ -112,17 +114,20 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     ], 'irreversible (slow electron transfer)');
   }
   if (Math.abs(dEp) <= 1.109 * u) return classifySmallSeparation(verdict, input, evidence, dEpReason, ratioReason);
-  if (input.ratio !== null && (input.ratio < 0.8 || input.ratio > 1.2)) {
+  const band = ratioBand(dEp * n * (298.15 / temperatureK));
+  if (input.ratio !== null && (input.ratio < band.low || input.ratio > band.high)) {
     const label = input.ratio < 1 ? 'chemically coupled (product consumed by a follow-up reaction)' : 'chemically coupled or product adsorbed (return peak larger than forward)';
-    return verdict('follow-up-loss', [`${ratioReason}: outside 0.8…1.2`, dEpReason, ...widthReasons], label);
+    return verdict('follow-up-loss', [`${ratioReason}: outside ${band.text}`, dEpReason, ...widthReasons], label);
   }
+  const kineticRatio = input.ratio !== null && (input.ratio < 0.8 || input.ratio > 1.2) ? [`the ratio departs from 1 only as far as slow electron transfer alone explains at this ΔEp (${band.text}); no follow-up chemistry is needed`] : [];
   if (dEp < expected - 0.4 * u) {
-    return verdict('inconclusive', [`${dEpReason}: smaller than diffusion theory allows, yet too large for an adsorbed layer`, ratioReason, ...widthReasons]);
+    return verdict('inconclusive', [`${dEpReason}: smaller than diffusion theory allows, yet too large for an adsorbed layer`, ratioReason, ...kineticRatio, ...widthReasons]);
   }
-  if (dEp <= expected + 0.31 * u) return verdict('nernstian', [`${dEpReason}: within ${mv(0.31 * u)}`, ratioReason, ...widthReasons]);
+  if (dEp <= expected + 0.31 * u) return verdict('nernstian', [`${dEpReason}: within ${mv(0.31 * u)}`, ratioReason, ...kineticRatio, ...widthReasons]);
   return verdict('sluggish', [
     `${dEpReason}: wider by ${mv(dEp - expected)}, below the irreversible limit ${mv(8.25 * u)}`,
     ratioReason,
+    ...kineticRatio,
     ...widthReasons,
     'uncompensated resistance widens ΔEp in the same way; correct for iR drop or check that ΔEp grows with scan rate before reading this as slow kinetics',
   ]);
@@ -139,6 +144,19 @@ function irreversibleWidthReasons(input: ClassifyCoupleInput, temperatureK: numb
     if (w !== null && w > 0) out.push(`${side} |Ep − Ep/2| = ${mv(w)} reads as αn = ${((1.857 * thermalVoltageV(temperatureK)) / w).toFixed(2)} for a totally irreversible wave (1.857RT/αnF)`);
   }
   return out;
+}
+
+/**
+ * Ratio band outside which the return peak is put down to chemistry: 0.8…1.2 around what slow
+ * electron transfer with 0.3 ≤ α ≤ 0.7 gives at this n·ΔEp (kineticRatioEnvelope.ts), i.e.
+ * [0.8·low, 1.2·high]; 0.8…1.2 for a reversible separation.
+ */
+function ratioBand(nDeltaEp25V: number): { low: number; high: number; text: string } {
+  const e = kineticRatioEnvelope(nDeltaEp25V);
+  const low = 0.8 * e.low;
+  const high = 1.2 * e.high;
+  const kinetic = e.low < 1 ? `; electron transfer with α = 0.3…0.7 alone gives ${e.low.toFixed(2)}…${e.high.toFixed(2)} here` : '';
+  return { low, high, text: `${low.toFixed(2)}…${high.toFixed(2)}${kinetic}` };
 }
 
 function halfWidthReasons(input: ClassifyCoupleInput, e: VerdictEvidence): string[] {
