@@ -1,5 +1,5 @@
 /**
- * Loaded files: queue many imports through the worker one at a time (so 100+ files and
+ * Loaded files: queue many imports through the workers, two at a time (so 100+ files and
  * million-row files never block the page), track per-file progress and errors, re-import with
  * overrides, and group files into scan-rate series. A failed import never removes anything that
  * was already loaded: a failed re-import keeps the previous measurement beside its error.
@@ -10,9 +10,31 @@ import { toUserError, type FileEntry, type FileInput, type FilesSlice, type Slic
 
 export const DEFAULT_GROUP = 'series 1';
 
+/** Files read at the same time: two keep a two-worker pool busy without flooding memory. */
+const IMPORT_SLOTS = 2;
+
+/** At most `slots` tasks at once, first come first served; a finished task hands its slot on. */
+export function createLimiter(slots: number): <T>(task: () => Promise<T>) => Promise<T> {
+  let active = 0;
+  const waiting: (() => void)[] = [];
+  return async (task) => {
+    if (active >= slots) await new Promise<void>((resolve) => waiting.push(resolve));
+    else active++;
+    try {
+      return await task();
+    } finally {
+      const next = waiting.shift();
+      if (next) next();
+      else active--;
+    }
+  };
+}
+
 export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   let nextId = 1;
-  let queue: Promise<void> = Promise.resolve();
+  const limit = createLimiter(IMPORT_SLOTS);
+  // Work on one file stays in order (a re-import never overtakes the first reading).
+  const chains = new Map<string, Promise<void>>();
 
   const patch = (id: string, change: Partial<FileEntry>) =>
     set((s) => {
@@ -50,13 +72,14 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       fileSettings: { ...s.fileSettings, [id]: { ...emptyFileSettings, ...(record.analysis as object) } },
     }));
     if (Object.keys(record.overrides).length > 0 && Object.keys(entry.overrides).length === 0) {
-      queue = queue.then(() => importOne(id, record.overrides));
+      void enqueue(id, record.overrides);
     }
   }
 
   function enqueue(id: string, overrides: ImportOverrides): Promise<void> {
-    queue = queue.then(() => importOne(id, overrides));
-    return queue;
+    const run = (chains.get(id) ?? Promise.resolve()).then(() => limit(() => importOne(id, overrides)));
+    chains.set(id, run);
+    return run;
   }
 
   return {

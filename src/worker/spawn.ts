@@ -3,12 +3,21 @@
  * the in-thread transport (loaded lazily). Vite bundles the worker as a same-origin file from this `new URL` form.
  */
 import { createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
+import { createPoolClient } from './poolClient';
+
+/** Two workers where the machine has more than one core (the page thread stays free either way). */
+export function workerCount(hardwareConcurrency: number | undefined): number {
+  return (hardwareConcurrency ?? 1) >= 2 ? 2 : 1;
+}
 
 export function spawnAnalysisClient(): AnalysisClient {
   if (typeof Worker === 'undefined') return lazyInThreadClient();
   try {
-    const worker = new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name: 'halfwave-analysis' });
-    return createWorkerClient(worker as unknown as WorkerLike);
+    const clients = Array.from({ length: workerCount(globalThis.navigator?.hardwareConcurrency) }, (_, k) => {
+      const worker = new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name: `halfwave-analysis-${k + 1}` });
+      return createWorkerClient(worker as unknown as WorkerLike);
+    });
+    return clients.length === 1 ? (clients[0] as AnalysisClient) : createPoolClient(clients);
   } catch {
     return lazyInThreadClient();
   }
