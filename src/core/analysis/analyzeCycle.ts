@@ -43,16 +43,18 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   for (const cand of ordered) {
     const onFirst = cand.segmentIndex === firstSeg;
     const spec = findSpec(o.baselines, cand, cycle.index);
-    const method = chooseMethod(spec, onFirst, o, cand, ordered, partner);
+    const closed = (fw: PeakCandidate) => forwardClosed(sig, refs.get(fw) ?? null);
+    const method = chooseMethod(spec, onFirst, o, cand, ordered, partner, closed);
     const fwd = partner.get(cand);
-    const forward = method === 'nicholson' && fwd ? (refs.get(fwd) ?? null) : null;
+    const carried = method === 'nicholson' || (method === 'linear' && spec === null && !onFirst && fwd !== undefined && fwd.segmentIndex === cand.segmentIndex - 1 && closed(fwd));
+    const forward = carried && fwd ? (refs.get(fwd) ?? null) : null;
     const before = previousOnSweep(cand, ordered);
     const previous = method === 'nicholson' && spec === null && before ? (refs.get(before) ?? null) : null;
     const marginPoints = footMarginPoints(sig, cand, o);
     const outcome = baselineForPeak(sig, cand, { method, spec, regionStart: regionStartFor(sig, cand, ordered), marginPoints, forward, previous });
     if (outcome.fallbackReason) warn('BASELINE_FALLBACK', `${cand.direction} peak at ${mv(cand.potentialV)}: extended-decay baseline not possible (${outcome.fallbackReason}); linear pre-peak line used`);
     refs.set(cand, { peak: cand, evaluate: outcome.evaluate, background: outcome.background });
-    const peak = measurePeak(sig, cand, outcome.curve, onFirst, outcome.background);
+    const peak = measurePeak(sig, cand, outcome.curve, onFirst, outcome.background, (6 * thermalVoltageV(o.temperatureK)) / o.electronCount);
     if (peak) measured.set(cand, peak);
     else warn('LOW_SIGNAL', `${cand.direction} feature at ${mv(cand.potentialV)} does not rise above its baseline; dropped`);
   }
@@ -86,11 +88,19 @@ function previousOnSweep(c: PeakCandidate, all: PeakCandidate[]): PeakCandidate 
 
 /**
  * Extended decay (Nicholson's convention) for a wave that follows another peak on its sweep, and
- * for the return peak next to the switch whose partner is the forward sweep's last peak; the
- * pre-peak line otherwise. With returnBaseline 'linear' or 'polynomial' only the forward-sweep
+ * for the return peak next to the switch whose partner is the forward sweep's last peak, unless
+ * that forward wave has closed before the switch (forwardClosed); the pre-peak line otherwise. With returnBaseline 'linear' or 'polynomial' only the forward-sweep
  * rule remains.
  */
-function chooseMethod(spec: BaselineSpec | null, onFirst: boolean, o: ResolvedAnalyzeOptions, c: PeakCandidate, all: PeakCandidate[], partner: Map<PeakCandidate, PeakCandidate>): BaselineMethod {
+function chooseMethod(
+  spec: BaselineSpec | null,
+  onFirst: boolean,
+  o: ResolvedAnalyzeOptions,
+  c: PeakCandidate,
+  all: PeakCandidate[],
+  partner: Map<PeakCandidate, PeakCandidate>,
+  closed: (forward: PeakCandidate) => boolean,
+): BaselineMethod {
   if (spec) return spec.method;
   const following = previousOnSweep(c, all) !== undefined;
   if (onFirst) return following && o.forwardBaseline === 'linear' ? 'nicholson' : o.forwardBaseline;
@@ -99,7 +109,32 @@ function chooseMethod(spec: BaselineSpec | null, onFirst: boolean, o: ResolvedAn
   const fwd = partner.get(c);
   const firstOnSweep = all.find((p) => p.segmentIndex === c.segmentIndex) === c;
   const lastOnForward = fwd ? all.filter((p) => p.segmentIndex === fwd.segmentIndex).at(-1) === fwd : false;
-  return fwd && fwd.segmentIndex === c.segmentIndex - 1 && firstOnSweep && lastOnForward ? 'nicholson' : 'linear';
+  const extend = fwd && fwd.segmentIndex === c.segmentIndex - 1 && firstOnSweep && lastOnForward && !closed(fwd);
+  return extend ? 'nicholson' : 'linear';
+}
+
+/**
+ * True when the forward peak's current has fallen back to its own baseline before the switch (a
+ * surface-confined wave): over the last quarter of the stretch between the peak and the vertex
+ * the corrected current stays within max(5 % of the peak, 4σ). There is no decay to extend then,
+ * and the charging current changes sign at the switch, so the return peak takes the pre-peak line
+ * of its own sweep (our rule; the 5 % level is common practice, no source).
+ */
+function forwardClosed(sig: SweepSignals, ref: BaselineRef | null): boolean {
+  if (!ref) return false;
+  const seg = sig.segments[ref.peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  const vertex = seg.end - 1;
+  const from = vertex - Math.floor((vertex - ref.peak.index) / 4);
+  const base = ref.evaluate(ref.peak.index);
+  if (base === null || vertex - from < 3) return false;
+  const height = s * (sig.locatingA[ref.peak.index]! - base);
+  const limit = Math.max(0.05 * height, 4 * sig.noiseA);
+  for (let k = from; k <= vertex; k++) {
+    const b = ref.evaluate(k);
+    if (b === null || Math.abs(sig.locatingA[k]! - b) > limit) return false;
+  }
+  return height > 0;
 }
 
 /** 2·RT/nF of potential, in points of the peak's sweep. */

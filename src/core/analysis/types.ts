@@ -103,6 +103,13 @@ export interface PeakResult {
   baseline: BaselineCurve;
   /** Charge under the corrected peak, positive magnitude (C); null when time is unknown. */
   chargeC: number | null;
+  /**
+   * Corrected current 6·RT/nF past Ep (in the sweep direction) over heightA: ≈ 0 for a closed,
+   * surface-confined wave, ≈ 0.5 for a diffusing one. Null when the sweep ends before that point.
+   * Optional because it was added after the first release of these types; always set by
+   * analyzeVoltammogram.
+   */
+  tailFraction?: number | null;
   confidence: PeakConfidence;
   /** Height above the local surroundings used for detection (A). */
   prominenceA: number;

@@ -16,6 +16,7 @@ import { findPrePeakWindow } from './findPrePeakWindow';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
 import { decayAfterPrevious, decayAfterSwitch, type BaselineRef } from './extendedDecayBaselines';
 import { polynomialBaseline } from './polynomialBaseline';
+import { switchedChargingBaseline } from './switchedChargingBaseline';
 import { twoPointBaseline } from './twoPointBaseline';
 
 export interface BaselineRequest {
@@ -25,7 +26,11 @@ export interface BaselineRequest {
   regionStart: number;
   /** Points trimmed from the end of an automatic pre-peak window (see findPrePeakWindow.ts). */
   marginPoints: number;
-  /** For 'nicholson': the forward peak of the couple and its baseline. */
+  /**
+   * For 'nicholson': the forward peak of the couple and its baseline. For 'linear' on a return
+   * peak whose forward wave closed before the switch: the forward background whose slope is kept
+   * (switchedChargingBaseline.ts).
+   */
   forward: BaselineRef | null;
   /**
    * For 'nicholson' on a wave that follows another peak on the same sweep: that peak and its
@@ -65,6 +70,10 @@ export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request:
     return sampled(linearCurve(sig, peak, request, spec), why);
   }
   if (method === 'polynomial') return sampled(polynomialCurve(sig, peak, request, spec));
+  if (spec === null && request.forward) {
+    const switched = switchedCurve(sig, peak, request, request.forward);
+    if (switched) return sampled(switched);
+  }
   return sampled(linearCurve(sig, peak, request, spec));
 }
 
@@ -131,6 +140,23 @@ function linearCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, s
   if (!w || w[1] - w[0] < 2) return flatCurve(sig, peak, r.regionStart);
   const spanStart = Math.min(w[0], peak.index);
   return linearPrePeakBaseline({ ...sig, fitStart: w[0], fitEnd: w[1], spanStart, spanEnd: seg.end }).curve;
+}
+
+/**
+ * Return peak of a closed forward wave (request.forward set with method 'linear'):
+ * switchedChargingBaseline.ts, when the forward sweep had the longer stretch before its peak (its
+ * background slope is then the better measured); null otherwise, and the return sweep's own
+ * pre-peak line is used.
+ */
+function switchedCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, fw: BaselineRef): BaselineCurve | null {
+  const w = preWindow(sig, peak, r.regionStart, null, r.marginPoints);
+  if (!w || w[1] - w[0] < 4) return null;
+  const fSeg = sig.segments[fw.peak.segmentIndex]!;
+  const seg = sig.segments[peak.segmentIndex]!;
+  const forwardRun = Math.abs(fw.peak.potentialV - sig.potentialV[fSeg.start]!);
+  const returnRun = Math.abs(peak.potentialV - sig.potentialV[seg.start]!);
+  if (returnRun >= forwardRun) return null;
+  return switchedChargingBaseline(sig, peak, { forwardBackground: fw.background, forwardPeakIndex: fw.peak.index, fitStart: w[0], fitEnd: w[1] });
 }
 
 function polynomialCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, spec: BaselineSpec | null): BaselineCurve {

@@ -8,6 +8,9 @@
  *   ≤ 0 (or the baseline's start) to the first point after it where the corrected current falls
  *   below 1 % of ip (or the end of the sweep / baseline). For a diffusion wave the latter is usually
  *   the switch, so Q is "charge passed under the wave up to the switch".
+ * Tail (our measure of a closed peak): the corrected current `tailOffsetV` past Ep, in the sweep
+ *   direction, over ip. A surface-confined wave falls to ~1 % of ip 6·RT/nF past Ep (θ(1 − θ)
+ *   shape, Bard & Faulkner 2nd ed. §14.3, from memory), a diffusing one keeps about half of it.
  * In: sweep signals, the located peak, its baseline and optionally the background part of that
  *   baseline (Ep is then re-measured above the background). Out: the PeakResult, or null when
  *   the corrected height is not positive (the peak does not rise above its own baseline).
@@ -24,6 +27,7 @@ export function measurePeak(
   baseline: BaselineCurve,
   onFirstSweep: boolean,
   background?: (index: number) => number | null,
+  tailOffsetV = 0.154,
 ): PeakResult | null {
   const seg = sig.segments[located.segmentIndex]!;
   const s = seg.direction === 'positive' ? 1 : -1;
@@ -53,6 +57,7 @@ export function measurePeak(
     fwhmV: before !== null && after !== null ? Math.abs(after - before) : null,
     baseline,
     chargeC: sig.timeKnown ? chargeUnderPeak(sig, corrected, peak.index, lo, hi, heightA) : null,
+    tailFraction: tailFraction(sig, corrected, peak, hi, tailOffsetV, heightA),
     confidence: peak.confidence,
     prominenceA: peak.prominenceA,
     signalToNoise: sig.noiseA > 0 ? peak.prominenceA / sig.noiseA : Infinity,
@@ -120,6 +125,16 @@ function crossing(sig: SweepSignals, corrected: (k: number) => number, from: num
       const e1 = sig.potentialV[k + dir]!;
       return e0 + ((a - level) / (a - b)) * (e1 - e0);
     }
+  }
+  return null;
+}
+
+/** Corrected current tailOffsetV past Ep over ip; null when the sweep or baseline ends before. */
+function tailFraction(sig: SweepSignals, corrected: (k: number) => number, peak: PeakCandidate, hi: number, tailOffsetV: number, heightA: number): number | null {
+  for (let k = peak.index; k < hi; k++) {
+    if (Math.abs(sig.potentialV[k]! - peak.potentialV) < tailOffsetV) continue;
+    const r = corrected(k) / heightA;
+    return Number.isFinite(r) ? r : null;
   }
   return null;
 }
