@@ -28,14 +28,13 @@ function FileRow({ id }: { id: string }) {
   return (
     <li className={`file-row status-${file.status}${selected ? ' selected' : ''}`} data-testid="file-row" data-file-name={file.fileName} data-status={file.status}>
       <div className="file-head">
-        <button type="button" className="file-name" aria-pressed={selected} disabled={!file.measurement} onClick={() => act.selectFile(id)} title={file.fileName}>
+        <button type="button" className="file-name" aria-pressed={selected} disabled={!file.measurement} onClick={() => act.selectFile(id)} title={`${file.fileName} (${bytes(file.sizeBytes)})`}>
           {file.fileName}
         </button>
         <button type="button" className="icon" aria-label={`Remove ${file.fileName}`} title="Remove from the session" onClick={() => act.removeFile(id)}>×</button>
       </div>
       <div className="file-meta">
         <span>{statusText(file, result?.status)}</span>
-        <span>{bytes(file.sizeBytes)}</span>
         {file.measurement?.scanRateVPerS ? (
           <span title={`scan rate taken from ${SOURCE_WORDS[file.measurement.scanRateSource ?? ''] ?? 'unknown source'}`}>
             {Number((file.measurement.scanRateVPerS * 1000).toPrecision(3))} mV/s · {SOURCE_SHORT[file.measurement.scanRateSource ?? ''] ?? '?'}
