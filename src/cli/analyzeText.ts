@@ -28,7 +28,10 @@ function coupleRows(r: AnalyzeRunResult): string[] {
 function seriesLines(c: SeriesCouple): string[] {
   const fit = c.forwardFit;
   const out = [`couple ${c.index}: E½ = ${f(c.eHalfV, 4)} V over ${c.points.length} file(s); ${c.verdict.label}`];
-  if (fit) {
+  const surfaceFit = c.regime === 'surface' ? (c.surface?.fit ?? null) : null;
+  if (surfaceFit) {
+    out.push(`  |ip| vs v: slope ${e(surfaceFit.slope)} A·s/V, intercept ${e(surfaceFit.intercept)} A, R² ${f(surfaceFit.r2, 5)}   k_s = ${e(c.surface?.ksPerS)} 1/s`);
+  } else if (fit) {
     const ci = fit.slopeInterval ? ` (95 % CI ${e(fit.slopeInterval[0])} to ${e(fit.slopeInterval[1])})` : '';
     out.push(`  |ip| vs v^½: slope ${e(fit.slope)} A·(V/s)^-½${ci}, intercept ${e(fit.intercept)} A, R² ${f(fit.r2, 5)}`);
   }

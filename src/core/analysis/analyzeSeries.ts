@@ -15,7 +15,7 @@ import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
 import { electroactiveAreaFromStandard } from '../series';
 import { matchSeriesCouples, median } from './matchSeriesCouples';
 import type { CoupleRef } from './matchSeriesCouples';
-import { classifyCouple } from './seriesClassify';
+import { classifyCouple, mostCommon } from './seriesClassify';
 import { describeSeriesCouple } from './seriesDiagnostics';
 import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
@@ -100,7 +100,10 @@ function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>): Verdic
   if (c.forwardFit) e.sqrtScanRateR2 = c.forwardFit.r2;
   const linear = fitAgainstScanRate(c.points, (p) => p.forwardIpA);
   if (linear) e.scanRateR2 = linear.r2;
-  return refineVerdictWithSeries(first, e);
+  const refined = refineVerdictWithSeries(first, e);
+  if (c.regime !== 'surface' || c.kineticClass !== 'quasi-reversible' || refined.category !== 'adsorbed') return refined;
+  // The slowest file of a slow film looks Nernstian; the series shows the Laviron regime.
+  return { ...refined, label: 'surface-confined (adsorbed; slow electron transfer, Laviron)', reasons: [...refined.reasons, c.diagnostics[0] ?? ''].filter(Boolean) };
 }
 
 function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
@@ -150,7 +153,10 @@ export function analyzeSeries(files: SeriesFileInput[], options: AnalyzeSeriesOp
   const groups = matchSeriesCouples(files.map((f, i) => ({ scanRateVPerS: f.scanRateVPerS, couples: cycles[i]?.couples ?? [] })), o.matchToleranceV);
   const couples = groups.map((g, index) => {
     const points = g.map((ref) => toPoint(ref, files[ref.fileIndex] as SeriesFileInput, cycles[ref.fileIndex] as CycleAnalysis));
-    return buildCouple(index, points, (g[0] as CoupleRef).couple, o);
+    // The series verdict refines the single-trace verdict most files agree on, not the first file's.
+    const majority = mostCommon(g.map((ref) => ref.couple.verdict.category));
+    const representative = g.find((ref) => ref.couple.verdict.category === majority) ?? (g[0] as CoupleRef);
+    return buildCouple(index, points, representative.couple, o);
   });
   warnings.push(...seriesWarnings(files, couples, o));
   return { couples, warnings };

@@ -4,7 +4,7 @@
  * Rules (design; thresholds named with their sources):
  *   - surface when most files call the couple adsorbed, or when over three or more scan rates
  *     log|ip| rises with log v at a slope of 0.85–1.15 (ip ∝ v, Laviron 1974; band: common
- *     practice, no source) — a slow surface couple does not look adsorbed on a single trace;
+ *     practice, no source); its kinetic class from ΔEp against v (surfaceKinetics);
  *   - where most files have a peak pair, the median n·ΔEp (scaled to 25 °C) decides first: above
  *     212 mV (the end of Nicholson's 1965 table) irreversible, above 65 mV (ψ below 5 in the same
  *     table) quasi-reversible; otherwise the single-trace verdicts decide;
@@ -22,7 +22,7 @@ import { median } from './matchSeriesCouples';
 import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from './seriesTypes';
 import type { VerdictCategory } from './types';
 
-function mostCommon(categories: VerdictCategory[]): VerdictCategory {
+export function mostCommon(categories: VerdictCategory[]): VerdictCategory {
   const counts = new Map<VerdictCategory, number>();
   for (const c of categories) counts.set(c, (counts.get(c) ?? 0) + 1);
   let best: VerdictCategory = 'inconclusive';
@@ -40,9 +40,9 @@ export function classifyCouple(
   const majority = mostCommon(points.map((p) => p.verdict));
   const rates = new Set(points.map((p) => p.scanRateVPerS)).size;
   const linearInV = logLogSlope !== null && rates >= 3 && logLogSlope >= 0.85 && logLogSlope <= 1.15;
-  if (majority === 'adsorbed' || linearInV) return { regime: 'surface', kineticClass: 'unknown', majority };
-  const rt = thermalVoltageV(temperatureK);
   const deltas = points.flatMap((p) => (p.deltaEpV === null ? [] : [electronCount * p.deltaEpV * (STANDARD_TEMPERATURE_K / temperatureK)]));
+  if (majority === 'adsorbed' || linearInV) return { regime: 'surface', kineticClass: surfaceKinetics(points, electronCount, temperatureK), majority };
+  const rt = thermalVoltageV(temperatureK);
   const widths = points.flatMap((p) => (p.forwardHalfPeakWidthV === null ? [] : [p.forwardHalfPeakWidthV]));
   // Where most files have a peak pair, the measured separation outranks the single-trace labels.
   if (deltas.length * 2 >= points.length) {
@@ -63,6 +63,23 @@ export function classifyCouple(
     default:
       return { regime: 'diffusion', kineticClass: 'unknown', majority };
   }
+}
+
+/**
+ * Kinetic class of a surface couple from n·ΔEp (25 °C) against scan rate: 'reversible' when it
+ * stays within 1.109·RT/F (28.5 mV, as for a Nernstian layer whose ΔEp is 0, Bard & Faulkner 2nd
+ * ed. §14.3, from memory) at every rate; 'quasi-reversible' (slow electron transfer in Laviron's
+ * sense, J. Electroanal. Chem. 101 (1979) 19) when it exceeds that at the fastest rate and grows
+ * by 20 mV or more from the slowest (margin: common practice, no source); 'unknown' otherwise.
+ */
+export function surfaceKinetics(points: SeriesPoint[], electronCount: number, temperatureK: number): SeriesKineticClass {
+  const byRate = points.filter((p) => p.deltaEpV !== null).sort((a, b) => a.scanRateVPerS - b.scanRateVPerS);
+  if (!byRate.length) return 'unknown';
+  const x = byRate.map((p) => electronCount * p.deltaEpV! * (STANDARD_TEMPERATURE_K / temperatureK));
+  const limit = 1.109 * thermalVoltageV(STANDARD_TEMPERATURE_K);
+  if (x.every((d) => Math.abs(d) <= limit)) return 'reversible';
+  const grows = byRate.length >= 2 && x[x.length - 1]! > limit && x[x.length - 1]! - x[0]! >= 0.02;
+  return grows ? 'quasi-reversible' : 'unknown';
 }
 
 /** α·nₐ from the forward peak's |Ep − Ep/2| (Bard & Faulkner §6.3: 1.857·RT/(α nₐ F)). */

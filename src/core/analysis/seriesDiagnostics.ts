@@ -58,12 +58,27 @@ function describeResults(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOpti
   const s = c.surface;
   if (s) {
     if (s.coverageFromChargeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromChargeMolPerCm2)} mol/cm² from the peak charge`);
-    if (s.coverageFromSlopeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromSlopeMolPerCm2)} mol/cm² from the slope of ip against v (ideal Nernstian film)`);
+    const files = s.coverageFromSlopeFileCount === undefined ? '' : `, ${s.coverageFromSlopeFileCount} file${s.coverageFromSlopeFileCount === 1 ? '' : 's'}`;
+    if (s.coverageFromSlopeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromSlopeMolPerCm2)} mol/cm² from the slope of ip against v (ideal Nernstian film${files})`);
     if (s.ksPerS !== null) out.push(`Laviron k_s = ${sci(s.ksPerS)} 1/s (files with n·ΔEp > 200 mV)`);
   }
   return out;
 }
 
+/** First line: transport regime and kinetics in words; for a surface couple with the ΔEp evidence. */
+function describeRegime(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string {
+  if (c.regime !== 'surface') return `${c.regime}, ${c.kineticClass}`;
+  const pts = c.points.filter((p) => p.deltaEpV !== null).sort((a, b) => a.scanRateVPerS - b.scanRateVPerS);
+  const first = pts[0];
+  const last = pts[pts.length - 1];
+  const n = o.electronCount;
+  if (c.kineticClass === 'quasi-reversible' && first && last) {
+    return `surface, slow electron transfer (Laviron): n·ΔEp grows from ${mv(n * first.deltaEpV!)} at ${first.scanRateVPerS} V/s to ${mv(n * last.deltaEpV!)} at ${last.scanRateVPerS} V/s`;
+  }
+  if (c.kineticClass === 'reversible' && last) return `surface, fast electron transfer: n·ΔEp stays ≤ 28.5 mV up to ${last.scanRateVPerS} V/s`;
+  return 'surface, electron-transfer rate not determined from ΔEp';
+}
+
 export function describeSeriesCouple(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {
-  return [`${c.regime}, ${c.kineticClass}`, ...describeDrift(c), ...describeLines(c), ...describeResults(c, o)];
+  return [describeRegime(c, o), ...describeDrift(c), ...describeLines(c), ...describeResults(c, o)];
 }

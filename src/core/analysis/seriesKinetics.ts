@@ -8,7 +8,7 @@ import { AnalysisError } from '../errors';
 import {
   LAVIRON_MIN_N_DELTA_EP_V, TABLE_RANGE_MV, irreversibleRateConstant, lavironRateConstant, lavironTransferCoefficient, nicholsonPsi, nicholsonRateConstant,
 } from '../kinetics';
-import { STANDARD_TEMPERATURE_K } from '../constants';
+import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import { surfaceCoverageFromCharge, surfaceCoverageFromSlope } from '../series';
 import { median } from './matchSeriesCouples';
 import { fitAgainstScanRate, fitPeakShift } from './seriesFits';
@@ -106,7 +106,12 @@ export function seriesSurface(points: SeriesPoint[], o: ResolvedSeriesOptions): 
     return q === null ? [] : [q];
   });
   const coverageFromChargeMolPerCm2 = cell && charges.length ? median(charges.map((q) => surfaceCoverageFromCharge(q, cell))) : null;
-  const coverageFromSlopeMolPerCm2 = cell && fit ? surfaceCoverageFromSlope(fit.slope, cell, { temperatureK: o.temperatureK }) : null;
+  // ip = n²F²AΓv/4RT holds for a Nernstian film only; slow electron transfer lowers ip (Laviron
+  // 1979), so the slope is taken over the files whose ΔEp is still within 1.109·RT/nF when it can be.
+  const nernstian = points.filter((p) => p.deltaEpV !== null && o.electronCount * Math.abs(p.deltaEpV) <= 1.109 * thermalVoltageV(o.temperatureK));
+  const slopePoints = new Set(nernstian.map((p) => p.scanRateVPerS)).size >= 2 ? nernstian : points;
+  const slopeFit = slopePoints === points ? fit : fitAgainstScanRate(slopePoints, (p) => p.forwardIpA);
+  const coverageFromSlopeMolPerCm2 = cell && slopeFit ? surfaceCoverageFromSlope(slopeFit.slope, cell, { temperatureK: o.temperatureK }) : null;
   const wide = points.filter((p) => p.deltaEpV !== null && o.electronCount * p.deltaEpV > LAVIRON_MIN_N_DELTA_EP_V);
   const anodic = fitPeakShift(wide, 'anodic', o);
   const cathodic = fitPeakShift(wide, 'cathodic', o);
@@ -122,5 +127,5 @@ export function seriesSurface(points: SeriesPoint[], o: ResolvedSeriesOptions): 
       : null,
   }));
   const ks = ksPerFile.flatMap((k) => (k.ksPerS === null ? [] : [k.ksPerS]));
-  return { coverageFromChargeMolPerCm2, coverageFromSlopeMolPerCm2, fit, ksPerS: ks.length ? median(ks) : null, ksPerFile, lavironAlpha };
+  return { coverageFromChargeMolPerCm2, coverageFromSlopeMolPerCm2, coverageFromSlopeFileCount: slopePoints.length, fit, ksPerS: ks.length ? median(ks) : null, ksPerFile, lavironAlpha };
 }

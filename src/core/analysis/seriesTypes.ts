@@ -89,7 +89,12 @@ export interface SeriesRateConstant {
 export interface SeriesSurface {
   coverageFromChargeMolPerCm2: number | null;
   coverageFromSlopeMolPerCm2: number | null;
-  /** |ip| (A) of the forward peak against v (V/s). */
+  /**
+   * Files behind coverageFromSlopeMolPerCm2: those with n·ΔEp ≤ 28.5 mV (Nernstian film, where
+   * ip = n²F²AΓv/4RT holds) when at least two, else all. Added later, hence optional.
+   */
+  coverageFromSlopeFileCount?: number;
+  /** |ip| (A) of the forward peak against v (V/s), all files. */
   fit: FitLineResult | null;
   /** Laviron k_s, median over files with n·ΔEp > 200 mV (1/s). */
   ksPerS: number | null;

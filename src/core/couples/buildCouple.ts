@@ -40,6 +40,8 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
       hasAnodic: a !== null,
       hasCathodic: c !== null,
       overlapping: a?.confidence === 'shoulder' || c?.confidence === 'shoulder',
+      tailFractions: { anodic: a?.tailFraction ?? null, cathodic: c?.tailFraction ?? null },
+      chargeRatio: fwd?.chargeC && ret?.chargeC != null ? ret.chargeC / fwd.chargeC : null,
       returnSweepRecorded: (fwd ?? ret)!.segmentIndex + 1 < sig.segments.length || !(fwd ?? ret)!.onFirstSweep,
     },
     options,

@@ -58,4 +58,16 @@ describe('classifyCouple', () => {
     expect(n2.category).toBe('nernstian');
     expect(n2.evidence.reversibleHalfPeakWidthV).toBeCloseTo((2.2 * u) / 2, 12);
   });
+
+  // Bard & Faulkner 2nd ed. §14.3 (from memory), check-values §7: a surface wave closes after its
+  // peak and returns its charge; a diffusing one keeps ≈ half its current 6RT/nF past Ep.
+  it('closed peaks with equal charges → adsorbed at ΔEp = 150 mV (Laviron label); open tails → sluggish', () => {
+    const wide = { ...base, deltaEpV: 0.15, fwhmV: { anodic: 0.117, cathodic: 0.117 }, chargeRatio: 1.0 };
+    const ads = classifyCouple({ ...wide, tailFractions: { anodic: 0.002, cathodic: 0.003 } });
+    expect(ads.category).toBe('adsorbed');
+    expect(ads.label).toMatch(/slow electron transfer, Laviron/);
+    expect(ads.reasons[0]).toMatch(/no diffusion tail/);
+    expect(classifyCouple({ ...wide, tailFractions: { anodic: 0.5, cathodic: 0.55 } }).category).toBe('sluggish');
+    expect(classifyCouple({ ...wide, tailFractions: { anodic: 0.002, cathodic: 0.003 }, chargeRatio: 0.6 }).category).not.toBe('adsorbed');
+  });
 });

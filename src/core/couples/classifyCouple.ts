@@ -14,7 +14,8 @@
  *   of Nicholson's ψ table, ψ = 0.1) or with one peak only; 'follow-up-loss' when the ratio lies
  *   outside 0.8…1.2 widened by what slow electron transfer alone does to it at the measured ΔEp
  *   (kineticRatioEnvelope.ts: [0.8·low, 1.2·high]); 'adsorbed' when |ΔEp| ≤ 1.109·RT/nF and each measurable FWHM lies within
- *   ±25 % of 3.5255·RT/nF.
+ *   ±25 % of 3.5255·RT/nF; 'adsorbed' also, at any ΔEp, when both peaks close with equal charges
+ *   (surfaceWaveReasons), with the label naming slow (Laviron) electron transfer when ΔEp > 1.109·RT/nF.
  */
 import { thermalVoltageV } from '../constants';
 import type { Verdict, VerdictCategory, VerdictEvidence } from '../analysis/types';
@@ -44,6 +45,10 @@ export interface ClassifyCoupleInput {
   overlapping?: boolean;
   /** False when the lone peak's sweep is never reversed (a single linear sweep). @default true */
   returnSweepRecorded?: boolean;
+  /** Corrected current 6·RT/nF past each Ep over its ip (PeakResult.tailFraction). */
+  tailFractions?: { anodic: number | null; cathodic: number | null };
+  /** Return/forward charge under the corrected peaks. */
+  chargeRatio?: number | null;
 }
 
 export interface ClassifyCoupleOptions {
@@ -99,6 +104,12 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     return verdict('one-way', [`no ${missing} partner peak was found for this wave`], 'irreversible (no return peak)');
   }
   const dEp = input.deltaEpV;
+  const surface = surfaceWaveReasons(input, evidence, u);
+  if (surface) {
+    const slow = dEp > 1.109 * u;
+    const dEpText = `ΔEp = ${mv(dEp)}${slow ? ': electron transfer of the layer is slow at this scan rate (Laviron); k_s follows from ΔEp over a scan-rate series' : ': close to 0, as for a fast adsorbed couple'}`;
+    return verdict('adsorbed', [...surface, dEpText], slow ? 'surface-confined (adsorbed; slow electron transfer, Laviron)' : VERDICT_LABELS.adsorbed);
+  }
   const expected = atSwitch ?? evidence.reversibleDeltaEpLimitV;
   const expectText = atSwitch === null ? `2.218RT/nF = ${mv(expected)}` : `${mv(expected)} expected for a reversible couple at this switching potential (2.218RT/nF = ${mv(evidence.reversibleDeltaEpLimitV)})`;
   const dEpReason = `ΔEp = ${mv(dEp)} against ${expectText}`;
@@ -131,6 +142,30 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     ...widthReasons,
     'uncompensated resistance widens ΔEp in the same way; correct for iR drop or check that ΔEp grows with scan rate before reading this as slow kinetics',
   ]);
+}
+
+/**
+ * Evidence of a surface-confined wave whatever its ΔEp: both peaks fall back to their baselines
+ * (tail ≤ 0.15 of ip 6RT/nF past Ep, where a diffusing species keeps ≈ 0.5; simulated in
+ * classifyCouple.surface.test.ts), equal charges (0.85…1.15), and no peak narrower than 0.75 of
+ * the ideal 3.53RT/nF (Laviron kinetics only broaden it; Laviron, J. Electroanal. Chem. 101
+ * (1979) 19, from memory). Thresholds: common practice, no source. Null when any test fails.
+ */
+function surfaceWaveReasons(input: ClassifyCoupleInput, e: VerdictEvidence, u: number): string[] | null {
+  const tails = input.tailFractions;
+  if (!tails || tails.anodic == null || tails.cathodic == null) return null;
+  if (Math.max(Math.abs(tails.anodic), Math.abs(tails.cathodic)) > 0.15) return null;
+  const q = input.chargeRatio ?? null;
+  if (q !== null && (q < 0.85 || q > 1.15)) return null;
+  const widths = [input.fwhmV.anodic, input.fwhmV.cathodic].filter((w): w is number => w !== null);
+  if (widths.some((w) => w < 0.75 * e.adsorbedFwhmV)) return null;
+  const reasons = [`both peaks fall back to their baselines: ${(100 * tails.anodic).toFixed(1)} % (anodic) and ${(100 * tails.cathodic).toFixed(1)} % (cathodic) of ip at ${mv(6 * u)} past Ep, where a diffusing species still carries about half — no diffusion tail`];
+  if (q !== null) reasons.push(`return/forward charge = ${q.toFixed(3)}: what the forward sweep converts comes back (1 for a surface-confined couple)`);
+  for (const side of ['anodic', 'cathodic'] as const) {
+    const w = input.fwhmV[side];
+    if (w !== null) reasons.push(`${side} FWHM = ${mv(w)} (ideal adsorbed layer 3.53RT/nF = ${mv(e.adsorbedFwhmV)}; slow electron transfer broadens it)`);
+  }
+  return reasons;
 }
 
 /**
