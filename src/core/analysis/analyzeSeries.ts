@@ -9,13 +9,13 @@
  * Sources: in the methods called (series/, kinetics/, regression/); the couple matching and the
  *   class rules are design choices documented in matchSeriesCouples.ts and seriesClassify.ts.
  */
-import { STANDARD_TEMPERATURE_K } from '../constants';
+import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import { AnalysisError, assertFiniteInRange } from '../errors';
 import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
 import { electroactiveAreaFromStandard } from '../series';
 import { matchSeriesCouples, median } from './matchSeriesCouples';
 import type { CoupleRef } from './matchSeriesCouples';
-import { classifyCouple, mostCommon } from './seriesClassify';
+import { classifyCouple, mostCommon, suggestedElectronCount } from './seriesClassify';
 import { describeSeriesCouple } from './seriesDiagnostics';
 import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
@@ -179,6 +179,10 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
     }
     if (c.rateConstant && c.rateConstant.k0CmPerS === null && c.kineticClass !== 'reversible') {
       out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: k° not determinable (${c.rateConstant.perFile.find((f) => f.reason)?.reason ?? 'no D available'})` });
+    }
+    const hint = c.regime === 'diffusion' ? suggestedElectronCount(c.points, o.electronCount, o.temperatureK) : null;
+    if (hint) {
+      out.push({ code: 'ELECTRON_COUNT', couple: c.index, message: `couple ${c.index}: forward |Ep − Ep/2| = ${(hint.halfPeakWidthV * 1000).toFixed(1)} mV is narrower than any diffusing couple with n = ${o.electronCount} (2.20RT/nF = ${((2.2 * thermalVoltageV(o.temperatureK) * 1000) / o.electronCount).toFixed(1)} mV) and reads as n ≈ ${hint.electronCount}; D (∝ n⁻³) and k° assume n = ${o.electronCount} — rerun with n = ${hint.electronCount} if that is the couple's electron count` });
     }
     if (c.regime === 'diffusion' && c.forwardFit && c.forwardFit.pointCount >= 3 && c.forwardFit.r2 < 0.98) {
       out.push({ code: 'NONLINEAR', couple: c.index, message: `couple ${c.index}: ip against v^½ is not straight (R² = ${c.forwardFit.r2.toFixed(3)})` });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { thermalVoltageV } from '../constants';
-import { alphaFromHalfPeakWidth, chooseIrreversibleAlpha, classifyCouple } from './seriesClassify';
+import { alphaFromHalfPeakWidth, chooseIrreversibleAlpha, classifyCouple, suggestedElectronCount, surfaceKinetics } from './seriesClassify';
 import type { SeriesPoint } from './seriesTypes';
 
 function point(over: Partial<SeriesPoint>): SeriesPoint {
@@ -49,5 +49,24 @@ describe('classifyCouple, peak separation first', () => {
     expect(classifyCouple(pts, 1, 298.15).kineticClass).toBe('quasi-reversible');
     const rev = [0.1, 0.2].map((s) => point({ scanRateVPerS: s, verdict: 'follow-up-loss', deltaEpV: 0.059 }));
     expect(classifyCouple(rev, 1, 298.15).kineticClass).toBe('reversible');
+  });
+});
+
+// Nicholson & Shain, Anal. Chem. 36 (1964) 706; check-values §3: reversible |Ep − Ep/2| =
+// 2.20RT/nF = 56.5/n mV is the narrowest a diffusion wave gets.
+describe('suggestedElectronCount', () => {
+  it('a 28.3 mV forward half-peak width with n = 1 assumed reads as n = 2; 56.5 mV or wider gives nothing', () => {
+    const rt = thermalVoltageV(298.15);
+    expect(suggestedElectronCount([point({ forwardHalfPeakWidthV: 1.1 * rt })], 1, 298.15)).toEqual({ electronCount: 2, halfPeakWidthV: 1.1 * rt });
+    expect(suggestedElectronCount([point({ forwardHalfPeakWidthV: 2.2 * rt })], 1, 298.15)).toBeNull();
+    expect(suggestedElectronCount([point({ forwardHalfPeakWidthV: 1.1 * rt })], 2, 298.15)).toBeNull();
+  });
+});
+
+// Bard & Faulkner 2nd ed. §14.3 (ΔEp = 0 for a Nernstian layer) and Laviron 1979 (ΔEp grows with v).
+describe('surfaceKinetics', () => {
+  it('ΔEp ≤ 28.5 mV throughout → reversible; growing from 10 to 280 mV → quasi-reversible', () => {
+    expect(surfaceKinetics([point({ deltaEpV: 0.005 }), point({ scanRateVPerS: 1, deltaEpV: 0.02 })], 1, 298.15)).toBe('reversible');
+    expect(surfaceKinetics([point({ deltaEpV: 0.01 }), point({ scanRateVPerS: 20, deltaEpV: 0.28 })], 1, 298.15)).toBe('quasi-reversible');
   });
 });

@@ -104,3 +104,20 @@ export function chooseIrreversibleAlpha(
   }
   return { alpha: 0.5, source: 'assumed 0.5 (no usable measurement)' };
 }
+
+/**
+ * n suggested by the forward peaks' |Ep − Ep/2| when they are narrower than a diffusing couple
+ * can be for the assumed n: the reversible 2.20·RT/nF (Nicholson & Shain, Anal. Chem. 36 (1964)
+ * 706; Bard & Faulkner 2nd ed. §6.2, from memory) is the narrowest a diffusion wave gets, since
+ * slow kinetics only widen it. Below 0.75 of it (margin: common practice, no source) the median
+ * width reads as n = round(2.20·RT/(F·width)); null when the widths fit the assumed n.
+ */
+export function suggestedElectronCount(points: SeriesPoint[], electronCount: number, temperatureK: number): { electronCount: number; halfPeakWidthV: number } | null {
+  const widths = points.flatMap((p) => (p.forwardHalfPeakWidthV === null ? [] : [p.forwardHalfPeakWidthV]));
+  if (!widths.length) return null;
+  const w = median(widths);
+  const reversible = 2.2 * thermalVoltageV(temperatureK);
+  if (!(w > 0) || w >= (0.75 * reversible) / electronCount) return null;
+  const n = Math.round(reversible / w);
+  return n > electronCount ? { electronCount: n, halfPeakWidthV: w } : null;
+}

@@ -35,9 +35,13 @@ function returnRatio(p: SeriesPoint, forward: PeakDirection): number {
   return f && r ? r / f : 0;
 }
 
-function fileRateConstant(p: SeriesPoint, forward: PeakDirection, dO: number, dR: number, alphaMeasured: number | null, o: ResolvedSeriesOptions): PerFile {
+function fileRateConstant(p: SeriesPoint, forward: PeakDirection, dO: number, dR: number, alphaMeasured: number | null, o: ResolvedSeriesOptions, chemical: boolean): PerFile {
   const none = { fileIndex: p.fileIndex, k0CmPerS: null, method: null, psi: null };
   if (p.deltaEpV === null || p.epaV === null || p.epcV === null) return { ...none, reason: 'no peak pair, so no ΔEp' };
+  if (p.verdict === 'follow-up-loss' || chemical) {
+    const which = p.verdict === 'follow-up-loss' ? 'this file' : 'most files of the series';
+    return { ...none, reason: `a follow-up reaction consumes the product (${which}) and moves the return peak, so ΔEp is not a measure of electron-transfer kinetics (Nicholson & Shain 1964)` };
+  }
   if (p.verdict === 'one-way' && returnRatio(p, forward) < 0.5) {
     return { ...none, reason: 'the return peak is under half the forward one (one-way couple), so ΔEp is not a kinetic measure' };
   }
@@ -77,7 +81,8 @@ export function seriesRateConstant(
     return { k0CmPerS: null, perFile: [], lowerBoundCmPerS: null, diffusionOxCm2PerS: null, diffusionSource: null };
   }
   const { dO, dR } = diffusionPair(dBulk, forward, o.diffusionRatio);
-  const perFile = points.map((p) => fileRateConstant(p, forward, dO, dR, alphaMeasured, o));
+  const chemical = points.filter((p) => p.verdict === 'follow-up-loss').length * 2 > points.length;
+  const perFile = points.map((p) => fileRateConstant(p, forward, dO, dR, alphaMeasured, o, chemical));
   // A couple that reads as reversible at most scan rates: a ΔEp a few mV past 61 mV in one file is
   // within measurement scatter, and ψ is steep there, so such stray values give no k°.
   const determinable = perFile.filter((f) => f.k0CmPerS !== null).length;
