@@ -70,6 +70,10 @@ function seriesEntry(c: SeriesCouple) {
     gammaFromSlope: num(c.surface?.coverageFromSlopeMolPerCm2),
     ks: num(c.surface?.ksPerS),
     electroactiveArea: num(c.electroactiveAreaCm2),
+    kf: num(c.followUp?.rateConstantPerS ?? null),
+    kfPerFile: (c.followUp?.perFile ?? []).map((k) => ({
+      file: c.points.find((p) => p.fileIndex === k.fileIndex)?.fileName ?? null, kf: num(k.rateConstantPerS), reason: k.reason,
+    })),
     diagnostics: c.diagnostics,
   };
 }

@@ -36,6 +36,7 @@ function seriesLines(c: SeriesCouple): string[] {
     out.push(`  |ip| vs v^½: slope ${e(fit.slope)} A·(V/s)^-½${ci}, intercept ${e(fit.intercept)} A, R² ${f(fit.r2, 5)}`);
   }
   out.push(`  D = ${e(c.diffusion?.diffusionCm2PerS)} cm²/s   log–log slope = ${f(c.logLog?.slope, 3)}   k° = ${e(c.rateConstant?.k0CmPerS)} cm/s   Γ = ${e(c.surface?.coverageFromChargeMolPerCm2 ?? c.surface?.coverageFromSlopeMolPerCm2)} mol/cm²`);
+  if (c.followUp) out.push(`  k_f = ${e(c.followUp.rateConstantPerS)} 1/s (follow-up reaction)`);
   for (const d of c.diagnostics) out.push(`  · ${d}`);
   return out;
 }

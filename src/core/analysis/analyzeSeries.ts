@@ -19,7 +19,7 @@ import { classifyCouple, mostCommon, suggestedElectronCount } from './seriesClas
 import { describeSeriesCouple } from './seriesDiagnostics';
 import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
-import { seriesRateConstant, seriesSurface } from './seriesKinetics';
+import { seriesFollowUp, seriesRateConstant, seriesSurface } from './seriesKinetics';
 import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesPoint, SeriesWarning } from './seriesTypes';
 import type { CycleAnalysis, SeriesEvidence, Verdict } from './types';
 
@@ -78,6 +78,8 @@ function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): S
     forwardHalfPeakWidthV: fwd?.halfPeakWidthV ?? null,
     forwardChargeC: fwd?.chargeC ?? null,
     verdict: c.verdict.category,
+    nicholsonRatio: c.nicholsonRatio,
+    switchPotentialV: c.switchPotentialV ?? null,
   };
 }
 
@@ -109,7 +111,7 @@ function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>): Verdic
 function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
   const forward = first.forwardDirection;
   const logLog = fitLogLog(points);
-  const { regime, kineticClass } = classifyCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
+  const { regime, kineticClass, majority } = classifyCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
   const forwardFit = fitForwardAgainstSqrtScanRate(points);
   const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
   const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
@@ -124,6 +126,7 @@ function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['cou
     points,
     regime,
     kineticClass,
+    followUp: regime === 'diffusion' && majority === 'follow-up-loss' ? seriesFollowUp(points, o) : null,
     forwardFit,
     anodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipaA),
     cathodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipcA),

@@ -55,6 +55,13 @@ function describeResults(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOpti
   } else if (k?.lowerBoundCmPerS != null) {
     out.push(`ΔEp stays near the reversible value (below the 61 mV start of Nicholson's table) at most scan rates: k° > ${sci(k.lowerBoundCmPerS, 2)} cm/s`);
   }
+  const fu = c.followUp;
+  if (fu?.rateConstantPerS != null) {
+    const used = fu.perFile.filter((f) => f.rateConstantPerS !== null).length;
+    out.push(`k_f = ${sci(fu.rateConstantPerS)} 1/s (first-order follow-up reaction, from the return/forward ratio (Nicholson 1966) on a simulated Nicholson–Shain working curve; median of ${used} file${used > 1 ? 's' : ''}; assumes fast electron transfer)`);
+  } else if (fu) {
+    out.push(`k_f not determinable: ${fu.perFile.find((f) => f.reason)?.reason ?? 'no usable ratio'}`);
+  }
   const s = c.surface;
   if (s) {
     if (s.coverageFromChargeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromChargeMolPerCm2)} mol/cm² from the peak charge`);

@@ -6,14 +6,14 @@
  */
 import { AnalysisError } from '../errors';
 import {
-  LAVIRON_MIN_N_DELTA_EP_V, TABLE_RANGE_MV, irreversibleRateConstant, lavironRateConstant, lavironTransferCoefficient, nicholsonPsi, nicholsonRateConstant,
+  LAVIRON_MIN_N_DELTA_EP_V, TABLE_RANGE_MV, followUpRateConstant, irreversibleRateConstant, lavironRateConstant, lavironTransferCoefficient, nicholsonPsi, nicholsonRateConstant,
 } from '../kinetics';
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import { surfaceCoverageFromCharge, surfaceCoverageFromSlope } from '../series';
 import { median } from './matchSeriesCouples';
 import { fitAgainstScanRate, fitPeakShift } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
-import type { SeriesDiffusion, SeriesPoint, SeriesRateConstant, SeriesSurface } from './seriesTypes';
+import type { SeriesDiffusion, SeriesFollowUp, SeriesPoint, SeriesRateConstant, SeriesSurface } from './seriesTypes';
 import type { PeakDirection } from './types';
 
 function reasonOf(err: unknown): string {
@@ -133,4 +133,26 @@ export function seriesSurface(points: SeriesPoint[], o: ResolvedSeriesOptions): 
   }));
   const ks = ksPerFile.flatMap((k) => (k.ksPerS === null ? [] : [k.ksPerS]));
   return { coverageFromChargeMolPerCm2, coverageFromSlopeMolPerCm2, coverageFromSlopeFileCount: slopePoints.length, fit, ksPerS: ks.length ? median(ks) : null, ksPerFile, lavironAlpha };
+}
+
+/** k_f per file from its Nicholson (1966) ratio and switching distance (followUpRateConstant.ts), and the median. */
+export function seriesFollowUp(points: SeriesPoint[], o: ResolvedSeriesOptions): SeriesFollowUp {
+  const perFile = points.map((p) => {
+    const none = { fileIndex: p.fileIndex, rateConstantPerS: null, lambda: null };
+    const ratio = p.nicholsonRatio ?? null;
+    const eSwitch = p.switchPotentialV ?? null;
+    if (ratio === null || eSwitch === null || p.eHalfV === null) return { ...none, reason: 'no return peak next to the switch, so no Nicholson ratio' };
+    if (ratio >= 1) return { ...none, reason: `ratio ${ratio.toFixed(3)} ≥ 1: nothing is consumed` };
+    try {
+      const r = followUpRateConstant(
+        { ratio, switchPastHalfWaveV: Math.abs(eSwitch - p.eHalfV), scanRateVPerS: p.scanRateVPerS },
+        { electronCount: o.electronCount, temperatureK: o.temperatureK },
+      );
+      return { fileIndex: p.fileIndex, rateConstantPerS: r.rateConstantPerS, lambda: r.lambda, reason: r.reason };
+    } catch (err) {
+      return { ...none, reason: reasonOf(err) };
+    }
+  });
+  const ks = perFile.flatMap((f) => (f.rateConstantPerS === null ? [] : [f.rateConstantPerS]));
+  return { rateConstantPerS: ks.length ? median(ks) : null, perFile };
 }

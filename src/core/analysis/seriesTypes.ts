@@ -51,6 +51,16 @@ export interface SeriesPoint extends Pick<CoupleResult, 'epaV' | 'epcV' | 'eHalf
   /** Charge under the forward peak (C). */
   forwardChargeC: number | null;
   verdict: VerdictCategory;
+  /** Nicholson (1966) ratio and the switch potential (V) of the file's couple; added later. */
+  nicholsonRatio?: number | null;
+  switchPotentialV?: number | null;
+}
+
+/** First-order follow-up reaction of an EC couple (followUpRateConstant.ts). */
+export interface SeriesFollowUp {
+  /** Median k_f over the files where it was determinable (1/s). */
+  rateConstantPerS: number | null;
+  perFile: Array<{ fileIndex: number; rateConstantPerS: number | null; lambda: number | null; reason: string | null }>;
 }
 
 /** Transport regime and kinetic class the series settles on for a couple. */
@@ -112,6 +122,8 @@ export interface SeriesCouple {
   points: SeriesPoint[];
   regime: SeriesRegime;
   kineticClass: SeriesKineticClass;
+  /** k_f of a follow-up reaction, when most files show one; added later, hence optional. */
+  followUp?: SeriesFollowUp | null;
   /** Forward-peak |ip| (A) against v^½ ((V/s)^½): the contract's slope/intercept/r2. */
   forwardFit: FitLineResult | null;
   anodicFit: FitLineResult | null;

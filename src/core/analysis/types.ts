@@ -179,6 +179,11 @@ export interface CoupleResult {
   ratio: number | null;
   /** Nicholson (1966) empirical return/forward ratio from the current at the switch. */
   nicholsonRatio: number | null;
+  /**
+   * Potential of the switch between the couple's forward and return sweeps (V), when its peaks lie
+   * on consecutive sweeps. Added later, hence optional; always set by analyzeVoltammogram.
+   */
+  switchPotentialV?: number | null;
   /** Direction of the forward (first-sweep) peak. */
   forwardDirection: PeakDirection;
   /** Indices into the cycle's `peaks`. */

@@ -17,7 +17,7 @@ describe('return-peak baseline of a surface-confined film with double-layer char
     ['Nernstian, switch only 0.2 V past E°′', { surfaceRatePerS: 1000, scanRateVPerS: 0.1, startV: -0.4, switchV: 0.2 }],
     ['k_s = 25 s⁻¹ at 1 V/s, −0.3 → 0.5 V', { surfaceRatePerS: 25, scanRateVPerS: 1, startV: -0.3, switchV: 0.5 }],
     ['k_s = 25 s⁻¹ at 5 V/s (Laviron, ΔEp ≈ 150 mV)', { surfaceRatePerS: 25, scanRateVPerS: 5, startV: -0.5, switchV: 0.5 }],
-  ])('%s: anodic and cathodic charge within 3 %% of nFAΓ', (_, run) => {
+  ])('%s: anodic and cathodic charge within 3 per cent of nFAΓ', (_, run) => {
     const q = F * A * gamma;
     const a = analyzeVoltammogram(simulatedVoltammogram({ ...film, ...run }, { noiseA: 2e-9, seed: 11 }));
     const c = a.cycles[0]!.couples[0]!;

@@ -55,6 +55,7 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
     ipcA: c?.heightA ?? null,
     ratio,
     nicholsonRatio: flanksSwitch ? empiricalRatio(sig, fwd, ret, vertex) : null,
+    switchPotentialV: consecutive ? sig.potentialV[vertex]! : null,
     forwardDirection,
     anodicPeak: pair.anodic,
     cathodicPeak: pair.cathodic,
@@ -66,12 +67,25 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
   };
 }
 
-/** Nicholson (1966): return peak and switching current from zero, signed along each sweep. */
+/**
+ * Nicholson (1966): return peak and switching current from zero, signed along each sweep. The
+ * formula wants faradaic currents; the double-layer charging current i_c flips sign at the switch
+ * (Bard & Faulkner 2nd ed. §1.2, from memory), so half the current step across the switch (mean
+ * of three points on each side) is taken off both (our correction; 0 without charging).
+ */
 function empiricalRatio(sig: SweepSignals, fwd: PeakResult, ret: PeakResult, vertex: number): number {
   const sFwd = fwd.direction === 'anodic' ? 1 : -1;
+  const rStart = sig.segments[ret.segmentIndex]!.start;
+  const mean = (from: number, to: number) => {
+    let sum = 0;
+    for (let k = from; k < to; k++) sum += sig.currentA[k]!;
+    return sum / (to - from);
+  };
+  const after = Math.max(rStart, vertex + 1);
+  const chargingA = after + 3 <= sig.currentA.length ? (sFwd * (mean(vertex - 2, vertex + 1) - mean(after, after + 3))) / 2 : 0;
   return nicholsonPeakRatio({
     forwardPeakA: fwd.heightA,
-    returnPeakFromZeroA: -sFwd * ret.rawCurrentA,
-    switchingCurrentFromZeroA: sFwd * sig.currentA[vertex]!,
+    returnPeakFromZeroA: -sFwd * ret.rawCurrentA - chargingA,
+    switchingCurrentFromZeroA: sFwd * sig.currentA[vertex]! - chargingA,
   });
 }

@@ -4,3 +4,4 @@ export * from './nicholsonRateConstant';
 export * from './lavironRateConstant';
 export * from './irreversibleRateConstant';
 export * from './kineticPeakCurrentRatio';
+export * from './followUpRateConstant';
