@@ -5,17 +5,19 @@
  */
 import type { Voltammogram } from '../core/types';
 import { CancelledError } from '../worker/errors';
+import { cellOfFile, resolveCell, type CellField } from './seriesCell';
 import { defaultSettings, emptyFileSettings, toAnalyzeOptions } from './settings';
 import { toUserError, type AnalysisSlice, type HistorySnapshot, type SliceCreator } from './types';
 
 const HISTORY_LIMIT = 100;
+const TRACE_FIELDS: readonly CellField[] = ['electronCount', 'temperatureC', 'resistanceOhm'];
 
 export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps) => {
   const running = new Map<string, AbortController>();
 
   function record(): void {
-    const { settings, fileSettings } = get();
-    const snapshot: HistorySnapshot = { settings, fileSettings };
+    const { settings, fileSettings, seriesCells } = get();
+    const snapshot: HistorySnapshot = { settings, fileSettings, seriesCells };
     set((s) => ({ past: [...s.past, snapshot].slice(-HISTORY_LIMIT), future: [] }));
   }
 
@@ -23,6 +25,7 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
     settings: defaultSettings,
     fileSettings: {},
     results: {},
+    seriesCells: {},
 
     async analyzeFile(id) {
       const m = get().files[id]?.measurement;
@@ -36,9 +39,9 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
         potentialV: m.potentialV, currentA: m.currentA, timeS: m.timeS, segments: m.segments, cycles: m.cycles,
         scanRateVPerS: m.scanRateVPerS, scanRateSource: m.scanRateSource,
       };
-      const { settings } = get();
-      const options = toAnalyzeOptions(settings, get().fileSettings[id] ?? emptyFileSettings);
-      const resistanceOhm = settings.chemistry.resistanceOhm;
+      const cell = cellOfFile(get(), id);
+      const options = toAnalyzeOptions(get().settings, get().fileSettings[id] ?? emptyFileSettings, cell);
+      const resistanceOhm = cell.resistanceOhm;
       try {
         const out = await deps.client.request('analyze', { voltammogram, options, resistanceOhm }, { signal: ctrl.signal });
         set((s) => ({ results: { ...s.results, [id]: { status: 'ready', ...out, error: null } } }));
@@ -69,6 +72,21 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       record();
       set((s) => ({ fileSettings: { ...s.fileSettings, [id]: change(s.fileSettings[id] ?? emptyFileSettings) } }));
       return get().analyzeFile(id);
+    },
+
+    async updateSeriesCell(group, change) {
+      record();
+      const before = resolveCell(get(), group).cell;
+      set((s) => ({ seriesCells: { ...s.seriesCells, [group]: change(s.seriesCells[group] ?? {}) } }));
+      const after = resolveCell(get(), group).cell;
+      // n, T and Ru change each trace's analysis; area, concentration and α only the series fits.
+      if (TRACE_FIELDS.every((k) => before[k] === after[k])) return get().analyzeGroup(group);
+      const { fileOrder, files } = get();
+      await Promise.all(fileOrder.filter((id) => files[id]?.group === group).map((id) => get().analyzeFile(id)));
+    },
+
+    seedSeriesCell(group, values) {
+      set((s) => ({ seriesCells: { ...s.seriesCells, [group]: { ...values, ...s.seriesCells[group] } } }));
     },
   };
 };

@@ -3,7 +3,7 @@
  * loaded at start. The UI imports only this module and `react.ts`.
  */
 import { spawnAnalysisClient } from '../worker/spawn';
-import { loadDemoInputs } from './demo';
+import { DEMO_SERIES_CELLS, loadDemoInputs } from './demo';
 import { attachAutosave, restoreAutosave } from './sessionActions';
 import { defaultStorageAdapter } from './storage';
 import { createHalfwaveStore } from './store';
@@ -31,6 +31,11 @@ export async function startApp(store: HalfwaveStore = getAppStore(), storage = d
   }
   // The well-behaved probe couple first, so the first trace on screen is the easiest to read.
   const ordered = [...groups].sort(([a], [b]) => Number(b.startsWith('probe')) - Number(a.startsWith('probe')));
+  // Each series' electrode and solution, unless a restored session already gave them.
+  for (const [group] of ordered) {
+    const cell = DEMO_SERIES_CELLS[group];
+    if (cell) store.getState().seedSeriesCell(group, cell);
+  }
   await Promise.all(ordered.map(([group, inputs]) => store.getState().addFiles(inputs, group)));
   store.setState({ notice: `${demo.length} demo voltammograms loaded: simulated by Halfwave in ${groups.size} scan-rate series, not measurements.` });
 }

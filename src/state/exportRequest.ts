@@ -1,12 +1,13 @@
 /**
  * Builds the worker's export request for one scan-rate group from the store: each file's columns,
  * provenance (size, SHA-256, detected layout, import warnings) and own windows, plus the run
- * options from the Cell and Method settings and the display choices (scale, sign convention).
+ * options from the series' cell and the Method settings and the display choices (scale, sign convention).
  */
 import type { AnalyzeRunOptions, RunInput } from '../core/analysis/runTypes';
 import type { ImportDetection } from '../io/types';
 import type { ExportRunInput } from '../worker/exportRun';
 import { displayScale } from './display';
+import { resolveCell } from './seriesCell';
 import { celsiusToKelvin, emptyFileSettings, millimolarToMolPerCm3 } from './settings';
 import type { HalfwaveState } from './types';
 
@@ -27,8 +28,10 @@ export function describeLayout(d: ImportDetection): string {
   ].join(', ');
 }
 
-export function runOptions(state: HalfwaveState): AnalyzeRunOptions {
-  const { chemistry: c, reference: r } = state.settings;
+/** Run options of one group: its own cell (n, A, C, T, α, Ru, recording scale), the global display scale. */
+export function runOptions(state: HalfwaveState, group: string): AnalyzeRunOptions {
+  const c = resolveCell(state, group).cell;
+  const r = { ...c, displayReference: state.settings.reference.displayReference };
   const options: AnalyzeRunOptions = {
     electronCount: c.electronCount, areaCm2: c.areaCm2, concentrationMolPerCm3: millimolarToMolPerCm3(c.concentrationMM),
     temperatureK: celsiusToKelvin(c.temperatureC), alpha: c.alpha, ruOhm: c.resistanceOhm, cycle: 1,
@@ -62,8 +65,8 @@ export function exportRequest(state: HalfwaveState, group: string, format: 'csv'
   return {
     files,
     perFile: ids.map((id) => state.fileSettings[id] ?? emptyFileSettings),
-    options: runOptions(state),
-    offsetV: displayScale(state.settings).offsetV,
+    options: runOptions(state, group),
+    offsetV: displayScale(state.settings, resolveCell(state, group).cell).offsetV,
     format,
     meta: { createdAt, command: `Halfwave workbench export of series "${group}"` },
   };

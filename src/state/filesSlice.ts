@@ -135,6 +135,8 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       patch(id, { group: after });
       if (before) get().scheduleGroup(before);
       get().scheduleGroup(after);
+      // The file now takes its new series' cell (n, T, Ru), so its own analysis runs again too.
+      void get().analyzeFile(id);
     },
   };
 };

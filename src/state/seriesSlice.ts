@@ -6,6 +6,7 @@
 import type { SeriesFileInput } from '../core/analysis/seriesTypes';
 import { CancelledError } from '../worker/errors';
 import { exportRequest } from './exportRequest';
+import { resolveCell } from './seriesCell';
 import { celsiusToKelvin, millimolarToMolPerCm3 } from './settings';
 import { toUserError, type SeriesSlice, type SliceCreator } from './types';
 
@@ -27,7 +28,7 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
     },
 
     async analyzeGroup(group) {
-      const { fileOrder, files, results, settings } = get();
+      const { fileOrder, files, results } = get();
       const ids = fileOrder.filter((id) => files[id]?.group === group && results[id]?.analysis);
       const inputs: SeriesFileInput[] = [];
       const used: string[] = [];
@@ -43,7 +44,7 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
       const ctrl = new AbortController();
       running.set(group, ctrl);
       set((s) => ({ series: { ...s.series, [group]: { status: 'running', result: s.series[group]?.result ?? null, error: null, fileIds: used } } }));
-      const c = settings.chemistry;
+      const c = resolveCell(get(), group).cell;
       try {
         const result = await deps.client.request('series', {
           files: inputs,

@@ -1,10 +1,12 @@
 /**
  * Session save/restore and autosave. A session names every file with its SHA-256, so when the
  * same bytes are loaded again (dropped by the user, or from raw data inside the session) they get
- * back their group, import overrides and per-file analysis settings.
+ * back their group, import overrides and per-file analysis settings. Per-series cell values are
+ * saved inside `settings.seriesCells`; a session written before cells belonged to series has none,
+ * and its global cell values become the defaults every series falls back to.
  */
 import { decodeBase64, encodeBase64, parseSession, serializeSession, type SessionDocument, type SessionFileRecord } from '../io/session';
-import { mergeSettings } from './settings';
+import { mergeSeriesCells, mergeSettings } from './settings';
 import type { StorageAdapter } from './storage';
 import type { HalfwaveState, HalfwaveStore } from './types';
 
@@ -24,7 +26,7 @@ export async function buildSessionDocument(state: HalfwaveState, includeRawData:
   }
   return {
     format: 'halfwave-session', version: 1, savedAt: now.toISOString(),
-    settings: { ...state.settings },
+    settings: { ...state.settings, seriesCells: state.seriesCells },
     view: { convention: state.convention, showSmoothed: state.showSmoothed, showBaselines: state.showBaselines },
     files,
   };
@@ -45,6 +47,7 @@ export async function loadSessionText(store: HalfwaveStore, text: string): Promi
   const view = doc.view;
   store.setState({
     settings: mergeSettings(s.settings, doc.settings),
+    seriesCells: { ...s.seriesCells, ...mergeSeriesCells(doc.settings.seriesCells) },
     convention: view.convention === 'polarographic' ? 'polarographic' : 'iupac',
     showSmoothed: view.showSmoothed === true,
     showBaselines: view.showBaselines !== false,
@@ -77,7 +80,7 @@ export async function restoreAutosave(store: HalfwaveStore, storage: StorageAdap
 export function attachAutosave(store: HalfwaveStore, storage: StorageAdapter, delayMs = 800): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
   const unsubscribe = store.subscribe((now, before) => {
-    const changed = now.settings !== before.settings || now.fileSettings !== before.fileSettings
+    const changed = now.settings !== before.settings || now.fileSettings !== before.fileSettings || now.seriesCells !== before.seriesCells
       || now.files !== before.files || now.convention !== before.convention
       || now.showSmoothed !== before.showSmoothed || now.showBaselines !== before.showBaselines;
     if (!changed) return;

@@ -5,7 +5,9 @@
  */
 import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
 import type { AnalyzeVoltammogramOptions, BaselineMethod, BaselineSpec, PeakWindow, SmoothingSetting } from '../core/analysis/types';
+import type { SeriesCell } from './seriesCell';
 
+/** App-wide cell defaults: a series without its own value, and without one in its files, uses these. */
 export interface ChemistrySettings {
   /** Electrons per molecule, n. */
   electronCount: number;
@@ -22,9 +24,9 @@ export interface ChemistrySettings {
 }
 
 export interface ReferenceSettings {
-  /** Reference electrode the files were recorded against (id of the electrode table). */
+  /** Default reference electrode the files were recorded against (each series may have its own). */
   fileReference: ReferenceId;
-  /** Scale on which potentials are shown and exported. */
+  /** Scale on which potentials are shown and exported (global, for every series). */
   displayReference: ReferenceId;
   /** Electrolyte pH, for the RHE scale. */
   pH: number;
@@ -70,10 +72,11 @@ export function millimolarToMolPerCm3(concentrationMM: number): number {
   return concentrationMM * 1e-6;
 }
 
-export function toAnalyzeOptions(settings: AnalysisSettings, file: FileAnalysisSettings): AnalyzeVoltammogramOptions {
+/** Options of one file's analysis: method settings, the file's windows, its series' n and T. */
+export function toAnalyzeOptions(settings: AnalysisSettings, file: FileAnalysisSettings, cell: SeriesCell): AnalyzeVoltammogramOptions {
   return {
-    temperatureK: celsiusToKelvin(settings.chemistry.temperatureC),
-    electronCount: settings.chemistry.electronCount,
+    temperatureK: celsiusToKelvin(cell.temperatureC),
+    electronCount: cell.electronCount,
     smoothing: settings.smoothing,
     currentConvention: 'iupac',
     peakWindows: file.peakWindows,
@@ -112,6 +115,27 @@ export function mergeSettings(base: AnalysisSettings, stored: unknown): Analysis
       ferroceneHalfWaveV: ref.ferroceneHalfWaveV === null ? null : num(ref.ferroceneHalfWaveV, base.reference.ferroceneHalfWaveV),
     },
   };
+}
+
+/**
+ * Per-series cell values from a session, keeping only fields of the right type; a session
+ * without them (written before cells belonged to series) gives none, so the globals apply.
+ */
+export function mergeSeriesCells(stored: unknown): Record<string, Partial<SeriesCell>> {
+  const out: Record<string, Partial<SeriesCell>> = {};
+  for (const [group, value] of Object.entries(asRecord(stored))) {
+    const v = asRecord(value);
+    const cell: Partial<SeriesCell> = {};
+    for (const key of ['electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'resistanceOhm', 'pH'] as const) {
+      if (typeof v[key] === 'number' && Number.isFinite(v[key])) cell[key] = v[key];
+    }
+    for (const key of ['alpha', 'ferroceneHalfWaveV'] as const) {
+      if (v[key] === null || (typeof v[key] === 'number' && Number.isFinite(v[key]))) cell[key] = v[key];
+    }
+    if (REFERENCE_IDS.includes(v.fileReference as ReferenceId)) cell.fileReference = v.fileReference as ReferenceId;
+    out[group] = cell;
+  }
+  return out;
 }
 
 function asRecord(v: unknown): Record<string, unknown> {

@@ -1,13 +1,14 @@
 /**
  * Parameters for the theory overlay of one file: a simulated voltammogram (our own simulator)
  * with the values the analysis fitted — E°′ from this file's E½, D, k° (Nicholson) or k_s and Γ
- * (Laviron) and α from the file's scan-rate series — and the cell values n, A, C, T. The same
+ * (Laviron) and α from the file's scan-rate series — and the cell values n, A, C, T of that series. The same
  * potential window, start, vertex and scan rate as the measured first cycle. When a needed value
  * was not determined, the overlay is refused with the reason rather than drawn from a guess.
  */
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
 import { displayScale } from './display';
+import { cellOfFile } from './seriesCell';
 import { celsiusToKelvin, millimolarToMolPerCm3 } from './settings';
 import type { HalfwaveState } from './types';
 
@@ -45,10 +46,10 @@ export function planTheory(state: HalfwaveState, fileId: string): TheoryPlan {
   const found = seriesCoupleOf(state, fileId);
   if (!found) return { ok: false, reason: 'no couple of this file was followed through its scan-rate series' };
   const { couple, eHalfV } = found;
-  const c = state.settings.chemistry;
+  const c = cellOfFile(state, fileId);
   const { startV, switchV } = sweepOf(potentialV, cycle.start, cycle.end, first.direction);
   const alpha = couple.alpha ?? c.alpha ?? couple.diffusion?.alphaUsed ?? 0.5;
-  const scale = displayScale(state.settings);
+  const scale = displayScale(state.settings, c);
   const e0Text = `E°′ ${(eHalfV + scale.offsetV).toFixed(4)} V vs ${scale.name}`;
   const common: Partial<CvSimulationInput> = {
     formalPotentialV: eHalfV, alpha, electronCount: c.electronCount, areaCm2: c.areaCm2, temperatureK: celsiusToKelvin(c.temperatureC),

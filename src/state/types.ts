@@ -9,6 +9,7 @@ import type { ImportWarning } from '../io/errors';
 import type { SessionFileRecord } from '../io/session';
 import type { ImportOverrides, Measurement } from '../io/types';
 import type { AnalysisClient } from '../worker/client';
+import type { SeriesCell } from './seriesCell';
 import type { AnalysisSettings, FileAnalysisSettings } from './settings';
 import type { StorageAdapter } from './storage';
 
@@ -70,10 +71,16 @@ export interface AnalysisSlice {
   settings: AnalysisSettings;
   fileSettings: Record<string, FileAnalysisSettings>;
   results: Record<string, AnalysisEntry>;
+  /** Cell values entered for each series (group); the rest come from its files or the defaults (seriesCell.ts). */
+  seriesCells: Record<string, Partial<SeriesCell>>;
   analyzeFile(id: string): Promise<void>;
   analyzeAll(): Promise<void>;
   updateSettings(change: (s: AnalysisSettings) => AnalysisSettings): Promise<void>;
   updateFileSettings(id: string, change: (s: FileAnalysisSettings) => FileAnalysisSettings): Promise<void>;
+  /** Edits the values entered for one series (undoable) and re-analyses that series' files. */
+  updateSeriesCell(group: string, change: (own: Partial<SeriesCell>) => Partial<SeriesCell>): Promise<void>;
+  /** Fills values a series has not been given yet (demo set-up; not recorded for undo). */
+  seedSeriesCell(group: string, values: Partial<SeriesCell>): void;
 }
 
 export type CurrentDisplay = 'iupac' | 'polarographic';
@@ -102,6 +109,7 @@ export interface ViewSlice {
 export interface HistorySnapshot {
   settings: AnalysisSettings;
   fileSettings: Record<string, FileAnalysisSettings>;
+  seriesCells: Record<string, Partial<SeriesCell>>;
 }
 
 export interface HistorySlice {
@@ -173,5 +181,6 @@ export function toUserError(err: unknown): UserError {
 /** Importer types the UI shows (re-exported: the UI reaches io only through state). */
 export type { CurrentUnit, Guess, ImportDetection, ImportOverrides, Measurement, PotentialUnit } from '../io/types';
 export type { AnalysisSettings, FileAnalysisSettings } from './settings';
+export type { CellField, CellOrigin, ResolvedCell, SeriesCell } from './seriesCell';
 export type { SeriesAnalysis, SeriesCouple, SeriesPoint } from '../core/analysis/seriesTypes';
 export type { BaselineMethod, BaselineSpec, CoupleResult, PeakResult, PeakWindow, VoltammogramAnalysis } from '../core/analysis/types';

@@ -1,7 +1,7 @@
 /** What is on screen: selected file and cycle, current sign convention, overlays, drag mode. */
 import type { SliceCreator, ViewSlice } from './types';
 
-export const createViewSlice: SliceCreator<ViewSlice> = (set) => ({
+export const createViewSlice: SliceCreator<ViewSlice> = (set, get) => ({
   selectedFileId: null,
   selectedCycle: 1,
   convention: 'iupac',
@@ -18,6 +18,8 @@ export const createViewSlice: SliceCreator<ViewSlice> = (set) => ({
     set(patch);
   },
   selectFile(id) {
-    set({ selectedFileId: id, selectedCycle: 1 });
+    // The chosen file's series becomes the one the Series view and the Cell panel are about.
+    const group = id ? get().files[id]?.group : undefined;
+    set({ selectedFileId: id, selectedCycle: 1, ...(group ? { selectedGroup: group } : {}) });
   },
 });

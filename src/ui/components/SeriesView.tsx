@@ -1,18 +1,18 @@
 /** "Series": the chosen group's scan-rate study: three plots and the numbers behind them. */
 import { useEffect, useMemo, useState } from 'react';
-import { displayScale } from '../../state/display';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
 import { buildSeriesFigures } from '../plots/seriesFigures';
 import { PlotlyChart } from './PlotlyChart';
 import { SeriesTable } from './SeriesTable';
+import { CellSummary } from './CellSummary';
+import { useSeriesScale } from './useSeriesCell';
 
 export function SeriesView() {
   const groups = useHalfwaveShallow((s) => s.groups());
   const chosen = useHalfwave((s) => s.selectedGroup);
   const group = chosen && groups.includes(chosen) ? chosen : (groups[0] ?? null);
   const entry = useHalfwave((s) => (group ? s.series[group] : undefined));
-  const settings = useHalfwave((s) => s.settings);
-  const scale = useMemo(() => displayScale(settings), [settings]);
+  const scale = useSeriesScale(group);
   const [coupleIndex, setCoupleIndex] = useState(0);
   const act = halfwaveActions();
   useEffect(() => {
@@ -27,7 +27,7 @@ export function SeriesView() {
       <div className="toolbar">
         <h2 id="series-title">Scan-rate series</h2>
         <label>
-          Group{' '}
+          Series{' '}
           <select value={group ?? ''} data-testid="series-group" onChange={(e) => { setCoupleIndex(0); act.selectGroup(e.target.value); }}>
             {groups.map((g) => <option key={g} value={g}>{g}</option>)}
           </select>
@@ -42,6 +42,7 @@ export function SeriesView() {
         ) : null}
         <span className="status" role="status">{entry?.status === 'running' ? 'fitting…' : entry ? `${entry.fileIds.length} files` : ''}</span>
       </div>
+      {group ? <CellSummary group={group} /> : null}
       {entry?.error ? <p className="error-text" role="alert">{entry.error.message}</p> : null}
       {figs ? (
         <div className="series-plots">

@@ -1,10 +1,10 @@
 /** "Trace": the selected voltammogram with peaks, baselines and (optionally) the smoothed curve. */
 import { useEffect, useMemo } from 'react';
-import { displayScale } from '../../state/display';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
 import { buildTraceFigure } from '../plots/traceFigure';
 import { PlotlyChart } from './PlotlyChart';
 import { TraceToolbar } from './TraceToolbar';
+import { useSeriesCell, useSeriesScale } from './useSeriesCell';
 
 export function TracePanel() {
   const id = useHalfwave((s) => s.selectedFileId);
@@ -13,13 +13,14 @@ export function TracePanel() {
   const windows = useHalfwave((s) => (id ? s.fileSettings[id]?.peakWindows : undefined));
   const settings = useHalfwave((s) => s.settings);
   const view = useHalfwaveShallow((s) => ({ cycle: s.selectedCycle, convention: s.convention, showSmoothed: s.showSmoothed, showBaselines: s.showBaselines, dragMode: s.dragMode, dir: s.windowDirection }));
-  const scale = useMemo(() => displayScale(settings), [settings]);
+  const scale = useSeriesScale(file?.group ?? null);
+  const cell = useSeriesCell(file?.group ?? null);
   const showTheory = useHalfwave((s) => s.showTheory);
   const theory = useHalfwave((s) => (id ? s.theory[id] : undefined));
   const seriesResult = useHalfwave((s) => (file ? s.series[file.group]?.result : undefined));
   useEffect(() => {
     if (showTheory && id && seriesResult) void halfwaveActions().simulateTheory(id);
-  }, [showTheory, id, seriesResult, settings]);
+  }, [showTheory, id, seriesResult, settings, cell]);
   const companions = useHalfwaveShallow((s) => {
     if (!s.showCompanions || !file) return [];
     return s.fileOrder.filter((f) => f !== id && s.files[f]?.group === file.group && s.files[f]?.measurement).slice(0, 12)

@@ -1,8 +1,8 @@
 /** Per-file peak windows and the baseline chosen for the peak inside each, as numbers. */
 import { useMemo } from 'react';
-import { displayScale } from '../../state/display';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import type { BaselineSpec, FileAnalysisSettings, PeakWindow } from '../../state/types';
+import { useSeriesScale } from './useSeriesCell';
 import { WindowRow } from './WindowRow';
 
 const sameRange = (b: BaselineSpec, w: PeakWindow) => b.direction === w.direction && b.fromV === w.fromV && b.toV === w.toV;
@@ -10,11 +10,10 @@ const sameRange = (b: BaselineSpec, w: PeakWindow) => b.direction === w.directio
 export function WindowsEditor() {
   const id = useHalfwave((s) => s.selectedFileId);
   const fs = useHalfwave((s) => (id ? s.fileSettings[id] : undefined));
-  const settings = useHalfwave((s) => s.settings);
   const m = useHalfwave((s) => (id ? s.files[id]?.measurement : undefined));
+  const off = useSeriesScale(useHalfwave((s) => (id ? (s.files[id]?.group ?? null) : null))).offsetV;
   const span = useMemo(() => (m ? potentialSpan(m.potentialV) : null), [m]);
   if (!id || !span) return null;
-  const off = displayScale(settings).offsetV;
   const windows = fs?.peakWindows ?? [];
   const update = (change: (f: FileAnalysisSettings) => FileAnalysisSettings) => void halfwaveActions().updateFileSettings(id, change);
   // A window's baseline choice follows the window when its range is edited.

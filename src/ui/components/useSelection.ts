@@ -1,8 +1,8 @@
-/** The selected file with its analysis and the display scale, shared by the readout tables. */
-import { useMemo } from 'react';
-import { displayScale, type DisplayScale } from '../../state/display';
+/** The selected file with its analysis and its series' display scale, shared by the readout tables. */
+import type { DisplayScale } from '../../state/display';
 import { useHalfwave } from '../../state/react';
 import type { AnalysisEntry, FileEntry } from '../../state/types';
+import { useSeriesScale } from './useSeriesCell';
 
 export interface Selection {
   file: FileEntry | undefined;
@@ -15,7 +15,6 @@ export function useSelection(): Selection {
   const file = useHalfwave((s) => (s.selectedFileId ? s.files[s.selectedFileId] : undefined));
   const result = useHalfwave((s) => (s.selectedFileId ? s.results[s.selectedFileId] : undefined));
   const cycle = useHalfwave((s) => s.selectedCycle);
-  const settings = useHalfwave((s) => s.settings);
-  const scale = useMemo(() => displayScale(settings), [settings]);
+  const scale = useSeriesScale(file?.group ?? null);
   return { file, result, cycle, scale };
 }

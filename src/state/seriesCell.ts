@@ -1,0 +1,132 @@
+/**
+ * The cell of a scan-rate series: electrode, solution and the reference electrode its files were
+ * recorded against. Different series are measured on different electrodes and solutions, so each
+ * group has its own values, resolved in three layers (the later wins):
+ *   1. the app-wide defaults (`settings.chemistry` and `settings.reference`; an older session's
+ *      global cell lands here, so a session without per-series values still loads);
+ *   2. what the importer read from the preambles of the group's files (area, concentration,
+ *      temperature, reference electrode), the first file that states a value giving it;
+ *   3. what was entered for the series (`seriesCells[group]`, saved in sessions and undo history).
+ * The display scale (what potentials are shown and exported against) stays global.
+ */
+import { findReferenceElectrode, type ReferenceId } from '../core/reference';
+import type { Measurement } from '../io/types';
+import type { AnalysisSettings, ChemistrySettings, ReferenceSettings } from './settings';
+
+/**
+ * The values of one series: n, area, concentration, temperature, α and Ru (as in the app-wide
+ * `ChemistrySettings`), and the scale its files were recorded on with the pH and ferrocene E½
+ * that scale may need. Only the display scale is left out: it is global.
+ */
+export interface SeriesCell extends ChemistrySettings, Omit<ReferenceSettings, 'displayReference'> {}
+
+export type CellField = keyof SeriesCell;
+/** Where a value came from: entered for the series, read from a file's preamble, or the default. */
+export type CellOrigin = 'series' | 'files' | 'default';
+
+export interface ResolvedCell {
+  group: string | null;
+  cell: SeriesCell;
+  origin: Record<CellField, CellOrigin>;
+  /** Loaded files of the group. */
+  fileCount: number;
+  /** Disagreements between files and preamble text that could not be used, in words. */
+  notes: string[];
+}
+
+export const CELL_FIELDS: readonly CellField[] = [
+  'electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'alpha', 'resistanceOhm', 'fileReference', 'pH', 'ferroceneHalfWaveV',
+];
+
+export function defaultCell(settings: AnalysisSettings): SeriesCell {
+  const { fileReference, pH, ferroceneHalfWaveV } = settings.reference;
+  return { ...settings.chemistry, fileReference, pH, ferroceneHalfWaveV };
+}
+
+/**
+ * Reference electrode named in a preamble ("Ag/AgCl (3 M KCl)") → table id, or null. The table's
+ * aliases are written without brackets or commas, so those are tried as spaces too.
+ */
+export function referenceIdOf(name: string): ReferenceId | null {
+  return (findReferenceElectrode(name) ?? findReferenceElectrode(name.replace(/[(),]/g, ' ').trim()))?.id ?? null;
+}
+
+type PreambleField = 'areaCm2' | 'concentrationMM' | 'temperatureC' | 'fileReference';
+
+function preambleValues(m: Measurement): Partial<Pick<SeriesCell, PreambleField>> & { unknownReference?: string } {
+  const out: Partial<Pick<SeriesCell, PreambleField>> & { unknownReference?: string } = {};
+  if (m.areaCm2) out.areaCm2 = m.areaCm2.value;
+  // mol/cm³ → mM: 1 mM = 1e-6 mol/cm³.
+  if (m.concentrationMolPerCm3) out.concentrationMM = Number((m.concentrationMolPerCm3.value * 1e6).toPrecision(12));
+  // K → °C (BIPM, SI Brochure 9th ed. 2019: t/°C = T/K − 273.15).
+  if (m.temperatureK) out.temperatureC = Number((m.temperatureK.value - 273.15).toPrecision(12));
+  if (m.referenceElectrode) {
+    const id = referenceIdOf(m.referenceElectrode);
+    if (id) out.fileReference = id;
+    else out.unknownReference = m.referenceElectrode;
+  }
+  return out;
+}
+
+/** Values the files' preambles give, the first file that states one giving it, with notes on disagreement. */
+export function cellFromPreambles(measurements: readonly Measurement[]): { values: Partial<SeriesCell>; notes: string[] } {
+  const values: Partial<Record<PreambleField, number | ReferenceId>> = {};
+  const firstFile: Partial<Record<PreambleField, string>> = {};
+  const notes: string[] = [];
+  for (const m of measurements) {
+    const found = preambleValues(m);
+    if (found.unknownReference) notes.push(`${m.fileName}: reference electrode "${found.unknownReference}" is not in the table; choose it by hand.`);
+    for (const key of ['areaCm2', 'concentrationMM', 'temperatureC', 'fileReference'] as const) {
+      const v = found[key];
+      if (v === undefined) continue;
+      if (values[key] === undefined) {
+        values[key] = v;
+        firstFile[key] = m.fileName;
+      } else if (values[key] !== v) {
+        notes.push(`${m.fileName} states ${FIELD_WORDS[key]} ${String(v)}, ${firstFile[key] ?? ''} ${String(values[key])}; the series uses the first.`);
+      }
+    }
+  }
+  return { values: values as Partial<SeriesCell>, notes };
+}
+
+const FIELD_WORDS: Record<PreambleField, string> = {
+  areaCm2: 'area (cm²)', concentrationMM: 'concentration (mM)', temperatureC: 'temperature (°C)', fileReference: 'reference',
+};
+
+export interface CellSources {
+  settings: AnalysisSettings;
+  seriesCells: Record<string, Partial<SeriesCell>>;
+  files: Record<string, { group: string; measurement: Measurement | null } | undefined>;
+  fileOrder: string[];
+}
+
+export function resolveCell(state: CellSources, group: string | null): ResolvedCell {
+  const measurements = group === null ? [] : state.fileOrder
+    .map((id) => state.files[id])
+    .filter((f) => f?.group === group && f.measurement)
+    .map((f) => f?.measurement as Measurement);
+  const fromFiles = cellFromPreambles(measurements);
+  const own = group === null ? {} : (state.seriesCells[group] ?? {});
+  const cell = { ...defaultCell(state.settings), ...fromFiles.values, ...own };
+  const origin = Object.fromEntries(CELL_FIELDS.map((k) => [k, k in own ? 'series' : k in fromFiles.values ? 'files' : 'default'])) as Record<CellField, CellOrigin>;
+  return { group, cell, origin, fileCount: measurements.length, notes: fromFiles.notes };
+}
+
+/** The cell of a file's series. */
+export function cellOfFile(state: CellSources, fileId: string): SeriesCell {
+  return resolveCell(state, state.files[fileId]?.group ?? null).cell;
+}
+
+const cache = new Map<string, { sources: CellSources; value: ResolvedCell }>();
+
+/** resolveCell with a per-group memo on the store's fields, so React selectors get a stable object. */
+export function selectSeriesCell(state: CellSources, group: string | null): ResolvedCell {
+  const key = group ?? '\u0000';
+  const hit = cache.get(key);
+  if (hit && hit.sources.settings === state.settings && hit.sources.seriesCells === state.seriesCells
+    && hit.sources.files === state.files && hit.sources.fileOrder === state.fileOrder) return hit.value;
+  const value = resolveCell(state, group);
+  cache.set(key, { sources: { settings: state.settings, seriesCells: state.seriesCells, files: state.files, fileOrder: state.fileOrder }, value });
+  return value;
+}
