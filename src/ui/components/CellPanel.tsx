@@ -8,7 +8,7 @@ import { halfwaveActions, useHalfwave } from '../../state/react';
 import type { CellField, ResolvedCell, SeriesCell } from '../../state/types';
 import { NumberField } from './NumberField';
 import { SelectField } from './SelectField';
-import { useSeriesCell, useSeriesScale } from './useSeriesCell';
+import { useAdsorbedSeries, useSeriesCell, useSeriesScale } from './useSeriesCell';
 
 const refOptions = referenceChoices.map((r) => ({ value: r.id, label: r.label }));
 
@@ -33,6 +33,7 @@ export function CellPanel() {
   const resolved = useSeriesCell(group);
   const displayReference = useHalfwave((s) => s.settings.reference.displayReference);
   const scale = useSeriesScale(group);
+  const adsorbed = useAdsorbedSeries(group);
   const c = resolved.cell;
   const set = (patch: Partial<SeriesCell>) => editCell(group, patch);
   const fileNote = referenceChoices.find((x) => x.id === c.fileReference)?.note;
@@ -48,9 +49,10 @@ export function CellPanel() {
         <NumberField label="Area" unit="cm²" value={c.areaCm2} min={1e-9} testId="area" title="geometric or electroactive area of the working electrode" onCommit={(v) => v !== null && set({ areaCm2: v })} />
         <NumberField label="Concentration" unit="mM" value={c.concentrationMM} min={1e-9} testId="concentration" title="bulk concentration of the dissolved analyte (not used for an adsorbed film)" onCommit={(v) => v !== null && set({ concentrationMM: v })} />
         <NumberField label="Temperature" unit="°C" value={c.temperatureC} min={-60} max={200} testId="temperature" onCommit={(v) => v !== null && set({ temperatureC: v })} />
-        <NumberField label="α" placeholder="from the data" value={c.alpha} min={0.05} max={0.95} allowEmpty testId="alpha" title="transfer coefficient for the irreversible and Laviron analyses; leave empty to take it from the data (0.5 when it cannot be measured)" onCommit={(v) => set({ alpha: v })} />
+        <NumberField label="α" unit="transfer coeff." placeholder="from the data" value={c.alpha} min={0.05} max={0.95} allowEmpty testId="alpha" title="transfer coefficient for the irreversible and Laviron analyses; leave empty to take it from the data (0.5 when it cannot be measured)" onCommit={(v) => set({ alpha: v })} />
         <NumberField label="Ru" unit="Ω" value={c.resistanceOhm} min={0} title="uncompensated resistance; potentials are corrected by −i·Ru before analysis" testId="resistance" onCommit={(v) => v !== null && set({ resistanceOhm: v })} />
       </div>
+      {adsorbed ? <p className="hint" data-testid="cell-adsorbed">Adsorbed film: Γ follows from the peak charge and the area; the concentration is not used.</p> : null}
       <div className="field-grid">
         <SelectField label="Files recorded vs" value={c.fileReference} options={refOptions} testId="file-reference" onChange={(v) => set({ fileReference: v })} />
         {c.fileReference === 'RHE' || displayReference === 'RHE' ? (
@@ -84,7 +86,7 @@ function CellOrigins({ resolved, group }: { resolved: ResolvedCell; group: strin
       {fromFiles ? <p className="hint">From the files’ headers: {fromFiles}.</p> : null}
       {entered ? (
         <p className="hint">
-          Entered for this series: {entered}.{' '}
+          Set for this series: {entered}.{' '}
           <button type="button" data-testid="cell-reset" title="Forget the values entered for this series; use the files’ headers, else the defaults"
             onClick={() => void halfwaveActions().updateSeriesCell(group, () => ({}))}>Reset</button>
         </p>

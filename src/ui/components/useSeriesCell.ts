@@ -15,3 +15,11 @@ export function useSeriesScale(group: string | null): DisplayScale {
   return useMemo(() => displayScale(settings, cell.cell), [settings, cell]);
 }
 
+
+/** True when every couple the series followed is surface-confined (the concentration is then unused). */
+export function useAdsorbedSeries(group: string | null): boolean {
+  return useHalfwave((s) => {
+    const couples = group ? s.series[group]?.result?.couples : undefined;
+    return !!couples && couples.length > 0 && couples.every((c) => c.regime === 'surface');
+  });
+}
