@@ -3,7 +3,7 @@
  * pre-peak baseline fit.
  * Method (ours; common practice, no source): fit a line to the first half of the region before
  * the peak, walk back from the peak while the current stays above that line by more than
- * max(3σ, 1 % of the peak height over the line); the first point within is the foot. Refit on
+ * max(3σ, 0.3 % of the peak height over the line); the first point within is the foot. Refit on
  * [regionStart, foot) and repeat until the foot stops moving (at most 6 passes).
  * In: the oriented (peaks up) smoothed current of the sweep, local indices regionStart < peak,
  *   noise σ (same unit). Out: the fit window [start, end) in local indices, or null when fewer
@@ -20,7 +20,7 @@ export interface PrePeakWindow {
 export interface FindPrePeakWindowOptions {
   /** Noise standard deviation of y. @default 0 */
   noise?: number;
-  /** Foot threshold as a fraction of the peak height above the line. @default 0.01 */
+  /** Foot threshold as a fraction of the peak height above the line. @default 0.003 */
   footFraction?: number;
   /** Points dropped from the end of the window, so the rising foot stays out of the fit. At most
    * 30 % of the window is dropped. @default 0 */
@@ -42,7 +42,7 @@ function fitLineLocal(y: ArrayLike<number>, a: number, b: number): { slope: numb
 export function findPrePeakWindow(y: ArrayLike<number>, regionStart: number, peak: number, options: FindPrePeakWindowOptions = {}): PrePeakWindow | null {
   if (peak - regionStart < 5) return null;
   const noise = options.noise ?? 0;
-  const fraction = options.footFraction ?? 0.01;
+  const fraction = options.footFraction ?? 0.003;
   const minEnd = regionStart + 4;
   let end = Math.max(minEnd, regionStart + Math.floor((peak - regionStart) / 2));
   for (let pass = 0; pass < 6; pass++) {
