@@ -8,6 +8,8 @@
  * Method: the convolution weights are computed here by least squares (a polynomial of degree
  *   `order` fitted to `window` equally spaced points, weights = row of the pseudo-inverse of the
  *   Vandermonde matrix), so any odd window and any order < window work, not just the tabulated ones.
+ *   Windows wider than 101 points (order ≤ 4) use the same fit through sliding power moments
+ *   (slidingMomentsFilter.ts), so a finely sampled million-point trace costs O(n), not O(n·window).
  * Difference from the source (edge handling): the paper defines no value for the first and last
  *   (window−1)/2 points. Here those points take the value of the same-degree polynomial fitted to
  *   the first (or last) `window` points, evaluated at the point itself (an off-centre fit). So a
@@ -15,6 +17,8 @@
  * The input is never modified; a new array is returned.
  */
 import { AnalysisError } from '../errors';
+import { monomialDerivativeRow, solveSmall, windowNormalMatrix } from './polynomialWindowFit';
+import { filterBySlidingMoments, MAX_MOMENT_ORDER } from './slidingMomentsFilter';
 
 export interface SavitzkyGolayOptions {
   /** Odd number of points in the moving window. @default 5 */
@@ -44,31 +48,6 @@ function checkWindow(window: number, order: number): void {
   }
 }
 
-/** Solves the small dense system A x = b in place by Gaussian elimination with partial pivoting. */
-function solveSmall(a: number[][], b: number[]): number[] {
-  const n = b.length;
-  for (let c = 0; c < n; c++) {
-    let p = c;
-    for (let r = c + 1; r < n; r++) if (Math.abs(a[r]![c]!) > Math.abs(a[p]![c]!)) p = r;
-    [a[c], a[p]] = [a[p]!, a[c]!];
-    [b[c], b[p]] = [b[p]!, b[c]!];
-    const pivot = a[c]![c]!;
-    if (pivot === 0) throw new AnalysisError('BAD_OPTION', 'Savitzky–Golay normal matrix is singular');
-    for (let r = c + 1; r < n; r++) {
-      const f = a[r]![c]! / pivot;
-      for (let k = c; k < n; k++) a[r]![k]! -= f * a[c]![k]!;
-      b[r]! -= f * b[c]!;
-    }
-  }
-  const x = new Array<number>(n).fill(0);
-  for (let r = n - 1; r >= 0; r--) {
-    let s = b[r]!;
-    for (let k = r + 1; k < n; k++) s -= a[r]![k]! * x[k]!;
-    x[r] = s / a[r]![r]!;
-  }
-  return x;
-}
-
 /**
  * Convolution weights c[j], j = 0…window−1, such that Σ c[j]·y[centre − m + j] estimates the
  * `derivative`-th derivative (per sample) at `position` samples from the centre.
@@ -82,26 +61,11 @@ export function savitzkyGolayCoefficients(
   const d = options.derivative ?? 0;
   const s = options.position ?? 0;
   const m = (window - 1) / 2;
-  // Abscissae scaled to [−1, 1] keep the normal matrix well conditioned for wide windows.
-  const scale = m;
   const q = order + 1;
-  const normal = Array.from({ length: q }, () => new Array<number>(q).fill(0));
-  for (let k = -m; k <= m; k++) {
-    const x = k / scale;
-    for (let r = 0; r < q; r++) for (let c = 0; c < q; c++) normal[r]![c]! += x ** (r + c);
-  }
-  // Row vector of the d-th derivative of the monomials at s, in scaled units.
-  const xs = s / scale;
-  const basis = new Array<number>(q).fill(0);
-  for (let r = d; r < q; r++) {
-    let f = 1;
-    for (let t = 0; t < d; t++) f *= r - t;
-    basis[r] = (f * xs ** (r - d)) / scale ** d;
-  }
-  const w = solveSmall(normal, basis);
+  const w = solveSmall(windowNormalMatrix(window, order), monomialDerivativeRow(window, order, d, s));
   const out = new Float64Array(window);
   for (let j = 0; j < window; j++) {
-    const x = (j - m) / scale;
+    const x = (j - m) / m;
     let v = 0;
     for (let r = 0; r < q; r++) v += w[r]! * x ** r;
     out[j] = v;
@@ -123,6 +87,13 @@ function cachedCoefficients(window: number, order: number, derivative: number, p
   return w;
 }
 
+/**
+ * Widest window filtered by direct convolution. Wider windows (finely sampled sweeps: 15 mV at
+ * 1 µV steps is 15,001 points) go through the sliding moments, whose cost does not grow with the
+ * window; below this the convolution is as fast and keeps results bit for bit as before.
+ */
+const DIRECT_MAX_WINDOW = 101;
+
 function applyFilter(y: ArrayLike<number>, window: number, order: number, derivative: number): Float64Array {
   const n = y.length;
   const out = new Float64Array(n);
@@ -130,6 +101,7 @@ function applyFilter(y: ArrayLike<number>, window: number, order: number, deriva
   if (n < window) {
     throw new AnalysisError('TOO_FEW_POINTS', `Savitzky–Golay window ${window} is longer than the ${n}-point signal`);
   }
+  if (window > DIRECT_MAX_WINDOW && order <= MAX_MOMENT_ORDER) return filterBySlidingMoments(y, window, order, derivative);
   const m = (window - 1) / 2;
   const centre = cachedCoefficients(window, order, derivative, 0);
   for (let i = m; i < n - m; i++) {
