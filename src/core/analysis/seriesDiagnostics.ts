@@ -17,7 +17,10 @@ function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const halves = c.points.flatMap((p) => (p.eHalfV === null ? [] : [p.eHalfV]));
   if (halves.length >= 2) out.push(`E½ spans ${mv(Math.max(...halves) - Math.min(...halves))} over the series`);
   const shift = c.forwardDirection === 'anodic' ? c.peakShift.anodic : c.peakShift.cathodic;
-  if (shift) {
+  if (shift && c.regime === 'surface') {
+    // Laviron 1979 (check-values §7): far from E°′ each peak moves 2.303RT/(αnF) or 2.303RT/((1 − α)nF) per decade.
+    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate over the whole series (Nernstian film: 0; Laviron, n·ΔEp > 200 mV: 2.303RT/((1 − α)nF) or 2.303RT/(αnF), 118 mV for α = 0.5)`);
+  } else if (shift) {
     out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate (reversible: 0; totally irreversible: ±29.6/(αnₐ) mV)`);
   }
   return out;
@@ -25,11 +28,13 @@ function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
 
 function describeLines(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const out: string[] = [];
-  const f = c.forwardFit;
+  const sf = c.regime === 'surface' ? (c.surface?.fit ?? null) : null;
+  const f = sf ?? c.forwardFit;
+  const against = sf ? 'v' : 'v^½';
   if (f && f.pointCount > 1) {
     const maxIp = Math.max(...c.points.map((p) => p.forwardIpA ?? 0));
     const rel = maxIp > 0 ? Math.abs(f.intercept) / maxIp : 0;
-    out.push(`|ip| against v^½: R² = ${f.r2.toFixed(4)}, intercept ${(rel * 100).toFixed(1)} % of the largest peak`);
+    out.push(`|ip| against ${against}: R² = ${f.r2.toFixed(4)}, intercept ${(rel * 100).toFixed(1)} % of the largest peak`);
   }
   if (c.logLog) {
     const ci = c.logLog.fit.slopeInterval;
