@@ -5,12 +5,11 @@
  */
 import type { Voltammogram } from '../core/types';
 import { CancelledError } from '../worker/errors';
-import { cellOfFile, resolveCell, type CellField } from './seriesCell';
+import { cellOfFile, resolveCell, sameTraceCell } from './seriesCell';
 import { defaultSettings, emptyFileSettings, toAnalyzeOptions } from './settings';
 import { toUserError, type AnalysisSlice, type HistorySnapshot, type SliceCreator } from './types';
 
 const HISTORY_LIMIT = 100;
-const TRACE_FIELDS: readonly CellField[] = ['electronCount', 'temperatureC', 'resistanceOhm'];
 
 export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps) => {
   const running = new Map<string, AbortController>();
@@ -78,9 +77,8 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       record();
       const before = resolveCell(get(), group).cell;
       set((s) => ({ seriesCells: { ...s.seriesCells, [group]: change(s.seriesCells[group] ?? {}) } }));
-      const after = resolveCell(get(), group).cell;
       // n, T and Ru change each trace's analysis; area, concentration and α only the series fits.
-      if (TRACE_FIELDS.every((k) => before[k] === after[k])) return get().analyzeGroup(group);
+      if (sameTraceCell(before, resolveCell(get(), group).cell)) return get().analyzeGroup(group);
       const { fileOrder, files } = get();
       await Promise.all(fileOrder.filter((id) => files[id]?.group === group).map((id) => get().analyzeFile(id)));
     },

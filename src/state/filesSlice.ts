@@ -5,6 +5,7 @@
  * was already loaded: a failed re-import keeps the previous measurement beside its error.
  */
 import type { ImportOverrides } from '../io/types';
+import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
 import { emptyFileSettings } from './settings';
 import { toUserError, type FileEntry, type FileInput, type FilesSlice, type SliceCreator } from './types';
 
@@ -48,16 +49,29 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     patch(id, { status: 'importing', progress: 0 });
     try {
       const data = await entry.source.arrayBuffer();
+      const cellBefore = resolveCell(get(), entry.group).cell;
       const out = await deps.client.request('import', { fileName: entry.fileName, data, overrides }, {
         onProgress: (fraction) => patch(id, { progress: fraction }),
       });
       patch(id, { status: 'ready', progress: 1, error: null, measurement: out.measurement, warnings: out.warnings, sha256: out.sha256, overrides });
       applyRemembered(id);
       if (get().selectedFileId === null) get().selectFile(id);
+      refreshGroup(entry.group, cellBefore, id);
       await get().analyzeFile(id);
     } catch (err) {
       const kept = get().files[id]?.measurement ?? null;
       patch(id, { status: kept ? 'ready' : 'error', progress: 0, error: toUserError(err) });
+    }
+  }
+
+  /**
+   * A file's preamble can give its series a value it did not have (the temperature, say); when
+   * that changes what each trace's analysis uses, the series' other files are analysed again.
+   */
+  function refreshGroup(group: string, before: SeriesCell, except: string | null): void {
+    if (sameTraceCell(before, resolveCell(get(), group).cell)) return;
+    for (const other of get().fileOrder) {
+      if (other !== except && get().files[other]?.group === group && get().files[other]?.measurement) void get().analyzeFile(other);
     }
   }
 
@@ -119,12 +133,14 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
 
     removeFile(id) {
       const group = get().files[id]?.group;
+      const cellBefore = group ? resolveCell(get(), group).cell : null;
       set((s) => {
         const { [id]: _gone, ...files } = s.files;
         const { [id]: _r, ...results } = s.results;
         const order = s.fileOrder.filter((f) => f !== id);
         return { files, results, fileOrder: order, selectedFileId: s.selectedFileId === id ? (order[0] ?? null) : s.selectedFileId };
       });
+      if (group && cellBefore) refreshGroup(group, cellBefore, null);
       if (group) get().scheduleGroup(group);
     },
 

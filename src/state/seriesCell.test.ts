@@ -56,6 +56,27 @@ describe('inheritance of a new series', () => {
     expect(Object.values(plain.origin).every((o) => o === 'default')).toBe(true);
   });
 
+  it('a later file whose preamble gives the series its temperature has the earlier files analysed again at it', async () => {
+    const inner = createInThreadClient();
+    const seen: (number | undefined)[] = [];
+    const store = createHalfwaveStore({
+      storage: null,
+      client: {
+        transport: inner.transport,
+        dispose: () => inner.dispose(),
+        request: (type, input, options) => {
+          if (type === 'analyze') seen.push((input as { options: { temperatureK?: number } }).options.temperatureK);
+          return inner.request(type, input, options);
+        },
+      },
+    });
+    await store.getState().addFiles([{ name: 'plain.csv', data: csv(0.1) }], 'warm');
+    await store.getState().addFiles([{ name: 'stated.csv', data: PREAMBLE + csv(0.2) }], 'warm');
+    await new Promise((r) => setTimeout(r, 50));
+    // 30 °C → 303.15 K (BIPM, SI Brochure 9th ed. 2019); the first file ran at 25 °C, then again at 30 °C.
+    expect(seen).toEqual([298.15, 303.15, 303.15]);
+  });
+
   it('notes files of one series that state different areas, and uses the first', async () => {
     const store = newStore();
     await store.getState().addFiles([

@@ -38,6 +38,13 @@ export const CELL_FIELDS: readonly CellField[] = [
   'electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'alpha', 'resistanceOhm', 'fileReference', 'pH', 'ferroceneHalfWaveV',
 ];
 
+/** Fields that change each trace's own analysis; the others (A, C, α, scales) only the series fits and display. */
+export const TRACE_FIELDS: readonly CellField[] = ['electronCount', 'temperatureC', 'resistanceOhm'];
+
+export function sameTraceCell(a: SeriesCell, b: SeriesCell): boolean {
+  return TRACE_FIELDS.every((k) => a[k] === b[k]);
+}
+
 export function defaultCell(settings: AnalysisSettings): SeriesCell {
   const { fileReference, pH, ferroceneHalfWaveV } = settings.reference;
   return { ...settings.chemistry, fileReference, pH, ferroceneHalfWaveV };
