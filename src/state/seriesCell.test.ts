@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
 import { displayScale } from './display';
 import { exportRequest } from './exportRequest';
-import { resolveCell } from './seriesCell';
+import { resolveCell, selectSeriesCell } from './seriesCell';
 import { loadSessionText, saveSessionText } from './sessionActions';
 import { createHalfwaveStore } from './store';
 import { simulatedCsv } from './testSupport';
@@ -86,6 +86,18 @@ describe('inheritance of a new series', () => {
     const r = resolveCell(store.getState(), 'mixed');
     expect(r.cell.areaCm2).toBe(0.0314);
     expect(r.notes.join(' ')).toMatch(/b\.csv states area \(cm²\) 0\.0707, a\.csv 0\.0314/);
+  });
+});
+
+describe('the memo the UI reads', () => {
+  it('gives the same object while the resolved cell is the same, a new one when it changes', async () => {
+    const store = newStore();
+    await loadSeries(store, 'disk');
+    const first = selectSeriesCell(store.getState(), 'disk');
+    await store.getState().addFiles([{ name: 'elsewhere.csv', data: csv(0.1) }], 'other');
+    expect(selectSeriesCell(store.getState(), 'disk')).toBe(first);
+    store.getState().seedSeriesCell('disk', { areaCm2: 0.02 });
+    expect(selectSeriesCell(store.getState(), 'disk').cell.areaCm2).toBe(0.02);
   });
 });
 

@@ -127,13 +127,21 @@ export function cellOfFile(state: CellSources, fileId: string): SeriesCell {
 
 const cache = new Map<string, { sources: CellSources; value: ResolvedCell }>();
 
-/** resolveCell with a per-group memo on the store's fields, so React selectors get a stable object. */
+/** resolveCell with a per-group memo, so React selectors get the same object while the result is the same. */
 export function selectSeriesCell(state: CellSources, group: string | null): ResolvedCell {
   const key = group ?? '\u0000';
   const hit = cache.get(key);
   if (hit && hit.sources.settings === state.settings && hit.sources.seriesCells === state.seriesCells
     && hit.sources.files === state.files && hit.sources.fileOrder === state.fileOrder) return hit.value;
-  const value = resolveCell(state, group);
+  const fresh = resolveCell(state, group);
+  // Files change with every progress tick; keep the old object when nothing resolved differently,
+  // so the plots that depend on the cell (through the display scale) are not redrawn for nothing.
+  const value = hit && sameResolved(hit.value, fresh) ? hit.value : fresh;
   cache.set(key, { sources: { settings: state.settings, seriesCells: state.seriesCells, files: state.files, fileOrder: state.fileOrder }, value });
   return value;
+}
+
+function sameResolved(a: ResolvedCell, b: ResolvedCell): boolean {
+  return a.group === b.group && a.fileCount === b.fileCount && a.notes.join('\n') === b.notes.join('\n')
+    && CELL_FIELDS.every((k) => a.cell[k] === b.cell[k] && a.origin[k] === b.origin[k]);
 }

@@ -11,10 +11,12 @@ export function useSeriesCell(group: string | null): ResolvedCell {
 
 export function useSeriesScale(group: string | null): DisplayScale {
   const settings = useHalfwave((s) => s.settings);
-  const cell = useSeriesCell(group);
-  return useMemo(() => displayScale(settings, cell.cell), [settings, cell]);
+  const { cell } = useSeriesCell(group);
+  const { fileReference, pH, ferroceneHalfWaveV, temperatureC } = cell;
+  // Keyed on what the conversion reads: a new file in the series must not give the plots a new
+  // scale object (that would redraw the trace on every import tick).
+  return useMemo(() => displayScale(settings, cell), [settings, fileReference, pH, ferroceneHalfWaveV, temperatureC]);
 }
-
 
 /** True when every couple the series followed is surface-confined (the concentration is then unused). */
 export function useAdsorbedSeries(group: string | null): boolean {
