@@ -14,6 +14,7 @@ export const REGISTRY: BenchEntry[] = [
   { title: 'simulation', file: './simulationBench.ts', exportName: 'runSimulationBench' },
   { title: 'import', file: './importBench.ts', exportName: 'runImportBench' },
   { title: 'analysis', file: './analysisBench.ts', exportName: 'runAnalysisBench' },
+  { title: 'scale', file: './scaleBench.ts', exportName: 'runScaleBench' },
 ];
 
 const here = dirname(fileURLToPath(import.meta.url));
