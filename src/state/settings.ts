@@ -1,7 +1,9 @@
 /**
  * Analysis settings the user edits, in the units of the forms (mM, °C, Ω), and their mapping to
- * the core's options (mol/cm³, K). Global settings apply to every file; peak windows and baseline
- * choices are per file because potential ranges differ between files.
+ * the core's options (mol/cm³, K). Method settings and the display scale apply to every file;
+ * the cell values here are only the defaults each series starts from (seriesCell.ts), because
+ * series are measured on different electrodes and solutions; peak windows and baseline choices
+ * are per file because potential ranges differ between files.
  */
 import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
 import type { AnalyzeVoltammogramOptions, BaselineMethod, BaselineSpec, PeakWindow, SmoothingSetting } from '../core/analysis/types';
