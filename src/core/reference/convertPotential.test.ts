@@ -56,6 +56,15 @@ describe('findReferenceElectrode', () => {
     expect(findReferenceElectrode('Fc+/Fc')?.id).toBe('Fc');
     expect(findReferenceElectrode('agcl-3m')?.id).toBe('AgCl-3M');
   });
+  it('reads names as instruments and people write them, with brackets, commas and units', () => {
+    expect(findReferenceElectrode('Ag/AgCl (3 M KCl)')?.id).toBe('AgCl-3M');
+    expect(findReferenceElectrode('vs. Ag/AgCl, 3.0 M KCl')?.id).toBe('AgCl-3M');
+    expect(findReferenceElectrode('Ag/AgCl (saturated KCl)')?.id).toBe('AgCl-sat');
+    expect(findReferenceElectrode('Ag/AgCl (1 M KCl)')?.id).toBe('AgCl-1M');
+    expect(findReferenceElectrode('Hg/HgO (1 M NaOH)')?.id).toBe('HgO-1M');
+    expect(findReferenceElectrode('Ag/AgCl (0.1 M KCl)')?.id).toBe('AgCl-0.1M');
+    expect(findReferenceElectrode('platinum wire')).toBeNull();
+  });
   // check-values.md §10: never use 0.926 V for Hg/HgO; 0.098 V is the value most papers use.
   it('never carries 0.926 V for Hg/HgO', () => {
     expect(findReferenceElectrode('Hg/HgO')?.eVsSheV).toBe(0.098);

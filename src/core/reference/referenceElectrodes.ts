@@ -56,6 +56,31 @@ export const REFERENCE_ELECTRODES: readonly ReferenceElectrode[] = [
 
 /** Looks a reference electrode up by id or alias (case-insensitive); null when unknown. */
 export function findReferenceElectrode(name: string): ReferenceElectrode | null {
-  const key = name.trim().toLowerCase().replace(/^vs\.?\s+/, '').replace(/\s+/g, ' ');
-  return REFERENCE_ELECTRODES.find((r) => r.id.toLowerCase() === key || r.aliases.includes(key)) ?? null;
+  // Second pass: the filling electrolyte's name is left out, its concentration kept.
+  const stripElectrolyte = (n: string) => n.replace(/ (kcl|nacl|naoh|koh|h2so4|k2so4)\b/g, '');
+  const key = normalizeReferenceName(name);
+  const loose = stripElectrolyte(key);
+  const matches = (r: ReferenceElectrode, k: string, strip: boolean) =>
+    [r.id, ...r.aliases].some((a) => {
+      const n = normalizeReferenceName(a);
+      return (strip ? stripElectrolyte(n) : n) === k;
+    });
+  return REFERENCE_ELECTRODES.find((r) => matches(r, key, false)) ?? REFERENCE_ELECTRODES.find((r) => matches(r, loose, true)) ?? null;
+}
+
+/**
+ * Folds the many ways a file or a person writes an electrode name into one form:
+ * "vs. Ag/AgCl (3 M KCl)", "Ag/AgCl, 3.0M KCl" and "ag/agcl 3m kcl" all become "ag/agcl 3m kcl";
+ * "saturated"/"sat." become "sat".
+ */
+export function normalizeReferenceName(name: string): string {
+  return name
+    .toLowerCase()
+    .trim()
+    .replace(/^vs\.?\s+/, '')
+    .replace(/[()[\],;]/g, ' ')
+    .replace(/\bsaturated\b|\bsat\b\.?/g, 'sat')
+    .replace(/(\d+(?:\.\d*)?)\s*(m|mol\/l)\b/g, (_m, num: string) => `${String(Number(num))}m`)
+    .replace(/\s+/g, ' ')
+    .trim();
 }
