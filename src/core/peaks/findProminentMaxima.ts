@@ -31,6 +31,9 @@ export function findProminentMaxima(y: ArrayLike<number>, options: FindProminent
   const end = options.end ?? y.length;
   const minProminence = options.minProminence ?? 0;
   const out: ProminentMaximum[] = [];
+  if (end - start < 3) return out;
+  const leftLow = lowestSinceHigher(y, start, end, 1);
+  const rightLow = lowestSinceHigher(y, start, end, -1);
   for (let k = start + 1; k < end - 1; k++) {
     const v = y[k] as number;
     if (!(v > (y[k - 1] as number))) continue;
@@ -38,8 +41,8 @@ export function findProminentMaxima(y: ArrayLike<number>, options: FindProminent
     let r = k + 1;
     while (r < end - 1 && (y[r] as number) === v) r++;
     if (!(v > (y[r] as number))) continue;
-    const left = lowestBefore(y, k, start, v);
-    const right = lowestAfter(y, r, end, v);
+    const left = leftLow[k - start]!;
+    const right = rightLow[r - 1 - start]!;
     const base = Math.max(y[left] as number, y[right] as number);
     const prominence = v - base;
     if (prominence >= minProminence && prominence > 0) out.push({ index: k, prominence, leftBase: left, rightBase: right });
@@ -47,22 +50,26 @@ export function findProminentMaxima(y: ArrayLike<number>, options: FindProminent
   return out;
 }
 
-function lowestBefore(y: ArrayLike<number>, k: number, start: number, top: number): number {
-  let low = k;
-  for (let j = k - 1; j >= start; j--) {
-    const v = y[j] as number;
-    if (v > top) break;
-    if (v < (y[low] as number)) low = j;
-  }
-  return low;
-}
-
-function lowestAfter(y: ArrayLike<number>, k: number, end: number, top: number): number {
-  let low = k;
-  for (let j = k; j < end; j++) {
-    const v = y[j] as number;
-    if (v > top) break;
-    if (v < (y[low] as number)) low = j;
+/**
+ * For every k in [start, end): the index of the lowest y between k and the nearest point beyond
+ * it (before it for step 1, after it for step −1) that is higher than y[k], k included; on ties
+ * the point nearest k. One pass with a stack of ever higher points, O(n) in all: each point is
+ * pushed and popped once, and a popped point hands over the lowest point of the stretch it covered.
+ */
+function lowestSinceHigher(y: ArrayLike<number>, start: number, end: number, step: 1 | -1): Int32Array {
+  const low = new Int32Array(end - start);
+  const stack = new Int32Array(end - start);
+  let top = 0;
+  for (let n = 0; n < end - start; n++) {
+    const k = step === 1 ? start + n : end - 1 - n;
+    const v = y[k] as number;
+    let best = k;
+    while (top > 0 && (y[stack[top - 1]!] as number) <= v) {
+      const cand = low[stack[--top]! - start]!;
+      if ((y[cand] as number) < (y[best] as number)) best = cand;
+    }
+    low[k - start] = best;
+    stack[top++] = k;
   }
   return low;
 }

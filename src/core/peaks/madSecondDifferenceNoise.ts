@@ -22,15 +22,24 @@ export function madSecondDifferenceNoise(currentA: ArrayLike<number>, options: M
   const start = options.start ?? 0;
   const end = options.end ?? currentA.length;
   if (end - start < 3) throw new AnalysisError('TOO_FEW_POINTS', `noise estimate needs at least 3 points, got ${end - start}`);
-  const d: number[] = [];
+  const d = new Float64Array(Math.max(0, end - start - 2));
+  let count = 0;
   for (let k = start + 1; k < end - 1; k++) {
     const v = (currentA[k - 1] as number) - 2 * (currentA[k] as number) + (currentA[k + 1] as number);
-    if (Number.isFinite(v)) d.push(v);
+    if (Number.isFinite(v)) d[count++] = v;
   }
-  if (d.length === 0) throw new AnalysisError('NON_FINITE', 'no finite second differences for the noise estimate');
-  const med = median(d);
-  const mad = median(d.map((v) => Math.abs(v - med)));
+  if (count === 0) throw new AnalysisError('NON_FINITE', 'no finite second differences for the noise estimate');
+  // Typed arrays sort numerically without a comparator, several times faster on long traces.
+  const diffs = d.subarray(0, count).sort();
+  const med = middleOfSorted(diffs);
+  for (let i = 0; i < count; i++) diffs[i] = Math.abs(diffs[i]! - med);
+  const mad = middleOfSorted(diffs.sort());
   return (1.4826 * mad) / Math.sqrt(6);
+}
+
+function middleOfSorted(values: Float64Array): number {
+  const m = values.length >> 1;
+  return values.length % 2 ? values[m]! : (values[m - 1]! + values[m]!) / 2;
 }
 
 /** Median of a non-empty list (the list is sorted in place). */
