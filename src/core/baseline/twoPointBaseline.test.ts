@@ -4,6 +4,8 @@ import { twoPointBaseline } from './twoPointBaseline';
 import { uniformGrid } from './analyticShapes';
 
 describe('twoPointBaseline', () => {
+  // Worked by hand: the line through (0.2 V, 1 µA) and (0.7 V, 3 µA) has slope 4 µA/V, so at
+  // 0.5 V it carries 1 µA + 0.3 V · 4 µA/V = 2.2 µA.
   it('draws the line through two anchors', () => {
     const e = uniformGrid(11, 0, 1);
     const curve = twoPointBaseline({ potentialV: e, spanStart: 0, spanEnd: 11, anchors: [{ potentialV: 0.2, currentA: 1e-6 }, { potentialV: 0.7, currentA: 3e-6 }] });
