@@ -8,7 +8,7 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { analyzeRun } from '../core/analysis/analyzeRun';
 import type { AnalyzeRunOptions, InternalStandardSource, RunInput } from '../core/analysis/runTypes';
-import type { CurrentConvention } from '../core/analysis/types';
+import type { CurrentConvention } from '../core/types';
 import { sha256Hex } from '../core/provenance/sha256';
 import { delimiterName } from '../io';
 import type { Measurement } from '../io';

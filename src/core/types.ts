@@ -5,6 +5,9 @@
  * conversion says otherwise.
  */
 
+/** Sign convention of a current column: IUPAC (anodic positive) or polarographic (cathodic positive). */
+export type CurrentConvention = 'iupac' | 'polarographic';
+
 /** Where a scan rate came from, in order of precedence. */
 export type ScanRateSource = 'option' | 'time' | 'metadata' | 'filename';
 

@@ -3,12 +3,12 @@
  * (ImportDetection, each guess with a plain-language explanation) and what the user may force
  * (ImportOverrides). Arrays are always in SI/core units and the IUPAC current convention.
  */
-import type { Voltammogram } from '../core/types';
+import type { CurrentConvention, Voltammogram } from '../core/types';
 import type { ImportWarning } from './errors';
 
 export type Delimiter = ',' | ';' | '\t' | 'whitespace';
 export type DecimalMark = '.' | ',';
-export type CurrentConvention = 'iupac' | 'polarographic';
+export type { CurrentConvention } from '../core/types';
 export type TextEncoding = 'utf-8' | 'utf-16le' | 'utf-16be' | 'latin1';
 export type PotentialUnit = 'V' | 'mV' | 'µV';
 export type CurrentUnit = 'A' | 'mA' | 'µA' | 'nA' | 'pA';

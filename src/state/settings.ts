@@ -6,7 +6,10 @@
  * are per file because potential ranges differ between files.
  */
 import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
-import type { AnalyzeVoltammogramOptions, BaselineMethod, BaselineSpec, PeakWindow, SmoothingSetting } from '../core/analysis/types';
+import type { AnalyzeVoltammogramOptions } from '../core/analysis/types';
+import type { BaselineMethod, BaselineSpec } from '../core/baseline/baselineTypes';
+import type { PeakWindow } from '../core/peaks/peakTypes';
+import type { SmoothingSetting } from '../core/smoothing/smoothingTypes';
 import type { SeriesCell } from './seriesCell';
 
 /** App-wide cell defaults: a series without its own value, and without one in its files, uses these. */

@@ -182,5 +182,9 @@ export function toUserError(err: unknown): UserError {
 export type { CurrentUnit, Guess, ImportDetection, ImportOverrides, Measurement, PotentialUnit } from '../io/types';
 export type { AnalysisSettings, FileAnalysisSettings } from './settings';
 export type { CellField, CellOrigin, ResolvedCell, SeriesCell } from './seriesCell';
-export type { SeriesAnalysis, SeriesCouple, SeriesPoint } from '../core/analysis/seriesTypes';
-export type { BaselineMethod, BaselineSpec, CoupleResult, PeakResult, PeakWindow, VoltammogramAnalysis } from '../core/analysis/types';
+export type { SeriesAnalysis, SeriesCouple } from '../core/analysis/seriesTypes';
+export type { SeriesPoint } from '../core/series/seriesPoint';
+export type { VoltammogramAnalysis } from '../core/analysis/types';
+export type { BaselineMethod, BaselineSpec } from '../core/baseline/baselineTypes';
+export type { CoupleResult } from '../core/couples/coupleTypes';
+export type { PeakResult, PeakWindow } from '../core/peaks/peakTypes';

@@ -9,7 +9,8 @@
 import { analyzeRun } from '../core/analysis/analyzeRun';
 import { analyzeSeries } from '../core/analysis/analyzeSeries';
 import type { AnalyzeRunOptions, AnalyzeRunResult, RunInput } from '../core/analysis/runTypes';
-import type { BaselineSpec, PeakWindow } from '../core/analysis/types';
+import type { BaselineSpec } from '../core/baseline/baselineTypes';
+import type { PeakWindow } from '../core/peaks/peakTypes';
 import { resultsSheetCsv, resultsSheetJson, type ResultsSheetMeta } from '../io/exportResults';
 
 export interface ExportFileSettings {

@@ -44,7 +44,7 @@ describe('analyzeSeries', () => {
   it('gives Nicholson k° for a quasi-reversible couple', () => {
     const files = [0.1, 0.1 * 1.0001].map((s, i) => ({
       fileName: `q${i}`, scanRateVPerS: s,
-      analysis: fakeAnalysis([{ epaV: 0.042, epcV: -0.042, ipaA: rev(s), ipcA: rev(s), verdict: 'sluggish' }]),
+      analysis: fakeAnalysis([{ epaV: 0.042, epcV: -0.042, ipaA: rev(s), ipcA: rev(s), verdict: 'quasi-reversible' }]),
     }));
     const r = analyzeSeries(files, { diffusionCm2PerS: 7.6e-6 });
     const k = r.couples[0]?.rateConstant;
@@ -56,7 +56,7 @@ describe('analyzeSeries', () => {
     expect(Math.abs((k?.k0CmPerS ?? 0) / k0 - 1)).toBeLessThan(1e-3);
   });
 
-  // Wang (2000) eq. 2-5; Bard & Faulkner §6.3: a one-way, broad reduction peak moving −59.16 mV per
+  // Wang (2000) eq. 2-5; Bard & Faulkner §6.3: an irreversible, broad reduction peak moving −59.16 mV per
   // decade gives α = 0.5; D then comes from the irreversible form (0.4958).
   it('uses the irreversible form with the measured α for a totally irreversible couple', () => {
     const irr = (s: number) => randlesSevcikPeakCurrent({ ...cell, diffusionCm2PerS: 7.6e-6, scanRateVPerS: s }, { form: 'irreversible', alpha: 0.5 });
@@ -64,7 +64,7 @@ describe('analyzeSeries', () => {
       fileName: `i${i}`, scanRateVPerS: s,
       analysis: fakeAnalysis([{
         epaV: null, epcV: -0.4 - irreversiblePeakShiftVPerDecade(0.5) * Math.log10(s), ipaA: null, ipcA: irr(s),
-        forward: 'cathodic', verdict: 'one-way', halfPeakWidthV: 1.857 * thermalVoltageV(298.15) / 0.5,
+        forward: 'cathodic', verdict: 'irreversible', halfPeakWidthV: 1.857 * thermalVoltageV(298.15) / 0.5,
       }]),
     }));
     const c = analyzeSeries(files, opts).couples[0];
@@ -120,13 +120,13 @@ describe('analyzeSeries', () => {
 
 describe('analyzeSeries verdict refinement', () => {
   // Wang (2000) §2-1.1.1: a reversible couple's Ep does not move with v; 30 mV/decade is kinetic.
-  it('turns a nernstian single-trace verdict into sluggish when Ep drifts with v', () => {
+  it('turns a reversible single-trace verdict into quasi-reversible when Ep drifts with v', () => {
     const files = v.map((s, i) => ({
       fileName: `d${i}`, scanRateVPerS: s,
       analysis: fakeAnalysis([{ epaV: 0.03 + 0.03 * Math.log10(s / 0.025), epcV: -0.03 - 0.03 * Math.log10(s / 0.025), ipaA: rev(s), ipcA: rev(s) }]),
     }));
     const c = analyzeSeries(files, opts).couples[0];
-    expect(c?.verdict.category).toBe('sluggish');
+    expect(c?.verdict.category).toBe('quasi-reversible');
     expect(c?.verdict.reasons.some((r) => /per decade/.test(r))).toBe(true);
   });
 });

@@ -7,21 +7,24 @@
  *   Randles–Ševčík (reversible or irreversible form by kinetic class), α, Nicholson k° per file and
  *   median, Γ and Laviron k_s for surface couples, plain diagnostics; plus warnings.
  * Sources: in the methods called (series/, kinetics/, regression/); the couple matching and the
- *   class rules are design choices documented in matchSeriesCouples.ts and seriesClassify.ts.
+ *   class rules are design choices documented in matchSeriesCouples.ts and series/classifySeriesCouple.ts.
  */
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import { AnalysisError, assertFiniteInRange } from '../errors';
 import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
 import { electroactiveAreaFromStandard } from '../series';
-import { matchSeriesCouples, median } from './matchSeriesCouples';
+import { median } from '../statistics/median';
+import { matchSeriesCouples } from './matchSeriesCouples';
 import type { CoupleRef } from './matchSeriesCouples';
-import { classifyCouple, mostCommon, suggestedElectronCount } from './seriesClassify';
+import { classifySeriesCouple, mostCommon, suggestedElectronCount } from '../series/classifySeriesCouple';
 import { describeSeriesCouple } from './seriesDiagnostics';
 import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
 import { seriesFollowUp, seriesRateConstant, seriesSurface } from './seriesKinetics';
-import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesPoint, SeriesWarning } from './seriesTypes';
-import type { CycleAnalysis, SeriesEvidence, Verdict } from './types';
+import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesWarning } from './seriesTypes';
+import type { SeriesPoint } from '../series/seriesPoint';
+import type { CycleAnalysis } from './types';
+import type { SeriesEvidence, Verdict } from '../couples/coupleTypes';
 
 export function resolveSeriesOptions(options: AnalyzeSeriesOptions): ResolvedSeriesOptions {
   const o: ResolvedSeriesOptions = {
@@ -52,7 +55,7 @@ function chooseCycle(analysis: SeriesFileInput['analysis'], cycle: number): Cycl
   return analysis.cycles.find((c) => c.index === cycle) ?? null;
 }
 
-function fwdCharge(c: CoupleRef['couple'], cycle: CycleAnalysis, direction: 'anodic' | 'cathodic'): number | null {
+function peakChargeOf(c: CoupleRef['couple'], cycle: CycleAnalysis, direction: 'anodic' | 'cathodic'): number | null {
   const k = direction === 'anodic' ? c.anodicPeak : c.cathodicPeak;
   return k === null ? null : (cycle.peaks[k]?.chargeC ?? null);
 }
@@ -72,8 +75,8 @@ function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): S
     deltaEpV: c.deltaEpV,
     ipaA: c.ipaA,
     ipcA: c.ipcA,
-    anodicChargeC: c.anodicChargeC ?? fwdCharge(c, cycle, 'anodic'),
-    cathodicChargeC: c.cathodicChargeC ?? fwdCharge(c, cycle, 'cathodic'),
+    anodicChargeC: c.anodicChargeC ?? peakChargeOf(c, cycle, 'anodic'),
+    cathodicChargeC: c.cathodicChargeC ?? peakChargeOf(c, cycle, 'cathodic'),
     forwardIpA: fwd?.heightA ?? (c.forwardDirection === 'anodic' ? c.ipaA : c.ipcA),
     forwardHalfPeakWidthV: fwd?.halfPeakWidthV ?? null,
     forwardChargeC: fwd?.chargeC ?? null,
@@ -111,7 +114,7 @@ function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>): Verdic
 function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
   const forward = first.forwardDirection;
   const logLog = fitLogLog(points);
-  const { regime, kineticClass, majority } = classifyCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
+  const { regime, kineticClass, majority } = classifySeriesCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
   const forwardFit = fitForwardAgainstSqrtScanRate(points);
   const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
   const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
@@ -126,7 +129,7 @@ function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['cou
     points,
     regime,
     kineticClass,
-    followUp: regime === 'diffusion' && majority === 'follow-up-loss' ? seriesFollowUp(points, o) : null,
+    followUp: regime === 'diffusion' && majority === 'chemically-coupled' ? seriesFollowUp(points, o) : null,
     forwardFit,
     anodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipaA),
     cathodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipcA),

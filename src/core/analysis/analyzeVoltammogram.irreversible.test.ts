@@ -23,7 +23,7 @@ describe('analyzeVoltammogram on a totally irreversible couple', () => {
     expect(c.deltaEpV!).toBeGreaterThan(0.6);
     expect(c.deltaEpV!).toBeLessThan(0.8);
     expect(Math.abs(c.cathodicHalfPeakWidthV! - (1.857 * u) / 0.5)).toBeLessThan(0.002);
-    expect(c.verdict.category).toBe('one-way');
+    expect(c.verdict.category).toBe('irreversible');
     expect(c.verdict.label).toBe('irreversible (slow electron transfer)');
     expect(c.verdict.reasons.join(' ')).toMatch(/return peak exists/);
     expect(c.verdict.reasons.join(' ')).toMatch(/αn = 0\.(49|50|51)/);

@@ -40,7 +40,7 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     expect(Math.abs(couple.ipcA! / randlesSevcikA(n, v) - 1)).toBeLessThan(0.02);
     expect(Math.abs(couple.ratio! - 1)).toBeLessThan(0.03);
     expect(Math.abs(couple.cathodicHalfPeakWidthV! - (2.2 * u) / n)).toBeLessThan(0.0015);
-    expect(couple.verdict.category).toBe('nernstian');
+    expect(couple.verdict.category).toBe('reversible');
     expect(couple.forwardDirection).toBe('cathodic');
   });
 
@@ -53,12 +53,12 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
 
   // Same sources; every diagnostic is a multiple of RT/nF, so at 50 °C ΔEp and |Ep − Ep/2| scale
   // by 323.15/298.15 (2.20 RT/F = 61.26 mV).
-  it('at 323.15 K: ΔEp vs the scaled table ±1.5 mV, |Ep − Ep/2| = 2.20 RT/F ±1.5 mV, nernstian', () => {
+  it('at 323.15 K: ΔEp vs the scaled table ±1.5 mV, |Ep − Ep/2| = 2.20 RT/F ±1.5 mV, reversible', () => {
     const hot = analyzeVoltammogram(simulatedVoltammogram({ ...base, temperatureK: 323.15 }), { temperatureK: 323.15 });
     const { couple } = firstCouple(hot);
     expect(Math.abs(couple.deltaEpV! - couple.verdict.evidence.reversibleDeltaEpAtSwitchV!)).toBeLessThan(0.0015);
     expect(Math.abs(couple.cathodicHalfPeakWidthV! - 2.2 * thermalVoltageV(323.15))).toBeLessThan(0.0015);
-    expect(couple.verdict.category).toBe('nernstian');
+    expect(couple.verdict.category).toBe('reversible');
   });
 
   // Nicholson, Anal. Chem. 38 (1966) 1406 (from memory), check-values §6: the empirical ratio from
@@ -88,14 +88,14 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
   // Sloping background: a leak of 20 µA/V added to both sweeps (16 µA across the window, as large
   // as ip) on top of 20 µF/cm² charging and 0.1 µA noise. The pre-peak line takes the slope, the
   // return baseline keeps it, and Ep is measured above it: E½ ±4 mV, ipc and ipa ±3 %.
-  it('sloping background: E½ ±4 mV, ipc and ipa vs Randles–Ševčík ±3 %, nernstian', () => {
+  it('sloping background: E½ ±4 mV, ipc and ipa vs Randles–Ševčík ±3 %, reversible', () => {
     const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 20e-6 }, { noiseA: 1e-7, seed: 4 });
     const tilted = { ...v, currentA: v.currentA.map((i, k) => i + 2e-5 * (v.potentialV[k]! + 0.1)) };
     const { couple } = firstCouple(analyzeVoltammogram(tilted));
     expect(Math.abs(couple.eHalfV!)).toBeLessThan(0.004);
     expect(Math.abs(couple.ipcA! / randlesSevcikA(1, 0.1) - 1)).toBeLessThan(0.03);
     expect(Math.abs(couple.ipaA! / randlesSevcikA(1, 0.1) - 1)).toBeLessThan(0.03);
-    expect(couple.verdict.category).toBe('nernstian');
+    expect(couple.verdict.category).toBe('reversible');
   });
 
   // Heavier noise (0.3 µA, 1.8 % of ip) on a 40 µF/cm² background, eight seeds: exactly two peaks
@@ -131,7 +131,7 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     for (const c of couples) {
       expect(Math.abs(c.ipcA! / randlesSevcikA(1, 0.1) - 1)).toBeLessThan(0.05);
       expect(Math.abs(c.ratio! - 1)).toBeLessThan(0.05);
-      expect(c.verdict.category).toBe('nernstian');
+      expect(c.verdict.category).toBe('reversible');
     }
   });
 });
@@ -154,29 +154,29 @@ describe('analyzeVoltammogram on overlapping couples', () => {
 describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', () => {
   // Nicholson 1965 Table I (check-values §5): ψ = k°/(πDnFv/RT)^½ = 0.005/0.00964 = 0.52 → n·ΔEp
   // between the ψ = 0.75 (92 mV) and ψ = 0.35 (121 mV) rows.
-  it('k° = 0.005 cm/s: ΔEp between 92 and 121 mV, verdict sluggish', () => {
+  it('k° = 0.005 cm/s: ΔEp between 92 and 121 mV, verdict quasi-reversible', () => {
     const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram({ ...base, k0CmPerS: 0.005 })));
     expect(couple.deltaEpV!).toBeGreaterThan(0.092);
     expect(couple.deltaEpV!).toBeLessThan(0.121);
-    expect(couple.verdict.category).toBe('sluggish');
+    expect(couple.verdict.category).toBe('quasi-reversible');
   });
 
   // B&F §6.3 (from memory), check-values §4: |Ep − Ep/2| = 1.857 RT/(αF) = 95.4 mV at α = 0.5;
   // irreversible ip = 0.4958 nFAC(αFvD/RT)^½ = 13.007 µA (check-values §2 worked example).
-  it('k° = 1e-5 cm/s: one-way verdict, |Ep − Ep/2| = 95.4 mV ±2 mV, ip = 13.007 µA ±2 %', () => {
+  it('k° = 1e-5 cm/s: irreversible verdict, |Ep − Ep/2| = 95.4 mV ±2 mV, ip = 13.007 µA ±2 %', () => {
     const cycle = analyzeVoltammogram(simulatedVoltammogram({ ...base, k0CmPerS: 1e-5, switchV: -0.9 })).cycles[0]!;
     const forward = cycle.couples.find((c) => c.cathodicPeak !== null)!;
-    expect(forward.verdict.category).toBe('one-way');
+    expect(forward.verdict.category).toBe('irreversible');
     expect(Math.abs(forward.cathodicHalfPeakWidthV! - (1.857 * u) / 0.5)).toBeLessThan(0.002);
     expect(Math.abs(forward.ipcA! / 13.007e-6 - 1)).toBeLessThan(0.02);
   });
 
   // Nicholson & Shain 1964 (EC): a follow-up reaction consumes the product, so the return peak is
   // smaller; with k_f = 0.5 /s and a 4 s excursion past E½ the ratio falls well below 0.8.
-  it('EC with k_f = 0.5 /s: ratio < 0.8 and verdict follow-up-loss', () => {
+  it('EC with k_f = 0.5 /s: ratio < 0.8 and verdict chemically-coupled', () => {
     const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram({ ...base, mechanism: 'EC', followUpRatePerS: 0.5 })));
     expect(couple.ratio!).toBeLessThan(0.8);
-    expect(couple.verdict.category).toBe('follow-up-loss');
+    expect(couple.verdict.category).toBe('chemically-coupled');
   });
 
   // B&F §14.3; Laviron 1974 (from memory), check-values §7: ip = n²F²AΓv/(4RT) = 0.6638 µA,

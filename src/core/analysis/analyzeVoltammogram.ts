@@ -18,7 +18,8 @@ import { toIupacCurrent } from '../conventions/currentConvention';
 import type { Voltammogram } from '../types';
 import { prepareSweepSignals, windowForSpan, type SweepSignals } from '../peaks/sweepSignals';
 import { analyzeCycle } from './analyzeCycle';
-import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, SmoothingSetting, VoltammogramAnalysis } from './types';
+import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, VoltammogramAnalysis } from './types';
+import type { SmoothingSetting } from '../smoothing/smoothingTypes';
 
 export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogramOptions = {}): VoltammogramAnalysis {
   checkVoltammogram(v);

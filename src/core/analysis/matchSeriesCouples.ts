@@ -7,7 +7,8 @@
  *   couple whose peaks drift with scan rate (slow kinetics) is still followed; otherwise it opens
  *   a new group. Groups are returned in order of their median position.
  */
-import type { CoupleResult } from './types';
+import { median } from '../statistics/median';
+import type { CoupleResult } from '../couples/coupleTypes';
 
 export interface CoupleRef {
   fileIndex: number;
@@ -18,12 +19,6 @@ export interface CoupleRef {
 /** E½ when both peaks exist, else the lone peak's potential; null when neither. */
 export function couplePositionV(c: CoupleResult): number | null {
   return c.eHalfV ?? c.epaV ?? c.epcV ?? null;
-}
-
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 ? (s[m] as number) : ((s[m - 1] as number) + (s[m] as number)) / 2;
 }
 
 export function matchSeriesCouples(
@@ -58,4 +53,3 @@ export function matchSeriesCouples(
     .map(({ g }) => g.sort((a, b) => (files[a.fileIndex]?.scanRateVPerS ?? 0) - (files[b.fileIndex]?.scanRateVPerS ?? 0)));
 }
 
-export { median };

@@ -9,7 +9,7 @@
 import { AnalysisError } from '../errors';
 import { convertPotential, findReferenceElectrode, referenceVsShe, resolveReferenceId } from '../reference';
 import type { ConversionContext, ReferenceId } from '../reference';
-import { median } from './matchSeriesCouples';
+import { median } from '../statistics/median';
 import type { AnalyzeRunOptions, RunInput, RunWarning } from './runTypes';
 import type { VoltammogramAnalysis } from './types';
 

@@ -6,7 +6,8 @@ import type { DoubleLayerCapacitanceResult } from '../series';
 import type { ReferenceId } from '../reference';
 import type { ScanRateSource, Voltammogram } from '../types';
 import type { AnalyzeSeriesOptions, SeriesAnalysis } from './seriesTypes';
-import type { AnalyzeVoltammogramOptions, CurrentConvention, VoltammogramAnalysis } from './types';
+import type { AnalyzeVoltammogramOptions, VoltammogramAnalysis } from './types';
+import type { CurrentConvention } from '../types';
 
 /** Where a file came from, for the results sheet. All optional. */
 export interface FileProvenance {

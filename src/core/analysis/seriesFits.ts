@@ -9,9 +9,10 @@ import { STANDARD_TEMPERATURE_K } from '../constants';
 import { TABLE_RANGE_MV, kineticPeakCurrentRatio, nicholsonPsi } from '../kinetics';
 import { logLogSlope, peakPotentialVsLogScanRate, randlesSevcikDiffusion } from '../series';
 import type { PeakPotentialVsLogScanRateResult } from '../series';
-import { chooseIrreversibleAlpha } from './seriesClassify';
-import type { SeriesCouple, SeriesDiffusion, SeriesKineticClass, SeriesPoint } from './seriesTypes';
-import type { PeakDirection } from './types';
+import { chooseIrreversibleAlpha } from '../series/classifySeriesCouple';
+import type { SeriesCouple, SeriesDiffusion } from './seriesTypes';
+import type { SeriesKineticClass, SeriesPoint } from '../series/seriesPoint';
+import type { PeakDirection } from '../peaks/peakTypes';
 
 export interface ResolvedSeriesOptions {
   electronCount: number;
@@ -26,10 +27,10 @@ export interface ResolvedSeriesOptions {
   matchToleranceV: number;
 }
 
-type Pick = (p: SeriesPoint) => number | null;
+type PointValue = (p: SeriesPoint) => number | null;
 
 /** Pairs (x, y) of the points where `y` is known, when at least two distinct x remain. */
-function pairs(points: SeriesPoint[], x: (p: SeriesPoint) => number, y: Pick): { x: number[]; y: number[] } | null {
+function pairs(points: SeriesPoint[], x: (p: SeriesPoint) => number, y: PointValue): { x: number[]; y: number[] } | null {
   const xs: number[] = [];
   const ys: number[] = [];
   for (const p of points) {
@@ -45,7 +46,7 @@ const sqrtV = (p: SeriesPoint) => Math.sqrt(p.scanRateVPerS);
 const scanRate = (p: SeriesPoint) => p.scanRateVPerS;
 
 /** |ip| against v^½ for the chosen current; null with fewer than two scan rates. */
-export function fitAgainstSqrtScanRate(points: SeriesPoint[], y: Pick): FitLineResult | null {
+export function fitAgainstSqrtScanRate(points: SeriesPoint[], y: PointValue): FitLineResult | null {
   const d = pairs(points, sqrtV, y);
   return d ? fitLine(d.x, d.y) : null;
 }
@@ -63,7 +64,7 @@ export function fitForwardAgainstSqrtScanRate(points: SeriesPoint[]): FitLineRes
 }
 
 /** |ip| against v; null with fewer than two scan rates. */
-export function fitAgainstScanRate(points: SeriesPoint[], y: Pick): FitLineResult | null {
+export function fitAgainstScanRate(points: SeriesPoint[], y: PointValue): FitLineResult | null {
   const d = pairs(points, scanRate, y);
   return d ? fitLine(d.x, d.y) : null;
 }
@@ -138,7 +139,7 @@ export function seriesDiffusion(
     ? corrected
       ? `quasi-reversible couple: peak currents divided by K(ψ) (Nicholson's ψ from ΔEp, α = ${alphaOf(o)}; working curve from the simulator) before the reversible form`
       : 'quasi-reversible couple: no ψ could be read, so the reversible form is used on the raw peaks and D is a lower bound'
-    : kineticClass === 'unknown' ? 'kinetic class unclear: reversible form used'
+    : kineticClass === 'inconclusive' ? 'kinetic class unclear: reversible form used'
       : fit.pointCount === 1 ? 'one scan rate only: D from a single peak through the origin, with no check of linearity' : null;
   return {
     diffusion: { diffusionCm2PerS: d, intervalCm2PerS, form: rs.form, alphaUsed: a?.alpha ?? null, alphaSource: a?.source ?? null, note },

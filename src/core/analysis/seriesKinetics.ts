@@ -10,11 +10,12 @@ import {
 } from '../kinetics';
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import { surfaceCoverageFromCharge, surfaceCoverageFromSlope } from '../series';
-import { median } from './matchSeriesCouples';
+import { median } from '../statistics/median';
 import { fitAgainstScanRate, fitPeakShift } from './seriesFits';
 import type { ResolvedSeriesOptions } from './seriesFits';
-import type { SeriesDiffusion, SeriesFollowUp, SeriesPoint, SeriesRateConstant, SeriesSurface } from './seriesTypes';
-import type { PeakDirection } from './types';
+import type { SeriesDiffusion, SeriesFollowUp, SeriesRateConstant, SeriesSurface } from './seriesTypes';
+import type { SeriesPoint } from '../series/seriesPoint';
+import type { PeakDirection } from '../peaks/peakTypes';
 
 function reasonOf(err: unknown): string {
   if (err instanceof AnalysisError) return err.message;
@@ -38,12 +39,12 @@ function returnRatio(p: SeriesPoint, forward: PeakDirection): number {
 function fileRateConstant(p: SeriesPoint, forward: PeakDirection, dO: number, dR: number, alphaMeasured: number | null, o: ResolvedSeriesOptions, chemical: boolean): PerFile {
   const none = { fileIndex: p.fileIndex, k0CmPerS: null, method: null, psi: null };
   if (p.deltaEpV === null || p.epaV === null || p.epcV === null) return { ...none, reason: 'no peak pair, so no ΔEp' };
-  if (p.verdict === 'follow-up-loss' || chemical) {
-    const which = p.verdict === 'follow-up-loss' ? 'this file' : 'most files of the series';
+  if (p.verdict === 'chemically-coupled' || chemical) {
+    const which = p.verdict === 'chemically-coupled' ? 'this file' : 'most files of the series';
     return { ...none, reason: `a follow-up reaction consumes the product (${which}) and moves the return peak, so ΔEp is not a measure of electron-transfer kinetics (Nicholson & Shain 1964)` };
   }
-  if (p.verdict === 'one-way' && returnRatio(p, forward) < 0.5) {
-    return { ...none, reason: 'the return peak is under half the forward one (one-way couple), so ΔEp is not a kinetic measure' };
+  if (p.verdict === 'irreversible' && returnRatio(p, forward) < 0.5) {
+    return { ...none, reason: 'the return peak is under half the forward one (irreversible-looking couple), so ΔEp is not a kinetic measure' };
   }
   const x25 = o.electronCount * p.deltaEpV * 1000 * (STANDARD_TEMPERATURE_K / o.temperatureK);
   try {
@@ -81,7 +82,7 @@ export function seriesRateConstant(
     return { k0CmPerS: null, perFile: [], lowerBoundCmPerS: null, diffusionOxCm2PerS: null, diffusionSource: null };
   }
   const { dO, dR } = diffusionPair(dBulk, forward, o.diffusionRatio);
-  const chemical = points.filter((p) => p.verdict === 'follow-up-loss').length * 2 > points.length;
+  const chemical = points.filter((p) => p.verdict === 'chemically-coupled').length * 2 > points.length;
   const perFile = points.map((p) => fileRateConstant(p, forward, dO, dR, alphaMeasured, o, chemical));
   // A couple that reads as reversible at most scan rates: a ΔEp a few mV past 61 mV in one file is
   // within measurement scatter, and ψ is steep there, so such stray values give no k°.

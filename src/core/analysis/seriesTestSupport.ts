@@ -3,7 +3,9 @@
  * the series layer can be tested against published equations without running the peak finder.
  * Used only by tests.
  */
-import type { CoupleResult, PeakDirection, PeakResult, VerdictCategory, VoltammogramAnalysis } from './types';
+import type { VoltammogramAnalysis } from './types';
+import type { CoupleResult, VerdictCategory } from '../couples/coupleTypes';
+import type { PeakDirection, PeakResult } from '../peaks/peakTypes';
 
 export interface FakeCouple {
   epaV: number | null;
@@ -37,7 +39,7 @@ function fakeCouple(index: number, c: FakeCouple, peaks: PeakResult[]): CoupleRe
     forwardDirection: forward, anodicPeak, cathodicPeak, anodicHalfPeakWidthV: null, cathodicHalfPeakWidthV: null,
     anodicChargeC: null, cathodicChargeC: null,
     verdict: {
-      category: c.verdict ?? 'nernstian', label: 'test', reasons: [],
+      category: c.verdict ?? 'reversible', label: 'test', reasons: [],
       evidence: {
         temperatureK: 298.15, electronCount: 1, deltaEpV: null, reversibleDeltaEpLimitV: 0.057, reversibleDeltaEpAtSwitchV: null,
         reversibleHalfPeakWidthV: 0.0565, halfPeakWidthsV: { anodic: null, cathodic: null }, ratio: null,

@@ -1,12 +1,16 @@
 /**
- * Result and option types of the scan-rate series analysis (analyzeSeries) and the whole-run
- * orchestration (analyzeRun). Units in every name; currents are positive magnitudes unless named
- * signed; potentials in V on the scale the run reports (see AnalyzeRunResult.reference).
+ * Result and option types of the scan-rate series analysis (analyzeSeries): per couple followed
+ * across the files, its fits, D, k°, Γ, k_s, k_f and the series verdict. The per-file point and the
+ * regime words live in series/seriesPoint.ts. Units in every name; currents are positive
+ * magnitudes unless named signed; potentials in V on the scale the run reports.
  */
 import type { FitLineResult } from '../regression';
 import type { LogLogReading, PeakPotentialVsLogScanRateResult, RandlesSevcikForm } from '../series';
 import type { NicholsonPsiResult } from '../kinetics';
-import type { CoupleResult, PeakDirection, Verdict, VerdictCategory, VoltammogramAnalysis } from './types';
+import type { VoltammogramAnalysis } from './types';
+import type { Verdict } from '../couples/coupleTypes';
+import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from '../series/seriesPoint';
+import type { PeakDirection } from '../peaks/peakTypes';
 
 /** One voltammogram of a series, already analysed. */
 export interface SeriesFileInput {
@@ -38,34 +42,12 @@ export interface AnalyzeSeriesOptions {
   matchToleranceV?: number;
 }
 
-/** One file's contribution to a series couple. */
-export interface SeriesPoint extends Pick<CoupleResult, 'epaV' | 'epcV' | 'eHalfV' | 'deltaEpV' | 'ipaA' | 'ipcA' | 'anodicChargeC' | 'cathodicChargeC'> {
-  fileIndex: number;
-  fileName: string;
-  scanRateVPerS: number;
-  cycle: number;
-  /** Height of the first-sweep peak (A). */
-  forwardIpA: number | null;
-  /** |Ep − Ep/2| of the forward peak (V). */
-  forwardHalfPeakWidthV: number | null;
-  /** Charge under the forward peak (C). */
-  forwardChargeC: number | null;
-  verdict: VerdictCategory;
-  /** Nicholson (1966) ratio and the switch potential (V) of the file's couple; added later. */
-  nicholsonRatio?: number | null;
-  switchPotentialV?: number | null;
-}
-
 /** First-order follow-up reaction of an EC couple (followUpRateConstant.ts). */
 export interface SeriesFollowUp {
   /** Median k_f over the files where it was determinable (1/s). */
   rateConstantPerS: number | null;
   perFile: Array<{ fileIndex: number; rateConstantPerS: number | null; lambda: number | null; reason: string | null }>;
 }
-
-/** Transport regime and kinetic class the series settles on for a couple. */
-export type SeriesRegime = 'diffusion' | 'surface';
-export type SeriesKineticClass = 'reversible' | 'quasi-reversible' | 'irreversible' | 'unknown';
 
 export interface SeriesDiffusion {
   diffusionCm2PerS: number;

@@ -3,7 +3,7 @@
  * points it spans, so every method returns the exact curve that is subtracted.
  */
 import { AnalysisError } from '../errors';
-import type { BaselineAnchor, BaselineCurve, BaselineMethod } from '../analysis/types';
+import type { BaselineAnchor, BaselineCurve, BaselineMethod } from './baselineTypes';
 
 /** Potential and current columns of a voltammogram (V, A with IUPAC sign). */
 export interface BaselineTrace {

@@ -8,7 +8,7 @@
  *   nicholsonReturnBaseline.ts; windows: findPrePeakWindow.ts.
  */
 import { AnalysisError } from '../errors';
-import type { BaselineCurve, BaselineMethod, BaselineSpec } from '../analysis/types';
+import type { BaselineCurve, BaselineMethod, BaselineSpec } from './baselineTypes';
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { baselineAt, sampleBaseline } from './baselineCurve';

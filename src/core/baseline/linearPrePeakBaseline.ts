@@ -10,7 +10,7 @@
  * Fit: ordinary least squares (ml-regression-simple-linear).
  */
 import { SimpleLinearRegression } from 'ml-regression-simple-linear';
-import type { BaselineCurve } from '../analysis/types';
+import type { BaselineCurve } from './baselineTypes';
 import { anchorAt, assertFinitePoints, assertRange, formatMv, sampleBaseline, type BaselineTrace } from './baselineCurve';
 
 export interface LinearPrePeakBaselineInput extends BaselineTrace {

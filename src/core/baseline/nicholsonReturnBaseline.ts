@@ -22,7 +22,7 @@
  *   extended decay plus the charging step on the return sweep.
  */
 import { AnalysisError } from '../errors';
-import type { BaselineCurve } from '../analysis/types';
+import type { BaselineCurve } from './baselineTypes';
 import { anchorAt, assertFinitePoints, assertRange, formatMv, sampleBaseline, type BaselineTrace } from './baselineCurve';
 
 export interface NicholsonReturnBaselineInput extends BaselineTrace {

@@ -11,7 +11,7 @@
  */
 import { PolynomialRegression } from 'ml-regression-polynomial';
 import { AnalysisError } from '../errors';
-import type { BaselineCurve } from '../analysis/types';
+import type { BaselineCurve } from './baselineTypes';
 import { anchorAt, assertFinitePoints, assertRange, formatMv, sampleBaseline, type BaselineTrace } from './baselineCurve';
 
 export interface PolynomialBaselineInput extends BaselineTrace {

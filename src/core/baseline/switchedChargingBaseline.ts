@@ -12,7 +12,7 @@
  *   point index), the pre-peak window [fitStart, fitEnd) on the return sweep. Out: the line
  *   sampled from fitStart to the end of the return sweep, method 'linear'.
  */
-import type { BaselineCurve } from '../analysis/types';
+import type { BaselineCurve } from './baselineTypes';
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { anchorAt, formatMv, sampleBaseline } from './baselineCurve';

@@ -6,7 +6,7 @@
  * Out: the line I(E) through the anchors, sampled on the span.
  */
 import { AnalysisError } from '../errors';
-import type { BaselineAnchor, BaselineCurve } from '../analysis/types';
+import type { BaselineAnchor, BaselineCurve } from './baselineTypes';
 import { assertRange, formatMv, sampleBaseline } from './baselineCurve';
 
 export interface TwoPointBaselineInput {

@@ -7,7 +7,7 @@
  *   Analytical Sciences Digital Library, "Plotting Conventions for Voltammetry" (polarographic
  *   convention) — both as in check-values.md §14.
  */
-import type { CurrentConvention } from '../analysis/types';
+import type { CurrentConvention } from '../types';
 
 export type { CurrentConvention };
 

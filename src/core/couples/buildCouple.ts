@@ -8,7 +8,8 @@
  * In: the cycle's measured peaks, the pair (indices into them), the forward direction and the
  *   sweep signals. Out: CoupleResult (currents as positive magnitudes, potentials in V).
  */
-import type { CoupleResult, PeakDirection, PeakResult } from '../analysis/types';
+import type { CoupleResult } from './coupleTypes';
+import type { PeakDirection, PeakResult } from '../peaks/peakTypes';
 import { nicholsonPeakRatio } from '../baseline/nicholsonPeakRatio';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { classifyCouple } from './classifyCouple';

@@ -9,24 +9,24 @@
  *     §14.3; Laviron, J. Electroanal. Chem. 52 (1974) 355, from memory);
  *   return/forward ratio = 1 for a chemically stable product (Wang, Analytical Electrochemistry,
  *     2nd ed. (2000) §2-1.1.1).
- * Thresholds (common practice, no source): 'nernstian' when ΔEp ≤ the switch-dependent value
- *   + 0.31·RT/nF (8/n mV at 25 °C); 'one-way' beyond 8.25·RT/nF (212/n mV at 25 °C, the last row
- *   of Nicholson's ψ table, ψ = 0.1) or with one peak only; 'follow-up-loss' when the ratio lies
+ * Thresholds (common practice, no source): 'reversible' when ΔEp ≤ the switch-dependent value
+ *   + 0.31·RT/nF (8/n mV at 25 °C); 'irreversible' beyond 8.25·RT/nF (212/n mV at 25 °C, the last row
+ *   of Nicholson's ψ table, ψ = 0.1) or with one peak only; 'chemically-coupled' when the ratio lies
  *   outside 0.8…1.2 widened by what slow electron transfer alone does to it at the measured ΔEp
  *   (kineticRatioEnvelope.ts: [0.8·low, 1.2·high]); 'adsorbed' when |ΔEp| ≤ 1.109·RT/nF and each measurable FWHM lies within
  *   ±25 % of 3.5255·RT/nF; 'adsorbed' also, at any ΔEp, when both peaks close with equal charges
  *   (surfaceWaveReasons), with the label naming slow (Laviron) electron transfer when ΔEp > 1.109·RT/nF.
  */
 import { thermalVoltageV } from '../constants';
-import type { Verdict, VerdictCategory, VerdictEvidence } from '../analysis/types';
+import type { Verdict, VerdictCategory, VerdictEvidence } from './coupleTypes';
 import { halfWidthReasons, irreversibleWidthReasons, mv, ratioBand, surfaceWaveReasons } from './classifyCoupleReasons';
 import { reversibleDeltaEpAtSwitch, reversibleDeltaEpLimitV } from './reversibleDeltaEpAtSwitch';
 
 export const VERDICT_LABELS: Record<VerdictCategory, string> = {
-  nernstian: 'reversible (diffusion, fast electron transfer)',
-  sluggish: 'quasi-reversible (diffusion, slower electron transfer)',
-  'one-way': 'irreversible (slow electron transfer, or no usable return peak)',
-  'follow-up-loss': 'chemically coupled (return peak differs from forward peak)',
+  reversible: 'reversible (diffusion, fast electron transfer)',
+  'quasi-reversible': 'quasi-reversible (diffusion, slower electron transfer)',
+  'irreversible': 'irreversible (slow electron transfer, or no usable return peak)',
+  'chemically-coupled': 'chemically coupled (return peak differs from forward peak)',
   adsorbed: 'surface-confined (adsorbed redox species)',
   inconclusive: 'not classified (the numbers do not fit one picture)',
 };
@@ -100,7 +100,7 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     if (input.returnSweepRecorded === false) {
       return verdict('inconclusive', [`no ${missing} peak can be looked for: the sweep was never reversed`], 'not classified (no return sweep recorded)');
     }
-    return verdict('one-way', [`no ${missing} partner peak was found for this wave`], 'irreversible (no return peak)');
+    return verdict('irreversible', [`no ${missing} partner peak was found for this wave`], 'irreversible (no return peak)');
   }
   const dEp = input.deltaEpV;
   const surface = surfaceWaveReasons(input, evidence, u);
@@ -115,7 +115,7 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
   const ratioReason = input.ratio === null ? 'return/forward ratio not measurable' : `return/forward peak-current ratio = ${input.ratio.toFixed(3)} (1 for a stable product)`;
   const widthReasons = halfWidthReasons(input, evidence);
   if (dEp >= 8.25 * u) {
-    return verdict('one-way', [
+    return verdict('irreversible', [
       `${dEpReason}: beyond ${mv(8.25 * u)}, the end of Nicholson's ψ table`,
       'both peaks are present: the return peak exists but lies far out, so electron transfer is slow (totally irreversible), not the product lost',
       ratioReason,
@@ -127,14 +127,14 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
   const band = ratioBand(dEp * n * (298.15 / temperatureK));
   if (input.ratio !== null && (input.ratio < band.low || input.ratio > band.high)) {
     const label = input.ratio < 1 ? 'chemically coupled (product consumed by a follow-up reaction)' : 'chemically coupled or product adsorbed (return peak larger than forward)';
-    return verdict('follow-up-loss', [`${ratioReason}: outside ${band.text}`, dEpReason, ...widthReasons], label);
+    return verdict('chemically-coupled', [`${ratioReason}: outside ${band.text}`, dEpReason, ...widthReasons], label);
   }
   const kineticRatio = input.ratio !== null && (input.ratio < 0.8 || input.ratio > 1.2) ? [`the ratio departs from 1 only as far as slow electron transfer alone explains at this ΔEp (${band.text}); no follow-up chemistry is needed`] : [];
   if (dEp < expected - 0.4 * u) {
     return verdict('inconclusive', [`${dEpReason}: smaller than diffusion theory allows, yet too large for an adsorbed layer`, ratioReason, ...kineticRatio, ...widthReasons]);
   }
-  if (dEp <= expected + 0.31 * u) return verdict('nernstian', [`${dEpReason}: within ${mv(0.31 * u)}`, ratioReason, ...kineticRatio, ...widthReasons]);
-  return verdict('sluggish', [
+  if (dEp <= expected + 0.31 * u) return verdict('reversible', [`${dEpReason}: within ${mv(0.31 * u)}`, ratioReason, ...kineticRatio, ...widthReasons]);
+  return verdict('quasi-reversible', [
     `${dEpReason}: wider by ${mv(dEp - expected)}, below the irreversible limit ${mv(8.25 * u)}`,
     ratioReason,
     ...kineticRatio,

@@ -4,7 +4,7 @@
  * Sources are named at each function; thresholds are explained in classifyCouple.ts.
  */
 import { thermalVoltageV } from '../constants';
-import type { VerdictEvidence } from '../analysis/types';
+import type { VerdictEvidence } from './coupleTypes';
 import type { ClassifyCoupleInput } from './classifyCouple';
 import { kineticRatioEnvelope } from './kineticRatioEnvelope';
 

@@ -28,12 +28,12 @@ describe('classifyCouple with kinetic asymmetry against follow-up chemistry (sim
     [0.7, 0.006],
     [0.3, 0.0025],
     [0.7, 0.0025],
-  ])('E mechanism α = %f, k° = %f cm/s (ΔEp 90–160 mV): sluggish, not follow-up-loss', (alpha, k0) => {
+  ])('E mechanism α = %f, k° = %f cm/s (ΔEp 90–160 mV): quasi-reversible, not chemically-coupled', (alpha, k0) => {
     const c = coupleOf({ k0CmPerS: k0, alpha, startV: 0.5, switchV: -0.5 });
     expect(c.deltaEpV!).toBeGreaterThan(0.09);
     expect(c.deltaEpV!).toBeLessThan(0.16);
     expect(Math.abs(c.ratio! - 1)).toBeGreaterThan(0.1);
-    expect(c.verdict.category).toBe('sluggish');
+    expect(c.verdict.category).toBe('quasi-reversible');
     if (Math.abs(c.ratio! - 1) > 0.2) expect(c.verdict.reasons.join(' ')).toMatch(/slow electron transfer alone/);
   });
 
@@ -42,10 +42,10 @@ describe('classifyCouple with kinetic asymmetry against follow-up chemistry (sim
   it.each([
     [1, 0.1, 1],
     [0.01, 0.1, 1.5],
-  ])('EC with k° = %f cm/s, v = %f V/s, kf = %f s⁻¹: ratio < 0.7 → follow-up-loss', (k0, v, kf) => {
+  ])('EC with k° = %f cm/s, v = %f V/s, kf = %f s⁻¹: ratio < 0.7 → chemically-coupled', (k0, v, kf) => {
     const c = coupleOf({ mechanism: 'EC', k0CmPerS: k0, scanRateVPerS: v, followUpRatePerS: kf, startV: 0.5, switchV: -0.5 });
     expect(c.ratio!).toBeLessThan(0.7);
-    expect(c.verdict.category).toBe('follow-up-loss');
+    expect(c.verdict.category).toBe('chemically-coupled');
     expect(c.verdict.reasons[0]).toMatch(/outside/);
   });
 });

@@ -14,16 +14,16 @@ const nernstian = classifyCouple({
 
 describe('refineVerdictWithSeries', () => {
   // check-values §8: slope 0.5 for diffusion (Randles–Ševčík, B&F §6.2).
-  it('slope 0.5 and no Ep drift keep a nernstian verdict and add reasons', () => {
+  it('slope 0.5 and no Ep drift keep a reversible verdict and add reasons', () => {
     const r = refineVerdictWithSeries(nernstian, { logLogSlope: 0.5, epaShiftVPerDecade: 0.001, count: 5 });
-    expect(r.category).toBe('nernstian');
+    expect(r.category).toBe('reversible');
     expect(r.reasons.length).toBe(nernstian.reasons.length + 2);
     expect(nernstian.reasons.length).toBeLessThan(r.reasons.length);
   });
 
   // Wang (2000) §2-1.1.1: reversible Ep does not depend on v; 30 mV/decade is kinetic.
-  it('an Ep drift of 30 mV per decade turns nernstian into sluggish', () => {
-    expect(refineVerdictWithSeries(nernstian, { epcShiftVPerDecade: -0.03 }).category).toBe('sluggish');
+  it('an Ep drift of 30 mV per decade turns reversible into quasi-reversible', () => {
+    expect(refineVerdictWithSeries(nernstian, { epcShiftVPerDecade: -0.03 }).category).toBe('quasi-reversible');
   });
 
   // check-values §8: slope 1 for a surface-confined species.

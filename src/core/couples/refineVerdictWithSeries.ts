@@ -11,7 +11,7 @@
  * In: the verdict and whatever evidence the series has. Out: a new verdict; the input is unchanged.
  */
 import { thermalVoltageV } from '../constants';
-import type { SeriesEvidence, Verdict, VerdictCategory } from '../analysis/types';
+import type { SeriesEvidence, Verdict, VerdictCategory } from './coupleTypes';
 import { VERDICT_LABELS } from './classifyCouple';
 
 export function refineVerdictWithSeries(verdict: Verdict, evidence: SeriesEvidence): Verdict {
@@ -44,7 +44,7 @@ export function refineVerdictWithSeries(verdict: Verdict, evidence: SeriesEviden
   if (drift !== null) {
     const limit = (0.4 * Math.LN10 * thermalVoltageV(temperatureK)) / (2 * n);
     const text = `Ep moves ${(drift * 1000).toFixed(1)} mV per decade of scan rate${count}`;
-    if (drift > limit && category === 'nernstian') change('sluggish', `${text}: a reversible couple's Ep does not move (limit used ${(limit * 1000).toFixed(1)} mV)`);
+    if (drift > limit && category === 'reversible') change('quasi-reversible', `${text}: a reversible couple's Ep does not move (limit used ${(limit * 1000).toFixed(1)} mV)`);
     else if (drift > limit) reasons.push(`${text}: kinetic control at the faster rates`);
     else reasons.push(`${text}: essentially constant, as for fast electron transfer`);
   }

@@ -38,7 +38,7 @@ describe('followUpRateConstant', () => {
   it('series of four scan rates: k_f = 1 1/s within 10 %', () => {
     const files = [0.1, 0.2, 0.5, 1].map((v) => ({ fileName: `ec_${v}`, scanRateVPerS: v, analysis: analyzeVoltammogram(ec(1, v)) }));
     const c = analyzeSeries(files).couples[0]!;
-    expect(c.verdict.category).toBe('follow-up-loss');
+    expect(c.verdict.category).toBe('chemically-coupled');
     expect(Math.abs(c.followUp!.rateConstantPerS! - 1)).toBeLessThan(0.1);
     expect(c.diagnostics.join(' ')).toMatch(/k_f = 1\.\d+e\+0 1\/s/);
   });

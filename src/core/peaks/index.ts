@@ -3,7 +3,7 @@ export { findProminentMaxima } from './findProminentMaxima';
 export type { FindProminentMaximaOptions, ProminentMaximum } from './findProminentMaxima';
 export { findShoulders } from './findShoulders';
 export type { FindShouldersOptions, Shoulder } from './findShoulders';
-export { madSecondDifferenceNoise, median } from './madSecondDifferenceNoise';
+export { madSecondDifferenceNoise } from './madSecondDifferenceNoise';
 export type { MadSecondDifferenceNoiseOptions } from './madSecondDifferenceNoise';
 export { refinePeakQuadratic } from './refinePeakQuadratic';
 export type { QuadraticVertex, RefinePeakQuadraticInput, RefinePeakQuadraticOptions } from './refinePeakQuadratic';

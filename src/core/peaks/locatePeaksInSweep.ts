@@ -10,7 +10,7 @@
  *   point inside each, flagged 'low' confidence when it sits on the window edge.
  * Thresholds (common practice, no source): 'high' confidence from 3× the minimum prominence.
  */
-import type { PeakConfidence, PeakDirection, PeakWindow } from '../analysis/types';
+import type { PeakConfidence, PeakDirection, PeakWindow } from './peakTypes';
 import { savitzkyGolayDerivative } from '../smoothing/savitzkyGolaySmooth';
 import { findProminentMaxima, type ProminentMaximum } from './findProminentMaxima';
 import { findShoulders, type Shoulder } from './findShoulders';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { madSecondDifferenceNoise, median } from './madSecondDifferenceNoise';
+import { madSecondDifferenceNoise } from './madSecondDifferenceNoise';
+import { median } from '../statistics/median';
 import { seededGaussian } from './simulatedVoltammogram';
 
 

@@ -9,6 +9,7 @@
  *   curvature, which is small against the noise when the sampling is dense; peaks and vertices
  *   barely move the median.
  */
+import { medianOfSorted } from '../statistics/median';
 import { AnalysisError } from '../errors';
 
 export interface MadSecondDifferenceNoiseOptions {
@@ -31,20 +32,8 @@ export function madSecondDifferenceNoise(currentA: ArrayLike<number>, options: M
   if (count === 0) throw new AnalysisError('NON_FINITE', 'no finite second differences for the noise estimate');
   // Typed arrays sort numerically without a comparator, several times faster on long traces.
   const diffs = d.subarray(0, count).sort();
-  const med = middleOfSorted(diffs);
+  const med = medianOfSorted(diffs);
   for (let i = 0; i < count; i++) diffs[i] = Math.abs(diffs[i]! - med);
-  const mad = middleOfSorted(diffs.sort());
+  const mad = medianOfSorted(diffs.sort());
   return (1.4826 * mad) / Math.sqrt(6);
-}
-
-function middleOfSorted(values: Float64Array): number {
-  const m = values.length >> 1;
-  return values.length % 2 ? values[m]! : (values[m - 1]! + values[m]!) / 2;
-}
-
-/** Median of a non-empty list (the list is sorted in place). */
-export function median(values: number[]): number {
-  values.sort((a, b) => a - b);
-  const m = values.length >> 1;
-  return values.length % 2 ? (values[m] as number) : ((values[m - 1] as number) + (values[m] as number)) / 2;
 }

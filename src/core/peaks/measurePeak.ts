@@ -15,7 +15,8 @@
  *   baseline (Ep is then re-measured above the background). Out: the PeakResult, or null when
  *   the corrected height is not positive (the peak does not rise above its own baseline).
  */
-import type { BaselineCurve, PeakResult } from '../analysis/types';
+import type { BaselineCurve } from '../baseline/baselineTypes';
+import type { PeakResult } from './peakTypes';
 import { baselineAt } from '../baseline/baselineCurve';
 import type { PeakCandidate } from './locatePeaksInSweep';
 import type { SweepSignals } from './sweepSignals';

@@ -7,7 +7,7 @@
  *   (madSecondDifferenceNoise.ts). Time when the file has none: cumulative |ΔE|/v (exact for a
  *   linear sweep at constant rate).
  */
-import type { SmoothingSetting } from '../analysis/types';
+import type { SmoothingSetting } from '../smoothing/smoothingTypes';
 import type { SweepSegment } from '../types';
 import { savitzkyGolayDerivative, savitzkyGolaySmooth } from '../smoothing/savitzkyGolaySmooth';
 import { madSecondDifferenceNoise } from './madSecondDifferenceNoise';

@@ -6,3 +6,5 @@ export * from './peakPotentialVsLogScanRate';
 export * from './electroactiveAreaFromStandard';
 export * from './doubleLayerCapacitance';
 export * from './chargingCurrentGap';
+export * from './classifySeriesCouple';
+export type * from './seriesPoint';

@@ -16,8 +16,8 @@ import { factorThomasFromBulkSide, substituteTowardsBulk, type ThomasFactor } fr
 
 export class Bdf2DiffusionSpecies {
   /** Concentrations at the latest completed step, mol/cm³ (nodes 0 … N−1). */
-  current: Float64Array;
-  private previous: Float64Array;
+  latestMolPerCm3: Float64Array;
+  private previousMolPerCm3: Float64Array;
   private readonly u: Float64Array;
   private readonly factorBdf1: ThomasFactor;
   private readonly factorBdf2: ThomasFactor;
@@ -37,8 +37,8 @@ export class Bdf2DiffusionSpecies {
     private readonly dtS: number,
   ) {
     const n = grid.volumeCm.length;
-    this.current = new Float64Array(n).fill(bulkMolPerCm3);
-    this.previous = new Float64Array(n).fill(bulkMolPerCm3);
+    this.latestMolPerCm3 = new Float64Array(n).fill(bulkMolPerCm3);
+    this.previousMolPerCm3 = new Float64Array(n).fill(bulkMolPerCm3);
     this.u = new Float64Array(n);
     this.factorBdf1 = this.factor(diffusionCm2PerS, decayRatePerS, 1 / dtS);
     this.factorBdf2 = this.factor(diffusionCm2PerS, decayRatePerS, 1.5 / dtS);
@@ -71,8 +71,8 @@ export class Bdf2DiffusionSpecies {
     const f = bdf2 ? this.factorBdf2 : this.factorBdf1;
     this.active = f;
     const v = this.grid.volumeCm;
-    const c = this.current;
-    const p = this.previous;
+    const c = this.latestMolPerCm3;
+    const p = this.previousMolPerCm3;
     const u = this.u;
     const upper = f.upper;
     const invDen = f.inverseDenominator;
@@ -91,11 +91,11 @@ export class Bdf2DiffusionSpecies {
 
   /** Completes the step once the flux into the electrode, q (mol cm⁻² s⁻¹), is known. */
   finishStep(fluxIntoElectrode: number): void {
-    // Swap buffers: the old "current" becomes the history, the new solution overwrites the older one.
-    const older = this.previous;
-    this.previous = this.current;
-    this.current = older;
-    substituteTowardsBulk(this.active, this.u, this.intercept - fluxIntoElectrode * this.slope, this.current);
+    // Swap buffers: the latest profile becomes the history, the new solution overwrites the older one.
+    const older = this.previousMolPerCm3;
+    this.previousMolPerCm3 = this.latestMolPerCm3;
+    this.latestMolPerCm3 = older;
+    substituteTowardsBulk(this.active, this.u, this.intercept - fluxIntoElectrode * this.slope, this.latestMolPerCm3);
     this.steps++;
   }
 }

@@ -60,6 +60,6 @@ export class DiffusionCoupleModel implements FaradaicModel {
 
   /** Surface concentrations after the last step, mol/cm³ (for diagnostics and tests). */
   surfaceConcentrations(): { oxidisedMolPerCm3: number; reducedMolPerCm3: number } {
-    return { oxidisedMolPerCm3: this.oxidised.current[0] as number, reducedMolPerCm3: this.reduced.current[0] as number };
+    return { oxidisedMolPerCm3: this.oxidised.latestMolPerCm3[0] as number, reducedMolPerCm3: this.reduced.latestMolPerCm3[0] as number };
   }
 }

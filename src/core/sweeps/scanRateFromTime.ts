@@ -10,6 +10,7 @@
  * move the result (robust combination: common practice, no source). Segments shorter than
  * `minPoints` points or whose time does not advance are left out.
  */
+import { median } from '../statistics/median';
 import { AnalysisError, assertSameLength } from '../errors';
 import type { SweepSegment } from '../types';
 
@@ -43,11 +44,9 @@ export function scanRateFromTime(
   if (rates.length === 0) {
     throw new AnalysisError('TOO_FEW_POINTS', `no sweep segment has ${minPoints} or more points with advancing time, so the time column gives no scan rate`);
   }
-  const sorted = [...rates].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  const median = sorted.length % 2 ? (sorted[mid] as number) : ((sorted[mid - 1] as number) + (sorted[mid] as number)) / 2;
-  const spread = ((sorted[sorted.length - 1] as number) - (sorted[0] as number)) / median;
-  return { scanRateVPerS: median, perSegmentVPerS: rates, relativeSpread: spread };
+  const middle = median(rates);
+  const spread = (Math.max(...rates) - Math.min(...rates)) / middle;
+  return { scanRateVPerS: middle, perSegmentVPerS: rates, relativeSpread: spread };
 }
 
 /** Least-squares slope of y on x over [start, end); null when x does not vary or is not finite. */

@@ -6,7 +6,8 @@
  */
 import type { Data, Layout } from 'plotly.js-dist-min';
 import type { FitLineResult } from '../../core/regression/fitLine';
-import type { SeriesCouple, SeriesPoint } from '../../core/analysis/seriesTypes';
+import type { SeriesCouple } from '../../core/analysis/seriesTypes';
+import type { SeriesPoint } from '../../core/series/seriesPoint';
 import { chooseCurrentScale } from './currentScale';
 import { baseFont, markers, palette } from './palette';
 

@@ -5,7 +5,8 @@
  * current up with potential increasing to the left (from memory).
  */
 import { describe, expect, it } from 'vitest';
-import type { PeakResult, VoltammogramAnalysis } from '../../core/analysis/types';
+import type { VoltammogramAnalysis } from '../../core/analysis/types';
+import type { PeakResult } from '../../core/peaks/peakTypes';
 import { buildTraceFigure, type TraceFigureInput } from './traceFigure';
 
 const potentialV = Float64Array.from([0, 0.1, 0.2, 0.1, 0]);

@@ -6,7 +6,8 @@
  * a potential axis increasing to the left. Pure: no DOM, no Plotly import.
  */
 import type { Data, Layout, Shape } from 'plotly.js-dist-min';
-import type { PeakResult, PeakWindow, VoltammogramAnalysis } from '../../core/analysis/types';
+import type { VoltammogramAnalysis } from '../../core/analysis/types';
+import type { PeakResult, PeakWindow } from '../../core/peaks/peakTypes';
 import type { CycleRange } from '../../core/types';
 import { chooseCurrentScale, maxAbs, type UnitScale } from './currentScale';
 import { decimateMinMax } from './decimate';

@@ -8,8 +8,8 @@
  *   - where most files have a peak pair, the median n·ΔEp (scaled to 25 °C) decides first: above
  *     212 mV (the end of Nicholson's 1965 table) irreversible, above 65 mV (ψ below 5 in the same
  *     table) quasi-reversible; otherwise the single-trace verdicts decide;
- *   - 'sluggish' couples with median n·ΔEp above 212 mV are irreversible, quasi-reversible otherwise;
- *   - a one-way couple is irreversible when its forward peak is broader than 1.25× the reversible
+ *   - 'quasi-reversible' couples with median n·ΔEp above 212 mV are irreversible, quasi-reversible otherwise;
+ *   - an irreversible-looking couple is irreversible when its forward peak is broader than 1.25× the reversible
  *     |Ep − Ep/2| = 2.20·RT/nF (Nicholson & Shain 1964; the 1.25 margin is common practice, no
  *     source); otherwise the loss of the return peak is put down to chemistry and the forward
  *     peak is treated as reversible.
@@ -17,10 +17,10 @@
  *   else from |Ep − Ep/2| = 1.857·RT/(α nₐ F) (Bard & Faulkner 2nd ed. §6.3, from memory); else 0.5.
  */
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
-import type { PeakPotentialVsLogScanRateResult } from '../series';
-import { median } from './matchSeriesCouples';
-import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from './seriesTypes';
-import type { VerdictCategory } from './types';
+import type { PeakPotentialVsLogScanRateResult } from './peakPotentialVsLogScanRate';
+import { median } from '../statistics/median';
+import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from './seriesPoint';
+import type { VerdictCategory } from '../couples/coupleTypes';
 
 export function mostCommon(categories: VerdictCategory[]): VerdictCategory {
   const counts = new Map<VerdictCategory, number>();
@@ -31,7 +31,7 @@ export function mostCommon(categories: VerdictCategory[]): VerdictCategory {
   return best;
 }
 
-export function classifyCouple(
+export function classifySeriesCouple(
   points: SeriesPoint[],
   electronCount: number,
   temperatureK: number,
@@ -51,17 +51,17 @@ export function classifyCouple(
     if (d > 0.065) return { regime: 'diffusion', kineticClass: 'quasi-reversible', majority };
   }
   switch (majority) {
-    case 'nernstian':
-    case 'follow-up-loss':
+    case 'reversible':
+    case 'chemically-coupled':
       return { regime: 'diffusion', kineticClass: 'reversible', majority };
-    case 'sluggish':
+    case 'quasi-reversible':
       return { regime: 'diffusion', kineticClass: deltas.length && median(deltas) > 0.212 ? 'irreversible' : 'quasi-reversible', majority };
-    case 'one-way': {
+    case 'irreversible': {
       const broad = widths.length > 0 && median(widths) > 1.25 * (2.2 * rt) / electronCount;
       return { regime: 'diffusion', kineticClass: broad ? 'irreversible' : 'reversible', majority };
     }
     default:
-      return { regime: 'diffusion', kineticClass: 'unknown', majority };
+      return { regime: 'diffusion', kineticClass: 'inconclusive', majority };
   }
 }
 
@@ -70,16 +70,16 @@ export function classifyCouple(
  * stays within 1.109·RT/F (28.5 mV, as for a Nernstian layer whose ΔEp is 0, Bard & Faulkner 2nd
  * ed. §14.3, from memory) at every rate; 'quasi-reversible' (slow electron transfer in Laviron's
  * sense, J. Electroanal. Chem. 101 (1979) 19) when it exceeds that at the fastest rate and grows
- * by 20 mV or more from the slowest (margin: common practice, no source); 'unknown' otherwise.
+ * by 20 mV or more from the slowest (margin: common practice, no source); 'inconclusive' otherwise.
  */
 export function surfaceKinetics(points: SeriesPoint[], electronCount: number, temperatureK: number): SeriesKineticClass {
   const byRate = points.filter((p) => p.deltaEpV !== null).sort((a, b) => a.scanRateVPerS - b.scanRateVPerS);
-  if (!byRate.length) return 'unknown';
+  if (!byRate.length) return 'inconclusive';
   const x = byRate.map((p) => electronCount * p.deltaEpV! * (STANDARD_TEMPERATURE_K / temperatureK));
   const limit = 1.109 * thermalVoltageV(STANDARD_TEMPERATURE_K);
   if (x.every((d) => Math.abs(d) <= limit)) return 'reversible';
   const grows = byRate.length >= 2 && x[x.length - 1]! > limit && x[x.length - 1]! - x[0]! >= 0.02;
-  return grows ? 'quasi-reversible' : 'unknown';
+  return grows ? 'quasi-reversible' : 'inconclusive';
 }
 
 /** α·nₐ from the forward peak's |Ep − Ep/2| (Bard & Faulkner §6.3: 1.857·RT/(α nₐ F)). */

@@ -1,32 +1,32 @@
 import { describe, expect, it } from 'vitest';
 import { thermalVoltageV } from '../constants';
-import { alphaFromHalfPeakWidth, chooseIrreversibleAlpha, classifyCouple, suggestedElectronCount, surfaceKinetics } from './seriesClassify';
-import type { SeriesPoint } from './seriesTypes';
+import { alphaFromHalfPeakWidth, chooseIrreversibleAlpha, classifySeriesCouple, suggestedElectronCount, surfaceKinetics } from './classifySeriesCouple';
+import type { SeriesPoint } from './seriesPoint';
 
 function point(over: Partial<SeriesPoint>): SeriesPoint {
   return {
     fileIndex: 0, fileName: 'f', scanRateVPerS: 0.1, cycle: 1, epaV: 0.03, epcV: -0.03, eHalfV: 0, deltaEpV: 0.06, ipaA: 1e-6, ipcA: 1e-6,
-    anodicChargeC: null, cathodicChargeC: null, forwardIpA: 1e-6, forwardHalfPeakWidthV: null, forwardChargeC: null, verdict: 'nernstian', ...over,
+    anodicChargeC: null, cathodicChargeC: null, forwardIpA: 1e-6, forwardHalfPeakWidthV: null, forwardChargeC: null, verdict: 'reversible', ...over,
   };
 }
 
-describe('classifyCouple', () => {
+describe('classifySeriesCouple', () => {
   // End of Nicholson's 1965 table: n·ΔEp = 212 mV; beyond it the couple is treated as irreversible.
-  it('splits sluggish couples at n·ΔEp = 212 mV', () => {
-    expect(classifyCouple([point({ verdict: 'sluggish', deltaEpV: 0.15 })], 1, 298.15).kineticClass).toBe('quasi-reversible');
-    expect(classifyCouple([point({ verdict: 'sluggish', deltaEpV: 0.3 })], 1, 298.15).kineticClass).toBe('irreversible');
+  it('splits quasi-reversible couples at n·ΔEp = 212 mV', () => {
+    expect(classifySeriesCouple([point({ verdict: 'quasi-reversible', deltaEpV: 0.15 })], 1, 298.15).kineticClass).toBe('quasi-reversible');
+    expect(classifySeriesCouple([point({ verdict: 'quasi-reversible', deltaEpV: 0.3 })], 1, 298.15).kineticClass).toBe('irreversible');
   });
   // Nicholson & Shain 1964: reversible |Ep − Ep/2| = 2.20 RT/nF (56.5 mV); irreversible is wider.
-  it('calls a broad one-way peak irreversible and a narrow one reversible', () => {
+  it('calls a broad irreversible-looking peak irreversible and a narrow one reversible', () => {
     const rt = thermalVoltageV(298.15);
-    expect(classifyCouple([point({ verdict: 'one-way', forwardHalfPeakWidthV: 3.7 * rt })], 1, 298.15).kineticClass).toBe('irreversible');
-    expect(classifyCouple([point({ verdict: 'one-way', forwardHalfPeakWidthV: 2.2 * rt })], 1, 298.15).kineticClass).toBe('reversible');
+    expect(classifySeriesCouple([point({ verdict: 'irreversible', forwardHalfPeakWidthV: 3.7 * rt })], 1, 298.15).kineticClass).toBe('irreversible');
+    expect(classifySeriesCouple([point({ verdict: 'irreversible', forwardHalfPeakWidthV: 2.2 * rt })], 1, 298.15).kineticClass).toBe('reversible');
   });
   // Laviron 1974: ip ∝ v for a surface couple; a log–log slope near 1 over ≥ 3 scan rates wins.
   it('uses the log–log slope to recognise a surface couple', () => {
-    const pts = [0.1, 1, 10].map((s) => point({ scanRateVPerS: s, verdict: 'sluggish', deltaEpV: 0.1 }));
-    expect(classifyCouple(pts, 1, 298.15, 0.97).regime).toBe('surface');
-    expect(classifyCouple(pts, 1, 298.15, 0.5).regime).toBe('diffusion');
+    const pts = [0.1, 1, 10].map((s) => point({ scanRateVPerS: s, verdict: 'quasi-reversible', deltaEpV: 0.1 }));
+    expect(classifySeriesCouple(pts, 1, 298.15, 0.97).regime).toBe('surface');
+    expect(classifySeriesCouple(pts, 1, 298.15, 0.5).regime).toBe('diffusion');
   });
 });
 
@@ -41,14 +41,14 @@ describe('chooseIrreversibleAlpha', () => {
   });
 });
 
-describe('classifyCouple, peak separation first', () => {
+describe('classifySeriesCouple, peak separation first', () => {
   // Nicholson 1965 table (from memory): ψ = 5 at 65 mV; a wider median ΔEp means slow transfer,
   // whatever label the single traces carry.
   it('calls a 90 mV couple quasi-reversible even when the traces say follow-up loss', () => {
-    const pts = [0.1, 0.2].map((s) => point({ scanRateVPerS: s, verdict: 'follow-up-loss', deltaEpV: 0.09 }));
-    expect(classifyCouple(pts, 1, 298.15).kineticClass).toBe('quasi-reversible');
-    const rev = [0.1, 0.2].map((s) => point({ scanRateVPerS: s, verdict: 'follow-up-loss', deltaEpV: 0.059 }));
-    expect(classifyCouple(rev, 1, 298.15).kineticClass).toBe('reversible');
+    const pts = [0.1, 0.2].map((s) => point({ scanRateVPerS: s, verdict: 'chemically-coupled', deltaEpV: 0.09 }));
+    expect(classifySeriesCouple(pts, 1, 298.15).kineticClass).toBe('quasi-reversible');
+    const rev = [0.1, 0.2].map((s) => point({ scanRateVPerS: s, verdict: 'chemically-coupled', deltaEpV: 0.059 }));
+    expect(classifySeriesCouple(rev, 1, 298.15).kineticClass).toBe('reversible');
   });
 });
 

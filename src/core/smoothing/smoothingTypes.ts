@@ -1,0 +1,6 @@
+/** Smoothing setting; `window` is an odd point count, `order` < window. */
+export interface SmoothingSetting {
+  window: number;
+  order: number;
+}
+
