@@ -9,10 +9,11 @@
 import { performance } from 'node:perf_hooks';
 import { simulatedVoltammogram } from '../src/core/peaks/simulatedVoltammogram';
 import { savitzkyGolayCoefficients, savitzkyGolaySmooth } from '../src/core/smoothing';
+import type { RunInput } from '../src/core/analysis/runTypes';
 import type { Voltammogram } from '../src/core/types';
-import type { Measurement } from '../src/io/types';
+import { cellValuesOf, methodOptionsOf } from '../src/state/runInput';
 import { defaultCell } from '../src/state/seriesCell';
-import { defaultSettings, emptyFileSettings, toAnalyzeOptions } from '../src/state/settings';
+import { defaultSettings } from '../src/state/settings';
 import { handlers, type HandlerContext } from '../src/worker/handlers';
 import { bigCvTrace, smallCvFiles, traceCsv } from './scaleData';
 import { medianMs } from './timing';
@@ -20,15 +21,12 @@ import type { BenchRow } from './types';
 
 const SMALL_FILES = 120;
 const BIG_ROWS = 1_000_000;
-/** The app's analysis options for a file with default settings and no per-file choices. */
-const OPTIONS = toAnalyzeOptions(defaultSettings, emptyFileSettings, defaultCell(defaultSettings));
+/** The app's run input for one file with default settings and no per-file choices. */
+function runOf(fileName: string, voltammogram: Voltammogram): RunInput {
+  return { files: [{ fileName, voltammogram }], cells: { 'series 1': cellValuesOf(defaultCell(defaultSettings)) }, method: methodOptionsOf(defaultSettings) };
+}
 
 const context = (): HandlerContext => ({ progress: () => undefined, signal: new AbortController().signal });
-
-function asVoltammogram(m: Measurement): Voltammogram {
-  const { potentialV, currentA, timeS, segments, cycles, scanRateVPerS, scanRateSource } = m;
-  return { potentialV, currentA, timeS, segments, cycles, scanRateVPerS, scanRateSource };
-}
 
 /** What the app does per file: read it (import request), then analyse it (analyze request). */
 async function importAndAnalyse(name: string, text: string): Promise<{ importMs: number; analyseMs: number; points: number }> {
@@ -36,14 +34,14 @@ async function importAndAnalyse(name: string, text: string): Promise<{ importMs:
   const t0 = performance.now();
   const read = await handlers.import({ fileName: name, data, overrides: {} }, context());
   const t1 = performance.now();
-  handlers.analyze({ voltammogram: asVoltammogram(read.measurement), options: OPTIONS, resistanceOhm: 0 }, context());
+  handlers.runFiles({ run: runOf(name, read.measurement) }, context());
   return { importMs: t1 - t0, analyseMs: performance.now() - t1, points: read.measurement.potentialV.length };
 }
 
 /** Per-point analysis cost of a 2,001-point trace (µs), median of 15 after warm-up. */
 function smallTracePerPointUs(): number {
   const v = simulatedVoltammogram({ startV: 0.5, switchV: -0.5, stepV: 0.001, k0CmPerS: Infinity }, { noiseA: 2e-8, seed: 3 });
-  const ms = medianMs(() => handlers.analyze({ voltammogram: v, options: OPTIONS, resistanceOhm: 0 }, context()));
+  const ms = medianMs(() => handlers.runFiles({ run: runOf('small', v) }, context()));
   return (ms * 1000) / v.potentialV.length;
 }
 

@@ -119,9 +119,9 @@ describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysi
   async function run(extraArgv: string[], base: string[] = ['--json']): Promise<Contract> {
     const parsed = parseArgs([folder, ...base, ...extraArgv], { ...ANALYSIS_OPTION_SPEC, json: { value: false }, ref: { value: true }, area: { value: true } });
     const args = { files: [folder], overrides: {}, json: true, inspect: false, ...(optionString(parsed, 'ref') ? { referenceElectrode: optionString(parsed, 'ref') as string } : {}) };
-    const { measurements } = readInputs([folder]);
+    const read = readInputs([folder]);
     let out = '';
-    const code = runAnalysis(measurements, args, { stdout: (t) => { out += t; }, stderr: () => undefined }, parseAnalysisExtras(parsed));
+    const code = runAnalysis(read, args, { stdout: (t) => { out += t; }, stderr: () => undefined }, parseAnalysisExtras(parsed));
     expect(code).toBe(0);
     return JSON.parse(out) as Contract;
   }

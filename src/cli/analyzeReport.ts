@@ -1,32 +1,34 @@
 /**
- * The analysis branch of `halfwave analyze`: turns the imported measurements and the parsed
- * options into one analysis run (src/core/analysis/analyzeRun.ts) and prints it as the JSON
- * contract (--json), as a readable table, and/or writes the results sheet (--csv FILE).
+ * The analysis branch of `halfwave analyze`: groups the files into scan-rate series as the screen
+ * does, turns them and the parsed options into one analysis run (src/core/analysis/analyzeRun.ts)
+ * and prints it as the JSON contract (--json), as a readable table, and/or writes the results
+ * sheet (--csv FILE).
  * Unit conversion at this edge only: mM → mol/cm³ and °C → K happened in parseAnalyzeArgs; here
  * --cdl-at is in V, --ru in Ω, --diffusion in cm²/s.
  */
-import { readFileSync, writeFileSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import { analyzeRun } from '../core/analysis/analyzeRun';
-import type { AnalyzeRunOptions, InternalStandardSource, RunInput } from '../core/analysis/runTypes';
+import type { CellValues, InternalStandardSource, RunFile, RunInput } from '../core/analysis/runTypes';
 import type { CurrentConvention } from '../core/types';
-import { sha256Hex } from '../core/provenance/sha256';
-import { delimiterName } from '../io';
-import type { Measurement } from '../io';
+import { cellFromHeaders, describeLayout, groupIntoSeries, SERIES_GROUPINGS } from '../io';
+import type { Measurement, SeriesGrouping } from '../io';
+import { SOFTWARE } from '../version';
 import { resultsSheetCsv, resultsSheetJson } from '../io/exportResults';
 import { optionNumberOrUndefined, optionString } from './args';
 import type { OptionSpec, ParsedArgs } from './args';
 import type { CliIo } from './command';
 import type { AnalyzeArgs } from './commands/analyze';
 import { UsageError } from './errors';
-import { analyzeContract } from './analyzeContract';
+import { runContract } from '../io';
 import { analyzeText } from './analyzeText';
-import { expandPaths } from './readInputs';
+import type { InputsRead, ReadFile } from './readInputs';
 
 /** Analysis options beyond the fixed contract; `analyze` must accept them in its option table. */
 export const ANALYSIS_OPTION_SPEC: Record<string, OptionSpec> = {
   'from-ref': { value: true }, alpha: { value: true }, ph: { value: true }, ru: { value: true },
   'out-convention': { value: true }, diffusion: { value: true }, 'd-ratio': { value: true }, 'cdl-at': { value: true },
   'fc-near': { value: true }, 'fc-file': { value: true }, 'fc-value': { value: true }, cycle: { value: true }, 'json-sheet': { value: true },
+  'series-by': { value: true },
 };
 
 export const ANALYSIS_OPTION_HELP = `Further analysis options:
@@ -46,6 +48,9 @@ export const ANALYSIS_OPTION_HELP = `Further analysis options:
   --cdl-at V            potential (output scale) of a featureless region: double-layer capacitance
   --cycle N             cycle used for the series (default 1)
   --json-sheet FILE     also write the full results sheet as JSON
+  --series-by HOW       how files form scan-rate series: auto (default: by folder, a folder of
+                        several experiments split by common file-name stem), folder, stem, or one
+                        (every file given forms one series)
 Mercury reference electrodes (SCE, MSE, Hg/HgO) contain mercury: follow your local safety and
 disposal rules.
 `;
@@ -62,6 +67,7 @@ export interface AnalysisExtras {
   internalStandard?: InternalStandardSource;
   cycle?: number;
   jsonSheetPath?: string;
+  seriesBy?: SeriesGrouping;
 }
 
 function internalStandardOf(a: ParsedArgs, fromRef: string | undefined): InternalStandardSource | undefined {
@@ -99,75 +105,65 @@ export function parseAnalysisExtras(a: ParsedArgs): AnalysisExtras {
   if (std) out.internalStandard = std;
   const sheet = optionString(a, 'json-sheet');
   if (sheet !== undefined) out.jsonSheetPath = sheet;
+  const by = optionString(a, 'series-by');
+  if (by !== undefined) {
+    if (!SERIES_GROUPINGS.includes(by as SeriesGrouping)) throw new UsageError(`--series-by must be one of ${SERIES_GROUPINGS.join(', ')}, got "${by}"`);
+    out.seriesBy = by as SeriesGrouping;
+  }
   return out;
 }
 
-function layoutOf(m: Measurement): string {
-  const d = m.detection;
-  const cols = d.columns.filter((c) => c.role !== 'other').map((c) => `${c.role}=${c.name}${c.unit ? ` [${c.unit}]` : ''}`).join(', ');
-  return `${delimiterName(d.delimiter.value)}-separated, decimal '${d.decimalMark.value}', header line ${d.headerLine.value ?? 'none'}, ${cols}, ${d.rowsRead} rows (${d.rowsSkipped} skipped), ${m.currentConvention} currents in the file`;
+/** Each file read once, grouped into series as the screen groups them (io/groupIntoSeries.ts). */
+export function runFilesOf(read: InputsRead, extras: AnalysisExtras): RunFile[] {
+  const fc = extras.internalStandard?.kind === 'measured' ? extras.internalStandard.fileName : undefined;
+  const isStandard = (f: ReadFile) => fc !== undefined && (f.measurement.fileName === fc || f.path === fc);
+  const members = read.files.filter((f) => !isStandard(f));
+  const groups = groupIntoSeries(members.map((f) => ({ name: f.measurement.fileName, folder: f.folder })), extras.seriesBy ?? 'auto');
+  const keyOf = new Map<ReadFile, string>();
+  for (const g of groups) for (const i of g.members) keyOf.set(members[i]!, g.key);
+  return read.files.map((f) => ({
+    fileName: f.measurement.fileName, series: keyOf.get(f) ?? groups[0]?.key ?? 'series 1', voltammogram: f.measurement,
+    referenceElectrode: f.measurement.referenceElectrode, role: isStandard(f) ? 'internal-standard' : 'series',
+    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(f.measurement) },
+  }));
 }
 
-function runInputs(measurements: Measurement[], paths: string[], extras: AnalysisExtras): RunInput[] {
-  return measurements.map((m, i) => {
-    const path = paths[i];
-    let bytes: Uint8Array | null = null;
-    try {
-      if (path !== undefined) bytes = readFileSync(path);
-    } catch {
-      bytes = null;
-    }
-    const fc = extras.internalStandard?.kind === 'measured' ? extras.internalStandard.fileName : undefined;
-    return {
-      fileName: m.fileName, voltammogram: m, referenceElectrode: m.referenceElectrode,
-      role: fc !== undefined && (m.fileName === fc || path === fc) ? 'internal-standard' : 'series',
-      provenance: { sizeBytes: bytes?.length ?? null, sha256: bytes ? sha256Hex(bytes) : null, layout: layoutOf(m) },
-    };
-  });
-}
-
-/** A value every file's preamble agrees on, else undefined. */
-function fromFiles(measurements: Measurement[], pick: (m: Measurement) => { value: number } | null): number | undefined {
-  const values = measurements.map((m) => pick(m)?.value);
-  const first = values[0];
-  return first !== undefined && values.every((v) => v === first) ? first : undefined;
-}
-
-function softwareVersion(): { name: string; version: string } {
-  try {
-    const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { name?: string; version?: string };
-    return { name: pkg.name ?? 'halfwave', version: pkg.version ?? 'unknown' };
-  } catch {
-    return { name: 'halfwave', version: 'unknown' };
-  }
-}
-
-export function runOptions(measurements: Measurement[], args: AnalyzeArgs, extras: AnalysisExtras): AnalyzeRunOptions {
-  const area = args.areaCm2 ?? fromFiles(measurements, (m) => m.areaCm2);
-  const conc = args.concentrationMolPerCm3 ?? fromFiles(measurements, (m) => m.concentrationMolPerCm3);
-  const temp = args.temperatureK ?? fromFiles(measurements, (m) => m.temperatureK);
-  const o: AnalyzeRunOptions = { software: softwareVersion(), electronCount: args.electronCount ?? 1, areaCm2: area ?? null, concentrationMolPerCm3: conc ?? null };
-  if (temp !== undefined) o.temperatureK = temp;
-  if (args.scanRateVPerS !== undefined) o.scanRateVPerS = args.scanRateVPerS;
-  if (args.referenceElectrode !== undefined) o.outputReference = args.referenceElectrode;
-  if (extras.fromRef !== undefined) o.inputReference = extras.fromRef;
-  const copy: Array<[keyof AnalysisExtras, keyof AnalyzeRunOptions]> = [
-    ['alpha', 'alpha'], ['pH', 'pH'], ['ruOhm', 'ruOhm'], ['outputConvention', 'outputConvention'], ['diffusionCm2PerS', 'diffusionCm2PerS'],
-    ['diffusionRatio', 'diffusionRatio'], ['capacitancePotentialV', 'capacitancePotentialV'], ['internalStandard', 'internalStandard'], ['cycle', 'cycle'],
+/** A series' cell: what its files' headers state (as the screen reads them), then the command-line options. */
+function cellOf(files: RunFile[], args: AnalyzeArgs, extras: AnalysisExtras): CellValues {
+  const headers = cellFromHeaders(files.map((f) => f.voltammogram as Measurement)).values;
+  const cell: CellValues = { ...headers, electronCount: args.electronCount ?? 1 };
+  const given: Array<[keyof CellValues, unknown]> = [
+    ['areaCm2', args.areaCm2], ['concentrationMolPerCm3', args.concentrationMolPerCm3], ['temperatureK', args.temperatureK],
+    ['inputReference', extras.fromRef], ['alpha', extras.alpha], ['pH', extras.pH], ['ruOhm', extras.ruOhm], ['diffusionCm2PerS', extras.diffusionCm2PerS],
+    ['diffusionRatio', extras.diffusionRatio], ['capacitancePotentialV', extras.capacitancePotentialV], ['internalStandard', extras.internalStandard],
   ];
-  for (const [from, to] of copy) if (extras[from] !== undefined) (o as Record<string, unknown>)[to] = extras[from];
-  return o;
+  for (const [key, value] of given) if (value !== undefined) (cell as Record<string, unknown>)[key] = value;
+  return cell;
+}
+
+/** The run input of an `analyze` command: files grouped into series, each series' cell, the method, the report. */
+export function runInputOf(read: InputsRead, args: AnalyzeArgs, extras: AnalysisExtras): RunInput {
+  const files = runFilesOf(read, extras);
+  const keys = [...new Set(files.map((f) => f.series as string))];
+  const report: RunInput['report'] = { outputConvention: extras.outputConvention ?? 'iupac' };
+  if (args.referenceElectrode !== undefined) report.outputReference = args.referenceElectrode;
+  return {
+    files,
+    cells: Object.fromEntries(keys.map((k) => [k, cellOf(files.filter((f) => f.series === k && f.role !== 'internal-standard'), args, extras)])),
+    method: { seriesCycle: extras.cycle ?? 1 },
+    report,
+    software: { ...SOFTWARE },
+  };
 }
 
 /** Runs the analysis and prints it; returns the exit code. */
-export function runAnalysis(measurements: Measurement[], args: AnalyzeArgs, io: CliIo, extras: AnalysisExtras = {}): number {
-  const paths = expandPaths(args.files);
-  const givenAs = paths.length === measurements.length ? paths : measurements.map((m) => m.fileName);
-  const result = analyzeRun(runInputs(measurements, givenAs, extras), runOptions(measurements, args, extras));
+export function runAnalysis(read: InputsRead, args: AnalyzeArgs, io: CliIo, extras: AnalysisExtras = {}): number {
+  const result = analyzeRun(runInputOf(read, args, extras));
+  const givenAs = read.files.map((f) => f.path);
   const meta = { createdAt: new Date().toISOString(), command: `analyze ${args.files.join(' ')}` };
   if (args.csvPath !== undefined) writeOut(args.csvPath, resultsSheetCsv(result, meta));
   if (extras.jsonSheetPath !== undefined) writeOut(extras.jsonSheetPath, resultsSheetJson(result, meta));
-  io.stdout(args.json ? `${JSON.stringify(analyzeContract(result, givenAs), null, 2)}\n` : analyzeText(result));
+  io.stdout(args.json ? `${JSON.stringify(runContract(result, givenAs), null, 2)}\n` : analyzeText(result));
   return 0;
 }
 

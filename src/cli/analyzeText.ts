@@ -43,10 +43,13 @@ function seriesLines(c: SeriesCouple): string[] {
 
 export function analyzeText(r: AnalyzeRunResult): string {
   const scale = r.reference.output ? `potentials vs ${r.reference.output}` : "potentials on each file's own reference scale";
-  const parts = [`${scale}; currents as positive magnitudes`, '', ...coupleRows(r), '', 'Series:'];
-  if (!r.series.couples.length) parts.push('  no couples found');
-  for (const c of r.series.couples) parts.push(...seriesLines(c));
-  if (r.capacitance) parts.push('', `Double-layer capacitance: ${f(r.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
-  if (r.warnings.length) parts.push('', 'Warnings:', ...r.warnings.map((w) => `  - ${w.fileName ? `${w.fileName}: ` : ''}${w.message}`));
+  const parts = [`${scale}; currents as positive magnitudes`, '', ...coupleRows(r)];
+  for (const s of r.series) {
+    parts.push('', `Series "${s.key}" (${s.fileNames.length} file${s.fileNames.length === 1 ? '' : 's'}):`);
+    if (!s.analysis.couples.length) parts.push('  no couples found');
+    for (const c of s.analysis.couples) parts.push(...seriesLines(c));
+    if (s.capacitance) parts.push(`  double-layer capacitance: ${f(s.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
+  }
+  if (r.warnings.length) parts.push('', 'Warnings:', ...r.warnings.map((w) => `  - ${w.fileName ? `${w.fileName}: ` : w.series ? `${w.series}: ` : ''}${w.message}`));
   return `${parts.join('\n')}\n`;
 }

@@ -1,11 +1,13 @@
 /**
  * Reads the files named on the command line (a folder stands for the files in it, sorted
- * naturally: run2 before run10; "-" is standard input) and imports each through the importer. An unreadable path is a
- * UsageError naming it. A file the importer rejects is an ImportError; with `keepGoing` it is
- * collected instead and the other files are still read.
+ * naturally: run2 before run10; "-" is standard input) and imports each through the importer.
+ * Each file is read once: its size and SHA-256 come from the same bytes the importer reads.
+ * An unreadable path is a UsageError naming it. A file the importer rejects is an ImportError;
+ * with `keepGoing` it is collected instead and the other files are still read.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
+import { sha256Hex } from '../core/provenance/sha256';
 import { importVoltammogram, ImportError } from '../io';
 import type { ImportOverrides, ImportResult, ImportWarning, Measurement } from '../io';
 import { UsageError } from './errors';
@@ -18,8 +20,21 @@ export interface ReadInputsOptions {
 
 export type InputOutcome = { path: string; result: ImportResult } | { path: string; error: ImportError };
 
+/** A file that was read and imported, with what the results sheet needs to trace it. */
+export interface ReadFile {
+  /** As given on the command line (a folder's files as folder/name; "-" for standard input). */
+  path: string;
+  /** The folder it was found in when a folder was named; null for files named one by one. */
+  folder: string | null;
+  sizeBytes: number;
+  sha256: string;
+  measurement: Measurement;
+}
+
 export interface InputsRead {
   measurements: Measurement[];
+  /** The files that were read, parallel to `measurements`. */
+  files: ReadFile[];
   warnings: ImportWarning[];
   failures: ImportError[];
   /** One entry per file, in reading order. */
@@ -30,10 +45,15 @@ const natural = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base
 
 /** Expands folders into their files (not recursive; hidden files and *.md notes left out). */
 export function expandPaths(paths: string[]): string[] {
-  const out: string[] = [];
+  return expandInputs(paths).map((e) => e.path);
+}
+
+/** expandPaths, with the folder each file was found in (null for files named one by one). */
+export function expandInputs(paths: string[]): Array<{ path: string; folder: string | null }> {
+  const out: Array<{ path: string; folder: string | null }> = [];
   for (const p of paths) {
     if (p === '-') {
-      out.push(p);
+      out.push({ path: p, folder: null });
       continue;
     }
     let st;
@@ -43,7 +63,7 @@ export function expandPaths(paths: string[]): string[] {
       throw new UsageError(`cannot read "${p}": no such file or folder`);
     }
     if (!st.isDirectory()) {
-      out.push(p);
+      out.push({ path: p, folder: null });
       continue;
     }
     const names = readdirSync(p)
@@ -51,15 +71,16 @@ export function expandPaths(paths: string[]): string[] {
       .filter((n) => statSync(join(p, n)).isFile())
       .sort(natural);
     if (!names.length) throw new UsageError(`the folder "${p}" holds no data files`);
-    out.push(...names.map((n) => join(p, n)));
+    const folder = basename(p.replace(/[\\/]+$/, '')) || p;
+    out.push(...names.map((n) => ({ path: join(p, n), folder })));
   }
   return out;
 }
 
 export function readInputs(paths: string[], options: ReadInputsOptions = {}): InputsRead {
   if (!paths.length) throw new UsageError('no input files given (see --help)');
-  const read: InputsRead = { measurements: [], warnings: [], failures: [], outcomes: [] };
-  for (const path of expandPaths(paths)) {
+  const read: InputsRead = { measurements: [], files: [], warnings: [], failures: [], outcomes: [] };
+  for (const { path, folder } of expandInputs(paths)) {
     let bytes: Uint8Array;
     try {
       // "-" is standard input, so that `halfwave simulate ... | halfwave analyze - --inspect` works.
@@ -67,9 +88,12 @@ export function readInputs(paths: string[], options: ReadInputsOptions = {}): In
     } catch (err) {
       throw new UsageError(`cannot read "${path}": ${(err as NodeJS.ErrnoException).code ?? String(err)}`);
     }
+    // Hash before importing: the digest must see the bytes exactly as read.
+    const sha256 = sha256Hex(bytes);
     try {
       const result = importVoltammogram(path === '-' ? 'stdin' : basename(path), bytes, options.overrides ? { overrides: options.overrides } : {});
       read.measurements.push(result.measurement);
+      read.files.push({ path, folder, sizeBytes: bytes.length, sha256, measurement: result.measurement });
       read.warnings.push(...result.warnings);
       read.outcomes.push({ path, result });
     } catch (err) {

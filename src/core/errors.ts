@@ -30,8 +30,16 @@ export function assertFiniteInRange(
   max = Infinity,
 ): asserts value is number {
   if (typeof value !== 'number' || !Number.isFinite(value) || value < min || value > max) {
-    throw new AnalysisError('BAD_OPTION', `${name} must be a finite number in [${min}, ${max}], got ${String(value)}`);
+    throw new AnalysisError('BAD_OPTION', `${name} must be ${describeRange(min, max)}, got ${String(value)}`);
   }
+}
+
+/** "a finite number above 0", "… from 1 to 12", "… at least 0" — the range in words. */
+function describeRange(min: number, max: number): string {
+  const low = min === Number.MIN_VALUE ? 'above 0' : `at least ${min}`;
+  if (max === Infinity) return min === -Infinity ? 'a finite number' : `a finite number ${low}`;
+  if (min === -Infinity) return `a finite number at most ${max}`;
+  return min === Number.MIN_VALUE ? `a finite number above 0 and at most ${max}` : `a finite number from ${min} to ${max}`;
 }
 
 /** Throws LENGTH_MISMATCH / EMPTY_INPUT unless the columns are equally long and non-empty. */

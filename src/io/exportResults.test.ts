@@ -10,7 +10,9 @@ function makeRun(convention: 'iupac' | 'polarographic') {
     voltammogram: simulatedVoltammogram({ scanRateVPerS: v, k0CmPerS: Infinity }),
     provenance: { sizeBytes: 1234, sha256: 'ab'.repeat(32), layout: 'comma-separated, E/V, I/A, t/s' },
   }));
-  return analyzeRun(inputs, { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6, outputConvention: convention, software: { name: 'halfwave', version: '9.9.9' } });
+  return analyzeRun({
+    files: inputs, cells: { 'series 1': { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 } }, report: { outputConvention: convention }, software: { name: 'halfwave', version: '9.9.9' },
+  });
 }
 
 /** The rows of one '# table: name' block, parsed as CSV with a header line. */
@@ -25,7 +27,7 @@ describe('resultsSheetCsv', () => {
   const csv = resultsSheetCsv(run, { createdAt: '2026-01-01T00:00:00Z', command: 'analyze a b c' });
   it('opens with provenance: software version, parameters, methods, files with hash and size', () => {
     expect(csv).toMatch(/^# results sheet,halfwave,9\.9\.9/);
-    expect(csv).toContain('# parameter,areaCm2,0.0707');
+    expect(csv).toContain('# cell,series 1,areaCm2,0.0707');
     expect(csv).toMatch(/# method,.*Randles–Ševčík/);
     expect(csv).toContain(`sha256,${'ab'.repeat(32)}`);
     expect(csv).toContain('size_bytes,1234');
@@ -54,10 +56,14 @@ describe('resultsSheetCsv', () => {
 });
 
 describe('resultsSheetJson', () => {
-  it('is parseable and leaves out point arrays', () => {
-    const doc = JSON.parse(resultsSheetJson(makeRun('iupac'))) as { sheet: string; files: Array<{ analysis: { smoothed: unknown } }>; series: { couples: unknown[] } };
+  it('carries the same keys as the analyze contract, with provenance, and no point arrays', () => {
+    const text = resultsSheetJson(makeRun('iupac'));
+    const doc = JSON.parse(text) as { sheet: string; files: Array<{ file: string; sha256: string }>; series: Array<{ couple: number; D: number }>; provenance: { cells: Record<string, { areaCm2: number }> } };
     expect(doc.sheet).toBe('halfwave-results');
-    expect(doc.series.couples).toHaveLength(1);
-    expect(JSON.stringify(doc.files[0]?.analysis.smoothed ?? {})).toBe('{}');
+    expect(doc.series).toHaveLength(1);
+    expect(doc.series[0]?.D).toBeGreaterThan(0);
+    expect(doc.files[0]?.sha256).toBe('ab'.repeat(32));
+    expect(doc.provenance.cells['series 1']?.areaCm2).toBe(0.0707);
+    expect(text).not.toMatch(/"smoothed"|"potentialV"/);
   });
 });

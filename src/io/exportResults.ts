@@ -2,14 +2,16 @@
  * The results sheet of an analysis run, as CSV (for spreadsheets) and as JSON (everything, for
  * scripts). Both carry the method, the parameters, the software version and where each file came
  * from (name, size, SHA-256, scan-rate source, detected layout), so a number can be traced back.
- * CSV layout (our own): '#'-prefixed header lines, then four tables separated by a blank line and
- * a '# table: …' line: peaks, couples (one row per file × cycle × couple), k0 per file, series.
+ * CSV layout (our own): '#'-prefixed header lines, then tables separated by a blank line and a
+ * '# table: …' line: peaks, couples (one row per file × cycle × couple), k0 per file, series (one row
+ * per series × couple), double-layer capacitance per series when measured.
  * Units are in the column names. Signed currents follow the run's sign convention; peak heights
  * and couple currents are positive magnitudes.
  */
 import { currentInConvention } from '../core/conventions';
-import type { AnalyzeRunResult, RunFileResult } from '../core/analysis/runTypes';
+import type { AnalyzeRunResult } from '../core/analysis/runTypes';
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
+import { runContract } from './runContract';
 
 export interface ResultsSheetMeta {
   /** ISO time the sheet was made; left out when absent (keeps output reproducible). */
@@ -35,14 +37,17 @@ function headerLines(r: AnalyzeRunResult, meta: ResultsSheetMeta): string[] {
   lines.push(row(['# current sign convention', r.convention === 'iupac' ? 'IUPAC (anodic positive)' : 'polarographic (cathodic positive)']));
   lines.push(row(['# potential scale', r.reference.output ?? "each file's own"]));
   for (const b of r.reference.basis) lines.push(row(['# reference', b]));
-  for (const [k, v] of Object.entries(r.provenance.options)) lines.push(row(['# parameter', k, typeof v === 'object' ? JSON.stringify(v) : String(v)]));
+  const param = (k: string, v: unknown) => row(['# parameter', k, typeof v === 'object' ? JSON.stringify(v) : String(v)]);
+  for (const [k, v] of Object.entries(r.provenance.method)) lines.push(param(k, v));
+  for (const [k, v] of Object.entries(r.provenance.report)) lines.push(param(k, v));
+  for (const s of r.series) for (const [k, v] of Object.entries(s.cell)) lines.push(row(['# cell', s.key, k, typeof v === 'object' && v !== null ? JSON.stringify(v) : v]));
   for (const m of r.provenance.methods) lines.push(row(['# method', m]));
   for (const f of r.files) {
     const p = f.provenance;
-    lines.push(row(['# file', f.fileName, 'role', f.role, 'size_bytes', p.sizeBytes, 'sha256', p.sha256, 'scan_rate_V_per_s', f.scanRateVPerS,
-      'scan_rate_source', f.scanRateSource, 'points', f.pointCount, 'input_reference', f.inputReference, 'offset_V', f.offsetV, 'layout', p.layout]));
+    lines.push(row(['# file', f.fileName, 'series', f.series, 'role', f.role, 'size_bytes', p.sizeBytes, 'sha256', p.sha256, 'scan_rate_V_per_s', f.scanRateVPerS,
+      'scan_rate_source', f.scanRateSource, 'points', f.pointCount, 'input_reference', f.reference.input, 'offset_V', f.reference.offsetV, 'layout', p.layout]));
   }
-  for (const w of r.warnings) lines.push(row(['# warning', w.fileName ?? '', w.message]));
+  for (const w of r.warnings) lines.push(row(['# warning', w.fileName ?? w.series ?? '', w.message]));
   return lines;
 }
 
@@ -72,26 +77,28 @@ function coupleTable(r: AnalyzeRunResult): string[] {
   return out;
 }
 
-function rateTable(r: AnalyzeRunResult, files: RunFileResult[]): string[] {
-  const out = [row(['series_couple', 'file', 'scan_rate_V_per_s', 'dEp_V', 'psi', 'psi_source', 'method', 'k0_cm_per_s', 'not_determined_because'])];
-  for (const c of r.series.couples) {
-    for (const k of c.rateConstant?.perFile ?? []) {
-      const p = c.points.find((x) => x.fileIndex === k.fileIndex);
-      out.push(row([c.index, p?.fileName ?? files[k.fileIndex]?.fileName, p?.scanRateVPerS, p?.deltaEpV, k.psi?.psi, k.psi?.source, k.method, k.k0CmPerS, k.reason]));
+function rateTable(r: AnalyzeRunResult): string[] {
+  const out = [row(['series', 'series_couple', 'file', 'scan_rate_V_per_s', 'dEp_V', 'psi', 'psi_source', 'method', 'k0_cm_per_s', 'not_determined_because'])];
+  for (const s of r.series) {
+    for (const c of s.analysis.couples) {
+      for (const k of c.rateConstant?.perFile ?? []) {
+        const p = c.points.find((x) => x.fileIndex === k.fileIndex);
+        out.push(row([s.key, c.index, p?.fileName ?? s.fileNames[k.fileIndex], p?.scanRateVPerS, p?.deltaEpV, k.psi?.psi, k.psi?.source, k.method, k.k0CmPerS, k.reason]));
+      }
     }
   }
   return out;
 }
 
-const SERIES_COLUMNS = ['couple', 'E_half_V', 'files', 'regime', 'kinetic_class', 'verdict', 'slope_ip_vs_sqrt_v_A_s05_V05', 'slope_ci95_low', 'slope_ci95_high',
+const SERIES_COLUMNS = ['series', 'couple', 'E_half_V', 'files', 'regime', 'kinetic_class', 'verdict', 'slope_ip_vs_sqrt_v_A_s05_V05', 'slope_ci95_low', 'slope_ci95_high',
   'intercept_A', 'r2', 'D_cm2_per_s', 'D_ci95_low', 'D_ci95_high', 'D_form', 'alpha', 'log_log_slope', 'log_log_reading', 'Epa_shift_V_per_decade',
   'Epc_shift_V_per_decade', 'k0_cm_per_s', 'k0_lower_bound_cm_per_s', 'D_used_for_k0_cm2_per_s', 'gamma_from_charge_mol_per_cm2',
   'gamma_from_slope_mol_per_cm2', 'ks_per_s', 'electroactive_area_cm2', 'anodic_slope_A_s05_V05', 'anodic_r2',
   'cathodic_slope_A_s05_V05', 'cathodic_r2', 'diagnostics'];
 
-function seriesRow(c: SeriesCouple): Cell[] {
+function seriesRow(key: string, c: SeriesCouple): Cell[] {
   const f = c.forwardFit;
-  return [c.index, c.eHalfV, c.points.length, c.regime, c.kineticClass, c.verdict.category, f?.slope, f?.slopeInterval?.[0], f?.slopeInterval?.[1],
+  return [key, c.index, c.eHalfV, c.points.length, c.regime, c.kineticClass, c.verdict.category, f?.slope, f?.slopeInterval?.[0], f?.slopeInterval?.[1],
     f?.intercept, f?.r2, c.diffusion?.diffusionCm2PerS, c.diffusion?.intervalCm2PerS?.[0], c.diffusion?.intervalCm2PerS?.[1], c.diffusion?.form,
     c.alpha ?? c.diffusion?.alphaUsed, c.logLog?.slope, c.logLog?.reading, c.peakShift.anodic?.slopeVPerDecade, c.peakShift.cathodic?.slopeVPerDecade,
     c.rateConstant?.k0CmPerS, c.rateConstant?.lowerBoundCmPerS, c.rateConstant?.diffusionOxCm2PerS, c.surface?.coverageFromChargeMolPerCm2,
@@ -105,22 +112,27 @@ export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta
     headerLines(result, meta),
     ['# table: peaks', ...peakTable(result)],
     ['# table: couples', ...coupleTable(result)],
-    ['# table: k0 per file', ...rateTable(result, result.files)],
-    ['# table: series', row(SERIES_COLUMNS), ...result.series.couples.map((c) => row(seriesRow(c)))],
+    ['# table: k0 per file', ...rateTable(result)],
+    ['# table: series', row(SERIES_COLUMNS), ...result.series.flatMap((s) => s.analysis.couples.map((c) => row(seriesRow(s.key, c))))],
   ];
-  if (result.capacitance) {
-    const cd = result.capacitance;
-    parts.push(['# table: double-layer capacitance', row(['Cd_F_per_cm2', 'intercept_A', 'r2']), row([cd.capacitanceFPerCm2, cd.fit?.intercept, cd.fit?.r2])]);
+  const withCd = result.series.filter((s) => s.capacitance);
+  if (withCd.length) {
+    parts.push(['# table: double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'intercept_A', 'r2']),
+      ...withCd.map((s) => row([s.key, s.capacitance?.capacitanceFPerCm2, s.capacitance?.fit?.intercept, s.capacitance?.fit?.r2]))]);
   }
   return `${parts.map((p) => p.join('\n')).join('\n\n')}\n`;
 }
 
-/** Drops typed arrays (baseline curves, smoothed traces) so the JSON stays a sheet, not a dump. */
-function plain(_key: string, value: unknown): unknown {
-  return ArrayBuffer.isView(value) ? undefined : value;
-}
-
-/** The results sheet as JSON text: the whole run result without point arrays, plus meta. */
+/**
+ * The results sheet as JSON text: the run contract (the keys `analyze --json` prints), then the
+ * provenance (software, methods, method and report options, each series' cell, each file's
+ * origin) and meta.
+ */
 export function resultsSheetJson(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}): string {
-  return `${JSON.stringify({ sheet: 'halfwave-results', version: 1, ...meta, ...result }, plain, 2)}\n`;
+  const provenance = {
+    ...result.provenance,
+    cells: Object.fromEntries(result.series.map((s) => [s.key, s.cell])),
+    files: result.files.map((f) => ({ file: f.fileName, series: f.series, role: f.role, reference: f.reference, points: f.pointCount, ...f.provenance })),
+  };
+  return `${JSON.stringify({ sheet: 'halfwave-results', version: 2, ...meta, ...runContract(result), provenance }, null, 2)}\n`;
 }

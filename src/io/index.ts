@@ -25,3 +25,15 @@ export type {
   TextEncoding,
   TimeUnit,
 } from './types';
+export { describeLayout } from './describeLayout';
+export {
+  CONVENTION_CHOICES, CURRENT_UNIT_CHOICES, DECIMAL_CHOICES, DELIMITER_CHOICES, ENCODING_CHOICES, POTENTIAL_UNIT_CHOICES, TIME_UNIT_CHOICES,
+  choiceNamed, choiceNames, labelOf,
+} from './overrideChoices';
+export type { Choice } from './overrideChoices';
+export { fileStem, groupIntoSeries, SERIES_GROUPINGS } from './groupIntoSeries';
+export type { NamedFile, SeriesGroup, SeriesGrouping } from './groupIntoSeries';
+export { cellFromHeaders, referenceIdOf } from './cellFromHeaders';
+export type { HeaderCell } from './cellFromHeaders';
+export { runContract } from './runContract';
+export type { RunContract } from './runContract';

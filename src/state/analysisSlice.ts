@@ -3,10 +3,10 @@
  * analysis in the worker; a newer run for a file cancels the older one, so results always match
  * the settings on screen.
  */
-import type { Voltammogram } from '../core/types';
 import { CancelledError } from '../worker/errors';
-import { cellOfFile, resolveCell, sameTraceCell } from './seriesCell';
-import { defaultSettings, emptyFileSettings, toAnalyzeOptions } from './settings';
+import { runInputOf } from './runInput';
+import { resolveCell, sameTraceCell } from './seriesCell';
+import { defaultSettings, emptyFileSettings } from './settings';
 import { toUserError, type AnalysisSlice, type HistorySnapshot, type SliceCreator } from './types';
 
 const HISTORY_LIMIT = 100;
@@ -33,22 +33,15 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       const ctrl = new AbortController();
       running.set(id, ctrl);
       const prev = get().results[id];
-      set((s) => ({ results: { ...s.results, [id]: { status: 'running', analysis: prev?.analysis ?? null, correctedPotentialV: prev?.correctedPotentialV ?? null, error: null } } }));
-      const voltammogram: Voltammogram = {
-        potentialV: m.potentialV, currentA: m.currentA, timeS: m.timeS, segments: m.segments, cycles: m.cycles,
-        scanRateVPerS: m.scanRateVPerS, scanRateSource: m.scanRateSource,
-      };
-      const cell = cellOfFile(get(), id);
-      const options = toAnalyzeOptions(get().settings, get().fileSettings[id] ?? emptyFileSettings, cell);
-      const resistanceOhm = cell.resistanceOhm;
+      set((s) => ({ results: { ...s.results, [id]: { status: 'running', run: prev?.run ?? null, error: null } } }));
       try {
-        const out = await deps.client.request('analyze', { voltammogram, options, resistanceOhm }, { signal: ctrl.signal });
-        set((s) => ({ results: { ...s.results, [id]: { status: 'ready', ...out, error: null } } }));
+        const [run] = await deps.client.request('runFiles', { run: runInputOf(get(), [id]) }, { signal: ctrl.signal });
+        set((s) => ({ results: { ...s.results, [id]: { status: 'ready', run: run ?? null, error: null } } }));
         const group = get().files[id]?.group;
         if (group) get().scheduleGroup(group);
       } catch (err) {
         if (err instanceof CancelledError) return;
-        set((s) => ({ results: { ...s.results, [id]: { status: 'error', analysis: null, correctedPotentialV: null, error: toUserError(err) } } }));
+        set((s) => ({ results: { ...s.results, [id]: { status: 'error', run: null, error: toUserError(err) } } }));
       } finally {
         if (running.get(id) === ctrl) running.delete(id);
       }

@@ -3,9 +3,12 @@
  * series' reference scale and the (global) display scale, the potential axis title, and the list of
  * reference electrodes for the pickers.
  */
-import { convertPotential, REFERENCE_ELECTRODES, type ConversionContext, type ReferenceId } from '../core/reference';
+import { resolveCell, resolveReport } from '../core/analysis/resolveRun';
+import { conversionContextOf, scaleOffset } from '../core/analysis/runReference';
+import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
+import { cellValuesOf, reportOptionsOf } from './runInput';
 import type { SeriesCell } from './seriesCell';
-import { celsiusToKelvin, type AnalysisSettings } from './settings';
+import type { AnalysisSettings } from './settings';
 
 export interface ReferenceChoice {
   id: ReferenceId;
@@ -15,33 +18,30 @@ export interface ReferenceChoice {
 
 export const referenceChoices: ReferenceChoice[] = REFERENCE_ELECTRODES.map((r) => ({ id: r.id, label: r.label, note: r.note }));
 
-/** Conversion context of a series: its pH, temperature and measured ferrocene E½. */
-export function conversionContext(ref: SeriesCell): ConversionContext {
-  const ctx: ConversionContext = { pH: ref.pH, temperatureK: celsiusToKelvin(ref.temperatureC) };
-  if (ref.ferroceneHalfWaveV !== null && ref.fileReference !== 'Fc') {
-    ctx.internalStandard = { eHalfV: ref.ferroceneHalfWaveV, scale: ref.fileReference, origin: 'entered by the user' };
-  }
-  return ctx;
-}
-
 export interface DisplayScale {
-  /** Add to a potential on the files' scale to get it on the display scale (V). */
+  /** Add to a potential on the series' recording scale to get it on the display scale (V). */
   offsetV: number;
-  /** Short name of the display scale, e.g. "SCE". */
+  /** Short name of the scale shown, e.g. "SCE". */
   name: string;
   /** Why the offset is what it is, or the reason it could not be applied. */
   basis: string;
   ok: boolean;
 }
 
-/** From a series' recording scale (its cell) to the global display scale. */
+/**
+ * From a series' recording scale (its cell) to the global display scale, through the very
+ * function and conversion context the analysis run uses (core/analysis/runReference.ts), so the
+ * screen's offset and the run's offset are the same number.
+ */
 export function displayScale(settings: AnalysisSettings, cell: SeriesCell): DisplayScale {
   const { fileReference } = cell;
-  const { displayReference } = settings.reference;
-  const name = displayReference === 'Fc' ? 'Fc⁺/Fc' : shortName(displayReference);
   try {
-    const offsetV = convertPotential(0, fileReference, displayReference, conversionContext(cell));
-    return { offsetV, name, basis: `${shortName(fileReference)} → ${name}: ${offsetV >= 0 ? '+' : ''}${offsetV.toFixed(4)} V`, ok: true };
+    const resolved = resolveCell(cellValuesOf(cell));
+    const report = resolveReport(reportOptionsOf({ settings, convention: 'iupac' }));
+    const ref = scaleOffset(fileReference, report, conversionContextOf(resolved, report), 'the series');
+    if (ref.note !== null || ref.output === null) return { offsetV: 0, name: shortName(fileReference), basis: `${ref.note ?? 'no conversion'}; showing the files' own scale`, ok: false };
+    const name = ref.output === 'Fc' ? 'Fc⁺/Fc' : shortName(ref.output);
+    return { offsetV: ref.offsetV, name, basis: `${shortName(fileReference)} → ${name}: ${ref.offsetV >= 0 ? '+' : ''}${ref.offsetV.toFixed(4)} V`, ok: true };
   } catch (err) {
     return { offsetV: 0, name: shortName(fileReference), basis: `cannot convert: ${(err as Error).message}; showing the files' own scale`, ok: false };
   }

@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
 import { displayScale } from './display';
-import { exportRequest } from './exportRequest';
+import { runInputOf } from './runInput';
 import { resolveCell, selectSeriesCell } from './seriesCell';
 import { loadSessionText, saveSessionText } from './sessionActions';
 import { createHalfwaveStore } from './store';
@@ -36,7 +36,7 @@ async function loadSeries(store: HalfwaveStore, group: string, preamble = ''): P
 
 async function diffusion(store: HalfwaveStore, group: string): Promise<number> {
   await store.getState().analyzeGroup(group);
-  const d = store.getState().series[group]?.result?.couples[0]?.diffusion?.diffusionCm2PerS;
+  const d = store.getState().series[group]?.result?.analysis.couples[0]?.diffusion?.diffusionCm2PerS;
   if (d === undefined) throw new Error(`no D for ${group}`);
   return d;
 }
@@ -65,7 +65,7 @@ describe('inheritance of a new series', () => {
         transport: inner.transport,
         dispose: () => inner.dispose(),
         request: (type, input, options) => {
-          if (type === 'analyze') seen.push((input as { options: { temperatureK?: number } }).options.temperatureK);
+          if (type === 'runFiles') seen.push(Object.values((input as { run: { cells: Record<string, { temperatureK?: number }> } }).run.cells)[0]?.temperatureK);
           return inner.request(type, input, options);
         },
       },
@@ -121,16 +121,16 @@ describe('editing one series', () => {
     const [id] = await loadSeries(store, 'disk');
     await loadSeries(store, 'other');
     const key = id as string;
-    const dep0 = store.getState().results[key]?.analysis?.cycles[0]?.couples[0]?.deltaEpV as number;
+    const dep0 = store.getState().results[key]?.run?.analysis.cycles[0]?.couples[0]?.deltaEpV as number;
     await store.getState().updateSeriesCell('disk', (own) => ({ ...own, resistanceOhm: 500 }));
-    expect(store.getState().results[key]?.correctedPotentialV).toBeInstanceOf(Float64Array);
+    expect(store.getState().results[key]?.run?.analysedPotentialV).toBeInstanceOf(Float64Array);
     const other = store.getState().fileOrder.find((f) => store.getState().files[f]?.group === 'other') as string;
-    expect(store.getState().results[other]?.correctedPotentialV).toBeNull();
+    expect(store.getState().results[other]?.run?.analysedPotentialV).toBeNull();
     // Correcting data that had no ohmic drop narrows ΔEp (common practice, no source).
-    expect(store.getState().results[key]?.analysis?.cycles[0]?.couples[0]?.deltaEpV).toBeLessThan(dep0);
+    expect(store.getState().results[key]?.run?.analysis.cycles[0]?.couples[0]?.deltaEpV).toBeLessThan(dep0);
     await store.getState().undo();
     expect(store.getState().seriesCells.disk?.resistanceOhm).toBeUndefined();
-    expect(store.getState().results[key]?.analysis?.cycles[0]?.couples[0]?.deltaEpV).toBeCloseTo(dep0, 12);
+    expect(store.getState().results[key]?.run?.analysis.cycles[0]?.couples[0]?.deltaEpV).toBeCloseTo(dep0, 12);
     await store.getState().redo();
     expect(resolveCell(store.getState(), 'disk').cell.resistanceOhm).toBe(500);
   });
@@ -139,8 +139,9 @@ describe('editing one series', () => {
     const store = newStore();
     const ids = await loadSeries(store, 'gold', PREAMBLE);
     await store.getState().updateSeriesCell('gold', (own) => ({ ...own, electronCount: 1, concentrationMM: 1 }));
-    const request = exportRequest(store.getState(), 'gold', 'csv', '2026-12-01T00:00:00Z');
-    expect(request.options).toMatchObject({ areaCm2: 0.0314, concentrationMolPerCm3: 1e-6, temperatureK: 303.15, inputReference: 'AgCl-sat' });
+    const run = runInputOf(store.getState());
+    expect(run.cells?.gold).toMatchObject({ areaCm2: 0.0314, concentrationMolPerCm3: 1e-6, inputReference: 'AgCl-sat' });
+    expect(run.cells?.gold?.temperatureK).toBeCloseTo(303.15, 12);
     await store.getState().analyzeGroup('gold');
     const plan = planTheory(store.getState(), ids[1] as string);
     expect(plan.ok && plan.params).toMatchObject({ areaCm2: 0.0314, temperatureK: 303.15, concentrationOMolPerCm3: 1e-6 });

@@ -9,7 +9,8 @@
  *   3. what was entered for the series (`seriesCells[group]`, saved in sessions and undo history).
  * The display scale (what potentials are shown and exported against) stays global.
  */
-import { findReferenceElectrode, type ReferenceId } from '../core/reference';
+import { kelvinToCelsius, molPerCm3ToMillimolar } from '../core/units';
+import { cellFromHeaders } from '../io/cellFromHeaders';
 import type { Measurement } from '../io/types';
 import type { AnalysisSettings, ChemistrySettings, ReferenceSettings } from './settings';
 
@@ -50,56 +51,17 @@ export function defaultCell(settings: AnalysisSettings): SeriesCell {
   return { ...settings.chemistry, fileReference, pH, ferroceneHalfWaveV };
 }
 
-/**
- * Reference electrode named in a preamble ("Ag/AgCl (3 M KCl)") → table id, or null. The table's
- * aliases are written without brackets or commas, so those are tried as spaces too.
- */
-export function referenceIdOf(name: string): ReferenceId | null {
-  return (findReferenceElectrode(name) ?? findReferenceElectrode(name.replace(/[(),]/g, ' ').trim()))?.id ?? null;
-}
-
-type PreambleField = 'areaCm2' | 'concentrationMM' | 'temperatureC' | 'fileReference';
-
-function preambleValues(m: Measurement): Partial<Pick<SeriesCell, PreambleField>> & { unknownReference?: string } {
-  const out: Partial<Pick<SeriesCell, PreambleField>> & { unknownReference?: string } = {};
-  if (m.areaCm2) out.areaCm2 = m.areaCm2.value;
-  // mol/cm³ → mM: 1 mM = 1e-6 mol/cm³.
-  if (m.concentrationMolPerCm3) out.concentrationMM = Number((m.concentrationMolPerCm3.value * 1e6).toPrecision(12));
-  // K → °C (BIPM, SI Brochure 9th ed. 2019: t/°C = T/K − 273.15).
-  if (m.temperatureK) out.temperatureC = Number((m.temperatureK.value - 273.15).toPrecision(12));
-  if (m.referenceElectrode) {
-    const id = referenceIdOf(m.referenceElectrode);
-    if (id) out.fileReference = id;
-    else out.unknownReference = m.referenceElectrode;
-  }
-  return out;
-}
-
-/** Values the files' preambles give, the first file that states one giving it, with notes on disagreement. */
+/** Values the files' headers give (io/cellFromHeaders.ts, as the command line reads them), in the form's units. */
 export function cellFromPreambles(measurements: readonly Measurement[]): { values: Partial<SeriesCell>; notes: string[] } {
-  const values: Partial<Record<PreambleField, number | ReferenceId>> = {};
-  const firstFile: Partial<Record<PreambleField, string>> = {};
-  const notes: string[] = [];
-  for (const m of measurements) {
-    const found = preambleValues(m);
-    if (found.unknownReference) notes.push(`${m.fileName}: reference electrode "${found.unknownReference}" is not in the table; choose it by hand.`);
-    for (const key of ['areaCm2', 'concentrationMM', 'temperatureC', 'fileReference'] as const) {
-      const v = found[key];
-      if (v === undefined) continue;
-      if (values[key] === undefined) {
-        values[key] = v;
-        firstFile[key] = m.fileName;
-      } else if (values[key] !== v) {
-        notes.push(`${m.fileName} states ${FIELD_WORDS[key]} ${String(v)}, ${firstFile[key] ?? ''} ${String(values[key])}; the series uses the first.`);
-      }
-    }
-  }
-  return { values: values as Partial<SeriesCell>, notes };
+  const found = cellFromHeaders(measurements);
+  const h = found.values;
+  const values: Partial<SeriesCell> = {};
+  if (h.areaCm2 !== undefined) values.areaCm2 = h.areaCm2;
+  if (h.concentrationMolPerCm3 !== undefined) values.concentrationMM = molPerCm3ToMillimolar(h.concentrationMolPerCm3);
+  if (h.temperatureK !== undefined) values.temperatureC = kelvinToCelsius(h.temperatureK);
+  if (h.inputReference !== undefined) values.fileReference = h.inputReference;
+  return { values, notes: found.notes };
 }
-
-const FIELD_WORDS: Record<PreambleField, string> = {
-  areaCm2: 'area (cm²)', concentrationMM: 'concentration (mM)', temperatureC: 'temperature (°C)', fileReference: 'reference',
-};
 
 export interface CellSources {
   settings: AnalysisSettings;

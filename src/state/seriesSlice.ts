@@ -3,11 +3,9 @@
  * baselines), combined in the worker into ip–v½ fits, log–log slope, Ep–log v, D, k° and Γ.
  * A series is re-run shortly after any of its files is re-analysed.
  */
-import type { SeriesFileInput } from '../core/analysis/seriesTypes';
+import type { RunFileResult } from '../core/analysis/runTypes';
 import { CancelledError } from '../worker/errors';
-import { exportRequest } from './exportRequest';
-import { resolveCell } from './seriesCell';
-import { celsiusToKelvin, millimolarToMolPerCm3 } from './settings';
+import { runInputOf, seriesOptionsOf } from './runInput';
 import { toUserError, type SeriesSlice, type SliceCreator } from './types';
 
 export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => {
@@ -29,30 +27,21 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
 
     async analyzeGroup(group) {
       const { fileOrder, files, results } = get();
-      const ids = fileOrder.filter((id) => files[id]?.group === group && results[id]?.analysis);
-      const inputs: SeriesFileInput[] = [];
+      const inputs: RunFileResult[] = [];
       const used: string[] = [];
-      for (const id of ids) {
-        const rate = files[id]?.measurement?.scanRateVPerS;
-        const analysis = results[id]?.analysis;
-        if (!rate || !analysis) continue;
-        // The smoothed curve is not needed for the series; leave it behind rather than copy it.
-        inputs.push({ fileName: files[id]?.fileName as string, scanRateVPerS: rate, analysis: { ...analysis, smoothed: null } });
+      for (const id of fileOrder) {
+        const run = results[id]?.run;
+        if (files[id]?.group !== group || !run) continue;
+        // The series needs no point arrays: leave the smoothed curve and the analysed potential behind rather than copy them.
+        inputs.push({ ...run, analysedPotentialV: null, analysis: { ...run.analysis, smoothed: null } });
         used.push(id);
       }
       running.get(group)?.abort();
       const ctrl = new AbortController();
       running.set(group, ctrl);
       set((s) => ({ series: { ...s.series, [group]: { status: 'running', result: s.series[group]?.result ?? null, error: null, fileIds: used } } }));
-      const c = resolveCell(get(), group).cell;
       try {
-        const result = await deps.client.request('series', {
-          files: inputs,
-          options: {
-            electronCount: c.electronCount, areaCm2: c.areaCm2, concentrationMolPerCm3: millimolarToMolPerCm3(c.concentrationMM),
-            temperatureK: celsiusToKelvin(c.temperatureC), alpha: c.alpha, cycle: 1,
-          },
-        }, { signal: ctrl.signal });
+        const result = await deps.client.request('runSeries', { key: group, ...seriesOptionsOf(get(), group), files: inputs }, { signal: ctrl.signal });
         set((s) => ({ series: { ...s.series, [group]: { status: 'ready', result, error: null, fileIds: used } } }));
       } catch (err) {
         if (err instanceof CancelledError) return;
@@ -71,7 +60,10 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
     },
 
     async exportGroup(group, format) {
-      const out = await deps.client.request('export', exportRequest(get(), group, format, new Date().toISOString()));
+      const s = get();
+      const ids = group === null ? s.fileOrder : s.fileOrder.filter((id) => s.files[id]?.group === group);
+      const meta = { createdAt: new Date().toISOString(), command: group === null ? 'Halfwave workbench export of every series' : `Halfwave workbench export of series "${group}"` };
+      const out = await deps.client.request('export', { run: runInputOf(s, ids), format, meta });
       return out.text;
     },
 

@@ -1,12 +1,11 @@
 /**
- * Analysis settings the user edits, in the units of the forms (mM, °C, Ω), and their mapping to
- * the core's options (mol/cm³, K). Method settings and the display scale apply to every file;
+ * Analysis settings the user edits, in the units of the forms (mM, °C, Ω); runInput.ts maps them
+ * to the core's run model (mol/cm³, K). Method settings and the display scale apply to every file;
  * the cell values here are only the defaults each series starts from (seriesCell.ts), because
  * series are measured on different electrodes and solutions; peak windows and baseline choices
  * are per file because potential ranges differ between files.
  */
 import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
-import type { AnalyzeVoltammogramOptions } from '../core/analysis/types';
 import type { BaselineMethod, BaselineSpec } from '../core/baseline/baselineTypes';
 import type { PeakWindow } from '../core/peaks/peakTypes';
 import type { SmoothingSetting } from '../core/smoothing/smoothingTypes';
@@ -18,7 +17,7 @@ export interface ChemistrySettings {
   electronCount: number;
   /** Electrode area (cm²). */
   areaCm2: number;
-  /** Bulk concentration of the analyte (mM = µmol/cm³ × 1000). */
+  /** Bulk concentration of the analyte (mM, that is mmol/L; 1 mM = 1e-6 mol/cm³). */
   concentrationMM: number;
   /** Cell temperature (°C). */
   temperatureC: number;
@@ -66,31 +65,6 @@ export const defaultSettings: AnalysisSettings = {
 const REFERENCE_IDS: readonly ReferenceId[] = REFERENCE_ELECTRODES.map((r) => r.id);
 
 export const emptyFileSettings: FileAnalysisSettings = { peakWindows: [], baselines: [] };
-
-/** 25 °C → 298.15 K (BIPM, SI Brochure 9th ed. 2019: T/K = t/°C + 273.15). */
-export function celsiusToKelvin(temperatureC: number): number {
-  return temperatureC + 273.15;
-}
-
-/** 1 mM = 1 mmol/L = 1e-6 mol/cm³. */
-export function millimolarToMolPerCm3(concentrationMM: number): number {
-  return concentrationMM * 1e-6;
-}
-
-/** Options of one file's analysis: method settings, the file's windows, its series' n and T. */
-export function toAnalyzeOptions(settings: AnalysisSettings, file: FileAnalysisSettings, cell: SeriesCell): AnalyzeVoltammogramOptions {
-  return {
-    temperatureK: celsiusToKelvin(cell.temperatureC),
-    electronCount: cell.electronCount,
-    smoothing: settings.smoothing,
-    currentConvention: 'iupac',
-    peakWindows: file.peakWindows,
-    baselines: file.baselines,
-    forwardBaseline: settings.forwardBaseline,
-    returnBaseline: settings.returnBaseline,
-    minSignalToNoise: settings.minSignalToNoise,
-  };
-}
 
 /**
  * Lays stored JSON over the defaults, keeping only fields of the right type, so an old or

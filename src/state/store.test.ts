@@ -21,7 +21,7 @@ function newStore(): HalfwaveStore {
 }
 
 function firstCouple(store: HalfwaveStore, id: string) {
-  const couple = store.getState().results[id]?.analysis?.cycles[0]?.couples[0];
+  const couple = store.getState().results[id]?.run?.analysis.cycles[0]?.couples[0];
   if (!couple) throw new Error('no couple found');
   return couple;
 }
@@ -90,7 +90,7 @@ describe('files and analysis', () => {
     // removed; here the data had no drop, so correcting by 500 Ω must *narrow* ΔEp (common
     // practice, no source): check the direction and that the result changed.
     expect(shifted.deltaEpV).toBeLessThan(before.deltaEpV as number);
-    expect(store.getState().results[key]?.correctedPotentialV).toBeInstanceOf(Float64Array);
+    expect(store.getState().results[key]?.run?.analysedPotentialV).toBeInstanceOf(Float64Array);
     await store.getState().undo();
     expect(store.getState().settings.chemistry.resistanceOhm).toBe(0);
     expect(firstCouple(store, key).deltaEpV).toBeCloseTo(before.deltaEpV as number, 12);

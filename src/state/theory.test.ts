@@ -26,7 +26,7 @@ describe('theory overlay', () => {
     const d = Number(/D (\S+) cm²/.exec(t?.description ?? '')?.[1]);
     expect(Math.abs(d / 1e-5 - 1)).toBeLessThan(0.03);
     const simMin = Math.min(...(t?.curve?.currentA ?? []));
-    const ipc = store.getState().results[id]?.analysis?.cycles[0]?.couples[0]?.ipcA as number;
+    const ipc = store.getState().results[id]?.run?.analysis.cycles[0]?.couples[0]?.ipcA as number;
     expect(Math.abs(-simMin / ipc - 1)).toBeLessThan(0.03);
   });
 

@@ -9,7 +9,7 @@ import type { SeriesCouple } from '../core/analysis/seriesTypes';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
 import { displayScale } from './display';
 import { cellOfFile } from './seriesCell';
-import { celsiusToKelvin, millimolarToMolPerCm3 } from './settings';
+import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
 import type { HalfwaveState } from './types';
 
 export type TheoryPlan = { ok: true; params: Partial<CvSimulationInput>; description: string } | { ok: false; reason: string };
@@ -17,7 +17,7 @@ export type TheoryPlan = { ok: true; params: Partial<CvSimulationInput>; descrip
 function seriesCoupleOf(state: HalfwaveState, fileId: string): { couple: SeriesCouple; eHalfV: number } | null {
   const file = state.files[fileId];
   const entry = file ? state.series[file.group] : undefined;
-  for (const couple of entry?.result?.couples ?? []) {
+  for (const couple of entry?.result?.analysis.couples ?? []) {
     const point = couple.points.find((p) => p.fileName === file?.fileName);
     const eHalfV = point?.eHalfV ?? couple.eHalfV;
     if (point && eHalfV !== null) return { couple, eHalfV };
@@ -38,19 +38,24 @@ function sweepOf(potentialV: Float64Array, start: number, end: number, firstDire
 
 export function planTheory(state: HalfwaveState, fileId: string): TheoryPlan {
   const m = state.files[fileId]?.measurement;
-  const potentialV = state.results[fileId]?.correctedPotentialV ?? m?.potentialV;
+  const run = state.results[fileId]?.run;
+  // The overlay is simulated on the recording scale (the plot shifts it like the data): the
+  // analysed potential (iR-corrected, on the display scale) is taken back by the file's offset.
+  const offsetV = run?.reference.offsetV ?? 0;
+  const potentialV = run?.analysedPotentialV ? run.analysedPotentialV.map((e) => e - offsetV) : m?.potentialV;
   const cycle = m?.cycles[0];
   const first = m?.segments[0];
   if (!m || !potentialV || !cycle || !first) return { ok: false, reason: 'the file is not read yet' };
   if (!m.scanRateVPerS) return { ok: false, reason: 'the file has no scan rate' };
   const found = seriesCoupleOf(state, fileId);
   if (!found) return { ok: false, reason: 'no couple of this file was followed through its scan-rate series' };
-  const { couple, eHalfV } = found;
+  const { couple, eHalfV: eHalfShownV } = found;
+  const eHalfV = eHalfShownV - offsetV;
   const c = cellOfFile(state, fileId);
   const { startV, switchV } = sweepOf(potentialV, cycle.start, cycle.end, first.direction);
   const alpha = couple.alpha ?? c.alpha ?? couple.diffusion?.alphaUsed ?? 0.5;
   const scale = displayScale(state.settings, c);
-  const e0Text = `E°′ ${(eHalfV + scale.offsetV).toFixed(4)} V vs ${scale.name}`;
+  const e0Text = `E°′ ${eHalfShownV.toFixed(4)} V vs ${scale.name}`;
   const common: Partial<CvSimulationInput> = {
     formalPotentialV: eHalfV, alpha, electronCount: c.electronCount, areaCm2: c.areaCm2, temperatureK: celsiusToKelvin(c.temperatureC),
     scanRateVPerS: m.scanRateVPerS, startV, switchV, cycles: 1, stepV: Math.min(0.001, Math.abs(switchV - startV) / 200),

@@ -3,8 +3,7 @@
  * the state they change; each slice file builds its part.
  */
 import type { StoreApi } from 'zustand/vanilla';
-import type { SeriesAnalysis } from '../core/analysis/seriesTypes';
-import type { VoltammogramAnalysis } from '../core/analysis/types';
+import type { RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
 import type { ImportWarning } from '../io/errors';
 import type { SessionFileRecord } from '../io/session';
 import type { ImportOverrides, Measurement } from '../io/types';
@@ -61,9 +60,8 @@ export interface FilesSlice {
 
 export interface AnalysisEntry {
   status: 'running' | 'ready' | 'error';
-  analysis: VoltammogramAnalysis | null;
-  /** Potential after iR correction (V), when Ru > 0; the plot and tables use it. */
-  correctedPotentialV: Float64Array | null;
+  /** The file's part of the analysis run: its analysis on the display scale, the analysed potential, its reference offset. */
+  run: RunFileResult | null;
   error: UserError | null;
 }
 
@@ -121,7 +119,7 @@ export interface HistorySlice {
 
 export interface SeriesEntry {
   status: 'running' | 'ready' | 'error';
-  result: SeriesAnalysis | null;
+  result: RunSeriesResult | null;
   error: UserError | null;
   /** Files that went into the series, in order. */
   fileIds: string[];
@@ -136,8 +134,8 @@ export interface SeriesSlice {
   analyzeGroup(group: string): Promise<void>;
   /** The group the screen is about: the series view's choice, else the selected file's group. */
   currentGroup(): string | null;
-  /** Results sheet of a group as CSV or JSON text, made in the worker. */
-  exportGroup(group: string, format: 'csv' | 'json'): Promise<string>;
+  /** Results sheet of a group (null: every series) as CSV or JSON text, made in the worker. */
+  exportGroup(group: string | null, format: 'csv' | 'json'): Promise<string>;
   /** Re-runs the group's series after a short quiet time (edits come in bursts). */
   scheduleGroup(group: string, delayMs?: number): void;
 }
@@ -185,6 +183,7 @@ export type { CellField, CellOrigin, ResolvedCell, SeriesCell } from './seriesCe
 export type { SeriesAnalysis, SeriesCouple } from '../core/analysis/seriesTypes';
 export type { SeriesPoint } from '../core/series/seriesPoint';
 export type { VoltammogramAnalysis } from '../core/analysis/types';
+export type { RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
 export type { BaselineMethod, BaselineSpec } from '../core/baseline/baselineTypes';
 export type { CoupleResult } from '../core/couples/coupleTypes';
 export type { PeakResult, PeakWindow } from '../core/peaks/peakTypes';

@@ -3,9 +3,7 @@
  * inside the worker (analysis.worker.ts) and in-thread (client.ts), so Vitest exercises exactly the
  * code the browser runs.
  */
-import { analyzeSeries } from '../core/analysis/analyzeSeries';
-import { analyzeVoltammogram } from '../core/analysis/analyzeVoltammogram';
-import { iRCorrect } from '../core/conventions/iRCorrect';
+import { analyzeRunFiles, analyzeRunSeriesStep } from '../core/analysis/analyzeRun';
 import { simulateCv } from '../core/simulation/simulateCv';
 import { findSweepSegments } from '../core/sweeps/findSweepSegments';
 import { importVoltammogramAsync } from '../io';
@@ -36,13 +34,8 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
     });
     return { ...result, sha256 };
   },
-  analyze: (input) => {
-    const v = input.voltammogram;
-    const correctedPotentialV = input.resistanceOhm > 0 ? iRCorrect(v.potentialV, v.currentA, input.resistanceOhm) : null;
-    const analysis = analyzeVoltammogram(correctedPotentialV ? { ...v, potentialV: correctedPotentialV } : v, input.options);
-    return { analysis, correctedPotentialV };
-  },
-  series: (input) => analyzeSeries(input.files, input.options),
+  runFiles: (input) => analyzeRunFiles(input.run),
+  runSeries: (input) => analyzeRunSeriesStep(input),
   export: (input) => ({ text: exportRun(input) }),
   simulate: (input) => {
     const sim = simulateCv(input.params);

@@ -10,7 +10,7 @@ function recorder(name: string, log: string[], release: Promise<void>): Analysis
     async request(type) {
       log.push(`${name}:${type}`);
       await release;
-      if (type === 'analyze') throw new AnalysisError('NO_PEAK', `${name} found no peak`);
+      if (type === 'runFiles') throw new AnalysisError('NO_PEAK', `${name} found no peak`);
       return { segments: [], cycles: [] } as never;
     },
     dispose() {
@@ -38,7 +38,7 @@ describe('createPoolClient', () => {
 
   it('passes a client error through as the same class', async () => {
     const pool = createPoolClient([recorder('a', [], Promise.resolve())]);
-    const err = await pool.request('analyze', {} as never).catch((e: unknown) => e);
+    const err = await pool.request('runFiles', {} as never).catch((e: unknown) => e);
     expect(err).toBeInstanceOf(AnalysisError);
     expect((err as AnalysisError).code).toBe('NO_PEAK');
   });

@@ -6,10 +6,9 @@
  * `RequestMap` is the single table of what the worker can do: the request `type`, its input and
  * its output. The unions below are derived from it, so adding a line there types both ends.
  */
-import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesFileInput } from '../core/analysis/seriesTypes';
-import type { AnalyzeVoltammogramOptions, VoltammogramAnalysis } from '../core/analysis/types';
+import type { RunSeriesStepInput } from '../core/analysis/analyzeRun';
+import type { RunFileResult, RunInput, RunSeriesResult } from '../core/analysis/runTypes';
 import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSweepSegments';
-import type { Voltammogram } from '../core/types';
 import type { ImportOverrides, ImportResult } from '../io/types';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
 import type { ExportRunInput } from './exportRun';
@@ -26,25 +25,25 @@ export interface RequestMap {
     output: ImportResult & { sha256: string | null };
   };
   /**
-   * Peaks, baselines, couples and verdicts of one voltammogram (core/analysis), after iR
-   * correction of the potential when `resistanceOhm` > 0 (the corrected potential comes back so
-   * the plot shows what was analysed).
+   * The per-file part of an analysis run (core/analysis/analyzeRun: analyzeRunFiles): peaks,
+   * baselines, couples and verdicts of each file on the reported scale, with the potential column
+   * as analysed (iR-corrected and shifted) so the plot shows what was analysed.
    */
-  analyze: {
-    input: { voltammogram: Voltammogram; options: AnalyzeVoltammogramOptions; resistanceOhm: number };
-    output: { analysis: VoltammogramAnalysis; correctedPotentialV: Float64Array | null };
+  runFiles: {
+    input: { run: RunInput };
+    output: RunFileResult[];
   };
-  /** Scan-rate series over already analysed files (core/analysis/analyzeSeries). */
-  series: {
-    input: { files: SeriesFileInput[]; options: AnalyzeSeriesOptions };
-    output: SeriesAnalysis;
+  /** The per-series part of an analysis run over already analysed files (analyzeRunSeriesStep). */
+  runSeries: {
+    input: RunSeriesStepInput;
+    output: RunSeriesResult;
   };
   /** Theoretical voltammogram (core/simulation) for overlaying on a measurement. */
   simulate: {
     input: { params: Partial<CvSimulationInput> };
     output: { potentialV: Float64Array; currentA: Float64Array };
   };
-  /** Results sheet (CSV or JSON) of one group, through core analyzeRun and io/exportResults. */
+  /** Results sheet (CSV or JSON) of a run, through core analyzeRun and io/exportResults. */
   export: {
     input: ExportRunInput;
     output: { text: string };

@@ -68,7 +68,7 @@ describe('changing settings, exporting, saving', () => {
     const text = await readFile(await download.path(), 'utf8');
     expect(text).toMatch(/^# results sheet,Halfwave,/);
     expect(text).toContain('# potential scale,SCE');
-    expect(text).toMatch(/# file,[^,]+,role,series,size_bytes,\d+,sha256,[0-9a-f]{64}/);
+    expect(text).toMatch(/# file,[^,]+,series,[^,]+,role,series,size_bytes,\d+,sha256,[0-9a-f]{64}/);
     expect(text).toContain('# table: couples');
     expect(text).toContain('# table: series');
   });

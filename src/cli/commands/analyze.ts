@@ -1,7 +1,7 @@
 /**
- * `halfwave analyze FILE...`: reads voltammograms through the importer. `--inspect` prints what
- * the importer detected in each file. The analysis report itself is produced by one call in
- * `run` below (see ANALYSIS BRANCH).
+ * `halfwave analyze FILE...`: reads voltammograms through the importer, groups them into scan-rate
+ * series and analyses them (analyzeReport.ts: one analysis run, as the screen computes it).
+ * `--inspect` prints what the importer detected in each file instead.
  */
 import { parseArgs, optionNumberOrUndefined, optionString } from '../args';
 import type { OptionSpec, ParsedArgs } from '../args';
@@ -10,8 +10,12 @@ import { UsageError } from '../errors';
 import { formatInspectText, inspectJson } from '../inspect';
 import { readInputs } from '../readInputs';
 import { ANALYSIS_OPTION_HELP, ANALYSIS_OPTION_SPEC, parseAnalysisExtras, runAnalysis } from '../analyzeReport';
-import { parseUnitOf } from '../../io';
-import type { CurrentUnit, DecimalMark, Delimiter, ImportOverrides, PotentialUnit, TextEncoding, TimeUnit } from '../../io';
+import { celsiusToKelvin, millimolarToMolPerCm3 } from '../../core/units';
+import {
+  CONVENTION_CHOICES, CURRENT_UNIT_CHOICES, DECIMAL_CHOICES, DELIMITER_CHOICES, ENCODING_CHOICES, POTENTIAL_UNIT_CHOICES, TIME_UNIT_CHOICES,
+  choiceNamed, choiceNames, parseUnitOf,
+} from '../../io';
+import type { Choice, ImportOverrides } from '../../io';
 
 const SPEC: Record<string, OptionSpec> = {
   area: { value: true }, conc: { value: true }, n: { value: true }, temp: { value: true }, 'scan-rate': { value: true },
@@ -30,7 +34,6 @@ export interface AnalyzeArgs {
   concentrationMolPerCm3?: number;
   electronCount?: number;
   temperatureK?: number;
-  scanRateVPerS?: number;
   referenceElectrode?: string;
   json: boolean;
   csvPath?: string;
@@ -54,16 +57,16 @@ Analysis options:
   --inspect             print what was detected in each file (no analysis)
 
 Import overrides (each replaces one guess; see the --inspect report):
-  --delimiter D         comma | semicolon | tab | space (runs of spaces)
-  --decimal M           point | comma
+  --delimiter D         ${choiceNames(DELIMITER_CHOICES).replace(/, /g, ' | ')} (space: runs of spaces)
+  --decimal M           ${choiceNames(DECIMAL_CHOICES).replace(/, /g, ' | ')}
   --header-line N       1-based line of the column names; 0 = the file has none
   --columns LIST        1-based columns, e.g. E=2,I=3,t=1,cycle=4 (cycle=0: split cycles from
                         the potential instead of a cycle column)
   --potential-unit U    V | mV | µV (or uV)
   --current-unit U      A | mA | µA (or uA) | nA | pA
-  --time-unit U         s | ms | min | h
+  --time-unit U         s | ms | µs (or us) | min | h
   --convention C        iupac (anodic current positive) | polarographic (cathodic positive)
-  --encoding E          utf-8 | utf-16le | utf-16be | latin1
+  --encoding E          ${choiceNames(ENCODING_CHOICES).replace(/, /g, ' | ')}
 
 ${ANALYSIS_OPTION_HELP}
 Exit codes: 0 done, 1 internal fault, 2 bad arguments or a file that cannot be read.
@@ -78,8 +81,7 @@ export const analyzeCommand: CliCommand = {
     const args = parseAnalyzeArgs(parsed);
     if (args.inspect) return inspect(args, io);
     const extras = parseAnalysisExtras(parsed);
-    const { measurements } = readInputs(args.files, { overrides: args.overrides });
-    return runAnalysis(measurements, args, io, extras);
+    return runAnalysis(readInputs(args.files, { overrides: args.overrides }), args, io, extras);
   },
 };
 
@@ -95,15 +97,13 @@ export function parseAnalyzeArgs(a: ParsedArgs): AnalyzeArgs {
   const conc = optionNumberOrUndefined(a, 'conc', 0, 1e5);
   const n = optionNumberOrUndefined(a, 'n', 1, 10);
   const temp = optionNumberOrUndefined(a, 'temp', -100, 500);
-  const rate = optionNumberOrUndefined(a, 'scan-rate', 1e-9, 1e7);
   if (area !== undefined) out.areaCm2 = area;
-  if (conc !== undefined) out.concentrationMolPerCm3 = conc * 1e-6;
+  if (conc !== undefined) out.concentrationMolPerCm3 = millimolarToMolPerCm3(conc);
   if (n !== undefined) {
     if (!Number.isInteger(n)) throw new UsageError(`--n must be a whole number of electrons, got ${n}`);
     out.electronCount = n;
   }
-  if (temp !== undefined) out.temperatureK = temp + 273.15;
-  if (rate !== undefined) out.scanRateVPerS = rate;
+  if (temp !== undefined) out.temperatureK = celsiusToKelvin(temp);
   const ref = optionString(a, 'ref');
   if (ref !== undefined) out.referenceElectrode = ref;
   const csv = optionString(a, 'csv');
@@ -111,34 +111,33 @@ export function parseAnalyzeArgs(a: ParsedArgs): AnalyzeArgs {
   return out;
 }
 
-const DELIMITERS: Record<string, Delimiter> = { comma: ',', ',': ',', semicolon: ';', ';': ';', tab: '\t', '\\t': '\t', space: 'whitespace', spaces: 'whitespace', whitespace: 'whitespace' };
-const DECIMALS: Record<string, DecimalMark> = { point: '.', dot: '.', '.': '.', comma: ',', ',': ',' };
-const ENCODINGS: TextEncoding[] = ['utf-8', 'utf-16le', 'utf-16be', 'latin1'];
 const COLUMN_KEYS: Record<string, 'potentialColumn' | 'currentColumn' | 'timeColumn' | 'cycleColumn'> = {
   e: 'potentialColumn', potential: 'potentialColumn', i: 'currentColumn', current: 'currentColumn', t: 'timeColumn', time: 'timeColumn', cycle: 'cycleColumn',
 };
 
-function pick<T>(a: ParsedArgs, name: string, table: Record<string, T>, values: string): T | undefined {
+/** The value of a choice flag (io/overrideChoices.ts), or a UsageError listing the names it takes. */
+function pick<T>(a: ParsedArgs, name: string, choices: readonly Choice<T>[]): T | undefined {
   const raw = optionString(a, name);
   if (raw === undefined) return undefined;
-  const v = table[raw.toLowerCase()] ?? table[raw];
-  if (v === undefined) throw new UsageError(`--${name} must be one of ${values}, got "${raw}"`);
-  return v;
+  const hit = choiceNamed(choices, raw);
+  if (!hit) throw new UsageError(`--${name} must be one of ${choiceNames(choices)}, got "${raw}"`);
+  return hit.value;
 }
 
-function unitOption<K extends 'potential' | 'current' | 'time'>(a: ParsedArgs, kind: K, allowed: string): string | undefined {
+/** A unit flag: any spelling the importer reads (parseUnitOf), checked against the unit table. */
+function unitOption<T extends string>(a: ParsedArgs, kind: 'potential' | 'current' | 'time', choices: readonly Choice<T>[]): T | undefined {
   const raw = optionString(a, `${kind}-unit`);
   if (raw === undefined) return undefined;
-  const u = parseUnitOf(kind, raw);
-  if (!u) throw new UsageError(`--${kind}-unit must be one of ${allowed}, got "${raw}"`);
+  const u = parseUnitOf(kind, raw) as T | null;
+  if (!u || !choices.some((c) => c.value === u)) throw new UsageError(`--${kind}-unit must be one of ${choices.map((c) => c.value).join(', ')}, got "${raw}"`);
   return u;
 }
 
 export function parseOverrides(a: ParsedArgs): ImportOverrides {
   const o: ImportOverrides = {};
-  const delimiter = pick(a, 'delimiter', DELIMITERS, 'comma, semicolon, tab, space');
+  const delimiter = pick(a, 'delimiter', DELIMITER_CHOICES);
   if (delimiter) o.delimiter = delimiter;
-  const decimal = pick(a, 'decimal', DECIMALS, 'point, comma');
+  const decimal = pick(a, 'decimal', DECIMAL_CHOICES);
   if (decimal) o.decimalMark = decimal;
   const header = optionNumberOrUndefined(a, 'header-line', 0, 1e7);
   if (header !== undefined) {
@@ -146,15 +145,15 @@ export function parseOverrides(a: ParsedArgs): ImportOverrides {
     o.headerLine = header;
   }
   Object.assign(o, parseColumns(optionString(a, 'columns')));
-  const pu = unitOption(a, 'potential', 'V, mV, µV');
-  if (pu) o.potentialUnit = pu as PotentialUnit;
-  const cu = unitOption(a, 'current', 'A, mA, µA, nA, pA');
-  if (cu) o.currentUnit = cu as CurrentUnit;
-  const tu = unitOption(a, 'time', 's, ms, min, h');
-  if (tu) o.timeUnit = tu as TimeUnit;
-  const conv = pick(a, 'convention', { iupac: 'iupac', polarographic: 'polarographic' } as const, 'iupac, polarographic');
+  const pu = unitOption(a, 'potential', POTENTIAL_UNIT_CHOICES);
+  if (pu) o.potentialUnit = pu;
+  const cu = unitOption(a, 'current', CURRENT_UNIT_CHOICES);
+  if (cu) o.currentUnit = cu;
+  const tu = unitOption(a, 'time', TIME_UNIT_CHOICES);
+  if (tu) o.timeUnit = tu;
+  const conv = pick(a, 'convention', CONVENTION_CHOICES);
   if (conv) o.currentConvention = conv;
-  const enc = pick(a, 'encoding', Object.fromEntries(ENCODINGS.map((e) => [e, e])) as Record<string, TextEncoding>, ENCODINGS.join(', '));
+  const enc = pick(a, 'encoding', ENCODING_CHOICES);
   if (enc) o.encoding = enc;
   const rate = optionNumberOrUndefined(a, 'scan-rate', 1e-9, 1e7);
   if (rate !== undefined) o.scanRateVPerS = rate;

@@ -11,7 +11,8 @@ import { simulatedVoltammogram } from '../peaks/simulatedVoltammogram';
 import { simulateCv } from '../simulation';
 import type { CvSimulationInput } from '../simulation';
 import { analyzeRun } from './analyzeRun';
-import type { AnalyzeRunOptions } from './runTypes';
+import { DEFAULT_SERIES_KEY } from './resolveRun';
+import type { CellValues, ReportOptions, RunFile } from './runTypes';
 
 const RATES = [0.05, 0.1, 0.2, 0.5, 1];
 const CELL = { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 };
@@ -22,7 +23,14 @@ const QUIET: Noise = { noiseA: 0, cdl: 0 };
 /** About 0.5 % of the smallest peak and 20 µF/cm² of double layer (common practice, no source). */
 const NOISY: Noise = { noiseA: 6e-8, cdl: 20e-6 };
 
-function run(sim: Partial<CvSimulationInput>, noise: Noise, options: AnalyzeRunOptions = {}, rates = RATES) {
+interface Choices { cell?: CellValues; report?: ReportOptions }
+
+/** One series of `files` with the given cell (the default series key) and report. */
+function runOf(files: RunFile[], choices: Choices = {}) {
+  return analyzeRun({ files, cells: { [DEFAULT_SERIES_KEY]: choices.cell ?? {} }, report: choices.report ?? {} });
+}
+
+function run(sim: Partial<CvSimulationInput>, noise: Noise, choices: Choices = {}, rates = RATES) {
   const inputs = rates.map((v, i) => ({
     fileName: `sim-${v}.csv`,
     voltammogram: simulatedVoltammogram(
@@ -30,7 +38,7 @@ function run(sim: Partial<CvSimulationInput>, noise: Noise, options: AnalyzeRunO
       { noiseA: noise.noiseA, seed: 11 + i },
     ),
   }));
-  return analyzeRun(inputs, { ...CELL, ...options });
+  return runOf(inputs, { ...choices, cell: { ...CELL, ...choices.cell } });
 }
 
 const rel = (x: number | null | undefined, ref: number) => Math.abs((x ?? Number.NaN) / ref - 1);
@@ -38,8 +46,8 @@ const rel = (x: number | null | undefined, ref: number) => Math.abs((x ?? Number
 describe.each([['noise-free', QUIET, 1], ['noisy with charging', NOISY, 2]] as const)('analyzeRun on simulated series, %s', (_label, noise, k) => {
   it('reversible couple: E½ and D', () => {
     const r = run({ k0CmPerS: Infinity, formalPotentialV: 0.1, startV: 0.4, switchV: -0.2 }, noise);
-    const c = r.series.couples[0];
-    expect(r.series.couples).toHaveLength(1);
+    const c = r.series[0]?.analysis.couples[0];
+    expect(r.series[0]?.analysis.couples).toHaveLength(1);
     expect(Math.abs((c?.eHalfV ?? 1) - 0.1)).toBeLessThan(0.002 * k);
     expect(rel(c?.diffusion?.diffusionCm2PerS, D)).toBeLessThan(0.05 * k);
     expect(c?.logLog?.reading).toBe('diffusion');
@@ -47,7 +55,7 @@ describe.each([['noise-free', QUIET, 1], ['noisy with charging', NOISY, 2]] as c
   });
   it('quasi-reversible couple: k° by Nicholson from the series itself', () => {
     const r = run({ k0CmPerS: 0.01 }, noise);
-    const c = r.series.couples[0];
+    const c = r.series[0]?.analysis.couples[0];
     expect(c?.kineticClass).toBe('quasi-reversible');
     expect(Math.abs(c?.eHalfV ?? 1)).toBeLessThan(0.002 * k);
     expect(rel(c?.rateConstant?.k0CmPerS, 0.01)).toBeLessThan(0.3 * k);
@@ -56,7 +64,7 @@ describe.each([['noise-free', QUIET, 1], ['noisy with charging', NOISY, 2]] as c
   });
   it('irreversible couple: D (irreversible form), α and k°', () => {
     const r = run({ k0CmPerS: 1e-4, startV: 0.8, switchV: -0.8 }, noise);
-    const c = r.series.couples.find((x) => x.kineticClass === 'irreversible');
+    const c = r.series[0]?.analysis.couples.find((x) => x.kineticClass === 'irreversible');
     expect(c?.diffusion?.form).toBe('irreversible');
     expect(rel(c?.diffusion?.diffusionCm2PerS, D)).toBeLessThan(0.05 * k);
     expect(Math.abs((c?.alpha ?? 0) - 0.5)).toBeLessThan(0.05 * k);
@@ -65,7 +73,7 @@ describe.each([['noise-free', QUIET, 1], ['noisy with charging', NOISY, 2]] as c
   it('adsorbed couple: Γ from the peak charge and from the slope', () => {
     // A monolayer's peaks are ~20× smaller than the solution couple's: noise scaled to ~1 % of them.
     const r = run({ mechanism: 'surface', surfaceRatePerS: 1000, coverageMolPerCm2: 1e-10 }, { ...noise, noiseA: noise.noiseA / 20 });
-    const c = r.series.couples[0];
+    const c = r.series[0]?.analysis.couples[0];
     expect(c?.regime).toBe('surface');
     expect(rel(c?.surface?.coverageFromChargeMolPerCm2, 1e-10)).toBeLessThan(0.05 * k);
     expect(rel(c?.surface?.coverageFromSlopeMolPerCm2, 1e-10)).toBeLessThan(0.05 * k);
@@ -76,11 +84,11 @@ describe('analyzeRun conversions', () => {
   // Bard & Faulkner inside cover (check-values.md §10): Ag/AgCl (sat. KCl) = +0.197 V vs SHE.
   it('reports potentials on the requested scale', () => {
     const sim = { k0CmPerS: Infinity, formalPotentialV: 0.1, startV: 0.4, switchV: -0.2 };
-    const base = run(sim, QUIET, {}, [0.1, 0.2]).series.couples[0]?.eHalfV ?? 0;
-    const she = run(sim, QUIET, { inputReference: 'Ag/AgCl', outputReference: 'SHE' }, [0.1, 0.2]);
-    expect((she.series.couples[0]?.eHalfV ?? 0) - base).toBeCloseTo(0.197, 9);
+    const base = run(sim, QUIET, {}, [0.1, 0.2]).series[0]?.analysis.couples[0]?.eHalfV ?? 0;
+    const she = run(sim, QUIET, { cell: { inputReference: 'Ag/AgCl' }, report: { outputReference: 'SHE' } }, [0.1, 0.2]);
+    expect((she.series[0]?.analysis.couples[0]?.eHalfV ?? 0) - base).toBeCloseTo(0.197, 9);
     expect(she.reference.basis.join(' ')).toMatch(/0.197/);
-    expect(() => run(sim, QUIET, { outputReference: 'SHE' }, [0.1])).toThrow(AnalysisError);
+    expect(() => run(sim, QUIET, { report: { outputReference: 'SHE' } }, [0.1])).toThrow(AnalysisError);
   });
   // Fc⁺/Fc internal standard (IUPAC recommendation, Gritzner & Kůta 1984, from memory): the
   // standard's own E½ becomes 0 V; a second couple 0.35 V above it reads +0.35 V.
@@ -90,8 +98,8 @@ describe('analyzeRun conversions', () => {
       fileName: `fc-${v}`, referenceElectrode: 'SCE',
       voltammogram: simulatedVoltammogram({ ...sim, scanRateVPerS: v }, { extra: [{ formalPotentialV: 0.45 }] }),
     }));
-    const r = analyzeRun(inputs, { outputReference: 'Fc', internalStandard: { kind: 'measured', nearV: 0.1 } });
-    const halves = r.series.couples.map((c) => c.eHalfV ?? Number.NaN);
+    const r = runOf(inputs, { cell: { internalStandard: { kind: 'measured', nearV: 0.1 } }, report: { outputReference: 'Fc' } });
+    const halves = (r.series[0]?.analysis.couples ?? []).map((c) => c.eHalfV ?? Number.NaN);
     expect(Math.abs(halves[0] ?? 1)).toBeLessThan(1e-9);
     expect(Math.abs((halves[1] ?? 0) - 0.35)).toBeLessThan(0.002);
   });
@@ -110,8 +118,8 @@ describe('analyzeRun conversions', () => {
     });
     const interfacial = (s.interfacialPotentialV[hi] as number) - (s.interfacialPotentialV[lo] as number);
     const v = simulatedVoltammogram(sim);
-    const raw = analyzeRun([{ fileName: 'r', voltammogram: v }]).files[0]?.analysis.cycles[0]?.couples[0]?.deltaEpV ?? 0;
-    const fixed = analyzeRun([{ fileName: 'f', voltammogram: v }], { ruOhm: 300 }).files[0]?.analysis.cycles[0]?.couples[0]?.deltaEpV ?? 0;
+    const raw = runOf([{ fileName: 'r', voltammogram: v }]).files[0]?.analysis.cycles[0]?.couples[0]?.deltaEpV ?? 0;
+    const fixed = runOf([{ fileName: 'f', voltammogram: v }], { cell: { ruOhm: 300 } }).files[0]?.analysis.cycles[0]?.couples[0]?.deltaEpV ?? 0;
     expect(raw - fixed).toBeGreaterThan(0.025);
     expect(Math.abs(fixed - interfacial)).toBeLessThan(0.001);
   });
@@ -120,8 +128,8 @@ describe('analyzeRun conversions', () => {
   it('gives identical peaks for a polarographic file converted to IUPAC', () => {
     const v = simulatedVoltammogram({ k0CmPerS: 0.02 });
     const polar = { ...v, currentA: v.currentA.map((i) => -i) };
-    const a = analyzeRun([{ fileName: 'a', voltammogram: v }]).files[0]?.analysis.cycles[0]?.couples[0];
-    const b = analyzeRun([{ fileName: 'b', voltammogram: { ...polar, currentA: toIupacCurrent(polar.currentA, 'polarographic') } }]).files[0]?.analysis.cycles[0]?.couples[0];
+    const a = runOf([{ fileName: 'a', voltammogram: v }]).files[0]?.analysis.cycles[0]?.couples[0];
+    const b = runOf([{ fileName: 'b', voltammogram: { ...polar, currentA: toIupacCurrent(polar.currentA, 'polarographic') } }]).files[0]?.analysis.cycles[0]?.couples[0];
     expect(b?.epaV).toBe(a?.epaV);
     expect(b?.epcV).toBe(a?.epcV);
     expect(b?.ipaA).toBe(a?.ipaA);
@@ -130,13 +138,13 @@ describe('analyzeRun conversions', () => {
   // Bard & Faulkner §1.2: the charging gap is 2·A·Cd·v; a faradaically quiet region of a
   // surface-wave run gives back the simulated 20 µF/cm².
   it('recovers the double-layer capacitance from the charging gap', () => {
-    const r = run({ mechanism: 'surface', coverageMolPerCm2: 1e-11 }, { noiseA: 0, cdl: 20e-6 }, { capacitancePotentialV: 0.25 }, [0.1, 0.2, 0.5]);
-    expect(rel(r.capacitance?.capacitanceFPerCm2, 20e-6)).toBeLessThan(0.02);
+    const r = run({ mechanism: 'surface', coverageMolPerCm2: 1e-11 }, { noiseA: 0, cdl: 20e-6 }, { cell: { capacitancePotentialV: 0.25 } }, [0.1, 0.2, 0.5]);
+    expect(rel(r.series[0]?.capacitance?.capacitanceFPerCm2, 20e-6)).toBeLessThan(0.02);
   });
   it('refuses a file without a scan rate', () => {
     const v = simulatedVoltammogram({});
-    expect(() => analyzeRun([{ fileName: 'x', voltammogram: { ...v, scanRateVPerS: null } }])).toThrow(/no scan rate/);
-    expect(() => analyzeRun([])).toThrow(AnalysisError);
+    expect(() => runOf([{ fileName: 'x', voltammogram: { ...v, scanRateVPerS: null } }])).toThrow(/no scan rate/);
+    expect(() => runOf([])).toThrow(AnalysisError);
   });
 });
 
@@ -144,6 +152,26 @@ describe('analyzeRun input errors', () => {
   it('names the file whose trace cannot be analysed', () => {
     const good = simulatedVoltammogram({});
     const bad = { ...good, currentA: good.currentA.map((i, k) => (k === 5 ? Number.NaN : i)) };
-    expect(() => analyzeRun([{ fileName: 'good.csv', voltammogram: good }, { fileName: 'broken.csv', voltammogram: bad }])).toThrow(/broken\.csv/);
+    expect(() => runOf([{ fileName: 'good.csv', voltammogram: good }, { fileName: 'broken.csv', voltammogram: bad }])).toThrow(/broken\.csv/);
+  });
+});
+
+describe('analyzeRun with several series', () => {
+  const sim = (e0: number, v: number) => simulatedVoltammogram({ k0CmPerS: Infinity, formalPotentialV: e0, startV: e0 + 0.3, switchV: e0 - 0.3, scanRateVPerS: v });
+  const files: RunFile[] = [
+    ...[0.1, 0.2, 0.4].map((v) => ({ fileName: `a-${v}`, series: 'A', voltammogram: sim(0.1, v) })),
+    ...[0.1, 0.2, 0.4].map((v) => ({ fileName: `b-${v}`, series: 'B', voltammogram: sim(-0.2, v) })),
+  ];
+  it('keeps each series apart, with its own cell', () => {
+    const r = analyzeRun({ files, cells: { A: { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 }, B: { areaCm2: 0.0314, concentrationMolPerCm3: 2e-6 } } });
+    expect(r.series.map((s) => s.key)).toEqual(['A', 'B']);
+    expect(r.series.map((s) => s.fileNames.length)).toEqual([3, 3]);
+    expect(r.series[0]?.analysis.couples[0]?.eHalfV).toBeCloseTo(0.1, 2);
+    expect(r.series[1]?.analysis.couples[0]?.eHalfV).toBeCloseTo(-0.2, 2);
+    expect(r.series[1]?.cell.areaCm2).toBe(0.0314);
+    expect(r.files.map((f) => f.series)).toEqual(['A', 'A', 'A', 'B', 'B', 'B']);
+  });
+  it('names the series whose cell is invalid', () => {
+    expect(() => analyzeRun({ files, cells: { B: { areaCm2: -1 } } })).toThrow(/series "B".*area/);
   });
 });

@@ -113,7 +113,7 @@ describe('analyzeSeries', () => {
   it('rejects an empty series and bad options', () => {
     expect(() => analyzeSeries([])).toThrow(AnalysisError);
     const one = [{ fileName: 'a', scanRateVPerS: 0.1, analysis: fakeAnalysis([]) }];
-    expect(() => analyzeSeries(one, { areaCm2: -1 })).toThrow(/areaCm2/);
+    expect(() => analyzeSeries(one, { areaCm2: -1 })).toThrow(/electrode area.*above 0/);
     expect(() => analyzeSeries([{ ...one[0]!, scanRateVPerS: 0 }])).toThrow(/scan rate of a/);
   });
 });

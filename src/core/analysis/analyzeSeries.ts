@@ -9,12 +9,13 @@
  * Sources: in the methods called (series/, kinetics/, regression/); the couple matching and the
  *   class rules are design choices documented in matchSeriesCouples.ts and series/classifySeriesCouple.ts.
  */
-import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
+import { thermalVoltageV } from '../constants';
 import { AnalysisError, assertFiniteInRange } from '../errors';
 import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
 import { electroactiveAreaFromStandard } from '../series';
 import { median } from '../statistics/median';
 import { matchSeriesCouples } from './matchSeriesCouples';
+import { resolveCell, resolveMethod } from './resolveRun';
 import type { CoupleRef } from './matchSeriesCouples';
 import { classifySeriesCouple, mostCommon, suggestedElectronCount } from '../series/classifySeriesCouple';
 import { describeSeriesCouple } from './seriesDiagnostics';
@@ -26,29 +27,16 @@ import type { SeriesPoint } from '../series/seriesPoint';
 import type { CycleAnalysis } from './types';
 import type { SeriesEvidence, Verdict } from '../couples/coupleTypes';
 
+/** Checks the series options and fills in the defaults (the run does this once in resolveRun). */
 export function resolveSeriesOptions(options: AnalyzeSeriesOptions): ResolvedSeriesOptions {
-  const o: ResolvedSeriesOptions = {
-    electronCount: options.electronCount ?? 1,
-    areaCm2: options.areaCm2 ?? null,
-    concentrationMolPerCm3: options.concentrationMolPerCm3 ?? null,
-    temperatureK: options.temperatureK ?? STANDARD_TEMPERATURE_K,
-    alpha: options.alpha ?? null,
-    transferElectronCount: options.transferElectronCount ?? 1,
-    diffusionRatio: options.diffusionRatio ?? 1,
-    diffusionCm2PerS: options.diffusionCm2PerS ?? null,
-    cycle: options.cycle ?? 1,
-    matchToleranceV: options.matchToleranceV ?? 0.12,
+  const { cycle, matchToleranceV, ...cell } = options;
+  const c = resolveCell(cell);
+  const r = resolveMethod({ seriesCycle: cycle ?? 1, matchToleranceV: matchToleranceV ?? 0.12 });
+  return {
+    electronCount: c.electronCount, areaCm2: c.areaCm2, concentrationMolPerCm3: c.concentrationMolPerCm3, temperatureK: c.temperatureK, alpha: c.alpha,
+    transferElectronCount: c.transferElectronCount, diffusionRatio: c.diffusionRatio, diffusionCm2PerS: c.diffusionCm2PerS,
+    cycle: r.seriesCycle, matchToleranceV: r.matchToleranceV,
   };
-  assertFiniteInRange('electronCount', o.electronCount, 0.5, 10);
-  assertFiniteInRange('temperatureK', o.temperatureK, 200, 500);
-  assertFiniteInRange('transferElectronCount', o.transferElectronCount, 0.5, 10);
-  assertFiniteInRange('diffusionRatio', o.diffusionRatio, 1e-3, 1e3);
-  assertFiniteInRange('matchToleranceV', o.matchToleranceV, 0, 2);
-  if (o.areaCm2 !== null) assertFiniteInRange('areaCm2', o.areaCm2, Number.MIN_VALUE);
-  if (o.concentrationMolPerCm3 !== null) assertFiniteInRange('concentrationMolPerCm3', o.concentrationMolPerCm3, Number.MIN_VALUE);
-  if (o.alpha !== null) assertFiniteInRange('alpha', o.alpha, 0.01, 0.99);
-  if (o.diffusionCm2PerS !== null) assertFiniteInRange('diffusionCm2PerS', o.diffusionCm2PerS, Number.MIN_VALUE);
-  return o;
 }
 
 function chooseCycle(analysis: SeriesFileInput['analysis'], cycle: number): CycleAnalysis | null {
@@ -147,8 +135,12 @@ function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['cou
 }
 
 export function analyzeSeries(files: SeriesFileInput[], options: AnalyzeSeriesOptions = {}): SeriesAnalysis {
+  return analyzeResolvedSeries(files, resolveSeriesOptions(options));
+}
+
+/** The series analysis proper, on options already checked (resolveSeriesOptions, or the run's resolveRun). */
+export function analyzeResolvedSeries(files: SeriesFileInput[], o: ResolvedSeriesOptions): SeriesAnalysis {
   if (!files.length) throw new AnalysisError('EMPTY_INPUT', 'a series needs at least one analysed voltammogram');
-  const o = resolveSeriesOptions(options);
   const warnings: SeriesWarning[] = [];
   files.forEach((f, i) => assertFiniteInRange(`scan rate of ${f.fileName || `file ${i + 1}`}`, f.scanRateVPerS, Number.MIN_VALUE));
   const cycles = files.map((f) => {
@@ -177,8 +169,8 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
     out.push({ code: 'DUPLICATE_SCAN_RATE', message: 'several files share a scan rate; each enters the fits as its own point' });
   }
   const needsD = couples.some((c) => c.regime === 'diffusion' && c.forwardFit);
-  if (needsD && o.areaCm2 === null) out.push({ code: 'NO_AREA', message: 'no electrode area given (--area): D and Γ are not reported' });
-  if (needsD && o.concentrationMolPerCm3 === null) out.push({ code: 'NO_CONCENTRATION', message: 'no concentration given (--conc): D is not reported' });
+  if (needsD && o.areaCm2 === null) out.push({ code: 'NO_AREA', message: 'no electrode area given: D and Γ are not reported' });
+  if (needsD && o.concentrationMolPerCm3 === null) out.push({ code: 'NO_CONCENTRATION', message: 'no concentration given: D is not reported' });
   for (const c of couples) {
     if (c.points.length < files.length && files.length > 1) {
       out.push({ code: 'UNMATCHED_COUPLE', couple: c.index, message: `couple ${c.index} (E½ ≈ ${c.eHalfV?.toFixed(3) ?? '?'} V) is found in ${c.points.length} of ${files.length} files` });

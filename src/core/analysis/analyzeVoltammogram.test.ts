@@ -137,9 +137,9 @@ describe('analyzeVoltammogram: bad and empty input', () => {
     const short = { ...reversible, currentA: reversible.currentA.subarray(1) };
     expect(() => analyzeVoltammogram(short)).toThrow(AnalysisError);
     expect(() => analyzeVoltammogram({ ...reversible, segments: [] })).toThrow(/no sweep segments/);
-    expect(() => analyzeVoltammogram(reversible, { electronCount: 0 })).toThrow(/electronCount/);
+    expect(() => analyzeVoltammogram(reversible, { electronCount: 0 })).toThrow(/electron count n/);
     expect(() => analyzeVoltammogram(reversible, { smoothing: { window: 4, order: 2 } })).toThrow(/odd window/);
-    expect(() => analyzeVoltammogram(reversible, { temperatureK: -5 })).toThrow(/temperatureK/);
+    expect(() => analyzeVoltammogram(reversible, { temperatureK: -5 })).toThrow(/temperature \(K\)/);
     expect(() => analyzeVoltammogram(reversible, { peakWindows: [{ direction: 'anodic', fromV: 0.1, toV: 0.1 }] })).toThrow(/peak window/);
     expect(() => analyzeVoltammogram(reversible, { cycles: [3] })).toThrow(/names cycle 3/);
   });

@@ -18,15 +18,27 @@ import { toIupacCurrent } from '../conventions/currentConvention';
 import type { Voltammogram } from '../types';
 import { prepareSweepSignals, windowForSpan, type SweepSignals } from '../peaks/sweepSignals';
 import { analyzeCycle } from './analyzeCycle';
+import { resolveCell, resolveMethod } from './resolveRun';
+import { STANDARD_TEMPERATURE_K } from '../constants';
 import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, VoltammogramAnalysis } from './types';
-import type { SmoothingSetting } from '../smoothing/smoothingTypes';
 
 export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogramOptions = {}): VoltammogramAnalysis {
   checkVoltammogram(v);
-  const draft = resolveOptions(v, options);
+  return analyzeResolvedVoltammogram(v, resolveTraceOptions(v, options));
+}
+
+/** The options of one trace after defaults and checks, less what is derived from the data. */
+export type TraceOptions = Omit<ResolvedAnalyzeOptions, 'locatingSmoothing'>;
+
+/**
+ * The analysis proper, on options already checked (resolveTraceOptions, or the run's resolveRun):
+ * nothing here reads a default or checks an option again. The data are checked.
+ */
+export function analyzeResolvedVoltammogram(v: Voltammogram, trace: TraceOptions): VoltammogramAnalysis {
+  checkVoltammogram(v);
   const first = v.segments[0]!;
-  const locatingSmoothing = { window: windowForSpan(v.potentialV, first, 0.015 / draft.electronCount), order: 2 };
-  const resolved: ResolvedAnalyzeOptions = { ...draft, locatingSmoothing };
+  const locatingSmoothing = { window: windowForSpan(v.potentialV, first, 0.015 / trace.electronCount), order: 2 };
+  const resolved: ResolvedAnalyzeOptions = { ...trace, locatingSmoothing };
   const sig = prepareSweepSignals(
     { potentialV: v.potentialV, currentA: toIupacCurrent(v.currentA, resolved.currentConvention), timeS: v.timeS, scanRateVPerS: resolved.scanRateVPerS, segments: v.segments },
     resolved.smoothing,
@@ -40,7 +52,7 @@ export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogra
   if (flat) {
     warnings.push({ code: 'FLAT_TRACE', message: `current range ${range.toExponential(3)} A is within 10× the noise (${sig.noiseA.toExponential(3)} A): no peaks can be told from noise` });
   }
-  const peakThresholdA = Math.max(resolved.minSignalToNoise * sig.noiseA, resolved.minProminenceA, (resolved.minRelativeProminence ?? 0.01) * range, Number.MIN_VALUE);
+  const peakThresholdA = Math.max(resolved.minSignalToNoise * sig.noiseA, resolved.minProminenceA, resolved.minRelativeProminence * range, Number.MIN_VALUE);
   const cycles = v.cycles
     .filter((c) => resolved.cycles.includes(c.index))
     .map((c) => (flat ? { index: c.index, peaks: [], couples: [], warnings: [{ code: 'NO_PEAKS' as const, message: 'flat trace: no peaks searched', cycle: c.index }] } : analyzeCycle(sig, c, resolved, peakThresholdA)));
@@ -81,31 +93,10 @@ function checkVoltammogram(v: Voltammogram): void {
   }
 }
 
-function checkCountAndSmoothing(electronCount: number, smoothing: SmoothingSetting | 'off'): void {
-  if (!Number.isInteger(electronCount) || electronCount < 1 || electronCount > 12) {
-    throw new AnalysisError('BAD_OPTION', `electronCount must be an integer in [1, 12], got ${electronCount}`);
-  }
-  if (smoothing === 'off') return;
-  const { window: points, order } = smoothing;
-  if (!Number.isInteger(points) || points < 3 || points % 2 === 0 || !Number.isInteger(order) || order < 0 || order >= points) {
-    throw new AnalysisError('BAD_OPTION', `smoothing needs an odd window ≥ 3 and an order in [0, window − 1], got window ${points}, order ${order}`);
-  }
-}
-
-function resolveOptions(v: Voltammogram, o: AnalyzeVoltammogramOptions): Omit<ResolvedAnalyzeOptions, 'locatingSmoothing'> {
-  const temperatureK = o.temperatureK ?? 298.15;
-  assertFiniteInRange('temperatureK', temperatureK, 1, 2000);
-  const electronCount = o.electronCount ?? 1;
-  const smoothing = o.smoothing ?? { window: 5, order: 2 };
-  checkCountAndSmoothing(electronCount, smoothing);
-  const minSignalToNoise = o.minSignalToNoise ?? 8;
-  assertFiniteInRange('minSignalToNoise', minSignalToNoise, 0);
-  const minProminenceA = o.minProminenceA ?? 0;
-  assertFiniteInRange('minProminenceA', minProminenceA, 0);
-  const minRelativeProminence = o.minRelativeProminence ?? 0.01;
-  assertFiniteInRange('minRelativeProminence', minRelativeProminence, 0, 1);
-  const maxDeltaEpV = o.maxDeltaEpV ?? 0.6;
-  assertFiniteInRange('maxDeltaEpV', maxDeltaEpV, 1e-6);
+/** Checks the options of a single trace and fills in the defaults (the run does this in resolveRun). */
+export function resolveTraceOptions(v: Voltammogram, o: AnalyzeVoltammogramOptions): TraceOptions {
+  const { electronCount, temperatureK } = resolveCell({ electronCount: o.electronCount ?? 1, temperatureK: o.temperatureK ?? STANDARD_TEMPERATURE_K });
+  const method = resolveMethod(o);
   const scanRateVPerS = o.scanRateVPerS ?? v.scanRateVPerS;
   if (scanRateVPerS !== null) assertFiniteInRange('scanRateVPerS', scanRateVPerS, 1e-9);
   for (const w of o.peakWindows ?? []) {
@@ -119,19 +110,9 @@ function resolveOptions(v: Voltammogram, o: AnalyzeVoltammogramOptions): Omit<Re
     throw new AnalysisError('BAD_OPTION', `cycles option names cycle ${missing.join(', ')}, but the voltammogram has cycles ${v.cycles.map((c) => c.index).join(', ') || 'none'}`);
   }
   return {
-    temperatureK,
-    electronCount,
-    smoothing,
-    currentConvention: o.currentConvention ?? 'iupac',
-    peakWindows: o.peakWindows ?? [],
-    baselines: o.baselines ?? [],
-    forwardBaseline: o.forwardBaseline ?? 'linear',
-    returnBaseline: o.returnBaseline ?? 'nicholson',
-    minSignalToNoise,
-    minProminenceA,
-    minRelativeProminence,
-    maxDeltaEpV,
-    scanRateVPerS,
-    cycles,
+    temperatureK, electronCount, smoothing: method.smoothing, currentConvention: o.currentConvention ?? 'iupac',
+    peakWindows: o.peakWindows ?? [], baselines: o.baselines ?? [], forwardBaseline: method.forwardBaseline, returnBaseline: method.returnBaseline,
+    minSignalToNoise: method.minSignalToNoise, minProminenceA: method.minProminenceA, minRelativeProminence: method.minRelativeProminence,
+    maxDeltaEpV: method.maxDeltaEpV, scanRateVPerS, cycles,
   };
 }

@@ -1,29 +1,56 @@
 import { describe, expect, it } from 'vitest';
 import { AnalysisError } from '../errors';
 import { simulatedVoltammogram } from '../peaks/simulatedVoltammogram';
-import { describeReferences, offsetFor, planReferences } from './runReference';
+import { resolveCell, resolveReport, resolveRun } from './resolveRun';
+import { conversionContextOf, describeSeriesReferences, fileReference } from './runReference';
+import type { CellValues, ReportOptions, RunFile, RunFileResult } from './runTypes';
 
 const v = simulatedVoltammogram({});
 
-describe('planReferences', () => {
-  // Bard & Faulkner inside cover (check-values.md §10): SCE 0.2412 V, Ag/AgCl sat. 0.197 V vs SHE.
-  it('takes each file\'s own scale from its metadata and converts through SHE', () => {
-    const inputs = [{ fileName: 'a', voltammogram: v, referenceElectrode: 'SCE' }, { fileName: 'b', voltammogram: v, referenceElectrode: 'Ag/AgCl' }];
-    const plan = planReferences(inputs, { outputReference: 'SHE' });
-    expect(offsetFor(plan, 0)).toBeCloseTo(0.2412, 12);
-    expect(offsetFor(plan, 1)).toBeCloseTo(0.197, 12);
-    expect(describeReferences(plan).warnings.some((w) => /liquid junction/.test(w.message))).toBe(true);
+function plan(files: RunFile[], cell: CellValues = {}, report: ReportOptions = {}) {
+  const run = resolveRun({ files });
+  const c = resolveCell(cell);
+  const r = resolveReport(report);
+  const context = conversionContextOf(c, r);
+  return run.files.map((f) => fileReference(f, c, r, context));
+}
+
+describe('fileReference', () => {
+  // Bard & Faulkner, Electrochemical Methods 2nd ed. (2001), inside cover: SCE 0.2412 V, Ag/AgCl (sat. KCl) 0.197 V vs SHE.
+  it("takes each file's own scale from its metadata and converts through SHE", () => {
+    const refs = plan([{ fileName: 'a', voltammogram: v, referenceElectrode: 'SCE' }, { fileName: 'b', voltammogram: v, referenceElectrode: 'Ag/AgCl' }], {}, { outputReference: 'SHE' });
+    expect(refs[0]?.offsetV).toBeCloseTo(0.2412, 12);
+    expect(refs[1]?.offsetV).toBeCloseTo(0.197, 12);
+    const results = refs.map((reference) => ({ reference }) as RunFileResult);
+    expect(describeSeriesReferences(results, 'SHE', 298.15).warnings.some((w) => /liquid junction/.test(w.message))).toBe(true);
+  });
+  it("the series' recording scale beats the files' metadata", () => {
+    const refs = plan([{ fileName: 'a', voltammogram: v, referenceElectrode: 'SCE' }], { inputReference: 'SHE' }, { outputReference: 'SCE' });
+    expect(refs[0]?.input).toBe('SHE');
+    expect(refs[0]?.offsetV).toBeCloseTo(-0.2412, 12);
   });
   it('names the file and the fix when a scale is unknown', () => {
-    const inputs = [{ fileName: 'mystery.csv', voltammogram: v, referenceElectrode: 'home-made wire' }];
-    expect(() => planReferences(inputs, { outputReference: 'SCE' })).toThrow(AnalysisError);
-    expect(() => planReferences(inputs, { outputReference: 'SCE' })).toThrow(/mystery\.csv.*home-made wire.*--from-ref/);
-    expect(offsetFor(planReferences(inputs, {}), 0)).toBe(0);
+    const files = [{ fileName: 'mystery.csv', voltammogram: v, referenceElectrode: 'home-made wire' }];
+    expect(() => plan(files, {}, { outputReference: 'SCE' })).toThrow(AnalysisError);
+    expect(() => plan(files, {}, { outputReference: 'SCE' })).toThrow(/mystery\.csv.*home-made wire.*recorded on/);
+    expect(plan(files)[0]?.offsetV).toBe(0);
   });
-  // Connelly & Geiger 1996 (from memory): typical Fc⁺/Fc +0.40 V vs SCE — flagged as typical.
+  it('keeps an unconvertible file on its recording scale, with a note, when asked to', () => {
+    const files = [{ fileName: 'mystery.csv', voltammogram: v, referenceElectrode: 'home-made wire' }];
+    const ref = plan(files, {}, { outputReference: 'SCE', unconvertible: 'keep-recording-scale' })[0];
+    expect(ref).toMatchObject({ output: null, offsetV: 0 });
+    expect(ref?.note).toMatch(/mystery\.csv stays on its recording scale: cannot report on SCE because its metadata names "home-made wire"/);
+    const rhe = plan([{ fileName: 'a', voltammogram: v, referenceElectrode: 'SCE' }], {}, { outputReference: 'RHE', unconvertible: 'keep-recording-scale' })[0];
+    expect(rhe?.note).toMatch(/pH/);
+  });
+  // Connelly & Geiger, Chem. Rev. 96 (1996) 877 (from memory): typical Fc⁺/Fc +0.40 V vs SCE — flagged as typical.
   it('warns when the Fc scale rests on the typical value', () => {
-    const plan = planReferences([{ fileName: 'a', voltammogram: v, referenceElectrode: 'SCE' }], { outputReference: 'Fc' });
-    expect(offsetFor(plan, 0)).toBeCloseTo(-0.4, 12);
-    expect(describeReferences(plan).warnings.some((w) => /typical/.test(w.message))).toBe(true);
+    const refs = plan([{ fileName: 'a', voltammogram: v, referenceElectrode: 'SCE' }], {}, { outputReference: 'Fc' });
+    expect(refs[0]?.offsetV).toBeCloseTo(-0.4, 12);
+    const results = refs.map((reference) => ({ reference }) as RunFileResult);
+    expect(describeSeriesReferences(results, 'Fc', 298.15).warnings.some((w) => /typical/.test(w.message))).toBe(true);
+  });
+  it('warns that tabulated offsets are 25 °C values at 40 °C', () => {
+    expect(describeSeriesReferences([], 'SCE', 313.15).warnings.some((w) => w.code === 'TEMPERATURE')).toBe(true);
   });
 });

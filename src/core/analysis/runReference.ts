@@ -1,103 +1,110 @@
 /**
- * Reference scales of a run: which scale each file was measured on, which scale the report uses,
- * and where the internal standard (Fc⁺/Fc) sits. Conversions go through SHE (convertPotential.ts).
- * Rules (design): a file's scale is the run's `inputReference` when given, else its own
- * metadata; converting to an output scale needs a known input scale (else UNKNOWN_REFERENCE).
+ * Reference scales of a run: which scale each file was recorded on, the offset to the reported
+ * scale, where the internal standard (Fc⁺/Fc) sits, and the plain-words basis of every scale used.
+ * Conversions go through SHE (reference/referenceOffset.ts, the same function the screen uses).
+ * Rules (design): a file's scale is its series' `inputReference` when given, else its own
+ * metadata; reporting on another scale needs a known recording scale (else UNKNOWN_REFERENCE).
  * A measured internal standard is the couple with E½ nearest `nearV` (within 0.15 V) in its file,
  * the median over files when several hold it.
  */
+import { STANDARD_TEMPERATURE_K } from '../constants';
 import { AnalysisError } from '../errors';
-import { convertPotential, findReferenceElectrode, referenceVsShe, resolveReferenceId } from '../reference';
+import { findReferenceElectrode, referenceOffset, resolveReferenceId } from '../reference';
 import type { ConversionContext, ReferenceId } from '../reference';
 import { median } from '../statistics/median';
-import type { AnalyzeRunOptions, RunInput, RunWarning } from './runTypes';
+import { kelvinToCelsius } from '../units';
+import type { ResolvedRunFile } from './resolveRun';
+import type { FileReference, ResolvedCell, ResolvedReport, RunFileResult, RunWarning } from './runTypes';
 import type { VoltammogramAnalysis } from './types';
 
-export interface RunReferencePlan {
-  output: ReferenceId | null;
-  inputs: Array<ReferenceId | null>;
-  context: ConversionContext;
+/** The scale a file was recorded on: its series' choice, else its metadata, else unknown. */
+export function recordingScaleOf(file: ResolvedRunFile, cell: ResolvedCell): ReferenceId | null {
+  if (cell.inputReference) return cell.inputReference;
+  const named = file.input.referenceElectrode;
+  return named ? (findReferenceElectrode(named)?.id ?? null) : null;
 }
 
-export function planReferences(inputs: RunInput[], options: AnalyzeRunOptions): RunReferencePlan {
-  const output = options.outputReference ? resolveReferenceId(options.outputReference) : null;
-  const forced = options.inputReference ? resolveReferenceId(options.inputReference) : null;
-  const refs = inputs.map((f) => forced ?? (f.referenceElectrode ? (findReferenceElectrode(f.referenceElectrode)?.id ?? null) : null));
-  if (output !== null) {
-    refs.forEach((r, i) => {
-      if (r === null) {
-        const named = inputs[i]?.referenceElectrode;
-        const why = named ? `its metadata names "${named}", which is not a known reference electrode` : 'neither the file nor the options say what it was measured against';
-        throw new AnalysisError('UNKNOWN_REFERENCE', `${inputs[i]?.fileName}: cannot report on ${output} because ${why}; give the input scale (--from-ref)`);
-      }
-    });
+/** The conversion context of a series: pH, temperature, user values and a given internal standard. */
+export function conversionContextOf(cell: ResolvedCell, report: ResolvedReport): ConversionContext {
+  const context: ConversionContext = { temperatureK: cell.temperatureK, overridesVsSheV: report.referenceOverridesVsSheV };
+  if (cell.pH !== null) context.pH = cell.pH;
+  const std = cell.internalStandard;
+  if (std?.kind === 'value') context.internalStandard = { eHalfV: std.eHalfV, scale: resolveReferenceId(std.reference), origin: std.origin ?? 'given by the user' };
+  return context;
+}
+
+/**
+ * Recording scale → reported scale for one file or series (`what` names it in messages). With
+ * `unconvertible: 'keep-recording-scale'` an impossible conversion leaves it on its own scale with
+ * a note instead of failing; the screen's display scale comes from here too.
+ */
+export function scaleOffset(input: ReferenceId | null, report: ResolvedReport, context: ConversionContext, what: string, unknownWhy = 'nothing says what it was recorded against'): FileReference {
+  const output = report.outputReference;
+  if (output === null) return { input, output, offsetV: 0, basis: [], typical: false, note: null };
+  try {
+    if (input === null) throw new AnalysisError('UNKNOWN_REFERENCE', `${what}: cannot report on ${output} because ${unknownWhy}; give the scale the files were recorded on`);
+    const o = referenceOffset(input, output, context);
+    return { input, output, offsetV: o.offsetV, basis: o.basis, typical: o.typical, note: null };
+  } catch (err) {
+    if (report.unconvertible === 'error' || !(err instanceof AnalysisError)) throw err;
+    const why = err.message.startsWith(`${what}: `) ? err.message.slice(what.length + 2) : err.message;
+    return { input, output: null, offsetV: 0, basis: [], typical: false, note: `${what} stays on its recording scale: ${why}` };
   }
-  const context: ConversionContext = {};
-  if (options.pH !== undefined) context.pH = options.pH;
-  if (options.temperatureK !== undefined) context.temperatureK = options.temperatureK;
-  if (options.referenceOverridesVsSheV) context.overridesVsSheV = options.referenceOverridesVsSheV;
-  return { output, inputs: refs, context };
 }
 
-/** Sets the internal standard in `plan.context` from a value or from first-pass analyses. */
+export function fileReference(file: ResolvedRunFile, cell: ResolvedCell, report: ResolvedReport, context: ConversionContext): FileReference {
+  const named = file.input.referenceElectrode;
+  const why = named ? `its metadata names "${named}", which is not a known reference electrode` : 'neither the file nor its series says what it was recorded against';
+  return scaleOffset(recordingScaleOf(file, cell), report, context, file.input.fileName, why);
+}
+
+/**
+ * Sets `context.internalStandard` from a measured couple: `firstPass(i)` analyses file i on its
+ * recording scale. Searches the named file (any series) or else the series' own files.
+ */
 export function settleInternalStandard(
-  plan: RunReferencePlan,
-  inputs: RunInput[],
-  options: AnalyzeRunOptions,
-  firstPass: () => VoltammogramAnalysis[],
+  context: ConversionContext,
+  cell: ResolvedCell,
+  files: ResolvedRunFile[],
+  seriesIndices: number[],
+  firstPass: (fileIndex: number) => VoltammogramAnalysis,
 ): void {
-  const src = options.internalStandard;
-  if (!src) return;
-  if (src.kind === 'value') {
-    plan.context.internalStandard = { eHalfV: src.eHalfV, scale: resolveReferenceId(src.reference), origin: src.origin ?? 'given by the user' };
-    return;
-  }
-  const analyses = firstPass();
+  const src = cell.internalStandard;
+  if (src?.kind !== 'measured') return;
+  const searched = src.fileName ? files.flatMap((f, i) => (f.input.fileName === src.fileName ? [i] : [])) : seriesIndices;
   const hits: Array<{ eHalfV: number; scale: ReferenceId; fileName: string }> = [];
-  inputs.forEach((f, i) => {
-    const wanted = src.fileName ? f.fileName === src.fileName : (f.role ?? 'series') === 'series';
-    const scale = plan.inputs[i];
-    if (!wanted || !scale) return;
-    const cycle = analyses[i]?.cycles[0];
-    const near = (cycle?.couples ?? []).filter((c) => c.eHalfV !== null && Math.abs((c.eHalfV as number) - src.nearV) <= 0.15)
+  for (const i of searched) {
+    const f = files[i] as ResolvedRunFile;
+    const scale = recordingScaleOf(f, cell);
+    if (!scale) continue;
+    const near = (firstPass(i).cycles[0]?.couples ?? []).filter((c) => c.eHalfV !== null && Math.abs(c.eHalfV - src.nearV) <= 0.15)
       .sort((a, b) => Math.abs((a.eHalfV as number) - src.nearV) - Math.abs((b.eHalfV as number) - src.nearV))[0];
-    if (near) hits.push({ eHalfV: near.eHalfV as number, scale, fileName: f.fileName });
-  });
+    if (near) hits.push({ eHalfV: near.eHalfV as number, scale, fileName: f.input.fileName });
+  }
   const first = hits[0];
   if (!first) {
-    throw new AnalysisError('NO_PEAK', `no couple with E½ within 0.15 V of ${src.nearV} V found for the internal standard${src.fileName ? ` in ${src.fileName}` : ''} (its file's scale must be known)`);
+    throw new AnalysisError('NO_PEAK', `no couple with E½ within 0.15 V of ${src.nearV} V found for the internal standard${src.fileName ? ` in ${src.fileName}` : ''} (its file's recording scale must be known)`);
   }
-  if (hits.some((h) => h.scale !== first.scale)) {
-    throw new AnalysisError('BAD_OPTION', 'the internal-standard files are on different reference scales');
-  }
-  plan.context.internalStandard = {
+  if (hits.some((h) => h.scale !== first.scale)) throw new AnalysisError('BAD_OPTION', 'the internal-standard files are on different reference scales');
+  context.internalStandard = {
     eHalfV: median(hits.map((h) => h.eHalfV)), scale: first.scale, origin: `measured in ${[...new Set(hits.map((h) => h.fileName))].join(', ')}`,
   };
 }
 
-/** Constant added to a file's potentials to put them on the output scale (V). */
-export function offsetFor(plan: RunReferencePlan, fileIndex: number): number {
-  const from = plan.inputs[fileIndex] ?? null;
-  if (plan.output === null || from === null) return 0;
-  return convertPotential(0, from, plan.output, plan.context);
-}
-
-/** Plain-words basis of each scale used, and warnings for typical or disputed values. */
-export function describeReferences(plan: RunReferencePlan): { basis: string[]; warnings: RunWarning[] } {
-  if (plan.output === null) return { basis: ['potentials on each file\'s own reference scale (no conversion)'], warnings: [] };
-  const used = new Set<ReferenceId>([plan.output, ...plan.inputs.filter((r): r is ReferenceId => r !== null)]);
-  const basis: string[] = [];
-  const warnings: RunWarning[] = [];
+/** Plain-words basis of the scales a series used, and warnings for typical or disputed values. */
+export function describeSeriesReferences(files: RunFileResult[], output: ReferenceId | null, temperatureK: number): { basis: string[]; warnings: RunWarning[] } {
+  if (output === null) return { basis: ["potentials on each file's own recording scale (no conversion)"], warnings: [] };
+  // A file kept on its recording scale contributes its note, not a basis.
+  const basis = [...new Set(files.flatMap((f) => f.reference.basis))];
+  const warnings: RunWarning[] = files.flatMap((f) => (f.reference.note ? [{ code: 'REFERENCE' as const, fileName: f.fileName, message: f.reference.note }] : []));
+  for (const f of files.filter((x) => x.reference.typical).slice(0, 1)) warnings.push({ code: 'REFERENCE', message: `a typical, not measured, value sets the scale: ${f.reference.basis.join('; ')}` });
+  const used = new Set<ReferenceId>([output, ...files.flatMap((f) => (f.reference.input ? [f.reference.input] : []))]);
   for (const id of used) {
-    const pos = referenceVsShe(id, plan.context);
-    basis.push(pos.basis);
-    if (pos.typical) warnings.push({ code: 'REFERENCE', message: `${id}: ${pos.basis}` });
     const entry = findReferenceElectrode(id);
     if (entry?.status === 'sources-disagree' && entry.note) warnings.push({ code: 'REFERENCE', message: `${entry.label}: ${entry.note}` });
   }
-  const t = plan.context.temperatureK;
-  if (t !== undefined && Math.abs(t - 298.15) > 5) {
-    warnings.push({ code: 'TEMPERATURE', message: `reference offsets are 25 °C values; at ${(t - 273.15).toFixed(1)} °C they may be off by several mV` });
+  if (Math.abs(temperatureK - STANDARD_TEMPERATURE_K) > 5) {
+    warnings.push({ code: 'TEMPERATURE', message: `reference offsets are 25 °C values; at ${kelvinToCelsius(temperatureK).toFixed(1)} °C they may be off by several mV` });
   }
   return { basis, warnings };
 }

@@ -1,81 +1,209 @@
 /**
- * Input, option and result types of analyzeRun (one analysis run over the files of a scan-rate
- * series, with reference-scale conversion, iR correction and provenance).
+ * The run model: what an analysis run takes (files grouped into scan-rate series, each series'
+ * cell values, the analysis method and the reporting choices) and what it gives back (per-file
+ * results, per-series results, warnings, the reference scales and how the numbers were made).
+ * The screen, the results sheet and the command line all build a RunInput and compute through
+ * analyzeRun.ts or its pure pieces (analyzeRunFile.ts, analyzeRunSeries.ts), so they agree.
+ * Units are in the names: V, A, s, cm², mol/cm³, cm²/s, K, Ω.
  */
-import type { DoubleLayerCapacitanceResult } from '../series';
+import type { BaselineMethod, BaselineSpec } from '../baseline/baselineTypes';
+import type { PeakWindow } from '../peaks/peakTypes';
 import type { ReferenceId } from '../reference';
-import type { ScanRateSource, Voltammogram } from '../types';
-import type { AnalyzeSeriesOptions, SeriesAnalysis } from './seriesTypes';
-import type { AnalyzeVoltammogramOptions, VoltammogramAnalysis } from './types';
-import type { CurrentConvention } from '../types';
+import type { DoubleLayerCapacitanceResult } from '../series';
+import type { SmoothingSetting } from '../smoothing/smoothingTypes';
+import type { CurrentConvention, ScanRateSource, Voltammogram } from '../types';
+import type { SeriesAnalysis } from './seriesTypes';
+import type { VoltammogramAnalysis } from './types';
 
 /** Where a file came from, for the results sheet. All optional. */
 export interface FileProvenance {
   sizeBytes?: number | null;
   /** Hex SHA-256 of the original bytes. */
   sha256?: string | null;
-  /** Detected layout in plain words (delimiter, columns, units). */
+  /** Detected layout in plain words (io/describeLayout.ts). */
   layout?: string | null;
   importWarnings?: string[];
 }
 
-/** One file of a run; a Measurement fits (it is a Voltammogram with a fileName). */
-export interface RunInput {
+/** The user's choices for one file's trace, on the scale the file was recorded on (V). */
+export interface TraceChoices {
+  /** Restrict the peak search to these windows (per direction). */
+  peakWindows?: PeakWindow[];
+  /** Per-peak baseline choices; the method's defaults apply to peaks not covered. */
+  baselines?: BaselineSpec[];
+}
+
+/** One file of a run. A Measurement fits `voltammogram` (it is a Voltammogram with more fields). */
+export interface RunFile {
   fileName: string;
+  /** Key of the scan-rate series the file belongs to. @default 'series 1' */
+  series?: string;
   voltammogram: Voltammogram;
   /** Reference electrode named in the file's metadata, if any. */
   referenceElectrode?: string | null;
   provenance?: FileProvenance;
   /** 'internal-standard': a companion file measured only for the E½ of the internal standard. @default 'series' */
   role?: 'series' | 'internal-standard';
+  trace?: TraceChoices;
 }
 
 /** Where the Fc⁺/Fc (or other internal-standard) E½ comes from. */
 export type InternalStandardSource =
   /** A value the user measured, on the scale `reference`. */
   | { kind: 'value'; eHalfV: number; reference: string; origin?: string }
-  /** The couple nearest `nearV` (input scale) in the named file, or in the series files when absent. */
+  /** The couple nearest `nearV` (recording scale) in the named file, or in the series' files when absent. */
   | { kind: 'measured'; nearV: number; fileName?: string };
 
-export interface AnalyzeRunOptions extends Omit<AnalyzeSeriesOptions, 'cycle'> {
-  /** Per-trace options (smoothing, windows, baselines, minimum S/N...). */
-  perTrace?: Omit<AnalyzeVoltammogramOptions, 'electronCount' | 'temperatureK' | 'scanRateVPerS'>;
-  /** Scan rate for every file (V/s); beats what the files carry. @default null */
-  scanRateVPerS?: number | null;
-  /** Scale the files were measured on; each file's own metadata when absent. @default null */
-  inputReference?: string | null;
-  /** Scale to report potentials on; the input scale when absent. @default null */
-  outputReference?: string | null;
-  /** pH for RHE. */
-  pH?: number;
-  /** User values of reference electrodes vs SHE (V). */
-  referenceOverridesVsSheV?: Partial<Record<ReferenceId, number>>;
-  internalStandard?: InternalStandardSource | null;
+/** The cell of one scan-rate series: electrode, solution, reference and resistance. */
+export interface CellValues {
+  /** Electrons per molecule n. @default 1 */
+  electronCount?: number;
+  /** Electrode area (cm²); D and Γ need it. @default null */
+  areaCm2?: number | null;
+  /** Bulk concentration of the species present (mol/cm³); D needs it. @default null */
+  concentrationMolPerCm3?: number | null;
+  /** Temperature (K). @default 298.15 */
+  temperatureK?: number;
+  /** Transfer coefficient α given by the user; measured or 0.5 otherwise. @default null */
+  alpha?: number | null;
+  /** Electrons in the rate-determining step nₐ (irreversible form). @default 1 */
+  transferElectronCount?: number;
+  /** D_O/D_R for Nicholson's k°. @default 1 */
+  diffusionRatio?: number;
+  /** Known D of the bulk species (cm²/s), used for k° and the electroactive area. @default null */
+  diffusionCm2PerS?: number | null;
   /** Uncompensated resistance (Ω) for E − i·Ru. @default 0 */
   ruOhm?: number;
+  /** Scale the files were recorded on; each file's own metadata when null. @default null */
+  inputReference?: string | null;
+  /** pH of the solution, for RHE. @default null */
+  pH?: number | null;
+  internalStandard?: InternalStandardSource | null;
+  /** Potential (output scale, V) of a featureless region, for the double-layer capacitance. @default null */
+  capacitancePotentialV?: number | null;
+}
+
+/** How every trace is analysed. */
+export interface MethodOptions {
+  /**
+   * Savitzky–Golay smoothing of the shown curve, or 'off'. Ep/2, FWHM and the two-point anchor
+   * currents are read from this curve; Ep and ip come from the raw points. @default { window: 5, order: 2 }
+   */
+  smoothing?: SmoothingSetting | 'off';
+  /** Baseline for forward (first-sweep) peaks. @default 'linear' */
+  forwardBaseline?: Exclude<BaselineMethod, 'nicholson' | 'two-point'>;
+  /** Baseline for return peaks. @default 'nicholson' */
+  returnBaseline?: Exclude<BaselineMethod, 'two-point'>;
+  /** Minimum prominence over the noise standard deviation. @default 8 */
+  minSignalToNoise?: number;
+  /** Minimum absolute prominence (A). @default 0 */
+  minProminenceA?: number;
+  /** Minimum prominence as a fraction of the current range. @default 0.01 */
+  minRelativeProminence?: number;
+  /**
+   * Largest Epa − Epc allowed within a couple (V); when each direction has a single dominant peak
+   * (a totally irreversible couple) that pair may lie up to twice this apart. @default 0.6
+   */
+  maxDeltaEpV?: number;
+  /** 1-based cycle the series uses from each file. @default 1 */
+  seriesCycle?: number;
+  /** Largest E½ move between neighbouring scan rates for one couple (V). @default 0.12 */
+  matchToleranceV?: number;
+}
+
+/** How results are reported. */
+export interface ReportOptions {
+  /** Scale to report potentials on; each file's recording scale when null. @default null */
+  outputReference?: string | null;
   /** Sign convention of signed currents in reports. @default 'iupac' */
   outputConvention?: CurrentConvention;
-  /** Potential (output scale, V) of a featureless region for double-layer capacitance. @default null */
-  capacitancePotentialV?: number | null;
-  /** 1-based cycle used for the series. @default 1 */
-  cycle?: number;
+  /** User values of reference electrodes vs SHE (V). */
+  referenceOverridesVsSheV?: Partial<Record<ReferenceId, number>>;
+  /**
+   * A file whose recording scale cannot be converted to `outputReference`: refuse the run, or keep
+   * the file on its recording scale with a warning. @default 'error'
+   */
+  unconvertible?: 'error' | 'keep-recording-scale';
+}
+
+export interface RunInput {
+  files: RunFile[];
+  /** Cell values per series key; a series without an entry takes the defaults. */
+  cells?: Record<string, CellValues>;
+  method?: MethodOptions;
+  report?: ReportOptions;
   /** Software name and version for provenance. */
   software?: { name: string; version: string };
 }
 
+/** Cell values after defaults and checks. */
+export interface ResolvedCell {
+  electronCount: number;
+  areaCm2: number | null;
+  concentrationMolPerCm3: number | null;
+  temperatureK: number;
+  alpha: number | null;
+  transferElectronCount: number;
+  diffusionRatio: number;
+  diffusionCm2PerS: number | null;
+  ruOhm: number;
+  inputReference: ReferenceId | null;
+  pH: number | null;
+  internalStandard: InternalStandardSource | null;
+  capacitancePotentialV: number | null;
+}
+
+export type ResolvedMethod = Required<MethodOptions>;
+
+export interface ResolvedReport {
+  outputReference: ReferenceId | null;
+  outputConvention: CurrentConvention;
+  referenceOverridesVsSheV: Partial<Record<ReferenceId, number>>;
+  unconvertible: 'error' | 'keep-recording-scale';
+}
+
+/** One file's place on the scales: recorded on `input`, reported on `output`, `offsetV` apart. */
+export interface FileReference {
+  input: ReferenceId | null;
+  output: ReferenceId | null;
+  offsetV: number;
+  /** How each scale's position against SHE was obtained. */
+  basis: string[];
+  /** A typical, not measured, value entered the offset. */
+  typical: boolean;
+  /** Why the file stayed on its recording scale although another was asked for; null otherwise. */
+  note: string | null;
+}
+
 export interface RunFileResult {
   fileName: string;
+  series: string;
   role: 'series' | 'internal-standard';
   scanRateVPerS: number;
   scanRateSource: ScanRateSource | null;
-  /** Potentials in `analysis` are on the output scale: measured + offsetV (after iR correction). */
-  inputReference: ReferenceId | null;
-  offsetV: number;
+  /** Potentials in `analysis` are on the output scale: recorded − i·Ru + reference.offsetV. */
+  reference: FileReference;
   analysis: VoltammogramAnalysis;
-  /** Forward − reverse current at capacitancePotentialV (A), when asked for. */
+  /** The potential column that was analysed (V, output scale), when it differs from the recorded one. */
+  analysedPotentialV: Float64Array | null;
+  /** Forward − reverse current at the cell's capacitance potential (A), when asked for. */
   chargingGapA: number | null;
   provenance: FileProvenance;
   pointCount: number;
+  /** Warnings of this file's trace analysis and iR correction. */
+  warnings: RunWarning[];
+}
+
+export interface RunSeriesResult {
+  key: string;
+  /** Files of the series (role 'series') in the run's order. */
+  fileNames: string[];
+  cell: ResolvedCell;
+  analysis: SeriesAnalysis;
+  capacitance: DoubleLayerCapacitanceResult | null;
+  /** Plain-words basis of every scale the series used. */
+  referenceBasis: string[];
+  warnings: RunWarning[];
 }
 
 export type RunWarningCode = 'REFERENCE' | 'TEMPERATURE' | 'OHMIC' | 'TRACE' | 'SERIES' | 'CAPACITANCE' | 'INTERNAL_STANDARD';
@@ -84,20 +212,21 @@ export interface RunWarning {
   code: RunWarningCode;
   message: string;
   fileName?: string;
+  series?: string;
 }
 
 export interface AnalyzeRunResult {
   files: RunFileResult[];
-  series: SeriesAnalysis;
-  capacitance: DoubleLayerCapacitanceResult | null;
+  series: RunSeriesResult[];
   reference: { output: ReferenceId | null; basis: string[] };
   convention: CurrentConvention;
+  /** Every warning of the files and the series, in that order. */
   warnings: RunWarning[];
   provenance: {
     software: { name: string; version: string };
     /** Published methods used, one line each. */
     methods: string[];
-    /** Option values used (after defaults). */
-    options: Record<string, unknown>;
+    method: ResolvedMethod;
+    report: ResolvedReport;
   };
 }

@@ -10,22 +10,14 @@ import { TABLE_RANGE_MV, kineticPeakCurrentRatio, nicholsonPsi } from '../kineti
 import { logLogSlope, peakPotentialVsLogScanRate, randlesSevcikDiffusion } from '../series';
 import type { PeakPotentialVsLogScanRateResult } from '../series';
 import { chooseIrreversibleAlpha } from '../series/classifySeriesCouple';
+import type { ResolvedCell } from './runTypes';
 import type { SeriesCouple, SeriesDiffusion } from './seriesTypes';
 import type { SeriesKineticClass, SeriesPoint } from '../series/seriesPoint';
 import type { PeakDirection } from '../peaks/peakTypes';
 
-export interface ResolvedSeriesOptions {
-  electronCount: number;
-  areaCm2: number | null;
-  concentrationMolPerCm3: number | null;
-  temperatureK: number;
-  alpha: number | null;
-  transferElectronCount: number;
-  diffusionRatio: number;
-  diffusionCm2PerS: number | null;
-  cycle: number;
-  matchToleranceV: number;
-}
+/** Series options after defaults and checks: the cell values the series uses, the cycle and the matching tolerance. */
+export type ResolvedSeriesOptions = Pick<ResolvedCell, 'electronCount' | 'areaCm2' | 'concentrationMolPerCm3' | 'temperatureK' | 'alpha'
+  | 'transferElectronCount' | 'diffusionRatio' | 'diffusionCm2PerS'> & { cycle: number; matchToleranceV: number };
 
 type PointValue = (p: SeriesPoint) => number | null;
 
@@ -116,8 +108,8 @@ export function seriesDiffusion(
   forward: PeakDirection = 'cathodic',
 ): { diffusion: SeriesDiffusion | null; reason: string | null } {
   if (!fit) return { diffusion: null, reason: 'needs at least two scan rates' };
-  if (o.areaCm2 === null) return { diffusion: null, reason: 'needs the electrode area (--area)' };
-  if (o.concentrationMolPerCm3 === null) return { diffusion: null, reason: 'needs the bulk concentration (--conc)' };
+  if (o.areaCm2 === null) return { diffusion: null, reason: 'needs the electrode area' };
+  if (o.concentrationMolPerCm3 === null) return { diffusion: null, reason: 'needs the bulk concentration' };
   const cell = { electronCount: o.electronCount, areaCm2: o.areaCm2, concentrationMolPerCm3: o.concentrationMolPerCm3 };
   const irreversible = kineticClass === 'irreversible';
   const a = irreversible ? chooseIrreversibleAlpha(o.alpha, shift, points, o.transferElectronCount, o.temperatureK) : null;

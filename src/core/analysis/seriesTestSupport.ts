@@ -58,7 +58,7 @@ export function fakeAnalysis(couples: FakeCouple[]): VoltammogramAnalysis {
     smoothed: null,
     noiseA: 0,
     options: {
-      temperatureK: 298.15, electronCount: 1, smoothing: 'off', locatingSmoothing: { window: 5, order: 2 }, currentConvention: 'iupac',
+      temperatureK: 298.15, electronCount: 1, smoothing: 'off', locatingSmoothing: { window: 5, order: 2 }, currentConvention: 'iupac', minRelativeProminence: 0.01,
       peakWindows: [], baselines: [], forwardBaseline: 'linear', returnBaseline: 'nicholson', minSignalToNoise: 8, minProminenceA: 0,
       maxDeltaEpV: 0.6, scanRateVPerS: null, cycles: [1],
     },

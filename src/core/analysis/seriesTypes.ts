@@ -7,6 +7,7 @@
 import type { FitLineResult } from '../regression';
 import type { LogLogReading, PeakPotentialVsLogScanRateResult, RandlesSevcikForm } from '../series';
 import type { NicholsonPsiResult } from '../kinetics';
+import type { CellValues } from './runTypes';
 import type { VoltammogramAnalysis } from './types';
 import type { Verdict } from '../couples/coupleTypes';
 import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from '../series/seriesPoint';
@@ -19,28 +20,14 @@ export interface SeriesFileInput {
   analysis: VoltammogramAnalysis;
 }
 
-export interface AnalyzeSeriesOptions {
-  /** Electrons per molecule n. @default 1 */
-  electronCount?: number;
-  /** Electrode area (cm²); D and Γ need it. @default null */
-  areaCm2?: number | null;
-  /** Bulk concentration of the species present (mol/cm³); D needs it. @default null */
-  concentrationMolPerCm3?: number | null;
-  /** Temperature (K). @default 298.15 */
-  temperatureK?: number;
-  /** Transfer coefficient α given by the user; measured or 0.5 otherwise. @default null */
-  alpha?: number | null;
-  /** Electrons in the rate-determining step nₐ (irreversible form). @default 1 */
-  transferElectronCount?: number;
-  /** D_O/D_R for Nicholson's k°. @default 1 */
-  diffusionRatio?: number;
-  /** Known D of the bulk species (cm²/s), used for k° when D cannot be fitted. @default null */
-  diffusionCm2PerS?: number | null;
+/** Options of a standalone series analysis: the series' cell values, the cycle and the matching tolerance. */
+export type AnalyzeSeriesOptions = Pick<CellValues, 'electronCount' | 'areaCm2' | 'concentrationMolPerCm3' | 'temperatureK' | 'alpha'
+  | 'transferElectronCount' | 'diffusionRatio' | 'diffusionCm2PerS'> & {
   /** 1-based cycle used from each file. @default 1 */
   cycle?: number;
   /** Largest E½ (or Ep) move between neighbouring scan rates for one couple (V). @default 0.12 */
   matchToleranceV?: number;
-}
+};
 
 /** First-order follow-up reaction of an EC couple (followUpRateConstant.ts). */
 export interface SeriesFollowUp {

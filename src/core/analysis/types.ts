@@ -13,6 +13,7 @@ import type { CoupleResult } from '../couples/coupleTypes';
 import type { PeakResult, PeakWindow } from '../peaks/peakTypes';
 import type { SmoothingSetting } from '../smoothing/smoothingTypes';
 import type { CurrentConvention } from '../types';
+import type { CellValues, MethodOptions, TraceChoices } from './runTypes';
 
 export type AnalysisWarningCode =
   | 'NO_PEAKS'
@@ -41,42 +42,17 @@ export interface CycleAnalysis {
   warnings: AnalysisWarning[];
 }
 
-export interface AnalyzeVoltammogramOptions {
-  /** Temperature (K). @default 298.15 */
-  temperatureK?: number;
-  /** Electrons per molecule, n. @default 1 */
-  electronCount?: number;
-  /**
-   * Savitzky–Golay smoothing of the shown curve, or 'off'. Ep/2, FWHM and the two-point anchor
-   * currents are read from this curve; Ep and ip come from the raw points. @default { window: 5, order: 2 }
-   */
-  smoothing?: SmoothingSetting | 'off';
-  /** Sign convention of `currentA` in the input. @default 'iupac' */
-  currentConvention?: CurrentConvention;
-  /** Restrict peak search to these windows (per direction); automatic search when absent. */
-  peakWindows?: PeakWindow[];
-  /** Per-peak baseline choices; defaults apply to peaks not covered. */
-  baselines?: BaselineSpec[];
-  /** Baseline for forward (first-sweep) peaks. @default 'linear' */
-  forwardBaseline?: Exclude<BaselineMethod, 'nicholson' | 'two-point'>;
-  /** Baseline for return peaks. @default 'nicholson' */
-  returnBaseline?: Exclude<BaselineMethod, 'two-point'>;
-  /** Minimum prominence over noise standard deviation for a peak. @default 8 */
-  minSignalToNoise?: number;
-  /** Minimum absolute prominence (A). @default 0 */
-  minProminenceA?: number;
-  /** Minimum prominence as a fraction of the voltammogram's current range. @default 0.01 */
-  minRelativeProminence?: number;
-  /**
-   * Largest Epa − Epc allowed within a couple (V); when each direction has a single dominant peak
-   * (a totally irreversible couple) that pair may lie up to twice this apart. @default 0.6
-   */
-  maxDeltaEpV?: number;
-  /** Scan rate (V/s) when the voltammogram carries none and has no time column. */
-  scanRateVPerS?: number;
-  /** 1-based cycles to analyse. @default all */
-  cycles?: number[];
-}
+/** Options of a standalone trace analysis: the run's method options, n and T, and the trace's own choices. */
+export type AnalyzeVoltammogramOptions = Omit<MethodOptions, 'seriesCycle' | 'matchToleranceV'>
+  & Pick<CellValues, 'temperatureK' | 'electronCount'>
+  & TraceChoices & {
+    /** Sign convention of `currentA` in the input. @default 'iupac' */
+    currentConvention?: CurrentConvention;
+    /** Scan rate (V/s) when the voltammogram carries none and has no time column. */
+    scanRateVPerS?: number;
+    /** 1-based cycles to analyse. @default all */
+    cycles?: number[];
+  };
 
 /** The option values actually used, for provenance. */
 export interface ResolvedAnalyzeOptions {
@@ -92,8 +68,7 @@ export interface ResolvedAnalyzeOptions {
   returnBaseline: Exclude<BaselineMethod, 'two-point'>;
   minSignalToNoise: number;
   minProminenceA: number;
-  /** Added after the first release of these types, hence optional; always set by analyzeVoltammogram. */
-  minRelativeProminence?: number;
+  minRelativeProminence: number;
   maxDeltaEpV: number;
   scanRateVPerS: number | null;
   cycles: number[];

@@ -1,3 +1,4 @@
 /** Public API of the reference-scale conversions. */
 export * from './referenceElectrodes';
 export * from './convertPotential';
+export * from './referenceOffset';

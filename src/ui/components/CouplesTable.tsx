@@ -5,13 +5,12 @@ import { useSelection } from './useSelection';
 
 export function CouplesTable() {
   const { result, cycle, scale, file } = useSelection();
-  const cycles = (result?.analysis?.cycles ?? []).filter((c) => cycle === 0 || c.index === cycle);
+  const cycles = (result?.run?.analysis.cycles ?? []).filter((c) => cycle === 0 || c.index === cycle);
   const rows = cycles.flatMap((c) => c.couples.map((k) => ({ cycle: c.index, k })));
   if (!file?.measurement) return <p className="empty">No file selected.</p>;
-  if (!result?.analysis) return <p className="empty">{result?.status === 'error' ? 'Analysis failed (see the trace).' : 'Analysing…'}</p>;
+  if (!result?.run) return <p className="empty">{result?.status === 'error' ? 'Analysis failed (see the trace).' : 'Analysing…'}</p>;
   if (rows.length === 0) return <p className="empty" data-testid="couples-empty">No peaks found in this cycle. Mark a peak window on the plot or lower the signal-to-noise threshold.</p>;
   const cur = chooseCurrentScale(Math.max(...rows.map(({ k }) => Math.max(k.ipaA ?? 0, k.ipcA ?? 0))));
-  const off = scale.offsetV;
   return (
     <table className="data" data-testid="couples-table">
       <caption className="visually-hidden">Couples, potentials vs {scale.name}</caption>
@@ -27,9 +26,9 @@ export function CouplesTable() {
         {rows.map(({ cycle: c, k }) => (
           <tr key={`${c}-${k.index}`} data-testid="couple-row">
             <td>{c}</td>
-            <td data-testid="cell-epa">{fixed(k.epaV === null ? null : k.epaV + off, 4)}</td>
-            <td data-testid="cell-epc">{fixed(k.epcV === null ? null : k.epcV + off, 4)}</td>
-            <td data-testid="cell-ehalf">{fixed(k.eHalfV === null ? null : k.eHalfV + off, 4)}</td>
+            <td data-testid="cell-epa">{fixed(k.epaV, 4)}</td>
+            <td data-testid="cell-epc">{fixed(k.epcV, 4)}</td>
+            <td data-testid="cell-ehalf">{fixed(k.eHalfV, 4)}</td>
             <td data-testid="cell-dep">{fixed(k.deltaEpV, 1, 1000)}</td>
             <td data-testid="cell-ipa">{sig(k.ipaA, 4, cur.factor)}</td>
             <td data-testid="cell-ipc">{sig(k.ipcA, 4, cur.factor)}</td>

@@ -5,8 +5,7 @@ export function NotesList() {
   const { file, result } = useSelection();
   const notes = [
     ...(file?.warnings ?? []).map((w) => ({ key: `i-${w.code}-${w.message}`, source: 'reading', text: w.message })),
-    ...(result?.analysis?.warnings ?? []).map((w) => ({ key: `a-${w.code}-${w.message}`, source: 'analysis', text: w.message })),
-    ...(result?.analysis?.cycles ?? []).flatMap((c) => c.warnings.map((w) => ({ key: `c${c.index}-${w.code}-${w.message}`, source: `cycle ${c.index}`, text: w.message }))),
+    ...(result?.run?.warnings ?? []).map((w) => ({ key: `a-${w.code}-${w.message}`, source: w.code === 'OHMIC' ? 'iR correction' : w.code === 'CAPACITANCE' ? 'capacitance' : 'analysis', text: w.message })),
   ];
   if (notes.length === 0) return <p className="empty">No warnings for this file.</p>;
   return (

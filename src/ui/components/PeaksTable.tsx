@@ -6,7 +6,7 @@ import { useSelection } from './useSelection';
 
 export function PeaksTable() {
   const { result, cycle, scale } = useSelection();
-  const cycles = (result?.analysis?.cycles ?? []).filter((c) => cycle === 0 || c.index === cycle);
+  const cycles = (result?.run?.analysis.cycles ?? []).filter((c) => cycle === 0 || c.index === cycle);
   const rows = cycles.flatMap((c) => c.peaks.map((p, k) => ({ cycle: c.index, p, k })));
   if (rows.length === 0) return <p className="empty">No peaks.</p>;
   const cur = chooseCurrentScale(Math.max(...rows.map(({ p }) => p.heightA)));
@@ -23,13 +23,13 @@ export function PeaksTable() {
           <tr key={`${c}-${k}`}>
             <td>{c}</td>
             <td className={p.direction}>{p.direction}{p.origin === 'window' ? ' (window)' : ''}</td>
-            <td>{fixed(p.potentialV + scale.offsetV, 4)}</td>
+            <td>{fixed(p.potentialV, 4)}</td>
             <td>{sig(p.heightA, 4, cur.factor)}</td>
-            <td>{fixed(p.halfPeakPotentialV === null ? null : p.halfPeakPotentialV + scale.offsetV, 4)}</td>
+            <td>{fixed(p.halfPeakPotentialV, 4)}</td>
             <td>{fixed(p.fwhmV, 1, 1000)}</td>
             <td>{fixed(p.signalToNoise, 0)}</td>
             <td>{p.confidence}</td>
-            <td><PeakBaselineSelect peak={p} label={`Baseline of the ${p.direction} peak at ${fixed(p.potentialV + scale.offsetV, 3)} V, cycle ${c}`} /></td>
+            <td><PeakBaselineSelect peak={p} offsetV={result?.run?.reference.offsetV ?? 0} label={`Baseline of the ${p.direction} peak at ${fixed(p.potentialV, 3)} V, cycle ${c}`} /></td>
             <td className="wrap">{p.baseline.description}</td>
           </tr>
         ))}

@@ -9,12 +9,12 @@ function fitText(fit: FitLineResult | null | undefined, factor: number, unit: st
   return `${sig(fit.slope, 4, factor)}${ci} ${unit}; intercept ${sig(fit.intercept, 3, factor)} µA; R² ${fixed(fit.r2, 4)}`;
 }
 
-function rows(c: SeriesCouple, offsetV: number): [string, string][] {
+function rows(c: SeriesCouple): [string, string][] {
   const d = c.diffusion;
   const k = c.rateConstant;
   const s = c.surface;
   return [
-    ['E½ (median)', c.eHalfV === null ? DASH : `${fixed(c.eHalfV + offsetV, 4)} V`],
+    ['E½ (median)', c.eHalfV === null ? DASH : `${fixed(c.eHalfV, 4)} V`],
     ['Regime / kinetics', `${c.regime}, ${c.kineticClass}`],
     c.regime === 'surface'
       ? ['Forward |ip| vs v (slope 95 % CI)', fitText(s?.fit, 1e6, 'µA (V/s)⁻¹')]
@@ -31,14 +31,14 @@ function rows(c: SeriesCouple, offsetV: number): [string, string][] {
   ];
 }
 
-export function SeriesTable({ result, offsetV }: { result: SeriesAnalysis; offsetV: number }) {
+export function SeriesTable({ result }: { result: SeriesAnalysis }) {
   return (
     <div className="series-tables" data-testid="series-table">
       {result.couples.map((c) => (
         <table key={c.index} className="data kv">
           <caption>Couple {c.index + 1} · {c.points.length} scan rates</caption>
           <tbody>
-            {rows(c, offsetV).map(([k, v]) => (
+            {rows(c).map(([k, v]) => (
               <tr key={k}><th scope="row">{k}</th><td className="wrap">{v}</td></tr>
             ))}
           </tbody>

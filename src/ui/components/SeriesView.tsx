@@ -18,9 +18,9 @@ export function SeriesView() {
   useEffect(() => {
     if (group && !entry) void act.analyzeGroup(group);
   }, [group, entry, act]);
-  const couples = entry?.result?.couples ?? [];
+  const couples = entry?.result?.analysis.couples ?? [];
   const couple = couples[coupleIndex] ?? couples[0];
-  const figs = useMemo(() => (couple ? buildSeriesFigures(couple, scale.offsetV, scale.name) : null), [couple, scale]);
+  const figs = useMemo(() => (couple ? buildSeriesFigures(couple, scale.name) : null), [couple, scale]);
 
   return (
     <section className="panel series" aria-labelledby="series-title" data-testid="series-view">
@@ -36,7 +36,7 @@ export function SeriesView() {
           <label>
             Couple{' '}
             <select value={coupleIndex} onChange={(e) => setCoupleIndex(Number(e.target.value))}>
-              {couples.map((c, k) => <option key={k} value={k}>{k + 1}{c.eHalfV !== null ? ` (E½ ${(c.eHalfV + scale.offsetV).toFixed(3)} V)` : ''}</option>)}
+              {couples.map((c, k) => <option key={k} value={k}>{k + 1}{c.eHalfV !== null ? ` (E½ ${c.eHalfV.toFixed(3)} V)` : ''}</option>)}
             </select>
           </label>
         ) : null}
@@ -53,7 +53,7 @@ export function SeriesView() {
       ) : (
         <p className="empty">{entry?.status === 'ready' ? 'No couple could be followed across the scan rates of this group.' : 'Waiting for the analyses of this group…'}</p>
       )}
-      {entry?.result ? <SeriesTable result={entry.result} offsetV={scale.offsetV} /> : null}
+      {entry?.result ? <SeriesTable result={entry.result.analysis} /> : null}
     </section>
   );
 }

@@ -28,25 +28,30 @@ export function TracePanel() {
   });
   const theoryCurve = showTheory && theory?.curve ? { ...theory.curve, label: 'theory (simulated, fitted values)' } : null;
   const m = file?.measurement ?? null;
-  const corrected = result?.correctedPotentialV ?? null;
+  const run = result?.run ?? null;
+  // Until the analysis is back, the recorded potentials are shifted by the series' display offset.
+  const offsetV = run?.reference.offsetV ?? scale.offsetV;
+  const shown = useMemo(() => (!m ? null : run?.analysedPotentialV ?? (offsetV === 0 || run ? m.potentialV : m.potentialV.map((e) => e + offsetV))), [m, run, offsetV]);
+  const iRCorrected = (run?.warnings ?? []).some((w) => w.code === 'OHMIC');
 
   const figure = useMemo(() => {
-    if (!m) return null;
+    if (!m || !shown) return null;
     return buildTraceFigure({
-      fileName: m.fileName, potentialV: corrected ?? m.potentialV, currentA: m.currentA, cycles: m.cycles,
-      analysis: result?.analysis ?? null, cycle: view.cycle, convention: view.convention,
+      fileName: m.fileName, potentialV: shown, currentA: m.currentA, cycles: m.cycles,
+      analysis: run?.analysis ?? null, cycle: view.cycle, convention: view.convention,
       showSmoothed: view.showSmoothed, showBaselines: view.showBaselines, dragMode: view.dragMode,
-      peakWindows: windows ?? [], potentialOffsetV: scale.offsetV,
-      potentialAxisTitle: `E${corrected ? ' (iR-corrected)' : ''} vs ${scale.name} / V`,
+      peakWindows: windows ?? [], recordingOffsetV: offsetV,
+      potentialAxisTitle: `E${iRCorrected ? ' (iR-corrected)' : ''} vs ${scale.name} / V`,
       theory: theoryCurve,
       companions: companions.map((c) => ({ name: c.fileName, potentialV: c.potentialV, currentA: c.currentA, cycles: c.cycles })),
     });
-  }, [m, corrected, result?.analysis, view, windows, scale, theoryCurve?.currentA, companions]);
+  }, [m, shown, run, iRCorrected, offsetV, view, windows, scale, theoryCurve?.currentA, companions]);
 
   const onRangeSelect = (a: number, b: number) => {
     if (!id || view.dragMode !== 'window') return;
-    const fromV = Math.min(a, b) - scale.offsetV;
-    const toV = Math.max(a, b) - scale.offsetV;
+    // Windows are kept on the file's recording scale (so they survive a change of display scale).
+    const fromV = Math.min(a, b) - offsetV;
+    const toV = Math.max(a, b) - offsetV;
     void halfwaveActions().updateFileSettings(id, (fs) => ({ ...fs, peakWindows: [...fs.peakWindows, { direction: view.dir, fromV, toV }] }));
   };
 

@@ -21,7 +21,7 @@ export function useSeriesScale(group: string | null): DisplayScale {
 /** True when every couple the series followed is surface-confined (the concentration is then unused). */
 export function useAdsorbedSeries(group: string | null): boolean {
   return useHalfwave((s) => {
-    const couples = group ? s.series[group]?.result?.couples : undefined;
+    const couples = group ? s.series[group]?.result?.analysis.couples : undefined;
     return !!couples && couples.length > 0 && couples.every((c) => c.regime === 'surface');
   });
 }

@@ -24,11 +24,12 @@ export interface SeriesFigures {
 
 type Getter = (p: SeriesPoint) => number | null;
 
-export function buildSeriesFigures(couple: SeriesCouple, potentialOffsetV: number, scaleName: string): SeriesFigures {
+/** Potentials of `couple` are already on the scale named `scaleName` (the run reports on it). */
+export function buildSeriesFigures(couple: SeriesCouple, scaleName: string): SeriesFigures {
   return {
     current: currentFigure(couple),
     logLog: logLogFigure(couple),
-    peakPotential: peakPotentialFigure(couple, potentialOffsetV, scaleName),
+    peakPotential: peakPotentialFigure(couple, scaleName),
   };
 }
 
@@ -53,19 +54,15 @@ function logLogFigure(c: SeriesCouple): Figure {
   return { data, layout: layout('log₁₀(v / V s⁻¹)', 'log₁₀(|ip| / A)', false) };
 }
 
-function peakPotentialFigure(c: SeriesCouple, offsetV: number, scaleName: string): Figure {
+function peakPotentialFigure(c: SeriesCouple, scaleName: string): Figure {
   const lx = (p: SeriesPoint) => Math.log10(p.scanRateVPerS);
-  const shift = (g: Getter): Getter => (p) => {
-    const v = g(p);
-    return v === null ? null : v + offsetV;
-  };
   const data: Data[] = [
-    points(c.points, lx, shift((p) => p.epaV), 1, 'Epa', palette.anodic, markers.anodic),
-    points(c.points, lx, shift((p) => p.epcV), 1, 'Epc', palette.cathodic, markers.cathodic),
+    points(c.points, lx, (p) => p.epaV, 1, 'Epa', palette.anodic, markers.anodic),
+    points(c.points, lx, (p) => p.epcV, 1, 'Epc', palette.cathodic, markers.cathodic),
   ];
   const xs = c.points.map(lx);
   for (const [dir, r] of [['anodic', c.peakShift.anodic], ['cathodic', c.peakShift.cathodic]] as const) {
-    if (r) data.push(fitLine({ ...r.fit, intercept: r.fit.intercept + offsetV }, xs, 1, `${dir}: ${(r.slopeVPerDecade * 1000).toFixed(1)} mV/decade`));
+    if (r) data.push(fitLine(r.fit, xs, 1, `${dir}: ${(r.slopeVPerDecade * 1000).toFixed(1)} mV/decade`));
   }
   return { data, layout: layout('log₁₀(v / V s⁻¹)', `Ep vs ${scaleName} / V`, false) };
 }

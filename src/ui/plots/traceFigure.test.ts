@@ -14,7 +14,7 @@ const currentA = Float64Array.from([0, 1e-6, 5e-6, -2e-6, -1e-6]);
 const base: TraceFigureInput = {
   fileName: 'a.csv', potentialV, currentA, cycles: [{ index: 1, start: 0, end: 5 }], analysis: null, cycle: 1,
   convention: 'iupac', showSmoothed: false, showBaselines: true, dragMode: 'zoom', peakWindows: [],
-  potentialOffsetV: 0, potentialAxisTitle: 'E vs SCE / V',
+  recordingOffsetV: 0, potentialAxisTitle: 'E vs SCE / V',
 };
 
 const peak = {
@@ -60,9 +60,13 @@ describe('buildTraceFigure', () => {
     expect(ys(fig, 1)).toEqual([0, 1e-3, 5e-3, -2e-3, -1e-3].map((v) => expect.closeTo(v, 12)));
   });
 
-  it('shifts potentials to the display scale and shades peak windows', () => {
-    const fig = buildTraceFigure({ ...base, potentialOffsetV: 0.2, peakWindows: [{ direction: 'cathodic', fromV: 0.05, toV: 0.15 }] });
+  it('draws the analysed potentials as they are and shifts what is on the recording scale (windows, companions)', () => {
+    const fig = buildTraceFigure({
+      ...base, recordingOffsetV: 0.2, peakWindows: [{ direction: 'cathodic', fromV: 0.05, toV: 0.15 }],
+      companions: [{ name: 'b.csv', potentialV, currentA, cycles: base.cycles }],
+    });
     expect((fig.data[0] as { x: number[] }).x[2]).toBeCloseTo(0.4, 12);
+    expect((fig.data[1] as { x: number[] }).x[2]).toBeCloseTo(0.2, 12);
     expect(fig.layout.shapes?.[0]).toMatchObject({ x0: expect.closeTo(0.25, 12), x1: expect.closeTo(0.35, 12) });
   });
 });

@@ -15,9 +15,11 @@ import { baseFont, markers, palette, traceColour } from './palette';
 
 export interface TraceFigureInput {
   fileName: string;
+  /** Potentials as analysed, on the display scale (V). */
   potentialV: Float64Array;
   currentA: Float64Array;
   cycles: CycleRange[];
+  /** The analysis of the shown potentials (its potentials on the display scale). */
   analysis: VoltammogramAnalysis | null;
   /** 1-based cycle, or 0 for all. */
   cycle: number;
@@ -26,8 +28,11 @@ export interface TraceFigureInput {
   showBaselines: boolean;
   dragMode: 'zoom' | 'window';
   peakWindows: PeakWindow[];
-  /** Added to every potential for display on another reference scale (V). */
-  potentialOffsetV: number;
+  /**
+   * Added to potentials on the file's recording scale (peak windows, the theory overlay, the other
+   * files of the series) to put them on the display scale (V).
+   */
+  recordingOffsetV: number;
   /** e.g. "E vs SCE / V". */
   potentialAxisTitle: string;
   /** Simulated voltammogram to overlay (files' scale, IUPAC), with its legend text. */
@@ -50,7 +55,8 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
   const scale = chooseCurrentScale(Math.max(0, ...cycles.map((c) => maxAbs(input.currentA, c.start, c.end)),
     ...companions.map((c) => (c.range ? maxAbs(c.currentA, c.range.start, c.range.end) : 0))));
   const sign = input.convention === 'polarographic' ? -1 : 1;
-  const tx = (v: number) => v + input.potentialOffsetV;
+  const tx = (v: number) => v + input.recordingOffsetV;
+  const same = (v: number) => v;
   const ty = (a: number) => sign * a * scale.factor;
   const data: Data[] = [];
   companions.forEach((c, k) => {
@@ -62,11 +68,11 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
       line: { color: palette.companion, width: 1 }, hovertemplate: `${c.name}<br>E %{x:.4f} V<br>i %{y:.4g}<extra></extra>`,
     });
   });
-  cycles.forEach((c, k) => data.push(line(input, c.start, c.end, `cycle ${c.index}`, traceColour(k), tx, ty)));
+  cycles.forEach((c, k) => data.push(line(input, c.start, c.end, `cycle ${c.index}`, traceColour(k), same, ty)));
   const smoothed = input.analysis?.smoothed;
   if (input.showSmoothed && smoothed) {
     for (const c of cycles) {
-      data.push(line({ ...input, currentA: smoothed.currentA }, c.start, c.end, `smoothed, cycle ${c.index}`, palette.smoothed, tx, ty, 1.2));
+      data.push(line({ ...input, currentA: smoothed.currentA }, c.start, c.end, `smoothed, cycle ${c.index}`, palette.smoothed, same, ty, 1.2));
     }
   }
   if (input.theory) {
@@ -79,8 +85,8 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
   }
   const shown = new Set(cycles.map((c) => c.index));
   const peaks = (input.analysis?.cycles ?? []).filter((c) => shown.has(c.index)).flatMap((c) => c.peaks);
-  if (input.showBaselines) data.push(...peaks.map((p, k) => baselineTrace(p, k === 0, tx, ty)));
-  data.push(...(['anodic', 'cathodic'] as const).map((d) => peakTrace(peaks.filter((p) => p.direction === d), d, tx, ty, scale)));
+  if (input.showBaselines) data.push(...peaks.map((p, k) => baselineTrace(p, k === 0, same, ty)));
+  data.push(...(['anodic', 'cathodic'] as const).map((d) => peakTrace(peaks.filter((p) => p.direction === d), d, same, ty, scale)));
   return { data, layout: traceLayout(input, scale, tx), scale };
 }
 

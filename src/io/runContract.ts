@@ -1,11 +1,14 @@
 /**
- * The `analyze --json` object. Field names and meanings of the contract are fixed (outside checks
- * depend on them): files[].{file, scanRate, scanRateSource, cycles[].{index, peaks[], couples[]}},
- * series[].{couple, slope, intercept, r2, D, logLogSlope, k0, gamma}, warnings[]. Everything else
- * here is an extra field. Units: V, A, V/s, cm²/s, cm/s, mol/cm²; ipa/ipc and ip are positive
- * baseline-corrected magnitudes; `ratio` is return over forward peak (Nicholson's convention).
+ * The JSON contract of an analysis run: what `analyze --json` prints and what the JSON results
+ * sheet carries, with the same keys wherever it appears. Field names and meanings are fixed
+ * (outside checks depend on them): files[].{file, scanRate, scanRateSource, cycles[].{index,
+ * peaks[], couples[]}}, series[].{couple, slope, intercept, r2, D, logLogSlope, k0, gamma},
+ * warnings[]. Everything else is an extra field; `series[].series` names the scan-rate series a
+ * couple belongs to when a run holds several. Units: V, A, V/s, cm²/s, cm/s, mol/cm²; ipa/ipc
+ * and ip are positive baseline-corrected magnitudes; `ratio` is return over forward peak
+ * (Nicholson's convention).
  */
-import type { AnalyzeRunResult, RunFileResult } from '../core/analysis/runTypes';
+import type { AnalyzeRunResult, RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
 import { currentInConvention } from '../core/conventions';
 
@@ -15,6 +18,7 @@ const num = (x: number | null | undefined): number | null => (x === null || x ==
 function fileEntry(f: RunFileResult, givenAs: string, r: AnalyzeRunResult) {
   return {
     file: givenAs,
+    series: f.series,
     scanRate: f.scanRateVPerS,
     scanRateSource: f.scanRateSource,
     sizeBytes: f.provenance.sizeBytes ?? null,
@@ -39,9 +43,10 @@ function gammaOf(c: SeriesCouple): number | null {
   return num(c.surface?.coverageFromChargeMolPerCm2 ?? c.surface?.coverageFromSlopeMolPerCm2 ?? null);
 }
 
-function seriesEntry(c: SeriesCouple) {
+function seriesEntry(s: RunSeriesResult, c: SeriesCouple) {
   const f = c.forwardFit;
   return {
+    series: s.key,
     couple: c.index,
     slope: num(f?.slope),
     intercept: num(f?.intercept),
@@ -78,15 +83,26 @@ function seriesEntry(c: SeriesCouple) {
   };
 }
 
-/** The contract object; `givenAs[i]` is how file i was named on the command line. */
-export function analyzeContract(r: AnalyzeRunResult, givenAs: string[]) {
+/** The contract object; `givenAs[i]` is how file i was named (on the command line), else its file name. */
+export function runContract(r: AnalyzeRunResult, givenAs: string[] = []) {
   return {
     files: r.files.map((f, i) => fileEntry(f, givenAs[i] ?? f.fileName, r)),
-    series: r.series.couples.map(seriesEntry),
-    warnings: r.warnings.map((w) => (w.fileName ? `${w.fileName}: ${w.message}` : w.message)),
+    series: r.series.flatMap((s) => s.analysis.couples.map((c) => seriesEntry(s, c))),
+    warnings: r.warnings.map((w) => (w.fileName ? `${w.fileName}: ${w.message}` : w.series && r.series.length > 1 ? `${w.series}: ${w.message}` : w.message)),
+    seriesGroups: r.series.map((s) => ({
+      series: s.key, files: s.fileNames,
+      capacitance: capacitanceOf(s),
+      referenceBasis: s.referenceBasis,
+    })),
+    capacitance: capacitanceOf(r.series[0]),
     reference: r.reference,
     convention: r.convention,
-    capacitance: r.capacitance ? { Cd: r.capacitance.capacitanceFPerCm2, pointwise: r.capacitance.pointCapacitancesFPerCm2 } : null,
     software: r.provenance.software,
   };
 }
+
+function capacitanceOf(s: RunSeriesResult | undefined) {
+  return s?.capacitance ? { Cd: s.capacitance.capacitanceFPerCm2, pointwise: s.capacitance.pointCapacitancesFPerCm2 } : null;
+}
+
+export type RunContract = ReturnType<typeof runContract>;

@@ -1,0 +1,81 @@
+/**
+ * One file of an analysis run: iR correction E − i·Ru on the recording scale, a constant shift to
+ * the reported scale, then the per-trace analysis with the file's own peak windows and baselines
+ * (stored on the recording scale, so shifted by the same offset). Every potential of the result
+ * is on the reported scale, and ΔEp is free of the ohmic contribution the user gave.
+ * Sources are named in the methods called (conventions/iRCorrect.ts, analyzeVoltammogram.ts).
+ */
+import { iRCorrect } from '../conventions';
+import type { BaselineSpec } from '../baseline/baselineTypes';
+import { AnalysisError } from '../errors';
+import { chargingCurrentGap } from '../series';
+import type { Voltammogram } from '../types';
+import { analyzeResolvedVoltammogram, type TraceOptions } from './analyzeVoltammogram';
+import type { ResolvedRunFile } from './resolveRun';
+import type { FileReference, ResolvedCell, ResolvedMethod, RunFileResult, RunWarning } from './runTypes';
+
+function shiftSpec(b: BaselineSpec, offsetV: number): BaselineSpec {
+  const out: BaselineSpec = { ...b, fromV: b.fromV + offsetV, toV: b.toV + offsetV };
+  if (b.anchorsV) out.anchorsV = [b.anchorsV[0] + offsetV, b.anchorsV[1] + offsetV];
+  return out;
+}
+
+/** The trace options of one file: the method, its series' n and T, its own windows on the reported scale. */
+export function traceOptionsOf(file: ResolvedRunFile, cell: ResolvedCell, method: ResolvedMethod, offsetV: number): TraceOptions {
+  return {
+    temperatureK: cell.temperatureK, electronCount: cell.electronCount, smoothing: method.smoothing, currentConvention: 'iupac',
+    peakWindows: file.peakWindows.map((w) => ({ ...w, fromV: w.fromV + offsetV, toV: w.toV + offsetV })),
+    baselines: file.baselines.map((b) => shiftSpec(b, offsetV)),
+    forwardBaseline: method.forwardBaseline, returnBaseline: method.returnBaseline, minSignalToNoise: method.minSignalToNoise,
+    minProminenceA: method.minProminenceA, minRelativeProminence: method.minRelativeProminence, maxDeltaEpV: method.maxDeltaEpV,
+    scanRateVPerS: file.scanRateVPerS, cycles: file.input.voltammogram.cycles.map((c) => c.index),
+  };
+}
+
+/** The potential column as analysed: iR-corrected, then shifted; the recorded column when neither applies. */
+export function analysedPotential(v: Voltammogram, ruOhm: number, offsetV: number): Float64Array | null {
+  if (!(ruOhm > 0) && offsetV === 0) return null;
+  const corrected = ruOhm > 0 ? iRCorrect(v.potentialV, v.currentA, ruOhm) : v.potentialV;
+  return offsetV === 0 ? corrected : corrected.map((e) => e + offsetV);
+}
+
+function traceWarnings(file: ResolvedRunFile, result: RunFileResult['analysis'], ruOhm: number): RunWarning[] {
+  const fileName = file.input.fileName;
+  const out: RunWarning[] = result.warnings.map((w) => ({ code: 'TRACE', fileName, message: w.message }));
+  for (const c of result.cycles) for (const w of c.warnings) out.push({ code: 'TRACE', fileName, message: `cycle ${c.index}: ${w.message}` });
+  if (ruOhm > 0) {
+    let maxDrop = 0;
+    for (const i of file.input.voltammogram.currentA) maxDrop = Math.max(maxDrop, Math.abs(i * ruOhm));
+    out.push({ code: 'OHMIC', fileName, message: `iR correction with Ru = ${ruOhm} Ω moves potentials by up to ${(maxDrop * 1000).toFixed(1)} mV` });
+  }
+  return out;
+}
+
+export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method: ResolvedMethod, reference: FileReference): RunFileResult {
+  const v = file.input.voltammogram;
+  const potentialV = analysedPotential(v, cell.ruOhm, reference.offsetV);
+  const analysed: Voltammogram = potentialV ? { ...v, potentialV } : v;
+  const fileName = file.input.fileName;
+  let analysis;
+  try {
+    analysis = analyzeResolvedVoltammogram(analysed, traceOptionsOf(file, cell, method, reference.offsetV));
+  } catch (err) {
+    // Name the file: the per-trace message alone does not say which of the series failed.
+    if (err instanceof AnalysisError) throw new AnalysisError(err.code, `${fileName}: ${err.message}`);
+    throw err;
+  }
+  const warnings = traceWarnings(file, analysis, cell.ruOhm);
+  let chargingGapA: number | null = null;
+  if (cell.capacitancePotentialV !== null) {
+    try {
+      chargingGapA = chargingCurrentGap(analysed, cell.capacitancePotentialV, method.seriesCycle);
+    } catch (err) {
+      if (!(err instanceof AnalysisError)) throw err;
+      warnings.push({ code: 'CAPACITANCE', fileName, message: err.message });
+    }
+  }
+  return {
+    fileName, series: file.series, role: file.role, scanRateVPerS: file.scanRateVPerS, scanRateSource: file.scanRateSource,
+    reference, analysis, analysedPotentialV: potentialV, chargingGapA, provenance: file.input.provenance ?? {}, pointCount: v.potentialV.length, warnings,
+  };
+}

@@ -1,0 +1,44 @@
+/**
+ * One scan-rate series of an analysis run, over its files' results: the series analysis
+ * (analyzeSeries.ts) with the series' cell, the double-layer capacitance from the charging gaps
+ * when a featureless potential was given, and the basis of the reference scales used.
+ * Sources are named in the methods called (series/doubleLayerCapacitance.ts, analyzeSeries.ts).
+ */
+import { AnalysisError } from '../errors';
+import { doubleLayerCapacitance } from '../series';
+import type { DoubleLayerCapacitanceResult } from '../series';
+import type { ReferenceId } from '../reference';
+import { analyzeResolvedSeries } from './analyzeSeries';
+import { describeSeriesReferences } from './runReference';
+import type { ResolvedCell, ResolvedMethod, RunFileResult, RunSeriesResult, RunWarning } from './runTypes';
+
+function capacitanceOf(files: RunFileResult[], cell: ResolvedCell, warnings: RunWarning[], key: string): DoubleLayerCapacitanceResult | null {
+  const gaps = files.filter((f) => f.chargingGapA !== null);
+  if (cell.capacitancePotentialV === null || !gaps.length) return null;
+  if (cell.areaCm2 === null) {
+    warnings.push({ code: 'CAPACITANCE', series: key, message: 'double-layer capacitance needs the electrode area' });
+    return null;
+  }
+  return doubleLayerCapacitance({
+    scanRatesVPerS: gaps.map((f) => f.scanRateVPerS), gapCurrentsA: gaps.map((f) => Math.max(0, f.chargingGapA as number)), areaCm2: cell.areaCm2,
+  });
+}
+
+/** `files`: the results of the series' files (internal-standard files are left out here). */
+export function analyzeRunSeries(key: string, cell: ResolvedCell, method: ResolvedMethod, output: ReferenceId | null, files: RunFileResult[]): RunSeriesResult {
+  const members = files.filter((f) => f.role === 'series');
+  if (!members.length) throw new AnalysisError('EMPTY_INPUT', `series "${key}": every file is marked as internal standard; nothing is left for the series`);
+  const analysis = analyzeResolvedSeries(
+    members.map((f) => ({ fileName: f.fileName, scanRateVPerS: f.scanRateVPerS, analysis: f.analysis })),
+    {
+      electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: cell.concentrationMolPerCm3, temperatureK: cell.temperatureK,
+      alpha: cell.alpha, transferElectronCount: cell.transferElectronCount, diffusionRatio: cell.diffusionRatio, diffusionCm2PerS: cell.diffusionCm2PerS,
+      cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV,
+    },
+  );
+  const warnings: RunWarning[] = analysis.warnings.map((w) => ({ code: 'SERIES', series: key, message: w.message }));
+  const refs = describeSeriesReferences(members, output, cell.temperatureK);
+  warnings.push(...refs.warnings.map((w) => ({ ...w, series: key })));
+  const capacitance = capacitanceOf(members, cell, warnings, key);
+  return { key, fileNames: members.map((f) => f.fileName), cell, analysis, capacitance, referenceBasis: refs.basis, warnings };
+}

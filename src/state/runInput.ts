@@ -1,0 +1,72 @@
+/**
+ * The one mapping from what the user set on screen (in the units of the forms: mM, °C, Ω) to the
+ * core's run model (core/analysis/runTypes.ts). The per-file analysis, the series, the results
+ * sheet and the display scale all read their options through here, so they cannot drift apart.
+ */
+import { DEFAULT_SERIES_KEY } from '../core/analysis/resolveRun';
+import type { CellValues, MethodOptions, ReportOptions, RunFile, RunInput } from '../core/analysis/runTypes';
+import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
+import { describeLayout } from '../io/describeLayout';
+import { SOFTWARE } from '../version';
+import { resolveCell as resolveSeriesCell, type SeriesCell } from './seriesCell';
+import { emptyFileSettings, type AnalysisSettings } from './settings';
+import type { HalfwaveState } from './types';
+
+/** A series' cell in the core's units; the Fc⁺/Fc E½ entered on the recording scale becomes a given internal standard. */
+export function cellValuesOf(cell: SeriesCell): CellValues {
+  const values: CellValues = {
+    electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: millimolarToMolPerCm3(cell.concentrationMM),
+    temperatureK: celsiusToKelvin(cell.temperatureC), alpha: cell.alpha, ruOhm: cell.resistanceOhm, inputReference: cell.fileReference, pH: cell.pH,
+  };
+  if (cell.ferroceneHalfWaveV !== null && cell.fileReference !== 'Fc') {
+    values.internalStandard = { kind: 'value', eHalfV: cell.ferroceneHalfWaveV, reference: cell.fileReference, origin: 'entered by the user' };
+  }
+  return values;
+}
+
+export function methodOptionsOf(settings: AnalysisSettings): MethodOptions {
+  return {
+    smoothing: settings.smoothing, forwardBaseline: settings.forwardBaseline, returnBaseline: settings.returnBaseline,
+    minSignalToNoise: settings.minSignalToNoise, seriesCycle: 1,
+  };
+}
+
+/** Every series is reported on the display scale; one that cannot be converted stays on its own scale, with a warning. */
+export function reportOptionsOf(state: Pick<HalfwaveState, 'convention' | 'settings'>): ReportOptions {
+  return { outputReference: state.settings.reference.displayReference, outputConvention: state.convention, unconvertible: 'keep-recording-scale' };
+}
+
+/** One loaded file as a run file: its measurement, provenance and own windows and baselines. */
+export function runFileOf(state: HalfwaveState, id: string): RunFile | null {
+  const f = state.files[id];
+  const m = f?.measurement;
+  if (!f || !m) return null;
+  const own = state.fileSettings[id] ?? emptyFileSettings;
+  return {
+    fileName: f.fileName, series: f.group, voltammogram: m, referenceElectrode: m.referenceElectrode,
+    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(m), importWarnings: f.warnings.map((w) => w.message) },
+    trace: { peakWindows: own.peakWindows, baselines: own.baselines },
+  };
+}
+
+/** Everything a series needs from the store: its cell, the method, the report. */
+export function seriesOptionsOf(state: HalfwaveState, group: string): { cell: CellValues; method: MethodOptions; report: ReportOptions } {
+  return { cell: cellValuesOf(resolveSeriesCell(state, group).cell), method: methodOptionsOf(state.settings), report: reportOptionsOf(state) };
+}
+
+/**
+ * The run input of the given files (default: every loaded file), each series with its own cell.
+ * A series that cannot be put on the display scale stays on its recording scale, with a warning,
+ * exactly as the screen shows it.
+ */
+export function runInputOf(state: HalfwaveState, ids: string[] = state.fileOrder): RunInput {
+  const files = ids.flatMap((id) => runFileOf(state, id) ?? []);
+  const groups = [...new Set(files.map((f) => f.series ?? DEFAULT_SERIES_KEY))];
+  return {
+    files,
+    cells: Object.fromEntries(groups.map((g) => [g, cellValuesOf(resolveSeriesCell(state, g).cell)])),
+    method: methodOptionsOf(state.settings),
+    report: reportOptionsOf(state),
+    software: { ...SOFTWARE },
+  };
+}
