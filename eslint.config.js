@@ -42,7 +42,12 @@ export default tseslint.config(
   },
   {
     files: ['src/ui/**/*.{ts,tsx}'],
-    rules: noImportsFrom(['node:*', 'fs', '**/cli/**', '**/io/**', '**/worker/**'],
-      'src/ui acts through src/state; core only as types.'),
+    rules: {
+      ...noImportsFrom(['node:*', 'fs', '**/cli/**', '**/io/**', '**/worker/**'], 'src/ui acts through src/state; core only as types.'),
+      // The core's values reach the screen through the store: the UI may name core types, never call core code.
+      '@typescript-eslint/no-restricted-imports': ['error', {
+        patterns: [{ group: ['**/core/**', '**/core'], allowTypeImports: true, message: 'src/ui imports the core only as types (import type …); call it through src/state.' }],
+      }],
+    },
   },
 );

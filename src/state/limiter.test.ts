@@ -1,5 +1,5 @@
 /** The import limiter: never more than its slots at once, first come first served (hand-worked). */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { createLimiter } from './filesSlice';
 
 describe('createLimiter', () => {
@@ -8,15 +8,22 @@ describe('createLimiter', () => {
     let running = 0;
     let peak = 0;
     const started: number[] = [];
+    // Each task waits until the test releases it, so the order of events is set by hand, not by a clock.
+    const release: Array<() => void> = [];
     const task = (k: number) => limit(async () => {
       started.push(k);
       running++;
       peak = Math.max(peak, running);
-      await new Promise((r) => setTimeout(r, 5));
+      await new Promise<void>((r) => release.push(r));
       running--;
       return k;
     });
-    const results = await Promise.all([1, 2, 3, 4, 5].map(task));
+    const all = Promise.all([1, 2, 3, 4, 5].map(task));
+    for (let done = 0; done < 5; done++) {
+      await vi.waitFor(() => expect(release.length).toBeGreaterThan(done));
+      release[done]!();
+    }
+    const results = await all;
     expect(results).toEqual([1, 2, 3, 4, 5]);
     expect(peak).toBe(2);
     expect(started).toEqual([1, 2, 3, 4, 5]);

@@ -5,7 +5,7 @@
  * Faulkner, Electrochemical Methods, 2nd ed. (2001), §6.2; check-values.md §2): with the slope
  * fixed by the data, D ∝ 1/(A·C)², so the cell a series is given shows up in D as that square.
  */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
 import { displayScale } from './display';
 import { runInputOf } from './runInput';
@@ -72,7 +72,8 @@ describe('inheritance of a new series', () => {
     });
     await store.getState().addFiles([{ name: 'plain.csv', data: csv(0.1) }], 'warm');
     await store.getState().addFiles([{ name: 'stated.csv', data: PREAMBLE + csv(0.2) }], 'warm');
-    await new Promise((r) => setTimeout(r, 50));
+    // The earlier file is analysed again in the background; wait for that request, not for a fixed time.
+    await vi.waitFor(() => expect(seen).toHaveLength(3), { timeout: 20_000, interval: 10 });
     // 30 °C → 303.15 K (BIPM, SI Brochure 9th ed. 2019); the first file ran at 25 °C, then again at 30 °C.
     expect(seen).toEqual([298.15, 303.15, 303.15]);
   });

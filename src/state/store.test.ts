@@ -3,7 +3,7 @@
  * handler table the worker runs). Input voltammograms come from our own simulator; the checks on
  * the numbers name their source.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
 import { AUTOSAVE_KEY, attachAutosave, loadSessionText, restoreAutosave, saveSessionText } from './sessionActions';
 import { memoryStorageAdapter } from './storage';
@@ -149,8 +149,7 @@ describe('sessions', () => {
     const storage = memoryStorageAdapter();
     const detach = attachAutosave(store, storage, 1);
     await store.getState().updateSettings((s) => ({ ...s, minSignalToNoise: 12 }));
-    await new Promise((r) => setTimeout(r, 30));
+    await vi.waitFor(() => expect(JSON.parse(storage.data.get(AUTOSAVE_KEY) ?? '{}').settings?.minSignalToNoise).toBe(12), { timeout: 20_000, interval: 5 });
     detach();
-    expect(JSON.parse(storage.data.get(AUTOSAVE_KEY) ?? '{}').settings.minSignalToNoise).toBe(12);
   });
 });

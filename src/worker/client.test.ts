@@ -4,7 +4,7 @@
  * Expected values are worked by hand from the triangle waves below (no published source needed:
  * vertex positions of a triangle wave are arithmetic).
  */
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { AnalysisError } from '../core/errors';
 import { ImportError } from '../io/errors';
 import { createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
@@ -127,7 +127,7 @@ describe('cancelling an import in the worker', () => {
     // Wait (on a busy machine, possibly a while) for the worker to reach its next chunk, see the
     // cancel and answer this request; only messages posted since the request count.
     const answer = () => posted.slice(before).filter((m) => m.type !== 'progress' && 'requestId' in m);
-    for (let waited = 0; !answer().length && waited < 20_000; waited += 50) await new Promise((r) => setTimeout(r, 50));
+    await vi.waitFor(() => expect(answer().length).toBeGreaterThan(0), { timeout: 20_000, interval: 20 });
     const mine = answer();
     expect(mine.length).toBe(1);
     const last = mine[0];

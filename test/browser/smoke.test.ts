@@ -33,9 +33,9 @@ describe('app loads cleanly in Chromium', () => {
     // A page without the app's CSP that reaches for an outside host is caught by the guard.
     const probe = await app.page.context().newPage();
     await probe.setContent('<img src="https://example.org/pixel.png">');
-    await probe.waitForTimeout(300);
+    // Wait for the guard to see the request (an event, not a fixed sleep).
+    await expect.poll(() => app.outsideRequests, { timeout: 20_000 }).toContain('https://example.org/pixel.png');
     await probe.close();
-    expect(app.outsideRequests).toContain('https://example.org/pixel.png');
     app.outsideRequests.length = 0;
   });
 });

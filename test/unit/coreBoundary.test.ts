@@ -2,7 +2,9 @@
  * The numeric core must stay pure: no DOM, React, Node built-ins, timers, worker globals or app
  * layers. This test reads every file under src/core and fails on a forbidden import or global.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
@@ -47,5 +49,29 @@ describe('core purity (architecture rule of this project)', () => {
     expect(files.length).toBeGreaterThan(0);
     const bad = files.flatMap((f) => findViolations(readFileSync(f, 'utf8')).map((v) => `${relative(CORE, f)}: ${v}`));
     expect(bad).toEqual([]);
+  });
+});
+
+describe('core purity by the compiler (src/core/tsconfig.json: ECMAScript library only)', () => {
+  it('a core file that uses document, window, process or a Node module does not type-check', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'halfwave-core-probe-'));
+    try {
+      const probes: Record<string, string> = {
+        'usesDocument.ts': 'export const title = document.title;\n',
+        'usesWindow.ts': 'export const width = window.innerWidth;\n',
+        'usesProcess.ts': 'export const home = process.env.HOME;\n',
+        'usesNodeFs.ts': "import { readFileSync } from 'node:fs';\nexport const read = readFileSync;\n",
+        'pure.ts': 'export const twice = (x: number): number => 2 * x;\n',
+      };
+      for (const [name, body] of Object.entries(probes)) writeFileSync(join(dir, name), body);
+      writeFileSync(join(dir, 'tsconfig.json'), JSON.stringify({ extends: join(CORE, 'tsconfig.json'), include: ['*.ts'], exclude: [] }));
+      const tsc = join(CORE, '..', '..', 'node_modules', 'typescript', 'bin', 'tsc');
+      const r = spawnSync(process.execPath, [tsc, '--noEmit', '-p', join(dir, 'tsconfig.json')], { encoding: 'utf8' });
+      expect(r.status).not.toBe(0);
+      for (const name of ['usesDocument.ts', 'usesWindow.ts', 'usesProcess.ts', 'usesNodeFs.ts']) expect(r.stdout).toContain(name);
+      expect(r.stdout).not.toContain('pure.ts');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });

@@ -4,6 +4,7 @@
  * the peaks and build the couples. Called by analyzeVoltammogram.ts; methods and sources are in
  * the files it calls.
  */
+import { formatMillivolts } from '../units';
 import type { CycleAnalysis, AnalysisWarning, ResolvedAnalyzeOptions } from './types';
 import type { CoupleResult } from '../couples/coupleTypes';
 import type { PeakResult, PeakWindow } from '../peaks/peakTypes';
@@ -17,7 +18,7 @@ import { pairPeaksIntoCouples } from '../couples/pairPeaksIntoCouples';
 import { buildCouple } from '../couples/buildCouple';
 import { thermalVoltageV } from '../constants';
 
-const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
+const mv = formatMillivolts;
 
 export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAnalyzeOptions, thresholdA: number): CycleAnalysis {
   const warnings: AnalysisWarning[] = [];

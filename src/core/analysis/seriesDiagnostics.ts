@@ -6,10 +6,11 @@
  *   decade at 25 °C (Wang eq. 2-5); log–log slope 0.5 diffusion, 1 adsorbed (bands: common
  *   practice, no source); linearity threshold R² ≥ 0.98 is common practice, no source.
  */
+import { formatMillivolts } from '../units';
 import type { ResolvedSeriesOptions } from './seriesFits';
 import type { SeriesCouple } from './seriesTypes';
 
-const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
+const mv = formatMillivolts;
 const sci = (v: number, d = 3) => v.toExponential(d - 1);
 
 function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {

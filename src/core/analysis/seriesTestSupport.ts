@@ -3,6 +3,7 @@
  * the series layer can be tested against published equations without running the peak finder.
  * Used only by tests.
  */
+import { STANDARD_TEMPERATURE_K } from '../constants';
 import type { VoltammogramAnalysis } from './types';
 import type { CoupleResult, VerdictCategory } from '../couples/coupleTypes';
 import type { PeakDirection, PeakResult } from '../peaks/peakTypes';
@@ -41,7 +42,7 @@ function fakeCouple(index: number, c: FakeCouple, peaks: PeakResult[]): CoupleRe
     verdict: {
       category: c.verdict ?? 'reversible', label: 'test', reasons: [],
       evidence: {
-        temperatureK: 298.15, electronCount: 1, deltaEpV: null, reversibleDeltaEpLimitV: 0.057, reversibleDeltaEpAtSwitchV: null,
+        temperatureK: STANDARD_TEMPERATURE_K, electronCount: 1, deltaEpV: null, reversibleDeltaEpLimitV: 0.057, reversibleDeltaEpAtSwitchV: null,
         reversibleHalfPeakWidthV: 0.0565, halfPeakWidthsV: { anodic: null, cathodic: null }, ratio: null,
         fwhmV: { anodic: null, cathodic: null }, adsorbedFwhmV: 0.0906,
       },
@@ -58,7 +59,7 @@ export function fakeAnalysis(couples: FakeCouple[]): VoltammogramAnalysis {
     smoothed: null,
     noiseA: 0,
     options: {
-      temperatureK: 298.15, electronCount: 1, smoothing: 'off', locatingSmoothing: { window: 5, order: 2 }, currentConvention: 'iupac', minRelativeProminence: 0.01,
+      temperatureK: STANDARD_TEMPERATURE_K, electronCount: 1, smoothing: 'off', locatingSmoothing: { window: 5, order: 2 }, currentConvention: 'iupac', minRelativeProminence: 0.01,
       peakWindows: [], baselines: [], forwardBaseline: 'linear', returnBaseline: 'nicholson', minSignalToNoise: 8, minProminenceA: 0,
       maxDeltaEpV: 0.6, scanRateVPerS: null, cycles: [1],
     },

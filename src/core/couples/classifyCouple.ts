@@ -17,7 +17,7 @@
  *   ±25 % of 3.5255·RT/nF; 'adsorbed' also, at any ΔEp, when both peaks close with equal charges
  *   (surfaceWaveReasons), with the label naming slow (Laviron) electron transfer when ΔEp > 1.109·RT/nF.
  */
-import { thermalVoltageV } from '../constants';
+import { thermalVoltageV, STANDARD_TEMPERATURE_K } from '../constants';
 import type { Verdict, VerdictCategory, VerdictEvidence } from './coupleTypes';
 import { halfWidthReasons, irreversibleWidthReasons, mv, ratioBand, surfaceWaveReasons } from './classifyCoupleReasons';
 import { reversibleDeltaEpAtSwitch, reversibleDeltaEpLimitV } from './reversibleDeltaEpAtSwitch';
@@ -89,7 +89,7 @@ function buildEvidence(input: ClassifyCoupleInput, temperatureK: number, n: numb
 }
 
 function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCoupleOptions): Verdict {
-  const temperatureK = options.temperatureK ?? 298.15;
+  const temperatureK = options.temperatureK ?? STANDARD_TEMPERATURE_K;
   const n = options.electronCount ?? 1;
   const u = thermalVoltageV(temperatureK) / n;
   const evidence = buildEvidence(input, temperatureK, n);
@@ -124,7 +124,7 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     ], 'irreversible (slow electron transfer)');
   }
   if (Math.abs(dEp) <= 1.109 * u) return classifySmallSeparation(verdict, input, evidence, dEpReason, ratioReason);
-  const band = ratioBand(dEp * n * (298.15 / temperatureK));
+  const band = ratioBand(dEp * n * (STANDARD_TEMPERATURE_K / temperatureK));
   if (input.ratio !== null && (input.ratio < band.low || input.ratio > band.high)) {
     const label = input.ratio < 1 ? 'chemically coupled (product consumed by a follow-up reaction)' : 'chemically coupled or product adsorbed (return peak larger than forward)';
     return verdict('chemically-coupled', [`${ratioReason}: outside ${band.text}`, dEpReason, ...widthReasons], label);

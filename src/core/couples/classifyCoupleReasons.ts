@@ -8,12 +8,14 @@ import type { VerdictEvidence } from './coupleTypes';
 import type { ClassifyCoupleInput } from './classifyCouple';
 import { kineticRatioEnvelope } from './kineticRatioEnvelope';
 
-export const mv = (v: number) => `${(v * 1000).toFixed(1)} mV`;
+import { formatMillivolts as mv } from '../units';
+
+export { mv };
 
 /**
  * Evidence of a surface-confined wave whatever its ΔEp: both peaks fall back to their baselines
  * (tail ≤ 0.15 of ip 6RT/nF past Ep, where a diffusing species keeps ≈ 0.5; simulated in
- * classifyCouple.surface.test.ts), equal charges (0.85…1.15), and no peak narrower than 0.75 of
+ * classifyCouple.test.ts), equal charges (0.85…1.15), and no peak narrower than 0.75 of
  * the ideal 3.53RT/nF (Laviron kinetics only broaden it; Laviron, J. Electroanal. Chem. 101
  * (1979) 19, from memory). Thresholds: common practice, no source. Null when any test fails.
  */

@@ -6,11 +6,13 @@
  *   Ep independent of v for a reversible couple (Wang, Analytical Electrochemistry, 2nd ed. (2000)
  *     §2-1.1.1); a totally irreversible peak moves by ln10·RT/(2αnF) ≈ 29.6/(αn) mV per decade
  *     (Wang eq. 2-5).
- * Thresholds (common practice, no source): slope 0.4…0.6 "diffusion", 0.85…1.15 "surface";
+ * Thresholds (common practice, no source): slope inside LOG_LOG_DIFFUSION_BAND "diffusion", inside
+ *   LOG_LOG_SURFACE_BAND "surface" (series/logLogSlope.ts);
  *   an Ep drift above 0.4·ln10·RT/(2nF) (≈ 11.8/n mV per decade at 25 °C) is "moves with v".
  * In: the verdict and whatever evidence the series has. Out: a new verdict; the input is unchanged.
  */
 import { thermalVoltageV } from '../constants';
+import { LOG_LOG_DIFFUSION_BAND, LOG_LOG_SURFACE_BAND } from '../series/logLogSlope';
 import type { SeriesEvidence, Verdict, VerdictCategory } from './coupleTypes';
 import { VERDICT_LABELS } from './classifyCouple';
 
@@ -30,10 +32,10 @@ export function refineVerdictWithSeries(verdict: Verdict, evidence: SeriesEviden
   const slope = evidence.logLogSlope;
   if (slope !== undefined && Number.isFinite(slope)) {
     const text = `log|ip| vs log v slope = ${slope.toFixed(2)}${count}`;
-    if (slope >= 0.85 && slope <= 1.15) {
+    if (slope >= LOG_LOG_SURFACE_BAND[0] && slope <= LOG_LOG_SURFACE_BAND[1]) {
       if (category === 'adsorbed') reasons.push(`${text}: as for an adsorbed layer (1)`);
       else change('inconclusive', `${text}: close to 1, which points to a surface-confined species or charging current, not diffusion (0.5)`);
-    } else if (slope >= 0.4 && slope <= 0.6) {
+    } else if (slope >= LOG_LOG_DIFFUSION_BAND[0] && slope <= LOG_LOG_DIFFUSION_BAND[1]) {
       if (category === 'adsorbed') change('inconclusive', `${text}: diffusion-like (0.5), although the single voltammogram looks adsorbed`);
       else reasons.push(`${text}: diffusion-controlled (0.5)`);
     } else {

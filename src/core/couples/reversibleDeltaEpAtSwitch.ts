@@ -16,9 +16,9 @@
  *   `inTable` is false.
  */
 import { AnalysisError } from '../errors';
-import { thermalVoltageV } from '../constants';
+import { thermalVoltageV, STANDARD_TEMPERATURE_K } from '../constants';
 
-const RT_F_25C_MV = thermalVoltageV(298.15) * 1000;
+const RT_F_25C_MV = thermalVoltageV(STANDARD_TEMPERATURE_K) * 1000;
 const PAST_PEAK_MV = [71.5, 121.5, 171.5, 271.5];
 const DELTA_EP_MV = [60.5, 59.2, 58.3, 57.8];
 const LIMIT_FACTOR = 2.218;
@@ -42,7 +42,7 @@ export function reversibleDeltaEpLimitV(electronCount: number, temperatureK: num
 
 export function reversibleDeltaEpAtSwitch(pastPeakV: number, options: ReversibleDeltaEpAtSwitchOptions = {}): ReversibleDeltaEp {
   const n = options.electronCount ?? 1;
-  const temperatureK = options.temperatureK ?? 298.15;
+  const temperatureK = options.temperatureK ?? STANDARD_TEMPERATURE_K;
   if (!Number.isFinite(pastPeakV) || pastPeakV < 0) {
     throw new AnalysisError('BAD_OPTION', `switching distance past the peak must be a finite potential ≥ 0 V, got ${pastPeakV}`);
   }

@@ -15,7 +15,7 @@
  *   equal diffusion coefficients; E½ of the data stands for E°′ of the simulation.
  */
 import { assertFiniteInRange } from '../errors';
-import { inverseThermalVoltagePerV } from '../constants';
+import { inverseThermalVoltagePerV, STANDARD_TEMPERATURE_K } from '../constants';
 import { nicholsonPeakRatio } from '../baseline/nicholsonPeakRatio';
 import { simulateCv } from '../simulation';
 
@@ -42,7 +42,7 @@ const LAMBDAS = [0.003, 0.01, 0.03, 0.1, 0.2, 0.4, 0.7, 1, 1.5, 2.5];
 
 /** Nicholson ratio of a simulated reversible EC sweep (n = 1, 25 °C, v = 1 V/s) at λ. */
 function simulatedRatio(lambda: number, switchPastV: number, stepV: number): number {
-  const f = inverseThermalVoltagePerV(298.15);
+  const f = inverseThermalVoltagePerV(STANDARD_TEMPERATURE_K);
   const r = simulateCv({ mechanism: 'EC', k0CmPerS: 1e4, followUpRatePerS: lambda * f, scanRateVPerS: 1, formalPotentialV: 0, startV: 0.35, switchV: -switchPastV, stepV, cycles: 1 });
   const half = Math.floor(r.currentA.length / 2);
   let forward = 0;
@@ -54,12 +54,12 @@ function simulatedRatio(lambda: number, switchPastV: number, stepV: number): num
 
 export function followUpRateConstant(input: FollowUpRateConstantInput, options: FollowUpRateConstantOptions = {}): FollowUpRateConstantResult {
   const n = options.electronCount ?? 1;
-  const temperatureK = options.temperatureK ?? 298.15;
+  const temperatureK = options.temperatureK ?? STANDARD_TEMPERATURE_K;
   assertFiniteInRange('ratio', input.ratio, 0, 2);
   assertFiniteInRange('switchPastHalfWaveV', input.switchPastHalfWaveV, 0.02, 2);
   assertFiniteInRange('scanRateVPerS', input.scanRateVPerS, 1e-9);
   // n(Eλ − E½) in 25 °C units is the only potential the dimensionless problem knows.
-  const past = (n * input.switchPastHalfWaveV * 298.15) / temperatureK;
+  const past = (n * input.switchPastHalfWaveV * STANDARD_TEMPERATURE_K) / temperatureK;
   const ratios = LAMBDAS.map((l) => simulatedRatio(l, past, options.stepV ?? 0.002));
   if (input.ratio >= ratios[0]!) return { rateConstantPerS: null, lambda: null, reason: `ratio ${input.ratio.toFixed(3)} shows too little loss: λ < ${LAMBDAS[0]} (k_f below ${toRate(LAMBDAS[0]!, input, n, temperatureK).toPrecision(2)} 1/s)` };
   const last = ratios.length - 1;

@@ -11,7 +11,7 @@
  * Difference from the sources: numerical working curve instead of a printed table.
  */
 import { assertFiniteInRange } from '../errors';
-import { inverseThermalVoltagePerV } from '../constants';
+import { inverseThermalVoltagePerV, STANDARD_TEMPERATURE_K } from '../constants';
 import { simulateCv } from '../simulation';
 
 export interface KineticPeakCurrentRatioOptions {
@@ -39,7 +39,7 @@ export function kineticPeakCurrentRatio(psi: number, alpha: number, options: Kin
   assertFiniteInRange('alpha', alpha, 0.01, 0.99);
   const stepV = options.stepV ?? 0.0005;
   assertFiniteInRange('stepV', stepV, 1e-5, 0.005);
-  const k0 = psi * Math.sqrt(Math.PI * D_CM2_PER_S * inverseThermalVoltagePerV(298.15) * V_PER_S);
+  const k0 = psi * Math.sqrt(Math.PI * D_CM2_PER_S * inverseThermalVoltagePerV(STANDARD_TEMPERATURE_K) * V_PER_S);
   let reversible = reversibleCache.get(stepV);
   if (reversible === undefined) {
     reversible = forwardCathodicPeakA(Infinity, 0.5, stepV);

@@ -3,8 +3,8 @@
  * and peak separations, and picks the transfer coefficient for the irreversible Randles–Ševčík form.
  * Rules (design; thresholds named with their sources):
  *   - surface when most files call the couple adsorbed, or when over three or more scan rates
- *     log|ip| rises with log v at a slope of 0.85–1.15 (ip ∝ v, Laviron 1974; band: common
- *     practice, no source); its kinetic class from ΔEp against v (surfaceKinetics);
+ *     log|ip| rises with log v at a slope inside LOG_LOG_SURFACE_BAND (ip ∝ v, Laviron 1974; band:
+ *     common practice, no source); its kinetic class from ΔEp against v (surfaceKinetics);
  *   - where most files have a peak pair, the median n·ΔEp (scaled to 25 °C) decides first: above
  *     212 mV (the end of Nicholson's 1965 table) irreversible, above 65 mV (ψ below 5 in the same
  *     table) quasi-reversible; otherwise the single-trace verdicts decide;
@@ -19,6 +19,7 @@
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import type { PeakPotentialVsLogScanRateResult } from './peakPotentialVsLogScanRate';
 import { median } from '../statistics/median';
+import { LOG_LOG_SURFACE_BAND } from './logLogSlope';
 import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from './seriesPoint';
 import type { VerdictCategory } from '../couples/coupleTypes';
 
@@ -39,7 +40,7 @@ export function classifySeriesCouple(
 ): { regime: SeriesRegime; kineticClass: SeriesKineticClass; majority: VerdictCategory } {
   const majority = mostCommon(points.map((p) => p.verdict));
   const rates = new Set(points.map((p) => p.scanRateVPerS)).size;
-  const linearInV = logLogSlope !== null && rates >= 3 && logLogSlope >= 0.85 && logLogSlope <= 1.15;
+  const linearInV = logLogSlope !== null && rates >= 3 && logLogSlope >= LOG_LOG_SURFACE_BAND[0] && logLogSlope <= LOG_LOG_SURFACE_BAND[1];
   const deltas = points.flatMap((p) => (p.deltaEpV === null ? [] : [electronCount * p.deltaEpV * (STANDARD_TEMPERATURE_K / temperatureK)]));
   if (majority === 'adsorbed' || linearInV) return { regime: 'surface', kineticClass: surfaceKinetics(points, electronCount, temperatureK), majority };
   const rt = thermalVoltageV(temperatureK);

@@ -3,6 +3,7 @@
  * Units follow the core: V, A, s, cm, cm², mol/cm³, cm/s, cm²/s, F/cm², Ω, mol/cm², K.
  * Currents follow the IUPAC convention (anodic positive).
  */
+import { STANDARD_TEMPERATURE_K } from '../constants';
 
 /** Mechanism: E (Butler–Volmer couple in solution), EC (E plus a first-order decay of the
  * electrogenerated species), surface (adsorbed couple with Laviron kinetics). */
@@ -62,7 +63,7 @@ export const DEFAULT_SIMULATION: Readonly<CvSimulationInput> = Object.freeze({
   concentrationOMolPerCm3: 1e-6,
   concentrationRMolPerCm3: 0,
   areaCm2: 0.0707,
-  temperatureK: 298.15,
+  temperatureK: STANDARD_TEMPERATURE_K,
   scanRateVPerS: 0.1,
   startV: 0.3,
   switchV: -0.3,
