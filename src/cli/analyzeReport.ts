@@ -6,13 +6,15 @@
  * Unit conversion at this edge only: mM → mol/cm³ and °C → K happened in parseAnalyzeArgs; here
  * --cdl-at is in V, --ru in Ω, --diffusion in cm²/s.
  */
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { analyzeRun } from '../core/analysis/analyzeRun';
 import type { CellValues, InternalStandardSource, RunFile, RunInput } from '../core/analysis/runTypes';
 import type { CurrentConvention } from '../core/types';
 import { cellFromHeaders, describeLayout, groupIntoSeries, SERIES_GROUPINGS } from '../io';
 import type { Measurement, SeriesGrouping } from '../io';
+import { runInputOf as runInputFromSources } from '../state/runInput';
 import { SOFTWARE } from '../version';
+import { sessionSources } from './sessionSources';
 import { resultsSheetCsv, resultsSheetJson } from '../io/exportResults';
 import { optionNumberOrUndefined, optionString } from './args';
 import type { OptionSpec, ParsedArgs } from './args';
@@ -28,7 +30,7 @@ export const ANALYSIS_OPTION_SPEC: Record<string, OptionSpec> = {
   'from-ref': { value: true }, alpha: { value: true }, ph: { value: true }, ru: { value: true },
   'out-convention': { value: true }, diffusion: { value: true }, 'd-ratio': { value: true }, 'cdl-at': { value: true },
   'fc-near': { value: true }, 'fc-file': { value: true }, 'fc-value': { value: true }, cycle: { value: true }, 'json-sheet': { value: true },
-  'series-by': { value: true },
+  'series-by': { value: true }, session: { value: true },
 };
 
 export const ANALYSIS_OPTION_HELP = `Further analysis options:
@@ -48,6 +50,10 @@ export const ANALYSIS_OPTION_HELP = `Further analysis options:
   --cdl-at V            potential (output scale) of a featureless region: double-layer capacitance
   --cycle N             cycle used for the series (default 1)
   --json-sheet FILE     also write the full results sheet as JSON
+  --session FILE        analyse the files as a saved workbench session has them: its method,
+                        each series' cell values, each file's series, peak windows and baselines,
+                        the display scale and sign convention (files matched by SHA-256, else
+                        name); cannot be combined with cell, scale or grouping options
   --series-by HOW       how files form scan-rate series: auto (default: by folder, a folder of
                         several experiments split by common file-name stem), folder, stem, or one
                         (every file given forms one series)
@@ -68,6 +74,7 @@ export interface AnalysisExtras {
   cycle?: number;
   jsonSheetPath?: string;
   seriesBy?: SeriesGrouping;
+  sessionPath?: string;
 }
 
 function internalStandardOf(a: ParsedArgs, fromRef: string | undefined): InternalStandardSource | undefined {
@@ -105,6 +112,8 @@ export function parseAnalysisExtras(a: ParsedArgs): AnalysisExtras {
   if (std) out.internalStandard = std;
   const sheet = optionString(a, 'json-sheet');
   if (sheet !== undefined) out.jsonSheetPath = sheet;
+  const session = optionString(a, 'session');
+  if (session !== undefined) out.sessionPath = session;
   const by = optionString(a, 'series-by');
   if (by !== undefined) {
     if (!SERIES_GROUPINGS.includes(by as SeriesGrouping)) throw new UsageError(`--series-by must be one of ${SERIES_GROUPINGS.join(', ')}, got "${by}"`);
@@ -124,7 +133,7 @@ export function runFilesOf(read: InputsRead, extras: AnalysisExtras): RunFile[] 
   return read.files.map((f) => ({
     fileName: f.measurement.fileName, series: keyOf.get(f) ?? groups[0]?.key ?? 'series 1', voltammogram: f.measurement,
     referenceElectrode: f.measurement.referenceElectrode, role: isStandard(f) ? 'internal-standard' : 'series',
-    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(f.measurement) },
+    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(f.measurement), importWarnings: f.warnings.map((w) => w.message) },
   }));
 }
 
@@ -156,9 +165,28 @@ export function runInputOf(read: InputsRead, args: AnalyzeArgs, extras: Analysis
   };
 }
 
+/** The run input of a `--session` run: the session laid over the files by the screen's own mapping. */
+function sessionRunInput(read: InputsRead, args: AnalyzeArgs, extras: AnalysisExtras, sessionPath: string, io: CliIo): RunInput {
+  const given = [
+    ...(['areaCm2', 'concentrationMolPerCm3', 'electronCount', 'temperatureK', 'referenceElectrode'] as const).filter((k) => args[k] !== undefined),
+    ...(Object.keys(extras) as Array<keyof AnalysisExtras>).filter((k) => k !== 'sessionPath' && k !== 'jsonSheetPath' && extras[k] !== undefined),
+  ];
+  if (given.length) throw new UsageError(`--session carries the cell values, scales and grouping; leave out ${given.join(', ')}`);
+  let text: string;
+  try {
+    text = readFileSync(sessionPath, 'utf8');
+  } catch (err) {
+    throw new UsageError(`cannot read "${sessionPath}": ${(err as NodeJS.ErrnoException).code ?? String(err)}`);
+  }
+  const { sources, notes } = sessionSources(read, text, sessionPath);
+  for (const n of notes) io.stderr(`note: ${n}\n`);
+  return { ...runInputFromSources(sources), software: { ...SOFTWARE } };
+}
+
 /** Runs the analysis and prints it; returns the exit code. */
 export function runAnalysis(read: InputsRead, args: AnalyzeArgs, io: CliIo, extras: AnalysisExtras = {}): number {
-  const result = analyzeRun(runInputOf(read, args, extras));
+  const input = extras.sessionPath !== undefined ? sessionRunInput(read, args, extras, extras.sessionPath, io) : runInputOf(read, args, extras);
+  const result = analyzeRun(input);
   const givenAs = read.files.map((f) => f.path);
   const meta = { createdAt: new Date().toISOString(), command: `analyze ${args.files.join(' ')}` };
   if (args.csvPath !== undefined) writeOut(args.csvPath, resultsSheetCsv(result, meta));

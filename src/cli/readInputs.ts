@@ -29,6 +29,7 @@ export interface ReadFile {
   sizeBytes: number;
   sha256: string;
   measurement: Measurement;
+  warnings: ImportWarning[];
 }
 
 export interface InputsRead {
@@ -93,7 +94,7 @@ export function readInputs(paths: string[], options: ReadInputsOptions = {}): In
     try {
       const result = importVoltammogram(path === '-' ? 'stdin' : basename(path), bytes, options.overrides ? { overrides: options.overrides } : {});
       read.measurements.push(result.measurement);
-      read.files.push({ path, folder, sizeBytes: bytes.length, sha256, measurement: result.measurement });
+      read.files.push({ path, folder, sizeBytes: bytes.length, sha256, measurement: result.measurement, warnings: result.warnings });
       read.warnings.push(...result.warnings);
       read.outcomes.push({ path, result });
     } catch (err) {

@@ -6,7 +6,7 @@
  */
 import type { ImportOverrides } from '../io/types';
 import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
-import { emptyFileSettings } from './settings';
+import { mergeFileSettings } from './settings';
 import { toUserError, type FileEntry, type FileInput, type FilesSlice, type SliceCreator } from './types';
 
 export const DEFAULT_GROUP = 'series 1';
@@ -83,7 +83,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     set((s) => ({
       remembered: s.remembered.filter((r) => r !== record),
       files: { ...s.files, [id]: { ...entry, group: record.group } },
-      fileSettings: { ...s.fileSettings, [id]: { ...emptyFileSettings, ...(record.analysis as object) } },
+      fileSettings: { ...s.fileSettings, [id]: mergeFileSettings(record.analysis) },
     }));
     if (Object.keys(record.overrides).length > 0 && Object.keys(entry.overrides).length === 0) {
       void enqueue(id, record.overrides);

@@ -10,7 +10,7 @@ import { describeLayout } from '../io/describeLayout';
 import { SOFTWARE } from '../version';
 import { resolveCell as resolveSeriesCell, type SeriesCell } from './seriesCell';
 import { emptyFileSettings, type AnalysisSettings } from './settings';
-import type { HalfwaveState } from './types';
+import type { FileEntry, HalfwaveState } from './types';
 
 /** A series' cell in the core's units; the Fc⁺/Fc E½ entered on the recording scale becomes a given internal standard. */
 export function cellValuesOf(cell: SeriesCell): CellValues {
@@ -36,8 +36,16 @@ export function reportOptionsOf(state: Pick<HalfwaveState, 'convention' | 'setti
   return { outputReference: state.settings.reference.displayReference, outputConvention: state.convention, unconvertible: 'keep-recording-scale' };
 }
 
+/**
+ * What the run input is made from: the store's state, or the same fields rebuilt from a saved
+ * session by the command line (cli/sessionSources.ts), so both map it the one same way.
+ */
+export interface RunSources extends Pick<HalfwaveState, 'fileOrder' | 'fileSettings' | 'settings' | 'seriesCells' | 'convention'> {
+  files: Record<string, Pick<FileEntry, 'fileName' | 'group' | 'measurement' | 'sizeBytes' | 'sha256' | 'warnings'> | undefined>;
+}
+
 /** One loaded file as a run file: its measurement, provenance and own windows and baselines. */
-export function runFileOf(state: HalfwaveState, id: string): RunFile | null {
+export function runFileOf(state: RunSources, id: string): RunFile | null {
   const f = state.files[id];
   const m = f?.measurement;
   if (!f || !m) return null;
@@ -50,7 +58,7 @@ export function runFileOf(state: HalfwaveState, id: string): RunFile | null {
 }
 
 /** Everything a series needs from the store: its cell, the method, the report. */
-export function seriesOptionsOf(state: HalfwaveState, group: string): { cell: CellValues; method: MethodOptions; report: ReportOptions } {
+export function seriesOptionsOf(state: RunSources, group: string): { cell: CellValues; method: MethodOptions; report: ReportOptions } {
   return { cell: cellValuesOf(resolveSeriesCell(state, group).cell), method: methodOptionsOf(state.settings), report: reportOptionsOf(state) };
 }
 
@@ -59,7 +67,7 @@ export function seriesOptionsOf(state: HalfwaveState, group: string): { cell: Ce
  * A series that cannot be put on the display scale stays on its recording scale, with a warning,
  * exactly as the screen shows it.
  */
-export function runInputOf(state: HalfwaveState, ids: string[] = state.fileOrder): RunInput {
+export function runInputOf(state: RunSources, ids: string[] = state.fileOrder): RunInput {
   const files = ids.flatMap((id) => runFileOf(state, id) ?? []);
   const groups = [...new Set(files.map((f) => f.series ?? DEFAULT_SERIES_KEY))];
   return {

@@ -117,6 +117,31 @@ export function mergeSeriesCells(stored: unknown): Record<string, Partial<Series
   return out;
 }
 
+/**
+ * A file's own peak windows and baseline choices from a session record, keeping only well-typed
+ * entries (a hand-edited session cannot put a text where a potential belongs).
+ */
+export function mergeFileSettings(stored: unknown): FileAnalysisSettings {
+  const r = asRecord(stored);
+  const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
+  const direction = (v: unknown): v is 'anodic' | 'cathodic' => v === 'anodic' || v === 'cathodic';
+  const cycle = (v: unknown) => (Number.isInteger(v) && (v as number) >= 1 ? { cycle: v as number } : {});
+  const peakWindows: PeakWindow[] = (Array.isArray(r.peakWindows) ? r.peakWindows : []).map(asRecord)
+    .filter((w) => direction(w.direction) && finite(w.fromV) && finite(w.toV) && w.fromV !== w.toV)
+    .map((w) => ({ direction: w.direction as PeakWindow['direction'], fromV: w.fromV as number, toV: w.toV as number, ...cycle(w.cycle) }));
+  const methods: BaselineMethod[] = ['linear', 'polynomial', 'two-point', 'nicholson'];
+  const baselines: BaselineSpec[] = (Array.isArray(r.baselines) ? r.baselines : []).map(asRecord)
+    .filter((b) => direction(b.direction) && finite(b.fromV) && finite(b.toV) && methods.includes(b.method as BaselineMethod))
+    .map((b) => {
+      const spec: BaselineSpec = { direction: b.direction as BaselineSpec['direction'], fromV: b.fromV as number, toV: b.toV as number, method: b.method as BaselineMethod, ...cycle(b.cycle) };
+      if (Array.isArray(b.anchorsV) && b.anchorsV.length === 2 && b.anchorsV.every(finite)) spec.anchorsV = [b.anchorsV[0] as number, b.anchorsV[1] as number];
+      if (Array.isArray(b.anchorCurrentsA) && b.anchorCurrentsA.length === 2 && b.anchorCurrentsA.every(finite)) spec.anchorCurrentsA = [b.anchorCurrentsA[0] as number, b.anchorCurrentsA[1] as number];
+      if (Number.isInteger(b.degree) && (b.degree as number) >= 1 && (b.degree as number) <= 6) spec.degree = b.degree as number;
+      return spec;
+    });
+  return { peakWindows, baselines };
+}
+
 function asRecord(v: unknown): Record<string, unknown> {
   return typeof v === 'object' && v !== null && !Array.isArray(v) ? (v as Record<string, unknown>) : {};
 }
