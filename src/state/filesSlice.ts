@@ -4,6 +4,7 @@
  * overrides, and group files into scan-rate series. A failed import never removes anything that
  * was already loaded: a failed re-import keeps the previous measurement beside its error.
  */
+import { groupIntoSeries } from '../io/groupIntoSeries';
 import type { ImportOverrides } from '../io/types';
 import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
 import { mergeFileSettings } from './settings';
@@ -125,6 +126,28 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
         set({ notice: `${failed.length} of ${entries.length} file${entries.length === 1 ? '' : 's'} could not be read (${names}); the reason is shown beside each file. Everything else stays loaded.` });
       }
       return entries.map((e) => e.id);
+    },
+
+    async addUpload(batches) {
+      const taken = new Set(Object.values(get().files).map((f) => f?.group));
+      const plan: Array<{ group: string; inputs: FileInput[] }> = [];
+      for (const b of batches) {
+        for (const g of groupIntoSeries(b.inputs.map((i) => ({ name: i.name, folder: b.folder })))) {
+          let group = g.key;
+          for (let k = 2; taken.has(group); k++) group = `${g.key} (${k})`;
+          taken.add(group);
+          plan.push({ group, inputs: g.members.map((i) => b.inputs[i]!) });
+        }
+      }
+      // A new series starts from the defaults and its own files: values saved under the same
+      // name for an earlier, unloaded experiment must not leak into it.
+      set((s) => {
+        const seriesCells = { ...s.seriesCells };
+        for (const p of plan) delete seriesCells[p.group];
+        return { seriesCells };
+      });
+      const ids = (await Promise.all(plan.map((p) => get().addFiles(p.inputs, p.group)))).flat();
+      return { ids, groups: plan.map((p) => p.group) };
     },
 
     reimportFile(id, overrides) {

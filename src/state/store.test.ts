@@ -6,6 +6,8 @@
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
 import { AUTOSAVE_KEY, attachAutosave, loadSessionText, restoreAutosave, saveSessionText } from './sessionActions';
+import { resolveCell } from './seriesCell';
+import { defaultSettings } from './settings';
 import { memoryStorageAdapter } from './storage';
 import { createHalfwaveStore } from './store';
 import { simulatedCsv } from './testSupport';
@@ -151,5 +153,30 @@ describe('sessions', () => {
     await store.getState().updateSettings((s) => ({ ...s, minSignalToNoise: 12 }));
     await vi.waitFor(() => expect(JSON.parse(storage.data.get(AUTOSAVE_KEY) ?? '{}').settings?.minSignalToNoise).toBe(12), { timeout: 20_000, interval: 5 });
     detach();
+  });
+});
+
+describe('uploads become their own series', () => {
+  it('each folder, and each file-name stem inside it, is a new series; names never repeat', async () => {
+    const store = newStore();
+    const a = await store.getState().addUpload([{ folder: 'ferrocene', inputs: [{ name: 'a_50mVs.csv', data: csv }, { name: 'a_100mVs.csv', data: csv }] }]);
+    const b = await store.getState().addUpload([{ folder: 'ferrocene', inputs: [{ name: 'b_50mVs.csv', data: csv }] }]);
+    expect(a.groups).toEqual(['ferrocene']);
+    expect(b.groups).toEqual(['ferrocene (2)']);
+    const loose = await store.getState().addUpload([{ folder: null, inputs: [{ name: 'p_1mVs.csv', data: csv }, { name: 'p_2mVs.csv', data: csv }, { name: 'q_1mVs.csv', data: csv }, { name: 'q_2mVs.csv', data: csv }] }]);
+    expect(loose.groups).toEqual(['p', 'q']);
+    expect(loose.ids.map((id) => store.getState().files[id]?.group)).toEqual(['p', 'p', 'q', 'q']);
+  });
+
+  it('values saved for an earlier, unloaded experiment of the same name do not leak into a new upload', async () => {
+    const store = newStore();
+    // As after a reload: the autosave brought back cell values for "series 1", but not its files.
+    store.setState({ seriesCells: { 'series 1': { areaCm2: 0.5, resistanceOhm: 300 } } });
+    const up = await store.getState().addUpload([{ folder: null, inputs: [{ name: 'alpha.csv', data: csv }, { name: 'beta.csv', data: csv }] }]);
+    expect(up.groups).toEqual(['series 1']);
+    const cell = resolveCell(store.getState(), 'series 1');
+    expect(cell.cell.areaCm2).toBe(defaultSettings.chemistry.areaCm2);
+    expect(cell.cell.resistanceOhm).toBe(0);
+    expect(cell.origin.areaCm2).toBe('default');
   });
 });

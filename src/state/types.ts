@@ -45,6 +45,12 @@ export interface FileInput {
   data: Blob | string;
 }
 
+/** Files of one upload that came from one folder (null: picked or dropped loose). */
+export interface UploadBatch {
+  folder: string | null;
+  inputs: FileInput[];
+}
+
 export interface FilesSlice {
   files: Record<string, FileEntry>;
   fileOrder: string[];
@@ -53,6 +59,12 @@ export interface FilesSlice {
   /** Session records waiting for their file (matched by SHA-256 when it is loaded). */
   remembered: SessionFileRecord[];
   addFiles(inputs: FileInput[], group?: string): Promise<string[]>;
+  /**
+   * An upload (a drop, a file pick, a folder pick): each folder, and inside it each set of files
+   * with a common name stem, becomes a new series with a unique name that starts from the defaults
+   * and its own files' headers. Returns the new files' ids and the new series' names.
+   */
+  addUpload(batches: UploadBatch[]): Promise<{ ids: string[]; groups: string[] }>;
   reimportFile(id: string, overrides: ImportOverrides): Promise<void>;
   removeFile(id: string): void;
   setFileGroup(id: string, group: string): void;

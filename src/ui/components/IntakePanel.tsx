@@ -4,13 +4,10 @@ import { halfwaveActions, useHalfwave } from '../../state/react';
 import { batchesFromDrop, batchesFromFolderPick, type FolderBatch } from '../folderDrop';
 import { FileList } from './FileList';
 
-/** Each folder becomes its own series group; loose files join the default group. */
+/** One upload: each folder, and each set of files with a common name stem, becomes its own new series. */
 function load(batches: FolderBatch[]): void {
-  for (const b of batches) {
-    if (b.files.length === 0) continue;
-    const inputs = b.files.map((f) => ({ name: f.name, data: f }));
-    void (b.folder ? halfwaveActions().addFiles(inputs, b.folder) : halfwaveActions().addFiles(inputs));
-  }
+  const upload = batches.filter((b) => b.files.length > 0).map((b) => ({ folder: b.folder, inputs: b.files.map((f) => ({ name: f.name, data: f })) }));
+  if (upload.length) void halfwaveActions().addUpload(upload);
 }
 
 export function IntakePanel() {
