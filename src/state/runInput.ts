@@ -8,20 +8,39 @@ import type { CellValues, MethodOptions, ReportOptions, RunFile, RunInput } from
 import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
 import { describeLayout } from '../io/describeLayout';
 import { SOFTWARE } from '../version';
-import { resolveCell as resolveSeriesCell, type SeriesCell } from './seriesCell';
+import { resolveCell as resolveSeriesCell, type ResolvedCell, type SeriesCell } from './seriesCell';
 import { emptyFileSettings, type AnalysisSettings } from './settings';
 import type { FileEntry, HalfwaveState } from './types';
 
-/** A series' cell in the core's units; the Fc⁺/Fc E½ entered on the recording scale becomes a given internal standard. */
-export function cellValuesOf(cell: SeriesCell): CellValues {
+/**
+ * A series' cell in the core's units, with the origin of each value (so the results can name a
+ * default that decided a number). The Fc⁺/Fc standard: measured in a file when one is named or a
+ * search potential is given, else the E½ entered on the recording scale.
+ */
+export function cellValuesOf(cell: SeriesCell, origin?: ResolvedCell['origin']): CellValues {
   const values: CellValues = {
     electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: millimolarToMolPerCm3(cell.concentrationMM),
     temperatureK: celsiusToKelvin(cell.temperatureC), alpha: cell.alpha, ruOhm: cell.resistanceOhm, inputReference: cell.fileReference, pH: cell.pH,
+    areaRelativeUncertainty: cell.areaUncertaintyPercent / 100, concentrationRelativeUncertainty: cell.concentrationUncertaintyPercent / 100,
   };
-  if (cell.ferroceneHalfWaveV !== null && cell.fileReference !== 'Fc') {
+  if (origin) {
+    values.origins = {
+      electronCount: origin.electronCount, areaCm2: origin.areaCm2, concentrationMolPerCm3: origin.concentrationMM, temperatureK: origin.temperatureC,
+      alpha: origin.alpha, ruOhm: origin.resistanceOhm, inputReference: origin.fileReference,
+    };
+  }
+  if (cell.fileReference !== 'Fc' && cell.internalStandardNearV !== null) {
+    values.internalStandard = { kind: 'measured', nearV: cell.internalStandardNearV, ...(cell.internalStandardFile ? { fileName: cell.internalStandardFile } : {}) };
+  } else if (cell.ferroceneHalfWaveV !== null && cell.fileReference !== 'Fc') {
     values.internalStandard = { kind: 'value', eHalfV: cell.ferroceneHalfWaveV, reference: cell.fileReference, origin: 'entered by the user' };
   }
   return values;
+}
+
+/** A series' resolved cell (defaults ← headers ← entered) in the core's units, with origins. */
+export function seriesCellValues(state: RunSources, group: string): CellValues {
+  const r = resolveSeriesCell(state, group);
+  return cellValuesOf(r.cell, r.origin);
 }
 
 export function methodOptionsOf(settings: AnalysisSettings): MethodOptions {
@@ -59,7 +78,7 @@ export function runFileOf(state: RunSources, id: string): RunFile | null {
 
 /** Everything a series needs from the store: its cell, the method, the report. */
 export function seriesOptionsOf(state: RunSources, group: string): { cell: CellValues; method: MethodOptions; report: ReportOptions } {
-  return { cell: cellValuesOf(resolveSeriesCell(state, group).cell), method: methodOptionsOf(state.settings), report: reportOptionsOf(state) };
+  return { cell: seriesCellValues(state, group), method: methodOptionsOf(state.settings), report: reportOptionsOf(state) };
 }
 
 /**
@@ -72,7 +91,7 @@ export function runInputOf(state: RunSources, ids: string[] = state.fileOrder): 
   const groups = [...new Set(files.map((f) => f.series ?? DEFAULT_SERIES_KEY))];
   return {
     files,
-    cells: Object.fromEntries(groups.map((g) => [g, cellValuesOf(resolveSeriesCell(state, g).cell)])),
+    cells: Object.fromEntries(groups.map((g) => [g, seriesCellValues(state, g)])),
     method: methodOptionsOf(state.settings),
     report: reportOptionsOf(state),
     software: { ...SOFTWARE },

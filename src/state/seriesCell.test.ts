@@ -49,7 +49,8 @@ describe('inheritance of a new series', () => {
     const gold = resolveCell(store.getState(), 'gold');
     // 2.0 mM = 2e-6 mol/cm³ read by the importer, back in mM; 303.15 K → 30 °C (SI Brochure 2019).
     expect(gold.cell).toMatchObject({ areaCm2: 0.0314, concentrationMM: 2, temperatureC: 30, fileReference: 'AgCl-sat', electronCount: 1 });
-    expect(gold.origin).toMatchObject({ areaCm2: 'files', concentrationMM: 'files', temperatureC: 'files', fileReference: 'files', electronCount: 'default' });
+    expect(gold.origin).toMatchObject({ areaCm2: 'header', concentrationMM: 'header', temperatureC: 'header', fileReference: 'header', electronCount: 'default' });
+    expect(gold.evidence.areaCm2).toMatch(/gold-0.05.csv, line 2: “Working electrode: gold disk, 2 mm \(0.0314 cm2\)”/);
     expect(gold.fileCount).toBe(3);
     const plain = resolveCell(store.getState(), 'plain');
     expect(plain.cell).toMatchObject({ areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, fileReference: 'AgCl-3M' });

@@ -1,16 +1,18 @@
 /**
  * The cell of a scan-rate series: electrode, solution and the reference electrode its files were
  * recorded against. Different series are measured on different electrodes and solutions, so each
- * group has its own values, resolved in three layers (the later wins):
- *   1. the app-wide defaults (`settings.chemistry` and `settings.reference`; an older session's
- *      global cell lands here, so a session without per-series values still loads);
- *   2. what the importer read from the preambles of the group's files (area, concentration,
- *      temperature, reference electrode), the first file that states a value giving it;
- *   3. what was entered for the series (`seriesCells[group]`, saved in sessions and undo history).
+ * group has its own values, resolved in three layers (the later wins), each value keeping its
+ * origin and the evidence for it:
+ *   1. 'default': the app-wide defaults (`settings.chemistry` and `settings.reference`; an older
+ *      session's global cell lands here, so a session without per-series values still loads);
+ *   2. 'header': what the files' headers state (io/cellFromHeaders.ts: area or disk diameter,
+ *      concentration, temperature, reference electrode), the first file that states a value giving it;
+ *   3. 'entered': what was entered for the series (`seriesCells[group]`, saved in sessions and undo).
  * The display scale (what potentials are shown and exported against) stays global.
  */
 import { kelvinToCelsius, molPerCm3ToMillimolar } from '../core/units';
 import { cellFromHeaders } from '../io/cellFromHeaders';
+import type { ValueOrigin } from '../core/analysis/runTypes';
 import type { Measurement } from '../io/types';
 import type { AnalysisSettings, ChemistrySettings, ReferenceSettings } from './settings';
 
@@ -22,13 +24,15 @@ import type { AnalysisSettings, ChemistrySettings, ReferenceSettings } from './s
 export interface SeriesCell extends ChemistrySettings, Omit<ReferenceSettings, 'displayReference'> {}
 
 export type CellField = keyof SeriesCell;
-/** Where a value came from: entered for the series, read from a file's preamble, or the default. */
-export type CellOrigin = 'series' | 'files' | 'default';
+/** Where a value came from: the default, a file's header, the folder, or entered for the series. */
+export type CellOrigin = ValueOrigin;
 
 export interface ResolvedCell {
   group: string | null;
   cell: SeriesCell;
   origin: Record<CellField, CellOrigin>;
+  /** The evidence for each value in words: file and line for a header value. */
+  evidence: Record<CellField, string>;
   /** Loaded files of the group. */
   fileCount: number;
   /** Disagreements between files and preamble text that could not be used, in words. */
@@ -36,7 +40,8 @@ export interface ResolvedCell {
 }
 
 export const CELL_FIELDS: readonly CellField[] = [
-  'electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'alpha', 'resistanceOhm', 'fileReference', 'pH', 'ferroceneHalfWaveV',
+  'electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'alpha', 'resistanceOhm', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent',
+  'fileReference', 'pH', 'ferroceneHalfWaveV', 'internalStandardNearV', 'internalStandardFile',
 ];
 
 /** Fields that change each trace's own analysis; the others (A, C, α, scales) only the series fits and display. */
@@ -47,20 +52,37 @@ export function sameTraceCell(a: SeriesCell, b: SeriesCell): boolean {
 }
 
 export function defaultCell(settings: AnalysisSettings): SeriesCell {
-  const { fileReference, pH, ferroceneHalfWaveV } = settings.reference;
-  return { ...settings.chemistry, fileReference, pH, ferroceneHalfWaveV };
+  const { displayReference: _shownOn, ...recording } = settings.reference;
+  return { ...settings.chemistry, ...recording };
 }
 
-/** Values the files' headers give (io/cellFromHeaders.ts, as the command line reads them), in the form's units. */
-export function cellFromPreambles(measurements: readonly Measurement[]): { values: Partial<SeriesCell>; notes: string[] } {
+/** Values the files' headers give (io/cellFromHeaders.ts, as the command line reads them), in the form's units, with evidence. */
+export function cellFromPreambles(measurements: readonly Measurement[]): { values: Partial<SeriesCell>; evidence: Partial<Record<CellField, string>>; notes: string[] } {
   const found = cellFromHeaders(measurements);
   const h = found.values;
   const values: Partial<SeriesCell> = {};
-  if (h.areaCm2 !== undefined) values.areaCm2 = h.areaCm2;
-  if (h.concentrationMolPerCm3 !== undefined) values.concentrationMM = molPerCm3ToMillimolar(h.concentrationMolPerCm3);
-  if (h.temperatureK !== undefined) values.temperatureC = kelvinToCelsius(h.temperatureK);
-  if (h.inputReference !== undefined) values.fileReference = h.inputReference;
-  return { values, notes: found.notes };
+  const evidence: Partial<Record<CellField, string>> = {};
+  const say = (field: CellField, from: keyof typeof found.evidence) => {
+    const e = found.evidence[from];
+    if (e) evidence[field] = `${e.fileName}${e.line ? `, line ${e.line}` : ''}: “${e.text}”`;
+  };
+  if (h.areaCm2 !== undefined) {
+    values.areaCm2 = h.areaCm2;
+    say('areaCm2', 'areaCm2');
+  }
+  if (h.concentrationMolPerCm3 !== undefined) {
+    values.concentrationMM = molPerCm3ToMillimolar(h.concentrationMolPerCm3);
+    say('concentrationMM', 'concentrationMolPerCm3');
+  }
+  if (h.temperatureK !== undefined) {
+    values.temperatureC = kelvinToCelsius(h.temperatureK);
+    say('temperatureC', 'temperatureK');
+  }
+  if (h.inputReference !== undefined) {
+    values.fileReference = h.inputReference;
+    say('fileReference', 'inputReference');
+  }
+  return { values, evidence, notes: found.notes };
 }
 
 export interface CellSources {
@@ -78,8 +100,10 @@ export function resolveCell(state: CellSources, group: string | null): ResolvedC
   const fromFiles = cellFromPreambles(measurements);
   const own = group === null ? {} : (state.seriesCells[group] ?? {});
   const cell = { ...defaultCell(state.settings), ...fromFiles.values, ...own };
-  const origin = Object.fromEntries(CELL_FIELDS.map((k) => [k, k in own ? 'series' : k in fromFiles.values ? 'files' : 'default'])) as Record<CellField, CellOrigin>;
-  return { group, cell, origin, fileCount: measurements.length, notes: fromFiles.notes };
+  const origin = Object.fromEntries(CELL_FIELDS.map((k) => [k, k in own ? 'entered' : k in fromFiles.values ? 'header' : 'default'])) as Record<CellField, CellOrigin>;
+  const evidence = Object.fromEntries(CELL_FIELDS.map((k) => [k, origin[k] === 'entered' ? 'entered for this series'
+    : origin[k] === 'header' ? (fromFiles.evidence[k] ?? 'stated in a file header') : 'the default (no file states it, nobody entered it)'])) as Record<CellField, string>;
+  return { group, cell, origin, evidence, fileCount: measurements.length, notes: fromFiles.notes };
 }
 
 /** The cell of a file's series. */

@@ -25,6 +25,9 @@ export interface ChemistrySettings {
   alpha: number | null;
   /** Uncompensated resistance Ru (Ω) for iR correction; 0 = none. */
   resistanceOhm: number;
+  /** Relative standard uncertainty of the area and of the concentration (%), for D's combined interval. */
+  areaUncertaintyPercent: number;
+  concentrationUncertaintyPercent: number;
 }
 
 export interface ReferenceSettings {
@@ -36,6 +39,12 @@ export interface ReferenceSettings {
   pH: number;
   /** Measured E½ of ferrocene on the file's scale (V), for the internal-standard scale. */
   ferroceneHalfWaveV: number | null;
+  /**
+   * Ferrocene measured in a file instead: the couple nearest `internalStandardNearV` (V, file
+   * scale) in that file (null: the series' own files). Beats `ferroceneHalfWaveV` when set.
+   */
+  internalStandardNearV: number | null;
+  internalStandardFile: string | null;
 }
 
 export interface AnalysisSettings {
@@ -58,8 +67,8 @@ export const defaultSettings: AnalysisSettings = {
   forwardBaseline: 'linear',
   returnBaseline: 'nicholson',
   minSignalToNoise: 8,
-  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: null, resistanceOhm: 0 },
-  reference: { fileReference: 'AgCl-3M', displayReference: 'AgCl-3M', pH: 7, ferroceneHalfWaveV: null },
+  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: null, resistanceOhm: 0, areaUncertaintyPercent: 2, concentrationUncertaintyPercent: 2 },
+  reference: { fileReference: 'AgCl-3M', displayReference: 'AgCl-3M', pH: 7, ferroceneHalfWaveV: null, internalStandardNearV: null, internalStandardFile: null },
 };
 
 const REFERENCE_IDS: readonly ReferenceId[] = REFERENCE_ELECTRODES.map((r) => r.id);
@@ -86,12 +95,16 @@ export function mergeSettings(base: AnalysisSettings, stored: unknown): Analysis
       temperatureC: num(chem.temperatureC, base.chemistry.temperatureC),
       alpha: chem.alpha === null ? null : num(chem.alpha, base.chemistry.alpha),
       resistanceOhm: num(chem.resistanceOhm, base.chemistry.resistanceOhm),
+      areaUncertaintyPercent: num(chem.areaUncertaintyPercent, base.chemistry.areaUncertaintyPercent),
+      concentrationUncertaintyPercent: num(chem.concentrationUncertaintyPercent, base.chemistry.concentrationUncertaintyPercent),
     },
     reference: {
       fileReference: pick(ref.fileReference, REFERENCE_IDS, base.reference.fileReference),
       displayReference: pick(ref.displayReference, REFERENCE_IDS, base.reference.displayReference),
       pH: num(ref.pH, base.reference.pH),
       ferroceneHalfWaveV: ref.ferroceneHalfWaveV === null ? null : num(ref.ferroceneHalfWaveV, base.reference.ferroceneHalfWaveV),
+      internalStandardNearV: ref.internalStandardNearV === null ? null : num(ref.internalStandardNearV, base.reference.internalStandardNearV),
+      internalStandardFile: typeof ref.internalStandardFile === 'string' ? ref.internalStandardFile : base.reference.internalStandardFile,
     },
   };
 }
@@ -105,12 +118,13 @@ export function mergeSeriesCells(stored: unknown): Record<string, Partial<Series
   for (const [group, value] of Object.entries(asRecord(stored))) {
     const v = asRecord(value);
     const cell: Partial<SeriesCell> = {};
-    for (const key of ['electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'resistanceOhm', 'pH'] as const) {
+    for (const key of ['electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'resistanceOhm', 'pH', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent'] as const) {
       if (typeof v[key] === 'number' && Number.isFinite(v[key])) cell[key] = v[key];
     }
-    for (const key of ['alpha', 'ferroceneHalfWaveV'] as const) {
+    for (const key of ['alpha', 'ferroceneHalfWaveV', 'internalStandardNearV'] as const) {
       if (v[key] === null || (typeof v[key] === 'number' && Number.isFinite(v[key]))) cell[key] = v[key];
     }
+    if (v.internalStandardFile === null || typeof v.internalStandardFile === 'string') cell.internalStandardFile = v.internalStandardFile;
     if (REFERENCE_IDS.includes(v.fileReference as ReferenceId)) cell.fileReference = v.fileReference as ReferenceId;
     out[group] = cell;
   }

@@ -5,12 +5,14 @@
  * Sources are named in the methods called (series/doubleLayerCapacitance.ts, analyzeSeries.ts).
  */
 import { AnalysisError } from '../errors';
-import { doubleLayerCapacitance } from '../series';
+import { combinedDiffusionInterval, doubleLayerCapacitance } from '../series';
 import type { DoubleLayerCapacitanceResult } from '../series';
 import type { ReferenceId } from '../reference';
 import { analyzeResolvedSeries } from './analyzeSeries';
+import { defaultsUsed } from './defaultsUsed';
 import { describeSeriesReferences } from './runReference';
 import type { ResolvedCell, ResolvedMethod, RunFileResult, RunSeriesResult, RunWarning } from './runTypes';
+import type { SeriesAnalysis } from './seriesTypes';
 
 function capacitanceOf(files: RunFileResult[], cell: ResolvedCell, warnings: RunWarning[], key: string): DoubleLayerCapacitanceResult | null {
   const gaps = files.filter((f) => f.chargingGapA !== null);
@@ -22,6 +24,18 @@ function capacitanceOf(files: RunFileResult[], cell: ResolvedCell, warnings: Run
   return doubleLayerCapacitance({
     scanRatesVPerS: gaps.map((f) => f.scanRateVPerS), gapCurrentsA: gaps.map((f) => Math.max(0, f.chargingGapA as number)), areaCm2: cell.areaCm2,
   });
+}
+
+/** D's interval with the stated uncertainty of A and C (GUM; combinedDiffusionInterval.ts), on each couple that has D. */
+function withCombinedIntervals(analysis: SeriesAnalysis, cell: ResolvedCell): void {
+  for (const c of analysis.couples) {
+    const d = c.diffusion;
+    if (!d) continue;
+    d.combinedIntervalCm2PerS = combinedDiffusionInterval({
+      diffusionCm2PerS: d.diffusionCm2PerS, slopeRelativeStdError: d.slopeRelativeStdError, slopeDegreesOfFreedom: d.slopeDegreesOfFreedom,
+      areaRelativeUncertainty: cell.areaRelativeUncertainty, concentrationRelativeUncertainty: cell.concentrationRelativeUncertainty,
+    });
+  }
 }
 
 /** `files`: the results of the series' files (internal-standard files are left out here). */
@@ -36,9 +50,12 @@ export function analyzeRunSeries(key: string, cell: ResolvedCell, method: Resolv
       cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV,
     },
   );
+  withCombinedIntervals(analysis, cell);
   const warnings: RunWarning[] = analysis.warnings.map((w) => ({ code: 'SERIES', series: key, message: w.message }));
   const refs = describeSeriesReferences(members, output, cell.temperatureK);
   warnings.push(...refs.warnings.map((w) => ({ ...w, series: key })));
   const capacitance = capacitanceOf(members, cell, warnings, key);
-  return { key, fileNames: members.map((f) => f.fileName), cell, analysis, capacitance, referenceBasis: refs.basis, warnings };
+  const defaults = defaultsUsed(key, cell, analysis);
+  warnings.push(...defaults.warnings);
+  return { key, fileNames: members.map((f) => f.fileName), cell, analysis, capacitance, referenceBasis: refs.basis, defaultsUsed: defaults.used, warnings };
 }

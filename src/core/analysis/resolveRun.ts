@@ -40,6 +40,13 @@ const optional = (name: string, v: number | null | undefined, min: number, max =
   return v;
 };
 
+/** A relative standard uncertainty, 0…0.5; 2 % when not given (common practice, no source). */
+const relative = (name: string, v: number | undefined): number => {
+  const r = v ?? 0.02;
+  assertFiniteInRange(name, r, 0, 0.5);
+  return r;
+};
+
 export function resolveCell(c: CellValues = {}): ResolvedCell {
   const electronCount = c.electronCount ?? 1;
   if (!Number.isInteger(electronCount) || electronCount < 1 || electronCount > 12) {
@@ -71,6 +78,9 @@ export function resolveCell(c: CellValues = {}): ResolvedCell {
     pH: optional('pH', c.pH, -2, 16),
     internalStandard: std,
     capacitancePotentialV: optional('capacitance potential (V)', c.capacitancePotentialV, -10, 10),
+    areaRelativeUncertainty: relative('relative uncertainty of the area', c.areaRelativeUncertainty),
+    concentrationRelativeUncertainty: relative('relative uncertainty of the concentration', c.concentrationRelativeUncertainty),
+    origins: { ...c.origins },
   };
 }
 

@@ -54,6 +54,12 @@ export type InternalStandardSource =
   /** The couple nearest `nearV` (recording scale) in the named file, or in the series' files when absent. */
   | { kind: 'measured'; nearV: number; fileName?: string };
 
+/** Where a cell value came from: the tool's default, a file's header, the folder, or the user. */
+export type ValueOrigin = 'default' | 'header' | 'folder' | 'entered';
+
+/** Cell values whose origin the results report (a default that decides a number is named beside it). */
+export type TrackedCellField = 'electronCount' | 'areaCm2' | 'concentrationMolPerCm3' | 'temperatureK' | 'alpha' | 'ruOhm' | 'inputReference';
+
 /** The cell of one scan-rate series: electrode, solution, reference and resistance. */
 export interface CellValues {
   /** Electrons per molecule n. @default 1 */
@@ -81,6 +87,11 @@ export interface CellValues {
   internalStandard?: InternalStandardSource | null;
   /** Potential (output scale, V) of a featureless region, for the double-layer capacitance. @default null */
   capacitancePotentialV?: number | null;
+  /** Relative standard uncertainty of the area and of the concentration, for D's combined interval. @default 0.02 each */
+  areaRelativeUncertainty?: number;
+  concentrationRelativeUncertainty?: number;
+  /** Where each value came from; a value without an origin counts as entered. */
+  origins?: Partial<Record<TrackedCellField, ValueOrigin>>;
 }
 
 /** How every trace is analysed. */
@@ -151,6 +162,9 @@ export interface ResolvedCell {
   pH: number | null;
   internalStandard: InternalStandardSource | null;
   capacitancePotentialV: number | null;
+  areaRelativeUncertainty: number;
+  concentrationRelativeUncertainty: number;
+  origins: Partial<Record<TrackedCellField, ValueOrigin>>;
 }
 
 export type ResolvedMethod = Required<MethodOptions>;
@@ -203,10 +217,21 @@ export interface RunSeriesResult {
   capacitance: DoubleLayerCapacitanceResult | null;
   /** Plain-words basis of every scale the series used. */
   referenceBasis: string[];
+  /** Default values that decided a reported number, with the numbers they decided. */
+  defaultsUsed: DefaultUsed[];
   warnings: RunWarning[];
 }
 
-export type RunWarningCode = 'REFERENCE' | 'TEMPERATURE' | 'OHMIC' | 'TRACE' | 'SERIES' | 'CAPACITANCE' | 'INTERNAL_STANDARD';
+/** A default the user never gave that a reported number depends on. */
+export interface DefaultUsed {
+  field: TrackedCellField;
+  /** The value used, in plain words with its unit. */
+  value: string;
+  /** What it decides, e.g. ['D', 'Γ']. */
+  affects: string[];
+}
+
+export type RunWarningCode = 'REFERENCE' | 'TEMPERATURE' | 'OHMIC' | 'TRACE' | 'SERIES' | 'CAPACITANCE' | 'INTERNAL_STANDARD' | 'DEFAULT';
 
 export interface RunWarning {
   code: RunWarningCode;

@@ -134,7 +134,10 @@ export function seriesDiffusion(
     : kineticClass === 'inconclusive' ? 'kinetic class unclear: reversible form used'
       : fit.pointCount === 1 ? 'one scan rate only: D from a single peak through the origin, with no check of linearity' : null;
   return {
-    diffusion: { diffusionCm2PerS: d, intervalCm2PerS, form: rs.form, alphaUsed: a?.alpha ?? null, alphaSource: a?.source ?? null, note },
+    diffusion: {
+      diffusionCm2PerS: d, intervalCm2PerS, form: rs.form, alphaUsed: a?.alpha ?? null, alphaSource: a?.source ?? null, note,
+      slopeRelativeStdError: used.slopeStdError === null ? null : used.slopeStdError / used.slope, slopeDegreesOfFreedom: used.degreesOfFreedom,
+    },
     reason: null,
   };
 }

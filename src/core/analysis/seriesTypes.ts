@@ -40,6 +40,14 @@ export interface SeriesDiffusion {
   diffusionCm2PerS: number;
   /** From the ends of the slope's 95 % interval, when it has one. */
   intervalCm2PerS: [number, number] | null;
+  /** Standard error of the slope D came from, relative to the slope; null without a degree of freedom. */
+  slopeRelativeStdError: number | null;
+  slopeDegreesOfFreedom: number;
+  /**
+   * 95 % interval that also carries the stated uncertainty of the area and the concentration
+   * (combinedDiffusionInterval.ts); set by the run, null when the slope has no standard error.
+   */
+  combinedIntervalCm2PerS?: [number, number] | null;
   form: RandlesSevcikForm;
   /** α used by the irreversible form, with its origin. */
   alphaUsed: number | null;

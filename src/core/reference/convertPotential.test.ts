@@ -19,8 +19,12 @@ describe('convertPotential', () => {
   it('uses a temperature-dependent RHE slope', () => {
     expect(convertPotential(0, 'SHE', 'RHE', { pH: 1, temperatureK: 323.15 }) * 1000).toBeCloseTo(64.12, 1);
   });
-  it('round-trips through every tabulated scale', () => {
-    for (const r of REFERENCE_ELECTRODES) {
+  it('round-trips through every tabulated scale (a wire or Ag/Ag⁺ only through its own standard)', () => {
+    for (const id of ['pseudo', 'AgAg+'] as const) {
+      const ctx = { internalStandard: { eHalfV: 0.2, scale: id, origin: 'test' } };
+      expect(convertPotential(convertPotential(0.123, 'SCE', id, ctx), id, 'SCE', ctx)).toBeCloseTo(0.123, 12);
+    }
+    for (const r of REFERENCE_ELECTRODES.filter((x) => x.eVsSheV !== null || x.id === 'RHE' || x.id === 'Fc')) {
       const ctx = { pH: 3, internalStandard: { eHalfV: 0.45, scale: 'SCE' as const, origin: 'test' } };
       expect(convertPotential(convertPotential(0.123, 'SCE', r.id, ctx), r.id, 'SCE', ctx)).toBeCloseTo(0.123, 12);
     }
@@ -63,7 +67,8 @@ describe('findReferenceElectrode', () => {
     expect(findReferenceElectrode('Ag/AgCl (1 M KCl)')?.id).toBe('AgCl-1M');
     expect(findReferenceElectrode('Hg/HgO (1 M NaOH)')?.id).toBe('HgO-1M');
     expect(findReferenceElectrode('Ag/AgCl (0.1 M KCl)')?.id).toBe('AgCl-0.1M');
-    expect(findReferenceElectrode('platinum wire')).toBeNull();
+    expect(findReferenceElectrode('platinum wire')?.id).toBe('pseudo');
+    expect(findReferenceElectrode('home-made electrode')).toBeNull();
   });
   // check-values.md §10: never use 0.926 V for Hg/HgO; 0.098 V is the value most papers use.
   it('never carries 0.926 V for Hg/HgO', () => {

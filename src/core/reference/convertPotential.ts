@@ -64,6 +64,7 @@ export function referenceVsShe(id: ReferenceId, context: ConversionContext = {})
   }
   if (id === 'RHE') return rheVsShe(context);
   if (id === 'Fc') return ferroceneVsShe(context);
+  if (id === 'pseudo' || id === 'AgAg+') return scaleThroughStandard(id, context);
   const entry = REFERENCE_ELECTRODES.find((r) => r.id === id);
   if (!entry || entry.eVsSheV === null) throw new AnalysisError('UNKNOWN_REFERENCE', `no tabulated value for ${id}`);
   return { eVsSheV: entry.eVsSheV, basis: `${entry.label}: ${entry.eVsSheV} V vs SHE (${entry.source})`, typical: false };
@@ -92,6 +93,23 @@ function ferroceneVsShe(context: ConversionContext): ReferencePosition {
     basis: `Fc⁺/Fc: typical +${TYPICAL_FERROCENE_VS_SCE_V} V vs SCE for MeCN/0.1 M Bu₄NPF₆ (Connelly & Geiger 1996), not measured — published values span +0.38…+0.45 V`,
     typical: true,
   };
+}
+
+/**
+ * A scale with no fixed potential (a pseudo-reference wire, Ag/Ag⁺ in an organic solvent) is
+ * placed only through an internal standard measured on it: E(scale vs SHE) = E(Fc vs SHE) − E½(Fc
+ * vs scale). Fc vs SHE itself is the typical value, so the result is marked typical; the
+ * conversion to the Fc⁺/Fc scale does not depend on it (referenceOffset.ts takes it directly).
+ */
+function scaleThroughStandard(id: 'pseudo' | 'AgAg+', context: ConversionContext): ReferencePosition {
+  const std = context.internalStandard;
+  const label = id === 'pseudo' ? 'a pseudo-reference' : 'Ag/Ag⁺';
+  if (!std || std.scale !== id) {
+    throw new AnalysisError('UNKNOWN_REFERENCE', `${label} has no fixed potential; it can be converted only through an internal standard (Fc⁺/Fc) measured in the same or a companion file`);
+  }
+  const { internalStandard: _measured, ...withoutStandard } = context;
+  const fc = ferroceneVsShe(withoutStandard);
+  return { eVsSheV: fc.eVsSheV - std.eHalfV, basis: `${label}: Fc⁺/Fc measured at ${std.eHalfV.toFixed(4)} V on it (${std.origin}); placed vs SHE through the typical Fc⁺/Fc value`, typical: true };
 }
 
 /** E on the `to` scale (V) from E on the `from` scale (V). */

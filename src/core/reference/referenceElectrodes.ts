@@ -15,7 +15,7 @@ export type ReferenceId =
   | 'SHE' | 'SCE' | 'NCE' | 'calomel-0.1M' | 'SSCE'
   | 'AgCl-sat' | 'AgCl-3.5M' | 'AgCl-3M' | 'AgCl-1M' | 'AgCl-0.1M'
   | 'MSE-sat' | 'MSE-1M-H2SO4' | 'HgO-1M' | 'HgO-0.1M'
-  | 'RHE' | 'Fc';
+  | 'RHE' | 'Fc' | 'pseudo' | 'AgAg+';
 
 export type ReferenceStatus = 'checked' | 'from-memory' | 'sources-disagree' | 'definition' | 'depends-on-context';
 
@@ -51,6 +51,8 @@ export const REFERENCE_ELECTRODES: readonly ReferenceElectrode[] = [
   { id: 'HgO-1M', label: 'Hg/HgO, 1 M NaOH', eVsSheV: 0.098, source: 'web compilation of reference-electrode values (the value most papers use)', status: 'sources-disagree', note: 'published 0.098, 0.108 (activity calculation) and 0.140 V (with junction); ±40 mV — set your own value if you know it; 0.926 V is a cell emf, never an offset', aliases: ['hg/hgo', 'hgo', 'mmo', 'hg/hgo 1m', 'hgo-1m'] },
   { id: 'HgO-0.1M', label: 'Hg/HgO, 0.1 M NaOH', eVsSheV: 0.165, source: CORROSION_2010, status: 'checked', note: 'a compilation computes 0.164 V', aliases: ['hg/hgo 0.1m', 'hgo-0.1m'] },
   { id: 'RHE', label: 'RHE (reversible hydrogen electrode)', eVsSheV: null, source: 'Nernst equation: E(RHE vs SHE) = −(ln 10)·RT/F·pH', status: 'depends-on-context', note: 'needs the pH of the solution', aliases: ['rhe', 'reversible hydrogen'] },
+  { id: 'pseudo', label: 'pseudo-reference (bare Ag or Pt wire)', eVsSheV: null, source: 'no fixed potential: a bare wire takes a potential set by the solution (Bard & Faulkner 2nd ed. (2001) §2.1, from memory)', status: 'depends-on-context', note: 'drifts with the solution; convertible only through an internal standard (Fc⁺/Fc) measured in the same solution', aliases: ['pseudo', 'pseudo-reference', 'pseudo reference', 'pseudoreference', 'quasi-reference', 'quasi reference', 'qre', 'ag wire', 'silver wire', 'pt wire', 'platinum wire', 'ag qre', 'pt qre'] },
+  { id: 'AgAg+', label: 'Ag/Ag⁺ (non-aqueous, AgNO₃ in an organic solvent)', eVsSheV: null, source: 'depends on solvent, electrolyte, AgNO₃ concentration and junction (Pavlishchuk & Addison, Inorg. Chim. Acta 298 (2000) 97, from memory)', status: 'depends-on-context', note: 'no single value vs SHE; convertible only through an internal standard (Fc⁺/Fc) measured in the same solution', aliases: ['ag/ag+', 'ag/agno3', 'ag/ag+ 0.01m', 'ag/agno3 0.01m', 'ag/ag+ 0.1m', 'ag/agno3 0.1m', 'ag/ag+ 10mm', 'agag+'] },
   { id: 'Fc', label: 'Fc⁺/Fc (internal standard)', eVsSheV: null, source: 'IUPAC recommendation of Fc⁺/Fc as internal reference (Gritzner & Kůta, Pure Appl. Chem. 56, 461 (1984), from memory)', status: 'depends-on-context', note: 'needs E½ of ferrocene measured in the same solution, or an offset', aliases: ['fc', 'fc+/fc', 'ferrocene', 'fc/fc+', 'ferrocenium'] },
 ];
 
@@ -65,7 +67,17 @@ export function findReferenceElectrode(name: string): ReferenceElectrode | null 
       const n = normalizeReferenceName(a);
       return (strip ? stripElectrolyte(n) : n) === k;
     });
-  return REFERENCE_ELECTRODES.find((r) => matches(r, key, false)) ?? REFERENCE_ELECTRODES.find((r) => matches(r, loose, true)) ?? null;
+  return REFERENCE_ELECTRODES.find((r) => matches(r, key, false)) ?? REFERENCE_ELECTRODES.find((r) => matches(r, loose, true)) ?? byKeyword(key);
+}
+
+/**
+ * Third pass for free text such as "Ag wire pseudo-reference" or "Ag/Ag+ (0.01 M AgNO3 in MeCN)":
+ * the words that name a scale without a fixed potential. Anything else stays unknown.
+ */
+function byKeyword(key: string): ReferenceElectrode | null {
+  const id: ReferenceId | null = /\bpseudo|\bquasi|\bqre\b|\b(ag|silver|pt|platinum) wire\b/.test(key) ? 'pseudo'
+    : /ag\s*\/\s*ag\s*\+|agno3/.test(key) ? 'AgAg+' : null;
+  return id ? (REFERENCE_ELECTRODES.find((r) => r.id === id) ?? null) : null;
 }
 
 /**

@@ -20,3 +20,27 @@ describe('referenceOffset', () => {
     expect(() => referenceOffset('SHE', 'RHE')).toThrow(/pH/);
   });
 });
+
+// IUPAC recommendation of ferrocene as an internal reference (Gritzner & Kůta, Pure Appl. Chem. 56
+// (1984) 461, from memory): a potential is reported against the E½ of Fc⁺/Fc measured in the same
+// solution, which is the only way to place a pseudo-reference wire.
+describe('scales without a fixed potential', () => {
+  it('reads a bare wire and Ag/Ag⁺ written in words', async () => {
+    const { findReferenceElectrode } = await import('./referenceElectrodes');
+    expect(findReferenceElectrode('Ag wire pseudo-reference')?.id).toBe('pseudo');
+    expect(findReferenceElectrode('Pt quasi-reference electrode')?.id).toBe('pseudo');
+    expect(findReferenceElectrode('Ag/Ag+ (0.01 M AgNO3 in MeCN)')?.id).toBe('AgAg+');
+  });
+  it('converts a pseudo-reference to Fc⁺/Fc only through a measured standard, exactly', () => {
+    const std = { eHalfV: 0.123, scale: 'pseudo' as const, origin: 'fc.csv' };
+    expect(referenceOffset('pseudo', 'Fc', { internalStandard: std })).toMatchObject({ offsetV: -0.123, typical: false });
+    expect(() => referenceOffset('pseudo', 'Fc')).toThrow(/internal standard/);
+    expect(() => referenceOffset('AgAg+', 'SCE')).toThrow(/internal standard/);
+  });
+  it('to a tabulated scale it goes through the typical Fc⁺/Fc value and says so', () => {
+    const r = referenceOffset('pseudo', 'SCE', { internalStandard: { eHalfV: 0.1, scale: 'pseudo', origin: 'fc.csv' } });
+    // Connelly & Geiger, Chem. Rev. 96 (1996) 877 (from memory): Fc⁺/Fc ≈ +0.40 V vs SCE in MeCN.
+    expect(r.offsetV).toBeCloseTo(0.4 - 0.1, 12);
+    expect(r.typical).toBe(true);
+  });
+});

@@ -22,7 +22,16 @@ export interface ReferenceOffset {
 
 export function referenceOffset(from: ReferenceId, to: ReferenceId, context: ConversionContext = {}): ReferenceOffset {
   if (from === to) return { offsetV: 0, from, to, basis: [], typical: false };
+  // Between the internal standard's own scale and Fc⁺/Fc the measured E½ is the whole offset
+  // (definition of the Fc⁺/Fc scale); no typical value enters.
+  const std = context.internalStandard;
+  if (std && to === 'Fc' && from === std.scale) return { offsetV: -std.eHalfV, from, to, basis: [direct(std)], typical: false };
+  if (std && from === 'Fc' && to === std.scale) return { offsetV: std.eHalfV, from, to, basis: [direct(std)], typical: false };
   const a = referenceVsShe(from, context);
   const b = referenceVsShe(to, context);
   return { offsetV: a.eVsSheV - b.eVsSheV, from, to, basis: [a.basis, b.basis], typical: a.typical || b.typical };
+}
+
+function direct(std: NonNullable<ConversionContext['internalStandard']>): string {
+  return `Fc⁺/Fc: E½ = ${std.eHalfV.toFixed(4)} V vs ${std.scale}, measured (${std.origin}); 0 V on the Fc⁺/Fc scale by definition`;
 }

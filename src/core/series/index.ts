@@ -8,3 +8,4 @@ export * from './doubleLayerCapacitance';
 export * from './chargingCurrentGap';
 export * from './classifySeriesCouple';
 export type * from './seriesPoint';
+export * from './combinedDiffusionInterval';

@@ -15,6 +15,8 @@ const refOptions = referenceChoices.map((r) => ({ value: r.id, label: r.label })
 const FIELD_WORDS: Record<CellField, string> = {
   electronCount: 'n', areaCm2: 'area', concentrationMM: 'concentration', temperatureC: 'temperature', alpha: 'α',
   resistanceOhm: 'Ru', fileReference: 'reference electrode', pH: 'pH', ferroceneHalfWaveV: 'ferrocene E½',
+  areaUncertaintyPercent: 'area uncertainty', concentrationUncertaintyPercent: 'concentration uncertainty',
+  internalStandardNearV: 'ferrocene search potential', internalStandardFile: 'ferrocene file',
 };
 
 function editCell(group: string | null, patch: Partial<SeriesCell>): void {
@@ -79,8 +81,8 @@ export function CellPanel() {
 function CellOrigins({ resolved, group }: { resolved: ResolvedCell; group: string }) {
   const fields = Object.keys(FIELD_WORDS) as CellField[];
   const named = (o: string) => fields.filter((k) => resolved.origin[k] === o).map((k) => FIELD_WORDS[k]).join(', ');
-  const fromFiles = named('files');
-  const entered = named('series');
+  const fromFiles = named('header');
+  const entered = named('entered');
   return (
     <div className="cell-origins" data-testid="cell-origins">
       {fromFiles ? <p className="hint">From the files’ headers: {fromFiles}.</p> : null}
