@@ -125,7 +125,7 @@ describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysi
     expect(code).toBe(0);
     return JSON.parse(out) as Contract;
   }
-  // check-values.md §10 (Bard & Faulkner inside cover): Ag/AgCl sat. = +0.197 V vs SHE;
+  // Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), inside back cover: Ag/AgCl sat. = +0.197 V vs SHE;
   // RHE at pH 7 sits 7 × 59.16 mV below SHE (Nernst).
   it('--from-ref/--ref and --ph convert E½ through SHE', async () => {
     const she = await run(['--from-ref', 'Ag/AgCl', '--ref', 'SHE']);
@@ -133,7 +133,7 @@ describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysi
     expect((she.series[0]?.Ehalf ?? 0)).toBeCloseTo(0.1 + 0.197, 2);
     expect((rhe.series[0]?.Ehalf ?? 0) - (she.series[0]?.Ehalf ?? 0)).toBeCloseTo(7 * 0.0591594, 5);
   });
-  // check-values.md §10 worked conversion (Bard & Faulkner inside cover; Sawyer et al. 1995):
+  // Bard & Faulkner, 2nd ed. (2001), inside back cover; Sawyer et al., Electrochemistry for Chemists, 2nd ed. (1995):
   // +0.300 V vs Ag/AgCl (sat. KCl) is +0.256 V vs SCE, i.e. SCE sits 0.041–0.044 V above it.
   it('the analyze command itself accepts --from-ref, --ref and --ru', async () => {
     const plain = await analyzeJson(folder);
@@ -143,7 +143,7 @@ describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysi
     expect(bad.code).toBe(2);
     expect(bad.err).toMatch(/--ru/);
   });
-  // check-values.md §14: the polarographic convention flips signed currents (iRaw), never ipa/ipc.
+  // IUPAC Gold Book; ASDL plotting conventions: the polarographic convention flips signed currents (iRaw), never ipa/ipc.
   it('--out-convention polarographic flips signed currents only', async () => {
     const iupac = await run([]);
     const polar = await run(['--out-convention', 'polarographic']);

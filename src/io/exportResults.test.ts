@@ -46,7 +46,7 @@ describe('resultsSheetCsv', () => {
     expect(d).toBeGreaterThan(0);
     expect(Number(s[0]?.D_ci95_low)).toBeLessThanOrEqual(d);
   });
-  // check-values.md §14: the polarographic convention flips signed currents only.
+  // IUPAC Gold Book; ASDL "Plotting Conventions for Voltammetry": the polarographic convention flips signed currents only.
   it('flips signed currents, not magnitudes, in the polarographic convention', () => {
     const polar = table(resultsSheetCsv(makeRun('polarographic')), 'peaks');
     const iupac = table(csv, 'peaks');

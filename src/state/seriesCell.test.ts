@@ -2,7 +2,7 @@
  * Per-series cells through the store, without React, with the in-thread analysis client.
  * Input: our simulator's Nernstian couple (1 mM, 0.0707 cm², D = 1e-5 cm²/s, n = 1, 25 °C).
  * Numbers are checked with the Randles–Ševčík relation i_p = 0.4463·nFAC·(nFvD/RT)^½ (Bard &
- * Faulkner, Electrochemical Methods, 2nd ed. (2001), §6.2; check-values.md §2): with the slope
+ * Faulkner, Electrochemical Methods, 2nd ed. (2001), §6.2): with the slope
  * fixed by the data, D ∝ 1/(A·C)², so the cell a series is given shows up in D as that square.
  */
 import { describe, expect, it, vi } from 'vitest';
@@ -154,7 +154,7 @@ describe('editing one series', () => {
     await loadSeries(store, 'sat', PREAMBLE);
     await loadSeries(store, 'threeMolar');
     const s = store.getState();
-    // Ag/AgCl sat. KCl 0.197 V, 3 M KCl 0.210 V vs SHE (check-values.md §10 via the reference table).
+    // vs SHE: Ag/AgCl sat. KCl 0.197 V (Bard & Faulkner 2nd ed., inside back cover), 3 M KCl 0.210 V (compiled, primary source not seen).
     expect(displayScale(s.settings, resolveCell(s, 'sat').cell).offsetV).toBeCloseTo(0.197 - 0.21, 9);
     expect(displayScale(s.settings, resolveCell(s, 'threeMolar').cell).offsetV).toBe(0);
   });

@@ -47,7 +47,7 @@ describe('files and analysis', () => {
     // 2nd ed. (2001), §6.2.1, eq. 6.2.4, from memory); tolerance 3 mV for grid and peak fitting.
     expect(k.eHalfV).toBeCloseTo(0, 2);
     expect(Math.abs(k.eHalfV as number)).toBeLessThan(0.003);
-    // Randles–Ševčík, 25 °C form ip = 2.69e5 n^3/2 A C D^1/2 v^1/2 (check-values.md §2; Bard &
+    // Randles–Ševčík, 25 °C form ip = 2.69e5 n^3/2 A C D^1/2 v^1/2 (Wang, Analytical Electrochemistry (2000) eq. 2-1; Bard &
     // Faulkner 2001 §6.2.2): 2.6865e5 · 0.0707 · 1e-6 · √1e-5 · √0.1 = 1.899e-5 A; ±3 %.
     expect(k.ipcA).toBeGreaterThan(1.899e-5 * 0.97);
     expect(k.ipcA).toBeLessThan(1.899e-5 * 1.03);

@@ -3,10 +3,10 @@
  * on a 2 mm gold disk (0.0314 cm²), the probe series on a 3 mm disk (0.0707 cm²) at 1 mM. With
  * each series' own cell, the workbench must recover the scenario's truth:
  * - Γ = 6e-11 mol/cm² from the charge under the film's wave, Q = nFAΓ (Laviron, J. Electroanal.
- *   Chem. 101 (1979) 19; Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), §14.3; see
- *   check-values.md §7), within 10 % (charging background and noise, common practice, no source);
+ *   Chem. 101 (1979) 19; Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), §14.3; from
+ *   memory), within 10 % (charging background and noise, common practice, no source);
  * - D = 6.8e-6 cm²/s of the probe from the Randles–Ševčík slope, i_p = 0.4463·nFAC(nFvD/RT)^½
- *   (Bard & Faulkner 2001, §6.2; check-values.md §2), within 10 % (ohmic drop of 120 Ω and noise).
+ *   (Bard & Faulkner 2001, §6.2), within 10 % (ohmic drop of 120 Ω and noise).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoFileCount, waitForAnalysis, waitForFiles } from './appHelpers';

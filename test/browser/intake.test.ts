@@ -39,7 +39,7 @@ describe('picking files', () => {
 
   // Simulated Nernstian couple, E°′ = 0 V, 1 mM, 0.0707 cm², D = 1e-5 cm²/s, 0.1 V/s, 25 °C.
   // E½ = E°′ for equal D (Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), §6.2.1, from
-  // memory); ip = 2.6865e5·n^3/2·A·C·D^½·v^½ = 18.99 µA (Randles–Ševčík, check-values.md §2);
+  // memory); ip = 2.6865e5·n^3/2·A·C·D^½·v^½ = 18.99 µA (Randles–Ševčík, same book §6.2);
   // ΔEp ≈ 2.22·RT/nF = 57 mV for a large switching offset (Nicholson 1965, from memory) ± 4 mV.
   it('analyses the picked file: E½, ipc and ΔEp match the published reversible values', async () => {
     const page = app.page;

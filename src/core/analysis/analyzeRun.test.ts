@@ -81,7 +81,7 @@ describe.each([['noise-free', QUIET, 1], ['noisy with charging', NOISY, 2]] as c
 });
 
 describe('analyzeRun conversions', () => {
-  // Bard & Faulkner inside cover (check-values.md §10): Ag/AgCl (sat. KCl) = +0.197 V vs SHE.
+  // Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), inside back cover: Ag/AgCl (sat. KCl) = +0.197 V vs SHE.
   it('reports potentials on the requested scale', () => {
     const sim = { k0CmPerS: Infinity, formalPotentialV: 0.1, startV: 0.4, switchV: -0.2 };
     const base = run(sim, QUIET, {}, [0.1, 0.2]).series[0]?.analysis.couples[0]?.eHalfV ?? 0;
@@ -123,7 +123,7 @@ describe('analyzeRun conversions', () => {
     expect(raw - fixed).toBeGreaterThan(0.025);
     expect(Math.abs(fixed - interfacial)).toBeLessThan(0.001);
   });
-  // check-values.md §14 (IUPAC Gold Book; ASDL plotting conventions): the same voltammogram read
+  // IUPAC Gold Book; ASDL "Plotting Conventions for Voltammetry": the same voltammogram read
   // in the polarographic convention gives identical Epa, Epc, |ipa|, |ipc| after conversion.
   it('gives identical peaks for a polarographic file converted to IUPAC', () => {
     const v = simulatedVoltammogram({ k0CmPerS: 0.02 });

@@ -21,7 +21,7 @@ const files = rates.map((v, i) => ({
 }));
 
 describe('adsorbed film at fast scan rates (k_s = 25 s⁻¹, 0.1–20 V/s)', () => {
-  // Bard & Faulkner 2nd ed. §14.3 (from memory), check-values §7: a surface wave has no diffusion
+  // Bard & Faulkner 2nd ed. §14.3 (from memory): a surface wave has no diffusion
   // tail, equal charges nFAΓ and FWHM ≥ 90.6/n mV; Laviron kinetics separate the peaks.
   it('every trace reads adsorbed; the wide ones say slow electron transfer (Laviron) with the evidence', () => {
     for (const f of files) {
@@ -33,7 +33,7 @@ describe('adsorbed film at fast scan rates (k_s = 25 s⁻¹, 0.1–20 V/s)', () 
     }
   });
 
-  // Laviron, J. Electroanal. Chem. 101 (1979) 19 (from memory), check-values §7: k_s from ΔEp
+  // Laviron, J. Electroanal. Chem. 101 (1979) 19 (from memory): k_s from ΔEp
   // above 200/n mV; Q = nFAΓ. Tolerances: k_s 15 % (ΔEp read on a 2 mV grid at 10–20 V/s, where
   // 1 mV of ΔEp is ~1 % of k_s; from memory of the formula), Γ 3 %.
   it('series: surface, slow electron transfer (Laviron), k_s ≈ 25 s⁻¹, Γ ≈ 6e-11 mol/cm²', () => {

@@ -12,7 +12,7 @@ const opts = { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 };
 const rev = (s: number) => randlesSevcikPeakCurrent({ ...cell, diffusionCm2PerS: 7.6e-6, scanRateVPerS: s });
 
 describe('analyzeSeries', () => {
-  // check-values.md §2 (Bard & Faulkner §6.2): five reversible points → D = 7.600e-6 cm²/s,
+  // Randles–Ševčík (Bard & Faulkner 2nd ed. §6.2): five reversible points → D = 7.600e-6 cm²/s,
   // log–log slope 0.500, intercept 0; a second couple is matched separately by E½.
   it('recovers D and the log–log slope of a reversible couple, and keeps two couples apart', () => {
     const files = v.map((s, i) => ({
@@ -39,7 +39,7 @@ describe('analyzeSeries', () => {
     expect(high?.rateConstant?.lowerBoundCmPerS).toBeGreaterThan(0);
   });
 
-  // Nicholson 1965 table (check-values.md §5, from memory): ΔEp = 84 mV → ψ = 1; with the
+  // Nicholson, Anal. Chem. 37 (1965) 1351, Table I (from memory): ΔEp = 84 mV → ψ = 1; with the
   // Lavagnini fit ψ = 1.0570 → k° = 1.0190e-2 cm/s at 0.1 V/s for D = 7.6e-6 cm²/s.
   it('gives Nicholson k° for a quasi-reversible couple', () => {
     const files = [0.1, 0.1 * 1.0001].map((s, i) => ({
@@ -132,7 +132,7 @@ describe('analyzeSeries verdict refinement', () => {
 });
 
 describe('analyzeSeries electroactive area', () => {
-  // check-values.md §2 (Bard & Faulkner §6.2): the five pairs belong to A = 0.0707 cm² at
+  // Randles–Ševčík (Bard & Faulkner 2nd ed. §6.2): the five pairs belong to A = 0.0707 cm² at
   // D = 7.6e-6 cm²/s and 1 mM; given D, the series returns that area.
   it('returns 0.0707 cm² for a standard of known D', () => {
     const files = v.map((s, i) => ({ fileName: `std${i}`, scanRateVPerS: s, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: rev(s), ipcA: rev(s) }]) }));
@@ -142,7 +142,7 @@ describe('analyzeSeries electroactive area', () => {
 });
 
 describe('analyzeSeries with one scan rate', () => {
-  // check-values.md §2 worked example (Bard & Faulkner §6.2): 16.5581 µA at 0.1 V/s → D = 7.6e-6 cm²/s.
+  // Randles–Ševčík, computed (Bard & Faulkner 2nd ed. §6.2): 16.5581 µA at 0.1 V/s → D = 7.6e-6 cm²/s.
   it('gives D from the single peak through the origin and says so', () => {
     const one = [{ fileName: 'one', scanRateVPerS: 0.1, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: 16.5581e-6, ipcA: 16.5581e-6 }]) }];
     const r = analyzeSeries(one, opts);

@@ -11,7 +11,7 @@ import { analyzeVoltammogram } from './analyzeVoltammogram';
 const u = thermalVoltageV(298.15);
 
 describe('analyzeVoltammogram on a totally irreversible couple', () => {
-  // Bard & Faulkner 2nd ed. §6.3 (from memory), check-values §4: |Ep − Ep/2| = 1.857RT/(αnF) =
+  // Bard & Faulkner 2nd ed. §6.3 (from memory): |Ep − Ep/2| = 1.857RT/(αnF) =
   // 47.7/α mV = 95.4 mV at α = 0.5; Wang (2000) eq. 2-5 puts each peak ≈ 0.34 V from E°′ here,
   // so ΔEp ≈ 0.7 V, beyond the old 0.6 V pairing limit.
   it('k° = 1e-5 cm/s, α = 0.5, 0.1 V/s over ±0.9 V: one couple, ΔEp ≈ 0.7 V, |Ep − Ep/2| = 95.4 ± 2 mV, label irreversible (slow electron transfer)', () => {

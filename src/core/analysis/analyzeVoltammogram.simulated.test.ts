@@ -25,7 +25,7 @@ const firstCouple = (a: ReturnType<typeof analyzeVoltammogram>) => {
 
 describe('analyzeVoltammogram on simulated reversible couples', () => {
   // Bard & Faulkner 2nd ed. §6.2 (from memory): E½ = E°′ when D_O = D_R; Randles–Ševčík
-  // ip = 0.4463 nFAC(nFvD/RT)^½ (check-values §2); Nicholson 1965 ΔEp vs switch (check-values §3).
+  // ip = 0.4463 nFAC(nFvD/RT)^½ (same §6.2); Nicholson, Anal. Chem. 37 (1965) 1351, ΔEp vs switch (from memory).
   it.each([
     [1, 0.05],
     [1, 0.1],
@@ -44,7 +44,7 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     expect(couple.forwardDirection).toBe('cathodic');
   });
 
-  // Nicholson & Shain 1964; B&F §6.2 (from memory), check-values §3: |Ep − Ep/2| = 2.20 RT/nF.
+  // Nicholson & Shain, Anal. Chem. 36 (1964) 706; B&F §6.2 (from memory): |Ep − Ep/2| = 2.20 RT/nF.
   it('|Ep − Ep/2| of both peaks is 2.20 RT/F = 56.5 mV within 1.5 mV', () => {
     const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram(base)));
     expect(Math.abs(couple.cathodicHalfPeakWidthV! - 2.2 * u)).toBeLessThan(0.0015);
@@ -61,14 +61,14 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
     expect(couple.verdict.category).toBe('reversible');
   });
 
-  // Nicholson, Anal. Chem. 38 (1966) 1406 (from memory), check-values §6: the empirical ratio from
+  // Nicholson, Anal. Chem. 38 (1966) 1406 (from memory): the empirical ratio from
   // the switching current is built to return about 1 for a simple reversible couple; 3 % here.
   it('Nicholson (1966) empirical ratio is 1 within 3 % for a reversible couple without charging', () => {
     const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram(base)));
     expect(Math.abs(couple.nicholsonRatio! - 1)).toBeLessThan(0.03);
   });
 
-  // B&F §6.2 (from memory), check-values §3: E½ = E°′ + (RT/2nF) ln(D_R/D_O); D_R = D_O/4 moves
+  // B&F §6.2 (from memory): E½ = E°′ + (RT/2nF) ln(D_R/D_O); D_R = D_O/4 moves
   // E½ by −17.8 mV.
   it('unequal diffusion coefficients: E½ = E°′ + (RT/2F) ln(D_R/D_O) within 2 mV', () => {
     const a = analyzeVoltammogram(simulatedVoltammogram({ ...base, diffusionRCm2PerS: D / 4 }));
@@ -76,7 +76,7 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
   });
 
   // With seeded white noise of 0.1 µA (0.6 % of ip) and a 20 µF/cm² double layer (charging
-  // current 0.14 µA, check-values §9): E½ within 4 mV and ipc within 3 % for three seeds.
+  // current A·Cd·v = 0.14 µA, B&F §1.2, from memory): E½ within 4 mV and ipc within 3 % for three seeds.
   it.each([7, 11, 23])('noise (seed %i) and charging background: E½ ±4 mV, ipc ±3 %', (seed) => {
     const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 20e-6 }, { noiseA: 1e-7, seed });
     const { couple } = firstCouple(analyzeVoltammogram(v));
@@ -152,7 +152,7 @@ describe('analyzeVoltammogram on overlapping couples', () => {
 });
 
 describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', () => {
-  // Nicholson 1965 Table I (check-values §5): ψ = k°/(πDnFv/RT)^½ = 0.005/0.00964 = 0.52 → n·ΔEp
+  // Nicholson, Anal. Chem. 37 (1965) 1351, Table I (from memory): ψ = k°/(πDnFv/RT)^½ = 0.005/0.00964 = 0.52 → n·ΔEp
   // between the ψ = 0.75 (92 mV) and ψ = 0.35 (121 mV) rows.
   it('k° = 0.005 cm/s: ΔEp between 92 and 121 mV, verdict quasi-reversible', () => {
     const { couple } = firstCouple(analyzeVoltammogram(simulatedVoltammogram({ ...base, k0CmPerS: 0.005 })));
@@ -161,8 +161,8 @@ describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', 
     expect(couple.verdict.category).toBe('quasi-reversible');
   });
 
-  // B&F §6.3 (from memory), check-values §4: |Ep − Ep/2| = 1.857 RT/(αF) = 95.4 mV at α = 0.5;
-  // irreversible ip = 0.4958 nFAC(αFvD/RT)^½ = 13.007 µA (check-values §2 worked example).
+  // B&F §6.3 (from memory): |Ep − Ep/2| = 1.857 RT/(αF) = 95.4 mV at α = 0.5;
+  // irreversible ip = 0.4958 nFAC(αFvD/RT)^½ = 13.007 µA (B&F §6.3, 0.4958 from memory; computed).
   it('k° = 1e-5 cm/s: irreversible verdict, |Ep − Ep/2| = 95.4 mV ±2 mV, ip = 13.007 µA ±2 %', () => {
     const cycle = analyzeVoltammogram(simulatedVoltammogram({ ...base, k0CmPerS: 1e-5, switchV: -0.9 })).cycles[0]!;
     const forward = cycle.couples.find((c) => c.cathodicPeak !== null)!;
@@ -179,7 +179,7 @@ describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', 
     expect(couple.verdict.category).toBe('chemically-coupled');
   });
 
-  // B&F §14.3; Laviron 1974 (from memory), check-values §7: ip = n²F²AΓv/(4RT) = 0.6638 µA,
+  // B&F §14.3; Laviron, J. Electroanal. Chem. 52 (1974) 355 (from memory): ip = n²F²AΓv/(4RT) = 0.6638 µA,
   // Q = nFAΓ = 0.6822 µC, FWHM = 90.58 mV for Γ = 1e-10 mol/cm², v = 0.1 V/s.
   it('Nernstian adsorbed layer: adsorbed, FWHM 90.6 mV ±1.5 mV, ip ±2 %, Q ±3 %, ΔEp < 2 mV', () => {
     const { couple, cycle } = firstCouple(analyzeVoltammogram(simulatedVoltammogram({ ...base, mechanism: 'surface', surfaceRatePerS: Infinity })));
@@ -192,7 +192,7 @@ describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', 
 });
 
 describe('polynomial baseline on a closed peak', () => {
-  // B&F §14.3 (from memory), check-values §7: ip = F²AΓv/(4RT) = 0.6638 µA for Γ = 1e-10 mol/cm²;
+  // B&F §14.3 (from memory): ip = F²AΓv/(4RT) = 0.6638 µA for Γ = 1e-10 mol/cm²;
   // the 40 µF/cm² charging background is fitted on both sides of the peak by a quadratic.
   it('adsorbed layer on a charging background: quadratic through both sides gives ip ±2 %', () => {
     const v = simulatedVoltammogram({ ...base, mechanism: 'surface', surfaceRatePerS: Infinity, doubleLayerFPerCm2: 40e-6 });
@@ -204,7 +204,7 @@ describe('polynomial baseline on a closed peak', () => {
   });
 });
 
-describe('current sign convention (check-values §14; IUPAC Gold Book; ASDL plotting conventions)', () => {
+describe('current sign convention (IUPAC Gold Book; ASDL plotting conventions)', () => {
   it('the same voltammogram in IUPAC and polarographic convention gives identical Epa, Epc, |ipa|, |ipc|', () => {
     const v = simulatedVoltammogram({ ...base, doubleLayerFPerCm2: 20e-6 }, { noiseA: 5e-8, seed: 3 });
     const polar = { ...v, currentA: v.currentA.map((i) => -i) };

@@ -19,7 +19,8 @@ function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
   if (halves.length >= 2) out.push(`E½ spans ${mv(Math.max(...halves) - Math.min(...halves))} over the series`);
   const shift = c.forwardDirection === 'anodic' ? c.peakShift.anodic : c.peakShift.cathodic;
   if (shift && c.regime === 'surface') {
-    // Laviron 1979 (check-values §7): far from E°′ each peak moves 2.303RT/(αnF) or 2.303RT/((1 − α)nF) per decade.
+    // Laviron, J. Electroanal. Chem. 101 (1979) 19 (from memory): far from E°′ each peak moves
+    // 2.303RT/(αnF) or 2.303RT/((1 − α)nF) per decade.
     out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate over the whole series (Nernstian film: 0; Laviron, n·ΔEp > 200 mV: 2.303RT/((1 − α)nF) or 2.303RT/(αnF), 118 mV for α = 0.5)`);
   } else if (shift) {
     out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate (reversible: 0; totally irreversible: ±29.6/(αnₐ) mV)`);

@@ -26,7 +26,7 @@ describe('findPrePeakWindow', () => {
   });
 });
 
-// Randles–Ševčík ip = 0.4463·nFAC(nFvD/RT)^½ (Bard & Faulkner 2nd ed. §6.2, check-values §2),
+// Randles–Ševčík ip = 0.4463·nFAC(nFvD/RT)^½ (Bard & Faulkner 2nd ed. §6.2),
 // simulated with this project's simulator: a sweep that starts only 265 mV before E°′ (the demo
 // probe's window) still gives ip within 1 % once the window stops where the foot reaches 0.3 %
 // of the peak (it was −1.1 % with a 1 % foot threshold).

@@ -3,8 +3,7 @@
  * under the return peak, only the current at the switching potential.
  * Source: R. S. Nicholson, "Semiempirical procedure for measuring with stationary electrode
  *   polarography rates of chemical reactions involving the product of electron transfer",
- *   Anal. Chem. 38 (1966) 1406 (formula and coefficients from memory, as collected in
- *   check-values §6):
+ *   Anal. Chem. 38 (1966) 1406 (formula and coefficients from memory):
  *     i_return/i_forward = (i_return)₀/i_forward + 0.485·(i_sp)₀/i_forward + 0.086
  * In (A): forward peak current measured from its own baseline (> 0); return peak current measured
  *   from zero, counted positive in the return direction; current at the switching potential

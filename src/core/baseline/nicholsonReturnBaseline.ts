@@ -3,7 +3,8 @@
  * carried had the potential stayed past the switch, i.e. the decaying forward current extended
  * in time under the return peak.
  * Source of the convention: R. S. Nicholson, Anal. Chem. 38 (1966) 1406 (return peak measured
- *   from the extended forward decay; from memory, see check-values §3 and §6).
+ *   from the extended forward decay; from memory; also Wang, Analytical Electrochemistry, 2nd ed.
+ *   (2000), §2-1.1.1).
  * Model of the decay (our choice): far past the formal potential the surface concentration is
  *   ~0, so the faradaic current decays like a Cottrell transient, I = a + b/√(t − t0)
  *   (F. G. Cottrell, Z. Phys. Chem. 42 (1903) 385; Bard & Faulkner, Electrochemical Methods,

@@ -8,8 +8,8 @@ const gamma = 1e-10;
 const film = { mechanism: 'surface' as const, areaCm2: A, coverageMolPerCm2: gamma, doubleLayerFPerCm2: 20e-6, stepV: 0.002 };
 
 describe('return-peak baseline of a surface-confined film with double-layer charging (simulator)', () => {
-  // Faraday's law Q = nFAΓ = 0.6822 µC (check-values §7, worked example; Bard & Faulkner 2nd ed.
-  // §14.3); i_c = A·C_d·v changes sign at the switch (check-values §9). Tolerance 3 %: the pre-peak
+  // Faraday's law Q = nFAΓ = 0.6822 µC (computed, CODATA 2018 F; Bard & Faulkner 2nd ed.
+  // §14.3); i_c = A·C_d·v changes sign at the switch (B&F §1.2, from memory). Tolerance 3 %: the pre-peak
   // windows start 0.3–0.4 V from E°′, where the wave's foot is still 0.1–1 % of its peak.
   it.each([
     ['Nernstian, 0.1 V/s, −0.4 → 0.4 V', { surfaceRatePerS: 1000, scanRateVPerS: 0.1, startV: -0.4, switchV: 0.4 }],

@@ -3,7 +3,7 @@
  * layer): the charging/leakage line of the forward sweep, with its slope in E kept and its offset
  * re-measured on the return sweep itself, between the switch and the return wave's foot.
  * Why: the double-layer charging current i_c = A·C_d·v changes sign at the switch (Bard &
- *   Faulkner, Electrochemical Methods, 2nd ed. (2001) §1.2, from memory; check-values §9), so no
+ *   Faulkner, Electrochemical Methods, 2nd ed. (2001) §1.2, from memory), so no
  *   forward baseline may be carried across it, while the short stretch before the return foot is
  *   too curved near a nearby foot to give a trustworthy slope of its own. The slope is shared by
  *   both sweeps (a tilted background); the offset is the mean residual over the half of the

@@ -3,7 +3,7 @@ import { currentInConvention, fromIupacCurrent, toIupacCurrent } from './current
 
 describe('current sign convention', () => {
   // IUPAC Gold Book (anodic positive) vs the polarographic convention (cathodic positive),
-  // check-values.md §14: the conversion is a sign change and round-trips exactly.
+  // ASDL "Plotting Conventions for Voltammetry": the conversion is a sign change and round-trips exactly.
   it('negates polarographic currents and round-trips', () => {
     const polar = [1e-6, -2e-6, 0];
     const iupac = toIupacCurrent(polar, 'polarographic');

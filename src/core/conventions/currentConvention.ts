@@ -5,7 +5,7 @@
  *   direction is a display matter and is not touched here).
  * Source: IUPAC Gold Book, "electrode current density" and "partial currents" (anodic positive);
  *   Analytical Sciences Digital Library, "Plotting Conventions for Voltammetry" (polarographic
- *   convention) — both as in check-values.md §14.
+ *   convention).
  */
 import type { CurrentConvention } from '../types';
 

@@ -14,7 +14,7 @@ const base: ClassifyCoupleInput = {
 };
 
 describe('classifyCouple', () => {
-  // Nicholson 1965 via B&F §6.5 (from memory), check-values §3: 59.2 mV at 121.5 mV past the peak.
+  // Nicholson, Anal. Chem. 37 (1965) 1351, via B&F 2nd ed. §6.5 (from memory): 59.2 mV at 121.5 mV past the peak.
   it('ΔEp at the tabulated reversible value and ratio 1 → reversible, with the numbers', () => {
     const v = classifyCouple(base);
     expect(v.category).toBe('reversible');
@@ -23,7 +23,7 @@ describe('classifyCouple', () => {
     expect(v.reasons[0]).toMatch(/ΔEp = 59\.2 mV/);
   });
 
-  // Nicholson 1965 Table I (check-values §5): n·ΔEp = 84 mV ↔ ψ = 1, a quasi-reversible couple.
+  // Nicholson, Anal. Chem. 37 (1965) 1351, Table I (from memory): n·ΔEp = 84 mV ↔ ψ = 1, a quasi-reversible couple.
   it('ΔEp = 84 mV → quasi-reversible; 250 mV → irreversible; one peak → irreversible', () => {
     expect(classifyCouple({ ...base, deltaEpV: 0.084 }).category).toBe('quasi-reversible');
     expect(classifyCouple({ ...base, deltaEpV: 0.25 }).category).toBe('irreversible');
@@ -37,7 +37,7 @@ describe('classifyCouple', () => {
     expect(big.label).toMatch(/larger/);
   });
 
-  // Bard & Faulkner 2nd ed. §14.3 (from memory), check-values §7: ideal adsorbed FWHM 90.58/n mV.
+  // Bard & Faulkner 2nd ed. §14.3 (3.53·RT/nF, from memory); exactly 4·ln(1+√2)·RT/nF: ideal adsorbed FWHM 90.58/n mV.
   it('ΔEp ≈ 0 with FWHM 90.6 mV → adsorbed; with FWHM 200 mV → inconclusive', () => {
     const ads = classifyCouple({ ...base, deltaEpV: 0.002, fwhmV: { anodic: 0.0906, cathodic: 0.0905 } });
     expect(ads.category).toBe('adsorbed');
@@ -59,7 +59,7 @@ describe('classifyCouple', () => {
     expect(n2.evidence.reversibleHalfPeakWidthV).toBeCloseTo((2.2 * u) / 2, 12);
   });
 
-  // Bard & Faulkner 2nd ed. §14.3 (from memory), check-values §7: a surface wave closes after its
+  // Bard & Faulkner 2nd ed. §14.3 (from memory): a surface wave closes after its
   // peak and returns its charge; a diffusing one keeps ≈ half its current 6RT/nF past Ep.
   it('closed peaks with equal charges → adsorbed at ΔEp = 150 mV (Laviron label); open tails → quasi-reversible', () => {
     const wide = { ...base, deltaEpV: 0.15, fwhmV: { anodic: 0.117, cathodic: 0.117 }, chargeRatio: 1.0 };

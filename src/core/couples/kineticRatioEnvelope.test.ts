@@ -21,7 +21,7 @@ describe('kineticRatioEnvelope', () => {
 });
 
 describe('classifyCouple with kinetic asymmetry against follow-up chemistry (simulator)', () => {
-  // Nicholson, Anal. Chem. 37 (1965) 1351 (Table I, check-values §5): n·ΔEp 90–150 mV is the
+  // Nicholson, Anal. Chem. 37 (1965) 1351 (Table I, from memory): n·ΔEp 90–150 mV is the
   // quasi-reversible range; with α = 0.3 or 0.7 and no chemistry the verdict must stay kinetic.
   it.each([
     [0.3, 0.006],

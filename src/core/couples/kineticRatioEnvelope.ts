@@ -4,7 +4,7 @@
  * its ratio departs from 1 without any chemistry (α < 0.5 on a reduction-first scan gives a larger
  * return peak, α > 0.5 a smaller one; the mirror image for an oxidation-first scan).
  * Source: this project's simulator (src/core/simulation, Butler–Volmer E mechanism, validated
- *   against Nicholson, Anal. Chem. 37 (1965) 1351, Table I, check-values §5), run for α = 0.3 and
+ *   against Nicholson, Anal. Chem. 37 (1965) 1351, Table I, from memory), run for α = 0.3 and
  *   0.7, n = 1, D_O = D_R = 1e-5 cm²/s, 0.1 V/s, switch 0.5 V past E°′, both scan directions, with
  *   the ratio measured by this analysis (return peak from the extended forward decay). Nicholson
  *   (1965) states that ΔEp is nearly independent of α for 0.3 < α < 0.7 (from memory), so ΔEp

@@ -13,7 +13,7 @@ const nernstian = classifyCouple({
 });
 
 describe('refineVerdictWithSeries', () => {
-  // check-values §8: slope 0.5 for diffusion (Randles–Ševčík, B&F §6.2).
+  // Slope 0.5 for diffusion, ip ∝ v^½ (Randles–Ševčík, Bard & Faulkner 2nd ed. §6.2).
   it('slope 0.5 and no Ep drift keep a reversible verdict and add reasons', () => {
     const r = refineVerdictWithSeries(nernstian, { logLogSlope: 0.5, epaShiftVPerDecade: 0.001, count: 5 });
     expect(r.category).toBe('reversible');
@@ -26,7 +26,7 @@ describe('refineVerdictWithSeries', () => {
     expect(refineVerdictWithSeries(nernstian, { epcShiftVPerDecade: -0.03 }).category).toBe('quasi-reversible');
   });
 
-  // check-values §8: slope 1 for a surface-confined species.
+  // Slope 1 for a surface-confined species, ip ∝ v (Bard & Faulkner 2nd ed. §14.3; Laviron 1974; from memory).
   it('slope 1 contradicts a diffusion verdict → inconclusive', () => {
     expect(refineVerdictWithSeries(nernstian, { logLogSlope: 1.0 }).category).toBe('inconclusive');
   });

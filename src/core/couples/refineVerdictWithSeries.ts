@@ -1,7 +1,7 @@
 /**
  * Refines a single-voltammogram verdict with scan-rate evidence from a series.
  * Diagnostics:
- *   log|ip| vs log v slope 0.5 for diffusion, 1 for an adsorbed layer (check-values §8; Bard &
+ *   log|ip| vs log v slope 0.5 for diffusion, 1 for an adsorbed layer (Bard &
  *     Faulkner 2nd ed. §6.2 and §14.3, from memory);
  *   Ep independent of v for a reversible couple (Wang, Analytical Electrochemistry, 2nd ed. (2000)
  *     §2-1.1.1); a totally irreversible peak moves by ln10·RT/(2αnF) ≈ 29.6/(αn) mV per decade

@@ -3,13 +3,13 @@ import { reversibleDeltaEpAtSwitch, reversibleDeltaEpLimitV } from './reversible
 
 describe('reversibleDeltaEpAtSwitch', () => {
   // Nicholson, Anal. Chem. 37 (1965) 1351 via Bard & Faulkner 2nd ed. §6.5 (from memory),
-  // check-values §3 / test #8: limit 2.218 RT/F = 56.99 mV at 298.15 K.
+  // 2.218 as quoted by Elgrishi et al., J. Chem. Educ. 95 (2018) 197: limit 2.218 RT/F = 56.99 mV at 298.15 K.
   it('limit is 56.99 mV for n = 1 and half that for n = 2 at 25 °C', () => {
     expect(reversibleDeltaEpLimitV(1, 298.15) * 1000).toBeCloseTo(56.99, 1);
     expect(reversibleDeltaEpLimitV(2, 298.15) * 1000).toBeCloseTo(28.49, 1);
   });
 
-  // Same table (check-values §3 / test #9): 121.5 mV past the peak → 59.2 mV; 71.5 → 60.5.
+  // Same table (Nicholson 1965 via B&F §6.5, from memory): 121.5 mV past the peak → 59.2 mV; 71.5 → 60.5.
   it('returns the table rows exactly and interpolates between them', () => {
     expect(reversibleDeltaEpAtSwitch(0.1215).deltaEpV * 1000).toBeCloseTo(59.2, 10);
     expect(reversibleDeltaEpAtSwitch(0.0715).deltaEpV * 1000).toBeCloseTo(60.5, 10);

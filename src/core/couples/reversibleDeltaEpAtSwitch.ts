@@ -3,7 +3,7 @@
  * lies past the forward peak.
  * Source: R. S. Nicholson, "Theory and application of cyclic voltammetry for measurement of
  *   electrode reaction kinetics", Anal. Chem. 37 (1965) 1351, as tabulated in Bard & Faulkner,
- *   Electrochemical Methods, 2nd ed. (2001), §6.5 (from memory; check-values §3):
+ *   Electrochemical Methods, 2nd ed. (2001), §6.5 (from memory):
  *     n·(distance past forward peak) / mV: 71.5, 121.5, 171.5, 271.5, ∞
  *     n·ΔEp / mV:                          60.5,  59.2,  58.3,  57.8, 57.0 (= 2.218·RT/F)
  *   The first column is the distance past the forward peak; this project's simulator confirms

@@ -8,7 +8,7 @@ describe('kineticPeakCurrentRatio', () => {
   it('is 1 for a fast couple', () => {
     expect(kineticPeakCurrentRatio(50, 0.5)).toBeCloseTo(1, 2);
   });
-  // Bard & Faulkner §6.3 / check-values.md §2: the totally irreversible limit is
+  // Bard & Faulkner 2nd ed. §6.2 and §6.3 (0.4958 from memory): the totally irreversible limit is
   // (0.4958/0.4463)·α^½ = 0.7855 for α = 0.5.
   it('tends to the irreversible limit 0.7855 for small ψ', () => {
     const limit = (RANDLES_SEVCIK_IRREVERSIBLE / RANDLES_SEVCIK_REVERSIBLE) * Math.sqrt(0.5);

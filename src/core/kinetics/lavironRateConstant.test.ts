@@ -4,7 +4,7 @@ import { lavironPeakPotentials, lavironRateConstant, lavironTransferCoefficient 
 import { thermalVoltageV } from '../constants';
 
 describe('lavironRateConstant', () => {
-  // Laviron, J. Electroanal. Chem. 101, 19 (1979) (from memory), worked example of check-values.md §7:
+  // Laviron, J. Electroanal. Chem. 101, 19 (1979) (from memory), worked example computed from it:
   // α = 0.5, n = 1, v = 10 V/s, ΔEp = 300 mV → k_s = 10.51 s⁻¹.
   it('k_s = 10.51 s⁻¹ for the worked example', () => {
     const ks = lavironRateConstant({ deltaEpV: 0.3, scanRateVPerS: 10, electronCount: 1 });
@@ -22,7 +22,7 @@ describe('lavironRateConstant', () => {
     const p = lavironPeakPotentials({ formalPotentialV: 0, rateConstantPerS: 3, scanRateVPerS: 50, electronCount: 2 }, opts);
     expect(lavironRateConstant({ deltaEpV: p.epaV - p.epcV, scanRateVPerS: 50, electronCount: 2 }, opts)).toBeCloseTo(3, 8);
   });
-  // check-values.md §7: the expression must not be used below 200/n mV.
+  // Laviron (1979), from memory: the expression must not be used below 200/n mV.
   it('refuses n·ΔEp ≤ 200 mV', () => {
     expect(() => lavironRateConstant({ deltaEpV: 0.15, scanRateVPerS: 1, electronCount: 1 })).toThrow(AnalysisError);
     expect(() => lavironRateConstant({ deltaEpV: 0.15, scanRateVPerS: 1, electronCount: 1 })).toThrow(/200 mV/);

@@ -8,7 +8,7 @@
  *   Epc = E°′ − (RT/αnF)·ln[αnFv/(RT k_s)], Epa = E°′ + (RT/(1−α)nF)·ln[(1−α)nFv/(RT k_s)],
  *   log k_s = α log(1−α) + (1−α) log α − log(RT/nFv) − α(1−α)nFΔEp/(2.303RT).
  * The expressions hold for n·ΔEp > 200 mV only; below that Laviron's working curve is needed,
- *   which is not given here (check-values.md §7), so the function refuses.
+ *   which is not given here (its values are known to us only from memory), so the function refuses.
  */
 import { AnalysisError, assertFiniteInRange } from '../errors';
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';

@@ -3,7 +3,7 @@ import { AnalysisError } from '../errors';
 import { NICHOLSON_TABLE, lavagniniPsi, nicholsonPsi, nicholsonTablePsi } from './nicholsonPsi';
 
 describe('nicholsonPsi', () => {
-  // Nicholson, Anal. Chem. 37, 1351 (1965), Table I (from memory, check-values.md §5): 84 mV → ψ = 1.00.
+  // Nicholson, Anal. Chem. 37, 1351 (1965), Table I (from memory): 84 mV → ψ = 1.00.
   it('returns the exact table row at 84 mV', () => {
     expect(nicholsonPsi(0.084, { method: 'table' }).psi).toBeCloseTo(1, 12);
     for (const row of NICHOLSON_TABLE) expect(nicholsonTablePsi(row.nDeltaEpMv)).toBeCloseTo(row.psi, 10);
@@ -16,13 +16,13 @@ describe('nicholsonPsi', () => {
     expect(r.source).toBe('lavagnini-2004-fit');
     expect(r.psi).toBeCloseTo(1.057, 3);
   });
-  // check-values.md §5 (computed there): the fit stays within 7 % of the table over 63–141 mV.
+  // Lavagnini et al. (2004) fit vs Nicholson (1965) Table I, computed: the fit stays within 7 % of the table over 63–141 mV.
   it('fit and table agree within 7 % inside 63–141 mV', () => {
     for (const row of NICHOLSON_TABLE.filter((r) => r.nDeltaEpMv >= 63 && r.nDeltaEpMv <= 141)) {
       expect(Math.abs(lavagniniPsi(row.nDeltaEpMv) / row.psi - 1)).toBeLessThan(0.07);
     }
   });
-  // Design from check-values.md §5: refuse outside 61–212 mV; the fit alone refuses outside 63–141 mV.
+  // Design choice, no source: refuse outside the table's 61–212 mV; the fit alone refuses outside 63–141 mV.
   it('refuses 60 mV everywhere and 212 mV for the fit, and uses the table at 212 mV in auto mode', () => {
     expect(() => nicholsonPsi(0.06)).toThrow(AnalysisError);
     expect(() => nicholsonPsi(0.06, { method: 'table' })).toThrow(/not determinable/);

@@ -4,11 +4,10 @@
  *   it was obtained.
  * Sources:
  *   table — R. S. Nicholson, Anal. Chem. 37, 1351 (1965), Table I (α = 0.5, 25 °C, switching
- *     112.5/n mV past E½; reproduced in Bard & Faulkner 2nd ed. Table 6.5.2; values from memory
- *     per check-values.md §5);
+ *     112.5/n mV past E½; reproduced in Bard & Faulkner 2nd ed. Table 6.5.2; values from memory);
  *   fit — ψ = (−0.6288 + 0.0021·X)/(1 − 0.017·X), X = n·ΔEp in mV, I. Lavagnini, R. Antiochia,
  *     F. Magno, Electroanalysis 16, 505 (2004) (as widely quoted, from memory).
- * Choices (design, not from the sources; see check-values.md §5): X is first brought to 25 °C,
+ * Choices (design, not from the sources): X is first brought to 25 °C,
  *   X₂₅ = X·298.15/T, because the working curve is a function of nFΔEp/RT. With method 'auto' the
  *   fit is used for 63 ≤ X₂₅ ≤ 141 mV, where it stays within 7 % of the table, and the table
  *   (monotone cubic Hermite interpolation of ln ψ against X, Fritsch & Carlson, SIAM J. Numer.

@@ -4,7 +4,7 @@
  *   scanRateVPerS, electronCount n, alpha, temperatureK. Out: k° in cm/s.
  * Source: R. S. Nicholson, Anal. Chem. 37, 1351 (1965): ψ = γ^α·k°/(π D_O a)^½ with
  *   γ = (D_O/D_R)^½ and a = nFv/RT, so k° = ψ·(π D_O n F v/RT)^½·(D_R/D_O)^(α/2)
- *   (Bard & Faulkner 2nd ed. eq. 6.5.5; check-values.md §5).
+ *   (Bard & Faulkner 2nd ed. eq. 6.5.5; the γ^α prefactor from memory).
  * Caution (common practice, no source): uncompensated resistance widens ΔEp exactly like slow
  *   kinetics; correct for iR first or the k° is a lower bound.
  */

@@ -4,13 +4,13 @@ import { convertPotential, referenceVsShe, resolveReferenceId } from './convertP
 import { REFERENCE_ELECTRODES, findReferenceElectrode } from './referenceElectrodes';
 
 describe('convertPotential', () => {
-  // Bard & Faulkner 2nd ed. inside cover; Sawyer et al. (1995) — check-values.md §10 worked conversion:
+  // Bard & Faulkner 2nd ed. (2001), inside back cover; Sawyer et al., Electrochemistry for Chemists (1995); computed:
   // +0.300 V vs Ag/AgCl (sat. KCl) → +0.497 V vs SHE → +0.256 V vs SCE (±3 mV).
   it('+0.300 V vs Ag/AgCl (sat.) is +0.497 V vs SHE and +0.256 V vs SCE', () => {
     expect(convertPotential(0.3, 'AgCl-sat', 'SHE')).toBeCloseTo(0.497, 3);
     expect(Math.abs(convertPotential(0.3, 'AgCl-sat', 'SCE') - 0.256)).toBeLessThan(0.003);
   });
-  // Nernst equation (computed, check-values.md §10): 0.000 V vs SHE at pH 7, 25 °C is +0.414 V vs RHE.
+  // Nernst equation, E vs RHE = E vs SHE + (ln 10)·RT/F·pH (computed): 0.000 V vs SHE at pH 7, 25 °C is +0.414 V vs RHE.
   it('0 V vs SHE at pH 7 is +0.414 V vs RHE', () => {
     expect(Math.abs(convertPotential(0, 'SHE', 'RHE', { pH: 7 }) - 0.414)).toBeLessThan(0.001);
     expect(convertPotential(0, 'SHE', 'RHE', { pH: 7 })).toBeCloseTo(7 * 0.05915935, 6);
@@ -70,7 +70,8 @@ describe('findReferenceElectrode', () => {
     expect(findReferenceElectrode('platinum wire')?.id).toBe('pseudo');
     expect(findReferenceElectrode('home-made electrode')).toBeNull();
   });
-  // check-values.md §10: never use 0.926 V for Hg/HgO; 0.098 V is the value most papers use.
+  // Never use 0.926 V for Hg/HgO: a cell emf, not a potential vs SHE (reference-electrode compilations, primary
+  // source not seen); 0.098 V is the value most papers use (common practice, no source).
   it('never carries 0.926 V for Hg/HgO', () => {
     expect(findReferenceElectrode('Hg/HgO')?.eVsSheV).toBe(0.098);
   });

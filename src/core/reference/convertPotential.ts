@@ -4,7 +4,7 @@
  * In: valueV on the `from` scale (V), reference ids, and a context for the scales that need one
  *   (pH and temperature for RHE; the measured E½ of ferrocene, or an offset, for Fc⁺/Fc; user
  *   overrides of any tabulated value). Out: V on the `to` scale.
- * Sources: table in referenceElectrodes.ts (check-values.md §10); RHE from the Nernst equation,
+ * Sources: table in referenceElectrodes.ts (each row names its source); RHE from the Nernst equation,
  *   E(RHE vs SHE) = −(ln 10)·RT/F·pH (1 bar H₂, ideal), slope taken at the given temperature;
  *   Fc⁺/Fc: IUPAC recommendation of an internal reference (Gritzner & Kůta 1984, from memory) and
  *   the typical +0.40 V vs SCE in MeCN/0.1 M Bu₄NPF₆ (Connelly & Geiger, Chem. Rev. 96, 877

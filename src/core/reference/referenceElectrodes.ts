@@ -1,7 +1,7 @@
 /**
  * Table of reference electrodes: potential against the standard hydrogen electrode at 25 °C,
  * with its source and how sure we are of it.
- * Values and sources: check-values.md §10 (Bard & Faulkner, Electrochemical Methods 2nd ed.
+ * Values and sources (each row names its own; Bard & Faulkner, Electrochemical Methods 2nd ed.
  *   (2001), inside back cover; Sawyer, Sobkowiak & Roberts, Electrochemistry for Chemists 2nd ed.
  *   (1995); "Reference Electrodes in Metal Corrosion", Int. J. Corrosion 2010, 756950, Table 2;
  *   Meites (ed.), Handbook of Analytical Chemistry (1963)).

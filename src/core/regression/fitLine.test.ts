@@ -39,8 +39,8 @@ describe('fitLine', () => {
     expect(fit.intercept).toBeCloseTo(ref.intercept, 12);
   });
 
-  // check-values.md §2 (computed there): the five Randles–Ševčík points give slope 5.23613e-5 A/(V/s)^½, intercept 0.
-  it('fits the check-values §2 peak currents against v^½', () => {
+  // Computed from Randles–Ševčík (Bard & Faulkner 2nd ed. §6.2): the five points give slope 5.23613e-5 A/(V/s)^½, intercept 0.
+  it('fits the Randles–Ševčík peak currents against v^½', () => {
     const v = [0.025, 0.05, 0.1, 0.2, 0.4];
     const ip = [8.2791, 11.7083, 16.5581, 23.4167, 33.1162].map((u) => u * 1e-6);
     const fit = fitLine(v.map(Math.sqrt), ip);

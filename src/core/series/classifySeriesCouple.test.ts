@@ -52,7 +52,7 @@ describe('classifySeriesCouple, peak separation first', () => {
   });
 });
 
-// Nicholson & Shain, Anal. Chem. 36 (1964) 706; check-values §3: reversible |Ep − Ep/2| =
+// Nicholson & Shain, Anal. Chem. 36 (1964) 706; Bard & Faulkner 2nd ed. §6.2 (from memory): reversible |Ep − Ep/2| =
 // 2.20RT/nF = 56.5/n mV is the narrowest a diffusion wave gets.
 describe('suggestedElectronCount', () => {
   it('a 28.3 mV forward half-peak width with n = 1 assumed reads as n = 2; 56.5 mV or wider gives nothing', () => {

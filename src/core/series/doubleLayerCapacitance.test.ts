@@ -3,7 +3,7 @@ import { AnalysisError } from '../errors';
 import { chargingCurrentA, doubleLayerCapacitance } from './doubleLayerCapacitance';
 
 describe('doubleLayerCapacitance', () => {
-  // Bard & Faulkner 2nd ed. §1.2 (from memory), worked example of check-values.md §9:
+  // Bard & Faulkner 2nd ed. §1.2 (from memory): i_c = A·Cd·v and gap = 2·A·Cd·v, computed for
   // A = 0.0707 cm², Cd = 20 µF/cm², v = 0.1 V/s → ic = 0.1414 µA, gap 0.2828 µA → 20.0 µF/cm².
   it('charging current and Cd from one gap match the worked example', () => {
     expect(Math.abs(chargingCurrentA(0.0707, 20e-6, 0.1) / 0.1414e-6 - 1)).toBeLessThan(1e-3);

@@ -4,7 +4,7 @@ import { fitLine } from '../regression';
 import { electroactiveAreaFromStandard } from './electroactiveAreaFromStandard';
 
 describe('electroactiveAreaFromStandard', () => {
-  // check-values.md §2 (Bard & Faulkner §6.2): the five pairs were computed for A = 0.0707 cm²,
+  // Randles–Ševčík full form (Bard & Faulkner 2nd ed. §6.2): the five pairs were computed for A = 0.0707 cm²,
   // C = 1 mM, D = 7.6e-6 cm²/s (ferricyanide in 1 M KCl, Konopka & McDuffie 1970, from memory).
   it('returns 0.0707 cm² for the tabulated series', () => {
     const v = [0.025, 0.05, 0.1, 0.2, 0.4];

@@ -5,7 +5,8 @@
  * Out: areaCm2 = slope / [k·n F C (n F D/RT)^½] (reversible form; see randlesSevcik.ts).
  * Source: Randles–Ševčík equation solved for A (Bard & Faulkner, Electrochemical Methods, 2nd ed.
  *   (2001), §6.2). Standards are usually ferri/ferrocyanide in KCl or ferrocene in MeCN; their D
- *   values scatter by 10 % or more between reports (check-values.md §12), which carries straight
+ *   values scatter by 10 % or more between reports (e.g. ferrocene in MeCN: Wang, Rogers & Compton,
+ *   J. Electroanal. Chem. 648 (2010) 15; spread from memory), which carries straight
  *   into the area as ±5 % (A ∝ D^-½).
  */
 import { assertFiniteInRange } from '../errors';

@@ -9,7 +9,7 @@ const input = { ...cell, coverageMolPerCm2: 1e-10, scanRateVPerS: 0.1 };
 
 describe('surface-confined Nernstian wave', () => {
   // Bard & Faulkner 2nd ed. §14.3; Laviron, J. Electroanal. Chem. 52, 355 (1974) — worked example
-  // of check-values.md §7: ip = 0.6638 µA, Q = 0.6822 µC, ip/Q = 0.97304 s⁻¹.
+  // (formulas from memory), computed with CODATA 2018: ip = 0.6638 µA, Q = 0.6822 µC, ip/Q = 0.97304 s⁻¹.
   it('peak current, charge and their ratio match the worked example', () => {
     const ip = surfacePeakCurrent(input);
     const q = surfaceCharge(input);

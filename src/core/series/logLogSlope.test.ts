@@ -6,14 +6,14 @@ import { surfacePeakCurrent } from './lavironSurfaceWave';
 const v = [0.025, 0.05, 0.1, 0.2, 0.4];
 
 describe('logLogSlope', () => {
-  // check-values.md §2/§8 (Randles–Ševčík, Bard & Faulkner §6.2): the five tabulated pairs give 0.500.
+  // Randles–Ševčík, ip ∝ v^½ (Bard & Faulkner 2nd ed. §6.2): the five pairs computed from its full form give 0.500.
   it('reads 0.500 for the Randles–Ševčík pairs: diffusion', () => {
     const ip = [8.2791, 11.7083, 16.5581, 23.4167, 33.1162].map((u) => -u * 1e-6);
     const r = logLogSlope(v, ip);
     expect(r.slope).toBeCloseTo(0.5, 3);
     expect(r.reading).toBe('diffusion');
   });
-  // check-values.md §7/§8 (Laviron 1974; B&F §14.3): ip = k·v gives 1.000.
+  // Laviron, J. Electroanal. Chem. 52 (1974) 355; Bard & Faulkner 2nd ed. §14.3 (from memory): ip = k·v gives 1.000.
   it('reads 1.000 for a surface-confined wave: adsorbed', () => {
     const ip = v.map((s) => surfacePeakCurrent({ electronCount: 1, areaCm2: 0.0707, coverageMolPerCm2: 1e-10, scanRateVPerS: s }));
     const r = logLogSlope(v, ip);

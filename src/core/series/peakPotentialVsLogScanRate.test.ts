@@ -4,7 +4,7 @@ import { irreversiblePeakShiftVPerDecade, peakPotentialVsLogScanRate } from './p
 
 describe('peakPotentialVsLogScanRate', () => {
   // Wang (2000) eq. 2-5; Bard & Faulkner §6.3: α = 0.5, nₐ = 1 → 59.16 mV per decade at 25 °C
-  // (check-values.md §4, computed there).
+  // (ln10·RT/(2αnₐF), computed from eq. 2-5 with CODATA 2018 constants).
   it('shift is 59.16 mV/decade for α = 0.5 and 29.58 mV/decade for αnₐ = 1', () => {
     expect(irreversiblePeakShiftVPerDecade(0.5) * 1000).toBeCloseTo(59.16, 1);
     expect(irreversiblePeakShiftVPerDecade(1) * 1000).toBeCloseTo(29.58, 1);

@@ -3,7 +3,7 @@ import { AnalysisError } from '../errors';
 import { fitLine } from '../regression';
 import { randlesSevcikDiffusion, randlesSevcikPeakCurrent } from './randlesSevcik';
 
-// Worked example of check-values.md §2: 3 mm disk, 1 mM, D = 7.6e-6 cm²/s, 0.1 V/s, 25 °C.
+// Worked example (computed from the forms cited below): 3 mm disk, 1 mM, D = 7.6e-6 cm²/s, 0.1 V/s, 25 °C.
 const cell = { electronCount: 1, areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 };
 const input = { ...cell, diffusionCm2PerS: 7.6e-6, scanRateVPerS: 0.1 };
 
@@ -43,7 +43,7 @@ describe('randlesSevcikPeakCurrent', () => {
 });
 
 describe('randlesSevcikDiffusion', () => {
-  // check-values.md §2 "Scan-rate regression to get D" (Bard & Faulkner §6.2): D = 7.600e-6 cm²/s,
+  // Least squares of ip vs v^½ on pairs computed from Randles–Ševčík (Bard & Faulkner §6.2): D = 7.600e-6 cm²/s,
   // and 7.580e-6 with the rounded 2.69e5 constant.
   const v = [0.025, 0.05, 0.1, 0.2, 0.4];
   const ip = [8.2791, 11.7083, 16.5581, 23.4167, 33.1162].map((u) => u * 1e-6);

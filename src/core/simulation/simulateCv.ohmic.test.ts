@@ -11,7 +11,7 @@ const v = 0.1;
 const blank = { concentrationOMolPerCm3: 0, concentrationRMolPerCm3: 0, areaCm2: area, doubleLayerFPerCm2: cdl, scanRateVPerS: v };
 
 describe('simulateCv, charging current and ohmic drop', () => {
-  // Bard & Faulkner 2nd ed. §1.2 (from memory); check-values §9 worked example:
+  // Bard & Faulkner 2nd ed. §1.2 (from memory), computed for A = 0.0707 cm², Cdl = 20 µF/cm², v = 0.1 V/s:
   // i_c = A·C_d·v = 0.1414 µA, forward-to-reverse gap 0.2828 µA.
   it('a blank electrode without Ru draws ±A·Cdl·v = 0.1414 µA', () => {
     const r = simulateCv(blank);

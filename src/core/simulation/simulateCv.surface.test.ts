@@ -37,8 +37,8 @@ describe('simulateCv, surface mechanism', () => {
   });
 
   // E. Laviron, J. Electroanal. Chem. 101, 19 (1979) (from memory): for ΔE_p > 200/n mV,
-  // log k_s = α log(1−α) + (1−α) log α − log(RT/nFv) − α(1−α)nFΔE_p/(2.303RT); worked example in
-  // check-values §7: α = 0.5, v = 10 V/s, k_s = 10.51 s⁻¹ → ΔE_p = 300 mV.
+  // log k_s = α log(1−α) + (1−α) log α − log(RT/nFv) − α(1−α)nFΔE_p/(2.303RT); worked example
+  // computed from it: α = 0.5, v = 10 V/s, k_s = 10.51 s⁻¹ → ΔE_p = 300 mV.
   it('large-ΔEp Laviron relation: ks = 10.51 s⁻¹ at 10 V/s gives ΔEp = 300 mV within 3 mV, symmetric about E°′', () => {
     const r = simulateCv({ ...base, surfaceRatePerS: 10.51, scanRateVPerS: 10, startV: 0.6, switchV: -0.6 });
     const { cathodic, anodic } = cathodicFirstPeaks(r);

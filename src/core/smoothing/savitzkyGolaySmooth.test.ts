@@ -10,7 +10,7 @@ describe('savitzkyGolayCoefficients', () => {
     for (const c of savitzkyGolayCoefficients(3, 1)) expect(c).toBeCloseTo(1 / 3, 14);
   });
 
-  // Savitzky & Golay, Anal. Chem. 36 (1964) 1627, tables; as collected in check-values §15.
+  // Savitzky & Golay, Anal. Chem. 36 (1964) 1627, tables.
   it('5-point quadratic and cubic sets are (−3, 12, 17, 12, −3)/35', () => {
     const expected = [-3, 12, 17, 12, -3].map((v) => v / 35);
     for (const order of [2, 3]) {
@@ -19,7 +19,7 @@ describe('savitzkyGolayCoefficients', () => {
     }
   });
 
-  // Savitzky & Golay 1964 (check-values §15): 7 and 9 points.
+  // Savitzky & Golay, Anal. Chem. 36 (1964) 1627, tables: 7 and 9 points.
   it('7-point set is (−2, 3, 6, 7, 6, 3, −2)/21 and 9-point set matches /231', () => {
     const c7 = savitzkyGolayCoefficients(7, 2);
     [-2, 3, 6, 7, 6, 3, -2].forEach((v, j) => expect(c7[j]).toBeCloseTo(v / 21, 12));
@@ -27,14 +27,14 @@ describe('savitzkyGolayCoefficients', () => {
     [-21, 14, 39, 54, 59, 54, 39, 14, -21].forEach((v, j) => expect(c9[j]).toBeCloseTo(v / 231, 12));
   });
 
-  // Savitzky & Golay 1964 (check-values §15): 5-point quadratic first derivative (−2,−1,0,1,2)/10.
+  // Savitzky & Golay, Anal. Chem. 36 (1964) 1627, tables: 5-point quadratic first derivative (−2,−1,0,1,2)/10.
   it('5-point first-derivative set is (−2, −1, 0, 1, 2)/10 and sums to 0', () => {
     const c = savitzkyGolayCoefficients(5, 2, { derivative: 1 });
     [-2, -1, 0, 1, 2].forEach((v, j) => expect(c[j]).toBeCloseTo(v / 10, 12));
     expect(Array.from(c).reduce((s, v) => s + v, 0)).toBeCloseTo(0, 14);
   });
 
-  // check-values §15 (computed there): white-noise variance ratio Σc² = 595/1225 and 1/3.
+  // Computed from the Savitzky & Golay (1964) sets: white-noise variance ratio Σc² = 595/1225 and 1/3.
   it('noise variance ratio Σc² is 0.485714 (5 points) and 1/3 (7 points)', () => {
     expect(sumSquares(savitzkyGolayCoefficients(5, 2))).toBeCloseTo(595 / 1225, 12);
     expect(sumSquares(savitzkyGolayCoefficients(7, 2))).toBeCloseTo(1 / 3, 12);
@@ -47,17 +47,17 @@ describe('savitzkyGolayCoefficients', () => {
 });
 
 describe('savitzkyGolaySmooth', () => {
-  // check-values §15, test #24: centre of [2, 8, 5, 7, 3] → 250/35 = 7.142857.
+  // Savitzky & Golay (1964) 5-point set, computed: centre of [2, 8, 5, 7, 3] → 250/35 = 7.142857.
   it('5-point window on [2, 8, 5, 7, 3] gives 7.142857 at the centre', () => {
     expect(savitzkyGolaySmooth([2, 8, 5, 7, 3])[2]).toBeCloseTo(7.142857142857, 10);
   });
 
-  // check-values §15, test #25: centre of [1, 4, 2, 8, 5, 7, 3] → 123/21 = 5.857143.
+  // Savitzky & Golay (1964) 7-point set, computed: centre of [1, 4, 2, 8, 5, 7, 3] → 123/21 = 5.857143.
   it('7-point window on [1, 4, 2, 8, 5, 7, 3] gives 5.857143 at the centre', () => {
     expect(savitzkyGolaySmooth([1, 4, 2, 8, 5, 7, 3], { window: 7 })[3]).toBeCloseTo(5.857142857143, 10);
   });
 
-  // Savitzky & Golay 1964: a polynomial of degree ≤ order is preserved (check-values §15).
+  // Savitzky & Golay, Anal. Chem. 36 (1964) 1627: a polynomial of degree ≤ order is preserved.
   it('returns x² and x³ unchanged everywhere, edges included (cubic fit)', () => {
     const x2 = Array.from({ length: 20 }, (_, k) => (k - 7) ** 2);
     const x3 = Array.from({ length: 20 }, (_, k) => 0.1 * (k - 7) ** 3 - k);

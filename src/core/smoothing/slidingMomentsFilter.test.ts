@@ -35,7 +35,7 @@ describe('filterBySlidingMoments', () => {
     for (let k = 3; k < 37; k++) expect(out[k]).toBeCloseTo(k, 12);
   });
 
-  // Savitzky & Golay 1964 (check-values §15): a polynomial of degree ≤ order is reproduced exactly.
+  // Savitzky & Golay, Anal. Chem. 36 (1964) 1627: a polynomial of degree ≤ order is reproduced exactly.
   it('reproduces a cubic and its slope everywhere, ends included (order 3, window 151)', () => {
     const p = (k: number) => 2 - 0.01 * k + 3e-5 * k * k - 1e-8 * k ** 3;
     const dp = (k: number) => -0.01 + 6e-5 * k - 3e-8 * k * k;
