@@ -8,6 +8,7 @@ const doc: SessionDocument = {
   savedAt: '2026-12-01T21:00:00.000Z',
   settings: { electronCount: 1, smoothing: { window: 7, order: 2 } },
   view: { convention: 'polarographic' },
+  workbench: {},
   files: [
     {
       fileName: 'ferrocene-0.1Vs.csv',
@@ -42,9 +43,34 @@ describe('session text', () => {
     expect(codeOf('{"format":"halfwave-session","version":1,"files":[{"fileName":"a.csv","sha256":"xyz"}]}')).toBe('BAD_FIELD');
   });
 
+  // Hostile input (common practice for parsers of untrusted JSON, no source): refused whole, with the reason.
+  it('refuses prototype keys anywhere, cut-short text, wrong override values and enormous text', () => {
+    const codeOf = (text: string) => {
+      try {
+        parseSession(text);
+        return 'parsed';
+      } catch (err) {
+        return (err as SessionError).code;
+      }
+    };
+    expect(codeOf('{"format":"halfwave-session","version":2,"files":[],"settings":{"__proto__":{"polluted":1}}}')).toBe('UNSAFE_KEY');
+    expect(codeOf('{"format":"halfwave-session","version":2,"files":[{"fileName":"a","sha256":null,"analysis":{"constructor":{"prototype":{}}}}]}')).toBe('UNSAFE_KEY');
+    expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+    const full = serializeSession(doc);
+    expect(codeOf(full.slice(0, full.length / 2))).toBe('NOT_JSON');
+    expect(() => parseSession(full.slice(0, full.length / 2))).toThrow(/ends too early|not valid JSON/);
+    expect(codeOf('{"format":"halfwave-session","version":2,"files":[{"fileName":"a","sha256":null,"overrides":{"delimiter":"|"}}]}')).toBe('BAD_FIELD');
+    expect(codeOf('{"format":"halfwave-session","version":2,"files":[{"fileName":"a","sha256":null,"overrides":{"potentialColumn":1.5}}]}')).toBe('BAD_FIELD');
+    expect(codeOf('{"format":"halfwave-session","version":2,"files":[],"view":[]}')).toBe('BAD_FIELD');
+    expect(codeOf(' '.repeat(256 * 1024 * 1024 + 1))).toBe('TOO_LARGE');
+    const deep = `{"format":"halfwave-session","version":2,"files":[],"settings":{"x":${'['.repeat(50_000)}${']'.repeat(50_000)}}}`;
+    expect(['parsed', 'NOT_JSON']).toContain(codeOf(deep));
+  });
+
   it('fills defaults for missing optional fields', () => {
     const parsed = parseSession('{"format":"halfwave-session","version":1,"files":[{"fileName":"a.csv","sha256":null}]}');
     expect(parsed.files[0]).toEqual({ fileName: 'a.csv', sha256: null, sizeBytes: 0, group: 'series 1', overrides: {}, analysis: {} });
+    expect(parsed.workbench).toEqual({});
     expect(parsed.settings).toEqual({});
   });
 });

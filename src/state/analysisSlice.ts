@@ -4,21 +4,15 @@
  * the settings on screen.
  */
 import { CancelledError } from '../worker/errors';
-import { runInputOf } from './runInput';
+import { fileRunRequest } from './runInput';
 import { resolveCell, sameTraceCell } from './seriesCell';
 import { defaultSettings, emptyFileSettings } from './settings';
-import { toUserError, type AnalysisSlice, type HistorySnapshot, type SliceCreator } from './types';
-
-const HISTORY_LIMIT = 100;
+import { toUserError, type AnalysisSlice, type SliceCreator } from './types';
 
 export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps) => {
   const running = new Map<string, AbortController>();
 
-  function record(): void {
-    const { settings, fileSettings, seriesCells } = get();
-    const snapshot: HistorySnapshot = { settings, fileSettings, seriesCells };
-    set((s) => ({ past: [...s.past, snapshot].slice(-HISTORY_LIMIT), future: [] }));
-  }
+  const record = () => get().record();
 
   return {
     settings: defaultSettings,
@@ -35,7 +29,7 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       const prev = get().results[id];
       set((s) => ({ results: { ...s.results, [id]: { status: 'running', run: prev?.run ?? null, error: null } } }));
       try {
-        const [run] = await deps.client.request('runFiles', { run: runInputOf(get(), [id]) }, { signal: ctrl.signal });
+        const [run] = await deps.client.request('runFiles', fileRunRequest(get(), id), { signal: ctrl.signal });
         set((s) => ({ results: { ...s.results, [id]: { status: 'ready', run: run ?? null, error: null } } }));
         const group = get().files[id]?.group;
         if (group) get().scheduleGroup(group);

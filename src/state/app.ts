@@ -16,10 +16,14 @@ export function getAppStore(): HalfwaveStore {
   return appStore;
 }
 
-/** Restores autosaved settings, then loads the demo files. Called once at start. */
+/**
+ * Called once at start: brings back the last workspace (files included) when the browser kept
+ * one; on a first visit it loads the demo scenario instead.
+ */
 export async function startApp(store: HalfwaveStore = getAppStore(), storage = defaultStorageAdapter()): Promise<void> {
-  await restoreAutosave(store, storage);
+  const restored = await restoreAutosave(store, storage);
   attachAutosave(store, storage);
+  if (restored) return;
   const demo = await loadDemoInputs();
   if (demo.length === 0) return;
   store.setState({ notice: `Loading ${demo.length} demo voltammograms, simulated by Halfwave (not measurements).` });

@@ -8,7 +8,7 @@ import { groupIntoSeries } from '../io/groupIntoSeries';
 import type { ImportOverrides } from '../io/types';
 import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
 import { mergeFileSettings } from './settings';
-import { toUserError, type FileEntry, type FileInput, type FilesSlice, type SliceCreator } from './types';
+import { toUserError, type FileEntry, type FileInput, type FilesSlice, type RestoredFile, type SliceCreator } from './types';
 
 export const DEFAULT_GROUP = 'series 1';
 
@@ -97,36 +97,48 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     return run;
   }
 
+  /** Adds files, each with its series, import overrides and (when restoring) its own windows and baselines; reads them. */
+  async function restoreFiles(records: RestoredFile[]): Promise<string[]> {
+    const entries: FileEntry[] = records.map((input) => {
+      const source = typeof input.data === 'string' ? new Blob([input.data], { type: 'text/plain' }) : input.data;
+      return {
+        id: `file-${nextId++}`, fileName: input.name, sizeBytes: source.size, source, sha256: null, group: input.group,
+        status: 'queued', progress: 0, error: null, measurement: null, warnings: [], overrides: input.overrides,
+      };
+    });
+    const preset = Object.fromEntries(entries.flatMap((e, k) => (records[k]?.fileSettings ? [[e.id, records[k].fileSettings]] : [])));
+    set((s) => ({
+      files: { ...s.files, ...Object.fromEntries(entries.map((e) => [e.id, e])) },
+      fileOrder: [...s.fileOrder, ...entries.map((e) => e.id)],
+      fileSettings: { ...s.fileSettings, ...preset },
+      importBatch: { done: s.importBatch?.done ?? 0, total: (s.importBatch?.total ?? 0) + entries.length },
+    }));
+    await Promise.all(entries.map((e) => enqueue(e.id, e.overrides).then(() => set((s) => ({
+      importBatch: s.importBatch ? { ...s.importBatch, done: s.importBatch.done + 1 } : null,
+    })))));
+    set((s) => (s.importBatch && s.importBatch.done >= s.importBatch.total ? { importBatch: null } : {}));
+    const failed = entries.filter((e) => get().files[e.id]?.status === 'error').map((e) => e.fileName);
+    if (failed.length > 0) {
+      const names = failed.length > 3 ? `${failed.slice(0, 3).join(', ')} and ${failed.length - 3} more` : failed.join(', ');
+      set({ notice: `${failed.length} of ${entries.length} file${entries.length === 1 ? '' : 's'} could not be read (${names}); the reason is shown beside each file. Everything else stays loaded.` });
+    }
+    return entries.map((e) => e.id);
+  }
+
   return {
     files: {},
     fileOrder: [],
     importBatch: null,
     remembered: [],
 
-    async addFiles(inputs: FileInput[], group = DEFAULT_GROUP) {
-      const entries: FileEntry[] = inputs.map((input) => {
-        const source = typeof input.data === 'string' ? new Blob([input.data], { type: 'text/plain' }) : input.data;
-        return {
-          id: `file-${nextId++}`, fileName: input.name, sizeBytes: source.size, source, sha256: null, group,
-          status: 'queued', progress: 0, error: null, measurement: null, warnings: [], overrides: {},
-        };
-      });
-      set((s) => ({
-        files: { ...s.files, ...Object.fromEntries(entries.map((e) => [e.id, e])) },
-        fileOrder: [...s.fileOrder, ...entries.map((e) => e.id)],
-        importBatch: { done: s.importBatch?.done ?? 0, total: (s.importBatch?.total ?? 0) + entries.length },
-      }));
-      await Promise.all(entries.map((e) => enqueue(e.id, {}).then(() => set((s) => ({
-        importBatch: s.importBatch ? { ...s.importBatch, done: s.importBatch.done + 1 } : null,
-      })))));
-      set((s) => (s.importBatch && s.importBatch.done >= s.importBatch.total ? { importBatch: null } : {}));
-      const failed = entries.filter((e) => get().files[e.id]?.status === 'error').map((e) => e.fileName);
-      if (failed.length > 0) {
-        const names = failed.length > 3 ? `${failed.slice(0, 3).join(', ')} and ${failed.length - 3} more` : failed.join(', ');
-        set({ notice: `${failed.length} of ${entries.length} file${entries.length === 1 ? '' : 's'} could not be read (${names}); the reason is shown beside each file. Everything else stays loaded.` });
-      }
-      return entries.map((e) => e.id);
+    addFiles(inputs: FileInput[], group = DEFAULT_GROUP) {
+      return restoreFiles(inputs.map((input) => ({ ...input, group, overrides: {}, fileSettings: null })));
     },
+
+    restoreFiles(records) {
+      return restoreFiles(records);
+    },
+
 
     async addUpload(batches) {
       const taken = new Set(Object.values(get().files).map((f) => f?.group));
@@ -150,11 +162,22 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       return { ids, groups: plan.map((p) => p.group) };
     },
 
+    newWorkspace() {
+      get().record(true);
+      set({
+        files: {}, fileOrder: [], results: {}, series: {}, remembered: [], fileSettings: {}, seriesCells: {},
+        selectedFileId: null, selectedGroup: null, importBatch: null,
+        notice: 'New workspace: every file and series was cleared (Undo brings them back).',
+      });
+    },
+
     reimportFile(id, overrides) {
       return enqueue(id, overrides);
     },
 
     removeFile(id) {
+      if (!get().files[id]) return;
+      get().record(true);
       const group = get().files[id]?.group;
       const cellBefore = group ? resolveCell(get(), group).cell : null;
       set((s) => {
@@ -171,6 +194,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       const before = get().files[id]?.group;
       const after = group.trim() || DEFAULT_GROUP;
       if (before === after) return;
+      get().record(true);
       patch(id, { group: after });
       if (before) get().scheduleGroup(before);
       get().scheduleGroup(after);

@@ -82,6 +82,24 @@ export function seriesOptionsOf(state: RunSources, group: string): { cell: CellV
 }
 
 /**
+ * What the worker needs to analyse one file as the whole run would: the file, and when its
+ * series' internal standard is measured, the files the standard is searched in (named file, or
+ * the series' own files); only the one file's result is asked back.
+ */
+export function fileRunRequest(state: RunSources, id: string): { run: RunInput; only: string[] } {
+  const file = state.files[id];
+  if (!file) return { run: runInputOf(state, []), only: [] };
+  const std = resolveSeriesCell(state, file.group).cell;
+  let ids = [id];
+  if (std.internalStandardNearV !== null && std.fileReference !== 'Fc') {
+    const named = std.internalStandardFile;
+    const helpers = state.fileOrder.filter((f) => f !== id && (named ? state.files[f]?.fileName === named : state.files[f]?.group === file.group));
+    ids = [id, ...helpers];
+  }
+  return { run: runInputOf(state, ids), only: [file.fileName] };
+}
+
+/**
  * The run input of the given files (default: every loaded file), each series with its own cell.
  * A series that cannot be put on the display scale stays on its recording scale, with a warning,
  * exactly as the screen shows it.

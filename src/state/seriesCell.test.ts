@@ -10,7 +10,7 @@ import { createInThreadClient } from '../worker/inThreadClient';
 import { displayScale } from './display';
 import { runInputOf } from './runInput';
 import { resolveCell, selectSeriesCell } from './seriesCell';
-import { loadSessionText, saveSessionText } from './sessionActions';
+import { openSessionText, saveSessionText } from './sessionActions';
 import { createHalfwaveStore } from './store';
 import { simulatedCsv } from './testSupport';
 import { planTheory } from './theory';
@@ -167,7 +167,7 @@ describe('sessions carry the series’ cells', () => {
     await loadSeries(store, 'film');
     await store.getState().updateSeriesCell('film', (own) => ({ ...own, areaCm2: 0.0314, alpha: null, fileReference: 'SCE' }));
     const fresh = newStore();
-    await loadSessionText(fresh, await saveSessionText(store, true));
+    await openSessionText(fresh, await saveSessionText(store, true));
     expect(fresh.getState().seriesCells).toEqual({ film: { areaCm2: 0.0314, alpha: null, fileReference: 'SCE' } });
     expect(resolveCell(fresh.getState(), 'film').cell.areaCm2).toBe(0.0314);
     expect(resolveCell(fresh.getState(), 'disk').cell.areaCm2).toBe(0.0707);
@@ -181,7 +181,7 @@ describe('sessions carry the series’ cells', () => {
     doc.settings.chemistry.areaCm2 = 0.05;
     doc.settings.chemistry.temperatureC = 20;
     const fresh = newStore();
-    await loadSessionText(fresh, JSON.stringify(doc));
+    await openSessionText(fresh, JSON.stringify(doc));
     expect(fresh.getState().seriesCells).toEqual({});
     expect(resolveCell(fresh.getState(), 'disk').cell).toMatchObject({ areaCm2: 0.05, temperatureC: 20 });
   });
@@ -190,7 +190,7 @@ describe('sessions carry the series’ cells', () => {
     const store = newStore();
     const doc = JSON.parse(await saveSessionText(store, false));
     doc.settings.seriesCells = { x: { areaCm2: 'big', electronCount: 2, fileReference: 'nowhere', alpha: null } };
-    await loadSessionText(store, JSON.stringify(doc));
+    await openSessionText(store, JSON.stringify(doc));
     expect(store.getState().seriesCells).toEqual({ x: { electronCount: 2, alpha: null } });
   });
 });

@@ -1,33 +1,44 @@
 /**
- * Session save/restore and autosave. A session names every file with its SHA-256, so when the
- * same bytes are loaded again (dropped by the user, or from raw data inside the session) they get
- * back their group, import overrides and per-file analysis settings. Per-series cell values are
- * saved inside `settings.seriesCells`; a session written before cells belonged to series has none,
- * and its global cell values become the defaults every series falls back to.
+ * Sessions and autosave. A session names every file with its SHA-256 and keeps, in workspace
+ * order, its series, import overrides and own peak windows and baselines, beside the settings,
+ * every series' cell values and the display choices. Opening a session replaces the workspace
+ * (undoable, never a silent merge); files that came with their bytes are read again, the others
+ * wait (by SHA-256) until the user loads them. Autosave writes the same session text and every
+ * file's bytes to the browser's storage, so a reload brings the whole workspace back.
  */
-import { decodeBase64, encodeBase64, parseSession, serializeSession, type SessionDocument, type SessionFileRecord } from '../io/session';
-import { mergeSeriesCells, mergeSettings } from './settings';
-import type { StorageAdapter } from './storage';
+import { decodeBase64, encodeBase64, parseSession, serializeSession, SESSION_FORMAT, SESSION_VERSION, type SessionDocument, type SessionFileRecord } from '../io/session';
+import { defaultSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from './settings';
+import { isQuotaError, type StorageAdapter } from './storage';
 import type { HalfwaveState, HalfwaveStore } from './types';
 
-export const AUTOSAVE_KEY = 'halfwave.autosave.v1';
+export const AUTOSAVE_KEY = 'halfwave.autosave.v2';
+
+function recordOf(state: HalfwaveState, id: string): SessionFileRecord | null {
+  const f = state.files[id];
+  if (!f || !f.measurement) return null;
+  return { fileName: f.fileName, sha256: f.sha256, sizeBytes: f.sizeBytes, group: f.group, overrides: f.overrides, analysis: { ...(state.fileSettings[id] ?? {}) } };
+}
 
 export async function buildSessionDocument(state: HalfwaveState, includeRawData: boolean, now = new Date()): Promise<SessionDocument> {
   const files: SessionFileRecord[] = [];
   for (const id of state.fileOrder) {
-    const f = state.files[id];
-    if (!f || !f.measurement) continue;
-    const record: SessionFileRecord = {
-      fileName: f.fileName, sha256: f.sha256, sizeBytes: f.sizeBytes, group: f.group,
-      overrides: f.overrides, analysis: { ...(state.fileSettings[id] ?? {}) },
-    };
-    if (includeRawData) record.dataBase64 = encodeBase64(new Uint8Array(await f.source.arrayBuffer()));
+    const record = recordOf(state, id);
+    if (!record) continue;
+    if (includeRawData) record.dataBase64 = encodeBase64(new Uint8Array(await (state.files[id] as { source: Blob }).source.arrayBuffer()));
     files.push(record);
   }
+  // Files still waiting for their bytes stay in the session, so saving again loses nothing.
+  files.push(...state.remembered);
+  const loaded = state.fileOrder.filter((id) => state.files[id]?.measurement);
   return {
-    format: 'halfwave-session', version: 1, savedAt: now.toISOString(),
+    format: SESSION_FORMAT, version: SESSION_VERSION, savedAt: now.toISOString(),
     settings: { ...state.settings, seriesCells: state.seriesCells },
-    view: { convention: state.convention, showSmoothed: state.showSmoothed, showBaselines: state.showBaselines },
+    view: {
+      convention: state.convention, showSmoothed: state.showSmoothed, showBaselines: state.showBaselines, showCompanions: state.showCompanions,
+      selectedCycle: state.selectedCycle, mainView: state.mainView, selectedFile: state.selectedFileId ? loaded.indexOf(state.selectedFileId) : -1,
+      selectedGroup: state.selectedGroup,
+    },
+    workbench: {},
     files,
   };
 }
@@ -37,59 +48,119 @@ export async function saveSessionText(store: HalfwaveStore, includeRawData: bool
 }
 
 /**
- * Applies a session: settings and view at once; files carrying raw data are loaded; the others
- * wait (by SHA-256) until the user loads them. Returns the names of files still waiting.
- * Throws SessionError before changing anything when the text is not a session.
+ * Replaces the workspace with a parsed session (undoable). `bytesOf` gives a record's original
+ * bytes when they are at hand (in the session, or in the browser's storage). Returns the names of
+ * files that still wait for their bytes.
  */
-export async function loadSessionText(store: HalfwaveStore, text: string): Promise<string[]> {
-  const doc = parseSession(text);
+export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocument, bytesOf: (r: SessionFileRecord) => Uint8Array | null): Promise<string[]> {
   const s = store.getState();
+  s.record(true);
   const view = doc.view;
+  const withData = doc.files.map((r) => ({ r, bytes: bytesOf(r) }));
+  const waiting = withData.filter((x) => x.bytes === null).map((x) => x.r);
   store.setState({
-    settings: mergeSettings(s.settings, doc.settings),
-    seriesCells: { ...s.seriesCells, ...mergeSeriesCells(doc.settings.seriesCells) },
+    files: {}, fileOrder: [], results: {}, series: {}, fileSettings: {}, importBatch: null, selectedFileId: null,
+    settings: mergeSettings(defaultSettings, doc.settings),
+    seriesCells: mergeSeriesCells(doc.settings.seriesCells),
     convention: view.convention === 'polarographic' ? 'polarographic' : 'iupac',
     showSmoothed: view.showSmoothed === true,
     showBaselines: view.showBaselines !== false,
-    remembered: [...doc.files, ...s.remembered.filter((r) => !doc.files.some((d) => d.sha256 === r.sha256))],
+    showCompanions: view.showCompanions === true,
+    selectedCycle: Number.isInteger(view.selectedCycle) && (view.selectedCycle as number) >= 0 ? (view.selectedCycle as number) : 1,
+    mainView: view.mainView === 'series' ? 'series' : 'trace',
+    selectedGroup: typeof view.selectedGroup === 'string' ? view.selectedGroup : null,
+    remembered: waiting,
   });
-  const withData = doc.files.filter((f) => f.dataBase64 !== undefined);
-  const loaded = new Set(Object.values(s.files).map((f) => f.sha256));
-  const waiting = doc.files.filter((f) => f.dataBase64 === undefined && !loaded.has(f.sha256)).map((f) => f.fileName);
-  for (const f of withData) {
-    const bytes = decodeBase64(f.dataBase64 as string);
-    await store.getState().addFiles([{ name: f.fileName, data: new Blob([bytes as Uint8Array<ArrayBuffer>]) }], f.group);
-  }
-  await store.getState().analyzeAll();
-  return waiting;
+  const ids = await store.getState().restoreFiles(withData.flatMap(({ r, bytes }) => (bytes ? [{
+    name: r.fileName, data: new Blob([bytes as Uint8Array<ArrayBuffer>]), group: r.group, overrides: r.overrides,
+    fileSettings: Object.keys(r.analysis).length ? mergeFileSettings(r.analysis) : null,
+  }] : [])));
+  const chosen = typeof view.selectedFile === 'number' ? ids[view.selectedFile] : undefined;
+  const selectedCycle = store.getState().selectedCycle;
+  if (chosen || ids[0]) store.getState().selectFile((chosen ?? ids[0]) as string);
+  store.setState({ selectedCycle });
+  return waiting.map((r) => r.fileName);
 }
 
-/** Restores the last autosaved settings, if any. Unreadable autosave is ignored (and replaced). */
+/** Opens session text (throws SessionError before changing anything when it is not a usable session). */
+export async function openSessionText(store: HalfwaveStore, text: string): Promise<string[]> {
+  const doc = parseSession(text);
+  return openSessionDocument(store, doc, (r) => (r.dataBase64 === undefined ? null : decodeBase64(r.dataBase64)));
+}
+
+/** Restores the last autosaved workspace, files included (an empty one too). False when there is none (or it cannot be read). */
 export async function restoreAutosave(store: HalfwaveStore, storage: StorageAdapter): Promise<boolean> {
   const text = await storage.read(AUTOSAVE_KEY).catch(() => null);
   if (!text) return false;
+  let doc: SessionDocument;
   try {
-    await loadSessionText(store, text);
-    return true;
+    doc = parseSession(text);
   } catch {
     return false;
   }
+  const bytes = new Map<string, Uint8Array>();
+  for (const r of doc.files) {
+    const b = r.sha256 ? await storage.readBytes(r.sha256).catch(() => null) : null;
+    if (b && r.sha256) bytes.set(r.sha256, b);
+  }
+  const waiting = await openSessionDocument(store, doc, (r) => (r.sha256 ? (bytes.get(r.sha256) ?? null) : null));
+  // Restoring is not an edit: there is nothing to undo before it.
+  store.setState({ past: [], future: [] });
+  if (waiting.length) store.setState({ notice: `Restored the last workspace; ${waiting.length} file${waiting.length === 1 ? ' was' : 's were'} not in the browser's storage (${waiting.slice(0, 3).join(', ')}${waiting.length > 3 ? ', …' : ''}): load ${waiting.length === 1 ? 'it' : 'them'} again to continue.` });
+  return true;
 }
 
-/** Writes the session (without raw data) shortly after each change of what it records. */
+/** Saves the files' bytes that are not stored yet and forgets those no file uses; returns the names not saved for lack of space. */
+async function saveBytes(state: HalfwaveState, storage: StorageAdapter, stored: Set<string>): Promise<string[]> {
+  const wanted = new Map<string, { name: string; source: Blob }>();
+  for (const id of state.fileOrder) {
+    const f = state.files[id];
+    if (f?.sha256 && f.measurement) wanted.set(f.sha256, { name: f.fileName, source: f.source });
+  }
+  const notSaved: string[] = [];
+  for (const [sha, f] of wanted) {
+    if (stored.has(sha)) continue;
+    try {
+      await storage.writeBytes(sha, new Uint8Array(await f.source.arrayBuffer()));
+      stored.add(sha);
+    } catch (err) {
+      if (!isQuotaError(err)) throw err;
+      notSaved.push(f.name);
+    }
+  }
+  const keep = new Set([...wanted.keys(), ...state.remembered.flatMap((r) => (r.sha256 ? [r.sha256] : []))]);
+  for (const sha of [...stored]) {
+    if (keep.has(sha)) continue;
+    await storage.removeBytes(sha);
+    stored.delete(sha);
+  }
+  return notSaved;
+}
+
+/** Writes the session and the files' bytes shortly after each change of what a session records. */
 export function attachAutosave(store: HalfwaveStore, storage: StorageAdapter, delayMs = 800): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
+  let stored: Set<string> | null = null;
+  const save = async () => {
+    stored ??= new Set(await storage.byteKeys().catch(() => []));
+    const state = store.getState();
+    const notSaved = await saveBytes(state, storage, stored);
+    await storage.write(AUTOSAVE_KEY, await saveSessionText(store, false));
+    if (notSaved.length) {
+      store.setState({ notice: `The browser's storage is full: ${notSaved.length} file${notSaved.length === 1 ? ' was' : 's were'} not kept for the next visit (${notSaved.slice(0, 3).join(', ')}${notSaved.length > 3 ? ', …' : ''}). Everything saved before is still there; save a session with data to keep the rest.` });
+    }
+  };
   const unsubscribe = store.subscribe((now, before) => {
     const changed = now.settings !== before.settings || now.fileSettings !== before.fileSettings || now.seriesCells !== before.seriesCells
-      || now.files !== before.files || now.convention !== before.convention
+      || now.files !== before.files || now.fileOrder !== before.fileOrder || now.convention !== before.convention || now.remembered !== before.remembered
       || now.showSmoothed !== before.showSmoothed || now.showBaselines !== before.showBaselines;
     if (!changed) return;
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => {
       timer = null;
-      void saveSessionText(store, false)
-        .then((text) => storage.write(AUTOSAVE_KEY, text))
-        .catch((err: unknown) => store.setState({ notice: `Autosave failed: ${(err as Error).message}` }));
+      void save().catch((err: unknown) => store.setState({
+        notice: isQuotaError(err) ? "The browser's storage is full: the latest changes were not kept for the next visit; what was saved before is still there." : `Autosave failed: ${(err as Error).message}`,
+      }));
     }, delayMs);
   });
   return () => {

@@ -1,54 +1,80 @@
 /**
- * Small storage adapter behind autosave, so the store does not care whether text lands in
- * localStorage, in memory (tests) or elsewhere. Failures (quota, private mode) reject; the
- * caller shows them and keeps working.
+ * Where autosave keeps the workspace between visits: the session text (settings, series, picks)
+ * and each file's original bytes under its SHA-256. The browser's IndexedDB holds them (through
+ * idb-keyval: large binary values, no size limit beyond the origin's quota); tests use memory.
+ * Failures (quota, private mode) reject with the platform's error; the caller reports what was not
+ * saved and keeps working, and nothing already saved is removed by a failed write.
  */
+import { createStore, del, get, keys, set, type UseStore } from 'idb-keyval';
+
 export interface StorageAdapter {
   read(key: string): Promise<string | null>;
   write(key: string, text: string): Promise<void>;
   remove(key: string): Promise<void>;
+  readBytes(key: string): Promise<Uint8Array | null>;
+  writeBytes(key: string, bytes: Uint8Array): Promise<void>;
+  removeBytes(key: string): Promise<void>;
+  /** Keys of every stored byte record. */
+  byteKeys(): Promise<string[]>;
 }
 
-export function localStorageAdapter(storage: Storage): StorageAdapter {
-  return {
-    read: (key) => Promise.resolve(storage.getItem(key)),
-    write: (key, text) => new Promise((resolve, reject) => {
-      try {
-        storage.setItem(key, text);
-        resolve();
-      } catch (err) {
-        reject(err instanceof Error ? err : new Error(String(err)));
-      }
-    }),
-    remove: (key) => Promise.resolve(storage.removeItem(key)),
-  };
-}
+const BYTES = 'bytes:';
 
-export function memoryStorageAdapter(initial: Record<string, string> = {}): StorageAdapter & { data: Map<string, string> } {
+export function memoryStorageAdapter(initial: Record<string, string> = {}): StorageAdapter & { data: Map<string, string>; bytes: Map<string, Uint8Array>; quotaBytes: number } {
   const data = new Map(Object.entries(initial));
-  return {
+  const bytes = new Map<string, Uint8Array>();
+  const adapter = {
     data,
-    read: (key) => Promise.resolve(data.get(key) ?? null),
-    write: (key, text) => {
+    bytes,
+    /** Total bytes the memory store accepts before it rejects as a full disk would. */
+    quotaBytes: Infinity,
+    read: (key: string) => Promise.resolve(data.get(key) ?? null),
+    write: (key: string, text: string) => {
       data.set(key, text);
       return Promise.resolve();
     },
-    remove: (key) => {
+    remove: (key: string) => {
       data.delete(key);
       return Promise.resolve();
     },
+    removeBytes: (key: string) => {
+      bytes.delete(key);
+      return Promise.resolve();
+    },
+    readBytes: (key: string) => Promise.resolve(bytes.get(key) ?? null),
+    writeBytes: (key: string, b: Uint8Array) => {
+      const used = [...bytes.values()].reduce((n, x) => n + x.length, 0);
+      if (used + b.length > adapter.quotaBytes) return Promise.reject(new DOMException('the storage quota is used up', 'QuotaExceededError'));
+      bytes.set(key, b.slice());
+      return Promise.resolve();
+    },
+    byteKeys: () => Promise.resolve([...bytes.keys()]),
+  };
+  return adapter;
+}
+
+export function indexedDbStorageAdapter(store: UseStore = createStore('halfwave', 'workspace')): StorageAdapter {
+  return {
+    read: async (key) => (await get<string>(key, store)) ?? null,
+    write: (key, text) => set(key, text, store),
+    remove: (key) => del(key, store),
+    readBytes: async (key) => {
+      const v = await get<Uint8Array | ArrayBuffer>(BYTES + key, store);
+      return v === undefined ? null : v instanceof Uint8Array ? v : new Uint8Array(v);
+    },
+    writeBytes: (key, b) => set(BYTES + key, b, store),
+    removeBytes: (key) => del(BYTES + key, store),
+    byteKeys: async () => (await keys<IDBValidKey>(store)).flatMap((k) => (typeof k === 'string' && k.startsWith(BYTES) ? [k.slice(BYTES.length)] : [])),
   };
 }
 
-/** The platform's localStorage when usable, else memory (so autosave never breaks the app). */
+/** IndexedDB when the platform has it, else memory (so autosave never breaks the app). */
 export function defaultStorageAdapter(): StorageAdapter {
-  try {
-    const ls = globalThis.localStorage;
-    const probe = '__halfwave_probe__';
-    ls.setItem(probe, '1');
-    ls.removeItem(probe);
-    return localStorageAdapter(ls);
-  } catch {
-    return memoryStorageAdapter();
-  }
+  return typeof indexedDB === 'undefined' ? memoryStorageAdapter() : indexedDbStorageAdapter();
+}
+
+/** True for the platform's "storage is full" errors. */
+export function isQuotaError(err: unknown): boolean {
+  const name = (err as { name?: string } | null)?.name ?? '';
+  return name === 'QuotaExceededError' || name === 'NS_ERROR_DOM_QUOTA_REACHED' || /quota/i.test((err as Error | null)?.message ?? '');
 }

@@ -5,7 +5,7 @@
  */
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
-import { AUTOSAVE_KEY, attachAutosave, loadSessionText, restoreAutosave, saveSessionText } from './sessionActions';
+import { AUTOSAVE_KEY, attachAutosave, openSessionText, restoreAutosave, saveSessionText } from './sessionActions';
 import { resolveCell } from './seriesCell';
 import { defaultSettings } from './settings';
 import { memoryStorageAdapter } from './storage';
@@ -111,7 +111,7 @@ describe('sessions', () => {
     const text = await saveSessionText(store, true);
 
     const fresh = newStore();
-    const waiting = await loadSessionText(fresh, text);
+    const waiting = await openSessionText(fresh, text);
     expect(waiting).toEqual([]);
     const s = fresh.getState();
     expect(s.settings.chemistry.electronCount).toBe(2);
@@ -123,7 +123,7 @@ describe('sessions', () => {
   it('lists the files a session without raw data is waiting for', async () => {
     const store = newStore();
     await store.getState().addFiles([{ name: 'sim.csv', data: csv }]);
-    const waiting = await loadSessionText(newStore(), await saveSessionText(store, false));
+    const waiting = await openSessionText(newStore(), await saveSessionText(store, false));
     expect(waiting).toEqual(['sim.csv']);
   });
 
@@ -178,5 +178,131 @@ describe('uploads become their own series', () => {
     expect(cell.cell.areaCm2).toBe(defaultSettings.chemistry.areaCm2);
     expect(cell.cell.resistanceOhm).toBe(0);
     expect(cell.origin.areaCm2).toBe('default');
+  });
+});
+
+/** Every number the screen holds, keyed by file name and series, for exact comparisons. */
+function numbersOf(store: HalfwaveStore): Record<string, unknown> {
+  const s = store.getState();
+  const out: Record<string, unknown> = {};
+  for (const id of s.fileOrder) {
+    const f = s.files[id];
+    out[`file ${f?.fileName} (${f?.group})`] = s.results[id]?.run?.analysis.cycles.map((c) => c.couples.map((k) => [k.epaV, k.epcV, k.eHalfV, k.deltaEpV, k.ipaA, k.ipcA, k.ratio]));
+  }
+  for (const g of s.groups()) out[`series ${g}`] = s.series[g]?.result?.analysis.couples.map((c) => [c.eHalfV, c.forwardFit?.slope, c.diffusion?.diffusionCm2PerS, c.rateConstant?.k0CmPerS]);
+  return out;
+}
+
+async function settle(store: HalfwaveStore): Promise<void> {
+  for (const g of store.getState().groups()) await store.getState().analyzeGroup(g);
+}
+
+describe('sessions round-trip exactly and replace the workspace', () => {
+  async function workspace(): Promise<HalfwaveStore> {
+    const store = newStore();
+    const a = await store.getState().addUpload([{ folder: 'run A', inputs: [{ name: 'a-50.csv', data: simulatedCsv(0.05) }, { name: 'a-200.csv', data: simulatedCsv(0.2) }] }]);
+    await store.getState().addUpload([{ folder: 'run B', inputs: [{ name: 'b-100.csv', data: simulatedCsv(0.1) }] }]);
+    await store.getState().updateSeriesCell('run A', (own) => ({ ...own, areaCm2: 0.0314, resistanceOhm: 50 }));
+    await store.getState().updateFileSettings(a.ids[1] as string, (f) => ({
+      ...f, peakWindows: [{ direction: 'cathodic', fromV: -0.2, toV: 0.1 }], baselines: [{ direction: 'anodic', fromV: -0.05, toV: 0.15, method: 'polynomial' }],
+    }));
+    await store.getState().updateSettings((s) => ({ ...s, reference: { ...s.reference, displayReference: 'SCE' } }));
+    await store.getState().setConvention('polarographic');
+    store.getState().selectFile(a.ids[1] as string);
+    await settle(store);
+    return store;
+  }
+
+  it('save with data, open in a fresh workspace: files, series, cells, windows, baselines, scale, selection and every number identical', async () => {
+    const store = await workspace();
+    const fresh = newStore();
+    expect(await openSessionText(fresh, await saveSessionText(store, true))).toEqual([]);
+    await settle(fresh);
+    const [s, t] = [store.getState(), fresh.getState()];
+    expect(t.fileOrder.map((id) => [t.files[id]?.fileName, t.files[id]?.group])).toEqual(s.fileOrder.map((id) => [s.files[id]?.fileName, s.files[id]?.group]));
+    expect(t.fileOrder.map((id) => t.fileSettings[id] ?? null)).toEqual(s.fileOrder.map((id) => s.fileSettings[id] ?? null));
+    expect(t.seriesCells).toEqual(s.seriesCells);
+    expect(t.settings).toEqual(s.settings);
+    expect(t.convention).toBe('polarographic');
+    expect(t.files[t.selectedFileId as string]?.fileName).toBe('a-200.csv');
+    expect(numbersOf(fresh)).toEqual(numbersOf(store));
+  });
+
+  it('opening replaces the workspace, never merges, and undo brings the previous workspace back', async () => {
+    const store = await workspace();
+    const text = await saveSessionText(store, true);
+    const before = numbersOf(store);
+    await openSessionText(store, text);
+    await settle(store);
+    expect(store.getState().fileOrder).toHaveLength(3);
+    expect(numbersOf(store)).toEqual(before);
+    const other = newStore();
+    await other.getState().addFiles([{ name: 'x.csv', data: csv }], 'other');
+    await openSessionText(other, text);
+    expect(Object.values(other.getState().files).map((f) => f.fileName)).toEqual(['a-50.csv', 'a-200.csv', 'b-100.csv']);
+    await other.getState().undo();
+    expect(Object.values(other.getState().files).map((f) => f.fileName)).toEqual(['x.csv']);
+    await other.getState().redo();
+    expect(other.getState().fileOrder).toHaveLength(3);
+  });
+
+  it('a session that is not usable changes nothing', async () => {
+    const store = await workspace();
+    const before = numbersOf(store);
+    await expect(openSessionText(store, '{"format":"halfwave-session","version":2,"files":[],"settings":{"__proto__":{}}}')).rejects.toThrow(/refused/);
+    await expect(openSessionText(store, (await saveSessionText(store, false)).slice(0, 200))).rejects.toThrow(/ends too early|not valid JSON/);
+    expect(store.getState().past.at(-1)?.workspace).toBeUndefined();
+    expect(numbersOf(store)).toEqual(before);
+  });
+
+  it('new workspace clears everything (the method settings stay) and is undoable; so is the sign convention', async () => {
+    const store = await workspace();
+    const before = numbersOf(store);
+    store.getState().newWorkspace();
+    expect(store.getState().fileOrder).toEqual([]);
+    expect(store.getState().seriesCells).toEqual({});
+    expect(store.getState().settings.reference.displayReference).toBe('SCE');
+    await store.getState().undo();
+    await settle(store);
+    expect(numbersOf(store)).toEqual(before);
+    expect(store.getState().convention).toBe('polarographic');
+    await store.getState().undo();
+    expect(store.getState().convention).toBe('iupac');
+  });
+});
+
+describe('autosave keeps the files themselves', () => {
+  it('after a reload the whole workspace is back, numbers included', async () => {
+    const store = newStore();
+    const storage = memoryStorageAdapter();
+    const detach = attachAutosave(store, storage, 1);
+    const up = await store.getState().addUpload([{ folder: 'kept', inputs: [{ name: 'k-50.csv', data: simulatedCsv(0.05) }, { name: 'k-100.csv', data: simulatedCsv(0.1) }] }]);
+    await store.getState().updateFileSettings(up.ids[0] as string, (f) => ({ ...f, peakWindows: [{ direction: 'anodic', fromV: -0.1, toV: 0.2 }] }));
+    await settle(store);
+    await vi.waitFor(() => expect(storage.bytes.size).toBe(2), { timeout: 20_000, interval: 5 });
+    await vi.waitFor(() => expect(JSON.parse(storage.data.get(AUTOSAVE_KEY) ?? '{"files":[]}').files[0]?.analysis?.peakWindows).toHaveLength(1), { timeout: 20_000, interval: 5 });
+    detach();
+    const reloaded = newStore();
+    expect(await restoreAutosave(reloaded, storage)).toBe(true);
+    await settle(reloaded);
+    expect(reloaded.getState().remembered).toEqual([]);
+    expect(numbersOf(reloaded)).toEqual(numbersOf(store));
+  });
+
+  it('when storage is full it says which files were not kept, and keeps what was saved', async () => {
+    const store = newStore();
+    const storage = memoryStorageAdapter();
+    const detach = attachAutosave(store, storage, 1);
+    await store.getState().addFiles([{ name: 'first.csv', data: simulatedCsv(0.05) }], 'a');
+    await vi.waitFor(() => expect(storage.bytes.size).toBe(1), { timeout: 20_000, interval: 5 });
+    storage.quotaBytes = [...storage.bytes.values()][0]!.length + 10;
+    await store.getState().addFiles([{ name: 'second.csv', data: simulatedCsv(0.2) }], 'a');
+    await vi.waitFor(() => expect(store.getState().notice ?? '').toMatch(/storage is full.*second\.csv/), { timeout: 20_000, interval: 5 });
+    detach();
+    expect(storage.bytes.size).toBe(1);
+    const reloaded = newStore();
+    await restoreAutosave(reloaded, storage);
+    expect(Object.values(reloaded.getState().files).map((f) => f.fileName)).toEqual(['first.csv']);
+    expect(reloaded.getState().remembered.map((r) => r.fileName)).toEqual(['second.csv']);
   });
 });

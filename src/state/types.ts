@@ -45,6 +45,14 @@ export interface FileInput {
   data: Blob | string;
 }
 
+/** A file put back with what it had: its series, import overrides and own windows and baselines. */
+export interface RestoredFile extends FileInput {
+  group: string;
+  overrides: ImportOverrides;
+  /** Null: the file has no choices of its own yet (a session record may still give them by SHA-256). */
+  fileSettings: FileAnalysisSettings | null;
+}
+
 /** Files of one upload that came from one folder (null: picked or dropped loose). */
 export interface UploadBatch {
   folder: string | null;
@@ -59,6 +67,8 @@ export interface FilesSlice {
   /** Session records waiting for their file (matched by SHA-256 when it is loaded). */
   remembered: SessionFileRecord[];
   addFiles(inputs: FileInput[], group?: string): Promise<string[]>;
+  /** Adds files as a session had them, in order; returns their ids. */
+  restoreFiles(records: RestoredFile[]): Promise<string[]>;
   /**
    * An upload (a drop, a file pick, a folder pick): each folder, and inside it each set of files
    * with a common name stem, becomes a new series with a unique name that starts from the defaults
@@ -68,6 +78,8 @@ export interface FilesSlice {
   reimportFile(id: string, overrides: ImportOverrides): Promise<void>;
   removeFile(id: string): void;
   setFileGroup(id: string, group: string): void;
+  /** Clears every file, series, cell value and per-file choice; the method settings stay (undoable). */
+  newWorkspace(): void;
 }
 
 export interface AnalysisEntry {
@@ -112,19 +124,37 @@ export interface ViewSlice {
   mainView: 'trace' | 'series';
   safetyOpen: boolean;
   notice: string | null;
-  setView(patch: Partial<Omit<ViewSlice, 'setView' | 'selectFile'>>): void;
+  setView(patch: Partial<Omit<ViewSlice, 'setView' | 'selectFile' | 'setConvention' | 'convention'>>): void;
+  /** The sign convention of the display and the results (undoable). */
+  setConvention(convention: CurrentDisplay): Promise<void>;
   selectFile(id: string | null): void;
+}
+
+/** The files of a workspace and what was computed from them, kept by a step that replaced them. */
+export interface WorkspaceSnapshot {
+  files: Record<string, FileEntry>;
+  fileOrder: string[];
+  results: Record<string, AnalysisEntry>;
+  series: Record<string, SeriesEntry>;
+  remembered: SessionFileRecord[];
+  selectedFileId: string | null;
+  selectedGroup: string | null;
 }
 
 export interface HistorySnapshot {
   settings: AnalysisSettings;
   fileSettings: Record<string, FileAnalysisSettings>;
   seriesCells: Record<string, Partial<SeriesCell>>;
+  convention: CurrentDisplay;
+  /** Present when the step replaced the workspace (new workspace, opened session). */
+  workspace?: WorkspaceSnapshot;
 }
 
 export interface HistorySlice {
   past: HistorySnapshot[];
   future: HistorySnapshot[];
+  /** Keeps the state before a change for undo; `workspace` also keeps the files and results. */
+  record(workspace?: boolean): void;
   undo(): Promise<void>;
   redo(): Promise<void>;
 }

@@ -17,6 +17,13 @@ export const createViewSlice: SliceCreator<ViewSlice> = (set, get) => ({
   setView(patch) {
     set(patch);
   },
+  setConvention(convention) {
+    if (get().convention === convention) return Promise.resolve();
+    get().record();
+    // The analysis is in the IUPAC convention whatever is shown; only the display and exports change.
+    set({ convention });
+    return Promise.resolve();
+  },
   selectFile(id) {
     // The chosen file's series becomes the one the Series view and the Cell panel are about.
     const group = id ? get().files[id]?.group : undefined;

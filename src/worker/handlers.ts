@@ -34,7 +34,7 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
     });
     return { ...result, sha256 };
   },
-  runFiles: (input) => analyzeRunFiles(input.run),
+  runFiles: (input) => analyzeRunFiles(input.run, input.only),
   runSeries: (input) => analyzeRunSeriesStep(input),
   export: (input) => ({ text: exportRun(input) }),
   simulate: (input) => {

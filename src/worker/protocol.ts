@@ -30,7 +30,8 @@ export interface RequestMap {
    * as analysed (iR-corrected and shifted) so the plot shows what was analysed.
    */
   runFiles: {
-    input: { run: RunInput };
+    /** `only`: the file names to return (the rest may hold an internal standard); all when absent. */
+    input: { run: RunInput; only?: string[] };
     output: RunFileResult[];
   };
   /** The per-series part of an analysis run over already analysed files (analyzeRunSeriesStep). */

@@ -15,7 +15,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../../src/cli/main';
 import type { RunContract } from '../../src/io';
 import { startApp } from '../../src/state/app';
-import { loadSessionText, saveSessionText } from '../../src/state/sessionActions';
+import { openSessionText, saveSessionText } from '../../src/state/sessionActions';
 import { memoryStorageAdapter } from '../../src/state/storage';
 import { createHalfwaveStore } from '../../src/state/store';
 import type { HalfwaveStore } from '../../src/state/types';
@@ -177,7 +177,7 @@ describe('the screen, the results sheet and analyze --json compute through one p
     probe.analysis = { peakWindows: [{ direction: 'cathodic', fromV: -0.35, toV: -0.05 }], baselines: [{ direction: 'anodic', fromV: -0.4, toV: 0, method: 'polynomial' }] };
     quasi.analysis = { peakWindows: [{ direction: 'anodic', fromV: 0.1, toV: 0.45 }], baselines: [] };
     const fresh = createHalfwaveStore({ client: createInThreadClient(), storage: null });
-    await loadSessionText(fresh, JSON.stringify(doc));
+    await openSessionText(fresh, JSON.stringify(doc));
     const names = readdirSync(DEMO).filter((n) => !n.endsWith('.md')).sort();
     await fresh.getState().addFiles(names.map((name) => ({ name, data: readFileSync(join(DEMO, name), 'utf8') })));
     const edited = await expectOnePath(fresh, 'edited');

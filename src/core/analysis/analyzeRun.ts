@@ -16,8 +16,9 @@ import { conversionContextOf, fileReference, settleInternalStandard } from './ru
 import { RUN_METHODS } from './runMethods';
 import type { AnalyzeRunResult, CellValues, MethodOptions, ReportOptions, RunFileResult, RunInput, RunSeriesResult } from './runTypes';
 
-function analyzeResolvedFiles(run: ResolvedRun): RunFileResult[] {
-  const results: RunFileResult[] = new Array(run.files.length);
+/** Every file's result, or only those named in `only` (the others serve as internal standards at most). */
+function analyzeResolvedFiles(run: ResolvedRun, only?: ReadonlySet<string>): RunFileResult[] {
+  const results: RunFileResult[] = [];
   const cellOf = new Map(run.series.flatMap((s) => s.fileIndices.map((i) => [i, s.cell] as const)));
   const recorded = { input: null, output: null, offsetV: 0, basis: [], typical: false, note: null };
   const firstPass = (i: number) => analyzeRunFile(run.files[i]!, cellOf.get(i)!, run.method, recorded).analysis;
@@ -26,15 +27,20 @@ function analyzeResolvedFiles(run: ResolvedRun): RunFileResult[] {
     settleInternalStandard(context, s.cell, run.files, s.fileIndices, firstPass);
     for (const i of s.fileIndices) {
       const file = run.files[i]!;
+      if (only && !only.has(file.input.fileName)) continue;
       results[i] = analyzeRunFile(file, s.cell, run.method, fileReference(file, s.cell, run.report, context));
     }
   }
-  return results;
+  return results.filter((r) => r !== undefined);
 }
 
-/** The per-file part of a run: each file's result, as analyzeRun computes it for the same input. */
-export function analyzeRunFiles(input: RunInput): RunFileResult[] {
-  return analyzeResolvedFiles(resolveRun(input));
+/**
+ * The per-file part of a run: each file's result (or only the files named in `only`, in run
+ * order), as analyzeRun computes it for the same input. The other files of the input are read
+ * only when an internal standard is measured in them.
+ */
+export function analyzeRunFiles(input: RunInput, only?: string[]): RunFileResult[] {
+  return analyzeResolvedFiles(resolveRun(input), only ? new Set(only) : undefined);
 }
 
 /** What the series step needs: the series' cell, the method, the report and its files' results. */

@@ -25,7 +25,7 @@ export function TopBar() {
         {(['iupac', 'polarographic'] as const).map((c) => (
           <button key={c} type="button" role="radio" aria-checked={convention === c} data-testid={`convention-${c}`}
             title={c === 'iupac' ? 'anodic current up, potential increasing to the right' : 'cathodic current up, potential increasing to the left'}
-            onClick={() => act.setView({ convention: c })}>
+            onClick={() => void act.setConvention(c)}>
             {c === 'iupac' ? 'IUPAC' : 'Polarographic'}
           </button>
         ))}
@@ -41,12 +41,13 @@ export function TopBar() {
         <span className="group-label">Session</span>
         <button type="button" data-testid="save-session" onClick={() => void save(false)} title="Settings, file names and checksums">Save</button>
         <button type="button" onClick={() => void save(true)} title="Also embeds the original files">Save + data</button>
-        <button type="button" onClick={() => sessionInput.current?.click()}>Open…</button>
+        <button type="button" onClick={() => sessionInput.current?.click()} title="Replaces the workspace with the session (Undo brings it back)">Open…</button>
+        <button type="button" data-testid="new-workspace" onClick={() => act.newWorkspace()} title="Clears every file and series (Undo brings them back)">New</button>
         <input ref={sessionInput} type="file" accept=".json,application/json" className="visually-hidden" data-testid="session-input" aria-label="Open a session file"
           onChange={(e) => {
             const f = e.target.files?.[0];
             e.target.value = '';
-            if (f) void f.text().then(loadSession);
+            if (f) void loadSession(f);
           }} />
       </div>
       <button type="button" className="safety-button" data-testid="safety-open" onClick={() => act.setView({ safetyOpen: true })}>Bench safety</button>
