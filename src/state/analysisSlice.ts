@@ -54,10 +54,14 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       return get().analyzeAll();
     },
 
-    updateFileSettings(id, change) {
+    async updateFileSettings(id, change) {
       record();
+      const before = get().fileSettings[id]?.peakWindows.length ?? 0;
       set((s) => ({ fileSettings: { ...s.fileSettings, [id]: change(s.fileSettings[id] ?? emptyFileSettings) } }));
-      return get().analyzeFile(id);
+      await get().analyzeFile(id);
+      // A new window that holds no peak is kept as empty (the analysis says so); tell the user now.
+      const empty = (get().results[id]?.run?.warnings ?? []).find((w) => /peak window.*no peak above the noise threshold/.test(w.message));
+      if (empty && (get().fileSettings[id]?.peakWindows.length ?? 0) > before) set({ notice: `That window holds no peak above the noise threshold, so it is kept as empty and the peaks found automatically stay (${empty.message}).` });
     },
 
     async updateSeriesCell(group, change) {

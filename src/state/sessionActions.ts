@@ -52,11 +52,14 @@ export async function saveSessionText(store: HalfwaveStore, includeRawData: bool
  * bytes when they are at hand (in the session, or in the browser's storage). Returns the names of
  * files that still wait for their bytes.
  */
-export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocument, bytesOf: (r: SessionFileRecord) => Uint8Array | null): Promise<string[]> {
+export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocument, bytesOf: (r: SessionFileRecord) => Uint8Array | Blob | null): Promise<string[]> {
   const s = store.getState();
+  // Bytes of files already in the workspace serve a session saved without data (same SHA-256).
+  const loaded = new Map(Object.values(s.files).flatMap((f) => (f.sha256 && f.measurement ? [[f.sha256, f.source] as const] : [])));
+  const found = (r: SessionFileRecord) => bytesOf(r) ?? (r.sha256 ? (loaded.get(r.sha256) ?? null) : null);
   s.record(true);
   const view = doc.view;
-  const withData = doc.files.map((r) => ({ r, bytes: bytesOf(r) }));
+  const withData = doc.files.map((r) => ({ r, bytes: found(r) }));
   const waiting = withData.filter((x) => x.bytes === null).map((x) => x.r);
   store.setState({
     files: {}, fileOrder: [], results: {}, series: {}, fileSettings: {}, importBatch: null, selectedFileId: null,
@@ -72,7 +75,7 @@ export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocu
     remembered: waiting,
   });
   const ids = await store.getState().restoreFiles(withData.flatMap(({ r, bytes }) => (bytes ? [{
-    name: r.fileName, data: new Blob([bytes as Uint8Array<ArrayBuffer>]), group: r.group, overrides: r.overrides,
+    name: r.fileName, data: bytes instanceof Blob ? bytes : new Blob([bytes as Uint8Array<ArrayBuffer>]), group: r.group, overrides: r.overrides,
     fileSettings: Object.keys(r.analysis).length ? mergeFileSettings(r.analysis) : null,
   }] : [])));
   const chosen = typeof view.selectedFile === 'number' ? ids[view.selectedFile] : undefined;

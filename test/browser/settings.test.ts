@@ -88,7 +88,7 @@ describe('changing settings, exporting, saving', () => {
     await commitNumber(app, 'smoothing-window', '7');
     await waitForAnalysis(page);
     await page.getByTestId('session-input').setInputFiles(await download.path());
-    await page.waitForFunction(() => document.querySelector('[data-testid=notice]')?.textContent?.startsWith('Session loaded.'), null, { timeout: 30_000 });
+    await page.waitForFunction(() => document.querySelector('[data-testid=notice]')?.textContent?.startsWith('Session opened in place of the workspace'), null, { timeout: 30_000 });
     expect(await page.getByTestId('smoothing-window').inputValue()).toBe('11');
   });
 

@@ -7,7 +7,7 @@
 import { formatMillivolts } from '../units';
 import type { CycleAnalysis, AnalysisWarning, ResolvedAnalyzeOptions } from './types';
 import type { CoupleResult } from '../couples/coupleTypes';
-import type { PeakResult, PeakWindow } from '../peaks/peakTypes';
+import type { PeakResult } from '../peaks/peakTypes';
 import type { CycleRange } from '../types';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { locatePeaksInSweep, type PeakCandidate } from '../peaks/locatePeaksInSweep';
@@ -70,11 +70,18 @@ function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedA
     warn('SHORT_SEGMENT', `sweep ${k} has only ${seg.end - seg.start} points; not searched for peaks`);
     return [];
   }
-  const forDirection = o.peakWindows.filter((w) => w.direction === direction);
-  const windows: PeakWindow[] | null = forDirection.length ? forDirection.filter((w) => w.cycle === undefined || w.cycle === cycle) : null;
-  const found = locatePeaksInSweep(sig, k, { windows, minProminenceA: thresholdA, locatingWindow: o.locatingSmoothing.window });
-  if (windows && windows.length > 0 && found.length < windows.length) warn('WINDOW_EMPTY', `a ${direction} peak window on sweep ${k} holds fewer than 3 points`);
-  return found;
+  const forCycle = o.peakWindows.filter((w) => w.direction === direction && (w.cycle === undefined || w.cycle === cycle));
+  const options = { minProminenceA: thresholdA, locatingWindow: o.locatingSmoothing.window };
+  if (!forCycle.length) return locatePeaksInSweep(sig, k, { ...options, windows: null });
+  // A window the user set must hold a peak that stands above the noise threshold like any other;
+  // an empty one is kept as "empty" and never takes the place of the peaks found automatically.
+  const found = locatePeaksInSweep(sig, k, { ...options, windows: forCycle });
+  const real = found.filter((c) => c.prominenceA >= thresholdA);
+  const empty = forCycle.length - real.length;
+  if (empty > 0) {
+    warn('WINDOW_EMPTY', `${empty === 1 ? 'a' : empty} ${direction} peak window${empty === 1 ? '' : 's'} on sweep ${k} hold${empty === 1 ? 's' : ''} no peak above the noise threshold (${thresholdA.toExponential(2)} A); kept as empty${real.length ? '' : ', and the peaks found automatically on this sweep are kept'}`);
+  }
+  return real.length ? real : locatePeaksInSweep(sig, k, { ...options, windows: null });
 }
 
 /** Pairs the measured peaks (weighted by height, so small features stay single) and builds the couples. */

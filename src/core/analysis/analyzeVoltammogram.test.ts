@@ -69,6 +69,21 @@ describe('analyzeVoltammogram: user windows and baselines', () => {
     expect(cathodic[0]!.potentialV).toBeLessThan(-0.25);
   });
 
+  // The reversible couple's verdict and numbers (Nicholson & Shain 1964, via the simulator) must
+  // survive a window dragged over a stretch with no wave: such a window holds nothing above the
+  // noise threshold, is kept as empty, and the automatic cathodic peak stays.
+  it('a window over an empty stretch is kept as empty and does not replace the automatic peak', () => {
+    const plain = analyzeVoltammogram(reversible);
+    const a = analyzeVoltammogram(reversible, { peakWindows: [{ direction: 'cathodic', fromV: 0.25, toV: 0.35 }] });
+    const cathodic = a.cycles[0]!.peaks.filter((p) => p.direction === 'cathodic');
+    expect(cathodic).toHaveLength(1);
+    expect(cathodic[0]!.origin).toBe('auto');
+    expect(a.cycles[0]!.couples[0]!.verdict.category).toBe('reversible');
+    expect(a.cycles[0]!.couples[0]!.ipcA).toBe(plain.cycles[0]!.couples[0]!.ipcA);
+    expect(a.cycles[0]!.warnings.map((w) => w.code)).toContain('WINDOW_EMPTY');
+    expect(a.cycles[0]!.warnings.find((w) => w.code === 'WINDOW_EMPTY')?.message).toMatch(/no peak above the noise threshold.*automatically.*kept/);
+  });
+
   it('two-point and polynomial baselines are used where asked', () => {
     const a = analyzeVoltammogram(reversible, {
       baselines: [
