@@ -159,3 +159,18 @@ describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysi
     expect(() => parseAnalysisExtras(parseArgs(['--alpha', '1.5'], ANALYSIS_OPTION_SPEC))).toThrow(/alpha/);
   });
 });
+
+// A blank (the simulator's charging current alone, same rates) subtracted before the analysis
+// takes a series with heavy double-layer charging back to the charging-free D; Randles–Ševčík
+// (Bard & Faulkner, Electrochemical Methods 2nd ed. (2001), eq. 6.2.18) gives D = 1e-5 cm²/s.
+describe('analyze --blank', () => {
+  it('pairs each file with the blank nearest its scan rate and records it', async () => {
+    const data = writeSeries('charged', { k0CmPerS: Infinity }, 0, 300e-6);
+    const blanks = writeSeries('blanks', { k0CmPerS: Infinity, concentrationOMolPerCm3: 0 }, 0, 300e-6);
+    const plain = await analyzeJson(data);
+    const cleaned = await analyzeJson(data, ['--blank', blanks]);
+    expect(cleaned.files.map((f) => (f as unknown as { blank: string }).blank)).toEqual(RATES.map((_, i) => `blanks_${String(i + 1).padStart(2, '0')}.csv`));
+    expect(rel(cleaned.series[0]?.D, D)).toBeLessThan(0.02);
+    expect(rel(plain.series[0]?.D, D)).toBeGreaterThan(rel(cleaned.series[0]?.D, D));
+  });
+});

@@ -8,7 +8,8 @@
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { analyzeRun } from '../core/analysis/analyzeRun';
-import type { CellValues, InternalStandardSource, RunFile, RunInput } from '../core/analysis/runTypes';
+import type { CellValues, InternalStandardSource, RunBlank, RunFile, RunInput } from '../core/analysis/runTypes';
+import { nearestBlank } from '../core/background';
 import type { CurrentConvention } from '../core/types';
 import { cellFromHeaders, describeLayout, groupIntoSeries, SERIES_GROUPINGS } from '../io';
 import type { Measurement, SeriesGrouping } from '../io';
@@ -23,14 +24,14 @@ import type { AnalyzeArgs } from './commands/analyze';
 import { UsageError } from './errors';
 import { runContract } from '../io';
 import { analyzeText } from './analyzeText';
-import type { InputsRead, ReadFile } from './readInputs';
+import { readInputs, type InputsRead, type ReadFile } from './readInputs';
 
 /** Analysis options beyond the fixed contract; `analyze` must accept them in its option table. */
 export const ANALYSIS_OPTION_SPEC: Record<string, OptionSpec> = {
   'from-ref': { value: true }, alpha: { value: true }, ph: { value: true }, ru: { value: true },
   'out-convention': { value: true }, diffusion: { value: true }, 'd-ratio': { value: true }, 'cdl-at': { value: true },
   'fc-near': { value: true }, 'fc-file': { value: true }, 'fc-value': { value: true }, cycle: { value: true }, 'json-sheet': { value: true },
-  'series-by': { value: true }, session: { value: true },
+  'series-by': { value: true }, session: { value: true }, blank: { value: true, repeat: true },
 };
 
 export const ANALYSIS_OPTION_HELP = `Further analysis options:
@@ -54,6 +55,9 @@ export const ANALYSIS_OPTION_HELP = `Further analysis options:
                         each series' cell values, each file's series, peak windows and baselines,
                         the display scale and sign convention (files matched by SHA-256, else
                         name); cannot be combined with cell, scale or grouping options
+  --blank FILE          a blank (supporting electrolyte alone, same electrode) subtracted before the
+                        analysis; give one per scan rate (repeat, or name a folder): each file takes
+                        the blank nearest its scan rate, and the pairing is recorded in the results
   --series-by HOW       how files form scan-rate series: auto (default: by folder, a folder of
                         several experiments split by common file-name stem), folder, stem, or one
                         (every file given forms one series)
@@ -75,6 +79,8 @@ export interface AnalysisExtras {
   jsonSheetPath?: string;
   seriesBy?: SeriesGrouping;
   sessionPath?: string;
+  /** Blank files or folders (--blank, repeatable). */
+  blankPaths?: string[];
 }
 
 function internalStandardOf(a: ParsedArgs, fromRef: string | undefined): InternalStandardSource | undefined {
@@ -112,6 +118,8 @@ export function parseAnalysisExtras(a: ParsedArgs): AnalysisExtras {
   if (std) out.internalStandard = std;
   const sheet = optionString(a, 'json-sheet');
   if (sheet !== undefined) out.jsonSheetPath = sheet;
+  const blanks = a.options.get('blank');
+  if (blanks?.length) out.blankPaths = blanks;
   const session = optionString(a, 'session');
   if (session !== undefined) out.sessionPath = session;
   const by = optionString(a, 'series-by');
@@ -151,13 +159,18 @@ function cellOf(files: RunFile[], args: AnalyzeArgs, extras: AnalysisExtras): Ce
 }
 
 /** The run input of an `analyze` command: files grouped into series, each series' cell, the method, the report. */
-export function runInputOf(read: InputsRead, args: AnalyzeArgs, extras: AnalysisExtras): RunInput {
-  const files = runFilesOf(read, extras);
+export function runInputOf(read: InputsRead, args: AnalyzeArgs, extras: AnalysisExtras, blankFiles: ReadFile[] = []): RunInput {
+  const blanks: RunBlank[] = blankFiles.map((b) => ({
+    fileName: b.measurement.fileName, voltammogram: b.measurement, provenance: { sizeBytes: b.sizeBytes, sha256: b.sha256, layout: describeLayout(b.measurement) },
+  }));
+  const rates = blankFiles.map((b) => ({ fileName: b.measurement.fileName, scanRateVPerS: b.measurement.scanRateVPerS }));
+  const files = runFilesOf(read, extras).map((f) => (blanks.length ? { ...f, blankFile: nearestBlank(f.voltammogram.scanRateVPerS, rates) } : f));
   const keys = [...new Set(files.map((f) => f.series as string))];
   const report: RunInput['report'] = { outputConvention: extras.outputConvention ?? 'iupac' };
   if (args.referenceElectrode !== undefined) report.outputReference = args.referenceElectrode;
   return {
     files,
+    blanks,
     cells: Object.fromEntries(keys.map((k) => [k, cellOf(files.filter((f) => f.series === k && f.role !== 'internal-standard'), args, extras)])),
     method: { seriesCycle: extras.cycle ?? 1 },
     report,
@@ -185,7 +198,8 @@ function sessionRunInput(read: InputsRead, args: AnalyzeArgs, extras: AnalysisEx
 
 /** Runs the analysis and prints it; returns the exit code. */
 export function runAnalysis(read: InputsRead, args: AnalyzeArgs, io: CliIo, extras: AnalysisExtras = {}): number {
-  const input = extras.sessionPath !== undefined ? sessionRunInput(read, args, extras, extras.sessionPath, io) : runInputOf(read, args, extras);
+  const blankFiles = extras.blankPaths ? readInputs(extras.blankPaths, { overrides: args.overrides }).files : [];
+  const input = extras.sessionPath !== undefined ? sessionRunInput(read, args, extras, extras.sessionPath, io) : runInputOf(read, args, extras, blankFiles);
   const result = analyzeRun(input);
   const givenAs = read.files.map((f) => f.path);
   const meta = { createdAt: new Date().toISOString(), command: `analyze ${args.files.join(' ')}` };

@@ -45,7 +45,8 @@ function headerLines(r: AnalyzeRunResult, meta: ResultsSheetMeta): string[] {
   for (const f of r.files) {
     const p = f.provenance;
     lines.push(row(['# file', f.fileName, 'series', f.series, 'role', f.role, 'size_bytes', p.sizeBytes, 'sha256', p.sha256, 'scan_rate_V_per_s', f.scanRateVPerS,
-      'scan_rate_source', f.scanRateSource, 'points', f.pointCount, 'input_reference', f.reference.input, 'offset_V', f.reference.offsetV, 'layout', p.layout]));
+      'scan_rate_source', f.scanRateSource, 'points', f.pointCount, 'input_reference', f.reference.input, 'offset_V', f.reference.offsetV,
+      'blank', f.blank?.fileName, 'blank_sha256', f.blank?.sha256, 'layout', p.layout]));
   }
   for (const w of r.warnings) lines.push(row(['# warning', w.fileName ?? w.series ?? '', w.message]));
   return lines;

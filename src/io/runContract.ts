@@ -19,6 +19,7 @@ function fileEntry(f: RunFileResult, givenAs: string, r: AnalyzeRunResult) {
   return {
     file: givenAs,
     series: f.series,
+    blank: f.blank?.fileName ?? null,
     scanRate: f.scanRateVPerS,
     scanRateSource: f.scanRateSource,
     sizeBytes: f.provenance.sizeBytes ?? null,

@@ -9,6 +9,7 @@ import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
 import { cellValuesOf, reportOptionsOf } from './runInput';
 import type { SeriesCell } from './seriesCell';
 import type { AnalysisSettings } from './settings';
+import type { HalfwaveState } from './types';
 
 export interface ReferenceChoice {
   id: ReferenceId;
@@ -45,6 +46,29 @@ export function displayScale(settings: AnalysisSettings, cell: SeriesCell): Disp
   } catch (err) {
     return { offsetV: 0, name: shortName(fileReference), basis: `cannot convert: ${(err as Error).message}; showing the files' own scale`, ok: false };
   }
+}
+
+/**
+ * The display scale a series' analysed files actually carry (the run's own offset, which knows a
+ * ferrocene E½ measured in a file), or null while none is analysed. As one text, so a selector
+ * can compare it cheaply: "offset|output|note".
+ */
+export function runScaleKey(state: Pick<HalfwaveState, 'fileOrder' | 'files' | 'results'>, group: string | null): string | null {
+  if (group === null) return null;
+  for (const id of state.fileOrder) {
+    const run = state.results[id]?.run;
+    if (state.files[id]?.group === group && run && run.role === 'series') return `${run.reference.offsetV}|${run.reference.output ?? ''}|${run.reference.note ?? ''}`;
+  }
+  return null;
+}
+
+/** A DisplayScale from runScaleKey's text, named like displayScale names scales. */
+export function scaleFromRunKey(key: string, cell: SeriesCell): DisplayScale {
+  const [offset, output, note] = key.split('|');
+  if (!output) return { offsetV: 0, name: shortName(cell.fileReference), basis: `${note || 'no conversion'}; showing the files' own scale`, ok: false };
+  const name = output === 'Fc' ? 'Fc⁺/Fc' : shortName(output as ReferenceId);
+  const offsetV = Number(offset);
+  return { offsetV, name, basis: `${shortName(cell.fileReference)} → ${name}: ${offsetV >= 0 ? '+' : ''}${offsetV.toFixed(4)} V`, ok: true };
 }
 
 function shortName(id: ReferenceId): string {

@@ -4,7 +4,8 @@
  * sheet and the display scale all read their options through here, so they cannot drift apart.
  */
 import { DEFAULT_SERIES_KEY } from '../core/analysis/resolveRun';
-import type { CellValues, MethodOptions, ReportOptions, RunFile, RunInput } from '../core/analysis/runTypes';
+import type { CellValues, MethodOptions, ReportOptions, RunBlank, RunFile, RunInput } from '../core/analysis/runTypes';
+import { nearestBlank } from '../core/background/nearestBlank';
 import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
 import { describeLayout } from '../io/describeLayout';
 import { SOFTWARE } from '../version';
@@ -63,17 +64,56 @@ export interface RunSources extends Pick<HalfwaveState, 'fileOrder' | 'fileSetti
   files: Record<string, Pick<FileEntry, 'fileName' | 'group' | 'measurement' | 'sizeBytes' | 'sha256' | 'warnings'> | undefined>;
 }
 
-/** One loaded file as a run file: its measurement, provenance and own windows and baselines. */
-export function runFileOf(state: RunSources, id: string): RunFile | null {
+/** Names of every file some series or file uses as a blank. */
+export function blankNames(state: RunSources): Set<string> {
+  const out = new Set<string>();
+  for (const g of new Set(Object.values(state.files).map((f) => f?.group))) {
+    if (g !== undefined) for (const n of resolveSeriesCell(state, g).cell.blankFiles) out.add(n);
+  }
+  for (const fs of Object.values(state.fileSettings)) if (fs.blankFile) out.add(fs.blankFile);
+  return out;
+}
+
+/** The blank a file subtracts: its own choice, else the one of its series' blanks nearest its scan rate. */
+export function blankOf(state: RunSources, id: string): string | null {
+  const own = state.fileSettings[id]?.blankFile;
+  if (own !== undefined) return own;
+  const f = state.files[id];
+  if (!f?.measurement) return null;
+  const names = resolveSeriesCell(state, f.group).cell.blankFiles.filter((n) => n !== f.fileName);
+  const blanks = names.map((n) => ({ fileName: n, scanRateVPerS: measurementNamed(state, n)?.scanRateVPerS ?? null }));
+  return nearestBlank(f.measurement.scanRateVPerS, blanks);
+}
+
+function measurementNamed(state: RunSources, name: string) {
+  for (const id of state.fileOrder) if (state.files[id]?.fileName === name && state.files[id]?.measurement) return state.files[id]?.measurement ?? null;
+  return null;
+}
+
+/** One loaded file as a run file: its measurement, provenance, own windows and baselines, and blank. */
+export function runFileOf(state: RunSources, id: string, blanks: ReadonlySet<string> = blankNames(state)): RunFile | null {
   const f = state.files[id];
   const m = f?.measurement;
   if (!f || !m) return null;
   const own = state.fileSettings[id] ?? emptyFileSettings;
+  const blank = blanks.has(f.fileName) ? null : blankOf(state, id);
   return {
     fileName: f.fileName, series: f.group, voltammogram: m, referenceElectrode: m.referenceElectrode,
     provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(m), importWarnings: f.warnings.map((w) => w.message) },
     trace: { peakWindows: own.peakWindows, baselines: own.baselines },
+    ...(blanks.has(f.fileName) ? { role: 'blank' as const } : {}),
+    ...(blank && measurementNamed(state, blank) ? { blankFile: blank } : {}),
   };
+}
+
+/** The blanks the given run files name, with their measurements. */
+function blanksFor(state: RunSources, files: RunFile[]): RunBlank[] {
+  const wanted = new Set(files.flatMap((f) => (f.blankFile ? [f.blankFile] : [])));
+  return [...wanted].flatMap((name) => {
+    const id = state.fileOrder.find((x) => state.files[x]?.fileName === name && state.files[x]?.measurement);
+    const f = id ? state.files[id] : undefined;
+    return f?.measurement ? [{ fileName: name, voltammogram: f.measurement, provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(f.measurement) } }] : [];
+  });
 }
 
 /** Everything a series needs from the store: its cell, the method, the report. */
@@ -105,10 +145,12 @@ export function fileRunRequest(state: RunSources, id: string): { run: RunInput; 
  * exactly as the screen shows it.
  */
 export function runInputOf(state: RunSources, ids: string[] = state.fileOrder): RunInput {
-  const files = ids.flatMap((id) => runFileOf(state, id) ?? []);
+  const blanks = blankNames(state);
+  const files = ids.flatMap((id) => runFileOf(state, id, blanks) ?? []);
   const groups = [...new Set(files.map((f) => f.series ?? DEFAULT_SERIES_KEY))];
   return {
     files,
+    blanks: blanksFor(state, files),
     cells: Object.fromEntries(groups.map((g) => [g, seriesCellValues(state, g)])),
     method: methodOptionsOf(state.settings),
     report: reportOptionsOf(state),

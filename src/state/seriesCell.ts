@@ -41,14 +41,18 @@ export interface ResolvedCell {
 
 export const CELL_FIELDS: readonly CellField[] = [
   'electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'alpha', 'resistanceOhm', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent',
-  'fileReference', 'pH', 'ferroceneHalfWaveV', 'internalStandardNearV', 'internalStandardFile',
+  'fileReference', 'pH', 'ferroceneHalfWaveV', 'internalStandardNearV', 'internalStandardFile', 'blankFiles',
 ];
 
-/** Fields that change each trace's own analysis; the others (A, C, α, scales) only the series fits and display. */
-export const TRACE_FIELDS: readonly CellField[] = ['electronCount', 'temperatureC', 'resistanceOhm'];
+/**
+ * Fields that only the series fits read (A, C, α and their uncertainties); every other field
+ * (n, T, Ru, the recording scale and its standard, the blanks) changes each file's own analysis,
+ * whose potentials are on the display scale.
+ */
+export const SERIES_ONLY_FIELDS: readonly CellField[] = ['areaCm2', 'concentrationMM', 'alpha', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent'];
 
 export function sameTraceCell(a: SeriesCell, b: SeriesCell): boolean {
-  return TRACE_FIELDS.every((k) => a[k] === b[k]);
+  return CELL_FIELDS.every((k) => SERIES_ONLY_FIELDS.includes(k) || a[k] === b[k]);
 }
 
 export function defaultCell(settings: AnalysisSettings): SeriesCell {

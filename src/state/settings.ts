@@ -28,6 +28,8 @@ export interface ChemistrySettings {
   /** Relative standard uncertainty of the area and of the concentration (%), for D's combined interval. */
   areaUncertaintyPercent: number;
   concentrationUncertaintyPercent: number;
+  /** Blanks of the series (file names in the workspace): each file subtracts the one nearest its scan rate. */
+  blankFiles: string[];
 }
 
 export interface ReferenceSettings {
@@ -60,6 +62,8 @@ export interface AnalysisSettings {
 export interface FileAnalysisSettings {
   peakWindows: PeakWindow[];
   baselines: BaselineSpec[];
+  /** The blank this file subtracts (a file name); null: none, even if its series has blanks; absent: the series' nearest. */
+  blankFile?: string | null;
 }
 
 export const defaultSettings: AnalysisSettings = {
@@ -67,7 +71,7 @@ export const defaultSettings: AnalysisSettings = {
   forwardBaseline: 'linear',
   returnBaseline: 'nicholson',
   minSignalToNoise: 8,
-  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: null, resistanceOhm: 0, areaUncertaintyPercent: 2, concentrationUncertaintyPercent: 2 },
+  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: null, resistanceOhm: 0, areaUncertaintyPercent: 2, concentrationUncertaintyPercent: 2, blankFiles: [] },
   reference: { fileReference: 'AgCl-3M', displayReference: 'AgCl-3M', pH: 7, ferroceneHalfWaveV: null, internalStandardNearV: null, internalStandardFile: null },
 };
 
@@ -97,6 +101,7 @@ export function mergeSettings(base: AnalysisSettings, stored: unknown): Analysis
       resistanceOhm: num(chem.resistanceOhm, base.chemistry.resistanceOhm),
       areaUncertaintyPercent: num(chem.areaUncertaintyPercent, base.chemistry.areaUncertaintyPercent),
       concentrationUncertaintyPercent: num(chem.concentrationUncertaintyPercent, base.chemistry.concentrationUncertaintyPercent),
+      blankFiles: names(chem.blankFiles) ?? base.chemistry.blankFiles,
     },
     reference: {
       fileReference: pick(ref.fileReference, REFERENCE_IDS, base.reference.fileReference),
@@ -125,6 +130,8 @@ export function mergeSeriesCells(stored: unknown): Record<string, Partial<Series
       if (v[key] === null || (typeof v[key] === 'number' && Number.isFinite(v[key]))) cell[key] = v[key];
     }
     if (v.internalStandardFile === null || typeof v.internalStandardFile === 'string') cell.internalStandardFile = v.internalStandardFile;
+    const blanks = names(v.blankFiles);
+    if (blanks) cell.blankFiles = blanks;
     if (REFERENCE_IDS.includes(v.fileReference as ReferenceId)) cell.fileReference = v.fileReference as ReferenceId;
     out[group] = cell;
   }
@@ -153,7 +160,14 @@ export function mergeFileSettings(stored: unknown): FileAnalysisSettings {
       if (Number.isInteger(b.degree) && (b.degree as number) >= 1 && (b.degree as number) <= 6) spec.degree = b.degree as number;
       return spec;
     });
-  return { peakWindows, baselines };
+  const out: FileAnalysisSettings = { peakWindows, baselines };
+  if (r.blankFile === null || (typeof r.blankFile === 'string' && r.blankFile.length <= 1000)) out.blankFile = r.blankFile;
+  return out;
+}
+
+/** A list of file names, or undefined when the value is not one. */
+function names(v: unknown): string[] | undefined {
+  return Array.isArray(v) && v.every((x) => typeof x === 'string' && x.length <= 1000) ? [...(v as string[])] : undefined;
 }
 
 function asRecord(v: unknown): Record<string, unknown> {

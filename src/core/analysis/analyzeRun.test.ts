@@ -175,3 +175,27 @@ describe('analyzeRun with several series', () => {
     expect(() => analyzeRun({ files, cells: { B: { areaCm2: -1 } } })).toThrow(/series "B".*area/);
   });
 });
+
+// A blank of the supporting electrolyte (the simulator's charging current alone, its own RC
+// charging model) subtracted before the analysis takes a couple with heavy double-layer charging
+// back to the numbers of the charging-free couple; the pairing is recorded per file.
+describe('analyzeRun with blanks', () => {
+  const rates = [0.1, 0.4];
+  const sim = { k0CmPerS: Infinity, doubleLayerFPerCm2: 200e-6, diffusionOCm2PerS: D, diffusionRCm2PerS: D };
+  const files: RunFile[] = rates.map((v) => ({ fileName: `cv-${v}`, voltammogram: simulatedVoltammogram({ ...sim, scanRateVPerS: v }), blankFile: `blank-${v}` }));
+  const blanks = rates.map((v) => ({ fileName: `blank-${v}`, voltammogram: simulatedVoltammogram({ ...sim, concentrationOMolPerCm3: 0, scanRateVPerS: v }), provenance: { sha256: 'b'.repeat(64) } }));
+  it('subtracts each file’s blank and reports the pairing', () => {
+    const clean = runOf(rates.map((v) => ({ fileName: `c-${v}`, voltammogram: simulatedVoltammogram({ ...sim, doubleLayerFPerCm2: 0, scanRateVPerS: v }) })), { cell: CELL });
+    const r = analyzeRun({ files, blanks, cells: { [DEFAULT_SERIES_KEY]: CELL } });
+    expect(r.files.map((f) => f.blank?.fileName)).toEqual(['blank-0.1', 'blank-0.4']);
+    expect(r.files[0]?.blank?.sha256).toBe('b'.repeat(64));
+    const d = r.series[0]?.analysis.couples[0]?.diffusion?.diffusionCm2PerS as number;
+    const d0 = clean.series[0]?.analysis.couples[0]?.diffusion?.diffusionCm2PerS as number;
+    expect(Math.abs(d / d0 - 1)).toBeLessThan(0.01);
+  });
+  it('warns about a blank at another scan rate and refuses a blank that is not given', () => {
+    const r = analyzeRun({ files: [{ ...files[0]!, blankFile: 'blank-0.4' }], blanks, cells: { [DEFAULT_SERIES_KEY]: CELL } });
+    expect(r.warnings.some((w) => w.code === 'BLANK' && /4\.00× this file's scan rate/.test(w.message))).toBe(true);
+    expect(() => analyzeRun({ files: [{ ...files[0]!, blankFile: 'nowhere' }], blanks })).toThrow(/blank "nowhere"/);
+  });
+});

@@ -8,6 +8,7 @@
 import { iRCorrect } from '../conventions';
 import type { BaselineSpec } from '../baseline/baselineTypes';
 import { AnalysisError } from '../errors';
+import { subtractBlank } from '../background';
 import { chargingCurrentGap } from '../series';
 import type { Voltammogram } from '../types';
 import { analyzeResolvedVoltammogram, type TraceOptions } from './analyzeVoltammogram';
@@ -51,10 +52,26 @@ function traceWarnings(file: ResolvedRunFile, result: RunFileResult['analysis'],
   return out;
 }
 
+/** The file's current less its blank (on the recorded potentials), with what to say about the match. */
+function withoutBlank(file: ResolvedRunFile, warnings: RunWarning[]): { currentA: Float64Array; blank: RunFileResult['blank'] } {
+  const v = file.input.voltammogram;
+  const b = file.blank;
+  if (!b) return { currentA: v.currentA, blank: null };
+  const r = subtractBlank(v, b.voltammogram);
+  const fileName = file.input.fileName;
+  if (r.pointsOutsideBlank > 0) warnings.push({ code: 'BLANK', fileName, message: `${r.pointsOutsideBlank} of ${v.potentialV.length} points lie outside the potential range of the blank ${b.fileName}; its end value was used there` });
+  // Charging current scales with v: a blank at another rate removes the wrong background (5 %: common practice, no source).
+  if (Math.abs(r.scanRateRatio - 1) > 0.05) warnings.push({ code: 'BLANK', fileName, message: `the blank ${b.fileName} was recorded at ${(1 / r.scanRateRatio).toPrecision(3)}× this file's scan rate; its charging current does not match` });
+  return { currentA: r.currentA, blank: { fileName: b.fileName, sha256: b.provenance?.sha256 ?? null, pointsOutside: r.pointsOutsideBlank, scanRateRatio: r.scanRateRatio } };
+}
+
 export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method: ResolvedMethod, reference: FileReference): RunFileResult {
   const v = file.input.voltammogram;
+  const blankWarnings: RunWarning[] = [];
+  const { currentA, blank } = withoutBlank(file, blankWarnings);
+  // The ohmic drop follows the whole current that flowed; the peaks are read on the current less the blank.
   const potentialV = analysedPotential(v, cell.ruOhm, reference.offsetV);
-  const analysed: Voltammogram = potentialV ? { ...v, potentialV } : v;
+  const analysed: Voltammogram = { ...v, currentA, ...(potentialV ? { potentialV } : {}) };
   const fileName = file.input.fileName;
   let analysis;
   try {
@@ -64,7 +81,7 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
     if (err instanceof AnalysisError) throw new AnalysisError(err.code, `${fileName}: ${err.message}`);
     throw err;
   }
-  const warnings = traceWarnings(file, analysis, cell.ruOhm);
+  const warnings = [...blankWarnings, ...traceWarnings(file, analysis, cell.ruOhm)];
   let chargingGapA: number | null = null;
   if (cell.capacitancePotentialV !== null) {
     try {
@@ -76,6 +93,6 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
   }
   return {
     fileName, series: file.series, role: file.role, scanRateVPerS: file.scanRateVPerS, scanRateSource: file.scanRateSource,
-    reference, analysis, analysedPotentialV: potentialV, chargingGapA, provenance: file.input.provenance ?? {}, pointCount: v.potentialV.length, warnings,
+    reference, analysis, analysedPotentialV: potentialV, chargingGapA, provenance: file.input.provenance ?? {}, pointCount: v.potentialV.length, blank, warnings,
   };
 }

@@ -41,7 +41,7 @@ function withCombinedIntervals(analysis: SeriesAnalysis, cell: ResolvedCell): vo
 /** `files`: the results of the series' files (internal-standard files are left out here). */
 export function analyzeRunSeries(key: string, cell: ResolvedCell, method: ResolvedMethod, output: ReferenceId | null, files: RunFileResult[]): RunSeriesResult {
   const members = files.filter((f) => f.role === 'series');
-  if (!members.length) throw new AnalysisError('EMPTY_INPUT', `series "${key}": every file is marked as internal standard; nothing is left for the series`);
+  if (!members.length) throw new AnalysisError('EMPTY_INPUT', `series "${key}": every file is an internal standard or a blank; nothing is left for the series`);
   const analysis = analyzeResolvedSeries(
     members.map((f) => ({ fileName: f.fileName, scanRateVPerS: f.scanRateVPerS, analysis: f.analysis })),
     {

@@ -10,7 +10,7 @@ import type { PeakWindow } from '../peaks/peakTypes';
 import { resolveReferenceId } from '../reference';
 import type { ReferenceId } from '../reference';
 import type { ScanRateSource } from '../types';
-import type { CellValues, MethodOptions, ReportOptions, ResolvedCell, ResolvedMethod, ResolvedReport, RunFile, RunInput } from './runTypes';
+import type { CellValues, MethodOptions, ReportOptions, ResolvedCell, ResolvedMethod, ResolvedReport, RunBlank, RunFile, RunFileRole, RunInput } from './runTypes';
 
 /** Series key of files that name none. */
 export const DEFAULT_SERIES_KEY = 'series 1';
@@ -18,7 +18,9 @@ export const DEFAULT_SERIES_KEY = 'series 1';
 export interface ResolvedRunFile {
   input: RunFile;
   series: string;
-  role: 'series' | 'internal-standard';
+  role: RunFileRole;
+  /** The blank this file subtracts, or null. */
+  blank: RunBlank | null;
   scanRateVPerS: number;
   scanRateSource: ScanRateSource | null;
   peakWindows: PeakWindow[];
@@ -127,7 +129,7 @@ export function resolveReport(r: ReportOptions = {}): ResolvedReport {
   return { outputReference: r.outputReference ? resolveReferenceId(r.outputReference) : null, outputConvention: convention, referenceOverridesVsSheV: overrides, unconvertible };
 }
 
-function resolveFile(f: RunFile): ResolvedRunFile {
+function resolveFile(f: RunFile, blanks: RunBlank[]): ResolvedRunFile {
   const v = f.voltammogram;
   if (v.scanRateVPerS === null || v.scanRateVPerS === undefined) {
     throw new AnalysisError('BAD_OPTION', `${f.fileName}: no scan rate (no time column, none in the metadata or the file name); give the scan rate`);
@@ -144,15 +146,20 @@ function resolveFile(f: RunFile): ResolvedRunFile {
     const ends = [b.fromV, b.toV, ...(b.anchorsV ?? [])];
     if (!ends.every(Number.isFinite)) throw new AnalysisError('BAD_OPTION', `${f.fileName}: baseline choice ${b.direction} [${b.fromV}, ${b.toV}] V has a non-finite potential`);
   }
+  let blank: RunBlank | null = null;
+  if (f.blankFile) {
+    blank = blanks.find((b) => b.fileName === f.blankFile) ?? null;
+    if (!blank) throw new AnalysisError('BAD_OPTION', `${f.fileName}: its blank "${f.blankFile}" is not among the blanks given`);
+  }
   return {
-    input: f, series: f.series ?? DEFAULT_SERIES_KEY, role: f.role ?? 'series',
+    input: f, series: f.series ?? DEFAULT_SERIES_KEY, role: f.role ?? 'series', blank,
     scanRateVPerS: v.scanRateVPerS, scanRateSource: v.scanRateSource, peakWindows, baselines,
   };
 }
 
 export function resolveRun(input: RunInput): ResolvedRun {
   if (!input.files.length) throw new AnalysisError('EMPTY_INPUT', 'an analysis run needs at least one file');
-  const files = input.files.map(resolveFile);
+  const files = input.files.map((f) => resolveFile(f, input.blanks ?? []));
   const keys = [...new Set(files.map((f) => f.series))];
   const series = keys.map((key) => {
     try {

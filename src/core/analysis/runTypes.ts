@@ -42,9 +42,24 @@ export interface RunFile {
   /** Reference electrode named in the file's metadata, if any. */
   referenceElectrode?: string | null;
   provenance?: FileProvenance;
-  /** 'internal-standard': a companion file measured only for the E½ of the internal standard. @default 'series' */
-  role?: 'series' | 'internal-standard';
+  /**
+   * 'internal-standard': a companion file measured only for the E½ of the internal standard;
+   * 'blank': supporting electrolyte only, subtracted from other files, not a member of the series.
+   * @default 'series'
+   */
+  role?: RunFileRole;
   trace?: TraceChoices;
+  /** Name of the blank (RunInput.blanks) subtracted from this file before analysis. @default null */
+  blankFile?: string | null;
+}
+
+export type RunFileRole = 'series' | 'internal-standard' | 'blank';
+
+/** A blank voltammogram (supporting electrolyte alone) that files of the run subtract. */
+export interface RunBlank {
+  fileName: string;
+  voltammogram: Voltammogram;
+  provenance?: FileProvenance;
 }
 
 /** Where the Fc⁺/Fc (or other internal-standard) E½ comes from. */
@@ -139,6 +154,8 @@ export interface ReportOptions {
 
 export interface RunInput {
   files: RunFile[];
+  /** Blanks the files name in `blankFile`. */
+  blanks?: RunBlank[];
   /** Cell values per series key; a series without an entry takes the defaults. */
   cells?: Record<string, CellValues>;
   method?: MethodOptions;
@@ -192,7 +209,7 @@ export interface FileReference {
 export interface RunFileResult {
   fileName: string;
   series: string;
-  role: 'series' | 'internal-standard';
+  role: RunFileRole;
   scanRateVPerS: number;
   scanRateSource: ScanRateSource | null;
   /** Potentials in `analysis` are on the output scale: recorded − i·Ru + reference.offsetV. */
@@ -204,6 +221,8 @@ export interface RunFileResult {
   chargingGapA: number | null;
   provenance: FileProvenance;
   pointCount: number;
+  /** The blank subtracted before the analysis, with how well it matched; null when none. */
+  blank: { fileName: string; sha256: string | null; pointsOutside: number; scanRateRatio: number } | null;
   /** Warnings of this file's trace analysis and iR correction. */
   warnings: RunWarning[];
 }
@@ -231,7 +250,7 @@ export interface DefaultUsed {
   affects: string[];
 }
 
-export type RunWarningCode = 'REFERENCE' | 'TEMPERATURE' | 'OHMIC' | 'TRACE' | 'SERIES' | 'CAPACITANCE' | 'INTERNAL_STANDARD' | 'DEFAULT';
+export type RunWarningCode = 'REFERENCE' | 'TEMPERATURE' | 'OHMIC' | 'TRACE' | 'SERIES' | 'CAPACITANCE' | 'INTERNAL_STANDARD' | 'DEFAULT' | 'BLANK';
 
 export interface RunWarning {
   code: RunWarningCode;

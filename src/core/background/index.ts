@@ -1,0 +1,3 @@
+/** Public API of background subtraction. */
+export * from './subtractBlank';
+export * from './nearestBlank';
