@@ -141,7 +141,7 @@ export function runFilesOf(read: InputsRead, extras: AnalysisExtras): RunFile[] 
   return read.files.map((f) => ({
     fileName: f.measurement.fileName, series: keyOf.get(f) ?? groups[0]?.key ?? 'series 1', voltammogram: f.measurement,
     referenceElectrode: f.measurement.referenceElectrode, role: isStandard(f) ? 'internal-standard' : 'series',
-    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(f.measurement), importWarnings: f.warnings.map((w) => w.message) },
+    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(f.measurement), importWarnings: f.warnings.map((w) => w.message), metadata: f.measurement.metadata },
   }));
 }
 

@@ -33,14 +33,14 @@ describe('resultsSheetCsv', () => {
     expect(csv).toContain('size_bytes,1234');
   });
   it('has one couple row per file × cycle × couple, with units in the column names', () => {
-    const rows = table(csv, 'couples');
+    const rows = table(csv, 'raw couples');
     expect(rows).toHaveLength(3);
     expect(Object.keys(rows[0] ?? {})).toEqual(expect.arrayContaining(['Epa_V', 'Epc_V', 'E_half_V', 'dEp_V', 'ipa_A', 'ipc_A']));
     expect(rows[0]?.file).toBe('run, 0.1 V/s.csv');
     expect(Number(rows[0]?.ipa_A)).toBeGreaterThan(0);
   });
   it('writes the series with D and its interval', () => {
-    const s = table(csv, 'series');
+    const s = table(csv, 'raw series');
     expect(s).toHaveLength(1);
     const d = Number(s[0]?.D_cm2_per_s);
     expect(d).toBeGreaterThan(0);
@@ -48,8 +48,8 @@ describe('resultsSheetCsv', () => {
   });
   // IUPAC Gold Book; ASDL "Plotting Conventions for Voltammetry": the polarographic convention flips signed currents only.
   it('flips signed currents, not magnitudes, in the polarographic convention', () => {
-    const polar = table(resultsSheetCsv(makeRun('polarographic')), 'peaks');
-    const iupac = table(csv, 'peaks');
+    const polar = table(resultsSheetCsv(makeRun('polarographic')), 'raw peaks');
+    const iupac = table(csv, 'raw peaks');
     expect(Number(polar[0]?.i_at_Ep_A)).toBeCloseTo(-Number(iupac[0]?.i_at_Ep_A), 18);
     expect(polar[0]?.ip_A).toBe(iupac[0]?.ip_A);
   });

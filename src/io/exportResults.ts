@@ -1,16 +1,20 @@
 /**
- * The results sheet of an analysis run, as CSV (for spreadsheets) and as JSON (everything, for
+ * The results sheet of an analysis run, as CSV (for spreadsheets and notebooks) and as JSON (for
  * scripts). Both carry the method, the parameters, the software version and where each file came
- * from (name, size, SHA-256, scan-rate source, detected layout), so a number can be traced back.
+ * from (name, size, SHA-256, scan-rate source, detected layout, what its header says), so a number
+ * can be traced back.
  * CSV layout (our own): '#'-prefixed header lines, then tables separated by a blank line and a
- * '# table: …' line: peaks, couples (one row per file × cycle × couple), k0 per file, series (one row
- * per series × couple), double-layer capacitance per series when measured.
- * Units are in the column names. Signed currents follow the run's sign convention; peak heights
- * and couple currents are positive magnitudes.
+ * '# table: …' line. First the readable tables (notebookTables.ts: files, series, couples; units in
+ * the column heads, numbers rounded to what their uncertainty supports), then the same results in
+ * SI units at full precision: raw peaks, raw couples (one row per file × cycle × couple), raw k0
+ * per file, raw series (one row per series × couple), raw double-layer capacitance when measured.
+ * Signed currents follow the run's sign convention; peak heights and couple currents are positive
+ * magnitudes.
  */
 import { currentInConvention } from '../core/conventions';
 import type { AnalyzeRunResult } from '../core/analysis/runTypes';
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
+import { couplesTable, filesTable, seriesTable } from './notebookTables';
 import { runContract } from './runContract';
 
 export interface ResultsSheetMeta {
@@ -37,10 +41,10 @@ function headerLines(r: AnalyzeRunResult, meta: ResultsSheetMeta): string[] {
   lines.push(row(['# current sign convention', r.convention === 'iupac' ? 'IUPAC (anodic positive)' : 'polarographic (cathodic positive)']));
   lines.push(row(['# potential scale', r.reference.output ?? "each file's own"]));
   for (const b of r.reference.basis) lines.push(row(['# reference', b]));
-  const param = (k: string, v: unknown) => row(['# parameter', k, typeof v === 'object' ? JSON.stringify(v) : String(v)]);
+  const param = (k: string, v: unknown) => row(['# parameter', k, v === null ? 'none' : typeof v === 'object' ? JSON.stringify(v) : String(v)]);
   for (const [k, v] of Object.entries(r.provenance.method)) lines.push(param(k, v));
   for (const [k, v] of Object.entries(r.provenance.report)) lines.push(param(k, v));
-  for (const s of r.series) for (const [k, v] of Object.entries(s.cell)) lines.push(row(['# cell', s.key, k, typeof v === 'object' && v !== null ? JSON.stringify(v) : v]));
+  for (const s of r.series) for (const [k, v] of Object.entries(s.cell)) lines.push(row(['# cell', s.key, k, v === null ? 'none' : typeof v === 'object' ? JSON.stringify(v) : v]));
   for (const m of r.provenance.methods) lines.push(row(['# method', m]));
   for (const f of r.files) {
     const p = f.provenance;
@@ -92,7 +96,7 @@ function rateTable(r: AnalyzeRunResult): string[] {
 }
 
 const SERIES_COLUMNS = ['series', 'couple', 'E_half_V', 'files', 'regime', 'kinetic_class', 'verdict', 'slope_ip_vs_sqrt_v_A_s05_V05', 'slope_ci95_low', 'slope_ci95_high',
-  'intercept_A', 'r2', 'D_cm2_per_s', 'D_ci95_low', 'D_ci95_high', 'D_form', 'alpha', 'log_log_slope', 'log_log_reading', 'Epa_shift_V_per_decade',
+  'intercept_A', 'r2', 'D_cm2_per_s', 'D_ci95_low', 'D_ci95_high', 'D_ci95_with_uA_uC_low', 'D_ci95_with_uA_uC_high', 'D_form', 'alpha', 'log_log_slope', 'log_log_reading', 'Epa_shift_V_per_decade',
   'Epc_shift_V_per_decade', 'k0_cm_per_s', 'k0_lower_bound_cm_per_s', 'D_used_for_k0_cm2_per_s', 'gamma_from_charge_mol_per_cm2',
   'gamma_from_slope_mol_per_cm2', 'ks_per_s', 'electroactive_area_cm2', 'anodic_slope_A_s05_V05', 'anodic_r2',
   'cathodic_slope_A_s05_V05', 'cathodic_r2', 'diagnostics'];
@@ -100,7 +104,8 @@ const SERIES_COLUMNS = ['series', 'couple', 'E_half_V', 'files', 'regime', 'kine
 function seriesRow(key: string, c: SeriesCouple): Cell[] {
   const f = c.forwardFit;
   return [key, c.index, c.eHalfV, c.points.length, c.regime, c.kineticClass, c.verdict.category, f?.slope, f?.slopeInterval?.[0], f?.slopeInterval?.[1],
-    f?.intercept, f?.r2, c.diffusion?.diffusionCm2PerS, c.diffusion?.intervalCm2PerS?.[0], c.diffusion?.intervalCm2PerS?.[1], c.diffusion?.form,
+    f?.intercept, f?.r2, c.diffusion?.diffusionCm2PerS, c.diffusion?.intervalCm2PerS?.[0], c.diffusion?.intervalCm2PerS?.[1],
+    c.diffusion?.combinedIntervalCm2PerS?.[0], c.diffusion?.combinedIntervalCm2PerS?.[1], c.diffusion?.form,
     c.alpha ?? c.diffusion?.alphaUsed, c.logLog?.slope, c.logLog?.reading, c.peakShift.anodic?.slopeVPerDecade, c.peakShift.cathodic?.slopeVPerDecade,
     c.rateConstant?.k0CmPerS, c.rateConstant?.lowerBoundCmPerS, c.rateConstant?.diffusionOxCm2PerS, c.surface?.coverageFromChargeMolPerCm2,
     c.surface?.coverageFromSlopeMolPerCm2, c.surface?.ksPerS, c.electroactiveAreaCm2, c.anodicFit?.slope, c.anodicFit?.r2,
@@ -109,16 +114,18 @@ function seriesRow(key: string, c: SeriesCouple): Cell[] {
 
 /** The results sheet as CSV text (CRLF-free, UTF-8 characters as they are). */
 export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}): string {
+  const readable = [filesTable(result), seriesTable(result), couplesTable(result)].map((t) => [`# table: ${t.name}`, row(t.header), ...t.rows.map(row)]);
   const parts = [
-    headerLines(result, meta),
-    ['# table: peaks', ...peakTable(result)],
-    ['# table: couples', ...coupleTable(result)],
-    ['# table: k0 per file', ...rateTable(result)],
-    ['# table: series', row(SERIES_COLUMNS), ...result.series.flatMap((s) => s.analysis.couples.map((c) => row(seriesRow(s.key, c))))],
+    [...headerLines(result, meta), '# the tables below are rounded to what each number supports; the "raw" tables after them give every number in SI units at full precision'],
+    ...readable,
+    ['# table: raw peaks', ...peakTable(result)],
+    ['# table: raw couples', ...coupleTable(result)],
+    ['# table: raw k0 per file', ...rateTable(result)],
+    ['# table: raw series', row(SERIES_COLUMNS), ...result.series.flatMap((s) => s.analysis.couples.map((c) => row(seriesRow(s.key, c))))],
   ];
   const withCd = result.series.filter((s) => s.capacitance);
   if (withCd.length) {
-    parts.push(['# table: double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'intercept_A', 'r2']),
+    parts.push(['# table: raw double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'intercept_A', 'r2']),
       ...withCd.map((s) => row([s.key, s.capacitance?.capacitanceFPerCm2, s.capacitance?.fit?.intercept, s.capacitance?.fit?.r2]))]);
   }
   return `${parts.map((p) => p.join('\n')).join('\n\n')}\n`;

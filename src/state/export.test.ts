@@ -32,7 +32,7 @@ describe('results sheet of a group', () => {
     const sha = store.getState().files[ids[0] as string]?.sha256 as string;
     expect(sheet).toContain(sha);
     expect(sheet).toMatch(/^# results sheet,Halfwave,\d+\.\d+\.\d+/);
-    const couples = table(sheet, 'couples');
+    const couples = table(sheet, 'raw couples');
     expect(couples.map((c) => c.file)).toEqual(['a-50mVs.csv', 'b-200mVs.csv']);
     for (const c of couples) {
       // Simulated E°′ = 0 V on the file scale → −0.0312 V vs SCE; ±3 mV for peak fitting.
@@ -42,7 +42,7 @@ describe('results sheet of a group', () => {
     expect(Math.abs(onScreen + 0.0312)).toBeLessThan(0.003);
     const json = JSON.parse(await store.getState().exportGroup('sim', 'json')) as { files: Array<{ cycles: Array<{ couples: Array<{ Ehalf: number }> }> }> };
     expect(json.files[0]?.cycles[0]?.couples[0]?.Ehalf).toBe(onScreen);
-    expect(table(sheet, 'series')).toHaveLength(1);
+    expect(table(sheet, 'raw series')).toHaveLength(1);
   });
 
   it('reports a group without files as an error', async () => {

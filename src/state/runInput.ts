@@ -99,7 +99,7 @@ export function runFileOf(state: RunSources, id: string, blanks: ReadonlySet<str
   const blank = blanks.has(f.fileName) ? null : blankOf(state, id);
   return {
     fileName: f.fileName, series: f.group, voltammogram: m, referenceElectrode: m.referenceElectrode,
-    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(m), importWarnings: f.warnings.map((w) => w.message) },
+    provenance: { sizeBytes: f.sizeBytes, sha256: f.sha256, layout: describeLayout(m), importWarnings: f.warnings.map((w) => w.message), metadata: m.metadata },
     trace: { peakWindows: own.peakWindows, baselines: own.baselines },
     ...(blanks.has(f.fileName) ? { role: 'blank' as const } : {}),
     ...(blank && measurementNamed(state, blank) ? { blankFile: blank } : {}),

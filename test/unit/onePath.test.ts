@@ -98,13 +98,13 @@ function csvNumbers(csv: string): { couples: Record<string, CoupleNumbers>; seri
   };
   const num = (v: string | undefined) => (v === undefined || v === '' ? null : Number(v));
   const couples: Record<string, CoupleNumbers> = {};
-  for (const r of table('couples')) {
+  for (const r of table('raw couples')) {
     couples[`${r.file}|${r.cycle}|${r.couple}`] = {
       Epa: num(r.Epa_V), Epc: num(r.Epc_V), Ehalf: num(r.E_half_V), dEp: num(r.dEp_V), ipa: num(r.ipa_A), ipc: num(r.ipc_A), ratio: num(r.ratio_return_over_forward),
     };
   }
   const series: Record<string, Partial<SeriesNumbers>> = {};
-  for (const r of table('series')) series[`${r.series}|${r.couple}`] = { slope: num(r.slope_ip_vs_sqrt_v_A_s05_V05), D: num(r.D_cm2_per_s), k0: num(r.k0_cm_per_s), ks: num(r.ks_per_s) };
+  for (const r of table('raw series')) series[`${r.series}|${r.couple}`] = { slope: num(r.slope_ip_vs_sqrt_v_A_s05_V05), D: num(r.D_cm2_per_s), k0: num(r.k0_cm_per_s), ks: num(r.ks_per_s) };
   return { couples, series };
 }
 

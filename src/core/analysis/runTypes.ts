@@ -23,6 +23,8 @@ export interface FileProvenance {
   /** Detected layout in plain words (io/describeLayout.ts). */
   layout?: string | null;
   importWarnings?: string[];
+  /** What the file's header says (key → text: sample, operator, electrodes...), carried into the sheet. */
+  metadata?: Record<string, string>;
 }
 
 /** The user's choices for one file's trace, on the scale the file was recorded on (V). */
