@@ -47,6 +47,8 @@ export function analyzeText(r: AnalyzeRunResult): string {
   if (!r.series.couples.length) parts.push('  no couples found');
   for (const c of r.series.couples) parts.push(...seriesLines(c));
   if (r.capacitance) parts.push('', `Double-layer capacitance: ${f(r.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
-  if (r.warnings.length) parts.push('', 'Warnings:', ...r.warnings.map((w) => `  - ${w.fileName ? `${w.fileName}: ` : ''}${w.message}`));
+  // One push per warning: a spread of 10⁵ warnings (a trace of many tiny cycles) overflows the stack.
+  if (r.warnings.length) parts.push('', 'Warnings:');
+  for (const w of r.warnings) parts.push(`  - ${w.fileName ? `${w.fileName}: ` : ''}${w.message}`);
   return `${parts.join('\n')}\n`;
 }
