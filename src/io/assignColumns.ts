@@ -5,7 +5,7 @@
  */
 import { columnStats, looksLikeCycle, looksLikeIndex, looksLikeTime } from './columnStats';
 import type { ColumnStats } from './columnStats';
-import { ImportError, makeWarning } from './errors';
+import { ImportError, listSome, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
 import { readHeader } from './headerNames';
 import type { HeaderReading } from './headerNames';
@@ -39,7 +39,7 @@ export function assignColumns(fileName: string, names: string[] | null, columns:
   const current = find('current');
   if (potential < 0 || current < 0) {
     const numeric = stats.filter((s) => s.finite > 0).length;
-    const list = slots.map((s, j) => `${j + 1}: ${names?.[j] ?? 'unnamed'} (${s.role ?? 'unknown'})`).join('; ');
+    const list = listSome(slots.slice(0, 8).map((s, j) => `${j + 1}: ${names?.[j] ?? 'unnamed'} (${s.role ?? 'unknown'})`), slots.length, '; ');
     throw new ImportError(numeric < 2 ? 'ONE_COLUMN' : 'NO_TABLE', fileName, `could not tell which column is the ${potential < 0 ? 'potential' : 'current'} (columns ${list}); choose it with a column override`);
   }
   const time = find('time');
@@ -93,32 +93,38 @@ function applyOverrides(fileName: string, slots: Slot[], stats: ColumnStats[], o
 }
 
 function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarning[], fileName: string): void {
-  const has = (r: ColumnRole) => slots.some((s) => s.role === r);
+  // Kept incrementally (not recounted per column), so a file with 10⁶ columns stays linear.
+  const roles = new Set<ColumnRole | null>(slots.map((s) => s.role));
+  let freeCount = slots.reduce((n, s) => n + (s.role === null ? 1 : 0), 0);
+  const isFree = (j: number) => (slots[j] as Slot).role === null;
   const free = () => slots.map((s, j) => (s.role === null ? j : -1)).filter((j) => j >= 0);
-  const rows = Math.max(...stats.map((s) => s.finite));
+  let rows = 0;
+  for (const s of stats) rows = Math.max(rows, s.finite);
   const guessed: string[] = [];
   const set = (j: number, role: ColumnRole, why: string) => {
     slots[j] = { role, why };
+    roles.add(role);
+    freeCount--;
     guessed.push(`column ${j + 1} → ${role}`);
   };
   // Counters, cycle numbers and time only when enough columns remain for potential and current.
-  const spare = () => free().length - (has('potential') ? 0 : 1) - (has('current') ? 0 : 1);
-  for (const j of free()) if (spare() > 0 && looksLikeIndex(stats[j] as ColumnStats)) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
-  for (const j of free()) if (spare() > 0 && !has('cycle') && looksLikeCycle(stats[j] as ColumnStats, rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${(stats[j] as ColumnStats).distinct} values)`);
+  const spare = () => freeCount - (roles.has('potential') ? 0 : 1) - (roles.has('current') ? 0 : 1);
+  const st = (j: number) => stats[j] as ColumnStats;
+  for (let j = 0; j < slots.length; j++) if (isFree(j) && spare() > 0 && looksLikeIndex(st(j))) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
+  for (let j = 0; j < slots.length; j++) if (isFree(j) && spare() > 0 && !roles.has('cycle') && looksLikeCycle(st(j), rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${st(j).distinct} values)`);
   // Of several rising columns (a single forward sweep rises too), time is the one starting nearest 0.
-  const timeLike = free().filter((j) => looksLikeTime(stats[j] as ColumnStats));
-  const offset = (j: number) => Math.abs((stats[j] as ColumnStats).min) / ((stats[j] as ColumnStats).max - (stats[j] as ColumnStats).min);
-  const t = timeLike.sort((a, b) => offset(a) - offset(b))[0];
-  if (t !== undefined && spare() > 0 && !has('time')) set(t, 'time', 'time — rises steadily from row to row, starting nearest 0');
-  if (!has('potential') && free().length) {
+  const offset = (j: number) => Math.abs(st(j).min) / (st(j).max - st(j).min);
+  let t: number | undefined;
+  for (let j = 0; j < slots.length; j++) if (isFree(j) && looksLikeTime(st(j)) && (t === undefined || offset(j) < offset(t))) t = j;
+  if (t !== undefined && spare() > 0 && !roles.has('time')) set(t, 'time', 'time — rises steadily from row to row, starting nearest 0');
+  if (!roles.has('potential') && freeCount > 0) {
     const [j, why] = guessPotential(free(), stats);
     set(j, 'potential', why);
   }
-  const rest = free();
-  if (!has('current') && rest.length) set(rest[0] as number, 'current', 'current — the next unnamed numeric column after the potential');
+  if (!roles.has('current') && freeCount > 0) set(slots.findIndex((s) => s.role === null), 'current', 'current — the next unnamed numeric column after the potential');
   slots.forEach((s, j) => { if (s.role === null) slots[j] = { role: 'other', why: 'not recognised; kept as an extra column' }; });
   if (guessed.length) {
-    warnings.push(makeWarning('ROLE_GUESSED', `${fileName}: column roles guessed from the numbers, not from a header (${guessed.join(', ')}); check them and override if wrong`));
+    warnings.push(makeWarning('ROLE_GUESSED', `${fileName}: column roles guessed from the numbers, not from a header (${listSome(guessed)}); check them and override if wrong`));
   }
 }
 

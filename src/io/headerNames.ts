@@ -27,12 +27,15 @@ const ROLE_WORDS: [ColumnRole, RegExp][] = [
   ['index', /^(index|idx|point|points|pt|no\.?|nr\.?|#|n|row|number|data\s*point|sample)$/i],
 ];
 
+const MAX_NAME_CHARS = 200;
+
 const SECONDARY = /^(i2|current\s*2|we\s*2\s*current|e2|we\s*2\s*potential|potential\s*2)$/i;
 const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|power|resistance|freq|phase|ox\/red|control|status|flag|mode|comment/i;
 
 /** Splits "E vs Ag/AgCl (mV)" into label "E", unit "mV" and reference "Ag/AgCl". */
 export function readHeader(raw: string): HeaderReading {
-  let text = raw.trim().replace(/^["']|["']$/g, '').trim();
+  // No column name is longer; the cap keeps the patterns below linear on hostile input.
+  let text = raw.slice(0, MAX_NAME_CHARS).trim().replace(/^["']|["']$/g, '').trim();
   let reference: string | null = null;
   const vs = /\s+vs\.?\s+(.+?)(?=\s*[[(]|\s*\/\s*[kmµuμ]?V\b|$)/i.exec(text);
   if (vs) {

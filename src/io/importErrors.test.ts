@@ -53,6 +53,12 @@ describe('importVoltammogram: typed errors', () => {
     expect(failure(oddUtf16, { encoding: 'utf-16le' }).code).toBe('ENCODING');
   });
 
+  it('a table wider than any voltammogram export (one line of 300,000 numbers, 1.2 MB) → TOO_MANY_COLUMNS on line 1', () => {
+    const e = failure('1.0,'.repeat(300_000));
+    expect([e.code, e.line]).toEqual(['TOO_MANY_COLUMNS', 1]);
+    expect(e.message).toContain('300001 columns');
+  });
+
   it('a column override outside the table → BAD_OVERRIDE', () => {
     expect(failure(GOOD, { potentialColumn: 5 }).code).toBe('BAD_OVERRIDE');
     expect(failure(GOOD, { headerLine: 999 }).code).toBe('BAD_OVERRIDE');

@@ -117,6 +117,7 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): 
     startOffset: front.startOffset,
     startLine: layout.firstDataLine + 1,
     headerText: front.header.headerKey,
+    fileName,
   });
   let step = tableSteps.next();
   while (!step.done) {

@@ -18,7 +18,11 @@ export interface PreambleReading {
   convention: { value: CurrentConvention; line: number; text: string } | null;
 }
 
-const NUMBER = '([+-]?(?:\\d+[.,]?\\d*|[.,]\\d+)(?:[eE][+-]?\\d+)?)';
+const MAX_LINE_CHARS = 1000;
+// A number starts where no digit, point or comma stands before it, and a run of digits splits one
+// way only (\d+(?:[.,]\d*)? rather than \d+[.,]?\d*): the patterns below then backtrack
+// linearly, not cubically, on a long run of digits.
+const NUMBER = '(?<![\\d.,])([+-]?(?:\\d+(?:[.,]\\d*)?|[.,]\\d+)(?:[eE][+-]?\\d+)?)';
 
 /** `lines` are the preamble lines; `firstLine` is the 1-based file line of lines[0]. */
 export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
@@ -26,7 +30,8 @@ export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
   let fromSample: PreambleValue | null = null;
   lines.forEach((raw, i) => {
     const line = firstLine + i;
-    const text = raw.replace(/^\s*(#|%|\/\/|;|!)+\s*/, '').trim();
+    // Only the head of a very long line is read: the patterns below stay linear, the metadata short.
+    const text = raw.slice(0, MAX_LINE_CHARS).replace(/^\s*(#|%|\/\/|;|!)+\s*/, '').trim();
     if (!text) return;
     const kv = splitKeyValue(text);
     if (kv) addMetadata(out.metadata, kv.key, kv.value);
