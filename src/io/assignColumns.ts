@@ -25,11 +25,13 @@ export interface RoleAssignment {
 type Slot = { role: ColumnRole | null; why: string };
 const OVERRIDE_KEYS = [['potential', 'potentialColumn'], ['current', 'currentColumn'], ['time', 'timeColumn'], ['cycle', 'cycleColumn']] as const;
 
-export function assignColumns(fileName: string, names: string[] | null, columns: Float64Array[], overrides: ImportOverrides): RoleAssignment {
+/** `units`: the entries of a units row under or over the names, when the file has one. */
+export function assignColumns(fileName: string, names: string[] | null, columns: Float64Array[], overrides: ImportOverrides, units: string[] | null = null): RoleAssignment {
   const k = columns.length;
-  const headers = Array.from({ length: k }, (_, j) => (names?.[j] ? readHeader(names[j] as string) : null));
+  const headers = Array.from({ length: k }, (_, j) => (names?.[j] || units?.[j] ? readHeader(names?.[j] ?? '', units?.[j] ?? '') : null));
   const stats = columns.map((c) => columnStats(c));
   const slots: Slot[] = headers.map((h, j) => slotFromHeader(h, stats[j] as ColumnStats));
+  pickCurrentColumn(slots, headers);
   dedupeRoles(slots, headers);
   applyOverrides(fileName, slots, stats, overrides);
   const warnings: ImportWarning[] = [];
@@ -59,8 +61,29 @@ function slotFromHeader(h: HeaderReading | null, s: ColumnStats): Slot {
   if (!h) return { role: null, why: '' };
   if (h.secondary) return { role: 'other', why: `header "${h.label}" names a second electrode or copy; kept as an extra column` };
   if (!h.role) return { role: null, why: '' };
-  const unit = h.unitText ? ` with unit ${h.unit?.symbol ?? h.unitText}` : '';
-  return { role: h.role, why: `${h.role} — header "${h.label || h.unitText}"${unit}` };
+  const unit = h.unitText ? ` with unit ${h.unit?.symbol ?? h.unitText}${h.unitFrom === 'units row' ? ' from the units row' : ''}` : '';
+  const kind = h.density ? ' (a current density)' : '';
+  return { role: h.role, why: `${h.role} — header "${h.label || h.unitText}"${unit}${kind}` };
+}
+
+/**
+ * Of several current columns, the current is used: a column in amperes before a density, a
+ * density that states its unit before one that does not, else the first. The others are kept as
+ * extra columns, and both sides say why.
+ */
+function pickCurrentColumn(slots: Slot[], headers: (HeaderReading | null)[]): void {
+  const rank = (j: number) => (!headers[j]?.density ? 0 : headers[j]?.unit ? 1 : 2);
+  const cands = slots.map((s, j) => (s.role === 'current' ? j : -1)).filter((j) => j >= 0);
+  if (cands.length < 2) return;
+  const best = cands.reduce((a, b) => (rank(b) < rank(a) ? b : a));
+  const what = (j: number) => `column ${j + 1} "${headers[j]?.label ?? ''}"${headers[j]?.density ? ` (a current density${headers[j]?.unit ? '' : ' with no unit'})` : ' (a current)'}`;
+  const reason = rank(best) === 0 ? 'a current is preferred to a density' : rank(best) === 1 ? 'it states its unit' : 'it comes first';
+  for (const j of cands) {
+    if (j === best) continue;
+    slots[j] = { role: 'other', why: `${what(j)}: ${what(best)} is used as the current (${reason}); this one is kept as an extra column` };
+  }
+  const chosen = slots[best] as Slot;
+  slots[best] = { role: 'current', why: `${chosen.why}; chosen over ${cands.filter((j) => j !== best).map(what).join(', ')}: ${reason}` };
 }
 
 function dedupeRoles(slots: Slot[], headers: (HeaderReading | null)[]): void {

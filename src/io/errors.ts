@@ -57,6 +57,7 @@ export type ImportWarningCode =
   | 'UNIT_ASSUMED'
   | 'ROLE_GUESSED'
   | 'CURRENT_DENSITY'
+  | 'REFERENCE_DISAGREES'
   | 'NO_SCAN_RATE'
   | 'SCAN_RATE_DISAGREES'
   | 'SCAN_RATE_UNEVEN'

@@ -100,9 +100,13 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   const layout = detectLayout(fileName, sample.lines, o);
   const decimalComma = layout.decimalMark.value === ',';
   const header = detectHeader(fileName, sample.lines, layout.firstDataLine, layout.delimiter.value, decimalComma, layout.fieldCount, o);
-  const preambleLines = sample.lines.slice(0, header.preambleEnd);
+  // Everything above the table but the names and units rows is read as preamble: comment lines
+  // inside the header block too. Those two rows become blank, so line numbers stay right.
+  const namesLine = header.guess.value === null ? -1 : header.guess.value - 1;
+  const above = sample.lines.slice(0, layout.firstDataLine).map((l, i) => (i === namesLine || i === header.unitsLine ? '' : l));
+  const preambleLines = above.filter((_, i) => i !== namesLine && i !== header.unitsLine);
   const headLines = sample.lines.slice(0, 40).map((l) => (l.length > 240 ? `${l.slice(0, 240)}…` : l));
-  return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre: readPreamble(preambleLines, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
+  return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre: readPreamble(above, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
 }
 
 function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): Generator<number, ImportResult> {

@@ -126,6 +126,14 @@ function isWhiteSpace(c: number): boolean {
 }
 
 /**
+ * A decimal number in free text (a preamble line, a column name), as a RegExp source with one
+ * capture group. It starts where no digit, point or comma stands before it, and a run of digits
+ * splits one way only (\d+(?:[.,]\d*)? rather than \d+[.,]?\d*): patterns built on it then
+ * backtrack linearly, not cubically, on a long run of digits.
+ */
+export const NUMBER_PATTERN = '(?<![\\d.,])([+-]?(?:\\d+(?:[.,]\\d*)?|[.,]\\d+)(?:[eE][+-]?\\d+)?)';
+
+/**
  * Reads a number strictly: surrounding blanks allowed, scientific notation allowed, decimal
  * comma when `decimalComma`; hexadecimal/binary/octal literals, thousands separators and text
  * give NaN. Empty fields give NaN (Number('') would give 0).
