@@ -27,7 +27,7 @@ import type { ImportDetection, ImportOptions, ImportOverrides, ImportResult } fr
 export type ImportInput = string | ArrayBuffer | Uint8Array;
 
 export function importVoltammogram(fileName: string, data: ImportInput, options: ImportOptions = {}): ImportResult {
-  const steps = importSteps(fileName, data, options.overrides ?? {});
+  const steps = importSteps(fileName, data, options.overrides ?? {}, options.tableReader ?? 'auto');
   for (;;) {
     const r = guard(fileName, () => steps.next());
     if (r.done) return r.value;
@@ -43,7 +43,7 @@ export interface AsyncImportOptions extends ImportOptions {
 }
 
 export async function importVoltammogramAsync(fileName: string, data: ImportInput, options: AsyncImportOptions = {}): Promise<ImportResult> {
-  const steps = importSteps(fileName, data, options.overrides ?? {});
+  const steps = importSteps(fileName, data, options.overrides ?? {}, options.tableReader ?? 'auto');
   const maybeYield = options.maybeYield ?? createYielder();
   for (;;) {
     options.signal?.throwIfAborted();
@@ -109,7 +109,7 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre: readPreamble(above, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
 }
 
-function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): Generator<number, ImportResult> {
+function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, reader: 'auto' | 'papaparse'): Generator<number, ImportResult> {
   const warnings: ImportWarning[] = [];
   const front = readFrontMatter(fileName, data, o, warnings);
   const { layout } = front;
@@ -122,6 +122,7 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): 
     startLine: layout.firstDataLine + 1,
     headerText: front.header.headerKey,
     fileName,
+    reader,
   });
   let step = tableSteps.next();
   while (!step.done) {

@@ -126,6 +126,12 @@ export interface ImportResult {
 
 export interface ImportOptions {
   overrides?: ImportOverrides;
+  /**
+   * How the table is tokenised: 'auto' reads quote-free chunks in place and quoted ones with
+   * papaparse; 'papaparse' sends every chunk through papaparse (the reference the fuzz suite
+   * compares the fast path with). @default 'auto'
+   */
+  tableReader?: 'auto' | 'papaparse';
   /** Called with the fraction done, 0..1, a few dozen times per file at most. */
   onProgress?: (fraction: number) => void;
 }
