@@ -10,10 +10,11 @@
  * WebP. ENCODING: bytes invalid in the chosen encoding. NO_TABLE: no run of lines with two or
  * more numeric fields, or no column could be made the potential/current. ONE_COLUMN: numbers,
  * but one per line. TOO_FEW_POINTS: fewer than 3 usable rows. CONSTANT_POTENTIAL: the potential
- * never changes. BAD_OVERRIDE: a user override that cannot apply. TOO_MANY_COLUMNS: rows wider
- * than any export of one voltammogram. RAGGED_TABLE: most rows far narrower than the table's
- * first rows (padding them would take memory out of all proportion to the file). INTERNAL: a fault in the
- * importer itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
+ * never changes. NOT_A_SWEEP: the potential turns back at nearly every point. BAD_OVERRIDE: a
+ * user override that cannot apply. TOO_MANY_COLUMNS: rows wider than any export of one
+ * voltammogram. RAGGED_TABLE: most rows far narrower than the table's first rows (padding them
+ * would take memory out of all proportion to the file). INTERNAL: a fault in the importer
+ * itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
  */
 export type ImportErrorCode =
   | 'EMPTY'
@@ -25,6 +26,7 @@ export type ImportErrorCode =
   | 'ONE_COLUMN'
   | 'TOO_FEW_POINTS'
   | 'CONSTANT_POTENTIAL'
+  | 'NOT_A_SWEEP'
   | 'BAD_OVERRIDE'
   | 'TOO_MANY_COLUMNS'
   | 'RAGGED_TABLE'

@@ -123,7 +123,20 @@ export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment
     }
   });
   const split = findSweepSegments(potentialV, { cycleColumn });
+  assertSwept(fileName, split, potentialV.length, a.potential);
   return { potentialV, currentA, timeS, cycleColumn, extraColumns, split, rowsKept: kept, rowsDropped: droppedCount };
+}
+
+/**
+ * A potential that turns at nearly every point (thousands of sweeps of two or three points) is not
+ * swept: it is another quantity, or noise. Caught here, before the analysis would treat each
+ * turn as a cycle. Thresholds: common practice, no source.
+ */
+function assertSwept(fileName: string, split: SweepSplit, points: number, column: number): void {
+  const sweeps = split.segments.length;
+  if (sweeps >= 100 && points / sweeps < 4) {
+    throw new ImportError('NOT_A_SWEEP', fileName, `the potential column turns back ${sweeps} times in ${points} points (every ${(points / sweeps).toFixed(1)} points), so it is not a potential sweep — is another column the potential?`, { column: column + 1 });
+  }
 }
 
 function assertPotentialChanges(fileName: string, e: Float64Array, column: number, line: number): void {
