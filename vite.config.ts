@@ -1,10 +1,12 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
+import { contentSecurityPolicy } from './scripts/contentSecurityPolicy';
 
-// Static build: everything is served from the same origin; no request leaves the machine.
+// Static build: everything is served from the same origin; no request leaves the machine. The
+// built index.html carries the Content-Security-Policy of scripts/contentSecurityPolicy.ts.
 export default defineConfig({
   base: './',
-  plugins: [react()],
+  plugins: [react(), contentSecurityPolicy()],
   worker: { format: 'es' },
   server: { host: '127.0.0.1', port: 5173 },
   preview: { host: '127.0.0.1', port: 4173 },

@@ -2,9 +2,12 @@
  * Speed of the per-voltammogram analysis (src/core/analysis/analyzeVoltammogram.ts), measured in
  * one run so that the ratios compare like with like: one 2,001-point voltammogram (clean, and
  * with noise plus charging), a batch of 100 such files, and the analysis time against the time to
- * simulate the same trace. Accuracy rows repeat two of the unit-test checks for the record.
+ * simulate the same trace, and a six-file scan-rate series through analyzeRun (per-file analysis,
+ * couple matching, Randles–Ševčík and log–log fits). Accuracy rows repeat two of the unit-test
+ * checks for the record.
  */
 import { FARADAY_C_PER_MOL as F, inverseThermalVoltagePerV } from '../src/core/constants';
+import { analyzeRun } from '../src/core/analysis/analyzeRun';
 import { analyzeVoltammogram } from '../src/core/analysis/analyzeVoltammogram';
 import { simulatedVoltammogram } from '../src/core/peaks/simulatedVoltammogram';
 import { simulateCv } from '../src/core/simulation';
@@ -31,6 +34,18 @@ function accuracyRows(clean: Voltammogram): BenchRow[] {
   ];
 }
 
+/** Six files of one reversible couple at 0.02–1 V/s, analysed as a series (as `halfwave analyze` does). */
+function seriesRow(): BenchRow {
+  const rates = [0.02, 0.05, 0.1, 0.2, 0.5, 1];
+  const inputs = rates.map((v, k) => ({
+    fileName: `series_${Math.round(v * 1000)}mVs.csv`,
+    voltammogram: simulatedVoltammogram({ ...TRACE, scanRateVPerS: v, doubleLayerFPerCm2: 20e-6 }, { noiseA: 1e-7, seed: 100 + k }),
+  }));
+  const cells = { 'series 1': { electronCount: 1, areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 } };
+  const ms = medianMs(() => analyzeRun({ files: inputs, cells }), 5, 1);
+  return { name: `analyse a ${rates.length}-file scan-rate series (analyzeRun)`, value: ms, unit: 'ms', note: '2,001 points per file, median of 5', key: 'seriesAnalysisMs' };
+}
+
 export async function runAnalysisBench(): Promise<BenchRow[]> {
   const clean = simulatedVoltammogram(TRACE);
   const noisy = simulatedVoltammogram({ ...TRACE, doubleLayerFPerCm2: 20e-6 }, { noiseA: 1e-7, seed: 5 });
@@ -48,6 +63,7 @@ export async function runAnalysisBench(): Promise<BenchRow[]> {
     { name: 'analyse a batch of 100 noisy CVs', value: batchMs, unit: 'ms', note: 'median of 3 after 1 warm-up run' },
     { name: '  ratio batch / (100 × one noisy CV)', value: batchMs / (100 * noisyMs), unit: '×', note: '≈ 1: no per-batch overhead' },
     { name: '  throughput', value: (100 * points) / batchMs, unit: 'points/ms' },
+    seriesRow(),
     ...accuracyRows(simulatedVoltammogram({ ...TRACE, switchV: -0.4, startV: 0.4 })),
   ];
 }

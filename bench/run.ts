@@ -3,6 +3,8 @@
  * Figures and ratios come from the same run on the same machine; there are no pass/fail timings
  * here or in the unit tests. To add a bench, put `bench/<name>Bench.ts` exporting
  * `async function run<Name>Bench(): Promise<BenchRow[]>` and append it to REGISTRY.
+ * `npm run bench -- --json` also prints, as its last line, one JSON object of every row that has
+ * a `key` (importVsPapaparse, importMBps, …): to publish a new figure, give its row a key.
  */
 import { existsSync } from 'node:fs';
 import { cpus } from 'node:os';
@@ -15,6 +17,7 @@ export const REGISTRY: BenchEntry[] = [
   { title: 'import', file: './importBench.ts', exportName: 'runImportBench' },
   { title: 'analysis', file: './analysisBench.ts', exportName: 'runAnalysisBench' },
   { title: 'scale', file: './scaleBench.ts', exportName: 'runScaleBench' },
+  { title: 'hostile input', file: './hostileBench.ts', exportName: 'runHostileBench' },
 ];
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -41,20 +44,37 @@ async function runEntry(entry: BenchEntry): Promise<BenchRow[] | string> {
   return (await (fn as () => Promise<BenchRow[]>)()) ?? [];
 }
 
+/** The keyed figures of all rows, in registry order; a key used twice is an error. */
+export function keyedFigures(rows: BenchRow[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const r of rows) {
+    if (r.key === undefined) continue;
+    if (r.key in out) throw new Error(`bench key ${r.key} is used by two rows`);
+    out[r.key] = Number(r.value.toPrecision(6));
+  }
+  return out;
+}
+
 async function main(): Promise<void> {
+  const json = process.argv.includes('--json');
   console.log(`Halfwave bench — node ${process.version}, ${cpus().length} CPU(s) (${cpus()[0]?.model ?? 'unknown'})`);
-  let failed = false;
+  const failed: string[] = [];
+  const all: BenchRow[] = [];
   for (const entry of REGISTRY) {
     try {
       const result = await runEntry(entry);
       if (typeof result === 'string') console.log(`\n## ${entry.title}: ${result}`);
-      else printTable(entry.title, result);
+      else {
+        printTable(entry.title, result);
+        all.push(...result);
+      }
     } catch (err) {
-      failed = true;
+      failed.push(entry.title);
       console.log(`\n## ${entry.title}: failed: ${err instanceof Error ? err.message : String(err)}`);
     }
   }
-  process.exitCode = failed ? 1 : 0;
+  if (json) console.log(JSON.stringify({ ...keyedFigures(all), ...(failed.length ? { failed } : {}) }));
+  process.exitCode = failed.length ? 1 : 0;
 }
 
 const isMain = process.argv[1] !== undefined && fileURLToPath(import.meta.url) === process.argv[1];

@@ -4,6 +4,11 @@ export interface BenchRow {
   value: number;
   unit: string;
   note?: string;
+  /**
+   * Name of the figure in `npm run bench -- --json` (e.g. 'importVsPapaparse'); rows without a
+   * key are printed in the table only. A key appears once across all benches.
+   */
+  key?: string;
 }
 
 /** A registered bench: the file in bench/ and the async function it exports. */

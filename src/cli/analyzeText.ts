@@ -50,6 +50,8 @@ export function analyzeText(r: AnalyzeRunResult): string {
     for (const c of s.analysis.couples) parts.push(...seriesLines(c));
     if (s.capacitance) parts.push(`  double-layer capacitance: ${f(s.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
   }
-  if (r.warnings.length) parts.push('', 'Warnings:', ...r.warnings.map((w) => `  - ${w.fileName ? `${w.fileName}: ` : w.series ? `${w.series}: ` : ''}${w.message}`));
+  // One push per warning: a spread of 10⁵ warnings (a trace of many tiny cycles) overflows the stack.
+  if (r.warnings.length) parts.push('', 'Warnings:');
+  for (const w of r.warnings) parts.push(`  - ${w.fileName ? `${w.fileName}: ` : w.series ? `${w.series}: ` : ''}${w.message}`);
   return `${parts.join('\n')}\n`;
 }

@@ -33,7 +33,8 @@ function formatOne(path: string, r: ImportResult): string {
   out += row('rows', `${d.rowsRead} read, ${d.rowsSkipped} skipped (table on lines ${d.tableLines.first}–${d.tableLines.last}${footer})`);
   out += row('cycles', `${d.cycleCount} (${m.segments.length} sweeps)`);
   out += row('scan rate', `${strip(d.scanRate.explanation, 'scan rate')}${m.scanRateSource ? ` [source: ${m.scanRateSource}]` : ''}`);
-  if (m.referenceElectrode) out += row('reference', m.referenceElectrode);
+  out += row('reference', strip(d.reference.explanation, 'reference'));
+  out += row('current kind', d.currentKind.explanation);
   const extras = [
     m.temperatureK ? `temperature ${(m.temperatureK.value - 273.15).toFixed(2)} °C (line ${m.temperatureK.line})` : '',
     m.areaCm2 ? `area ${m.areaCm2.value} cm² (line ${m.areaCm2.line})` : '',
@@ -62,6 +63,8 @@ export function inspectJson(outcomes: InputOutcome[]): unknown {
       scanRateSource: m.scanRateSource,
       currentConvention: m.currentConvention,
       referenceElectrode: m.referenceElectrode,
+      currentKind: m.currentKind,
+      densityAreaCm2: m.densityAreaCm2,
       temperatureK: m.temperatureK,
       areaCm2: m.areaCm2,
       concentrationMolPerCm3: m.concentrationMolPerCm3,

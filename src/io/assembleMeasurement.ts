@@ -7,28 +7,30 @@ import type { RoleAssignment } from './assignColumns';
 import { chooseScanRate } from './chooseScanRate';
 import { makeWarning } from './errors';
 import type { ImportWarning } from './errors';
+import type { HeaderFound } from './detectHeader';
 import type { FrontMatter } from './importVoltammogram';
 import { measurementId } from './measurementId';
 import type { ParsedTable } from './parseTable';
 import type { PreambleReading } from './readPreamble';
+import { scanRateIn } from './readScanRate';
+import { chooseCurrentKind, chooseReference } from './recordingGuesses';
 import { buildColumns, chooseUnits } from './toMeasurement';
 import type { CoreColumns, UnitChoice } from './toMeasurement';
-import type { CurrentConvention, Guess, ImportDetection, ImportOverrides, Measurement } from './types';
+import type { CurrentConvention, Guess, ImportDetection, ImportOverrides, Measurement, PreambleValue } from './types';
 import type { ScanRateChoice } from './chooseScanRate';
 
 export function assembleMeasurement(fileName: string, front: FrontMatter, table: ParsedTable, o: ImportOverrides, warnings: ImportWarning[]): Measurement {
   const { pre } = front;
-  const roles = assignColumns(fileName, front.header.names, table.columns, o);
+  const { header } = front;
+  const roles = assignColumns(fileName, header.names, table.columns, o, header.units);
   warnings.push(...roles.warnings);
   const convention = chooseConvention(o, pre);
   const units = chooseUnits(fileName, roles, o, warnings);
-  if (units.currentDensity) {
-    warnings.push(makeWarning('CURRENT_DENSITY', pre.areaCm2
-      ? `${fileName}: the current column is a current density; multiplied by the area ${pre.areaCm2.value} cm² from line ${pre.areaCm2.line}`
-      : `${fileName}: the current column is a current density and the file states no electrode area; values are kept per cm² (as if the area were 1 cm²)`));
-  }
+  const kind = chooseCurrentKind(fileName, units, roles, pre.areaCm2, warnings);
+  const reference = chooseReference(fileName, pre, roles, header, warnings);
   const cols = buildColumns(fileName, table, roles, units, convention.value, pre.areaCm2, warnings);
-  const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: pre.scanRateVPerS }, warnings);
+  const written = pre.scanRateVPerS ?? scanRateInNames(header);
+  const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: written }, warnings);
   if (cols.timeS && !isNonDecreasing(cols.timeS)) {
     warnings.push(makeWarning('TIME_NOT_MONOTONIC', `${fileName}: the time column goes backwards in places (restarts per cycle?); it is kept as read`));
   }
@@ -45,24 +47,42 @@ export function assembleMeasurement(fileName: string, front: FrontMatter, table:
     metadata: pre.metadata,
     preamble: front.preambleLines,
     currentConvention: convention.value,
-    referenceElectrode: pre.referenceElectrode?.value ?? roles.headers[roles.potential]?.reference ?? null,
+    currentKind: kind.guess.value,
+    densityAreaCm2: kind.areaCm2,
+    referenceElectrode: reference.value,
     temperatureK: pre.temperatureK,
     areaCm2: pre.areaCm2,
     concentrationMolPerCm3: pre.concentrationMolPerCm3,
     cycleColumn: cols.cycleColumn,
     extraColumns: cols.extraColumns,
-    detection: buildDetection(front, table, roles, units, convention, scan, cols),
+    detection: { ...buildDetection(front, table, roles, units, convention, scan, cols), currentKind: kind.guess, reference },
   };
 }
 
-function buildDetection(front: FrontMatter, table: ParsedTable, roles: RoleAssignment, units: UnitChoice, convention: Guess<CurrentConvention>, scan: ScanRateChoice, cols: CoreColumns): ImportDetection {
+/** A scan rate written in a column name ("j @ 50 mV s-1"), as a preamble value on the header line. */
+function scanRateInNames(header: HeaderFound): PreambleValue | null {
+  if (!header.names || header.guess.value === null) return null;
+  for (const n of header.names) {
+    const found = scanRateIn(n.slice(0, 200), header.guess.value);
+    if (found) return found;
+  }
+  return null;
+}
+
+function buildDetection(front: FrontMatter, table: ParsedTable, roles: RoleAssignment, units: UnitChoice, convention: Guess<CurrentConvention>, scan: ScanRateChoice, cols: CoreColumns): Omit<ImportDetection, 'currentKind' | 'reference'> {
+  const { header } = front;
   const { layout } = front;
   return {
     encoding: front.decoded.encoding,
     lineEnding: front.lineEnding,
     delimiter: layout.delimiter,
     decimalMark: layout.decimalMark,
-    headerLine: front.header.guess,
+    headerLine: header.guess,
+    headerBlock: {
+      namesLine: header.guess.value,
+      unitsLine: header.unitsLine === null ? null : header.unitsLine + 1,
+      commentLines: header.commentLines.map((i) => i + 1),
+    },
     columns: roles.columns,
     potentialUnit: units.potential,
     currentUnit: units.current,

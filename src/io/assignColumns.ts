@@ -5,7 +5,7 @@
  */
 import { columnStats, looksLikeCycle, looksLikeIndex, looksLikeTime } from './columnStats';
 import type { ColumnStats } from './columnStats';
-import { ImportError, makeWarning } from './errors';
+import { ImportError, listSome, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
 import { readHeader } from './headerNames';
 import type { HeaderReading } from './headerNames';
@@ -25,11 +25,13 @@ export interface RoleAssignment {
 type Slot = { role: ColumnRole | null; why: string };
 const OVERRIDE_KEYS = [['potential', 'potentialColumn'], ['current', 'currentColumn'], ['time', 'timeColumn'], ['cycle', 'cycleColumn']] as const;
 
-export function assignColumns(fileName: string, names: string[] | null, columns: Float64Array[], overrides: ImportOverrides): RoleAssignment {
+/** `units`: the entries of a units row under or over the names, when the file has one. */
+export function assignColumns(fileName: string, names: string[] | null, columns: Float64Array[], overrides: ImportOverrides, units: string[] | null = null): RoleAssignment {
   const k = columns.length;
-  const headers = Array.from({ length: k }, (_, j) => (names?.[j] ? readHeader(names[j] as string) : null));
+  const headers = Array.from({ length: k }, (_, j) => (names?.[j] || units?.[j] ? readHeader(names?.[j] ?? '', units?.[j] ?? '') : null));
   const stats = columns.map((c) => columnStats(c));
   const slots: Slot[] = headers.map((h, j) => slotFromHeader(h, stats[j] as ColumnStats));
+  pickCurrentColumn(slots, headers);
   dedupeRoles(slots, headers);
   applyOverrides(fileName, slots, stats, overrides);
   const warnings: ImportWarning[] = [];
@@ -39,7 +41,7 @@ export function assignColumns(fileName: string, names: string[] | null, columns:
   const current = find('current');
   if (potential < 0 || current < 0) {
     const numeric = stats.filter((s) => s.finite > 0).length;
-    const list = slots.map((s, j) => `${j + 1}: ${names?.[j] ?? 'unnamed'} (${s.role ?? 'unknown'})`).join('; ');
+    const list = listSome(slots.slice(0, 8).map((s, j) => `${j + 1}: ${names?.[j] ?? 'unnamed'} (${s.role ?? 'unknown'})`), slots.length, '; ');
     throw new ImportError(numeric < 2 ? 'ONE_COLUMN' : 'NO_TABLE', fileName, `could not tell which column is the ${potential < 0 ? 'potential' : 'current'} (columns ${list}); choose it with a column override`);
   }
   const time = find('time');
@@ -59,8 +61,29 @@ function slotFromHeader(h: HeaderReading | null, s: ColumnStats): Slot {
   if (!h) return { role: null, why: '' };
   if (h.secondary) return { role: 'other', why: `header "${h.label}" names a second electrode or copy; kept as an extra column` };
   if (!h.role) return { role: null, why: '' };
-  const unit = h.unitText ? ` with unit ${h.unit?.symbol ?? h.unitText}` : '';
-  return { role: h.role, why: `${h.role} — header "${h.label || h.unitText}"${unit}` };
+  const unit = h.unitText ? ` with unit ${h.unit?.symbol ?? h.unitText}${h.unitFrom === 'units row' ? ' from the units row' : ''}` : '';
+  const kind = h.density ? ' (a current density)' : '';
+  return { role: h.role, why: `${h.role} — header "${h.label || h.unitText}"${unit}${kind}` };
+}
+
+/**
+ * Of several current columns, the current is used: a column in amperes before a density, a
+ * density that states its unit before one that does not, else the first. The others are kept as
+ * extra columns, and both sides say why.
+ */
+function pickCurrentColumn(slots: Slot[], headers: (HeaderReading | null)[]): void {
+  const rank = (j: number) => (!headers[j]?.density ? 0 : headers[j]?.unit ? 1 : 2);
+  const cands = slots.map((s, j) => (s.role === 'current' ? j : -1)).filter((j) => j >= 0);
+  if (cands.length < 2) return;
+  const best = cands.reduce((a, b) => (rank(b) < rank(a) ? b : a));
+  const what = (j: number) => `column ${j + 1} "${headers[j]?.label ?? ''}"${headers[j]?.density ? ` (a current density${headers[j]?.unit ? '' : ' with no unit'})` : ' (a current)'}`;
+  const reason = rank(best) === 0 ? 'a current is preferred to a density' : rank(best) === 1 ? 'it states its unit' : 'it comes first';
+  for (const j of cands) {
+    if (j === best) continue;
+    slots[j] = { role: 'other', why: `${what(j)}: ${what(best)} is used as the current (${reason}); this one is kept as an extra column` };
+  }
+  const chosen = slots[best] as Slot;
+  slots[best] = { role: 'current', why: `${chosen.why}; chosen over ${cands.filter((j) => j !== best).map(what).join(', ')}: ${reason}` };
 }
 
 function dedupeRoles(slots: Slot[], headers: (HeaderReading | null)[]): void {
@@ -93,32 +116,38 @@ function applyOverrides(fileName: string, slots: Slot[], stats: ColumnStats[], o
 }
 
 function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarning[], fileName: string): void {
-  const has = (r: ColumnRole) => slots.some((s) => s.role === r);
+  // Kept incrementally (not recounted per column), so a file with 10⁶ columns stays linear.
+  const roles = new Set<ColumnRole | null>(slots.map((s) => s.role));
+  let freeCount = slots.reduce((n, s) => n + (s.role === null ? 1 : 0), 0);
+  const isFree = (j: number) => (slots[j] as Slot).role === null;
   const free = () => slots.map((s, j) => (s.role === null ? j : -1)).filter((j) => j >= 0);
-  const rows = Math.max(...stats.map((s) => s.finite));
+  let rows = 0;
+  for (const s of stats) rows = Math.max(rows, s.finite);
   const guessed: string[] = [];
   const set = (j: number, role: ColumnRole, why: string) => {
     slots[j] = { role, why };
+    roles.add(role);
+    freeCount--;
     guessed.push(`column ${j + 1} → ${role}`);
   };
   // Counters, cycle numbers and time only when enough columns remain for potential and current.
-  const spare = () => free().length - (has('potential') ? 0 : 1) - (has('current') ? 0 : 1);
-  for (const j of free()) if (spare() > 0 && looksLikeIndex(stats[j] as ColumnStats)) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
-  for (const j of free()) if (spare() > 0 && !has('cycle') && looksLikeCycle(stats[j] as ColumnStats, rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${(stats[j] as ColumnStats).distinct} values)`);
+  const spare = () => freeCount - (roles.has('potential') ? 0 : 1) - (roles.has('current') ? 0 : 1);
+  const st = (j: number) => stats[j] as ColumnStats;
+  for (let j = 0; j < slots.length; j++) if (isFree(j) && spare() > 0 && looksLikeIndex(st(j))) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
+  for (let j = 0; j < slots.length; j++) if (isFree(j) && spare() > 0 && !roles.has('cycle') && looksLikeCycle(st(j), rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${st(j).distinct} values)`);
   // Of several rising columns (a single forward sweep rises too), time is the one starting nearest 0.
-  const timeLike = free().filter((j) => looksLikeTime(stats[j] as ColumnStats));
-  const offset = (j: number) => Math.abs((stats[j] as ColumnStats).min) / ((stats[j] as ColumnStats).max - (stats[j] as ColumnStats).min);
-  const t = timeLike.sort((a, b) => offset(a) - offset(b))[0];
-  if (t !== undefined && spare() > 0 && !has('time')) set(t, 'time', 'time — rises steadily from row to row, starting nearest 0');
-  if (!has('potential') && free().length) {
+  const offset = (j: number) => Math.abs(st(j).min) / (st(j).max - st(j).min);
+  let t: number | undefined;
+  for (let j = 0; j < slots.length; j++) if (isFree(j) && looksLikeTime(st(j)) && (t === undefined || offset(j) < offset(t))) t = j;
+  if (t !== undefined && spare() > 0 && !roles.has('time')) set(t, 'time', 'time — rises steadily from row to row, starting nearest 0');
+  if (!roles.has('potential') && freeCount > 0) {
     const [j, why] = guessPotential(free(), stats);
     set(j, 'potential', why);
   }
-  const rest = free();
-  if (!has('current') && rest.length) set(rest[0] as number, 'current', 'current — the next unnamed numeric column after the potential');
+  if (!roles.has('current') && freeCount > 0) set(slots.findIndex((s) => s.role === null), 'current', 'current — the next unnamed numeric column after the potential');
   slots.forEach((s, j) => { if (s.role === null) slots[j] = { role: 'other', why: 'not recognised; kept as an extra column' }; });
   if (guessed.length) {
-    warnings.push(makeWarning('ROLE_GUESSED', `${fileName}: column roles guessed from the numbers, not from a header (${guessed.join(', ')}); check them and override if wrong`));
+    warnings.push(makeWarning('ROLE_GUESSED', `${fileName}: column roles guessed from the numbers, not from a header (${listSome(guessed)}); check them and override if wrong`));
   }
 }
 

@@ -112,6 +112,9 @@ function better(a: Scored, b: Scored | null): boolean {
   return a.numericFraction > b.numericFraction + 1e-9;
 }
 
+/** Widest table read (common practice, no source: exports hold a few to a few dozen columns). */
+export const MAX_COLUMNS = 1000;
+
 /** Lines tried first; most preambles are far shorter, and the rest of a table only repeats itself. */
 const QUICK_LINES = 600;
 
@@ -146,6 +149,9 @@ function detectIn(fileName: string, lines: string[], overrides: ImportOverrides)
   }
   if (!best) throw noTableError(fileName, lines, overrides);
   const { c } = best;
+  if (best.k > MAX_COLUMNS) {
+    throw new ImportError('TOO_MANY_COLUMNS', fileName, `the table has ${best.k} columns (split at ${DELIMITER_NAME[c.delimiter]}), more than the ${MAX_COLUMNS} any export of one voltammogram needs; export the potential, current and time columns, or choose another delimiter`, { line: best.first + startAt + 1 });
+  }
   const first = best.first + startAt;
   const last = best.last + startAt;
   return {

@@ -1,22 +1,36 @@
 /**
- * Finds the header line above the numeric table: the nearest non-blank line above the first data
- * row that splits into as many fields as the table and is mostly text. A line of bare units under
- * the names ("Potential;Current" then "V;µA") is folded into the names. Common practice, no source.
+ * Finds the header block above the numeric table: a line of column names and a line of units
+ * (in either order), with comment lines (a sample code, a note) among or below them. Up to
+ * HEADER_BLOCK_LINES non-blank lines above the first data row are looked at. The names line is
+ * the nearest line that splits into as many fields as the table and is mostly text, and either
+ * sits right above the table (or the units row) or names two known quantities; the units row is the
+ * nearest line whose every entry is a unit ("V RHE", "", "mA cm-2"). Common practice, no source.
  */
 import { ImportError } from './errors';
+import { readHeader } from './headerNames';
 import { parseNumber, splitFields } from './textLines';
 import { parseUnit } from './units';
+import { splitUnitReference } from './unitReference';
 import type { Delimiter, Guess, ImportOverrides } from './types';
 
 export interface HeaderFound {
   guess: Guess<number | null>;
   /** Column names, one per field, or null without a header. */
   names: string[] | null;
-  /** 0-based sample index of the first line that is not preamble (the header or first data row). */
+  /** Entries of the units row, one per field ('' where blank), or null without one. */
+  units: string[] | null;
+  /** 0-based sample index of the units row, or null. */
+  unitsLine: number | null;
+  /** 0-based sample indices of the other lines of the header block (comments). */
+  commentLines: number[];
+  /** 0-based sample index of the first line that is not preamble (the header block or first data row). */
   preambleEnd: number;
-  /** Trimmed fields of the header line joined by '|', to recognise repeats. */
+  /** Trimmed fields of the names line joined by '|', to recognise repeats. */
   headerKey: string | null;
 }
+
+/** Non-blank lines above the table searched for names and units (common practice, no source). */
+export const HEADER_BLOCK_LINES = 6;
 
 export function splitHeader(line: string, delimiter: Delimiter, k: number): string[] | null {
   if (delimiter !== 'whitespace') {
@@ -36,36 +50,66 @@ function mostlyText(fields: string[], decimalComma: boolean): boolean {
   return text * 2 > fields.length;
 }
 
-const isUnitsLine = (fields: string[]) => fields.every((f) => f === '' || parseUnit(f) !== null) && fields.some((f) => f !== '');
+/** Entries a units row may hold besides the units the importer converts. */
+const OTHER_UNIT = /^(#|-|–|—|a\.?\s*u\.?|°\s*c|ºc|k|ohms?|ω|hz|rpm|%|w|mw|cm2|cm²|mm2|mm²|1|n\/a|none|no\.?|°)$/i;
+
+function isUnitsLine(fields: string[]): boolean {
+  let units = 0;
+  for (const f of fields) {
+    if (f === '') continue;
+    if (parseUnit(splitUnitReference(f).unitText)) units++;
+    else if (!OTHER_UNIT.test(f.trim())) return false;
+  }
+  return units > 0;
+}
+
+/** A names line away from the numbers must name two quantities ("E", "j"), so that a preamble
+ * line such as "Scan rate;100;mV/s" is not taken for one. */
+const namesQuantities = (fields: string[]) => fields.filter((f) => {
+  const r = readHeader(f).role;
+  return r === 'potential' || r === 'current' || r === 'time';
+}).length >= 2;
 
 export function detectHeader(fileName: string, lines: string[], firstData: number, delimiter: Delimiter, decimalComma: boolean, k: number, o: ImportOverrides): HeaderFound {
   if (o.headerLine !== undefined) return forcedHeader(fileName, lines, firstData, delimiter, k, o.headerLine);
-  let i = firstData - 1;
-  while (i >= 0 && (lines[i] as string).trim() === '') i--;
-  if (i < 0) return none(firstData, 'no header line — the table starts on the first line');
-  const fields = splitHeader(lines[i] as string, delimiter, k);
-  if (!fields || !mostlyText(fields, decimalComma)) return none(firstData, `no header line — line ${i + 1} above the table does not split into ${k} names`);
-  let names = fields;
-  let line = i;
-  let note = '';
-  if (isUnitsLine(fields) && i > 0) {
-    const above = splitHeader(lines[i - 1] as string, delimiter, k);
-    if (above && mostlyText(above, decimalComma)) {
-      names = above.map((n, j) => (fields[j] ? `${n} (${fields[j]})` : n));
-      line = i - 1;
-      note = ` with the units on line ${i + 1}`;
-    }
-  }
+  const block = blockAbove(lines, firstData);
+  if (!block.length) return none(firstData, 'no header line — the table starts on the first line');
+  const split = block.map((i) => splitHeader(lines[i] as string, delimiter, k));
+  const unitsAt = split.findIndex((f) => f !== null && isUnitsLine(f));
+  const adjacent = (b: number) => b === 0 || (unitsAt >= 0 && Math.abs(b - unitsAt) === 1);
+  const namesAt = split.findIndex((f, b) => b !== unitsAt && f !== null && mostlyText(f, decimalComma) && (adjacent(b) || namesQuantities(f)));
+  if (namesAt < 0 && unitsAt < 0) return none(firstData, `no header line — line ${(block[0] as number) + 1} above the table does not split into ${k} names`);
+  // A units row alone ("V;µA" right above the numbers) names the columns by their units.
+  const names = (namesAt >= 0 ? split[namesAt] : split[unitsAt]) as string[];
+  const units = namesAt >= 0 && unitsAt >= 0 ? (split[unitsAt] as string[]) : null;
+  const namesLine = block[namesAt >= 0 ? namesAt : unitsAt] as number;
+  const unitsLine = units ? (block[unitsAt] as number) : null;
+  const top = Math.min(namesLine, unitsLine ?? namesLine);
+  const commentLines = block.filter((i) => i > top && i !== namesLine && i !== unitsLine).sort((a, b) => a - b);
   return {
-    guess: { value: line + 1, overridden: false, explanation: `header on line ${line + 1}${note} — ${k} names right above the numbers: ${names.map((n) => `"${n}"`).join(', ')}` },
-    names,
-    preambleEnd: line,
-    headerKey: fields.join('|'),
+    guess: { value: namesLine + 1, overridden: false, explanation: describe(names, units, namesLine, unitsLine, commentLines, k) },
+    names, units, unitsLine, commentLines,
+    preambleEnd: top,
+    headerKey: names.join('|'),
   };
 }
 
+/** 0-based indices of the non-blank lines above the table, nearest first. */
+function blockAbove(lines: string[], firstData: number): number[] {
+  const out: number[] = [];
+  for (let i = firstData - 1; i >= 0 && out.length < HEADER_BLOCK_LINES; i--) if ((lines[i] as string).trim() !== '') out.push(i);
+  return out;
+}
+
+function describe(names: string[], units: string[] | null, namesLine: number, unitsLine: number | null, comments: number[], k: number): string {
+  const shown = names.map((n, j) => `"${n}${units?.[j] ? ` [${units[j]}]` : ''}"`).join(', ');
+  const unitNote = unitsLine !== null ? ` with the units on line ${unitsLine + 1}` : '';
+  const commentNote = comments.length ? `; line${comments.length > 1 ? 's' : ''} ${comments.map((c) => c + 1).join(', ')} of the header block read as comment${comments.length > 1 ? 's' : ''}` : '';
+  return `header on line ${namesLine + 1}${unitNote} — ${k} names above the numbers: ${shown}${commentNote}`;
+}
+
 function none(firstData: number, explanation: string): HeaderFound {
-  return { guess: { value: null, overridden: false, explanation }, names: null, preambleEnd: firstData, headerKey: null };
+  return { guess: { value: null, overridden: false, explanation }, names: null, units: null, unitsLine: null, commentLines: [], preambleEnd: firstData, headerKey: null };
 }
 
 function forcedHeader(fileName: string, lines: string[], firstData: number, delimiter: Delimiter, k: number, headerLine: number): HeaderFound {
@@ -76,5 +120,13 @@ function forcedHeader(fileName: string, lines: string[], firstData: number, deli
   }
   const names = splitHeader(raw, delimiter, k);
   if (!names) throw new ImportError('BAD_OVERRIDE', fileName, `line ${headerLine} was chosen as the header, but it does not split into the table's ${k} columns`, { line: headerLine });
-  return { guess: { value: headerLine, overridden: true, explanation: `header on line ${headerLine} (set by the user)` }, names, preambleEnd: headerLine - 1, headerKey: names.join('|') };
+  // A units row may still sit between the chosen names and the numbers.
+  let unitsLine: number | null = null;
+  for (let i = headerLine; i < firstData && unitsLine === null; i++) {
+    const f = splitHeader(lines[i] as string, delimiter, k);
+    if (f && isUnitsLine(f)) unitsLine = i;
+  }
+  const units = unitsLine === null ? null : splitHeader(lines[unitsLine] as string, delimiter, k);
+  const note = unitsLine === null ? '' : `, units on line ${unitsLine + 1}`;
+  return { guess: { value: headerLine, overridden: true, explanation: `header on line ${headerLine} (set by the user)${note}` }, names, units, unitsLine, commentLines: [], preambleEnd: headerLine - 1, headerKey: names.join('|') };
 }

@@ -10,8 +10,11 @@
  * WebP. ENCODING: bytes invalid in the chosen encoding. NO_TABLE: no run of lines with two or
  * more numeric fields, or no column could be made the potential/current. ONE_COLUMN: numbers,
  * but one per line. TOO_FEW_POINTS: fewer than 3 usable rows. CONSTANT_POTENTIAL: the potential
- * never changes. BAD_OVERRIDE: a user override that cannot apply. INTERNAL: a fault in the
- * importer itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
+ * never changes. NOT_A_SWEEP: the potential turns back at nearly every point. BAD_OVERRIDE: a
+ * user override that cannot apply. TOO_MANY_COLUMNS: rows wider than any export of one
+ * voltammogram. RAGGED_TABLE: most rows far narrower than the table's first rows (padding them
+ * would take memory out of all proportion to the file). INTERNAL: a fault in the importer
+ * itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
  */
 export type ImportErrorCode =
   | 'EMPTY'
@@ -23,7 +26,10 @@ export type ImportErrorCode =
   | 'ONE_COLUMN'
   | 'TOO_FEW_POINTS'
   | 'CONSTANT_POTENTIAL'
+  | 'NOT_A_SWEEP'
   | 'BAD_OVERRIDE'
+  | 'TOO_MANY_COLUMNS'
+  | 'RAGGED_TABLE'
   | 'INTERNAL';
 
 export class ImportError extends Error {
@@ -53,6 +59,7 @@ export type ImportWarningCode =
   | 'UNIT_ASSUMED'
   | 'ROLE_GUESSED'
   | 'CURRENT_DENSITY'
+  | 'REFERENCE_DISAGREES'
   | 'NO_SCAN_RATE'
   | 'SCAN_RATE_DISAGREES'
   | 'SCAN_RATE_UNEVEN'
@@ -79,6 +86,11 @@ export function makeWarning(code: ImportWarningCode, message: string, lines?: nu
 
 /** Formats a list of line numbers for a message: "12, 13, 40 and 7 more". */
 export function describeLines(lines: number[], total: number): string {
-  const shown = lines.slice(0, 5).join(', ');
-  return total > 5 ? `${shown} and ${total - 5} more` : shown;
+  return listSome(lines.map(String), total, ', ', 5);
+}
+
+/** "a, b, c and 12 more": long lists (a file with thousands of columns) stay short in messages. */
+export function listSome(items: string[], total = items.length, separator = ', ', shown = 8): string {
+  const head = items.slice(0, shown).join(separator);
+  return total > shown ? `${head} and ${total - shown} more` : head;
 }

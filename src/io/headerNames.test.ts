@@ -44,4 +44,56 @@ describe('readHeader', () => {
   it('an unknown name without a unit has no role', () => {
     expect(readHeader('Sample 12').role).toBeNull();
   });
+
+  // The scale written with the unit or the name (the issue's spellings); common practice, no source.
+  const references: [string, string, string][] = [
+    ['E', 'V RHE', 'RHE'],
+    ['E / V vs. SCE', '', 'SCE'],
+    ['Potential (V vs Ag/AgCl)', '', 'Ag/AgCl'],
+    ['E_we vs Fc/Fc+', '', 'Fc/Fc+'],
+    ['E', 'V vs. Ag/AgCl (3 M KCl)', 'Ag/AgCl (3 M KCl)'],
+    ['E [V_RHE]', '', 'RHE'],
+    ['Spannung', 'V gegen SCE', 'SCE'],
+  ];
+  for (const [name, unitCell, ref] of references) {
+    it(`"${name}"${unitCell ? ` over "${unitCell}"` : ''} → potential in V against ${ref}`, () => {
+      expect(readHeader(name, unitCell)).toMatchObject({ role: 'potential', reference: ref });
+      if (unitCell || name !== 'E_we vs Fc/Fc+') expect(readHeader(name, unitCell).unit?.symbol).toBe('V');
+    });
+  }
+
+  it('"V max" is not a scale: a bare word after the unit must be a known reference electrode', () => {
+    expect(readHeader('E', 'V max').reference).toBeNull();
+  });
+
+  // Current densities: factors to A/cm² (BIPM SI Brochure 9th ed. 2019, Tables 7 and 8: 1 m² = 1e4 cm²).
+  const densities: [string, string, string | null, number | null][] = [
+    ['j', '', null, null], ['J', 'mA cm-2', 'mA/cm²', 1e-3], ['j (mA/cm²)', '', 'mA/cm²', 1e-3], ['current density (µA cm^-2)', '', 'µA/cm²', 1e-6],
+    ['Stromdichte / mA cm⁻²', '', 'mA/cm²', 1e-3], ['i', 'A m-2', 'A/m²', 1e-4], ['j', 'mA·cm−2', 'mA/cm²', 1e-3],
+  ];
+  for (const [name, unitCell, symbol, factor] of densities) {
+    it(`"${name}"${unitCell ? ` over "${unitCell}"` : ''} is a current density${symbol ? ` in ${symbol}` : ''}`, () => {
+      const h = readHeader(name, unitCell);
+      expect([h.role, h.density, h.unit?.symbol ?? null]).toEqual(['current', true, symbol]);
+      if (factor !== null) expect(h.unit?.factor).toBeCloseTo(factor, 18);
+    });
+  }
+
+  // Column names labs use in six languages (common practice, no source).
+  const words: [string, string][] = [
+    ['Spannung', 'potential'], ['Strom', 'current'], ['Zeit', 'time'], ['Zyklus', 'cycle'],
+    ['Potencial', 'potential'], ['Intensidad', 'current'], ['Corriente', 'current'], ['Tiempo', 'time'], ['Ciclo', 'cycle'],
+    ['Potentiel', 'potential'], ['Tension', 'potential'], ['Intensité', 'current'], ['Courant', 'current'], ['Temps', 'time'],
+    ['Potenziale', 'potential'], ['Tensione', 'potential'], ['Corrente', 'current'], ['Intensità', 'current'], ['Tempo', 'time'],
+    ['Tensão', 'potential'], ['Intensidade', 'current'],
+    ['Potencjał', 'potential'], ['Napięcie', 'potential'], ['Prąd', 'current'], ['Natężenie prądu', 'current'], ['Czas', 'time'], ['Cykl', 'cycle'],
+  ];
+  it('reads potential, current, time and cycle names in German, Spanish, French, Italian, Portuguese and Polish', () => {
+    expect(words.map(([w]) => readHeader(w).role)).toEqual(words.map(([, r]) => r));
+  });
+
+  // µ as U+00B5, U+03BC, and as the Latin-1 reading of their UTF-8 bytes ("Âµ", "Î¼").
+  it('reads the micro sign in every spelling: µA, μA, ÂµA, Î¼A, uA', () => {
+    for (const mu of ['µ', '\u03bc', 'Âµ', 'Î¼', 'u']) expect(readHeader(`I (${mu}A)`).unit?.symbol).toBe('µA');
+  });
 });

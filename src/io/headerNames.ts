@@ -1,10 +1,14 @@
 /**
  * Reads a column header such as "Potential/V", "E (mV)", "WE potential [V]", "I (uA)",
- * "i / µA", "current (nA)", "Time (s)", "t/ms", "Cycle", "Charge/C" into a role and a unit.
- * Naming habits of instrument exports: common practice, no source.
+ * "i / µA", "j (mA cm-2)", "Time (s)", "t/ms", "Cycle", "Charge/C" into a role and a unit, with a
+ * reference scale when one is written ("E / V vs. SCE", "E_we vs Fc/Fc+", "Potential (V vs
+ * Ag/AgCl)"). A units row under (or over) the names gives the unit instead ("E" over "V RHE").
+ * Names in English, German, Spanish, French, Italian, Portuguese and Polish. Naming habits of
+ * exports and the words labs use: common practice, no source.
  */
 import { parseUnit } from './units';
 import type { ParsedUnit } from './units';
+import { splitUnitReference } from './unitReference';
 import type { ColumnRole } from './types';
 
 export interface HeaderReading {
@@ -12,42 +16,63 @@ export interface HeaderReading {
   unit: ParsedUnit | null;
   /** Raw unit text as written, '' when none. */
   unitText: string;
+  /** Where the unit was read: the name itself or the units row. */
+  unitFrom: 'name' | 'units row' | null;
   role: ColumnRole | null;
+  /** A current density: a per-area unit, or a name such as "j" or "Stromdichte". */
+  density: boolean;
   /** A second working electrode or a second copy of a role ("I2", "WE2 current"). */
   secondary: boolean;
-  /** "vs Ag/AgCl" and the like, when the header names a reference electrode. */
+  /** "vs Ag/AgCl" and the like, when the header or its unit names a reference electrode. */
   reference: string | null;
+  referenceFrom: 'name' | 'units row' | null;
 }
 
 const ROLE_WORDS: [ColumnRole, RegExp][] = [
-  ['cycle', /^(cycle|cyc|scan|sweep|loop)s?\.?\s*(no\.?|number|nr\.?|#|index|count|n)?$/i],
-  ['time', /^(time|t|elapsed\s*time|elapsed|timestamp|time\s*elapsed|runtime)$/i],
-  ['potential', /^(potential|e|we\s*potential|working\s*electrode\s*potential|voltage|volt|u|e\s*applied|applied\s*potential|e\s*measured|measured\s*potential|e\s*we|v|e1|potential\s*applied|potential\s*measured)$/i],
-  ['current', /^(current|i|i\s*we|we\s*current|working\s*electrode\s*current|amps?|i1|current\s*1|cell\s*current|current\s*measured)$/i],
+  ['cycle', /^(cycle|cyc|scan|sweep|loop|zyklus|ciclo|cykl)s?\.?\s*(no\.?|number|nr\.?|#|index|count|n)?$/i],
+  ['time', /^(time|t|elapsed\s*time|elapsed|timestamp|time\s*elapsed|runtime|zeit|tiempo|temps|tempo|czas)$/i],
+  ['potential', /^(potential|e|we\s*potential|working\s*electrode\s*potential|voltage|volt|u|e\s*applied|applied\s*potential|e\s*measured|measured\s*potential|e\s*we|ewe|v|e1|potential\s*applied|potential\s*measured|spannung|potenzial|potencial|voltaje|tensi[oó]n|potentiel|potenziale|tensione|voltaggio|tens[aã]o|voltagem|potencja[lł]|napi[eę]cie)$/i],
+  ['current', /^(current|i|i\s*we|we\s*current|working\s*electrode\s*current|amps?|i1|current\s*1|cell\s*current|current\s*measured|strom|stromst[aä]rke|corriente|intensidad|courant|intensit[eé]|corrente|intensit[aà]|intensidade|pr[aą]d|nat[eę][zż]enie(\s*pr[aą]du)?)$/i],
   ['index', /^(index|idx|point|points|pt|no\.?|nr\.?|#|n|row|number|data\s*point|sample)$/i],
 ];
 
-const SECONDARY = /^(i2|current\s*2|we\s*2\s*current|e2|we\s*2\s*potential|potential\s*2)$/i;
-const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|power|resistance|freq|phase|ox\/red|control|status|flag|mode|comment/i;
+const DENSITY_WORDS = /^(j|j\s*we|current\s*density|density|stromdichte|densidad\s*de\s*corriente|densit[eé]\s*de\s*courant|densit[aà]\s*di\s*corrente|densidade\s*de\s*corrente|g[eę]sto[sś][cć]\s*pr[aą]du)$/i;
 
-/** Splits "E vs Ag/AgCl (mV)" into label "E", unit "mV" and reference "Ag/AgCl". */
-export function readHeader(raw: string): HeaderReading {
-  let text = raw.trim().replace(/^["']|["']$/g, '').trim();
+const MAX_NAME_CHARS = 200;
+
+const SECONDARY = /^(i2|current\s*2|we\s*2\s*current|e2|we\s*2\s*potential|potential\s*2|j2)$/i;
+const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|power|resistance|freq|phase|ox\/red|control|status|flag|mode|comment/i;
+const VS = /\s+(?:vs\.?|versus|gegen)\s+([^()[\]]+?)(?=\s*[[(]|\s*\/\s*[kmµuμ]?V\b|$)/i;
+
+/** Splits "E vs Ag/AgCl (mV)" into label "E", unit "mV" and reference "Ag/AgCl"; `unitCell` is the units row's entry. */
+export function readHeader(raw: string, unitCell = ''): HeaderReading {
+  // No column name is longer; the cap keeps the patterns below linear on hostile input.
+  let text = raw.slice(0, MAX_NAME_CHARS).trim().replace(/^["']|["']$/g, '').trim();
   let reference: string | null = null;
-  const vs = /\s+vs\.?\s+(.+?)(?=\s*[[(]|\s*\/\s*[kmµuμ]?V\b|$)/i.exec(text);
+  const vs = VS.exec(text);
   if (vs) {
     reference = (vs[1] as string).trim();
     text = (text.slice(0, vs.index) + text.slice(vs.index + vs[0].length)).trim();
   }
-  const { label, unitText } = splitUnit(text);
-  const unit = unitText ? parseUnit(unitText) : null;
+  const named = splitUnit(text);
+  const fromRow = unitCell.trim() ? splitUnitReference(unitCell.slice(0, MAX_NAME_CHARS)) : null;
+  const rowUnit = fromRow ? parseUnit(fromRow.unitText) : null;
+  const unit = rowUnit ?? named.unit;
+  const label = named.label.replace(/_/g, ' ').replace(/\s+/g, ' ').trim();
   const secondary = SECONDARY.test(label);
-  let role: ColumnRole | null = null;
-  for (const [r, re] of ROLE_WORDS) if (re.test(label)) { role = r; break; }
+  const density = unit?.kind === 'currentDensity' || (DENSITY_WORDS.test(label) && unit?.kind !== 'current');
+  let role: ColumnRole | null = DENSITY_WORDS.test(label) ? 'current' : null;
+  for (const [r, re] of ROLE_WORDS) if (!role && re.test(label)) role = r;
   if (secondary) role = 'other';
   if (!role && unit) role = roleOfUnit(unit);
   if (!role && (OTHER_WORDS.test(label) || unit?.kind === 'charge')) role = 'other';
-  return { label, unit, unitText, role, secondary, reference };
+  return {
+    label, unit, density, secondary, role,
+    unitText: rowUnit ? unitCell.trim() : named.unitText,
+    unitFrom: rowUnit ? 'units row' : named.unit ? 'name' : null,
+    reference: reference ?? fromRow?.reference ?? named.reference,
+    referenceFrom: reference || (!fromRow?.reference && named.reference) ? 'name' : fromRow?.reference ? 'units row' : null,
+  };
 }
 
 function roleOfUnit(u: ParsedUnit): ColumnRole | null {
@@ -57,15 +82,34 @@ function roleOfUnit(u: ParsedUnit): ColumnRole | null {
   return 'other';
 }
 
-function splitUnit(text: string): { label: string; unitText: string } {
-  const bracket = /^(.*?)\s*[[(]\s*([^\])]*?)\s*[\])]\s*$/.exec(text);
-  if (bracket) return { label: (bracket[1] as string).trim(), unitText: (bracket[2] as string).trim() };
-  const slash = /^(.*?)\s*\/\s*([^/]+(?:\/\s*(?:cm2|cm²|cm\^2|mm2|mm²))?)$/.exec(text);
-  if (slash && parseUnit(slash[2] as string)) return { label: (slash[1] as string).trim(), unitText: (slash[2] as string).trim() };
-  const inWord = /^(.*?)\s+in\s+(\S+)$/i.exec(text);
-  if (inWord && parseUnit(inWord[2] as string)) return { label: (inWord[1] as string).trim(), unitText: inWord[2] as string };
-  const lastWord = /^(.*?)[\s_]+(\S+)$/.exec(text);
-  if (lastWord && parseUnit(lastWord[2] as string)) return { label: (lastWord[1] as string).trim(), unitText: lastWord[2] as string };
-  if (parseUnit(text)) return { label: '', unitText: text };
-  return { label: text, unitText: '' };
+interface NamedUnit {
+  label: string;
+  unitText: string;
+  unit: ParsedUnit | null;
+  reference: string | null;
+}
+
+/** The unit written in the name: "(mV)", "[V vs SCE]", "/ µA", "in s", a last word "mA". */
+function splitUnit(text: string): NamedUnit {
+  // The whole text is tried after brackets ("U (V)" is U in volts) and before slashes ("mA/cm²").
+  const tries: (RegExp | null)[] = [
+    /^(.*?)\s*[[(]\s*([^\])]*?)\s*[\])]\s*$/,
+    null,
+    /^(.*?)\s*\/\s*([^/]+(?:\/\s*(?:cm2|cm²|cm\^2|mm2|mm²))?)$/,
+    /^(.*?)\s+in\s+(\S+)$/i,
+    /^(.*?)[\s_]+(\S+)$/,
+  ];
+  for (const re of tries) {
+    const m = re ? re.exec(text) : ['', '', text];
+    const unitText = ((m?.[2] ?? '') as string).trim();
+    const found = m && unitText ? unitIn(unitText) : null;
+    if (found) return { label: ((m?.[1] ?? '') as string).trim(), unitText, ...found };
+  }
+  return { label: text, unitText: '', unit: null, reference: null };
+}
+
+function unitIn(t: string): { unit: ParsedUnit; reference: string | null } | null {
+  const r = splitUnitReference(t);
+  const unit = parseUnit(r.unitText);
+  return unit ? { unit, reference: r.reference } : null;
 }

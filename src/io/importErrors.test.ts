@@ -53,6 +53,17 @@ describe('importVoltammogram: typed errors', () => {
     expect(failure(oddUtf16, { encoding: 'utf-16le' }).code).toBe('ENCODING');
   });
 
+  it('a table wider than any voltammogram export (one line of 300,000 numbers, 1.2 MB) → TOO_MANY_COLUMNS on line 1', () => {
+    const e = failure('1.0,'.repeat(300_000));
+    expect([e.code, e.line]).toEqual(['TOO_MANY_COLUMNS', 1]);
+    expect(e.message).toContain('300001 columns');
+  });
+
+  it('a potential that turns back at every point (0, 1, 0, 1, …: 75,000 turns) → NOT_A_SWEEP naming its column', () => {
+    const e = failure(Array.from({ length: 75_000 }, (_, i) => `${i % 2},${i % 3}`).join('\n'));
+    expect([e.code, e.column]).toEqual(['NOT_A_SWEEP', 1]);
+  });
+
   it('a column override outside the table → BAD_OVERRIDE', () => {
     expect(failure(GOOD, { potentialColumn: 5 }).code).toBe('BAD_OVERRIDE');
     expect(failure(GOOD, { headerLine: 999 }).code).toBe('BAD_OVERRIDE');

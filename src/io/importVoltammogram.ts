@@ -27,7 +27,7 @@ import type { ImportDetection, ImportOptions, ImportOverrides, ImportResult } fr
 export type ImportInput = string | ArrayBuffer | Uint8Array;
 
 export function importVoltammogram(fileName: string, data: ImportInput, options: ImportOptions = {}): ImportResult {
-  const steps = importSteps(fileName, data, options.overrides ?? {});
+  const steps = importSteps(fileName, data, options.overrides ?? {}, options.tableReader ?? 'auto');
   for (;;) {
     const r = guard(fileName, () => steps.next());
     if (r.done) return r.value;
@@ -43,7 +43,7 @@ export interface AsyncImportOptions extends ImportOptions {
 }
 
 export async function importVoltammogramAsync(fileName: string, data: ImportInput, options: AsyncImportOptions = {}): Promise<ImportResult> {
-  const steps = importSteps(fileName, data, options.overrides ?? {});
+  const steps = importSteps(fileName, data, options.overrides ?? {}, options.tableReader ?? 'auto');
   const maybeYield = options.maybeYield ?? createYielder();
   for (;;) {
     options.signal?.throwIfAborted();
@@ -100,12 +100,16 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   const layout = detectLayout(fileName, sample.lines, o);
   const decimalComma = layout.decimalMark.value === ',';
   const header = detectHeader(fileName, sample.lines, layout.firstDataLine, layout.delimiter.value, decimalComma, layout.fieldCount, o);
-  const preambleLines = sample.lines.slice(0, header.preambleEnd);
+  // Everything above the table but the names and units rows is read as preamble: comment lines
+  // inside the header block too. Those two rows become blank, so line numbers stay right.
+  const namesLine = header.guess.value === null ? -1 : header.guess.value - 1;
+  const above = sample.lines.slice(0, layout.firstDataLine).map((l, i) => (i === namesLine || i === header.unitsLine ? '' : l));
+  const preambleLines = above.filter((_, i) => i !== namesLine && i !== header.unitsLine);
   const headLines = sample.lines.slice(0, 40).map((l) => (l.length > 240 ? `${l.slice(0, 240)}…` : l));
-  return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre: readPreamble(preambleLines, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
+  return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre: readPreamble(above, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
 }
 
-function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): Generator<number, ImportResult> {
+function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, reader: 'auto' | 'papaparse'): Generator<number, ImportResult> {
   const warnings: ImportWarning[] = [];
   const front = readFrontMatter(fileName, data, o, warnings);
   const { layout } = front;
@@ -117,6 +121,8 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides): 
     startOffset: front.startOffset,
     startLine: layout.firstDataLine + 1,
     headerText: front.header.headerKey,
+    fileName,
+    reader,
   });
   let step = tableSteps.next();
   while (!step.done) {

@@ -10,6 +10,7 @@ export { delimiterName } from './detectFormat';
 export type {
   ColumnRole,
   CurrentConvention,
+  CurrentKind,
   CurrentUnit,
   DecimalMark,
   Delimiter,

@@ -1,11 +1,16 @@
 /**
- * Tokenises the numeric table with papaparse, chunk by chunk, into one Float64Array per column.
- * Rows with extra non-empty fields, or fewer than two numbers, are skipped and located by line; a copy
- * of the header line inside the table (files concatenated from several exports) is recognised;
- * non-numeric lines after the last data row are a footer. Written as a generator that yields its
- * progress, so that a synchronous and an asynchronous (yielding) driver share one code path.
+ * Reads the numeric table, chunk by chunk, into one Float64Array per column. A chunk without a
+ * double quote is read line by line straight from the text (plainRows.ts, the fast path); a chunk
+ * with quotes goes through papaparse, which knows RFC 4180 quoting. Both read the same lines into
+ * the same rows (the fuzz suite checks this). Rows with extra non-empty fields, or fewer than two
+ * numbers, are skipped and located by line; a copy of the header line inside the table (files
+ * concatenated from several exports) is recognised; non-numeric lines after the last data row are
+ * a footer. Written as a generator that yields its progress, so that a synchronous and an
+ * asynchronous (yielding) driver share one code path.
  */
 import Papa from 'papaparse';
+import { readPlainLines } from './plainRows';
+import { TableRows } from './tableRows';
 import { parseNumber } from './textLines';
 import type { Delimiter } from './types';
 
@@ -19,6 +24,10 @@ export interface TableSpec {
   startLine: number;
   /** Trimmed header line text, to recognise repeats inside the table; null when none. */
   headerText: string | null;
+  /** For error messages. @default 'the file' */
+  fileName?: string;
+  /** 'papaparse' reads every chunk through papaparse (the reference the fast path is fuzzed against). @default 'auto' */
+  reader?: 'auto' | 'papaparse';
 }
 
 export interface ParsedTable {
@@ -37,92 +46,46 @@ export interface ParsedTable {
   lastDataLine: number;
 }
 
-/** Characters per tokeniser chunk: large enough that papaparse's per-call cost vanishes. */
+/** Characters per chunk: large enough that papaparse's per-call cost vanishes. */
 export const CHUNK_CHARS = 1 << 21;
-
-class Growable {
-  columns: Float64Array[];
-  lines: Int32Array;
-  n = 0;
-  constructor(k: number, capacity: number) {
-    this.columns = Array.from({ length: k }, () => new Float64Array(capacity));
-    this.lines = new Int32Array(capacity);
-  }
-  ensure(): void {
-    if (this.n < this.lines.length) return;
-    const cap = this.lines.length * 2;
-    this.columns = this.columns.map((c) => {
-      const g = new Float64Array(cap);
-      g.set(c);
-      return g;
-    });
-    const l = new Int32Array(cap);
-    l.set(this.lines);
-    this.lines = l;
-  }
-}
-
-interface Pending {
-  line: number;
-  header: boolean;
-}
 
 /** Yields the fraction done after each chunk and returns the parsed table. */
 export function* parseTable(text: string, spec: TableSpec): Generator<number, ParsedTable> {
-  const k = spec.fieldCount;
-  const store = new Growable(k, Math.max(1024, Math.min(1 << 20, Math.ceil((text.length - spec.startOffset) / 16))));
-  const out: ParsedTable = { columns: [], lineOfRow: new Int32Array(0), rowCount: 0, skippedLines: [], skippedCount: 0, repeatedHeaderCount: 0, seamLines: 0, footerLines: 0, firstFooterLine: null, lastDataLine: 0 };
-  let pending: Pending[] = [];
-  const values = new Float64Array(k);
+  const rows = new TableRows(spec.fieldCount, text.length - spec.startOffset, spec.fileName ?? 'the file');
+  const values = new Float64Array(spec.fieldCount);
   let pos = spec.startOffset;
   let line = spec.startLine;
-  const delimiter = spec.delimiter === 'whitespace' ? ' ' : spec.delimiter;
   while (pos < text.length) {
     let end = text.indexOf('\n', Math.min(text.length, pos + CHUNK_CHARS));
     if (end === -1) end = text.length;
-    let chunk = text.slice(pos, end);
-    if (spec.delimiter === 'whitespace') chunk = chunk.replace(/\t/g, ' ');
-    const rows = Papa.parse<string[]>(chunk, { delimiter, newline: '\n', quoteChar: '"', header: false, dynamicTyping: false, skipEmptyLines: false }).data;
-    for (const raw of rows) {
-      const fields = spec.delimiter === 'whitespace' ? raw.filter((f) => f !== '') : raw;
-      const kind = readRow(fields, k, spec.decimalComma, values);
-      if (kind === 'data') {
-        flushPending(out, pending);
-        pending = [];
-        store.ensure();
-        for (let j = 0; j < k; j++) (store.columns[j] as Float64Array)[store.n] = values[j] as number;
-        store.lines[store.n++] = line;
-        out.lastDataLine = line;
-      } else if (kind === 'bad') {
-        pending.push({ line, header: spec.headerText !== null && fields.map((f) => f.trim()).join('|') === spec.headerText });
-      }
-      line++;
-    }
+    const quoted = spec.reader === 'papaparse' || hasQuote(text, pos, end);
+    line = quoted ? readQuotedChunk(text.slice(pos, end), line, spec, rows, values) : readPlainLines(text, pos, end, line, spec, rows, values);
     pos = end + 1;
     yield Math.min(1, (pos - spec.startOffset) / Math.max(1, text.length - spec.startOffset));
   }
-  out.footerLines = pending.length;
-  out.firstFooterLine = pending[0]?.line ?? null;
-  out.columns = store.columns.map((c) => c.slice(0, store.n));
-  out.lineOfRow = store.lines.slice(0, store.n);
-  out.rowCount = store.n;
-  return out;
+  return rows.finish();
 }
 
-/**
- * Text lines between two data rows. A group that holds a copy of the header line is the seam of
- * two joined exports (their preamble and header), not damaged data, so it is not counted as skipped.
- */
-function flushPending(out: ParsedTable, pending: Pending[]): void {
-  if (pending.some((p) => p.header)) {
-    out.repeatedHeaderCount++;
-    out.seamLines += pending.length;
-    return;
+function hasQuote(text: string, from: number, to: number): boolean {
+  const q = text.indexOf('"', from);
+  return q !== -1 && q < to;
+}
+
+/** Papaparse reads a chunk; returns the file line after it. */
+function readQuotedChunk(chunk: string, firstLine: number, spec: TableSpec, rows: TableRows, values: Float64Array): number {
+  const whitespace = spec.delimiter === 'whitespace';
+  const delimiter = whitespace ? ' ' : spec.delimiter;
+  const source = whitespace ? chunk.replace(/\t/g, ' ') : chunk;
+  const parsed = Papa.parse<string[]>(source, { delimiter, newline: '\n', quoteChar: '"', header: false, dynamicTyping: false, skipEmptyLines: false }).data;
+  let line = firstLine;
+  for (const raw of parsed) {
+    const fields = whitespace ? raw.filter((f) => f !== '') : raw;
+    const kind = readRow(fields, spec.fieldCount, spec.decimalComma, values);
+    if (kind === 'data') rows.data(values, fields.length, line);
+    else if (kind === 'bad') rows.bad(line, spec.headerText !== null && fields.map((f) => f.trim()).join('|') === spec.headerText);
+    line++;
   }
-  for (const p of pending) {
-    out.skippedCount++;
-    if (out.skippedLines.length < 20) out.skippedLines.push(p.line);
-  }
+  return line;
 }
 
 /** Reads one tokenised row into `values`: 'data', 'blank' or 'bad'. */
@@ -139,16 +102,4 @@ function readRow(fields: string[], k: number, decimalComma: boolean, values: Flo
     if (Number.isFinite(v)) finite++;
   }
   return finite >= 2 ? 'data' : 'bad';
-}
-
-/** Bare tokenising of the same text, for the benchmark's ratio (no number parsing). */
-export function tokeniseOnly(text: string, delimiter: string): number {
-  let rows = 0;
-  for (let pos = 0; pos < text.length; ) {
-    let end = text.indexOf('\n', Math.min(text.length, pos + CHUNK_CHARS));
-    if (end === -1) end = text.length;
-    rows += Papa.parse<string[]>(text.slice(pos, end), { delimiter, newline: '\n', header: false, skipEmptyLines: false }).data.length;
-    pos = end + 1;
-  }
-  return rows;
 }

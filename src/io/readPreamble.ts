@@ -6,7 +6,8 @@
  * 1 mM = 1e-6 mol/cm³ (1 L = 1000 cm³, SI Brochure Table 8).
  */
 import type { CurrentConvention, PreambleValue } from './types';
-import { scanRateUnitFactor } from './units';
+import { readScanRateLine } from './readScanRate';
+import { NUMBER_PATTERN as NUMBER } from './textLines';
 
 export interface PreambleReading {
   metadata: Record<string, string>;
@@ -18,7 +19,9 @@ export interface PreambleReading {
   convention: { value: CurrentConvention; line: number; text: string } | null;
 }
 
-const NUMBER = '([+-]?(?:\\d+[.,]?\\d*|[.,]\\d+)(?:[eE][+-]?\\d+)?)';
+const MAX_LINE_CHARS = 1000;
+/** "Reference electrode" in the languages of the column names (headerNames.ts): common practice, no source. */
+const REFERENCE_KEY = /\bref(erence)?\b|^re$|referenz|bezugselektrode|referencia|r[ée]f[ée]rence|riferimento|refer[êe]ncia|odniesienia/;
 
 /** `lines` are the preamble lines; `firstLine` is the 1-based file line of lines[0]. */
 export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
@@ -26,16 +29,18 @@ export function readPreamble(lines: string[], firstLine = 1): PreambleReading {
   let fromSample: PreambleValue | null = null;
   lines.forEach((raw, i) => {
     const line = firstLine + i;
-    const text = raw.replace(/^\s*(#|%|\/\/|;|!)+\s*/, '').trim();
+    // Only the head of a very long line is read: the patterns below stay linear, the metadata short.
+    const text = raw.slice(0, MAX_LINE_CHARS).replace(/^\s*(#|%|\/\/|;|!)+\s*/, '').trim();
     if (!text) return;
     const kv = splitKeyValue(text);
     if (kv) addMetadata(out.metadata, kv.key, kv.value);
-    out.scanRateVPerS ??= readScanRate(text, line);
+    // "Scan rate;100;mV/s" reads as "Scan rate: 100 mV/s" once split into key and value.
+    out.scanRateVPerS ??= readScanRateLine(text, line) ?? (kv ? withText(readScanRateLine(`${kv.key}: ${kv.value}`, line), text) : null);
     out.convention ??= readConvention(text, line);
     if (!kv) return;
     const key = kv.key.toLowerCase();
     const value = kv.value;
-    if (!out.referenceElectrode && /\bref(erence)?\b|^re$/.test(key) && !/\d\s*(v|mv)\b/i.test(value)) out.referenceElectrode = { value, line };
+    if (!out.referenceElectrode && REFERENCE_KEY.test(key) && !/\d\s*(v|mv)\b/i.test(value)) out.referenceElectrode = { value, line };
     if (/temp/.test(key)) out.temperatureK ??= readTemperature(`${key} ${value}`, line, text);
     if (/area/.test(key)) out.areaCm2 ??= readArea(`${key} ${value}`, line, text);
     // "Working electrode: carbon paste, 3 mm disk (0.0707 cm2)": an area in squared units.
@@ -64,6 +69,10 @@ function splitKeyValue(text: string): { key: string; value: string } | null {
   return { key, value: fields.slice(1).join(' ') };
 }
 
+function withText(v: PreambleValue | null, text: string): PreambleValue | null {
+  return v && { ...v, text };
+}
+
 function addMetadata(md: Record<string, string>, key: string, value: string): void {
   let k = key;
   for (let n = 2; k in md; n++) k = `${key} (${n})`;
@@ -72,27 +81,6 @@ function addMetadata(md: Record<string, string>, key: string, value: string): vo
 
 function toNumber(s: string): number {
   return Number(s.replace(',', '.'));
-}
-
-function readScanRate(text: string, line: number): PreambleValue | null {
-  if (!/(scan|sweep)\s*-?\s*rate|scanrate|sweeprate|^\s*v\s*[=:(]/i.test(text)) return null;
-  const re = new RegExp(`${NUMBER}\\s*\\(?\\s*((?:[mµu]?V)\\s*(?:/\\s*s(?:ec)?|s\\^?-1|s⁻¹|·s⁻¹|ps)?)`, 'i');
-  const m = re.exec(text);
-  let value: number | null = null;
-  if (m) {
-    const f = scanRateUnitFactor(m[2] as string);
-    if (f !== null) value = toNumber(m[1] as string) * f;
-  }
-  if (value === null) {
-    // The unit may stand in the key, "Scan rate (mV/s): 100", or be missing.
-    const unitInKey = /\(\s*([mµu]?V\s*\/\s*s)\s*\)|\[\s*([mµu]?V\s*\/\s*s)\s*\]/i.exec(text);
-    const num = new RegExp(`[:=\\t;,]\\s*${NUMBER}`).exec(text);
-    if (!num) return null;
-    const f = unitInKey ? scanRateUnitFactor((unitInKey[1] ?? unitInKey[2]) as string) : null;
-    if (f === null) return null;
-    value = toNumber(num[1] as string) * f;
-  }
-  return Number.isFinite(value) && value > 0 ? { value, line, text } : null;
 }
 
 function readConvention(text: string, line: number): PreambleReading['convention'] {

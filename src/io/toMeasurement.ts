@@ -18,6 +18,8 @@ export interface UnitChoice {
   current: Guess<CurrentUnit>;
   /** Current column holds a density (A/cm² after the factor). */
   currentDensity: boolean;
+  /** The density's unit as read ("mA/cm²"), '' for a current. */
+  densitySymbol: string;
   /** Factor from file values to A (or A/cm² for a density). */
   currentFactor: number;
   time: Guess<TimeUnit> | null;
@@ -40,7 +42,7 @@ export function chooseUnits(fileName: string, a: RoleAssignment, o: ImportOverri
   const pStats = a.stats[a.potential];
   let potential: Guess<PotentialUnit>;
   if (o.potentialUnit) potential = { value: o.potentialUnit, overridden: true, explanation: `potential unit ${o.potentialUnit} (set by the user)` };
-  else if (pHead?.kind === 'potential' && pHead.symbol in POTENTIAL_FACTORS) potential = { value: pHead.symbol as PotentialUnit, overridden: false, explanation: `potential unit ${pHead.symbol} — from the header` };
+  else if (pHead?.kind === 'potential' && pHead.symbol in POTENTIAL_FACTORS) potential = { value: pHead.symbol as PotentialUnit, overridden: false, explanation: `potential unit ${pHead.symbol} — from ${unitSource(a, a.potential)}` };
   else {
     const mv = (pStats?.maxAbs ?? 0) > 20;
     potential = { value: mv ? 'mV' : 'V', overridden: false, explanation: mv ? `potential unit mV — no unit in the file and values reach ${pStats?.maxAbs}, too large for volts` : 'potential unit V — no unit in the file; values lie within ±20, as volts do' };
@@ -56,8 +58,13 @@ export function chooseUnits(fileName: string, a: RoleAssignment, o: ImportOverri
   } else if (cHead && (cHead.kind === 'current' || cHead.kind === 'currentDensity')) {
     density = cHead.kind === 'currentDensity';
     const base = cHead.symbol.replace(/\/.*$/, '') as CurrentUnit;
-    current = { value: base, overridden: false, explanation: `current unit ${cHead.symbol} — from the header${density ? ' (a current density)' : ''}` };
+    current = { value: base, overridden: false, explanation: `current unit ${cHead.symbol} — from ${unitSource(a, a.current)}${density ? ' (a current density)' : ''}` };
     currentFactor = cHead.factor;
+  } else if (a.headers[a.current]?.density) {
+    density = true;
+    current = { value: 'A', overridden: false, explanation: `current unit A/cm² — the column's name "${a.headers[a.current]?.label ?? ''}" marks a current density, but no unit is written; A/cm² assumed` };
+    currentFactor = 1;
+    warnings.push(makeWarning('UNIT_ASSUMED', `${fileName}: the current density column states no unit; read as A/cm² — set the current unit if it is mA/cm² or µA/cm²`));
   } else {
     const max = a.stats[a.current]?.maxAbs ?? 0;
     current = { value: 'A', overridden: false, explanation: 'current unit A — no unit in the file, amperes assumed' };
@@ -65,14 +72,17 @@ export function chooseUnits(fileName: string, a: RoleAssignment, o: ImportOverri
     const odd = max > 1 ? ` — values reach ${max}, which would be ${max} A: probably µA or mA, set the unit` : '';
     warnings.push(makeWarning('UNIT_ASSUMED', `${fileName}: no current unit found; read as A${odd}`));
   }
-  return { potential, current, currentDensity: density, currentFactor, time: chooseTimeUnit(a, o) };
+  const densitySymbol = density ? (cHead?.kind === 'currentDensity' ? cHead.symbol : 'A/cm², assumed') : '';
+  return { potential, current, currentDensity: density, densitySymbol, currentFactor, time: chooseTimeUnit(a, o) };
 }
+
+const unitSource = (a: RoleAssignment, j: number) => (a.headers[j]?.unitFrom === 'units row' ? 'the units row' : 'the header');
 
 function chooseTimeUnit(a: RoleAssignment, o: ImportOverrides): Guess<TimeUnit> | null {
   if (a.time === null) return null;
   if (o.timeUnit) return { value: o.timeUnit, overridden: true, explanation: `time unit ${o.timeUnit} (set by the user)` };
   const h = a.headers[a.time]?.unit;
-  if (h?.kind === 'time') return { value: h.symbol as TimeUnit, overridden: false, explanation: `time unit ${h.symbol} — from the header` };
+  if (h?.kind === 'time') return { value: h.symbol as TimeUnit, overridden: false, explanation: `time unit ${h.symbol} — from ${unitSource(a, a.time)}` };
   return { value: 's', overridden: false, explanation: 'time unit s — no unit in the file, seconds assumed' };
 }
 
@@ -113,7 +123,20 @@ export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment
     }
   });
   const split = findSweepSegments(potentialV, { cycleColumn });
+  assertSwept(fileName, split, potentialV.length, a.potential);
   return { potentialV, currentA, timeS, cycleColumn, extraColumns, split, rowsKept: kept, rowsDropped: droppedCount };
+}
+
+/**
+ * A potential that turns at nearly every point (thousands of sweeps of two or three points) is not
+ * swept: it is another quantity, or noise. Caught here, before the analysis would treat each
+ * turn as a cycle. Thresholds: common practice, no source.
+ */
+function assertSwept(fileName: string, split: SweepSplit, points: number, column: number): void {
+  const sweeps = split.segments.length;
+  if (sweeps >= 100 && points / sweeps < 4) {
+    throw new ImportError('NOT_A_SWEEP', fileName, `the potential column turns back ${sweeps} times in ${points} points (every ${(points / sweeps).toFixed(1)} points), so it is not a potential sweep — is another column the potential?`, { column: column + 1 });
+  }
 }
 
 function assertPotentialChanges(fileName: string, e: Float64Array, column: number, line: number): void {

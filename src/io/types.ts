@@ -13,6 +13,8 @@ export type TextEncoding = 'utf-8' | 'utf-16le' | 'utf-16be' | 'latin1';
 export type PotentialUnit = 'V' | 'mV' | 'µV';
 export type CurrentUnit = 'A' | 'mA' | 'µA' | 'nA' | 'pA';
 export type TimeUnit = 's' | 'ms' | 'µs' | 'min' | 'h';
+/** A current in A, or a current density in A/cm². */
+export type CurrentKind = 'current' | 'density';
 export type ColumnRole = 'potential' | 'current' | 'time' | 'cycle' | 'index' | 'other';
 
 /** What the user may force. Column indices are 0-based here (the CLI takes 1-based ones). */
@@ -65,6 +67,12 @@ export interface ImportDetection {
   currentUnit: Guess<CurrentUnit>;
   timeUnit: Guess<TimeUnit> | null;
   currentConvention: Guess<CurrentConvention>;
+  /** Whether the chosen current column holds a current or a current density, and why. */
+  currentKind: Guess<CurrentKind>;
+  /** The scale the potentials were recorded against, as the file names it (preamble, column name or units row), and where. */
+  reference: Guess<string | null>;
+  /** 1-based lines of the header block: names, units row, comment lines among them. */
+  headerBlock: { namesLine: number | null; unitsLine: number | null; commentLines: number[] };
   scanRate: Guess<number | null>;
   /** 1-based first and last line of the numeric table. */
   tableLines: { first: number; last: number };
@@ -93,6 +101,14 @@ export interface Measurement extends Voltammogram {
   preamble: string[];
   detection: ImportDetection;
   currentConvention: CurrentConvention;
+  /**
+   * What `currentA` holds: 'current' (A), or 'density' (A/cm²) when the file gave only a current
+   * density and stated no electrode area. Results built from a 'density' file are per cm².
+   */
+  currentKind: CurrentKind;
+  /** When the file's current column was a density: the area (cm², from the preamble) it was multiplied by to give `currentA` in A; null otherwise. */
+  densityAreaCm2: PreambleValue | null;
+  /** The recording scale named in the file (preamble, else the potential column's name or units row), e.g. "RHE", "Ag/AgCl". */
   referenceElectrode: string | null;
   temperatureK: PreambleValue | null;
   areaCm2: PreambleValue | null;
@@ -110,6 +126,12 @@ export interface ImportResult {
 
 export interface ImportOptions {
   overrides?: ImportOverrides;
+  /**
+   * How the table is tokenised: 'auto' reads quote-free chunks in place and quoted ones with
+   * papaparse; 'papaparse' sends every chunk through papaparse (the reference the fuzz suite
+   * compares the fast path with). @default 'auto'
+   */
+  tableReader?: 'auto' | 'papaparse';
   /** Called with the fraction done, 0..1, a few dozen times per file at most. */
   onProgress?: (fraction: number) => void;
 }

@@ -17,19 +17,26 @@ export interface ParsedUnit {
   factor: number;
 }
 
+const PER_AREA_TO_PER_CM2: Record<string, number> = { 'mm²': 100, 'cm²': 1, 'm²': 1e-4 };
 const PREFIX: Record<string, number> = { '': 1, k: 1e3, m: 1e-3, 'µ': 1e-6, n: 1e-9, p: 1e-12 };
 
 export const POTENTIAL_FACTORS: Record<PotentialUnit, number> = { V: 1, mV: 1e-3, 'µV': 1e-6 };
 export const CURRENT_FACTORS: Record<CurrentUnit, number> = { A: 1, mA: 1e-3, 'µA': 1e-6, nA: 1e-9, pA: 1e-12 };
 export const TIME_FACTORS: Record<TimeUnit, number> = { s: 1, ms: 1e-3, 'µs': 1e-6, min: 60, h: 3600 };
 
-/** Replaces the spellings of micro by U+00B5 and strips blanks and brackets. */
+/**
+ * Replaces the spellings of micro by U+00B5 (also "Âµ" and "Î¼": a UTF-8 µ or μ read as
+ * Latin-1), superscripts and the minus sign U+2212 by ASCII, and strips blanks, brackets and
+ * the multiplication dot: "µA·cm⁻²" → "µAcm-2".
+ */
 export function normaliseUnitText(raw: string): string {
   return raw
-    .replace(/Âµ|\u03bc/g, 'µ')
-    .replace(/[[\](){}]/g, '')
+    .replace(/Âµ|Î¼|\u03bc/g, 'µ')
+    .replace(/[[\](){}·]/g, '')
     .replace(/\s+/g, '')
+    .replace(/[−⁻]/g, '-')
     .replace(/²/g, '2')
+    .replace(/¹/g, '1')
     .replace(/\^/g, '');
 }
 
@@ -38,19 +45,22 @@ export function parseUnit(raw: string): ParsedUnit | null {
   const u = normaliseUnitText(raw);
   const time = /^(ms|µs|us|s|sec|secs|seconds?|min|mins|minutes?|h|hr|hours?)$/i.exec(u);
   if (time) return timeUnit(time[1] as string);
-  const m = /^([kmµunp]?)(V|A|C)((?:\/|per)?(?:cm2|cm-2|mm2|mm-2))?$/i.exec(u);
+  const m = /^([kmµunp]?)(V|A|C)((?:\/|per)?(?:cm2|cm-2|mm2|mm-2|m2|m-2))?$/i.exec(u);
   if (!m) return null;
   const prefixRaw = m[1] as string;
   const prefix = prefixRaw === 'u' || prefixRaw === 'U' ? 'µ' : prefixRaw === 'K' ? 'k' : prefixRaw === 'M' ? 'm' : prefixRaw;
   const base = (m[2] as string).toUpperCase();
   const factor = PREFIX[prefix];
   if (factor === undefined) return null;
+  // Only a current comes per area here ("cm2" alone is not "C per m²").
+  if (base !== 'A' && m[3]) return null;
   if (base === 'V') return { kind: 'potential', symbol: `${prefix}V`, factor };
   if (base === 'C') return { kind: 'charge', symbol: `${prefix}C`, factor };
   const area = m[3];
   if (!area) return { kind: 'current', symbol: `${prefix}A`, factor };
-  const perMm2 = /mm/i.test(area);
-  return { kind: 'currentDensity', symbol: `${prefix}A/${perMm2 ? 'mm²' : 'cm²'}`, factor: perMm2 ? factor * 100 : factor };
+  // Factors to A/cm²: 1 mm² = 1e-2 cm², 1 m² = 1e4 cm² (SI Brochure Table 8 area units).
+  const per = /mm/i.test(area) ? 'mm²' : /cm/i.test(area) ? 'cm²' : 'm²';
+  return { kind: 'currentDensity', symbol: `${prefix}A/${per}`, factor: factor * (PER_AREA_TO_PER_CM2[per] as number) };
 }
 
 function timeUnit(t: string): ParsedUnit {

@@ -1,7 +1,8 @@
 /**
  * Opens the built app in Debian's headless Chromium through playwright-core and records what a
- * spec must assert on: console errors, uncaught page errors, and any request to a host other than
- * this machine (such requests are also blocked, so a leak fails loudly instead of hanging).
+ * spec must assert on: console errors, uncaught page errors, Content-Security-Policy violations,
+ * and any request to a host other than this machine (such requests are also blocked, so a leak
+ * fails loudly instead of hanging).
  */
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { inject } from 'vitest';
@@ -24,6 +25,8 @@ export interface OpenedApp {
   consoleErrors: string[];
   pageErrors: string[];
   outsideRequests: string[];
+  /** Content-Security-Policy violations the page reported (directive, blocked URI, source), from the first byte on. */
+  cspViolations: string[];
   close: () => Promise<void>;
 }
 
@@ -56,6 +59,14 @@ export async function openApp(path = '', viewport = { width: 1366, height: 768 }
     if (msg.type() === 'error') consoleErrors.push(msg.text());
   });
   page.on('pageerror', (err) => pageErrors.push(err.message));
+  // The listener is installed through the DevTools protocol, which the page's own policy does not govern.
+  const cspViolations: string[] = [];
+  await page.exposeBinding('__halfwaveCspViolation', (_source, text: string) => cspViolations.push(text));
+  await page.addInitScript(() => {
+    document.addEventListener('securitypolicyviolation', (e) => {
+      (window as unknown as { __halfwaveCspViolation: (t: string) => void }).__halfwaveCspViolation(`${e.effectiveDirective} blocked ${e.blockedURI || 'inline'} at ${e.sourceFile}:${e.lineNumber}`);
+    });
+  });
   await context.route('**/*', async (route) => {
     const url = route.request().url();
     if (isLocalUrl(url)) return route.continue();
@@ -70,6 +81,7 @@ export async function openApp(path = '', viewport = { width: 1366, height: 768 }
     consoleErrors,
     pageErrors,
     outsideRequests,
+    cspViolations,
     close: () => browser.close(),
   };
 }

@@ -53,8 +53,9 @@ export function analyzeResolvedVoltammogram(v: Voltammogram, trace: TraceOptions
     warnings.push({ code: 'FLAT_TRACE', message: `current range ${range.toExponential(3)} A is within 10× the noise (${sig.noiseA.toExponential(3)} A): no peaks can be told from noise` });
   }
   const peakThresholdA = Math.max(resolved.minSignalToNoise * sig.noiseA, resolved.minProminenceA, resolved.minRelativeProminence * range, Number.MIN_VALUE);
+  const wanted = new Set(resolved.cycles);
   const cycles = v.cycles
-    .filter((c) => resolved.cycles.includes(c.index))
+    .filter((c) => wanted.has(c.index))
     .map((c) => (flat ? { index: c.index, peaks: [], couples: [], warnings: [{ code: 'NO_PEAKS' as const, message: 'flat trace: no peaks searched', cycle: c.index }] } : analyzeCycle(sig, c, resolved, peakThresholdA)));
   return {
     cycles,
@@ -105,7 +106,8 @@ export function resolveTraceOptions(v: Voltammogram, o: AnalyzeVoltammogramOptio
     }
   }
   const cycles = o.cycles ?? v.cycles.map((c) => c.index);
-  const missing = cycles.filter((k) => !v.cycles.some((c) => c.index === k));
+  const present = new Set(v.cycles.map((c) => c.index));
+  const missing = cycles.filter((k) => !present.has(k));
   if (missing.length) {
     throw new AnalysisError('BAD_OPTION', `cycles option names cycle ${missing.join(', ')}, but the voltammogram has cycles ${v.cycles.map((c) => c.index).join(', ') || 'none'}`);
   }

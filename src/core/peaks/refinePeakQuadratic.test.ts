@@ -25,4 +25,13 @@ describe('refinePeakQuadratic', () => {
     expect(refinePeakQuadratic({ potentialV: e, currentA: i, from: 0, to: 21 })).toBeNull();
     expect(() => refinePeakQuadratic({ potentialV: e, currentA: i, from: 0, to: 2 })).toThrow(/at least 3/);
   });
+
+  // A least-squares parabola is determined only by three or more distinct abscissae (common practice, no source).
+  it('returns null, not a solver fault, when the window holds fewer than three distinct potentials (a staircase step)', () => {
+    const e = [0.1, 0.1, 0.1, 0.2, 0.2, 0.2];
+    const i = [1e-6, 2e-6, 1.5e-6, 1e-6, 2e-6, 1e-6];
+    expect(refinePeakQuadratic({ potentialV: e, currentA: i, from: 0, to: 6 })).toBeNull();
+    const tiny = [0, 1e-300, 2e-300, 3e-300, 4e-300];
+    expect(refinePeakQuadratic({ potentialV: tiny, currentA: [0, 1, 2, 1, 0], from: 0, to: 5 })).toBeNull();
+  });
 });

@@ -35,21 +35,35 @@ export function refinePeakQuadratic(input: RefinePeakQuadraticInput, options: Re
   const centre = input.potentialV[(from + to) >> 1] as number;
   const x: number[] = [];
   const y: number[] = [];
+  let lo = Infinity;
+  let hi = -Infinity;
   for (let k = from; k < to; k++) {
     const e = input.potentialV[k] as number;
     const i = input.currentA[k] as number;
     if (Number.isFinite(e) && Number.isFinite(i)) {
       x.push(e - centre);
       y.push(i);
+      lo = Math.min(lo, e - centre);
+      hi = Math.max(hi, e - centre);
     }
   }
-  if (x.length < 3) return null;
-  const fit = new PolynomialRegression(x, y, 2);
-  const [c0 = NaN, c1 = NaN, c2 = NaN] = fit.coefficients;
+  // A parabola needs three distinct potentials (a staircase can repeat them); else keep the point.
+  if (x.length < 3 || new Set(x).size < 3) return null;
+  const fit = fitParabola(x, y);
+  if (!fit) return null;
+  const [c0 = NaN, c1 = NaN, c2 = NaN] = fit;
   if (!(orientation * c2 < 0)) return null;
   const xv = -c1 / (2 * c2);
-  const lo = Math.min(...x);
-  const hi = Math.max(...x);
   if (!(xv >= lo && xv <= hi)) return null;
   return { potentialV: centre + xv, currentA: c0 + c1 * xv + c2 * xv * xv };
+}
+
+/** Least-squares coefficients [c0, c1, c2], or null when the normal equations are singular (potentials too close to tell apart). */
+function fitParabola(x: number[], y: number[]): number[] | null {
+  try {
+    return new PolynomialRegression(x, y, 2).coefficients;
+  } catch (err) {
+    if (err instanceof Error && /singular/i.test(err.message)) return null;
+    throw err;
+  }
 }

@@ -91,15 +91,17 @@ function cycleStartsFromColumn(column: ArrayLike<number>): number[] {
  * sweep of one or two points would appear at the joint.
  */
 function snapToVertices(starts: number[], vertices: number[], reach = 3): number[] {
+  // Both lists ascend, so one pointer walks the vertices once (a cycle column that changes on
+  // every row of a zigzag trace would otherwise cost starts × vertices).
+  let p = 0;
   const snapped = starts.map((s) => {
     if (s === 0) return 0;
-    let best = s;
-    let bestDistance = reach + 1;
-    for (const v of vertices) {
-      const d = Math.abs(v - s);
-      if (d < bestDistance) [best, bestDistance] = [v, d];
-    }
-    return best;
+    while (p < vertices.length && (vertices[p] as number) < s) p++;
+    const below = p > 0 ? s - (vertices[p - 1] as number) : Infinity;
+    const above = p < vertices.length ? (vertices[p] as number) - s : Infinity;
+    // The nearest vertex within reach; on a tie, the earlier one.
+    if (Math.min(below, above) > reach) return s;
+    return below <= above ? s - below : s + above;
   });
   return snapped.filter((s, k) => k === 0 || s > (snapped[k - 1] as number));
 }
@@ -133,11 +135,16 @@ function cycleStartsFromTrace(e: ArrayLike<number>, segs: Omit<SweepSegment, 'cy
 function assignCycles(raw: Omit<SweepSegment, 'cycle'>[], starts: number[], n: number): SweepSplit {
   const cycles: CycleRange[] = starts.map((s, k) => ({ index: k + 1, start: s, end: starts[k + 1] ?? n }));
   const segments: SweepSegment[] = [];
+  // Segments and cycles both ascend: the first cycle a segment can touch only moves forward.
+  let first = 0;
   for (const seg of raw) {
+    while (first < cycles.length && (cycles[first] as CycleRange).end <= seg.start) first++;
     // A segment that a cycle boundary cuts is split so that each piece lies in one cycle.
     let a = seg.start;
-    for (const c of cycles) {
-      if (c.end <= a || c.start >= seg.end) continue;
+    for (let ci = first; ci < cycles.length; ci++) {
+      const c = cycles[ci] as CycleRange;
+      if (c.start >= seg.end) break;
+      if (c.end <= a) continue;
       const b = Math.min(seg.end, c.end + (c.end < seg.end ? 1 : 0));
       if (b - a >= 2) segments.push({ start: a, end: b, direction: seg.direction, cycle: c.index });
       a = Math.max(a, c.end);
