@@ -1,0 +1,93 @@
+/**
+ * Uncertainty of the fitted parameters: linearised standard errors, correlations and 95 %
+ * intervals at the optimum (fitUncertainty.ts), and profile-t intervals (profileParameter.ts)
+ * for rate constants (k°, k_s, k_f) whose linearised interval is not trustworthy: undetermined,
+ * at a search limit, or wider than a factor 2 on either side. A profiled side that reaches the
+ * search limit is open: the constant is then a lower (or upper) bound, never a number.
+ * Source: Bates & Watts, Nonlinear Regression Analysis and Its Applications (1988), §2.3 and
+ *   §6.1 (from memory); the factor-2 trigger is common practice, no source.
+ * In: the fit context at its optimum. Out: one ParameterEstimate per parameter of the model
+ *   (free and fixed), the covariance of the free ones, and a lower sum of squares met while
+ *   profiling, if any.
+ */
+import { COUPLE_PARAMETERS, reportIsLinear, type LayoutEntry } from './fitParameters';
+import { reportJacobian, residualsAt, type FitContext } from './fitProblem';
+import type { EstimateStatus, FitMechanism, FitModelValues, FitStage, ParameterEstimate } from './fitTypes';
+import { linearizedCovariance, type LinearizedCovariance } from './fitUncertainty';
+import { profileParameter, type ProfileResult } from './profileParameter';
+
+export interface EstimatesResult {
+  estimates: ParameterEstimate[];
+  covariance: LinearizedCovariance;
+  evaluations: number;
+  better: ProfileResult['better'];
+}
+
+export interface EstimatesOptions {
+  mechanism: FitMechanism;
+  /** Asked free but not identifiable: reported undetermined at their held value. */
+  confounded: readonly string[];
+  profile: boolean;
+  /** Parameters solved outside the iteration (background lines). */
+  extraParameters: number;
+  onStage?: ((s: FitStage) => void) | undefined;
+}
+
+const PROFILED = new Set(['k0CmPerS', 'surfaceRatePerS', 'followUpRatePerS']);
+
+export function fitEstimates(ctx: FitContext, values: FitModelValues, costA2: number, o: EstimatesOptions): EstimatesResult {
+  const { layout } = ctx;
+  const r0 = new Float64Array(ctx.measuredA.length);
+  residualsAt(ctx, values, r0);
+  const cov = linearizedCovariance(reportJacobian(ctx, values, r0), costA2, { extraParameters: o.extraParameters });
+  let evaluations = 1 + layout.size;
+  let better: ProfileResult['better'] = null;
+  const estimates = layout.entries.map((e, i): ParameterEstimate => {
+    const y = layout.toReport(values, e);
+    const se = cov.standardErrors[i] as number;
+    const half = cov.tQuantile * se;
+    const atSearchLimit = layout.atLimit(values, e);
+    const base = { parameter: e.parameter, couple: e.couple, value: layout.valueOf(values, e), free: true, standardError: reportIsLinear(e) ? se : layout.valueOf(values, e) * se, atSearchLimit };
+    if (o.profile && PROFILED.has(e.parameter) && (!Number.isFinite(se) || atSearchLimit || half > Math.LN2)) {
+      o.onStage?.('profile');
+      const p = profileParameter(ctx, { index: i, best: values, bestCostA2: costA2, residualStdA: cov.residualStdA, tQuantile: cov.tQuantile, firstStep: Math.min(Math.max(Number.isFinite(se) ? se : 1, 0.2), 1) });
+      evaluations += p.evaluations;
+      if (p.better && (!better || p.better.costA2 < better.costA2)) better = p.better;
+      const interval: [number | null, number | null] = [p.lower === null ? null : Math.exp(p.lower), p.upper === null ? null : Math.exp(p.upper)];
+      return { ...base, interval, intervalMethod: 'profile', status: profiledStatus(p) };
+    }
+    const interval = waldInterval(e, y, half);
+    return { ...base, interval, intervalMethod: 'linearized', status: cov.undetermined[i] || coversRange(e, interval) ? 'undetermined' : 'estimate' };
+  });
+  const held = fixedEstimates(ctx, values, o.mechanism).map((e): ParameterEstimate => (o.confounded.includes(e.parameter)
+    ? { ...e, free: true, status: 'undetermined', standardError: Infinity, interval: [null, null] } : e));
+  return { estimates: [...estimates, ...held], covariance: cov, evaluations, better };
+}
+
+function profiledStatus(p: ProfileResult): EstimateStatus {
+  if (p.lower !== null && p.upper !== null) return 'estimate';
+  if (p.lower !== null) return 'lower-bound';
+  return p.upper !== null ? 'upper-bound' : 'undetermined';
+}
+
+function waldInterval(e: LayoutEntry, y: number, half: number): [number | null, number | null] {
+  if (!Number.isFinite(half)) return [null, null];
+  return reportIsLinear(e) ? [y - half, y + half] : [Math.exp(y - half), Math.exp(y + half)];
+}
+
+/** The interval reaches past both search limits: the data say nothing about the parameter. */
+function coversRange(e: LayoutEntry, [a, b]: [number | null, number | null]): boolean {
+  if (a === null || b === null) return true;
+  return Number.isFinite(e.spec.lo) && a <= e.spec.lo && b >= e.spec.hi;
+}
+
+/** Parameters of the model that were held at their values. */
+function fixedEstimates(ctx: FitContext, values: FitModelValues, mechanism: FitMechanism): ParameterEstimate[] {
+  const free = new Set(ctx.layout.entries.map((e) => `${e.parameter}/${e.couple}`));
+  const fixed = (parameter: ParameterEstimate['parameter'], couple: number | null, value: number): ParameterEstimate => ({
+    parameter, couple, value, free: false, standardError: null, interval: null, intervalMethod: null, status: 'fixed', atSearchLimit: false,
+  });
+  const all = values.couples.flatMap((c, j) => COUPLE_PARAMETERS[mechanism].map((n) => fixed(n, j, c[n])));
+  all.push(fixed('uncompensatedOhm', null, values.shared.uncompensatedOhm), fixed('doubleLayerFPerCm2', null, values.shared.doubleLayerFPerCm2));
+  return all.filter((e) => !free.has(`${e.parameter}/${e.couple}`));
+}
