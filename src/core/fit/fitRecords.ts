@@ -66,9 +66,18 @@ function cycleSweeps(v: Voltammogram, k: number, cycle: number): SweepSegment[] 
       throw new AnalysisError('BAD_OPTION', `${where}, cycle ${c} has ${sweeps.length} sweeps: a fit needs cycles that run start → vertex → start (does the scan start inside the window?)`);
     }
   }
-  const span = Math.abs(v.potentialV[first[0]!.end - 1]! - v.potentialV[first[0]!.start]!);
-  const startGap = Math.abs(v.potentialV[chosen[0]!.start]! - v.potentialV[first[0]!.start]!);
-  if (startGap > 0.02 * span) throw new AnalysisError('BAD_OPTION', `${where}: cycle ${cycle} starts ${(startGap * 1e3).toFixed(1)} mV away from cycle 1; the simulated waveform repeats the first cycle`);
+  const startV = v.potentialV[first[0]!.start]!;
+  const switchV = v.potentialV[first[0]!.end - 1]!;
+  const tolerance = 0.02 * Math.abs(switchV - startV);
+  const startGap = Math.abs(v.potentialV[chosen[0]!.start]! - startV);
+  if (startGap > tolerance) throw new AnalysisError('BAD_OPTION', `${where}: cycle ${cycle} starts ${(startGap * 1e3).toFixed(1)} mV away from cycle 1; the simulated waveform repeats the first cycle`);
+  const [lo, hi] = [Math.min(startV, switchV) - tolerance, Math.max(startV, switchV) + tolerance];
+  for (const s of chosen) {
+    for (let i = s.start; i < s.end; i++) {
+      const e = v.potentialV[i]!;
+      if (e < lo || e > hi) throw new AnalysisError('BAD_OPTION', `${where}: point ${i} (${e} V) lies outside the start–vertex range ${startV} … ${switchV} V: a fit needs cycles that run start → vertex → start`);
+    }
+  }
   return chosen;
 }
 

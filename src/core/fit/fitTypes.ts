@@ -89,12 +89,13 @@ export interface FitVoltammogramsOptions {
   maxIterations?: number;
   /** Profile-likelihood bounds for rate constants whose linearised interval is not trustworthy. @default true */
   profile?: boolean;
-  onProgress?: (p: FitProgress & { stage: FitStage }) => void;
+  onProgress?: ((p: FitProgress & { stage: FitStage }) => void) | undefined;
   /** Checked between simulations; when aborted the fit throws AnalysisError('CANCELLED'). */
-  signal?: { readonly aborted: boolean };
+  signal?: { readonly aborted: boolean } | undefined;
 }
 
-export type FitStage = 'coarse' | 'fine' | 'errors' | 'profile';
+/** 'iterate': the main least-squares iteration; 'profile': profile-likelihood bounds of a rate constant. */
+export type FitStage = 'iterate' | 'profile';
 
 export type EstimateStatus = 'estimate' | 'lower-bound' | 'upper-bound' | 'undetermined' | 'fixed';
 

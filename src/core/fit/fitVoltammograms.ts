@@ -25,7 +25,7 @@ import { assembleFitResult } from './fitReport';
 import { runStage, type StageResult } from './fitStages';
 import { fitStartingValues } from './fitStartingValues';
 import { scanStart } from './scanStart';
-import type { FitInput, FitModelValues, FitResult, FitStage, FitVoltammogramsOptions } from './fitTypes';
+import type { FitInput, FitModelValues, FitResult, FitVoltammogramsOptions } from './fitTypes';
 import { resolveFitOptions, type ResolvedFit } from './resolveFitOptions';
 
 export function fitVoltammograms(input: FitInput, options: FitVoltammogramsOptions = {}): FitResult {
@@ -37,14 +37,14 @@ export function fitVoltammograms(input: FitInput, options: FitVoltammogramsOptio
   const ctx: FitContext = { layout, model, base: start.values, background: fit.background, measuredA: measuredCurrents(model), signal: options.signal };
   ctx.model.freezeGrids(start.values, {});
   const scanned = scanStart(ctx, start.values);
-  let stage = iterate(ctx, fit, scanned.values, 'fine', options);
+  let stage = iterate(ctx, fit, scanned.values, options);
   let iterations = stage.iterations;
   let evaluations = scanned.evaluations + stage.evaluations;
   let est = errors(ctx, fit, stage, options);
   if (est.better && est.better.costA2 < stage.lm.costA2 * (1 - 1e-6)) {
     // The profile met a lower sum of squares: the iteration had stopped on a flat stretch.
     evaluations += est.evaluations;
-    stage = iterate(ctx, fit, est.better.values, 'fine', options);
+    stage = iterate(ctx, fit, est.better.values, options);
     iterations += stage.iterations;
     evaluations += stage.evaluations;
     est = errors(ctx, fit, stage, options);
@@ -55,8 +55,8 @@ export function fitVoltammograms(input: FitInput, options: FitVoltammogramsOptio
   });
 }
 
-function iterate(ctx: FitContext, fit: ResolvedFit, from: FitModelValues, name: FitStage, options: FitVoltammogramsOptions): StageResult {
-  return runStage(ctx, from, { maxIterations: fit.maxIterations, numerics: {}, stage: name, onProgress: options.onProgress });
+function iterate(ctx: FitContext, fit: ResolvedFit, from: FitModelValues, options: FitVoltammogramsOptions): StageResult {
+  return runStage(ctx, from, { maxIterations: fit.maxIterations, numerics: {}, stage: 'iterate', onProgress: options.onProgress });
 }
 
 function errors(ctx: FitContext, fit: ResolvedFit, stage: StageResult, options: FitVoltammogramsOptions): EstimatesResult {

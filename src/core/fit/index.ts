@@ -6,3 +6,5 @@ export { linearizedCovariance } from './fitUncertainty';
 export type { LinearizedCovariance, LinearizedCovarianceOptions } from './fitUncertainty';
 export { PARAMETER_SPECS, DEFAULT_FREE } from './fitParameters';
 export type * from './fitTypes';
+export { compareFitModels, mechanismCandidates, ohmicCandidates } from './compareFitModels';
+export type { CompareFitModelsOptions, EvidenceGrade, FitCandidate, ModelComparison } from './compareFitModels';

@@ -3,8 +3,11 @@
  *   ΔEp(v) ≈ ΔEp_kin(ψ(v)) + 2·i_p(v)·R_u,  ψ = k°/√(π·D·nFv/RT),
  * with ΔEp_kin from Nicholson's table inverted (R. S. Nicholson, Anal. Chem. 37 (1965) 1351,
  * Table I, α = 0.5), and the ohmic term the drop at both peaks (common practice, no source;
- * checked against this project's simulator: it is 0.8–1.3× the simulated widening for
- * 30–400 Ω). For fixed k° the best R_u ≥ 0 is linear least squares; k° is searched on a grid.
+ * against this project's simulator the real widening is 1.05–1.3× this term for 30–400 Ω, so
+ * R_u comes out up to ~25 % high). For fixed k° the best R_u ≥ 0 is linear least squares; k° is
+ * searched on a grid. This is only a start: over a decade or two of scan rates a Nernstian
+ * couple behind R_u and a slower couple without it can have nearly the same ΔEp; the fit to the
+ * whole wave (peak heights and shapes) tells them apart.
  * Beyond the table: ψ > 20 approaches the reversible 2.218·RT/nF (linear in 1/ψ); ψ < 0.1
  * widens by 4.6·RT/(αnF)… per decade of ψ (both irreversible peaks move by 2.303·RT/(2αnF) per
  * decade of v, Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001) eq. 6.3.6, from memory).
