@@ -127,7 +127,7 @@ function runInputs(measurements: Measurement[], paths: string[], extras: Analysi
 }
 
 /** A value every file's preamble agrees on, else undefined. */
-function fromFiles(measurements: Measurement[], pick: (m: Measurement) => { value: number } | null): number | undefined {
+export function fromFiles(measurements: Measurement[], pick: (m: Measurement) => { value: number } | null): number | undefined {
   const values = measurements.map((m) => pick(m)?.value);
   const first = values[0];
   return first !== undefined && values.every((v) => v === first) ? first : undefined;

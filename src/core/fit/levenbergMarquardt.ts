@@ -166,7 +166,10 @@ class MarquardtIteration {
         break;
       }
     }
-    const converged = reason === 'relative-offset' || ((reason === 'step' || reason === 'no-descent') && this.offset < 10 * tolerance);
+    // A step that no longer moves (or no descent found) still counts as converged when the linear model predicts a
+    // remaining decrease of S below 1 % of one residual variance per parameter (offset < 0.1): noise-free data,
+    // whose residuals are the model's own discretisation error, end this way.
+    const converged = reason === 'relative-offset' || ((reason === 'step' || reason === 'no-descent') && this.offset < 0.1);
     return { u: this.u, residuals: this.r, costA2: this.cost, iterations: this.iteration, evaluations: this.ev.count, converged, reason, relativeOffset: this.offset };
   }
 

@@ -5,9 +5,10 @@
  *   (1988), §6.1 (profile t): τ(y) = sign(y − ŷ)·√(S̃(y) − Ŝ)/s, with S̃(y) the least sum of
  *   squares with the parameter held at y and all others re-optimised; the (1 − a) interval is
  *   where |τ(y)| ≤ t(ν, 1 − a/2) (from memory).
- * Method: from ŷ, steps outward on each side (growing by 1.5×) until |τ| passes t, then
+ * Method: on each side the search limit is tried first; when |τ| stays below t there the side
+ *   is open (null). Otherwise steps outward from ŷ (growing by 1.5×) until |τ| passes t, then
  *   interpolates linearly in τ between the last two points and checks the interpolated point
- *   once; a side that reaches the parameter's search limit first stays open (null).
+ *   once. For log-scale parameters only (rate constants), in report coordinates ln x.
  * In: the fit context, the entry's index, the optimum, Ŝ (A²), s (A), t, a first step (report
  *   coordinates). Out: the interval ends in report coordinates (null = open), the profile
  *   points, the evaluations used, and a lower S found on the way (the optimum was not reached).
@@ -37,45 +38,74 @@ export interface ProfileResult {
 }
 
 const MAX_STEPS = 12;
-const POINT_ITERATIONS = 12;
+/** Each profile point re-optimises the other parameters loosely: an offset of 0.05 leaves S within ~0.01·s² of its minimum, far below the t² threshold. */
+const POINT_ITERATIONS = 8;
+const POINT_TOLERANCE = 0.05;
 
 export function profileParameter(ctx: FitContext, req: ProfileRequest): ProfileResult {
-  const entry = ctx.layout.entries[req.index]!;
-  const sub: FitContext = { ...ctx, layout: ctx.layout.without(req.index) };
-  const yHat = ctx.layout.toReport(req.best, entry);
-  const limits = reportLimits(ctx.layout, req.index);
-  const out: ProfileResult = { lower: null, upper: null, points: [], evaluations: 0, better: null };
-  const costAt = (y: number, warm: FitModelValues): { cost: number; values: FitModelValues } => {
+  const profile = new Profile(ctx, req);
+  profile.side(-1);
+  profile.side(1);
+  profile.out.points.sort((a, b) => a.y - b.y);
+  return profile.out;
+}
+
+/** τ at one search limit (−1 lower, +1 upper) and the evaluations it took: is that limit compatible with the data? */
+export function limitTau(ctx: FitContext, req: ProfileRequest, side: -1 | 1): { tau: number; evaluations: number } {
+  const profile = new Profile(ctx, req);
+  const y = profile.limits[side < 0 ? 0 : 1];
+  return { tau: profile.tauOf(y, profile.costAt(y, req.best).cost), evaluations: profile.out.evaluations };
+}
+
+class Profile {
+  readonly out: ProfileResult = { lower: null, upper: null, points: [], evaluations: 0, better: null };
+  readonly limits: [number, number];
+  private readonly sub: FitContext;
+  private readonly yHat: number;
+
+  constructor(private readonly ctx: FitContext, private readonly req: ProfileRequest) {
+    this.sub = { ...ctx, layout: ctx.layout.without(req.index) };
+    this.yHat = ctx.layout.toReport(req.best, ctx.layout.entries[req.index]!);
+    this.limits = reportLimits(ctx.layout, req.index);
+  }
+
+  costAt(y: number, warm: FitModelValues): { cost: number; values: FitModelValues } {
     const start = cloneValues(warm);
-    ctx.layout.fromReport(start, entry, y);
-    const r = minimiseOthers(sub, start);
-    out.evaluations += r.evaluations;
-    if (r.cost < req.bestCostA2 && (!out.better || r.cost < out.better.costA2)) out.better = { costA2: r.cost, values: r.values };
+    this.ctx.layout.fromReport(start, this.ctx.layout.entries[this.req.index]!, y);
+    const r = minimiseOthers(this.sub, start);
+    this.out.evaluations += r.evaluations;
+    if (r.cost < this.req.bestCostA2 && (!this.out.better || r.cost < this.out.better.costA2)) this.out.better = { costA2: r.cost, values: r.values };
     return { cost: r.cost, values: r.values };
-  };
-  const tauOf = (y: number, cost: number) => Math.sign(y - yHat) * Math.sqrt(Math.max(cost - req.bestCostA2, 0)) / req.residualStdA;
-  for (const side of [-1, 1] as const) {
-    let step = req.firstStep;
-    let prev = { y: yHat, tau: 0, values: req.best };
+  }
+
+  tauOf(y: number, cost: number): number {
+    return (Math.sign(y - this.yHat) * Math.sqrt(Math.max(cost - this.req.bestCostA2, 0))) / this.req.residualStdA;
+  }
+
+  /** First the limit itself (open side when it is compatible), else a walk outward to the crossing. */
+  side(side: -1 | 1): void {
+    const t = this.req.tQuantile;
+    const limit = side < 0 ? this.limits[0] : this.limits[1];
+    const atLimit = this.costAt(limit, this.req.best);
+    this.out.points.push({ y: limit, tau: this.tauOf(limit, atLimit.cost) });
+    if (Math.abs(this.tauOf(limit, atLimit.cost)) < t) return;
+    let step = this.req.firstStep;
+    let prev = { y: this.yHat, tau: 0, values: this.req.best };
     for (let k = 0; k < MAX_STEPS; k++) {
-      const limit = side < 0 ? limits[0] : limits[1];
       const y = side < 0 ? Math.max(prev.y - step, limit) : Math.min(prev.y + step, limit);
-      const at = costAt(y, prev.values);
-      const tau = tauOf(y, at.cost);
-      out.points.push({ y, tau });
-      if (Math.abs(tau) >= req.tQuantile) {
-        const end = refine(prev, { y, tau }, req.tQuantile, (yy) => tauOf(yy, costAt(yy, at.values).cost));
-        if (side < 0) out.lower = end;
-        else out.upper = end;
-        break;
+      const at = y === limit ? atLimit : this.costAt(y, prev.values);
+      const tau = this.tauOf(y, at.cost);
+      this.out.points.push({ y, tau });
+      if (Math.abs(tau) >= t) {
+        const end = refine(prev, { y, tau }, t, (yy) => this.tauOf(yy, this.costAt(yy, at.values).cost));
+        if (side < 0) this.out.lower = end;
+        else this.out.upper = end;
+        return;
       }
-      if (y === limit) break;
       prev = { y, tau, values: at.values };
       step *= 1.5;
     }
   }
-  out.points.sort((a, b) => a.y - b.y);
-  return out;
 }
 
 /** Linear interpolation of |τ| = t between two points, checked once and re-interpolated. */
@@ -93,7 +123,7 @@ function minimiseOthers(sub: FitContext, start: FitModelValues): { cost: number;
     residualsAt(ctx, start, r);
     return { cost: r.reduce((s, x) => s + x * x, 0), values: start, evaluations: 1 };
   }
-  const lm = levenbergMarquardt(leastSquaresProblem(ctx), sub.layout.toInternal(start), { maxIterations: POINT_ITERATIONS, relativeOffsetTolerance: 0.01, signal: sub.signal });
+  const lm = levenbergMarquardt(leastSquaresProblem(ctx), sub.layout.toInternal(start), { maxIterations: POINT_ITERATIONS, relativeOffsetTolerance: POINT_TOLERANCE, signal: sub.signal });
   return { cost: lm.costA2, values: sub.layout.fromInternal(lm.u, start), evaluations: lm.evaluations };
 }
 
