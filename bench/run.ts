@@ -15,6 +15,7 @@ export const REGISTRY: BenchEntry[] = [
   { title: 'import', file: './importBench.ts', exportName: 'runImportBench' },
   { title: 'analysis', file: './analysisBench.ts', exportName: 'runAnalysisBench' },
   { title: 'scale', file: './scaleBench.ts', exportName: 'runScaleBench' },
+  { title: 'fit', file: './fitBench.ts', exportName: 'runFitBench' },
 ];
 
 const here = dirname(fileURLToPath(import.meta.url));

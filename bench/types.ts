@@ -4,6 +4,8 @@ export interface BenchRow {
   value: number;
   unit: string;
   note?: string;
+  /** Machine-readable name of a headline figure (e.g. 'fitMs'), for tools that read the bench. */
+  key?: string;
 }
 
 /** A registered bench: the file in bench/ and the async function it exports. */

@@ -3,7 +3,24 @@ import type { FitResult, ModelComparison, ParameterEstimate } from '../core/fit'
 import { shortLabel, shortName } from './fitContract';
 
 const UNITS: Record<string, string> = { E0: 'V', k0: 'cm/s', alpha: '', D: 'cm²/s', Dratio: '', kf: '1/s', gamma: 'mol/cm²', ks: '1/s', Ru: 'Ω', Cdl: 'F/cm²' };
-const g = (x: number | null | undefined) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : Number(x.toPrecision(4)).toString());
+/** `digits` significant digits; exponent notation for very small or large magnitudes. */
+function sig(x: number, digits: number): string {
+  const a = Math.abs(x);
+  return a !== 0 && (a < 1e-3 || a >= 1e5) ? x.toExponential(digits - 1) : x.toPrecision(digits);
+}
+
+/** A given or held number as it was entered: no padding zeros. */
+const plain = (x: number) => (Math.abs(x) !== 0 && Math.abs(x) < 1e-3 ? Number(x.toPrecision(6)).toExponential() : String(Number(x.toPrecision(6))));
+
+const g = (x: number | null | undefined) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : sig(x, 4));
+
+/** x with as many digits as its standard error warrants (two significant digits of the error, at least four of x). */
+function withError(x: number | null | undefined, se: number | null | undefined): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return '—';
+  if (se === null || se === undefined || !Number.isFinite(se) || se <= 0 || x === 0) return g(x);
+  const digits = Math.min(Math.max(Math.floor(Math.log10(Math.abs(x))) - Math.floor(Math.log10(se)) + 2, 4), 12);
+  return sig(x, digits);
+}
 
 function estimateLine(e: ParameterEstimate): string {
   const key = shortName(e.parameter);
@@ -12,11 +29,14 @@ function estimateLine(e: ParameterEstimate): string {
   const lo = e.interval?.[0];
   const hi = e.interval?.[1];
   switch (e.status) {
-    case 'fixed': return `${head}${g(e.value)} ${unit} (held)`;
+    case 'fixed': return `${head}${plain(e.value)} ${unit} (held)`;
     case 'lower-bound': return `${head}> ${g(lo)} ${unit} (lower bound at 95 %, ${e.intervalMethod})`;
     case 'upper-bound': return `${head}< ${g(hi)} ${unit} (upper bound at 95 %, ${e.intervalMethod})`;
-    case 'undetermined': return `${head}not determined by these data (held at ${g(e.value)})`;
-    default: return `${head}${g(e.value)} ${unit} ± ${g(e.standardError)}   95 %: ${g(lo)} … ${g(hi)} (${e.intervalMethod})`;
+    case 'undetermined': return `${head}not determined by these data (value used: ${plain(e.value)})`;
+    default: {
+      const se = e.standardError;
+      return `${head}${withError(e.value, se)} ${unit} ± ${se === null || !Number.isFinite(se) ? '—' : sig(se, 2)}   95 %: ${withError(lo, se)} … ${withError(hi, se)} (${e.intervalMethod})`;
+    }
   }
 }
 
@@ -45,7 +65,7 @@ export function fitText(r: FitResult, files: string[], comparison: ModelComparis
   lines.push('', 'files');
   r.records.forEach((rec, k) => {
     const bg = rec.background ? `, background ${g(rec.background.offsetA)} A + ${g(rec.background.slopeAPerV)} A/V·E` : '';
-    lines.push(`  ${files[k] ?? `voltammogram ${k + 1}`}: v = ${g(rec.scanRateVPerS)} V/s, ${rec.pointCount} points, rms ${g(rec.rmsA)} A${bg}`);
+    lines.push(`  ${files[k] ?? `voltammogram ${k + 1}`}: v = ${plain(rec.scanRateVPerS)} V/s, ${rec.pointCount} points, rms ${g(rec.rmsA)} A${bg}`);
   });
   const strong = strongCorrelations(r);
   if (strong.length) lines.push('', 'correlations with |ρ| ≥ 0.8', ...strong);
