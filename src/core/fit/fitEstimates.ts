@@ -1,9 +1,11 @@
 /**
  * Uncertainty of the fitted parameters: linearised standard errors, correlations and 95 %
- * intervals at the optimum (fitUncertainty.ts), and profile-t intervals (profileParameter.ts)
- * for rate constants (k°, k_s, k_f) whose linearised interval is not trustworthy: undetermined,
- * at a search limit, or wider than a factor 2 on either side. A profiled side that reaches the
- * search limit is open: the constant is then a lower (or upper) bound, never a number.
+ * intervals at the optimum (fitUncertainty.ts), and profile-likelihood intervals
+ * (profileParameter.ts) for rate constants (k°, k_s, k_f) whose linearised interval cannot be
+ * trusted: undetermined, at a search limit, wider than a factor 2 on either side, or with the
+ * regime limit (k°, k_s → reversible; k_f → no follow-up reaction) still compatible with the
+ * data (checked by one restricted fit at that limit). A profiled side whose limit is compatible
+ * is open: the constant is then a lower (or upper) bound, never a number.
  * Source: Bates & Watts, Nonlinear Regression Analysis and Its Applications (1988), §2.3 and
  *   §6.1 (from memory); the factor-2 trigger is common practice, no source.
  * In: the fit context at its optimum. Out: one ParameterEstimate per parameter of the model

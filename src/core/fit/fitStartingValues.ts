@@ -92,7 +92,8 @@ function coupleStart(found: { c: CoupleResult; v: Voltammogram }[], input: Start
   const unit = rates.map((v) => randlesSevcikPeakCurrent({ electronCount: n, areaCm2: cell.areaCm2, concentrationMolPerCm3: cell.concentrationMolPerCm3, diffusionCm2PerS: 1, scanRateVPerS: v }, { temperatureK: cell.temperatureK }));
   const d = median(forwardIp.map((ip, k) => (ip / unit[k]!) ** 2)) ?? base.diffusionOCm2PerS;
   const kinetic = kineticStart(found, forwardIp, d, n, input);
-  const kf = median(found.map(({ c, v }) => followUpStart(c, v, n, cell.temperatureK)));
+  // The Nicholson-ratio working curve costs ten simulations: only for EC.
+  const kf = input.mechanism === 'EC' ? median(found.map(({ c, v }) => followUpStart(c, v, n, cell.temperatureK))) : null;
   const values = { ...base, diffusionOCm2PerS: d, k0CmPerS: kinetic.k0CmPerS, ...(kf !== null ? { followUpRatePerS: kf } : {}) };
   return { values, ruOhm: input.ruOhm === null && new Set(rates).size > 1 ? kinetic.ruOhm : null };
 }

@@ -4,13 +4,16 @@
  * except a per-voltammogram straight background).
  * Model: simulateCvCouples (E, EC or surface couples at one electrode, faradaic currents summed,
  *   R_u and C_dl solved once for the sum), interpolated onto the measured points (fitModel.ts).
- * Method: Levenberg–Marquardt (levenbergMarquardt.ts; Marquardt 1963) on transformed parameters
- *   (fitParameters.ts: log scale for rate constants, D, Γ, R_u, C_dl; α within (0.05, 0.95)),
- *   starting from the peak analysis (fitStartingValues.ts) or given values; space grids frozen
- *   during the iteration and made again at the optimum (fitStages.ts); errors from the Jacobian
- *   at the optimum with the noise estimated from the residuals, profile-t bounds for rate
- *   constants whose linearised interval is not trustworthy (fitEstimates.ts; Bates & Watts
- *   1988); identifiability in words (fitNotes.ts); AIC and BIC (fitReport.ts).
+ * Method: starting values from the peak analysis (fitStartingValues.ts) or given ones, refined
+ *   by a small grid over rate constants and R_u (scanStart.ts); Levenberg–Marquardt with box
+ *   limits (levenbergMarquardt.ts; Marquardt 1963) on log-scale rate constants, D, Γ, C_dl and
+ *   α within (0.05, 0.95) (fitParameters.ts); space grids frozen during the iteration and made
+ *   again when D or k_f moves past their margin (fitStages.ts); errors from the Jacobian at the
+ *   optimum with the noise estimated from the residuals, and profile-likelihood bounds for
+ *   rate constants whose linearised interval cannot be trusted, including a check of the
+ *   reversible (or no-follow-up) limit (fitEstimates.ts; Bates & Watts 1988); identifiability
+ *   in words (fitNotes.ts); AIC and BIC (fitReport.ts). When the profile meets a lower sum of
+ *   squares than the iteration stopped at, the iteration is run again from there.
  * In: FitInput (voltammograms with IUPAC currents and scan rates; cell: A, C, n, T), options.
  * Out: FitResult (values in E°′ order, estimates with errors, intervals and status, correlation,
  *   per-voltammogram model currents, criteria, notes). Progress per iteration; cancel via
