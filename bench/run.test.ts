@@ -16,7 +16,7 @@ describe('bench --json figures', () => {
     expect(() => keyedFigures([{ name: 'a', value: 1, unit: '', key: 'x' }, { name: 'b', value: 2, unit: '', key: 'x' }])).toThrow(/used by two rows/);
   });
 
-  it('registers the hostile-input bench beside the others', () => {
-    expect(REGISTRY.map((e) => e.title)).toEqual(['simulation', 'import', 'analysis', 'scale', 'hostile input']);
+  it('registers the hostile-input and fit benches beside the others', () => {
+    expect(REGISTRY.map((e) => e.title)).toEqual(['simulation', 'import', 'analysis', 'scale', 'hostile input', 'fit']);
   });
 });

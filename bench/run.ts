@@ -18,6 +18,7 @@ export const REGISTRY: BenchEntry[] = [
   { title: 'analysis', file: './analysisBench.ts', exportName: 'runAnalysisBench' },
   { title: 'scale', file: './scaleBench.ts', exportName: 'runScaleBench' },
   { title: 'hostile input', file: './hostileBench.ts', exportName: 'runHostileBench' },
+  { title: 'fit', file: './fitBench.ts', exportName: 'runFitBench' },
 ];
 
 const here = dirname(fileURLToPath(import.meta.url));

@@ -11,7 +11,8 @@ export type AnalysisErrorCode =
   | 'OUT_OF_RANGE'
   | 'TOO_FEW_POINTS'
   | 'NO_PEAK'
-  | 'UNKNOWN_REFERENCE';
+  | 'UNKNOWN_REFERENCE'
+  | 'CANCELLED';
 
 export class AnalysisError extends Error {
   readonly code: AnalysisErrorCode;

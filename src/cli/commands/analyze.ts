@@ -17,12 +17,30 @@ import {
 } from '../../io';
 import type { Choice, ImportOverrides } from '../../io';
 
-const SPEC: Record<string, OptionSpec> = {
-  area: { value: true }, conc: { value: true }, n: { value: true }, temp: { value: true }, 'scan-rate': { value: true },
-  json: { value: false }, csv: { value: true }, ref: { value: true }, inspect: { value: false },
+/** Options that override one guess of the importer (read by parseOverrides); `fit` takes them too. */
+export const IMPORT_OPTION_SPEC: Record<string, OptionSpec> = {
   delimiter: { value: true }, decimal: { value: true }, 'header-line': { value: true }, columns: { value: true },
   'potential-unit': { value: true }, 'current-unit': { value: true }, 'time-unit': { value: true },
   convention: { value: true }, encoding: { value: true },
+};
+
+export const IMPORT_OPTION_HELP = `Import overrides (each replaces one guess; see analyze --inspect):
+  --delimiter D         ${choiceNames(DELIMITER_CHOICES).replace(/, /g, ' | ')} (space: runs of spaces)
+  --decimal M           ${choiceNames(DECIMAL_CHOICES).replace(/, /g, ' | ')}
+  --header-line N       1-based line of the column names; 0 = the file has none
+  --columns LIST        1-based columns, e.g. E=2,I=3,t=1,cycle=4 (cycle=0: split cycles from
+                        the potential instead of a cycle column)
+  --potential-unit U    V | mV | µV (or uV)
+  --current-unit U      A | mA | µA (or uA) | nA | pA
+  --time-unit U         s | ms | µs (or us) | min | h
+  --convention C        iupac (anodic current positive) | polarographic (cathodic positive)
+  --encoding E          ${choiceNames(ENCODING_CHOICES).replace(/, /g, ' | ')}
+`;
+
+const SPEC: Record<string, OptionSpec> = {
+  area: { value: true }, conc: { value: true }, n: { value: true }, temp: { value: true }, 'scan-rate': { value: true },
+  json: { value: false }, csv: { value: true }, ref: { value: true }, inspect: { value: false },
+  ...IMPORT_OPTION_SPEC,
   ...ANALYSIS_OPTION_SPEC,
 };
 
@@ -56,18 +74,7 @@ Analysis options:
   --csv FILE            also write the results table to FILE
   --inspect             print what was detected in each file (no analysis)
 
-Import overrides (each replaces one guess; see the --inspect report):
-  --delimiter D         ${choiceNames(DELIMITER_CHOICES).replace(/, /g, ' | ')} (space: runs of spaces)
-  --decimal M           ${choiceNames(DECIMAL_CHOICES).replace(/, /g, ' | ')}
-  --header-line N       1-based line of the column names; 0 = the file has none
-  --columns LIST        1-based columns, e.g. E=2,I=3,t=1,cycle=4 (cycle=0: split cycles from
-                        the potential instead of a cycle column)
-  --potential-unit U    V | mV | µV (or uV)
-  --current-unit U      A | mA | µA (or uA) | nA | pA
-  --time-unit U         s | ms | µs (or us) | min | h
-  --convention C        iupac (anodic current positive) | polarographic (cathodic positive)
-  --encoding E          ${choiceNames(ENCODING_CHOICES).replace(/, /g, ' | ')}
-
+${IMPORT_OPTION_HELP}
 ${ANALYSIS_OPTION_HELP}
 Exit codes: 0 done, 1 internal fault, 2 bad arguments or a file that cannot be read.
 `;

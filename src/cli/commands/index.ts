@@ -2,5 +2,6 @@
 import type { CliCommand } from '../command';
 import { simulateCommand } from './simulate';
 import { analyzeCommand } from './analyze';
+import { fitCommand } from './fit';
 
-export const commands: CliCommand[] = [simulateCommand, analyzeCommand];
+export const commands: CliCommand[] = [simulateCommand, analyzeCommand, fitCommand];

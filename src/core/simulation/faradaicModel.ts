@@ -10,3 +10,26 @@ export interface FaradaicModel {
   /** Commits the step at `interfacialV`. */
   finishStep(interfacialV: number): void;
 }
+
+/**
+ * Independent couples at one electrode: every couple sees the same interfacial potential and
+ * their faradaic currents add (Kirchhoff's current law at the interface), so the ohmic drop and
+ * the charging current are solved once, for the sum.
+ */
+export class SumOfCouplesModel implements FaradaicModel {
+  constructor(private readonly parts: readonly FaradaicModel[]) {}
+
+  prepareStep(): void {
+    for (const m of this.parts) m.prepareStep();
+  }
+
+  currentAt(interfacialV: number): number {
+    let sum = 0;
+    for (const m of this.parts) sum += m.currentAt(interfacialV);
+    return sum;
+  }
+
+  finishStep(interfacialV: number): void {
+    for (const m of this.parts) m.finishStep(interfacialV);
+  }
+}

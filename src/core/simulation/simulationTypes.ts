@@ -102,7 +102,27 @@ export interface SimulateCvOptions {
    * first sweep). @default 'auto'
    */
   decayingSpecies?: 'auto' | 'O' | 'R';
+  /**
+   * Fixed space grid per couple (index j for couple j of simulateCvCouples; index 0 for
+   * simulateCv) instead of one derived from D, v and k_f. The node count then stays the same
+   * while parameters change, so the current is a smooth function of them (a fit's
+   * finite-difference Jacobian needs that). `null` or a missing entry keeps the automatic grid.
+   * @default none
+   */
+  fixedGrids?: ReadonlyArray<FixedGrid | null>;
 }
+
+/** First spacing and outer edge of an expanding grid, cm (the expansion ratio is `gridExpansion`). */
+export interface FixedGrid {
+  firstSpacingCm: number;
+  outerEdgeCm: number;
+}
+
+/** The fields that belong to one couple; the rest (cell, waveform, C_dl, R_u) is shared by all couples at an electrode. */
+export type CoupleField = 'mechanism' | 'formalPotentialV' | 'k0CmPerS' | 'alpha' | 'electronCount' | 'diffusionOCm2PerS' | 'diffusionRCm2PerS'
+  | 'concentrationOMolPerCm3' | 'concentrationRMolPerCm3' | 'followUpRatePerS' | 'coverageMolPerCm2' | 'surfaceRatePerS';
+
+export type CoupleInput = Pick<CvSimulationInput, CoupleField>;
 
 /** Simulated voltammogram as columns; `potentialV` is the applied potential. */
 export interface CvSimulationResult {
@@ -115,6 +135,16 @@ export interface CvSimulationResult {
   interfacialPotentialV: Float64Array;
   faradaicCurrentA: Float64Array;
   chargingCurrentA: Float64Array;
-  /** Numerical settings actually used. */
-  numerics: { substepsPerPoint: number; spacePoints: number; firstSpacingCm: number; outerEdgeCm: number };
+  /** Numerical settings actually used (of the first couple). */
+  numerics: SimulationNumerics;
+  /** Numerical settings of every couple (simulateCvCouples; one entry for simulateCv). */
+  coupleNumerics: SimulationNumerics[];
+}
+
+export interface SimulationNumerics {
+  substepsPerPoint: number;
+  /** Nodes per species (0 for a surface couple). */
+  spacePoints: number;
+  firstSpacingCm: number;
+  outerEdgeCm: number;
 }

@@ -57,6 +57,11 @@ export function validateSimulationOptions(o: SimulateCvOptions): void {
   if (d !== 'auto' && d !== 'O' && d !== 'R') {
     throw new AnalysisError('BAD_OPTION', `decayingSpecies must be auto, O or R, got ${String(d)}`);
   }
+  for (const [j, g] of (o.fixedGrids ?? []).entries()) {
+    if (!g) continue;
+    assertFiniteInRange(`fixedGrids[${j}].firstSpacingCm`, g.firstSpacingCm, Number.MIN_VALUE);
+    assertFiniteInRange(`fixedGrids[${j}].outerEdgeCm`, g.outerEdgeCm, g.firstSpacingCm);
+  }
 }
 
 /** EC: which species decays; the decaying one must be absent from the bulk. */

@@ -1,0 +1,136 @@
+/**
+ * `halfwave fit FILE...`: whole-curve fit of the simulator to the measured voltammograms
+ * (src/core/fit). Files given together form one series fitted jointly. Reads files as `analyze`
+ * does; prints the JSON contract (--json) or a readable report.
+ */
+import { ZERO_CELSIUS_K } from '../../core/constants';
+import { AnalysisError } from '../../core/errors';
+import { compareFitModels, fitVoltammograms, mechanismCandidates, ohmicCandidates, type FitCell, type FitInput, type FitResult, type FitVoltammogramsOptions, type ModelComparison } from '../../core/fit';
+import { cellFromHeaders, type Measurement } from '../../io';
+import { parseArgs, type OptionSpec } from '../args';
+import type { CliCommand, CliIo } from '../command';
+import { UsageError } from '../errors';
+import { parseFitArgs, type FitArgs } from '../fitArgs';
+import { fitContract } from '../fitContract';
+import { fitText } from '../fitText';
+import { readInputs } from '../readInputs';
+import { IMPORT_OPTION_HELP, IMPORT_OPTION_SPEC, parseOverrides } from './analyze';
+
+const V: OptionSpec = { value: true };
+const SPEC: Record<string, OptionSpec> = {
+  mechanism: V, couples: V, free: V, start: V, window: V, cycle: V, compare: V, 'max-iterations': V,
+  area: V, conc: V, n: V, temp: V, 'scan-rate': V, ru: V, json: { value: false }, ...IMPORT_OPTION_SPEC,
+};
+
+const HELP = `Usage: halfwave fit FILE|FOLDER... [options]
+
+Fits simulated voltammograms to the measured current over a potential window (nonlinear least
+squares, Levenberg–Marquardt). Files given together form one series fitted jointly: every
+parameter is shared by all files, except a straight background per file when it is fitted.
+Starting values come from the peak analysis. Each file's cycle must run start → vertex → start.
+
+Model:
+  --mechanism M         E (electron transfer, Butler–Volmer) | EC (E plus a first-order decay of
+                        the product) | surface (adsorbed film, Laviron kinetics) [E]
+  --couples N           independent couples (species) in the record, 1-4 [1]
+  --free LIST           parameters to fit, comma-separated [E: E0,k0,alpha,D,Cdl;
+                        EC: E0,k0,alpha,D,kf,Cdl; surface: E0,alpha,gamma,ks,Cdl]. Names and units:
+                          E0 formal potential (V)       k0 standard rate constant (cm/s)
+                          alpha transfer coefficient    D diffusion coefficient D_O (cm²/s)
+                          Dratio D_O/D_R                kf follow-up rate constant (1/s)
+                          gamma film coverage (mol/cm²) ks film rate constant (1/s)
+                          Ru uncompensated resistance (Ω)  Cdl double-layer capacitance (F/cm²)
+                          background straight line a + b·E per file
+  --start LIST          starting values of fitted parameters and values of held ones, units as
+                        above, [j] = couple j in order of E°′, e.g. k0=0.01,alpha=0.5,E0[2]=-0.1
+                        [from the peak analysis; alpha 0.5, Dratio 1]
+  --window LO:HI        potential window fitted, V, on both sweeps [the whole cycle]
+  --cycle N             cycle fitted; earlier cycles are simulated too [1]
+  --max-iterations N    Levenberg–Marquardt iterations at most [60]
+  --compare C           auto | none | mechanism (E against EC) | ru (Ru fitted against held):
+                        also fit the alternative and recommend one by BIC [auto: E against EC
+                        for two or more files with mechanism E or EC, else none]
+
+Cell (the same for all files, never fitted):
+  --area CM2            electrode area, cm² [the files' preamble; required otherwise]
+  --conc MM             bulk concentration of the species present at the start, mM (mmol/L)
+                        [the files' preamble; required for E and EC]
+  --n N                 electrons per molecule, 1-6 [1]
+  --temp CELSIUS        temperature, °C [the files', else 25]
+  --scan-rate V_PER_S   scan rate of every file, V/s [time column, preamble or file name]
+  --ru OHM              uncompensated resistance, Ω: held at this value, or the start when Ru is
+                        in --free [held at 0; estimated from ΔEp across the files when fitted]
+
+Output:
+  --json                one JSON object on stdout: mechanism, params (first couple in order of
+                        E°′, with Ru and Cdl), stderr, bounds (95 % intervals; [lo, null] for a
+                        lower bound), couples (same keys per couple), correlation {labels,
+                        matrix}, rms (A), iterations, converged, notes, and extra fields. A
+                        value the data give only as a bound (k° of a reversible couple) is null.
+
+${IMPORT_OPTION_HELP}
+Exit codes: 0 done (also when the fit did not converge: "converged": false), 1 internal fault,
+2 bad arguments or unreadable input.
+`;
+
+export const fitCommand: CliCommand = {
+  name: 'fit',
+  summary: 'fit simulated voltammograms to one file or a scan-rate series (E, EC, surface)',
+  help: HELP,
+  run: async (argv: string[], io: CliIo) => {
+    const parsed = parseArgs(argv, SPEC);
+    const args = parseFitArgs(parsed);
+    const overrides = parseOverrides(parsed);
+    const read = readInputs(args.files, { overrides });
+    const measurements = read.measurements;
+    const names = read.files.map((f) => f.path);
+    const input = fitInput(measurements, args, names);
+    const { result, comparison } = withFileNames(names, () => runFit(input, args));
+    io.stdout(args.json ? `${JSON.stringify(fitContract(result, names, comparison), null, 2)}\n` : fitText(result, names, comparison));
+    return 0;
+  },
+};
+
+function fitInput(measurements: Measurement[], args: FitArgs, names: string[]): FitInput {
+  measurements.forEach((m, k) => {
+    if (!m.scanRateVPerS) throw new UsageError(`"${names[k]}" has no scan rate (no time column, preamble or file name gives one): give --scan-rate`);
+  });
+  // The files' headers as analyze and the screen read them (io/cellFromHeaders.ts), then the flags.
+  const headers = cellFromHeaders(measurements).values;
+  const areaCm2 = args.areaCm2 ?? headers.areaCm2;
+  if (areaCm2 === undefined) throw new UsageError('the electrode area is needed: give --area CM2 (no file states it)');
+  const conc = args.concentrationMolPerCm3 ?? headers.concentrationMolPerCm3;
+  if (conc === undefined && args.mechanism !== 'surface') throw new UsageError('the bulk concentration is needed for E and EC: give --conc MM');
+  const cell: FitCell = {
+    areaCm2, concentrationMolPerCm3: conc ?? 0, electronCount: args.electronCount ?? 1,
+    temperatureK: args.temperatureK ?? headers.temperatureK ?? 25 + ZERO_CELSIUS_K,
+  };
+  return { records: measurements, cell };
+}
+
+function runFit(input: FitInput, args: FitArgs): { result: FitResult; comparison: ModelComparison | null } {
+  const options: FitVoltammogramsOptions = { mechanism: args.mechanism, coupleCount: args.coupleCount, cycle: args.cycle, start: args.start, maxIterations: args.maxIterations };
+  if (args.free) options.free = args.free;
+  if (args.windowV) options.windowV = args.windowV;
+  const compare = args.compare === 'auto' ? (input.records.length > 1 && args.mechanism !== 'surface' ? 'mechanism' : 'none') : args.compare;
+  if (compare === 'none') return { result: fitVoltammograms(input, options), comparison: null };
+  if (compare === 'mechanism' && args.mechanism === 'surface') throw new UsageError('--compare mechanism compares E with EC; it does not apply to --mechanism surface');
+  const ruFitted = (options.free ?? []).includes('uncompensatedOhm');
+  const all = compare === 'mechanism' ? mechanismCandidates(options) : ohmicCandidates(options);
+  const chosen = compare === 'mechanism' ? args.mechanism : ruFitted ? 'R_u fitted' : (all[0]?.label as string);
+  // Only the fit shown needs profile bounds; the alternative needs its sum of squares.
+  const candidates = all.map((c) => (c.label === chosen ? c : { ...c, options: { ...c.options, profile: false } }));
+  const comparison = compareFitModels(input, candidates);
+  const result = comparison.candidates.find((c) => c.label === chosen)?.result as FitResult;
+  return { result, comparison };
+}
+
+/** The core numbers voltammograms from 1; the user knows them by file name. */
+function withFileNames<T>(names: string[], run: () => T): T {
+  try {
+    return run();
+  } catch (err) {
+    if (!(err instanceof AnalysisError)) throw err;
+    throw new AnalysisError(err.code, err.message.replace(/voltammogram (\d+)/g, (_, k: string) => `"${names[Number(k) - 1] ?? `voltammogram ${k}`}"`));
+  }
+}
