@@ -8,7 +8,7 @@
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { analyzeRun } from '../core/analysis/analyzeRun';
-import type { CellValues, InternalStandardSource, RunBlank, RunFile, RunInput } from '../core/analysis/runTypes';
+import type { CellValues, InternalStandardSource, RunBlank, RunFile, RunInput, ValueOrigin } from '../core/analysis/runTypes';
 import { nearestBlank } from '../core/background';
 import type { CurrentConvention } from '../core/types';
 import { cellFromHeaders, describeLayout, groupIntoSeries, SERIES_GROUPINGS } from '../io';
@@ -145,10 +145,21 @@ export function runFilesOf(read: InputsRead, extras: AnalysisExtras): RunFile[] 
   }));
 }
 
-/** A series' cell: what its files' headers state (as the screen reads them), then the command-line options. */
+/**
+ * A series' cell: what its files' headers state (as the screen reads them), then the command-line
+ * options, each value with its origin (so a default that decides a number is named, as on screen).
+ */
 function cellOf(files: RunFile[], args: AnalyzeArgs, extras: AnalysisExtras): CellValues {
   const headers = cellFromHeaders(files.map((f) => f.voltammogram as Measurement)).values;
-  const cell: CellValues = { ...headers, electronCount: args.electronCount ?? 1 };
+  const origin = (flag: unknown, header: unknown): ValueOrigin => (flag !== undefined ? 'entered' : header !== undefined ? 'header' : 'default');
+  const cell: CellValues = {
+    ...headers, electronCount: args.electronCount ?? 1,
+    origins: {
+      electronCount: origin(args.electronCount, undefined), areaCm2: origin(args.areaCm2, headers.areaCm2),
+      concentrationMolPerCm3: origin(args.concentrationMolPerCm3, headers.concentrationMolPerCm3), temperatureK: origin(args.temperatureK, headers.temperatureK),
+      alpha: origin(extras.alpha, undefined), ruOhm: origin(extras.ruOhm, undefined), inputReference: origin(extras.fromRef, headers.inputReference),
+    },
+  };
   const given: Array<[keyof CellValues, unknown]> = [
     ['areaCm2', args.areaCm2], ['concentrationMolPerCm3', args.concentrationMolPerCm3], ['temperatureK', args.temperatureK],
     ['inputReference', extras.fromRef], ['alpha', extras.alpha], ['pH', extras.pH], ['ruOhm', extras.ruOhm], ['diffusionCm2PerS', extras.diffusionCm2PerS],

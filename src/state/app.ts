@@ -2,6 +2,7 @@
  * The app's store instance: worker client, autosave to the browser's storage, and the demo data
  * loaded at start. The UI imports only this module and `react.ts`.
  */
+import type { AnalysisClient } from '../worker/client';
 import { spawnAnalysisClient } from '../worker/spawn';
 import { DEMO_SERIES_CELLS, loadDemoInputs } from './demo';
 import { attachAutosave, restoreAutosave } from './sessionActions';
@@ -10,10 +11,19 @@ import { createHalfwaveStore } from './store';
 import type { HalfwaveStore } from './types';
 
 let appStore: HalfwaveStore | null = null;
+let appClient: AnalysisClient | null = null;
 
 export function getAppStore(): HalfwaveStore {
-  if (!appStore) appStore = createHalfwaveStore({ client: spawnAnalysisClient(), storage: defaultStorageAdapter() });
+  if (!appStore) {
+    appClient = spawnAnalysisClient();
+    appStore = createHalfwaveStore({ client: appClient, storage: defaultStorageAdapter() });
+  }
   return appStore;
+}
+
+/** Stops the analysis workers as a crash would (they are started again); for the recovery test only. */
+export function crashAnalysisWorkers(): void {
+  appClient?.crash?.();
 }
 
 /**

@@ -42,7 +42,7 @@ export function displayScale(settings: AnalysisSettings, cell: SeriesCell): Disp
     const ref = scaleOffset(fileReference, report, conversionContextOf(resolved, report), 'the series');
     if (ref.note !== null || ref.output === null) return { offsetV: 0, name: shortName(fileReference), basis: `${ref.note ?? 'no conversion'}; showing the files' own scale`, ok: false };
     const name = ref.output === 'Fc' ? 'Fc⁺/Fc' : shortName(ref.output);
-    return { offsetV: ref.offsetV, name, basis: `${shortName(fileReference)} → ${name}: ${ref.offsetV >= 0 ? '+' : ''}${ref.offsetV.toFixed(4)} V`, ok: true };
+    return { offsetV: ref.offsetV, name, basis: basisText(shortName(fileReference), name, ref.offsetV, ref.typical), ok: true };
   } catch (err) {
     return { offsetV: 0, name: shortName(fileReference), basis: `cannot convert: ${(err as Error).message}; showing the files' own scale`, ok: false };
   }
@@ -57,18 +57,24 @@ export function runScaleKey(state: Pick<HalfwaveState, 'fileOrder' | 'files' | '
   if (group === null) return null;
   for (const id of state.fileOrder) {
     const run = state.results[id]?.run;
-    if (state.files[id]?.group === group && run && run.role === 'series') return `${run.reference.offsetV}|${run.reference.output ?? ''}|${run.reference.note ?? ''}`;
+    if (state.files[id]?.group === group && run && run.role === 'series') return `${run.reference.offsetV}|${run.reference.output ?? ''}|${run.reference.note ?? ''}|${run.reference.typical ? 'typical' : ''}`;
   }
   return null;
 }
 
 /** A DisplayScale from runScaleKey's text, named like displayScale names scales. */
 export function scaleFromRunKey(key: string, cell: SeriesCell): DisplayScale {
-  const [offset, output, note] = key.split('|');
+  const [offset, output, note, typical] = key.split('|');
   if (!output) return { offsetV: 0, name: shortName(cell.fileReference), basis: `${note || 'no conversion'}; showing the files' own scale`, ok: false };
   const name = output === 'Fc' ? 'Fc⁺/Fc' : shortName(output as ReferenceId);
   const offsetV = Number(offset);
-  return { offsetV, name, basis: `${shortName(cell.fileReference)} → ${name}: ${offsetV >= 0 ? '+' : ''}${offsetV.toFixed(4)} V`, ok: true };
+  return { offsetV, name, basis: basisText(shortName(cell.fileReference), name, offsetV, typical === 'typical'), ok: true };
+}
+
+/** "Ag/AgCl → SCE: −0.0312 V", with a warning when a typical, not measured, value entered. */
+function basisText(from: string, to: string, offsetV: number, typical: boolean): string {
+  const text = `${from} → ${to}: ${offsetV >= 0 ? '+' : ''}${offsetV.toFixed(4)} V`;
+  return typical ? `${text} — through a typical Fc⁺/Fc value, not one measured here: measure ferrocene in the same solution, or read these potentials as approximate` : text;
 }
 
 function shortName(id: ReferenceId): string {

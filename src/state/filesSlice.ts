@@ -5,6 +5,7 @@
  * was already loaded: a failed re-import keeps the previous measurement beside its error.
  */
 import { groupIntoSeries } from '../io/groupIntoSeries';
+import { WorkerLostError } from '../worker/errors';
 import type { ImportOverrides } from '../io/types';
 import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
 import { mergeFileSettings } from './settings';
@@ -44,16 +45,27 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       return entry ? { files: { ...s.files, [id]: { ...entry, ...change } } } : {};
     });
 
+  /** Reads a file in a worker; when the worker stops mid-file, reads it once more from the kept bytes. */
+  async function readFile(entry: FileEntry, overrides: ImportOverrides, id: string) {
+    const ask = async () => deps.client.request('import', { fileName: entry.fileName, data: await entry.source.arrayBuffer(), overrides }, {
+      onProgress: (fraction) => patch(id, { progress: fraction }),
+    });
+    try {
+      return await ask();
+    } catch (err) {
+      if (!(err instanceof WorkerLostError)) throw err;
+      set({ notice: `The analysis worker stopped while reading ${entry.fileName}; it was started again and the file is read once more.` });
+      return ask();
+    }
+  }
+
   async function importOne(id: string, overrides: ImportOverrides): Promise<void> {
     const entry = get().files[id];
     if (!entry) return;
     patch(id, { status: 'importing', progress: 0 });
     try {
-      const data = await entry.source.arrayBuffer();
       const cellBefore = resolveCell(get(), entry.group).cell;
-      const out = await deps.client.request('import', { fileName: entry.fileName, data, overrides }, {
-        onProgress: (fraction) => patch(id, { progress: fraction }),
-      });
+      const out = await readFile(entry, overrides, id);
       patch(id, { status: 'ready', progress: 1, error: null, measurement: out.measurement, warnings: out.warnings, sha256: out.sha256, overrides });
       applyRemembered(id);
       if (get().selectedFileId === null) get().selectFile(id);

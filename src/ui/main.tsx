@@ -1,6 +1,6 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { startApp } from '../state/app';
+import { crashAnalysisWorkers, startApp } from '../state/app';
 import { App } from './App';
 import './styles.css';
 
@@ -12,4 +12,6 @@ if (root) {
     </StrictMode>,
   );
   void startApp();
+  // The browser tests stop the workers mid-run to check that the work resumes; only with ?test-hooks.
+  if (new URLSearchParams(location.search).has('test-hooks')) (window as unknown as { halfwaveTestHooks: unknown }).halfwaveTestHooks = { crashAnalysisWorkers };
 }

@@ -50,8 +50,8 @@ async function makeWorkerEntry(): Promise<WorkerLike> {
       const copy = structuredClone(msg, { transfer }) as PageToWorker;
       setTimeout(() => scope.onmessage?.({ data: copy } as MessageEvent<PageToWorker>), 0);
     },
-    addEventListener(_type, listener) {
-      pageListeners.push(listener);
+    addEventListener(type: string, listener: (e: never) => void) {
+      if (type === 'message') pageListeners.push(listener as (e: MessageEvent<WorkerToPage>) => void);
     },
     terminate() {},
   };

@@ -8,7 +8,7 @@
  * fallback where workers are unavailable; inThreadClient.ts). Both run the same handler table.
  * This file does not import the handlers, so the page bundle stays free of the analysis code.
  */
-import { CancelledError, reviveError } from './errors';
+import { CancelledError, reviveError, WorkerLostError } from './errors';
 import { inputTransferables, type PageToWorker, type RequestInput, type RequestOutput, type RequestType, type WorkerRequest, type WorkerToPage } from './protocol';
 
 export interface RequestOptions {
@@ -23,12 +23,18 @@ export interface AnalysisClient {
   /** 'worker' or 'in-thread', for the status line. */
   readonly transport: 'worker' | 'in-thread';
   dispose(): void;
+  /** Called when the worker stops on its own (crash, out of memory); pending requests then reject with WorkerLostError. */
+  onLost?: (listener: () => void) => void;
+  /** Stops the worker as a crash would (pending requests reject with WorkerLostError); for recovery tests. */
+  crash?: () => void;
 }
 
 /** The parts of a Worker the client uses, so tests can pass a fake. */
 export interface WorkerLike {
   postMessage(message: PageToWorker, transfer: Transferable[]): void;
   addEventListener(type: 'message', listener: (event: MessageEvent<WorkerToPage>) => void): void;
+  /** 'error' fires when the worker dies of an uncaught error (the browser then drops it). */
+  addEventListener(type: 'error', listener: (event: Event) => void): void;
   terminate(): void;
 }
 
@@ -40,7 +46,22 @@ interface Pending {
 
 export function createWorkerClient(worker: WorkerLike): AnalysisClient {
   const pending = new Map<number, Pending>();
+  const lostListeners: Array<() => void> = [];
+  let lost = false;
   let nextId = 1;
+  const lose = () => {
+    if (lost) return;
+    lost = true;
+    worker.terminate();
+    for (const entry of pending.values()) entry.reject(new WorkerLostError());
+    pending.clear();
+    for (const l of lostListeners) l();
+  };
+  worker.addEventListener('error', (event) => {
+    // An error event with no request to blame means the worker itself is gone.
+    event.preventDefault?.();
+    lose();
+  });
   worker.addEventListener('message', (event) => {
     const msg = event.data;
     const entry = pending.get(msg.requestId);
@@ -59,6 +80,7 @@ export function createWorkerClient(worker: WorkerLike): AnalysisClient {
       const requestId = nextId++;
       return new Promise((resolve, reject) => {
         if (options.signal?.aborted) return reject(new CancelledError());
+        if (lost) return reject(new WorkerLostError());
         const entry: Pending = { resolve: resolve as (v: unknown) => void, reject };
         if (options.onProgress) entry.onProgress = options.onProgress;
         pending.set(requestId, entry);
@@ -76,5 +98,9 @@ export function createWorkerClient(worker: WorkerLike): AnalysisClient {
       pending.clear();
       worker.terminate();
     },
+    onLost: (listener) => {
+      lostListeners.push(listener);
+    },
+    crash: lose,
   };
 }

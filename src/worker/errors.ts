@@ -17,6 +17,18 @@ export class CancelledError extends Error {
   }
 }
 
+/**
+ * The worker that was doing the request stopped (it crashed, ran out of memory, or was shut down)
+ * before it answered; the request itself may well be fine and can be sent again.
+ */
+export class WorkerLostError extends Error {
+  readonly code = 'WORKER_LOST';
+  constructor(message = 'the analysis worker stopped before it answered') {
+    super(message);
+    this.name = 'WorkerLostError';
+  }
+}
+
 interface ErrorFields {
   name?: unknown;
   code?: unknown;

@@ -13,11 +13,12 @@ export function workerCount(hardwareConcurrency: number | undefined): number {
 export function spawnAnalysisClient(): AnalysisClient {
   if (typeof Worker === 'undefined') return lazyInThreadClient();
   try {
-    const clients = Array.from({ length: workerCount(globalThis.navigator?.hardwareConcurrency) }, (_, k) => {
+    // Factories, so the pool can start a worker again when one stops on its own.
+    const factories = Array.from({ length: workerCount(globalThis.navigator?.hardwareConcurrency) }, (_, k) => () => {
       const worker = new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name: `halfwave-analysis-${k + 1}` });
       return createWorkerClient(worker as unknown as WorkerLike);
     });
-    return clients.length === 1 ? (clients[0] as AnalysisClient) : createPoolClient(clients);
+    return createPoolClient(factories);
   } catch {
     return lazyInThreadClient();
   }

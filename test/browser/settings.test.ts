@@ -63,6 +63,7 @@ describe('changing settings, exporting, saving', () => {
 
   it('downloads the results sheet of the selected series as CSV, on the chosen scale', async () => {
     const page = app.page;
+    await page.getByTestId('export-scope').selectOption('this');
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('export-csv').click()]);
     expect(download.suggestedFilename()).toMatch(/^halfwave-results-.+\.csv$/);
     const text = await readFile(await download.path(), 'utf8');

@@ -3,7 +3,8 @@
  * results can say so next to the number: D on the default area or concentration, Γ on the default
  * area, k° with Ru left unset while ΔEp grows with the scan rate (uncompensated resistance widens
  * ΔEp exactly as slow electron transfer does, Bard & Faulkner, Electrochemical Methods 2nd ed.
- * (2001) §6.5, from memory), and n.
+ * (2001) §6.5, from memory). The electron count's origin is shown with the cell, not warned about:
+ * n = 1 is the common case and its effect (|Ep − Ep/2|) is checked by the series itself.
  * The ΔEp growth that counts as "grows" is 10/n mV over the series (common practice, no source).
  */
 import { formatMillivolts } from '../units';
@@ -37,7 +38,6 @@ export function defaultsUsed(key: string, cell: ResolvedCell, series: SeriesAnal
   if (isDefault(cell, 'concentrationMolPerCm3') && cell.concentrationMolPerCm3 !== null && hasD) {
     used.push({ field: 'concentrationMolPerCm3', value: `${cell.concentrationMolPerCm3 * 1e6} mM`, affects: ['D', 'k°'] });
   }
-  if (isDefault(cell, 'electronCount') && (hasD || hasGamma)) used.push({ field: 'electronCount', value: `n = ${cell.electronCount}`, affects: ['D', 'Γ', 'k°'] });
   const rise = deltaEpRise(series);
   if (isDefault(cell, 'ruOhm') && cell.ruOhm === 0 && rise && rise.riseV > 0.01 / cell.electronCount && hasK0) {
     used.push({ field: 'ruOhm', value: 'Ru = 0 Ω (not given)', affects: ['k°'] });
@@ -50,6 +50,6 @@ function messageOf(u: DefaultUsed, rise: ReturnType<typeof deltaEpRise>): string
   if (u.field === 'ruOhm' && rise) {
     return `Ru is not set, while ΔEp grows from ${formatMillivolts(rise.fromV)} to ${formatMillivolts(rise.toV)} with the scan rate: uncompensated resistance widens ΔEp as slow kinetics do, so k° may be too low (a lower bound at best); give the cell's Ru`;
   }
-  const what = u.field === 'areaCm2' ? 'electrode area' : u.field === 'concentrationMolPerCm3' ? 'concentration' : 'electron count';
+  const what = u.field === 'areaCm2' ? 'electrode area' : 'concentration';
   return `${u.affects.join(', ')} rest on the default ${what} (${u.value}), which no file states and nobody entered`;
 }

@@ -85,7 +85,7 @@ export function CellPanel() {
         <SelectField label="Show and export vs" value={displayReference} options={refOptions} testId="display-reference"
           onChange={(v) => void halfwaveActions().updateSettings((x) => ({ ...x, reference: { ...x.reference, displayReference: v } }))} />
       </div>
-      <p className={scale.ok ? 'hint' : 'warn-text'} data-testid="scale-basis">{scale.basis}</p>
+      <p className={scale.ok && !/typical/.test(scale.basis) ? 'hint' : 'warn-text'} data-testid="scale-basis">{scale.basis}</p>
       {fileNote ? <p className="hint">{fileNote}</p> : null}
     </section>
   );

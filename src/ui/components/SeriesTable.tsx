@@ -33,7 +33,7 @@ function rows(c: SeriesCouple): [string, string][] {
 
 export function SeriesTable({ result }: { result: SeriesAnalysis }) {
   return (
-    <div className="series-tables" data-testid="series-table">
+    <div className="series-tables" data-testid="series-table" data-d-first={result.couples[0]?.diffusion?.diffusionCm2PerS ?? undefined}>
       {result.couples.map((c) => (
         <table key={c.index} className="data kv">
           <caption>Couple {c.index + 1} · {c.points.length} scan rates</caption>

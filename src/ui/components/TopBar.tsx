@@ -40,7 +40,7 @@ export function TopBar() {
       <div className="group" role="group" aria-label="Session">
         <span className="group-label">Session</span>
         <button type="button" data-testid="save-session" onClick={() => void save(false)} title="Settings, file names and checksums">Save</button>
-        <button type="button" onClick={() => void save(true)} title="Also embeds the original files">Save + data</button>
+        <button type="button" data-testid="save-session-data" onClick={() => void save(true)} title="Also embeds the original files">Save + data</button>
         <button type="button" onClick={() => sessionInput.current?.click()} title="Replaces the workspace with the session (Undo brings it back)">Open…</button>
         <button type="button" data-testid="new-workspace" onClick={() => act.newWorkspace()} title="Clears every file and series (Undo brings them back)">New</button>
         <input ref={sessionInput} type="file" accept=".json,application/json" className="visually-hidden" data-testid="session-input" aria-label="Open a session file"
