@@ -9,6 +9,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { sha256Hex } from '../core/provenance/sha256';
 import { importVoltammogram, ImportError } from '../io';
+import { naturalCompare } from '../io/naturalOrder';
 import type { ImportOverrides, ImportResult, ImportWarning, Measurement } from '../io';
 import { UsageError } from './errors';
 
@@ -42,7 +43,6 @@ export interface InputsRead {
   outcomes: InputOutcome[];
 }
 
-const natural = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' }).compare;
 
 /** Expands folders into their files (not recursive; hidden files and *.md notes left out). */
 export function expandPaths(paths: string[]): string[] {
@@ -70,7 +70,7 @@ export function expandInputs(paths: string[]): Array<{ path: string; folder: str
     const names = readdirSync(p)
       .filter((n) => !n.startsWith('.') && !/\.md$/i.test(n))
       .filter((n) => statSync(join(p, n)).isFile())
-      .sort(natural);
+      .sort(naturalCompare);
     if (!names.length) throw new UsageError(`the folder "${p}" holds no data files`);
     const folder = basename(p.replace(/[\\/]+$/, '')) || p;
     out.push(...names.map((n) => ({ path: join(p, n), folder })));

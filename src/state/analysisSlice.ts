@@ -56,12 +56,14 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
 
     async updateFileSettings(id, change) {
       record();
-      const before = get().fileSettings[id]?.peakWindows.length ?? 0;
+      const before = JSON.stringify(get().fileSettings[id]?.peakWindows ?? []);
       set((s) => ({ fileSettings: { ...s.fileSettings, [id]: change(s.fileSettings[id] ?? emptyFileSettings) } }));
       await get().analyzeFile(id);
-      // A new window that holds no peak is kept as empty (the analysis says so); tell the user now.
+      // A window that was added or moved and holds no peak is kept as empty (the analysis says so); tell the user now.
       const empty = (get().results[id]?.run?.warnings ?? []).find((w) => /peak window.*no peak above the noise threshold/.test(w.message));
-      if (empty && (get().fileSettings[id]?.peakWindows.length ?? 0) > before) set({ notice: `That window holds no peak above the noise threshold, so it is kept as empty and the peaks found automatically stay (${empty.message}).` });
+      if (empty && JSON.stringify(get().fileSettings[id]?.peakWindows ?? []) !== before) {
+        set({ notice: `That window holds no peak above the noise threshold, so it is kept as empty and the peaks found automatically stay (${empty.message}).` });
+      }
     },
 
     async updateSeriesCell(group, change) {

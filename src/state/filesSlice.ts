@@ -5,6 +5,7 @@
  * was already loaded: a failed re-import keeps the previous measurement beside its error.
  */
 import { groupIntoSeries } from '../io/groupIntoSeries';
+import { naturalCompare } from '../io/naturalOrder';
 import { WorkerLostError } from '../worker/errors';
 import type { ImportOverrides } from '../io/types';
 import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
@@ -155,7 +156,9 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     async addUpload(batches) {
       const taken = new Set(Object.values(get().files).map((f) => f?.group));
       const plan: Array<{ group: string; inputs: FileInput[] }> = [];
-      for (const b of batches) {
+      for (const batch of batches) {
+        // Natural order, as the command line lists a folder: 20 mV/s before 100 mV/s.
+        const b = { ...batch, inputs: [...batch.inputs].sort((x, y) => naturalCompare(x.name, y.name)) };
         for (const g of groupIntoSeries(b.inputs.map((i) => ({ name: i.name, folder: b.folder })))) {
           let group = g.key;
           for (let k = 2; taken.has(group); k++) group = `${g.key} (${k})`;

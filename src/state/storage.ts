@@ -5,7 +5,7 @@
  * Failures (quota, private mode) reject with the platform's error; the caller reports what was not
  * saved and keeps working, and nothing already saved is removed by a failed write.
  */
-import { createStore, del, get, keys, set, type UseStore } from 'idb-keyval';
+import { del, get, keys, set, type UseStore } from 'idb-keyval';
 
 export interface StorageAdapter {
   read(key: string): Promise<string | null>;
@@ -53,7 +53,28 @@ export function memoryStorageAdapter(initial: Record<string, string> = {}): Stor
   return adapter;
 }
 
-export function indexedDbStorageAdapter(store: UseStore = createStore('halfwave', 'workspace')): StorageAdapter {
+/**
+ * idb-keyval's store, opened so that a database that exists without our object store (made by
+ * another page of the origin, or an older version) is upgraded instead of failing every call.
+ */
+export function workspaceStore(dbName = 'halfwave', storeName = 'workspace'): UseStore {
+  let db: Promise<IDBDatabase> | null = null;
+  const open = (version?: number): Promise<IDBDatabase> => new Promise<IDBDatabase>((resolve, reject) => {
+    const req = version === undefined ? indexedDB.open(dbName) : indexedDB.open(dbName, version);
+    req.onupgradeneeded = () => {
+      if (!req.result.objectStoreNames.contains(storeName)) req.result.createObjectStore(storeName);
+    };
+    req.onsuccess = () => resolve(req.result);
+    req.onerror = () => reject(req.error ?? new Error(`cannot open the browser database ${dbName}`));
+  }).then((d) => {
+    if (d.objectStoreNames.contains(storeName)) return d;
+    d.close();
+    return open(d.version + 1);
+  });
+  return (mode, callback) => (db ??= open()).then((d) => callback(d.transaction(storeName, mode).objectStore(storeName)));
+}
+
+export function indexedDbStorageAdapter(store: UseStore = workspaceStore()): StorageAdapter {
   return {
     read: async (key) => (await get<string>(key, store)) ?? null,
     write: (key, text) => set(key, text, store),

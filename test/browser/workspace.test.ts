@@ -56,17 +56,24 @@ describe('uploads survive a reload, and stopped workers', () => {
     await page.getByTestId('file-input').setInputFiles(await writeRun([['kept_50mVs.csv', 0.05], ['kept_200mVs.csv', 0.2]]));
     await waitForFiles(page, 2);
     const before = { names: await fileNames(page), eHalf: await coupleCells(page, 'cell-ehalf') };
-    // Autosave runs shortly after the last change; wait until the files' bytes are stored.
-    await page.waitForFunction(async () => {
+    // Autosave runs shortly after the last change; wait until the stored session lists just these
+    // files and their bytes are stored beside it (page.evaluate awaits the check; polled from here).
+    const stored = () => page.evaluate(async (names) => {
+      // Never create the app's database from here: only look once the app has made it.
+      if (!(await indexedDB.databases()).some((d) => d.name === 'halfwave')) return false;
       const open = indexedDB.open('halfwave');
       const db: IDBDatabase = await new Promise((res, rej) => ((open.onsuccess = () => res(open.result)), (open.onerror = rej)));
-      const keys: IDBValidKey[] = await new Promise((res) => {
-        const req = db.transaction('workspace').objectStore('workspace').getAllKeys();
-        req.onsuccess = () => res(req.result);
-      });
+      if (!db.objectStoreNames.contains('workspace')) return (db.close(), false);
+      const store = db.transaction('workspace').objectStore('workspace');
+      const [keys, text] = await Promise.all([
+        new Promise<IDBValidKey[]>((res) => { const r = store.getAllKeys(); r.onsuccess = () => res(r.result); }),
+        new Promise<unknown>((res) => { const r = store.get('halfwave.autosave.v2'); r.onsuccess = () => res(r.result); }),
+      ]);
       db.close();
-      return keys.filter((k) => String(k).startsWith('bytes:')).length === 2 && keys.includes('halfwave.autosave.v2');
-    }, null, { timeout: 30_000, polling: 250 });
+      const saved = typeof text === 'string' ? (JSON.parse(text) as { files: Array<{ fileName: string }> }).files.map((f) => f.fileName) : [];
+      return JSON.stringify(saved) === JSON.stringify(names) && keys.filter((k) => String(k).startsWith('bytes:')).length === names.length;
+    }, before.names);
+    await expect.poll(stored, { timeout: 30_000, interval: 250 }).toBe(true);
     await page.reload();
     await waitForFiles(page, 2);
     expect(await fileNames(page)).toEqual(before.names);
@@ -130,7 +137,7 @@ describe('a full storage', () => {
 describe('sessions round-trip exactly', () => {
   it('save with data, open in a fresh page: the same files, series, windows, scale and numbers; opening replaces the workspace', async () => {
     const first = await openApp();
-    let sessionPath = '';
+    const sessionPath = join(dir, 'session.json');
     let before: { names: string[]; eHalf: number[]; dep: number[] };
     try {
       const page = first.page;
@@ -141,7 +148,6 @@ describe('sessions round-trip exactly', () => {
       await waitForAnalysis(page);
       before = { names: await fileNames(page), eHalf: await coupleCells(page, 'cell-ehalf'), dep: await coupleCells(page, 'cell-dep') };
       const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('save-session-data').click()]);
-      sessionPath = join(dir, 'session.json');
       await writeFile(sessionPath, await readFile(await download.path()));
     } finally {
       await first.close();
