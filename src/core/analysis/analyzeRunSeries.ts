@@ -33,7 +33,7 @@ export function analyzeRunSeries(key: string, cell: ResolvedCell, method: Resolv
     {
       electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: cell.concentrationMolPerCm3, temperatureK: cell.temperatureK,
       alpha: cell.alpha, transferElectronCount: cell.transferElectronCount, diffusionRatio: cell.diffusionRatio, diffusionCm2PerS: cell.diffusionCm2PerS,
-      cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV,
+      formalPotentialV: cell.formalPotentialV, ruOhm: cell.ruOhm, cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
     },
   );
   const warnings: RunWarning[] = analysis.warnings.map((w) => ({ code: 'SERIES', series: key, message: w.message }));

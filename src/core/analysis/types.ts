@@ -43,7 +43,7 @@ export interface CycleAnalysis {
 }
 
 /** Options of a standalone trace analysis: the run's method options, n and T, and the trace's own choices. */
-export type AnalyzeVoltammogramOptions = Omit<MethodOptions, 'seriesCycle' | 'matchToleranceV'>
+export type AnalyzeVoltammogramOptions = Omit<MethodOptions, 'seriesCycle' | 'matchToleranceV' | 'psiMethod'>
   & Pick<CellValues, 'temperatureK' | 'electronCount'>
   & TraceChoices & {
     /** Sign convention of `currentA` in the input. @default 'iupac' */

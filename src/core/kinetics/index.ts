@@ -8,3 +8,5 @@ export * from './followUpRateConstant';
 export * from './forwardPeakRateConstant';
 export * from './correctedIrreversibleRateConstant';
 export * from './nicholsonPsiAtAlpha';
+export * from './jointFollowUpRateConstant';
+export * from './followUpCurrentFunction';

@@ -8,3 +8,6 @@ export * from './doubleLayerCapacitance';
 export * from './chargingCurrentGap';
 export * from './classifySeriesCouple';
 export type * from './seriesPoint';
+export * from './lavironIrreversibleWave';
+export * from './ohmicWidening';
+export * from './followUpSignature';
