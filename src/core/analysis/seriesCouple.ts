@@ -45,6 +45,9 @@ function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>, followU
   if (followUp) {
     return { ...refined, category: 'chemically-coupled', label: 'chemically coupled (product consumed by a follow-up reaction)', reasons: [...followUp.evidence, ...refined.reasons] };
   }
+  if (c.ohmic?.limitsK0 && refined.category === 'quasi-reversible') {
+    return { ...refined, category: 'inconclusive', label: 'not classified (ΔEp widens with v, but ohmic drop explains it as well as slow electron transfer)', reasons: [...refined.reasons, c.ohmic.text] };
+  }
   if (c.regime !== 'surface' || c.kineticClass !== 'quasi-reversible' || refined.category !== 'adsorbed') return refined;
   // The slowest file of a slow film looks Nernstian; the series shows the Laviron regime.
   return { ...refined, label: 'surface-confined (adsorbed; slow electron transfer, Laviron)', reasons: [...refined.reasons, regimeLine] };

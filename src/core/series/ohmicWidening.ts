@@ -17,7 +17,7 @@
  *   Nernstian couple with 300 Ω, corrected, still widens from 62 to 75 mV over 0.1–2 V/s).
  * Rules (ours; common practice, no source): ΔEp grows when the fastest file's exceeds the
  *   slowest's by more than 2/n mV (25 °C). With Ru given, k° is a lower bound when at a widening
- *   file the drop |Δi|·Ru is at least half the widening. Without Ru, k° is a lower bound when every
+ *   file that widens most the drop |Δi|·Ru is at least half the widening. Without Ru, k° is a lower bound when every
  *   file stays within n·ΔEp ≤ 72 mV (25 °C).
  */
 import { STANDARD_TEMPERATURE_K } from '../constants';
@@ -45,7 +45,7 @@ export interface OhmicWideningResult {
   ruOhm: number;
   perFile: Array<{ fileIndex: number; wideningV: number; ohmicDropV: number | null }>;
   grows: boolean;
-  /** Largest drop/widening over the widening files; null without Ru. */
+  /** Drop over widening at the file that widens most; null without Ru or widening. */
   ohmicShare: number | null;
   /** Ru (Ω) that alone would explain the widening of the fastest file. */
   explainingRuOhm: number | null;
@@ -69,9 +69,8 @@ export function ohmicWidening(files: OhmicWideningFile[], options: OhmicWidening
   const grows = !!first && !!last && last !== first && (last.deltaEpV - first.deltaEpV) * scale > 0.002;
   const lastFile = perFile[perFile.length - 1];
   const explainingRuOhm = lastFile && last && lastFile.wideningV > 0 && Math.abs(last.peakCurrentSpanA) > 0 ? lastFile.wideningV / Math.abs(last.peakCurrentSpanA) : null;
-  const widening = perFile.filter((f) => f.wideningV * scale > 0.001);
-  const shares = widening.flatMap((f) => (f.ohmicDropV === null ? [] : [f.ohmicDropV / f.wideningV]));
-  const ohmicShare = shares.length ? Math.max(...shares) : null;
+  const widest = perFile.reduce<(typeof perFile)[number] | null>((a, f) => (a === null || f.wideningV > a.wideningV ? f : a), null);
+  const ohmicShare = widest && widest.ohmicDropV !== null && widest.wideningV * scale > 0.001 ? widest.ohmicDropV / widest.wideningV : null;
   const nearReversible = byRate.every((f) => f.deltaEpV * scale <= 0.072);
   const limitsK0 = grows && (ruOhm > 0 ? (ohmicShare ?? 0) >= 0.5 : nearReversible);
   return { ruOhm, perFile, grows, ohmicShare, explainingRuOhm, limitsK0, text: describe(grows, ruOhm, ohmicShare, explainingRuOhm, limitsK0, last, lastFile) };
@@ -83,8 +82,8 @@ function describe(grows: boolean, ruOhm: number, share: number | null, explainin
   if (ruOhm > 0) {
     const drop = `the iR correction (Ru = ${ruOhm} Ω) moved the peaks apart by ${mv(lastFile.ohmicDropV ?? 0)}`;
     return limits
-      ? `${at}; ${drop}, ${((share ?? 0) * 100).toFixed(0)} % of the widening at most: a correction after the measurement leaves part of that drop, so the widening may be ohmic and k° is only a lower bound`
-      : `${at}; ${drop}, at most ${((share ?? 0) * 100).toFixed(0)} % of the widening: the widening is taken as kinetic`;
+      ? `${at}; ${drop}, ${((share ?? 0) * 100).toFixed(0)} % of the widening: a correction after the measurement leaves part of that drop, so the widening may be ohmic and k° is only a lower bound`
+      : `${at}; ${drop}, ${((share ?? 0) * 100).toFixed(0)} % of the widening: the widening is taken as kinetic`;
   }
   const ru = explaining === null ? '' : `; an uncompensated resistance of ${Number(explaining.toPrecision(2))} Ω alone would explain it`;
   return limits
