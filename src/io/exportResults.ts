@@ -127,8 +127,11 @@ export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta
   ];
   const withCd = result.series.filter((s) => s.capacitance);
   if (withCd.length) {
-    parts.push(['# table: double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'intercept_A', 'r2']),
-      ...withCd.map((s) => row([s.key, s.capacitance?.capacitanceFPerCm2, s.capacitance?.fit?.intercept, s.capacitance?.fit?.r2]))]);
+    parts.push(['# table: double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'Cd_ci95_low', 'Cd_ci95_high', 'model', 'faradaic_tail_A_per_sqrt_V_per_s', 'line_intercept_A', 'line_r2', 'warning']),
+      ...withCd.map((s) => {
+        const c = s.capacitance;
+        return row([s.key, c?.capacitanceFPerCm2, c?.capacitanceIntervalFPerCm2?.[0], c?.capacitanceIntervalFPerCm2?.[1], c?.model, c?.faradaicTailAPerSqrtVPerS, c?.fit?.intercept, c?.fit?.r2, c?.warning]);
+      })]);
   }
   return `${parts.map((p) => p.join('\n')).join('\n\n')}\n`;
 }

@@ -130,7 +130,11 @@ export function runContract(r: AnalyzeRunResult, givenAs: string[] = []) {
 }
 
 function capacitanceOf(s: RunSeriesResult | undefined) {
-  return s?.capacitance ? { Cd: s.capacitance.capacitanceFPerCm2, pointwise: s.capacitance.pointCapacitancesFPerCm2 } : null;
+  const c = s?.capacitance;
+  return c ? {
+    Cd: c.capacitanceFPerCm2, pointwise: c.pointCapacitancesFPerCm2, CdCI95: c.capacitanceIntervalFPerCm2, model: c.model,
+    faradaicTail: c.faradaicTailAPerSqrtVPerS, warning: c.warning,
+  } : null;
 }
 
 export type RunContract = ReturnType<typeof runContract>;

@@ -19,9 +19,11 @@ function capacitanceOf(files: RunFileResult[], cell: ResolvedCell, warnings: Run
     warnings.push({ code: 'CAPACITANCE', series: key, message: 'double-layer capacitance needs the electrode area' });
     return null;
   }
-  return doubleLayerCapacitance({
+  const result = doubleLayerCapacitance({
     scanRatesVPerS: gaps.map((f) => f.scanRateVPerS), gapCurrentsA: gaps.map((f) => Math.max(0, f.chargingGapA as number)), areaCm2: cell.areaCm2,
   });
+  if (result.warning) warnings.push({ code: 'CAPACITANCE', series: key, message: `double-layer capacitance: ${result.warning}` });
+  return result;
 }
 
 /** `files`: the results of the series' files (internal-standard files are left out here). */
