@@ -4,7 +4,8 @@
  * from (name, size, SHA-256, scan-rate source, detected layout), so a number can be traced back.
  * CSV layout (our own): '#'-prefixed header lines, then tables separated by a blank line and a
  * '# table: …' line: peaks, couples (one row per file × cycle × couple), k0 per file, series (one row
- * per series × couple), double-layer capacitance per series when measured.
+ * per series × couple), left-out points and window edges when there are any, double-layer
+ * capacitance per series when measured.
  * Units are in the column names. Signed currents follow the run's sign convention; peak heights
  * and couple currents are positive magnitudes. Every α is named: alpha_c_cathodic is αc (of the
  * reduction O + ne⁻ → R), alpha_n_forward_wave is α·nₐ of the first-sweep wave.
@@ -60,6 +61,18 @@ function peakTable(r: AnalyzeRunResult): string[] {
         out.push(row([f.fileName, c.index, p.direction, p.potentialV, p.heightA, currentInConvention(p.rawCurrentA, r.convention),
           currentInConvention(p.baselineCurrentA, r.convention), p.halfPeakPotentialV, p.halfPeakWidthV, p.fwhmV, p.chargeC, p.confidence, p.baseline.description]));
       }
+    }
+  }
+  return out;
+}
+
+/** Points left out of the analysis (spikes) and sweeps that end in a breakdown current, one row each. */
+function notedPointsTable(r: AnalyzeRunResult): string[] {
+  const out = [row(['file', 'cycle', 'what', 'E_from_V', 'E_to_V', 'direction', 'i_A', 'point'])];
+  for (const f of r.files) {
+    for (const p of f.analysis.spikes ?? []) out.push(row([f.fileName, '', 'isolated bad point left out', p.potentialV, p.potentialV, '', currentInConvention(p.currentA, r.convention), p.index]));
+    for (const c of f.analysis.cycles) {
+      for (const e of c.windowEdges ?? []) out.push(row([f.fileName, c.index, 'breakdown or catalytic current at the window edge', e.fromV, e.toV, e.direction, currentInConvention(e.currentA, r.convention), '']));
     }
   }
   return out;
@@ -125,6 +138,8 @@ export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta
     ['# table: k0 per file', ...rateTable(result)],
     ['# table: series', row(SERIES_COLUMNS), ...result.series.flatMap((s) => s.analysis.couples.map((c) => row(seriesRow(s.key, c))))],
   ];
+  const noted = notedPointsTable(result);
+  if (noted.length > 1) parts.push(['# table: left-out points and window edges', ...noted]);
   const withCd = result.series.filter((s) => s.capacitance);
   if (withCd.length) {
     parts.push(['# table: double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'Cd_ci95_low', 'Cd_ci95_high', 'model', 'faradaic_tail_A_per_sqrt_V_per_s', 'line_intercept_A', 'line_r2', 'warning']),

@@ -26,8 +26,10 @@ function fileEntry(f: RunFileResult, givenAs: string, r: AnalyzeRunResult) {
     sizeBytes: f.provenance.sizeBytes ?? null,
     sha256: f.provenance.sha256 ?? null,
     role: f.role,
+    spikes: (f.analysis.spikes ?? []).map((p) => ({ index: p.index, E: p.potentialV, i: currentInConvention(p.currentA, r.convention) })),
     cycles: f.analysis.cycles.map((c) => ({
       index: c.index,
+      windowEdges: (c.windowEdges ?? []).map((e) => ({ direction: e.direction, fromE: e.fromV, toE: e.toV, i: currentInConvention(e.currentA, r.convention), atSwitch: e.atSwitch, label: 'breakdown or catalytic current at the window edge' })),
       peaks: c.peaks.map((p) => ({
         direction: p.direction, E: p.potentialV, ip: p.heightA,
         iRaw: currentInConvention(p.rawCurrentA, r.convention), confidence: p.confidence, charge: num(p.chargeC),

@@ -11,6 +11,7 @@ import type { PeakResult, PeakWindow } from '../peaks/peakTypes';
 import type { CycleRange } from '../types';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { locatePeaksInSweep, type PeakCandidate } from '../peaks/locatePeaksInSweep';
+import { isAtWindowEdge, windowEdgeCurrent, type WindowEdgeCurrent } from '../peaks/windowEdgeCurrent';
 import { measurePeak } from '../peaks/measurePeak';
 import { baselineForPeak, type BaselineRef } from '../baseline/baselineForPeak';
 import { chooseBaseline, type BaselineContext } from '../baseline/chooseBaseline';
@@ -24,7 +25,8 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const warnings: AnalysisWarning[] = [];
   const warn = (code: AnalysisWarning['code'], message: string) => warnings.push({ code, message, cycle: cycle.index });
   const segIdx = sig.segments.flatMap((s, k) => (s.cycle === cycle.index ? [k] : []));
-  const candidates = segIdx.flatMap((k) => locateOnSweep(sig, k, cycle.index, o, thresholdA, warn));
+  const windowEdges: WindowEdgeCurrent[] = [];
+  const candidates = segIdx.flatMap((k) => locateOnSweep(sig, k, cycle.index, o, thresholdA, warn, windowEdges));
   const anodic = candidates.filter((c) => c.direction === 'anodic');
   const cathodic = candidates.filter((c) => c.direction === 'cathodic');
   const topProminence = Math.max(0, ...candidates.map((c) => c.prominenceA));
@@ -45,7 +47,7 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const drawn = new Map<PeakCandidate, BaselineRef>();
   const measured = new Map<PeakCandidate, PeakResult>();
   const ctx: BaselineContext = {
-    sig, ordered, partner, drawn, firstSegment: firstSeg, cycle: cycle.index, specs: o.baselines,
+    sig, ordered, partner, drawn, firstSegment: firstSeg, cycle: cycle.index, specs: o.baselines, edgeSweeps: new Map(windowEdges.map((e) => [e.segmentIndex, e.fromIndex])),
     defaults: { forwardBaseline: o.forwardBaseline, returnBaseline: o.returnBaseline }, wave: { temperatureK: o.temperatureK, electronCount: o.electronCount },
   };
   for (const cand of ordered) {
@@ -60,10 +62,10 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const peaks = ordered.flatMap((c) => (measured.has(c) ? [measured.get(c)!] : []));
   const couples = buildCouples(sig, peaks, firstSeg, o, warn);
   if (peaks.length === 0) warn('NO_PEAKS', `no peak rose ${thresholdA.toExponential(3)} A above its surroundings in cycle ${cycle.index}`);
-  return { index: cycle.index, peaks, couples, warnings };
+  return { index: cycle.index, peaks, couples, warnings, windowEdges };
 }
 
-function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedAnalyzeOptions, thresholdA: number, warn: (c: AnalysisWarning['code'], m: string) => void): PeakCandidate[] {
+function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedAnalyzeOptions, thresholdA: number, warn: (c: AnalysisWarning['code'], m: string) => void, edges: WindowEdgeCurrent[]): PeakCandidate[] {
   const seg = sig.segments[k]!;
   const direction = seg.direction === 'positive' ? 'anodic' : 'cathodic';
   if (seg.end - seg.start < 7) {
@@ -74,7 +76,14 @@ function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedA
   const windows: PeakWindow[] | null = forDirection.length ? forDirection.filter((w) => w.cycle === undefined || w.cycle === cycle) : null;
   const found = locatePeaksInSweep(sig, k, { windows, minProminenceA: thresholdA, locatingWindow: o.locatingSmoothing.window });
   if (windows && windows.length > 0 && found.length < windows.length) warn('WINDOW_EMPTY', `a ${direction} peak window on sweep ${k} holds fewer than 3 points`);
-  return found;
+  const edgePoints = Math.ceil(o.locatingSmoothing.window / 2);
+  const edge = windowEdgeCurrent(sig, k, thresholdA, { edgePoints, electronCount: o.electronCount });
+  if (!edge) return found;
+  edges.push(edge);
+  const kept = found.filter((c) => !isAtWindowEdge(sig, edge, c.index, edgePoints));
+  const dropped = found.length > kept.length ? '; the extremum there is not a peak' : '';
+  warn('WINDOW_EDGE', `breakdown or catalytic current at the window edge: ${direction} current still rising steeply from ${edge.fromV.toFixed(3)} V to the ${edge.atSwitch ? 'switching potential' : 'end of the record'} at ${edge.toV.toFixed(3)} V${dropped} (or a wave cut off by the switch)`);
+  return kept;
 }
 
 /** Pairs the measured peaks (weighted by height, so small features stay single) and builds the couples. */

@@ -94,7 +94,9 @@ export function resolveMethod(m: MethodOptions = {}): ResolvedMethod {
     seriesCycle: m.seriesCycle ?? 1,
     matchToleranceV: m.matchToleranceV ?? 0.12,
     psiMethod: m.psiMethod ?? 'table',
+    spikeFilter: m.spikeFilter ?? 'hampel',
   };
+  if (r.spikeFilter !== 'hampel' && r.spikeFilter !== 'off') throw new AnalysisError('BAD_OPTION', `spike filter must be hampel or off, got ${String(r.spikeFilter)}`);
   if (r.psiMethod !== 'table' && r.psiMethod !== 'lavagnini') throw new AnalysisError('BAD_OPTION', `ψ method must be table or lavagnini, got ${String(r.psiMethod)}`);
   if (!['linear', 'polynomial'].includes(r.forwardBaseline)) throw new AnalysisError('BAD_OPTION', `forward baseline must be linear or polynomial, got ${r.forwardBaseline}`);
   if (!['linear', 'polynomial', 'nicholson'].includes(r.returnBaseline)) throw new AnalysisError('BAD_OPTION', `return baseline must be linear, polynomial or nicholson, got ${r.returnBaseline}`);

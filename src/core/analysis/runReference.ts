@@ -107,8 +107,8 @@ export function describeSeriesReferences(files: RunFileResult[], output: Referen
     const at = `${kelvinToCelsius(temperatureK).toFixed(1)} °C`;
     const without = [...used].filter((id) => !['SHE', 'RHE', 'Fc'].includes(id) && referenceTemperatureShift(id, 0, temperatureK) === null);
     const withCoefficient = [...used].filter((id) => referenceTemperatureShift(id, 0, temperatureK) !== null);
-    if (without.length) warnings.push({ code: 'TEMPERATURE', message: `no published temperature coefficient for ${without.join(', ')}: its 25 °C value is used at ${at} and may be off by several mV` });
-    if (withCoefficient.length) warnings.push({ code: 'TEMPERATURE', message: `${withCoefficient.join(', ')} taken at ${at} with its published temperature dependence (see the reference basis)` });
+    if (without.length) warnings.push({ code: 'TEMPERATURE', message: `no published temperature coefficient for ${without.join(', ')}: the 25 °C values of the scales are used at ${at} and may be off by several mV` });
+    else if (withCoefficient.length) warnings.push({ code: 'TEMPERATURE', message: `${withCoefficient.join(', ')} taken at ${at} with its published temperature dependence (see the reference basis)` });
   }
   return { basis, warnings };
 }

@@ -120,6 +120,8 @@ export interface MethodOptions {
   matchToleranceV?: number;
   /** ψ from ΔEp (α = 0.5): Nicholson's 1965 table, interpolated, or the Lavagnini et al. 2004 fit. @default 'table' */
   psiMethod?: 'table' | 'lavagnini';
+  /** Isolated bad points: found by a Hampel test against a running median and left out ('hampel'), or kept ('off'). @default 'hampel' */
+  spikeFilter?: 'hampel' | 'off';
 }
 
 /** How results are reported. */

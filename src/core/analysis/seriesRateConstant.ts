@@ -105,6 +105,7 @@ export function seriesRateConstant(input: RateConstantInput, o: ResolvedSeriesOp
   const dBulk = o.diffusionCm2PerS ?? fitted;
   const empty = { k0CmPerS: null, rangeCmPerS: null, perFile: [], lowerBoundCmPerS: null, diffusionOxCm2PerS: null, diffusionSource: null };
   if (input.chemistry) return { ...empty, status: 'cannot-tell', reason: input.chemistry };
+  if (dBulk === null && input.reversible) return { ...empty, status: 'lower-bound', reason: 'the couple reads as reversible; without D there is no number for the bound' };
   if (dBulk === null) return { ...empty, status: 'cannot-tell', reason: 'no D: give the area and concentration, or D itself' };
   const ends = input.diffusion?.alphaEndsCm2PerS ?? null;
   const range = input.transfer.alphaCRange;

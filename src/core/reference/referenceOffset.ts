@@ -4,8 +4,10 @@
  * This is the one function the screen's display scale and the analysis run both use.
  * In: the two scale ids and a conversion context (pH, temperature, internal standard, user values).
  * Out: the offset (V), the plain-words basis of each scale, and whether a typical (not measured)
- *   value entered. Source: convertPotential.ts (conversion through SHE).
+ *   value entered. Source: convertPotential.ts (conversion through SHE); temperature coefficients
+ *   are applied only when both ends have one (referenceTemperature.ts).
  */
+import { STANDARD_TEMPERATURE_K } from '../constants';
 import { referenceVsShe, type ConversionContext } from './convertPotential';
 import type { ReferenceId } from './referenceElectrodes';
 
@@ -22,7 +24,17 @@ export interface ReferenceOffset {
 
 export function referenceOffset(from: ReferenceId, to: ReferenceId, context: ConversionContext = {}): ReferenceOffset {
   if (from === to) return { offsetV: 0, from, to, basis: [], typical: false };
-  const a = referenceVsShe(from, context);
-  const b = referenceVsShe(to, context);
+  let a = referenceVsShe(from, context);
+  let b = referenceVsShe(to, context);
+  // When one electrode has no published temperature dependence, correcting only the other would
+  // be half a correction: both stay at their 25 °C values then (the run warns).
+  if (a.at25Only || b.at25Only) {
+    const at25 = { ...context, temperatureK: STANDARD_TEMPERATURE_K };
+    if (!a.at25Only && TABULATED(from)) a = referenceVsShe(from, at25);
+    if (!b.at25Only && TABULATED(to)) b = referenceVsShe(to, at25);
+  }
   return { offsetV: a.eVsSheV - b.eVsSheV, from, to, basis: [a.basis, b.basis], typical: a.typical || b.typical };
 }
+
+/** Scales whose value is a tabulated 25 °C number (not SHE itself, RHE or the internal standard). */
+const TABULATED = (id: ReferenceId) => id !== 'SHE' && id !== 'RHE' && id !== 'Fc';

@@ -35,5 +35,7 @@ describe('reference electrodes away from 25 °C', () => {
     expect(referenceTemperatureShift('AgCl-sat', 0.197, 313.15)).toBeNull();
     expect(referenceTemperatureShift('SCE', 0.2412, 353.15)).toBeNull();
     expect(referenceVsShe('SCE', { temperatureK: 298.15 }).eVsSheV).toBe(0.2412);
+    // Half a correction would be worse than none: with saturated Ag/AgCl at one end, both stay at 25 °C.
+    expect(referenceOffset('AgCl-sat', 'AgCl-3M', { temperatureK: 303.15 }).offsetV).toBeCloseTo(0.197 - 0.21, 12);
   });
 });
