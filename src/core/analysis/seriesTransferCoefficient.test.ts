@@ -39,6 +39,9 @@ describe('αc and the forward wave', () => {
     expect(rel(measured.diffusion?.diffusionCm2PerS, 1e-5)).toBeLessThan(0.03);
     expect(rel(measured.rateConstant?.k0CmPerS, 1e-4)).toBeLessThan(0.05);
     expect(inRange(measured.rateConstant?.rangeCmPerS, 1e-4)).toBe(true);
+    // Wang eq. 2-5: the peaks move apart unequally unless α = 0.5, so E½ is not E°′; E°′ comes from the peak equation.
+    expect(measured.eHalfMeaning).toMatch(/not E°′/);
+    expect(Math.abs(measured.rateConstant!.formalPotentialV!)).toBeLessThan(0.003);
     const given = analyseSimulatedSeries(sim, rates, { ...cell, alpha: 0.3 }).couple;
     expect(given.alpha).toBe(0.3);
     expect(rel(given.diffusion?.diffusionCm2PerS, 1e-5)).toBeLessThan(0.02);
