@@ -109,10 +109,9 @@ function followUpCorrected(input: DiffusionInput, fu: SeriesFollowUp, o: Resolve
   // A slow electron transfer lowers the peak too: K(ψ) at αc is applied as well (the two effects
   // taken as independent, which holds when either is small).
   const alphaC = input.transfer.alphaC ?? 0.5;
-  const forwardAlpha = input.forward === 'cathodic' ? alphaC : 1 - alphaC;
-  const slowTransfer = (p: SeriesPoint) => (input.kineticClass === 'quasi-reversible' ? kineticRatio(p, o, forwardAlpha) : 1);
-  const atRate = (kf: number) => scaledFit(input.points, (p) => {
-    const k = slowTransfer(p);
+  const quasi = input.kineticClass === 'quasi-reversible';
+  const atRate = (kf: number, a = alphaC) => scaledFit(input.points, (p) => {
+    const k = quasi ? kineticRatio(p, o, input.forward === 'cathodic' ? a : 1 - a) : 1;
     return k === null ? null : (k * followUpCurrentFunction(kf / (nf * p.scanRateVPerS))) / RANDLES_SEVCIK_REVERSIBLE;
   });
   const base = { alphaUsed: null, alphaSource: null };
@@ -121,7 +120,9 @@ function followUpCorrected(input: DiffusionInput, fu: SeriesFollowUp, o: Resolve
     if (!head) return null;
     const rs = { temperatureK: o.temperatureK };
     const h = dOf(head, cell, rs);
-    const all = [h, ...(fu.rangePerS ?? []).flatMap((k) => { const f = atRate(k); return f ? [dOf(f, cell, rs)] : []; })].flatMap((x) => [x.d, ...x.ends]);
+    const alphaEnds = quasi ? (input.transfer.alphaCRange ?? []).map((a) => atRate(fu.rateConstantPerS!, a)) : [];
+    const fits = [...(fu.rangePerS ?? []).map((k) => atRate(k)), ...alphaEnds];
+    const all = [h, ...fits.flatMap((f) => (f ? [dOf(f, cell, rs)] : []))].flatMap((x) => [x.d, ...x.ends]);
     return { ...base, diffusionCm2PerS: h.d, intervalCm2PerS: h.ends.length ? [h.ends[0]!, h.ends[1]!] : null, rangeCm2PerS: range(all), form: 'follow-up-corrected',
       note: `follow-up reaction: each peak divided by F(λ)/0.4463, λ = k_f·RT/(nFv) with k_f = ${fu.rateConstantPerS.toPrecision(3)} 1/s (Nicholson & Shain 1964)${input.kineticClass === 'quasi-reversible' ? `, and by K(ψ) at αc = ${alphaC} for the slow electron transfer` : ''}` };
   }
