@@ -1,7 +1,7 @@
 /**
  * D of the bulk species of a series couple from the forward slope of |ip| against v^½, in the
- * form its kinetics call for, with a range that holds the slope's 95 % interval and what is not
- * known (αc, or k_f of a follow-up reaction).
+ * form its kinetics call for, with a range that holds the slope's 95 % interval, what is not
+ * known (αc, or k_f of a follow-up reaction) and ±2 % for the peak currents' baselines.
  * Forms and sources (Randles–Ševčík, series/randlesSevcik.ts):
  *   reversible: 0.4463 (Bard & Faulkner 2nd ed. §6.2);
  *   quasi-reversible: each |ip| divided first by K(ψ, α) (kineticPeakCurrentRatio.ts), ψ from ΔEp
@@ -61,9 +61,14 @@ function kineticRatio(p: SeriesPoint, o: ResolvedSeriesOptions, forwardAlpha: nu
   return kineticPeakCurrentRatio(psi.psi, forwardAlpha);
 }
 
+/**
+ * The range of the D values given, widened by ±2 % for the peak currents themselves: each is read
+ * above an extrapolated baseline, which the simulator tests put within −0.2 % to +0.7 % of ip
+ * (analyzeVoltammogram.simulated.test.ts); ±1 % of ip is ±2 % of D (our allowance).
+ */
 function range(values: number[]): [number, number] | null {
   const v = values.filter(Number.isFinite);
-  return v.length ? [Math.min(...v), Math.max(...v)] : null;
+  return v.length ? [0.98 * Math.min(...v), 1.02 * Math.max(...v)] : null;
 }
 
 function quasiReversible(input: DiffusionInput, o: ResolvedSeriesOptions, cell: Cell): SeriesDiffusion | null {
@@ -161,5 +166,5 @@ export function seriesDiffusion(input: DiffusionInput, o: ResolvedSeriesOptions)
     : input.kineticClass === 'inconclusive' ? 'kinetic class unclear: reversible form used'
       : fit.pointCount === 1 ? 'one scan rate only: D from a single peak through the origin, with no check of linearity' : null;
   const interval: [number, number] | null = h.ends.length ? [h.ends[0]!, h.ends[1]!] : null;
-  return { diffusion: { diffusionCm2PerS: h.d, intervalCm2PerS: interval, rangeCm2PerS: interval, form: 'reversible', alphaUsed: null, alphaSource: null, note }, reason: null };
+  return { diffusion: { diffusionCm2PerS: h.d, intervalCm2PerS: interval, rangeCm2PerS: range([h.d, ...h.ends]), form: 'reversible', alphaUsed: null, alphaSource: null, note }, reason: null };
 }

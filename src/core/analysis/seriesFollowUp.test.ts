@@ -48,6 +48,6 @@ describe('a fast follow-up reaction in or near the kinetic zone', () => {
   it('k_f = 500 1/s over 0.05–0.5 V/s: D range holds 1e-5 and reaches the 0.4958 form', () => {
     const { couple } = analyseSimulatedSeries(ec(500), [0.05, 0.15, 0.5], cell, { noiseA: 5e-9 });
     expect(inRange(couple.diffusion?.rangeCm2PerS, 1e-5)).toBe(true);
-    expect(couple.diffusion!.rangeCm2PerS![0] / 1e-5).toBeGreaterThan(0.93);
+    expect(couple.diffusion!.rangeCm2PerS![0] / 1e-5).toBeGreaterThan(0.9);
   });
 });
