@@ -157,6 +157,18 @@ describe('analysis options beyond the contract (parseAnalysisExtras + runAnalysi
     expect(() => parseAnalysisExtras(parseArgs(['--fc-value', '0.4'], ANALYSIS_OPTION_SPEC))).toThrow(/--from-ref/);
     expect(() => parseAnalysisExtras(parseArgs(['--out-convention', 'upside-down'], ANALYSIS_OPTION_SPEC))).toThrow(/iupac or polarographic/);
     expect(() => parseAnalysisExtras(parseArgs(['--alpha', '1.5'], ANALYSIS_OPTION_SPEC))).toThrow(/alpha/);
+    expect(() => parseAnalysisExtras(parseArgs(['--psi', 'guess'], ANALYSIS_OPTION_SPEC))).toThrow(/table or lavagnini/);
+  });
+  // Issue 9 item 1: the α of every command is named (αc, the cathodic one) in --help.
+  it('says in --help of analyze and simulate which α it is', async () => {
+    for (const command of ['analyze', 'simulate']) {
+      const r = await cli([command, '--help']);
+      expect(r.out).toMatch(/αc, the CATHODIC transfer coefficient/);
+    }
+  });
+  it('reads --na, --e0, --psi and --spikes into the run', () => {
+    const extras = parseAnalysisExtras(parseArgs(['--na', '2', '--e0', '0.15', '--psi', 'lavagnini', '--spikes', 'off', '--alpha', '0.3'], ANALYSIS_OPTION_SPEC));
+    expect(extras).toMatchObject({ transferElectronCount: 2, formalPotentialV: 0.15, psiMethod: 'lavagnini', spikeFilter: 'off', alpha: 0.3 });
   });
 });
 

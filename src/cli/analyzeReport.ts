@@ -24,6 +24,8 @@ import type { AnalyzeArgs } from './commands/analyze';
 import { UsageError } from './errors';
 import { runContract } from '../io';
 import { analyzeText } from './analyzeText';
+
+export { ANALYSIS_OPTION_HELP } from './analysisHelp';
 import { readInputs, type InputsRead, type ReadFile } from './readInputs';
 
 /** Analysis options beyond the fixed contract; `analyze` must accept them in its option table. */
@@ -32,42 +34,17 @@ export const ANALYSIS_OPTION_SPEC: Record<string, OptionSpec> = {
   'out-convention': { value: true }, diffusion: { value: true }, 'd-ratio': { value: true }, 'cdl-at': { value: true },
   'fc-near': { value: true }, 'fc-file': { value: true }, 'fc-value': { value: true }, cycle: { value: true }, 'json-sheet': { value: true },
   'series-by': { value: true }, session: { value: true }, blank: { value: true, repeat: true },
+  na: { value: true }, e0: { value: true }, psi: { value: true }, spikes: { value: true },
 };
 
-export const ANALYSIS_OPTION_HELP = `Further analysis options:
-  --ref NAME            report potentials on this scale: SHE, SCE, NCE, SSCE, AgCl-sat, AgCl-3M,
-                        AgCl-3.5M, AgCl-1M, AgCl-0.1M, MSE-sat, MSE-1M-H2SO4, HgO-1M, HgO-0.1M,
-                        RHE (needs --ph), Fc (internal standard)
-  --from-ref NAME       scale the files were measured on (default: the file's metadata)
-  --ph PH               pH for the RHE scale
-  --fc-near V           Fc⁺/Fc: use the couple with E½ nearest V (measured scale) as zero
-  --fc-file NAME        ...found in this companion file (given among the files, left out of the series)
-  --fc-value V          Fc⁺/Fc: E½ measured elsewhere, in V on the --from-ref scale
-  --alpha A             transfer coefficient (default: measured, else 0.5)
-  --diffusion CM2_PER_S known D of the species present, used for k° (default: fitted)
-  --d-ratio R           D_O/D_R for Nicholson's k° (default 1)
-  --ru OHM              uncompensated resistance: potentials corrected to E − i·Ru
-  --out-convention C    iupac | polarographic, for signed currents in the output (default iupac)
-  --cdl-at V            potential (output scale) of a featureless region: double-layer capacitance
-  --cycle N             cycle used for the series (default 1)
-  --json-sheet FILE     also write the full results sheet as JSON
-  --session FILE        analyse the files as a saved workbench session has them: its method,
-                        each series' cell values, each file's series, peak windows and baselines,
-                        the display scale and sign convention (files matched by SHA-256, else
-                        name); cannot be combined with cell, scale or grouping options
-  --blank FILE          a blank (supporting electrolyte alone, same electrode) subtracted before the
-                        analysis; give one per scan rate (repeat, or name a folder): each file takes
-                        the blank nearest its scan rate, and the pairing is recorded in the results
-  --series-by HOW       how files form scan-rate series: auto (default: by folder, a folder of
-                        several experiments split by common file-name stem), folder, stem, or one
-                        (every file given forms one series)
-Mercury reference electrodes (SCE, MSE, Hg/HgO) contain mercury: follow your local safety and
-disposal rules.
-`;
 
 export interface AnalysisExtras {
   fromRef?: string;
   alpha?: number;
+  transferElectronCount?: number;
+  formalPotentialV?: number;
+  psiMethod?: 'table' | 'lavagnini';
+  spikeFilter?: 'hampel' | 'off';
   pH?: number;
   ruOhm?: number;
   outputConvention?: CurrentConvention;
@@ -102,12 +79,22 @@ export function parseAnalysisExtras(a: ParsedArgs): AnalysisExtras {
   const fromRef = optionString(a, 'from-ref');
   if (fromRef !== undefined) out.fromRef = fromRef;
   const num: Array<[string, keyof AnalysisExtras, number, number]> = [
-    ['alpha', 'alpha', 0.01, 0.99], ['ph', 'pH', -2, 16], ['ru', 'ruOhm', 0, 1e9], ['diffusion', 'diffusionCm2PerS', 1e-12, 1],
+    ['alpha', 'alpha', 0.05, 0.95], ['na', 'transferElectronCount', 0.5, 10], ['e0', 'formalPotentialV', -10, 10], ['ph', 'pH', -2, 16], ['ru', 'ruOhm', 0, 1e9], ['diffusion', 'diffusionCm2PerS', 1e-12, 1],
     ['d-ratio', 'diffusionRatio', 1e-3, 1e3], ['cdl-at', 'capacitancePotentialV', -10, 10], ['cycle', 'cycle', 1, 1e6],
   ];
   for (const [name, key, lo, hi] of num) {
     const v = optionNumberOrUndefined(a, name, lo, hi);
     if (v !== undefined) (out as Record<string, unknown>)[key] = v;
+  }
+  const psi = optionString(a, 'psi');
+  if (psi !== undefined) {
+    if (psi !== 'table' && psi !== 'lavagnini') throw new UsageError(`--psi must be table or lavagnini, got "${psi}"`);
+    out.psiMethod = psi;
+  }
+  const spikes = optionString(a, 'spikes');
+  if (spikes !== undefined) {
+    if (spikes !== 'hampel' && spikes !== 'off') throw new UsageError(`--spikes must be hampel or off, got "${spikes}"`);
+    out.spikeFilter = spikes;
   }
   const conv = optionString(a, 'out-convention');
   if (conv !== undefined) {
@@ -162,7 +149,7 @@ function cellOf(files: RunFile[], args: AnalyzeArgs, extras: AnalysisExtras): Ce
   };
   const given: Array<[keyof CellValues, unknown]> = [
     ['areaCm2', args.areaCm2], ['concentrationMolPerCm3', args.concentrationMolPerCm3], ['temperatureK', args.temperatureK],
-    ['inputReference', extras.fromRef], ['alpha', extras.alpha], ['pH', extras.pH], ['ruOhm', extras.ruOhm], ['diffusionCm2PerS', extras.diffusionCm2PerS],
+    ['inputReference', extras.fromRef], ['alpha', extras.alpha], ['transferElectronCount', extras.transferElectronCount], ['formalPotentialV', extras.formalPotentialV], ['pH', extras.pH], ['ruOhm', extras.ruOhm], ['diffusionCm2PerS', extras.diffusionCm2PerS],
     ['diffusionRatio', extras.diffusionRatio], ['capacitancePotentialV', extras.capacitancePotentialV], ['internalStandard', extras.internalStandard],
   ];
   for (const [key, value] of given) if (value !== undefined) (cell as Record<string, unknown>)[key] = value;
@@ -183,7 +170,7 @@ export function runInputOf(read: InputsRead, args: AnalyzeArgs, extras: Analysis
     files,
     blanks,
     cells: Object.fromEntries(keys.map((k) => [k, cellOf(files.filter((f) => f.series === k && f.role !== 'internal-standard'), args, extras)])),
-    method: { seriesCycle: extras.cycle ?? 1 },
+    method: { seriesCycle: extras.cycle ?? 1, ...(extras.psiMethod ? { psiMethod: extras.psiMethod } : {}), ...(extras.spikeFilter ? { spikeFilter: extras.spikeFilter } : {}) },
     report,
     software: { ...SOFTWARE },
   };

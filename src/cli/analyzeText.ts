@@ -25,6 +25,24 @@ function coupleRows(r: AnalyzeRunResult): string[] {
   return rows;
 }
 
+const rangeText = (r: [number, number] | null | undefined) => (r ? ` [${e(r[0])}–${e(r[1])}]` : '');
+
+/** D with its range; "cannot tell" and the range when D cannot be separated from k_f. */
+function dText(c: SeriesCouple): string {
+  const d = c.diffusion;
+  if (!d) return '—';
+  return d.status === 'range-only' ? `cannot tell, in${rangeText(d.rangeCm2PerS)}` : `${e(d.diffusionCm2PerS)}${rangeText(d.rangeCm2PerS)}`;
+}
+
+/** k° with its range over αc, or "≥ bound", or "cannot tell". */
+function k0Text(c: SeriesCouple): string {
+  const k = c.rateConstant;
+  if (!k) return '—';
+  if (k.status === 'lower-bound') return `≥ ${e(k.lowerBoundCmPerS)}`;
+  if (k.status === 'cannot-tell') return 'cannot tell';
+  return `${e(k.k0CmPerS)}${rangeText(k.rangeCmPerS)}`;
+}
+
 function seriesLines(c: SeriesCouple): string[] {
   const fit = c.forwardFit;
   const out = [`couple ${c.index}: E½ = ${f(c.eHalfV, 4)} V over ${c.points.length} file(s); ${c.verdict.label}`];
@@ -35,8 +53,9 @@ function seriesLines(c: SeriesCouple): string[] {
     const ci = fit.slopeInterval ? ` (95 % CI ${e(fit.slopeInterval[0])} to ${e(fit.slopeInterval[1])})` : '';
     out.push(`  |ip| vs v^½: slope ${e(fit.slope)} A·(V/s)^-½${ci}, intercept ${e(fit.intercept)} A, R² ${f(fit.r2, 5)}`);
   }
-  out.push(`  D = ${e(c.diffusion?.diffusionCm2PerS)} cm²/s   log–log slope = ${f(c.logLog?.slope, 3)}   k° = ${e(c.rateConstant?.k0CmPerS)} cm/s   Γ = ${e(c.surface?.coverageFromChargeMolPerCm2 ?? c.surface?.coverageFromSlopeMolPerCm2)} mol/cm²`);
-  if (c.followUp) out.push(`  k_f = ${e(c.followUp.rateConstantPerS)} 1/s (follow-up reaction)`);
+  out.push(`  D = ${dText(c)} cm²/s   log–log slope = ${f(c.logLog?.slope, 3)}   k° = ${k0Text(c)} cm/s   Γ = ${e(c.surface?.coverageFromChargeMolPerCm2 ?? c.surface?.coverageFromSlopeMolPerCm2)} mol/cm²`);
+  if (c.alpha !== null) out.push(`  αc = ${f(c.alpha, 3)} (cathodic transfer coefficient)${c.transferCoefficient ? `, forward αnₐ = ${f(c.transferCoefficient.forwardAlphaNa, 3)}` : ''}`);
+  if (c.followUp) out.push(`  k_f = ${c.followUp.rateConstantPerS === null && c.followUp.lowerBoundPerS !== null ? `≥ ${e(c.followUp.lowerBoundPerS)}` : e(c.followUp.rateConstantPerS)} 1/s (follow-up reaction)`);
   for (const d of c.diagnostics) out.push(`  · ${d}`);
   return out;
 }

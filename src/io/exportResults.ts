@@ -9,7 +9,9 @@
  * SI units at full precision: raw peaks, raw couples (one row per file × cycle × couple), raw k0
  * per file, raw series (one row per series × couple), raw double-layer capacitance when measured.
  * Signed currents follow the run's sign convention; peak heights and couple currents are positive
- * magnitudes.
+ * magnitudes. Left-out points and window edges get their own table when there are any. Every α
+ * is named: alpha_c_cathodic is αc (of the reduction O + ne⁻ → R), alpha_n_forward_wave is α·nₐ
+ * of the first-sweep wave.
  */
 import { currentInConvention } from '../core/conventions';
 import type { AnalyzeRunResult } from '../core/analysis/runTypes';
@@ -69,6 +71,18 @@ function peakTable(r: AnalyzeRunResult): string[] {
   return out;
 }
 
+/** Points left out of the analysis (spikes) and sweeps that end in a breakdown current, one row each. */
+function notedPointsTable(r: AnalyzeRunResult): string[] {
+  const out = [row(['file', 'cycle', 'what', 'E_from_V', 'E_to_V', 'direction', 'i_A', 'point'])];
+  for (const f of r.files) {
+    for (const p of f.analysis.spikes ?? []) out.push(row([f.fileName, '', 'isolated bad point left out', p.potentialV, p.potentialV, '', currentInConvention(p.currentA, r.convention), p.index]));
+    for (const c of f.analysis.cycles) {
+      for (const e of c.windowEdges ?? []) out.push(row([f.fileName, c.index, 'breakdown or catalytic current at the window edge', e.fromV, e.toV, e.direction, currentInConvention(e.currentA, r.convention), '']));
+    }
+  }
+  return out;
+}
+
 function coupleTable(r: AnalyzeRunResult): string[] {
   const out = [row(['file', 'scan_rate_V_per_s', 'cycle', 'couple', 'Epa_V', 'Epc_V', 'E_half_V', 'dEp_V', 'ipa_A', 'ipc_A', 'ratio_return_over_forward', 'nicholson_1966_ratio', 'Qa_C', 'Qc_C', 'verdict', 'verdict_text'])];
   for (const f of r.files) {
@@ -83,32 +97,41 @@ function coupleTable(r: AnalyzeRunResult): string[] {
 }
 
 function rateTable(r: AnalyzeRunResult): string[] {
-  const out = [row(['series', 'series_couple', 'file', 'scan_rate_V_per_s', 'dEp_V', 'psi', 'psi_source', 'method', 'k0_cm_per_s', 'not_determined_because'])];
+  const out = [row(['series', 'series_couple', 'file', 'scan_rate_V_per_s', 'dEp_V', 'psi', 'psi_source', 'method', 'k0_cm_per_s', 'k0_low_over_alpha_c', 'k0_high_over_alpha_c', 'E0_V', 'not_determined_because'])];
   for (const s of r.series) {
     for (const c of s.analysis.couples) {
       for (const k of c.rateConstant?.perFile ?? []) {
         const p = c.points.find((x) => x.fileIndex === k.fileIndex);
-        out.push(row([s.key, c.index, p?.fileName ?? s.fileNames[k.fileIndex], p?.scanRateVPerS, p?.deltaEpV, k.psi?.psi, k.psi?.source, k.method, k.k0CmPerS, k.reason]));
+        out.push(row([s.key, c.index, p?.fileName ?? s.fileNames[k.fileIndex], p?.scanRateVPerS, p?.deltaEpV, k.psi?.psi, k.psi?.source, k.method, k.k0CmPerS,
+          k.rangeCmPerS?.[0], k.rangeCmPerS?.[1], k.formalPotentialV, k.reason]));
       }
     }
   }
   return out;
 }
 
-const SERIES_COLUMNS = ['series', 'couple', 'E_half_V', 'files', 'regime', 'kinetic_class', 'verdict', 'slope_ip_vs_sqrt_v_A_s05_V05', 'slope_ci95_low', 'slope_ci95_high',
-  'intercept_A', 'r2', 'D_cm2_per_s', 'D_ci95_low', 'D_ci95_high', 'D_ci95_with_uA_uC_low', 'D_ci95_with_uA_uC_high', 'D_form', 'alpha', 'log_log_slope', 'log_log_reading', 'Epa_shift_V_per_decade',
-  'Epc_shift_V_per_decade', 'k0_cm_per_s', 'k0_lower_bound_cm_per_s', 'D_used_for_k0_cm2_per_s', 'gamma_from_charge_mol_per_cm2',
-  'gamma_from_slope_mol_per_cm2', 'ks_per_s', 'electroactive_area_cm2', 'anodic_slope_A_s05_V05', 'anodic_r2',
+const SERIES_COLUMNS = ['series', 'couple', 'E_half_V', 'E_half_meaning', 'files', 'regime', 'kinetic_class', 'verdict', 'slope_ip_vs_sqrt_v_A_s05_V05', 'slope_ci95_low',
+  'slope_ci95_high', 'intercept_A', 'r2', 'D_cm2_per_s', 'D_ci95_low', 'D_ci95_high', 'D_ci95_with_uA_uC_low', 'D_ci95_with_uA_uC_high', 'D_status', 'D_range_low', 'D_range_high', 'D_form',
+  'alpha_c_cathodic', 'alpha_c_source', 'alpha_c_range_low', 'alpha_c_range_high', 'alpha_n_forward_wave', 'log_log_slope', 'log_log_reading',
+  'Epa_shift_V_per_decade', 'Epc_shift_V_per_decade', 'k0_cm_per_s', 'k0_status', 'k0_range_low', 'k0_range_high', 'k0_lower_bound_cm_per_s', 'k0_reason',
+  'E0_V', 'D_used_for_k0_cm2_per_s', 'ohmic_explaining_Ru_ohm', 'kf_per_s', 'kf_lower_bound_per_s', 'gamma_from_charge_mol_per_cm2',
+  'gamma_from_slope_mol_per_cm2', 'gamma_from_slope_form', 'laviron_alpha_c', 'ks_per_s', 'electroactive_area_cm2', 'anodic_slope_A_s05_V05', 'anodic_r2',
   'cathodic_slope_A_s05_V05', 'cathodic_r2', 'diagnostics'];
 
 function seriesRow(key: string, c: SeriesCouple): Cell[] {
   const f = c.forwardFit;
-  return [key, c.index, c.eHalfV, c.points.length, c.regime, c.kineticClass, c.verdict.category, f?.slope, f?.slopeInterval?.[0], f?.slopeInterval?.[1],
-    f?.intercept, f?.r2, c.diffusion?.diffusionCm2PerS, c.diffusion?.intervalCm2PerS?.[0], c.diffusion?.intervalCm2PerS?.[1],
-    c.diffusion?.combinedIntervalCm2PerS?.[0], c.diffusion?.combinedIntervalCm2PerS?.[1], c.diffusion?.form,
-    c.alpha ?? c.diffusion?.alphaUsed, c.logLog?.slope, c.logLog?.reading, c.peakShift.anodic?.slopeVPerDecade, c.peakShift.cathodic?.slopeVPerDecade,
-    c.rateConstant?.k0CmPerS, c.rateConstant?.lowerBoundCmPerS, c.rateConstant?.diffusionOxCm2PerS, c.surface?.coverageFromChargeMolPerCm2,
-    c.surface?.coverageFromSlopeMolPerCm2, c.surface?.ksPerS, c.electroactiveAreaCm2, c.anodicFit?.slope, c.anodicFit?.r2,
+  const d = c.diffusion;
+  const k = c.rateConstant;
+  const t = c.transferCoefficient;
+  return [key, c.index, c.eHalfV, c.eHalfMeaning, c.points.length, c.regime, c.kineticClass, c.verdict.category, f?.slope, f?.slopeInterval?.[0],
+    f?.slopeInterval?.[1], f?.intercept, f?.r2, d?.status === 'range-only' ? null : d?.diffusionCm2PerS, d?.intervalCm2PerS?.[0], d?.intervalCm2PerS?.[1],
+    d?.status === 'range-only' ? null : d?.combinedIntervalCm2PerS?.[0], d?.status === 'range-only' ? null : d?.combinedIntervalCm2PerS?.[1],
+    d ? (d.status ?? 'value') : null, d?.rangeCm2PerS?.[0], d?.rangeCm2PerS?.[1], d?.form,
+    c.alpha ?? d?.alphaUsed, t?.source, t?.alphaCRange?.[0], t?.alphaCRange?.[1], t?.forwardAlphaNa, c.logLog?.slope, c.logLog?.reading,
+    c.peakShift.anodic?.slopeVPerDecade, c.peakShift.cathodic?.slopeVPerDecade, k?.k0CmPerS, k?.status, k?.rangeCmPerS?.[0], k?.rangeCmPerS?.[1],
+    k?.lowerBoundCmPerS, k?.reason, k?.formalPotentialV, k?.diffusionOxCm2PerS, c.ohmic?.explainingRuOhm, c.followUp?.rateConstantPerS,
+    c.followUp?.lowerBoundPerS, c.surface?.coverageFromChargeMolPerCm2, c.surface?.coverageFromSlopeMolPerCm2, c.surface?.coverageFromSlopeForm,
+    c.surface?.lavironAlpha, c.surface?.ksPerS, c.electroactiveAreaCm2, c.anodicFit?.slope, c.anodicFit?.r2,
     c.cathodicFit?.slope, c.cathodicFit?.r2, c.diagnostics.join('; ')];
 }
 
@@ -123,10 +146,15 @@ export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta
     ['# table: raw k0 per file', ...rateTable(result)],
     ['# table: raw series', row(SERIES_COLUMNS), ...result.series.flatMap((s) => s.analysis.couples.map((c) => row(seriesRow(s.key, c))))],
   ];
+  const noted = notedPointsTable(result);
+  if (noted.length > 1) parts.push(['# table: left-out points and window edges', ...noted]);
   const withCd = result.series.filter((s) => s.capacitance);
   if (withCd.length) {
-    parts.push(['# table: raw double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'intercept_A', 'r2']),
-      ...withCd.map((s) => row([s.key, s.capacitance?.capacitanceFPerCm2, s.capacitance?.fit?.intercept, s.capacitance?.fit?.r2]))]);
+    parts.push(['# table: raw double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'Cd_ci95_low', 'Cd_ci95_high', 'model', 'faradaic_tail_A_per_sqrt_V_per_s', 'line_intercept_A', 'line_r2', 'warning']),
+      ...withCd.map((s) => {
+        const c = s.capacitance;
+        return row([s.key, c?.capacitanceFPerCm2, c?.capacitanceIntervalFPerCm2?.[0], c?.capacitanceIntervalFPerCm2?.[1], c?.model, c?.faradaicTailAPerSqrtVPerS, c?.fit?.intercept, c?.fit?.r2, c?.warning]);
+      })]);
   }
   return `${parts.map((p) => p.join('\n')).join('\n\n')}\n`;
 }

@@ -4,12 +4,14 @@
  * (outside checks depend on them): files[].{file, scanRate, scanRateSource, cycles[].{index,
  * peaks[], couples[]}}, series[].{couple, slope, intercept, r2, D, logLogSlope, k0, gamma},
  * warnings[]. Everything else is an extra field; `series[].series` names the scan-rate series a
- * couple belongs to when a run holds several. Units: V, A, V/s, cm²/s, cm/s, mol/cm²; ipa/ipc
- * and ip are positive baseline-corrected magnitudes; `ratio` is return over forward peak
- * (Nicholson's convention).
+ * couple belongs to when a run holds several. Units: V, A, V/s, cm²/s, cm/s, mol/cm², 1/s, Ω;
+ * ipa/ipc and ip are positive baseline-corrected magnitudes; `ratio` is return over forward peak
+ * (Nicholson's convention). `alpha` is always αc, the cathodic transfer coefficient (alphaMeaning
+ * says so in each entry); `alphaNa` is α·nₐ of the forward wave. `k0` is null unless k0Status is
+ * 'value' (never beside a reversible verdict); `D` is null when DStatus is 'range-only'.
  */
 import type { AnalyzeRunResult, RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
-import type { SeriesCouple } from '../core/analysis/seriesTypes';
+import { ALPHA_MEANING, type SeriesCouple } from '../core/analysis/seriesTypes';
 import { currentInConvention } from '../core/conventions';
 
 /** Finite numbers pass, anything else becomes null (JSON has no NaN). */
@@ -25,8 +27,10 @@ function fileEntry(f: RunFileResult, givenAs: string, r: AnalyzeRunResult) {
     sizeBytes: f.provenance.sizeBytes ?? null,
     sha256: f.provenance.sha256 ?? null,
     role: f.role,
+    spikes: (f.analysis.spikes ?? []).map((p) => ({ index: p.index, E: p.potentialV, i: currentInConvention(p.currentA, r.convention) })),
     cycles: f.analysis.cycles.map((c) => ({
       index: c.index,
+      windowEdges: (c.windowEdges ?? []).map((e) => ({ direction: e.direction, fromE: e.fromV, toE: e.toV, i: currentInConvention(e.currentA, r.convention), atSwitch: e.atSwitch, label: 'breakdown or catalytic current at the window edge' })),
       peaks: c.peaks.map((p) => ({
         direction: p.direction, E: p.potentialV, ip: p.heightA,
         iRaw: currentInConvention(p.rawCurrentA, r.convention), confidence: p.confidence, charge: num(p.chargeC),
@@ -52,7 +56,7 @@ function seriesEntry(s: RunSeriesResult, c: SeriesCouple) {
     slope: num(f?.slope),
     intercept: num(f?.intercept),
     r2: num(f?.r2),
-    D: num(c.diffusion?.diffusionCm2PerS),
+    D: c.diffusion?.status === 'range-only' ? null : num(c.diffusion?.diffusionCm2PerS),
     logLogSlope: num(c.logLog?.slope),
     k0: num(c.rateConstant?.k0CmPerS),
     gamma: gammaOf(c),
@@ -63,22 +67,48 @@ function seriesEntry(s: RunSeriesResult, c: SeriesCouple) {
     verdict: c.verdict.category,
     verdictText: c.verdict.label,
     slopeCI95: f?.slopeInterval ?? null,
-    DCI95: c.diffusion?.intervalCm2PerS ?? null,
-    DCI95WithAreaAndConc: c.diffusion?.combinedIntervalCm2PerS ?? null,
+    DCI95: c.diffusion?.status === 'range-only' ? null : (c.diffusion?.intervalCm2PerS ?? null),
+    DCI95WithAreaAndConc: c.diffusion?.status === 'range-only' ? null : (c.diffusion?.combinedIntervalCm2PerS ?? null),
     defaultsUsed: s.defaultsUsed.filter((d) => d.affects.includes('D') || d.affects.includes('Γ') || d.affects.includes('k°')).map((d) => `${d.field}: ${d.value} (${d.affects.join(', ')})`),
     DForm: c.diffusion?.form ?? null,
+    DStatus: c.diffusion ? (c.diffusion.status ?? 'value') : null,
+    DRange: c.diffusion?.rangeCm2PerS ?? null,
+    DNote: c.diffusion?.note ?? null,
     alpha: num(c.alpha ?? c.diffusion?.alphaUsed ?? null),
+    alphaMeaning: ALPHA_MEANING,
+    alphaSource: c.transferCoefficient?.source ?? (c.surface?.lavironAlpha != null ? 'laviron' : null),
+    alphaRange: c.transferCoefficient?.alphaCRange ?? null,
+    alphaNa: num(c.transferCoefficient?.forwardAlphaNa),
+    alphaNaRange: c.transferCoefficient?.forwardAlphaNaRange ?? null,
+    transferElectronCount: c.transferCoefficient?.transferElectronCount ?? null,
+    alphaText: c.transferCoefficient ? [c.transferCoefficient.text, c.transferCoefficient.note].filter(Boolean).join('; ') : null,
+    EhalfMeaning: c.eHalfMeaning ?? null,
     logLogReading: c.logLog?.reading ?? null,
     EpaShiftPerDecade: num(c.peakShift.anodic?.slopeVPerDecade),
     EpcShiftPerDecade: num(c.peakShift.cathodic?.slopeVPerDecade),
     k0LowerBound: num(c.rateConstant?.lowerBoundCmPerS),
+    k0Status: c.rateConstant?.status ?? null,
+    k0Range: c.rateConstant?.rangeCmPerS ?? null,
+    k0Reason: c.rateConstant?.reason ?? null,
+    E0: num(c.rateConstant?.formalPotentialV ?? null),
+    E0Source: c.rateConstant?.formalPotentialSource ?? null,
     k0PerFile: (c.rateConstant?.perFile ?? []).map((k) => ({
       file: c.points.find((p) => p.fileIndex === k.fileIndex)?.fileName ?? null, k0: num(k.k0CmPerS), method: k.method, reason: k.reason,
+      range: k.rangeCmPerS ?? null, E0: num(k.formalPotentialV ?? null),
     })),
+    ohmic: c.ohmic ? { grows: c.ohmic.grows, ru: c.ohmic.ruOhm, explainingRu: num(c.ohmic.explainingRuOhm), share: num(c.ohmic.ohmicShare), limitsK0: c.ohmic.limitsK0, text: c.ohmic.text } : null,
     gammaFromSlope: num(c.surface?.coverageFromSlopeMolPerCm2),
+    gammaFromSlopeForm: c.surface?.coverageFromSlopeForm ?? null,
+    gammaFromSlopeRange: c.surface?.coverageFromSlopeRangeMolPerCm2 ?? null,
+    gammaFromSlopeNote: c.surface?.coverageFromSlopeNote ?? null,
+    lavironAlpha: num(c.surface?.lavironAlpha ?? null),
     ks: num(c.surface?.ksPerS),
     electroactiveArea: num(c.electroactiveAreaCm2),
     kf: num(c.followUp?.rateConstantPerS ?? null),
+    kfRange: c.followUp?.rangePerS ?? null,
+    kfLowerBound: num(c.followUp?.lowerBoundPerS ?? null),
+    kfZone: c.followUp?.zone ?? null,
+    followUpEvidence: c.followUp?.evidence ?? [],
     kfPerFile: (c.followUp?.perFile ?? []).map((k) => ({
       file: c.points.find((p) => p.fileIndex === k.fileIndex)?.fileName ?? null, kf: num(k.rateConstantPerS), reason: k.reason,
     })),
@@ -107,7 +137,11 @@ export function runContract(r: AnalyzeRunResult, givenAs: string[] = []) {
 }
 
 function capacitanceOf(s: RunSeriesResult | undefined) {
-  return s?.capacitance ? { Cd: s.capacitance.capacitanceFPerCm2, pointwise: s.capacitance.pointCapacitancesFPerCm2 } : null;
+  const c = s?.capacitance;
+  return c ? {
+    Cd: c.capacitanceFPerCm2, pointwise: c.pointCapacitancesFPerCm2, CdCI95: c.capacitanceIntervalFPerCm2, model: c.model,
+    faradaicTail: c.faradaicTailAPerSqrtVPerS, warning: c.warning,
+  } : null;
 }
 
 export type RunContract = ReturnType<typeof runContract>;

@@ -23,7 +23,8 @@ Options (default in brackets):
   --mechanism E|EC|surface  reaction scheme [E]
   --E0 V                 formal potential [${d.formalPotentialV}]
   --k0 CM_PER_S          standard rate constant; "inf" for a Nernstian couple [${d.k0CmPerS}]
-  --alpha A              transfer coefficient, 0.01-0.99 [${d.alpha}]
+  --alpha A              αc, the CATHODIC transfer coefficient of O + n e- -> R, 0.01-0.99;
+                         the oxidation runs with 1 - αc [${d.alpha}]
   --n N                  electrons transferred, 1-6 [${d.electronCount}]
   --D CM2_PER_S          diffusion coefficient of O (and of R unless --DR) [${d.diffusionOCm2PerS}]
   --DR CM2_PER_S         diffusion coefficient of R [same as --D]

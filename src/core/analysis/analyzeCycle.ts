@@ -7,10 +7,11 @@
 import { formatMillivolts } from '../units';
 import type { CycleAnalysis, AnalysisWarning, ResolvedAnalyzeOptions } from './types';
 import type { CoupleResult } from '../couples/coupleTypes';
-import type { PeakResult } from '../peaks/peakTypes';
+import type { PeakResult, PeakWindow } from '../peaks/peakTypes';
 import type { CycleRange } from '../types';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { locatePeaksInSweep, type PeakCandidate } from '../peaks/locatePeaksInSweep';
+import { isAtWindowEdge, windowEdgeCurrent, type WindowEdgeCurrent } from '../peaks/windowEdgeCurrent';
 import { measurePeak } from '../peaks/measurePeak';
 import { baselineForPeak, type BaselineRef } from '../baseline/baselineForPeak';
 import { chooseBaseline, type BaselineContext } from '../baseline/chooseBaseline';
@@ -24,7 +25,8 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const warnings: AnalysisWarning[] = [];
   const warn = (code: AnalysisWarning['code'], message: string) => warnings.push({ code, message, cycle: cycle.index });
   const segIdx = sig.segments.flatMap((s, k) => (s.cycle === cycle.index ? [k] : []));
-  const candidates = segIdx.flatMap((k) => locateOnSweep(sig, k, cycle.index, o, thresholdA, warn));
+  const windowEdges: WindowEdgeCurrent[] = [];
+  const candidates = segIdx.flatMap((k) => locateOnSweep(sig, k, cycle.index, o, thresholdA, warn, windowEdges));
   const anodic = candidates.filter((c) => c.direction === 'anodic');
   const cathodic = candidates.filter((c) => c.direction === 'cathodic');
   const topProminence = Math.max(0, ...candidates.map((c) => c.prominenceA));
@@ -45,7 +47,7 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const drawn = new Map<PeakCandidate, BaselineRef>();
   const measured = new Map<PeakCandidate, PeakResult>();
   const ctx: BaselineContext = {
-    sig, ordered, partner, drawn, firstSegment: firstSeg, cycle: cycle.index, specs: o.baselines,
+    sig, ordered, partner, drawn, firstSegment: firstSeg, cycle: cycle.index, specs: o.baselines, edgeSweeps: new Map(windowEdges.map((e) => [e.segmentIndex, e.fromIndex])),
     defaults: { forwardBaseline: o.forwardBaseline, returnBaseline: o.returnBaseline }, wave: { temperatureK: o.temperatureK, electronCount: o.electronCount },
   };
   for (const cand of ordered) {
@@ -60,10 +62,10 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const peaks = ordered.flatMap((c) => (measured.has(c) ? [measured.get(c)!] : []));
   const couples = buildCouples(sig, peaks, firstSeg, o, warn);
   if (peaks.length === 0) warn('NO_PEAKS', `no peak rose ${thresholdA.toExponential(3)} A above its surroundings in cycle ${cycle.index}`);
-  return { index: cycle.index, peaks, couples, warnings };
+  return { index: cycle.index, peaks, couples, warnings, windowEdges };
 }
 
-function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedAnalyzeOptions, thresholdA: number, warn: (c: AnalysisWarning['code'], m: string) => void): PeakCandidate[] {
+function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedAnalyzeOptions, thresholdA: number, warn: (c: AnalysisWarning['code'], m: string) => void, edges: WindowEdgeCurrent[]): PeakCandidate[] {
   const seg = sig.segments[k]!;
   const direction = seg.direction === 'positive' ? 'anodic' : 'cathodic';
   if (seg.end - seg.start < 7) {
@@ -71,10 +73,25 @@ function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedA
     return [];
   }
   const forCycle = o.peakWindows.filter((w) => w.direction === direction && (w.cycle === undefined || w.cycle === cycle));
+  const found = locateWithWindows(sig, k, forCycle, direction, o, thresholdA, warn);
+  const edgePoints = Math.ceil(o.locatingSmoothing.window / 2);
+  const edge = windowEdgeCurrent(sig, k, thresholdA, { edgePoints, electronCount: o.electronCount });
+  if (!edge) return found;
+  edges.push(edge);
+  const kept = found.filter((c) => !isAtWindowEdge(sig, edge, c.index, edgePoints));
+  const dropped = found.length > kept.length ? '; the extremum there is not a peak' : '';
+  warn('WINDOW_EDGE', `breakdown or catalytic current at the window edge: ${direction} current still rising steeply from ${edge.fromV.toFixed(3)} V to the ${edge.atSwitch ? 'switching potential' : 'end of the record'} at ${edge.toV.toFixed(3)} V${dropped} (or a wave cut off by the switch)`);
+  return kept;
+}
+
+/**
+ * The peaks of a sweep: automatically, or in the user's windows. A window the user set must hold a
+ * peak that stands above the noise threshold like any other; an empty one is kept as "empty" and
+ * never takes the place of the peaks found automatically.
+ */
+function locateWithWindows(sig: SweepSignals, k: number, forCycle: PeakWindow[], direction: string, o: ResolvedAnalyzeOptions, thresholdA: number, warn: (c: AnalysisWarning['code'], m: string) => void): PeakCandidate[] {
   const options = { minProminenceA: thresholdA, locatingWindow: o.locatingSmoothing.window };
   if (!forCycle.length) return locatePeaksInSweep(sig, k, { ...options, windows: null });
-  // A window the user set must hold a peak that stands above the noise threshold like any other;
-  // an empty one is kept as "empty" and never takes the place of the peaks found automatically.
   const found = locatePeaksInSweep(sig, k, { ...options, windows: forCycle });
   const real = found.filter((c) => c.prominenceA >= thresholdA);
   const empty = forCycle.length - real.length;

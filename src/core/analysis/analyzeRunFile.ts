@@ -6,6 +6,7 @@
  * Sources are named in the methods called (conventions/iRCorrect.ts, analyzeVoltammogram.ts).
  */
 import { iRCorrect } from '../conventions';
+import { hampelSpikes } from '../peaks/hampelSpikes';
 import type { BaselineSpec } from '../baseline/baselineTypes';
 import { AnalysisError } from '../errors';
 import { subtractBlank } from '../background';
@@ -29,14 +30,19 @@ export function traceOptionsOf(file: ResolvedRunFile, cell: ResolvedCell, method
     baselines: file.baselines.map((b) => shiftSpec(b, offsetV)),
     forwardBaseline: method.forwardBaseline, returnBaseline: method.returnBaseline, minSignalToNoise: method.minSignalToNoise,
     minProminenceA: method.minProminenceA, minRelativeProminence: method.minRelativeProminence, maxDeltaEpV: method.maxDeltaEpV,
-    scanRateVPerS: file.scanRateVPerS, cycles: file.input.voltammogram.cycles.map((c) => c.index),
+    scanRateVPerS: file.scanRateVPerS, cycles: file.input.voltammogram.cycles.map((c) => c.index), spikeFilter: method.spikeFilter,
   };
 }
 
-/** The potential column as analysed: iR-corrected, then shifted; the recorded column when neither applies. */
-export function analysedPotential(v: Voltammogram, ruOhm: number, offsetV: number): Float64Array | null {
+/**
+ * The potential column as analysed: iR-corrected, then shifted; the recorded column when neither
+ * applies. A spike's current is not the current through the cell, so the correction uses the
+ * current with the spikes replaced (the same test the trace analysis runs).
+ */
+export function analysedPotential(v: Voltammogram, ruOhm: number, offsetV: number, spikeFilter: 'hampel' | 'off' = 'hampel'): Float64Array | null {
   if (!(ruOhm > 0) && offsetV === 0) return null;
-  const corrected = ruOhm > 0 ? iRCorrect(v.potentialV, v.currentA, ruOhm) : v.potentialV;
+  const current = ruOhm > 0 && spikeFilter === 'hampel' ? hampelSpikes(v.currentA, v.segments).cleanedA : v.currentA;
+  const corrected = ruOhm > 0 ? iRCorrect(v.potentialV, current, ruOhm) : v.potentialV;
   return offsetV === 0 ? corrected : corrected.map((e) => e + offsetV);
 }
 
@@ -70,7 +76,7 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
   const blankWarnings: RunWarning[] = [];
   const { currentA, blank } = withoutBlank(file, blankWarnings);
   // The ohmic drop follows the whole current that flowed; the peaks are read on the current less the blank.
-  const potentialV = analysedPotential(v, cell.ruOhm, reference.offsetV);
+  const potentialV = analysedPotential(v, cell.ruOhm, reference.offsetV, method.spikeFilter);
   const analysed: Voltammogram = { ...v, currentA, ...(potentialV ? { potentialV } : {}) };
   const fileName = file.input.fileName;
   let analysis;

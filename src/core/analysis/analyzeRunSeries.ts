@@ -21,9 +21,11 @@ function capacitanceOf(files: RunFileResult[], cell: ResolvedCell, warnings: Run
     warnings.push({ code: 'CAPACITANCE', series: key, message: 'double-layer capacitance needs the electrode area' });
     return null;
   }
-  return doubleLayerCapacitance({
+  const result = doubleLayerCapacitance({
     scanRatesVPerS: gaps.map((f) => f.scanRateVPerS), gapCurrentsA: gaps.map((f) => Math.max(0, f.chargingGapA as number)), areaCm2: cell.areaCm2,
   });
+  if (result.warning) warnings.push({ code: 'CAPACITANCE', series: key, message: `double-layer capacitance: ${result.warning}` });
+  return result;
 }
 
 /** D's interval with the stated uncertainty of A and C (GUM; combinedDiffusionInterval.ts), on each couple that has D. */
@@ -47,7 +49,7 @@ export function analyzeRunSeries(key: string, cell: ResolvedCell, method: Resolv
     {
       electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: cell.concentrationMolPerCm3, temperatureK: cell.temperatureK,
       alpha: cell.alpha, transferElectronCount: cell.transferElectronCount, diffusionRatio: cell.diffusionRatio, diffusionCm2PerS: cell.diffusionCm2PerS,
-      cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV,
+      formalPotentialV: cell.formalPotentialV, ruOhm: cell.ruOhm, cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
     },
   );
   withCombinedIntervals(analysis, cell);

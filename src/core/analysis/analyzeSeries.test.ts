@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { thermalVoltageV } from '../constants';
 import { AnalysisError } from '../errors';
 import { lavironPeakPotentials, lavironRateConstant, nicholsonRateConstant } from '../kinetics';
-import { irreversiblePeakShiftVPerDecade, randlesSevcikPeakCurrent, surfaceCharge, surfacePeakCurrent } from '../series';
+import { irreversiblePeakShiftVPerDecade, irreversibleSurfacePeakCurrent, randlesSevcikPeakCurrent, surfaceCharge } from '../series';
 import { analyzeSeries } from './analyzeSeries';
 import { fakeAnalysis } from './seriesTestSupport';
 
@@ -39,8 +39,9 @@ describe('analyzeSeries', () => {
     expect(high?.rateConstant?.lowerBoundCmPerS).toBeGreaterThan(0);
   });
 
-  // Nicholson, Anal. Chem. 37 (1965) 1351, Table I (from memory): ΔEp = 84 mV → ψ = 1; with the
-  // Lavagnini fit ψ = 1.0570 → k° = 1.0190e-2 cm/s at 0.1 V/s for D = 7.6e-6 cm²/s.
+  // Nicholson, Anal. Chem. 37, 1351 (1965), Table I (from memory): ΔEp = 84 mV → ψ = 1 →
+  // k° = ψ·(πDnFv/RT)^½ = 9.640e-3 cm/s at 0.1 V/s for D = 7.6e-6 cm²/s, at the assumed αc = 0.5,
+  // with a range over αc 0.3–0.7 around it.
   it('gives Nicholson k° for a quasi-reversible couple', () => {
     const files = [0.1, 0.1 * 1.0001].map((s, i) => ({
       fileName: `q${i}`, scanRateVPerS: s,
@@ -49,11 +50,15 @@ describe('analyzeSeries', () => {
     const r = analyzeSeries(files, { diffusionCm2PerS: 7.6e-6 });
     const k = r.couples[0]?.rateConstant;
     expect(r.couples[0]?.kineticClass).toBe('quasi-reversible');
-    expect(Math.abs((k?.perFile[0]?.k0CmPerS ?? 0) / 1.019e-2 - 1)).toBeLessThan(1e-3);
+    expect(Math.abs((k?.perFile[0]?.k0CmPerS ?? 0) / 9.64e-3 - 1)).toBeLessThan(1e-3);
     expect(k?.diffusionSource).toBe('given by the user');
     // Reference value from the same formula (Nicholson 1965), for the median.
-    const k0 = nicholsonRateConstant({ psi: 1.057, diffusionOxCm2PerS: 7.6e-6, scanRateVPerS: 0.1, electronCount: 1 });
+    const k0 = nicholsonRateConstant({ psi: 1, diffusionOxCm2PerS: 7.6e-6, scanRateVPerS: 0.1, electronCount: 1 });
     expect(Math.abs((k?.k0CmPerS ?? 0) / k0 - 1)).toBeLessThan(1e-3);
+    expect(k?.status).toBe('value');
+    expect(k?.rangeCmPerS?.[0]).toBeLessThanOrEqual(k0);
+    expect(k?.rangeCmPerS?.[1]).toBeGreaterThanOrEqual(k0);
+    expect(r.couples[0]?.transferCoefficient?.source).toBe('assumed');
   });
 
   // Wang (2000) eq. 2-5; Bard & Faulkner §6.3: an irreversible, broad reduction peak moving −59.16 mV per
@@ -77,12 +82,13 @@ describe('analyzeSeries', () => {
     expect(c?.rateConstant?.perFile[0]?.reason).toMatch(/no peak pair/);
   });
 
-  // Laviron 1974 / Bard & Faulkner §14.3 (ip ∝ v, Q = nFAΓ) and Laviron 1979 (k_s from ΔEp > 200 mV).
+  // Laviron 1974 / Bard & Faulkner §14.3 (Q = nFAΓ) and Laviron 1979 (k_s from ΔEp > 200 mV; in that
+  // regime ip = αnFQv/(2.718RT), so Γ from the slope uses that form over the files beyond 200 mV).
   it('reports Γ from charge and slope and Laviron k_s for an adsorbed couple', () => {
     const gamma = 1e-10;
     const sv = [1, 3, 10, 30];
     const files = sv.map((s, i) => {
-      const ip = surfacePeakCurrent({ electronCount: 1, areaCm2: 0.0707, coverageMolPerCm2: gamma, scanRateVPerS: s });
+      const ip = irreversibleSurfacePeakCurrent({ electronCount: 1, areaCm2: 0.0707, coverageMolPerCm2: gamma, scanRateVPerS: s }, { alpha: 0.5 });
       const p = lavironPeakPotentials({ formalPotentialV: 0.1, rateConstantPerS: 5, scanRateVPerS: s, electronCount: 1 });
       return {
         fileName: `s${i}`, scanRateVPerS: s,
@@ -92,7 +98,10 @@ describe('analyzeSeries', () => {
     const c = analyzeSeries(files, { areaCm2: 0.0707 }).couples[0];
     expect(c?.regime).toBe('surface');
     expect(c?.surface?.coverageFromChargeMolPerCm2).toBeCloseTo(gamma, 16);
-    expect(c?.surface?.coverageFromSlopeMolPerCm2).toBeCloseTo(gamma, 16);
+    expect(Math.abs(c!.surface!.coverageFromSlopeMolPerCm2! / gamma - 1)).toBeLessThan(1e-9);
+    expect(c?.surface?.coverageFromSlopeForm).toBe('laviron-irreversible');
+    expect(c?.surface?.coverageFromSlopeFileCount).toBe(3);
+    expect(c?.alpha).toBeCloseTo(0.5, 8);
     expect(c?.logLog?.reading).toBe('adsorbed-or-capacitive');
     expect(c?.surface?.lavironAlpha).toBeCloseTo(0.5, 8);
     expect(c?.surface?.ksPerS).toBeCloseTo(5, 6);

@@ -11,31 +11,25 @@
  */
 import { thermalVoltageV } from '../constants';
 import { AnalysisError, assertFiniteInRange } from '../errors';
-import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
-import { electroactiveAreaFromStandard } from '../series';
-import { median } from '../statistics/median';
 import { matchSeriesCouples } from './matchSeriesCouples';
 import { resolveCell, resolveMethod } from './resolveRun';
 import type { CoupleRef } from './matchSeriesCouples';
-import { classifySeriesCouple, mostCommon, suggestedElectronCount } from '../series/classifySeriesCouple';
-import { describeSeriesCouple } from './seriesDiagnostics';
-import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, seriesDiffusion } from './seriesFits';
+import { mostCommon, suggestedElectronCount } from '../series/classifySeriesCouple';
 import type { ResolvedSeriesOptions } from './seriesFits';
-import { seriesFollowUp, seriesRateConstant, seriesSurface } from './seriesKinetics';
+import { buildSeriesCouple } from './seriesCouple';
 import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesWarning } from './seriesTypes';
 import type { SeriesPoint } from '../series/seriesPoint';
 import type { CycleAnalysis } from './types';
-import type { SeriesEvidence, Verdict } from '../couples/coupleTypes';
 
 /** Checks the series options and fills in the defaults (the run does this once in resolveRun). */
 export function resolveSeriesOptions(options: AnalyzeSeriesOptions): ResolvedSeriesOptions {
-  const { cycle, matchToleranceV, ...cell } = options;
+  const { cycle, matchToleranceV, psiMethod, ...cell } = options;
   const c = resolveCell(cell);
-  const r = resolveMethod({ seriesCycle: cycle ?? 1, matchToleranceV: matchToleranceV ?? 0.12 });
+  const r = resolveMethod({ seriesCycle: cycle ?? 1, matchToleranceV: matchToleranceV ?? 0.12, psiMethod: psiMethod ?? 'table' });
   return {
     electronCount: c.electronCount, areaCm2: c.areaCm2, concentrationMolPerCm3: c.concentrationMolPerCm3, temperatureK: c.temperatureK, alpha: c.alpha,
     transferElectronCount: c.transferElectronCount, diffusionRatio: c.diffusionRatio, diffusionCm2PerS: c.diffusionCm2PerS,
-    cycle: r.seriesCycle, matchToleranceV: r.matchToleranceV,
+    formalPotentialV: c.formalPotentialV, ruOhm: c.ruOhm, cycle: r.seriesCycle, matchToleranceV: r.matchToleranceV, psiMethod: r.psiMethod,
   };
 }
 
@@ -52,6 +46,8 @@ function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): S
   const c = ref.couple;
   const forwardIndex = c.forwardDirection === 'anodic' ? c.anodicPeak : c.cathodicPeak;
   const fwd = forwardIndex === null ? null : (cycle.peaks[forwardIndex] ?? null);
+  const raw = (k: number | null) => (k === null ? null : (cycle.peaks[k]?.rawCurrentA ?? null));
+  const [ia, ic] = [raw(c.anodicPeak), raw(c.cathodicPeak)];
   return {
     fileIndex: ref.fileIndex,
     fileName: file.fileName,
@@ -71,67 +67,9 @@ function toPoint(ref: CoupleRef, file: SeriesFileInput, cycle: CycleAnalysis): S
     verdict: c.verdict.category,
     nicholsonRatio: c.nicholsonRatio,
     switchPotentialV: c.switchPotentialV ?? null,
+    reversibleDeltaEpV: c.verdict.evidence.reversibleDeltaEpAtSwitchV ?? c.verdict.evidence.reversibleDeltaEpLimitV,
+    peakCurrentSpanA: ia !== null && ic !== null ? ia - ic : null,
   };
-}
-
-/** A of a reversible standard of known D from its forward slope (electroactiveAreaFromStandard.ts). */
-function electroactiveArea(fit: SeriesCouple['forwardFit'], reversible: boolean, o: ResolvedSeriesOptions): number | null {
-  if (!fit || !reversible || o.diffusionCm2PerS === null || o.concentrationMolPerCm3 === null) return null;
-  return electroactiveAreaFromStandard(
-    { slopeAPerSqrtVPerS: fit.slope, electronCount: o.electronCount, concentrationMolPerCm3: o.concentrationMolPerCm3, diffusionCm2PerS: o.diffusionCm2PerS },
-    { temperatureK: o.temperatureK },
-  );
-}
-
-/** The single-trace verdict refined with what the series shows (two scan rates at least). */
-function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>): Verdict {
-  const e: SeriesEvidence = { count: new Set(c.points.map((p) => p.scanRateVPerS)).size };
-  if ((e.count ?? 0) < 2) return first;
-  if (c.logLog) e.logLogSlope = c.logLog.slope;
-  if (c.peakShift.anodic) e.epaShiftVPerDecade = c.peakShift.anodic.slopeVPerDecade;
-  if (c.peakShift.cathodic) e.epcShiftVPerDecade = c.peakShift.cathodic.slopeVPerDecade;
-  if (c.forwardFit) e.sqrtScanRateR2 = c.forwardFit.r2;
-  const linear = fitAgainstScanRate(c.points, (p) => p.forwardIpA);
-  if (linear) e.scanRateR2 = linear.r2;
-  const refined = refineVerdictWithSeries(first, e);
-  if (c.regime !== 'surface' || c.kineticClass !== 'quasi-reversible' || refined.category !== 'adsorbed') return refined;
-  // The slowest file of a slow film looks Nernstian; the series shows the Laviron regime.
-  return { ...refined, label: 'surface-confined (adsorbed; slow electron transfer, Laviron)', reasons: [...refined.reasons, c.diagnostics[0] ?? ''].filter(Boolean) };
-}
-
-function buildCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
-  const forward = first.forwardDirection;
-  const logLog = fitLogLog(points);
-  const { regime, kineticClass, majority } = classifySeriesCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
-  const forwardFit = fitForwardAgainstSqrtScanRate(points);
-  const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
-  const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
-  const surface = regime === 'surface' ? seriesSurface(points, o) : null;
-  const diffusion = regime === 'diffusion' ? seriesDiffusion(forwardFit, kineticClass, forwardShift, points, o, forward).diffusion : null;
-  const rateConstant = regime === 'diffusion' ? seriesRateConstant(points, forward, diffusion, o, forwardShift?.alpha ?? null, kineticClass === 'reversible') : null;
-  const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
-  const couple: Omit<SeriesCouple, 'verdict'> = {
-    index,
-    eHalfV: halves.length ? median(halves) : null,
-    forwardDirection: forward,
-    points,
-    regime,
-    kineticClass,
-    followUp: regime === 'diffusion' && majority === 'chemically-coupled' ? seriesFollowUp(points, o) : null,
-    forwardFit,
-    anodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipaA),
-    cathodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipcA),
-    diffusion,
-    logLog,
-    peakShift,
-    alpha: regime === 'diffusion' && kineticClass === 'irreversible' ? (diffusion?.alphaUsed ?? forwardShift?.alpha ?? null) : null,
-    rateConstant,
-    electroactiveAreaCm2: electroactiveArea(forwardFit, regime === 'diffusion' && kineticClass === 'reversible', o),
-    surface,
-    diagnostics: [],
-  };
-  couple.diagnostics = describeSeriesCouple(couple, o);
-  return { ...couple, verdict: seriesVerdict(first.verdict, couple) };
 }
 
 export function analyzeSeries(files: SeriesFileInput[], options: AnalyzeSeriesOptions = {}): SeriesAnalysis {
@@ -154,7 +92,7 @@ export function analyzeResolvedSeries(files: SeriesFileInput[], o: ResolvedSerie
     // The series verdict refines the single-trace verdict most files agree on, not the first file's.
     const majority = mostCommon(g.map((ref) => ref.couple.verdict.category));
     const representative = g.find((ref) => ref.couple.verdict.category === majority) ?? (g[0] as CoupleRef);
-    return buildCouple(index, points, representative.couple, o);
+    return buildSeriesCouple(index, points, representative.couple, o);
   });
   warnings.push(...seriesWarnings(files, couples, o));
   return { couples, warnings };
@@ -175,9 +113,13 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
     if (c.points.length < files.length && files.length > 1) {
       out.push({ code: 'UNMATCHED_COUPLE', couple: c.index, message: `couple ${c.index} (E½ ≈ ${c.eHalfV?.toFixed(3) ?? '?'} V) is found in ${c.points.length} of ${files.length} files` });
     }
-    if (c.rateConstant && c.rateConstant.k0CmPerS === null && c.kineticClass !== 'reversible') {
-      out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: k° not determinable (${c.rateConstant.perFile.find((f) => f.reason)?.reason ?? 'no D available'})` });
+    const k = c.rateConstant;
+    if (k && k.status !== 'value' && (k.status === 'cannot-tell' || c.kineticClass !== 'reversible')) {
+      const what = k.status === 'lower-bound' ? `k° is only a lower bound${k.lowerBoundCmPerS !== null ? ` (≥ ${k.lowerBoundCmPerS.toExponential(2)} cm/s)` : ''}` : 'k° cannot be told';
+      out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: ${what}: ${k.reason ?? 'no file gave k°'}` });
     }
+    if (c.diffusion?.status === 'range-only') out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: ${c.diffusion.note ?? 'D cannot be told'}` });
+    if (c.transferCoefficient?.note) out.push({ code: 'ELECTRON_COUNT', couple: c.index, message: `couple ${c.index}: ${c.transferCoefficient.note}` });
     const hint = c.regime === 'diffusion' ? suggestedElectronCount(c.points, o.electronCount, o.temperatureK) : null;
     if (hint) {
       out.push({ code: 'ELECTRON_COUNT', couple: c.index, message: `couple ${c.index}: forward |Ep − Ep/2| = ${(hint.halfPeakWidthV * 1000).toFixed(1)} mV is narrower than any diffusing couple with n = ${o.electronCount} (2.20RT/nF = ${((2.2 * thermalVoltageV(o.temperatureK) * 1000) / o.electronCount).toFixed(1)} mV) and reads as n ≈ ${hint.electronCount}; D (∝ n⁻³) and k° assume n = ${o.electronCount} — rerun with n = ${hint.electronCount} if that is the couple's electron count` });

@@ -17,10 +17,11 @@ import { AnalysisError, assertFiniteInRange, assertSameLength } from '../errors'
 import { toIupacCurrent } from '../conventions/currentConvention';
 import type { Voltammogram } from '../types';
 import { prepareSweepSignals, windowForSpan, type SweepSignals } from '../peaks/sweepSignals';
+import { hampelSpikes } from '../peaks/hampelSpikes';
 import { analyzeCycle } from './analyzeCycle';
 import { resolveCell, resolveMethod } from './resolveRun';
 import { STANDARD_TEMPERATURE_K } from '../constants';
-import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, VoltammogramAnalysis } from './types';
+import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, SpikePoint, VoltammogramAnalysis } from './types';
 
 export function analyzeVoltammogram(v: Voltammogram, options: AnalyzeVoltammogramOptions = {}): VoltammogramAnalysis {
   checkVoltammogram(v);
@@ -39,12 +40,16 @@ export function analyzeResolvedVoltammogram(v: Voltammogram, trace: TraceOptions
   const first = v.segments[0]!;
   const locatingSmoothing = { window: windowForSpan(v.potentialV, first, 0.015 / trace.electronCount), order: 2 };
   const resolved: ResolvedAnalyzeOptions = { ...trace, locatingSmoothing };
+  const iupac = toIupacCurrent(v.currentA, resolved.currentConvention);
+  const cleaned = resolved.spikeFilter === 'off' ? null : hampelSpikes(iupac, v.segments);
+  const spikes: SpikePoint[] = (cleaned?.indices ?? []).map((index) => ({ index, potentialV: v.potentialV[index]!, currentA: iupac[index]!, replacedByA: cleaned!.cleanedA[index]! }));
   const sig = prepareSweepSignals(
-    { potentialV: v.potentialV, currentA: toIupacCurrent(v.currentA, resolved.currentConvention), timeS: v.timeS, scanRateVPerS: resolved.scanRateVPerS, segments: v.segments },
+    { potentialV: v.potentialV, currentA: cleaned?.cleanedA ?? iupac, timeS: v.timeS, scanRateVPerS: resolved.scanRateVPerS, segments: v.segments },
     resolved.smoothing,
     (seg) => ({ window: windowForSpan(v.potentialV, seg, 0.015 / resolved.electronCount), order: 2 }),
   );
   const warnings: AnalysisWarning[] = [];
+  if (spikes.length) warnings.push({ code: 'SPIKES', message: spikeMessage(spikes) });
   if (!sig.timeKnown) warnings.push({ code: 'NO_TIME_AXIS', message: 'no time column and no scan rate: peak charges are not computed' });
   const range = currentRange(sig);
   const scale = Math.max(...[currentRangeEnd(sig, 1), -currentRangeEnd(sig, -1)].map(Math.abs));
@@ -64,7 +69,13 @@ export function analyzeResolvedVoltammogram(v: Voltammogram, trace: TraceOptions
     peakThresholdA,
     options: resolved,
     warnings,
+    spikes,
   };
+}
+
+function spikeMessage(spikes: SpikePoint[]): string {
+  const shown = spikes.slice(0, 8).map((p) => `${(p.currentA * 1e6).toPrecision(3)} µA at ${p.potentialV.toFixed(3)} V (point ${p.index})`).join(', ');
+  return `${spikes.length} isolated bad point${spikes.length > 1 ? 's' : ''} left out of peak finding and baselines (Hampel test against a running median): ${shown}${spikes.length > 8 ? ', …' : ''}`;
 }
 
 /** Largest (sign 1) or smallest (sign −1) located current. */
@@ -115,6 +126,6 @@ export function resolveTraceOptions(v: Voltammogram, o: AnalyzeVoltammogramOptio
     temperatureK, electronCount, smoothing: method.smoothing, currentConvention: o.currentConvention ?? 'iupac',
     peakWindows: o.peakWindows ?? [], baselines: o.baselines ?? [], forwardBaseline: method.forwardBaseline, returnBaseline: method.returnBaseline,
     minSignalToNoise: method.minSignalToNoise, minProminenceA: method.minProminenceA, minRelativeProminence: method.minRelativeProminence,
-    maxDeltaEpV: method.maxDeltaEpV, scanRateVPerS, cycles,
+    maxDeltaEpV: method.maxDeltaEpV, scanRateVPerS, cycles, spikeFilter: method.spikeFilter,
   };
 }

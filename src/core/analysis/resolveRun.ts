@@ -71,8 +71,9 @@ export function resolveCell(c: CellValues = {}): ResolvedCell {
     areaCm2: optional('electrode area (cm²)', c.areaCm2, Number.MIN_VALUE),
     concentrationMolPerCm3: optional('concentration (mol/cm³)', c.concentrationMolPerCm3, Number.MIN_VALUE),
     temperatureK,
-    alpha: optional('transfer coefficient α', c.alpha, 0.01, 0.99),
+    alpha: optional('cathodic transfer coefficient αc', c.alpha, 0.05, 0.95),
     transferElectronCount,
+    formalPotentialV: optional('formal potential E°′ (V)', c.formalPotentialV, -10, 10),
     diffusionRatio,
     diffusionCm2PerS: optional('diffusion coefficient D (cm²/s)', c.diffusionCm2PerS, Number.MIN_VALUE),
     ruOhm,
@@ -104,7 +105,11 @@ export function resolveMethod(m: MethodOptions = {}): ResolvedMethod {
     maxDeltaEpV: m.maxDeltaEpV ?? 0.6,
     seriesCycle: m.seriesCycle ?? 1,
     matchToleranceV: m.matchToleranceV ?? 0.12,
+    psiMethod: m.psiMethod ?? 'table',
+    spikeFilter: m.spikeFilter ?? 'hampel',
   };
+  if (r.spikeFilter !== 'hampel' && r.spikeFilter !== 'off') throw new AnalysisError('BAD_OPTION', `spike filter must be hampel or off, got ${String(r.spikeFilter)}`);
+  if (r.psiMethod !== 'table' && r.psiMethod !== 'lavagnini') throw new AnalysisError('BAD_OPTION', `ψ method must be table or lavagnini, got ${String(r.psiMethod)}`);
   if (!['linear', 'polynomial'].includes(r.forwardBaseline)) throw new AnalysisError('BAD_OPTION', `forward baseline must be linear or polynomial, got ${r.forwardBaseline}`);
   if (!['linear', 'polynomial', 'nicholson'].includes(r.returnBaseline)) throw new AnalysisError('BAD_OPTION', `return baseline must be linear, polynomial or nicholson, got ${r.returnBaseline}`);
   assertFiniteInRange('minimum signal-to-noise', r.minSignalToNoise, 0);

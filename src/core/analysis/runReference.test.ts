@@ -50,7 +50,11 @@ describe('fileReference', () => {
     const results = refs.map((reference) => ({ reference }) as RunFileResult);
     expect(describeSeriesReferences(results, 'Fc', 298.15).warnings.some((w) => /typical/.test(w.message))).toBe(true);
   });
-  it('warns that tabulated offsets are 25 °C values at 40 °C', () => {
-    expect(describeSeriesReferences([], 'SCE', 313.15).warnings.some((w) => w.code === 'TEMPERATURE')).toBe(true);
+  // Ives & Janz (1961, from memory) give calomel's temperature dependence; none is applied to Hg/Hg₂SO₄.
+  it('at 40 °C says which scales carry a temperature coefficient and which stay at 25 °C', () => {
+    const sce = describeSeriesReferences([], 'SCE', 313.15).warnings.filter((w) => w.code === 'TEMPERATURE');
+    expect(sce.map((w) => w.message).join(' ')).toMatch(/SCE taken at 40\.0 °C with its published temperature dependence/);
+    const mse = describeSeriesReferences([], 'MSE-sat', 313.15).warnings.filter((w) => w.code === 'TEMPERATURE');
+    expect(mse.map((w) => w.message).join(' ')).toMatch(/no published temperature coefficient for MSE-sat/);
   });
 });

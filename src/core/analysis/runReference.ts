@@ -9,7 +9,7 @@
  */
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { AnalysisError } from '../errors';
-import { findReferenceElectrode, referenceOffset, resolveReferenceId } from '../reference';
+import { findReferenceElectrode, referenceOffset, referenceTemperatureShift, resolveReferenceId } from '../reference';
 import type { ConversionContext, ReferenceId } from '../reference';
 import { median } from '../statistics/median';
 import { kelvinToCelsius } from '../units';
@@ -103,8 +103,12 @@ export function describeSeriesReferences(files: RunFileResult[], output: Referen
     const entry = findReferenceElectrode(id);
     if (entry?.status === 'sources-disagree' && entry.note) warnings.push({ code: 'REFERENCE', message: `${entry.label}: ${entry.note}` });
   }
-  if (Math.abs(temperatureK - STANDARD_TEMPERATURE_K) > 5) {
-    warnings.push({ code: 'TEMPERATURE', message: `reference offsets are 25 °C values; at ${kelvinToCelsius(temperatureK).toFixed(1)} °C they may be off by several mV` });
+  if (Math.abs(temperatureK - STANDARD_TEMPERATURE_K) > 1) {
+    const at = `${kelvinToCelsius(temperatureK).toFixed(1)} °C`;
+    const without = [...used].filter((id) => !['SHE', 'RHE', 'Fc'].includes(id) && referenceTemperatureShift(id, 0, temperatureK) === null);
+    const withCoefficient = [...used].filter((id) => referenceTemperatureShift(id, 0, temperatureK) !== null);
+    if (without.length) warnings.push({ code: 'TEMPERATURE', message: `no published temperature coefficient for ${without.join(', ')}: the 25 °C values of the scales are used at ${at} and may be off by several mV` });
+    else if (withCoefficient.length) warnings.push({ code: 'TEMPERATURE', message: `${withCoefficient.join(', ')} taken at ${at} with its published temperature dependence (see the reference basis)` });
   }
   return { basis, warnings };
 }

@@ -87,10 +87,19 @@ export interface CellValues {
   concentrationMolPerCm3?: number | null;
   /** Temperature (K). @default 298.15 */
   temperatureK?: number;
-  /** Transfer coefficient α given by the user; measured or 0.5 otherwise. @default null */
+  /**
+   * αc, the cathodic transfer coefficient (of the reduction O + ne⁻ → R, as the simulator reads
+   * it); an oxidation wave runs with 1 − αc. Measured for a totally irreversible series, else
+   * assumed 0.5 with 0.3–0.7 carried into D and k°. @default null
+   */
   alpha?: number | null;
-  /** Electrons in the rate-determining step nₐ (irreversible form). @default 1 */
+  /** Electrons in the rate-determining step nₐ: the irreversible equations use α·nₐ. @default 1 */
   transferElectronCount?: number;
+  /**
+   * E°′ of the couple (V, on the reported scale) when known from elsewhere: k° of a totally
+   * irreversible couple then comes from the forward peak alone. @default null
+   */
+  formalPotentialV?: number | null;
   /** D_O/D_R for Nicholson's k°. @default 1 */
   diffusionRatio?: number;
   /** Known D of the bulk species (cm²/s), used for k° and the electroactive area. @default null */
@@ -137,6 +146,10 @@ export interface MethodOptions {
   seriesCycle?: number;
   /** Largest E½ move between neighbouring scan rates for one couple (V). @default 0.12 */
   matchToleranceV?: number;
+  /** ψ from ΔEp (α = 0.5): Nicholson's 1965 table, interpolated, or the Lavagnini et al. 2004 fit. @default 'table' */
+  psiMethod?: 'table' | 'lavagnini';
+  /** Isolated bad points: found by a Hampel test against a running median and left out ('hampel'), or kept ('off'). @default 'hampel' */
+  spikeFilter?: 'hampel' | 'off';
 }
 
 /** How results are reported. */
@@ -174,6 +187,7 @@ export interface ResolvedCell {
   temperatureK: number;
   alpha: number | null;
   transferElectronCount: number;
+  formalPotentialV: number | null;
   diffusionRatio: number;
   diffusionCm2PerS: number | null;
   ruOhm: number;

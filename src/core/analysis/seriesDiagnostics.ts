@@ -1,10 +1,13 @@
 /**
  * Plain-words statements of what a scan-rate series shows for one couple, each with its number
- * and the expectation it is compared with.
+ * and the expectation it is compared with, and what its E½ means.
  * Expectations: reversible Ep independent of v and ip ∝ v^½ (J. Wang, Analytical
  *   Electrochemistry 2nd ed. (2000) §2-1.1.1); irreversible |dEp/d log v| = 29.58/(α nₐ) mV per
  *   decade at 25 °C (Wang eq. 2-5); log–log slope 0.5 diffusion, 1 adsorbed (bands: common
  *   practice, no source); linearity threshold R² ≥ 0.98 is common practice, no source.
+ *   E½ = E°′ + (RT/2nF)·ln(D_R/D_O) for a reversible couple (Bard & Faulkner 2nd ed. §6.2); for slow
+ *   electron transfer the peaks move apart by RT/(αnₐF) and RT/((1 − α)nₐF) per unit of ln v
+ *   (Wang eq. 2-5; Laviron 1979 for films), so their midpoint is E°′ only for α = 0.5.
  */
 import { formatMillivolts } from '../units';
 import type { ResolvedSeriesOptions } from './seriesFits';
@@ -12,6 +15,7 @@ import type { SeriesCouple } from './seriesTypes';
 
 const mv = formatMillivolts;
 const sci = (v: number, d = 3) => v.toExponential(d - 1);
+const span = (r: [number, number] | null | undefined, unit: string) => (r ? `; range ${sci(r[0])}–${sci(r[1])} ${unit}` : '');
 
 function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const out: string[] = [];
@@ -19,11 +23,9 @@ function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
   if (halves.length >= 2) out.push(`E½ spans ${mv(Math.max(...halves) - Math.min(...halves))} over the series`);
   const shift = c.forwardDirection === 'anodic' ? c.peakShift.anodic : c.peakShift.cathodic;
   if (shift && c.regime === 'surface') {
-    // Laviron, J. Electroanal. Chem. 101 (1979) 19 (from memory): far from E°′ each peak moves
-    // 2.303RT/(αnF) or 2.303RT/((1 − α)nF) per decade.
-    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate over the whole series (Nernstian film: 0; Laviron, n·ΔEp > 200 mV: 2.303RT/((1 − α)nF) or 2.303RT/(αnF), 118 mV for α = 0.5)`);
+    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate over the whole series (Nernstian film: 0; Laviron, n·ΔEp > 200 mV: 2.303RT/((1 − αc)nF) anodic or 2.303RT/(αc·nF) cathodic, 118 mV for αc = 0.5)`);
   } else if (shift) {
-    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate (reversible: 0; totally irreversible: ±29.6/(αnₐ) mV)`);
+    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate (reversible: 0; totally irreversible: ±29.6/(αnₐ) mV, αnₐ of the forward wave)`);
   }
   return out;
 }
@@ -46,42 +48,57 @@ function describeLines(c: Omit<SeriesCouple, 'verdict'>): string[] {
   return out;
 }
 
-function describeResults(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {
+function describeDiffusion(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {
   const out: string[] = [];
-  if (c.diffusion) {
-    const a = c.diffusion.alphaUsed === null ? '' : `, α = ${c.diffusion.alphaUsed.toFixed(2)} ${c.diffusion.alphaSource ?? ''}`;
-    out.push(`D = ${sci(c.diffusion.diffusionCm2PerS)} cm²/s (Randles–Ševčík, ${c.diffusion.form} form${a})`);
-    if (c.diffusion.note) out.push(c.diffusion.note);
+  if (c.transferCoefficient) out.push(c.transferCoefficient.text);
+  const d = c.diffusion;
+  if (d) {
+    out.push(d.status === 'range-only'
+      ? `D cannot be told on its own${span(d.rangeCm2PerS, 'cm²/s')}`
+      : `D = ${sci(d.diffusionCm2PerS)} cm²/s (Randles–Ševčík, ${d.form} form${d.alphaUsed === null ? '' : `, αc = ${d.alphaUsed.toFixed(2)}`})${span(d.rangeCm2PerS, 'cm²/s')}`);
+    if (d.note) out.push(d.note);
   }
   if (c.electroactiveAreaCm2 !== null) out.push(`electroactive area ${c.electroactiveAreaCm2.toFixed(4)} cm² from the slope and the given D (${o.diffusionCm2PerS} cm²/s)`);
+  if (c.ohmic) out.push(c.ohmic.text);
   const k = c.rateConstant;
-  if (k?.k0CmPerS != null) {
+  if (k?.status === 'value' && k.k0CmPerS !== null) {
     const used = k.perFile.filter((f) => f.k0CmPerS !== null);
-    const names = [...new Set(used.map((f) => (f.method === 'irreversible' ? 'both irreversible peaks, Wang eq. 2-5' : "Nicholson's ψ")))].join(' and ');
-    out.push(`k° = ${sci(k.k0CmPerS)} cm/s (${names}; median of ${used.length} file${used.length > 1 ? 's' : ''}; D_O/D_R = ${o.diffusionRatio}; D ${k.diffusionSource ?? ''})`);
-  } else if (k?.lowerBoundCmPerS != null) {
-    out.push(`ΔEp stays near the reversible value (below the 61 mV start of Nicholson's table) at most scan rates: k° > ${sci(k.lowerBoundCmPerS, 2)} cm/s`);
+    const names = [...new Set(used.map((f) => (f.method === 'nicholson' ? `Nicholson's ψ (${o.psiMethod === 'table' ? 'table' : 'Lavagnini fit'})` : f.method === 'forward-peak' ? 'forward peak, eq. 2-5, E°′ given' : 'forward peak, eq. 2-5, E°′ from the return peak with simulated departures')))].join(' and ');
+    out.push(`k° = ${sci(k.k0CmPerS)} cm/s (${names}; median of ${used.length} file${used.length > 1 ? 's' : ''}; D_O/D_R = ${o.diffusionRatio}; D ${k.diffusionSource ?? ''})${span(k.rangeCmPerS, 'cm/s over αc')}`);
+  } else if (k?.status === 'lower-bound') {
+    out.push(`k° ≥ ${k.lowerBoundCmPerS === null ? '?' : sci(k.lowerBoundCmPerS, 2)} cm/s only: ${k.reason ?? ''}`);
+  } else if (k?.status === 'cannot-tell') {
+    out.push(`k° cannot be told: ${k.reason ?? ''}`);
   }
+  if (k?.formalPotentialV != null) out.push(`E°′ = ${k.formalPotentialV.toFixed(4)} V (${k.formalPotentialSource ?? ''})`);
+  return out;
+}
+
+function describeFollowUp(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const fu = c.followUp;
-  if (fu?.rateConstantPerS != null) {
-    const used = fu.perFile.filter((f) => f.rateConstantPerS !== null).length;
-    out.push(`k_f = ${sci(fu.rateConstantPerS)} 1/s (first-order follow-up reaction, from the return/forward ratio (Nicholson 1966) on a simulated Nicholson–Shain working curve; median of ${used} file${used > 1 ? 's' : ''}; assumes fast electron transfer)`);
-  } else if (fu) {
-    out.push(`k_f not determinable: ${fu.perFile.find((f) => f.reason)?.reason ?? 'no usable ratio'}`);
-  }
+  if (!fu) return [];
+  const out = [...fu.evidence];
+  if (fu.rateConstantPerS !== null) out.push(`k_f = ${sci(fu.rateConstantPerS)} 1/s (first-order follow-up reaction, one value for all files from their Nicholson (1966) ratios on a simulated Nicholson–Shain working curve; assumes fast electron transfer)${span(fu.rangePerS, '1/s')}`);
+  else if (fu.lowerBoundPerS !== null) out.push(`k_f ≥ ${sci(fu.lowerBoundPerS, 2)} 1/s only (zone: ${fu.zone})`);
+  else out.push(`k_f not determinable: ${fu.perFile.find((f) => f.reason)?.reason ?? 'no usable ratio'}`);
+  return out;
+}
+
+function describeSurface(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const s = c.surface;
-  if (s) {
-    if (s.coverageFromChargeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromChargeMolPerCm2)} mol/cm² from the peak charge`);
-    const files = s.coverageFromSlopeFileCount === undefined ? '' : `, ${s.coverageFromSlopeFileCount} file${s.coverageFromSlopeFileCount === 1 ? '' : 's'}`;
-    if (s.coverageFromSlopeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromSlopeMolPerCm2)} mol/cm² from the slope of ip against v (ideal Nernstian film${files})`);
-    if (s.ksPerS !== null) out.push(`Laviron k_s = ${sci(s.ksPerS)} 1/s (files with n·ΔEp > 200 mV)`);
-  }
+  if (!s) return [];
+  const out: string[] = [];
+  if (s.coverageFromChargeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromChargeMolPerCm2)} mol/cm² from the peak charge`);
+  if (s.coverageFromSlopeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromSlopeMolPerCm2)} mol/cm² from the slope of ip against v (${s.coverageFromSlopeNote ?? ''})`);
+  else if (s.coverageFromSlopeNote) out.push(`no Γ from the ip–v slope: ${s.coverageFromSlopeNote}`);
+  if (s.lavironAlpha !== null) out.push(`Laviron αc = ${s.lavironAlpha.toFixed(3)} (cathodic transfer coefficient, from the Ep–log v lines of the files with n·ΔEp > 200 mV)`);
+  if (s.ksPerS !== null) out.push(`Laviron k_s = ${sci(s.ksPerS)} 1/s (files with n·ΔEp > 200 mV)`);
   return out;
 }
 
 /** First line: transport regime and kinetics in words; for a surface couple with the ΔEp evidence. */
 function describeRegime(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string {
-  if (c.regime !== 'surface') return `${c.regime}, ${c.kineticClass}`;
+  if (c.regime !== 'surface') return `${c.regime}, ${c.kineticClass}${c.followUp ? `, with a follow-up reaction (${c.followUp.zone} zone)` : ''}`;
   const pts = c.points.filter((p) => p.deltaEpV !== null).sort((a, b) => a.scanRateVPerS - b.scanRateVPerS);
   const first = pts[0];
   const last = pts[pts.length - 1];
@@ -93,6 +110,17 @@ function describeRegime(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptio
   return 'surface, electron-transfer rate not determined from ΔEp';
 }
 
+/** What the couple's E½ is. */
+export function describeHalfWave(c: Omit<SeriesCouple, 'verdict'>): string {
+  if (c.followUp) return 'E½ is the peak midpoint (Epa + Epc)/2; the follow-up reaction moves the forward peak, so it is not E°′';
+  if (c.regime === 'surface') {
+    return c.kineticClass === 'reversible' ? 'E½ ≈ E°′ of the film (Nernstian, ΔEp ≈ 0)' : 'E½ is the peak midpoint of a slow film, not E°′: the peaks move apart unequally unless αc = 0.5 (Laviron 1979)';
+  }
+  if (c.kineticClass === 'reversible') return 'E½ = (Epa + Epc)/2 ≈ E°′ + (RT/2nF)·ln(D_R/D_O): E°′ when D_O = D_R';
+  const e0 = c.rateConstant?.formalPotentialV;
+  return `E½ is the peak midpoint (Epa + Epc)/2, not E°′: slow electron transfer moves the peaks apart unequally unless αc = 0.5${e0 != null ? `; E°′ = ${e0.toFixed(4)} V from the peak equation` : ''}`;
+}
+
 export function describeSeriesCouple(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {
-  return [describeRegime(c, o), ...describeDrift(c), ...describeLines(c), ...describeResults(c, o)];
+  return [describeRegime(c, o), ...describeDrift(c), ...describeLines(c), ...describeDiffusion(c, o), ...describeFollowUp(c), ...describeSurface(c), describeHalfWave(c)];
 }

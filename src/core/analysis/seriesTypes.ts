@@ -6,12 +6,13 @@
  */
 import type { FitLineResult } from '../regression';
 import type { LogLogReading, PeakPotentialVsLogScanRateResult, RandlesSevcikForm } from '../series';
-import type { NicholsonPsiResult } from '../kinetics';
+import type { NicholsonPsiMethod, NicholsonPsiResult } from '../kinetics';
 import type { CellValues } from './runTypes';
 import type { VoltammogramAnalysis } from './types';
 import type { Verdict } from '../couples/coupleTypes';
 import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from '../series/seriesPoint';
 import type { PeakDirection } from '../peaks/peakTypes';
+import type { OhmicWideningResult } from '../series/ohmicWidening';
 
 /** One voltammogram of a series, already analysed. */
 export interface SeriesFileInput {
@@ -20,25 +21,62 @@ export interface SeriesFileInput {
   analysis: VoltammogramAnalysis;
 }
 
-/** Options of a standalone series analysis: the series' cell values, the cycle and the matching tolerance. */
+/** Options of a standalone series analysis: the series' cell values, the cycle, the matching tolerance and the ψ method. */
 export type AnalyzeSeriesOptions = Pick<CellValues, 'electronCount' | 'areaCm2' | 'concentrationMolPerCm3' | 'temperatureK' | 'alpha'
-  | 'transferElectronCount' | 'diffusionRatio' | 'diffusionCm2PerS'> & {
+  | 'transferElectronCount' | 'diffusionRatio' | 'diffusionCm2PerS' | 'formalPotentialV' | 'ruOhm'> & {
   /** 1-based cycle used from each file. @default 1 */
   cycle?: number;
   /** Largest E½ (or Ep) move between neighbouring scan rates for one couple (V). @default 0.12 */
   matchToleranceV?: number;
+  /** ψ from ΔEp at α = 0.5: Nicholson's table or the Lavagnini fit. @default 'table' */
+  psiMethod?: NicholsonPsiMethod;
 };
 
-/** First-order follow-up reaction of an EC couple (followUpRateConstant.ts). */
+/** Words that go with every α the series reports. */
+export const ALPHA_MEANING = 'αc: cathodic transfer coefficient, of the reduction O + ne⁻ → R (an oxidation wave runs with 1 − αc); αnₐ: α times the electrons in the rate-determining step, of the forward (first-sweep) wave';
+
+/** The transfer coefficient a series couple uses, whose it is and where it came from. */
+export interface SeriesTransferCoefficient {
+  /** αc, the cathodic transfer coefficient; null when a measured αnₐ is impossible with the given nₐ. */
+  alphaC: number | null;
+  /** αc over which D and k° are given: [αc, αc] when given, the measured interval, 0.3–0.7 when assumed. */
+  alphaCRange: [number, number] | null;
+  /** α·nₐ of the forward wave: αc·nₐ (reduction first) or (1 − αc)·nₐ (oxidation first). */
+  forwardAlphaNa: number;
+  forwardAlphaNaRange: [number, number];
+  forwardWave: PeakDirection;
+  transferElectronCount: number;
+  source: 'given' | 'peak-shift' | 'half-peak-width' | 'assumed';
+  /** The value, whose α it is and where it came from, in words. */
+  text: string;
+  /** Why a measured value was set aside, or that it does not fit nₐ. */
+  note: string | null;
+}
+
+/** First-order follow-up reaction of an EC couple (followUpRateConstant.ts, series/followUpSignature.ts). */
 export interface SeriesFollowUp {
-  /** Median k_f over the files where it was determinable (1/s). */
+  /** k_f from all the files' ratios at once (1/s); null when it cannot be told. */
   rateConstantPerS: number | null;
+  /** Smallest and largest single-file k_f (1/s). */
+  rangePerS: [number, number] | null;
+  /** k_f is at least this (1/s) when the return peak is nearly gone at some rate. */
+  lowerBoundPerS: number | null;
+  /** How the follow-up reaction was recognised, each with its numbers. */
+  evidence: string[];
+  /** Nicholson & Shain's zones over the series: λ = k_f·RT/(nFv) below 0.1, 0.1–5, above 5, or mixed/unknown. */
+  zone: 'diffusion' | 'intermediate' | 'kinetic' | 'mixed' | 'unknown';
   perFile: Array<{ fileIndex: number; rateConstantPerS: number | null; lambda: number | null; reason: string | null }>;
 }
 
 export interface SeriesDiffusion {
+  /**
+   * Headline D (cm²/s). With status 'range-only' D cannot be separated from another unknown (k_f):
+   * this is then the geometric middle of rangeCm2PerS, never to be reported alone.
+   */
   diffusionCm2PerS: number;
-  /** From the ends of the slope's 95 % interval, when it has one. */
+  /** 'value', or 'range-only' when only rangeCm2PerS can be told (note says why). @default 'value' */
+  status?: 'value' | 'range-only';
+  /** From the ends of the slope's 95 % interval, at the headline α. */
   intervalCm2PerS: [number, number] | null;
   /** Standard error of the slope D came from, relative to the slope; null without a degree of freedom. */
   slopeRelativeStdError: number | null;
@@ -48,45 +86,65 @@ export interface SeriesDiffusion {
    * (combinedDiffusionInterval.ts); set by the run, null when the slope has no standard error.
    */
   combinedIntervalCm2PerS?: [number, number] | null;
-  form: RandlesSevcikForm;
-  /** α used by the irreversible form, with its origin. */
+  /** Over the slope's interval and αc's range (or the follow-up zone) together. */
+  rangeCm2PerS: [number, number] | null;
+  /** D at the low and the high end of αc's range, where α enters (cm²/s). */
+  alphaEndsCm2PerS?: [number, number] | null;
+  form: RandlesSevcikForm | 'follow-up-corrected' | 'follow-up-kinetic-zone';
+  /** αc behind the headline D (null where α does not enter), with its origin. */
   alphaUsed: number | null;
   alphaSource: string | null;
   note: string | null;
 }
 
 export interface SeriesRateConstant {
-  /** Median over the files where ψ was determinable (cm/s). */
+  /** Median over the files where k° was determinable (cm/s); null unless status is 'value'. */
   k0CmPerS: number | null;
+  /** 'value'; 'lower-bound' (k0CmPerS null, lowerBoundCmPerS set); 'cannot-tell' (reason says why). */
+  status: 'value' | 'lower-bound' | 'cannot-tell';
+  reason: string | null;
+  /** k° of every file at every end of αc's range (or the measured interval): [low, high] (cm/s). */
+  rangeCmPerS: [number, number] | null;
   perFile: Array<{
     fileIndex: number;
     k0CmPerS: number | null;
-    /** 'nicholson' inside 61–212 mV, 'irreversible' (both peaks, Wang eq. 2-5) beyond. */
-    method: 'nicholson' | 'irreversible' | null;
+    /** 'nicholson' inside 61–212 mV; beyond, 'irreversible' (both peaks, departures simulated) or 'forward-peak' (E°′ given). */
+    method: 'nicholson' | 'irreversible' | 'forward-peak' | null;
     psi: NicholsonPsiResult | null;
+    /** k° at the ends of αc's range (cm/s). */
+    rangeCmPerS?: [number, number] | null;
+    /** E°′ this file's k° rests on (V), for the methods beyond the table. */
+    formalPotentialV?: number | null;
     reason: string | null;
   }>;
-  /** When every ΔEp is below the table: k° is at least this (cm/s). */
+  /** k° is at least this (cm/s): from the reversible end of the table, or the apparent k° when ohmic drop may widen ΔEp. */
   lowerBoundCmPerS: number | null;
   /** D_O used (cm²/s) and where it came from. */
   diffusionOxCm2PerS: number | null;
   diffusionSource: string | null;
+  /** Median E°′ (V) from the methods beyond the table, with its origin. */
+  formalPotentialV?: number | null;
+  formalPotentialSource?: string | null;
 }
 
 export interface SeriesSurface {
   coverageFromChargeMolPerCm2: number | null;
+  /** Γ from the ip–v slope in the form the files' regime allows; null when they mix regimes. */
   coverageFromSlopeMolPerCm2: number | null;
-  /**
-   * Files behind coverageFromSlopeMolPerCm2: those with n·ΔEp ≤ 28.5 mV (Nernstian film, where
-   * ip = n²F²AΓv/4RT holds) when at least two, else all. Added later, hence optional.
-   */
+  /** Files behind coverageFromSlopeMolPerCm2. Added later, hence optional. */
   coverageFromSlopeFileCount?: number;
+  /** 'nernstian' (n²F²AΓ/4RT, n·ΔEp ≤ 28.5 mV) or 'laviron-irreversible' (αn²F²AΓ/2.718RT, n·ΔEp > 200 mV). */
+  coverageFromSlopeForm?: 'nernstian' | 'laviron-irreversible' | null;
+  /** Γ from the slope over αc 0.3–0.7 when α was assumed (mol/cm²). */
+  coverageFromSlopeRangeMolPerCm2?: [number, number] | null;
+  /** Which form and why, or why there is no slope Γ. */
+  coverageFromSlopeNote?: string;
   /** |ip| (A) of the forward peak against v (V/s), all files. */
   fit: FitLineResult | null;
   /** Laviron k_s, median over files with n·ΔEp > 200 mV (1/s). */
   ksPerS: number | null;
   ksPerFile: Array<{ fileIndex: number; ksPerS: number | null }>;
-  /** α from the Laviron Ep–log v slopes, when both peaks move apart. */
+  /** αc from the Laviron Ep–log v slopes (files with n·ΔEp > 200 mV), when both peaks move apart. */
   lavironAlpha: number | null;
 }
 
@@ -99,8 +157,14 @@ export interface SeriesCouple {
   points: SeriesPoint[];
   regime: SeriesRegime;
   kineticClass: SeriesKineticClass;
-  /** k_f of a follow-up reaction, when most files show one; added later, hence optional. */
+  /** k_f of a follow-up reaction, when the series shows one (followUpSignature.ts); added later, hence optional. */
   followUp?: SeriesFollowUp | null;
+  /** The transfer coefficient used: αc, the forward αnₐ, their origin (diffusing couples). */
+  transferCoefficient?: SeriesTransferCoefficient | null;
+  /** How much of the ΔEp widening the ohmic drop can explain (diffusing couples with a peak pair). */
+  ohmic?: OhmicWideningResult | null;
+  /** What eHalfV is: ≈ E°′ for a reversible couple, the peak midpoint otherwise. */
+  eHalfMeaning?: string;
   /** Forward-peak |ip| (A) against v^½ ((V/s)^½): the contract's slope/intercept/r2. */
   forwardFit: FitLineResult | null;
   anodicFit: FitLineResult | null;
@@ -108,7 +172,7 @@ export interface SeriesCouple {
   diffusion: SeriesDiffusion | null;
   logLog: { slope: number; reading: LogLogReading; fit: FitLineResult } | null;
   peakShift: { anodic: PeakPotentialVsLogScanRateResult | null; cathodic: PeakPotentialVsLogScanRateResult | null };
-  /** α of an irreversible diffusing couple from Ep against log v. */
+  /** αc (cathodic transfer coefficient) of an irreversible diffusing couple, measured or given; see transferCoefficient. */
   alpha: number | null;
   rateConstant: SeriesRateConstant | null;
   /**

@@ -11,6 +11,7 @@
 import type { BaselineMethod, BaselineSpec } from '../baseline/baselineTypes';
 import type { CoupleResult } from '../couples/coupleTypes';
 import type { PeakResult, PeakWindow } from '../peaks/peakTypes';
+import type { WindowEdgeCurrent } from '../peaks/windowEdgeCurrent';
 import type { SmoothingSetting } from '../smoothing/smoothingTypes';
 import type { CurrentConvention } from '../types';
 import type { CellValues, MethodOptions, TraceChoices } from './runTypes';
@@ -25,7 +26,9 @@ export type AnalysisWarningCode =
   | 'WINDOW_EMPTY'
   | 'SWITCH_OUTSIDE_TABLE'
   | 'UNPAIRED_PEAK'
-  | 'LOW_SIGNAL';
+  | 'LOW_SIGNAL'
+  | 'SPIKES'
+  | 'WINDOW_EDGE';
 
 export interface AnalysisWarning {
   code: AnalysisWarningCode;
@@ -40,10 +43,12 @@ export interface CycleAnalysis {
   peaks: PeakResult[];
   couples: CoupleResult[];
   warnings: AnalysisWarning[];
+  /** Sweeps that end in a current still rising steeply (breakdown or catalytic current at the window edge): shade fromV–toV. Added later, hence optional. */
+  windowEdges?: WindowEdgeCurrent[];
 }
 
 /** Options of a standalone trace analysis: the run's method options, n and T, and the trace's own choices. */
-export type AnalyzeVoltammogramOptions = Omit<MethodOptions, 'seriesCycle' | 'matchToleranceV'>
+export type AnalyzeVoltammogramOptions = Omit<MethodOptions, 'seriesCycle' | 'matchToleranceV' | 'psiMethod'>
   & Pick<CellValues, 'temperatureK' | 'electronCount'>
   & TraceChoices & {
     /** Sign convention of `currentA` in the input. @default 'iupac' */
@@ -72,6 +77,18 @@ export interface ResolvedAnalyzeOptions {
   maxDeltaEpV: number;
   scanRateVPerS: number | null;
   cycles: number[];
+  /** Isolated bad points found and left out ('hampel') or kept ('off'). Added later, hence optional. */
+  spikeFilter?: 'hampel' | 'off';
+}
+
+/** An isolated bad point left out of the analysis (hampelSpikes.ts): draw it, list it. */
+export interface SpikePoint {
+  index: number;
+  potentialV: number;
+  /** The recorded current (A, IUPAC). */
+  currentA: number;
+  /** The running median that replaced it (A, IUPAC). */
+  replacedByA: number;
 }
 
 export interface VoltammogramAnalysis {
@@ -84,4 +101,6 @@ export interface VoltammogramAnalysis {
   peakThresholdA?: number;
   options: ResolvedAnalyzeOptions;
   warnings: AnalysisWarning[];
+  /** Isolated bad points left out of peak finding and baselines. Added later, hence optional. */
+  spikes?: SpikePoint[];
 }

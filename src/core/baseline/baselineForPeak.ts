@@ -38,6 +38,11 @@ export interface BaselineRequest {
    * this one (Nicholson's convention applied within a sweep).
    */
   previous?: BaselineRef | null;
+  /**
+   * For 'nicholson' after a forward sweep that ends in a breakdown or catalytic current: the index
+   * where that current starts; the decay is fitted before it and no charging step is measured.
+   */
+  forwardDecayEnd?: number;
 }
 
 export interface BaselineOutcome {
@@ -61,7 +66,7 @@ export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request:
   if (method === 'nicholson') {
     const fw = request.forward;
     const prev = request.previous ?? null;
-    const decay = attempt(() => (prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? decayAfterSwitch(sig, peak, fw) : null));
+    const decay = attempt(() => (prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? decayAfterSwitch(sig, peak, fw, request.forwardDecayEnd) : null));
     if (decay) {
       const under = (prev ?? fw)!.background;
       return { curve: decay.curve, evaluate: decay.evaluate, background: (k) => under(k) ?? under(peak.index), fallbackReason: null };

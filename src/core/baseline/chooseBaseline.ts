@@ -35,6 +35,8 @@ export interface BaselineContext {
   defaults: BaselineDefaults;
   /** n and T, for the 2·RT/nF foot margin. */
   wave: { temperatureK: number; electronCount: number };
+  /** Sweeps that end in a breakdown or catalytic current (windowEdgeCurrent.ts), with the index where it starts. */
+  edgeSweeps?: Map<number, number>;
 }
 
 export function chooseBaseline(ctx: BaselineContext, cand: PeakCandidate): BaselineRequest {
@@ -48,7 +50,9 @@ export function chooseBaseline(ctx: BaselineContext, cand: PeakCandidate): Basel
   const forward = carried && fwd ? (drawn.get(fwd) ?? null) : null;
   const before = previousPeakOnSweep(cand, ordered);
   const previous = method === 'nicholson' && spec === null && before ? (drawn.get(before) ?? null) : null;
-  return { method, spec, regionStart: prePeakRegionStart(sig, cand, ordered), marginPoints: footMarginPoints(sig, cand, ctx.wave), forward, previous };
+  // A forward sweep that ends in a breakdown current: its wave's decay is fitted before the breakdown starts.
+  const decayEnd = forward ? ctx.edgeSweeps?.get(forward.peak.segmentIndex) : undefined;
+  return { method, spec, regionStart: prePeakRegionStart(sig, cand, ordered), marginPoints: footMarginPoints(sig, cand, ctx.wave), forward, previous, ...(decayEnd !== undefined ? { forwardDecayEnd: decayEnd } : {}) };
 }
 
 function findBaselineSpec(specs: BaselineSpec[], c: PeakCandidate, cycle: number): BaselineSpec | null {

@@ -23,11 +23,15 @@ export interface BaselineRef {
   background: (index: number) => number | null;
 }
 
-/** The forward decay fitted between the forward peak's half-way point and the switch, continued past it. */
-export function decayAfterSwitch(sig: SweepSignals, peak: PeakCandidate, fw: BaselineRef): NicholsonReturnBaselineResult | null {
+/**
+ * The forward decay fitted between the forward peak's half-way point and the switch, continued past
+ * it. `decayEnd`: where a breakdown current starts before the switch; the fit stops there, and the
+ * charging step at the switch, hidden under the breakdown's own decay, is not measured.
+ */
+export function decayAfterSwitch(sig: SweepSignals, peak: PeakCandidate, fw: BaselineRef, decayEnd?: number): NicholsonReturnBaselineResult | null {
   const fSeg = sig.segments[fw.peak.segmentIndex]!;
   const rSeg = sig.segments[peak.segmentIndex]!;
-  const vertex = fSeg.end - 1;
+  const vertex = decayEnd !== undefined && decayEnd > fw.peak.index ? decayEnd : fSeg.end - 1;
   const ePeak = fw.peak.potentialV;
   const half = 0.5 * Math.abs(sig.potentialV[vertex]! - ePeak);
   let fitStart = vertex;
@@ -43,7 +47,7 @@ export function decayAfterSwitch(sig: SweepSignals, peak: PeakCandidate, fw: Bas
     vertexIndex: vertex,
     spanEnd: rSeg.end,
     ...(known ? { forwardBackgroundA: (k: number) => (k <= vertex || fw.evaluate(k) !== null ? (fw.evaluate(k) ?? 0) : (fw.evaluate(vertex) ?? 0)) } : {}),
-  });
+  }, { switchStep: vertex === fSeg.end - 1 });
 }
 
 /** Decay of the previous wave, fitted between it and this wave's foot, extended under this wave. */

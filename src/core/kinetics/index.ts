@@ -5,3 +5,8 @@ export * from './lavironRateConstant';
 export * from './irreversibleRateConstant';
 export * from './kineticPeakCurrentRatio';
 export * from './followUpRateConstant';
+export * from './forwardPeakRateConstant';
+export * from './correctedIrreversibleRateConstant';
+export * from './nicholsonPsiAtAlpha';
+export * from './jointFollowUpRateConstant';
+export * from './followUpCurrentFunction';

@@ -33,6 +33,8 @@ function forwardCathodicPeakA(k0CmPerS: number, alpha: number, stepV: number): n
 
 /** The reversible peak does not depend on α; it is computed once per step size. */
 const reversibleCache = new Map<number, number>();
+/** A series asks for the same ψ at several α and again on each rerun: ratios are kept by (ψ, α, step). */
+const ratioCache = new Map<string, number>();
 
 export function kineticPeakCurrentRatio(psi: number, alpha: number, options: KineticPeakCurrentRatioOptions = {}): number {
   assertFiniteInRange('psi', psi, Number.MIN_VALUE);
@@ -40,10 +42,16 @@ export function kineticPeakCurrentRatio(psi: number, alpha: number, options: Kin
   const stepV = options.stepV ?? 0.0005;
   assertFiniteInRange('stepV', stepV, 1e-5, 0.005);
   const k0 = psi * Math.sqrt(Math.PI * D_CM2_PER_S * inverseThermalVoltagePerV(STANDARD_TEMPERATURE_K) * V_PER_S);
+  const key = `${psi.toPrecision(6)}|${alpha.toPrecision(6)}|${stepV}`;
+  const known = ratioCache.get(key);
+  if (known !== undefined) return known;
   let reversible = reversibleCache.get(stepV);
   if (reversible === undefined) {
     reversible = forwardCathodicPeakA(Infinity, 0.5, stepV);
     reversibleCache.set(stepV, reversible);
   }
-  return forwardCathodicPeakA(k0, alpha, stepV) / reversible;
+  const ratio = forwardCathodicPeakA(k0, alpha, stepV) / reversible;
+  if (ratioCache.size > 2000) ratioCache.clear();
+  ratioCache.set(key, ratio);
+  return ratio;
 }

@@ -9,11 +9,15 @@
  *   Fc⁺/Fc: IUPAC recommendation of an internal reference (Gritzner & Kůta 1984, from memory) and
  *   the typical +0.40 V vs SCE in MeCN/0.1 M Bu₄NPF₆ (Connelly & Geiger, Chem. Rev. 96, 877
  *   (1996), from memory), used only when nothing was measured and labelled "typical".
- * Difference: tabulated offsets are 25 °C values and are not corrected for temperature.
+ * Temperature: tabulated offsets are 25 °C values; at another temperature the published
+ *   dependence of calomel and of fixed-filling Ag/AgCl electrodes is applied
+ *   (referenceTemperature.ts) and the basis says so; other electrodes stay at their 25 °C value and
+ *   `typical25` says so (the run warns).
  */
 import { AnalysisError } from '../errors';
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import { REFERENCE_ELECTRODES, findReferenceElectrode } from './referenceElectrodes';
+import { referenceTemperatureShift } from './referenceTemperature';
 import type { ReferenceId } from './referenceElectrodes';
 
 /** Typical E½ of Fc⁺/Fc in MeCN / 0.1 M Bu₄NPF₆, V vs SCE (Connelly & Geiger 1996, from memory). */
@@ -44,6 +48,8 @@ export interface ReferencePosition {
   basis: string;
   /** True when a typical, not measured, value was used. */
   typical: boolean;
+  /** True when a 25 °C value was used at another temperature for want of a published coefficient. */
+  at25Only?: boolean;
 }
 
 /** Resolves a name or id to a ReferenceId, or throws UNKNOWN_REFERENCE listing the choices. */
@@ -67,7 +73,14 @@ export function referenceVsShe(id: ReferenceId, context: ConversionContext = {})
   if (id === 'pseudo' || id === 'AgAg+') return scaleThroughStandard(id, context);
   const entry = REFERENCE_ELECTRODES.find((r) => r.id === id);
   if (!entry || entry.eVsSheV === null) throw new AnalysisError('UNKNOWN_REFERENCE', `no tabulated value for ${id}`);
-  return { eVsSheV: entry.eVsSheV, basis: `${entry.label}: ${entry.eVsSheV} V vs SHE (${entry.source})`, typical: false };
+  const at25 = { eVsSheV: entry.eVsSheV, basis: `${entry.label}: ${entry.eVsSheV} V vs SHE (${entry.source})`, typical: false };
+  const t = context.temperatureK ?? STANDARD_TEMPERATURE_K;
+  if (id === 'SHE' || Math.abs(t - STANDARD_TEMPERATURE_K) < 0.05) return at25;
+  const shift = referenceTemperatureShift(id, entry.eVsSheV, t);
+  const celsius = (t - 273.15).toFixed(1);
+  if (!shift) return { ...at25, basis: `${at25.basis}; no published temperature coefficient applied: its 25 °C value is used at ${celsius} °C`, at25Only: true };
+  const e = entry.eVsSheV + shift.shiftV;
+  return { eVsSheV: e, basis: `${entry.label}: ${e.toFixed(4)} V vs SHE at ${celsius} °C (${entry.eVsSheV} V at 25 °C, ${entry.source}; ${(shift.shiftV * 1000).toFixed(1)} mV from the ${shift.source})`, typical: false };
 }
 
 function rheVsShe(context: ConversionContext): ReferencePosition {

@@ -2,3 +2,4 @@
 export * from './referenceElectrodes';
 export * from './convertPotential';
 export * from './referenceOffset';
+export * from './referenceTemperature';

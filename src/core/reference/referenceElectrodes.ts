@@ -1,12 +1,13 @@
 /**
  * Table of reference electrodes: potential against the standard hydrogen electrode at 25 °C,
  * with its source and how sure we are of it.
- * Values and sources (each row names its own; Bard & Faulkner, Electrochemical Methods 2nd ed.
- *   (2001), inside back cover; Sawyer, Sobkowiak & Roberts, Electrochemistry for Chemists 2nd ed.
- *   (1995); "Reference Electrodes in Metal Corrosion", Int. J. Corrosion 2010, 756950, Table 2;
- *   Meites (ed.), Handbook of Analytical Chemistry (1963)).
+ * Values and sources: Bard & Faulkner, Electrochemical Methods 2nd ed. (2001), inside back cover;
+ *   Sawyer, Sobkowiak & Roberts, Electrochemistry for Chemists 2nd ed. (1995); "Reference
+ *   Electrodes in Metal Corrosion", Int. J. Corrosion 2010, 756950, Table 2; Meites (ed.), Handbook
+ *   of Analytical Chemistry (1963) (each entry names its own).
  * The thermodynamic (no liquid junction) value is the default where the sources give both.
- * Offsets are 25 °C values; no temperature coefficient is applied (see convertPotential.ts).
+ * Offsets are 25 °C values; referenceTemperature.ts moves calomel and fixed-filling Ag/AgCl
+ *   electrodes to other temperatures, the others stay at 25 °C with a warning.
  * Safety: calomel, Hg/Hg₂SO₄ and Hg/HgO electrodes contain mercury; the user-facing cautions live
  *   in the README and the UI.
  */

@@ -4,8 +4,10 @@
  * This is the one function the screen's display scale and the analysis run both use.
  * In: the two scale ids and a conversion context (pH, temperature, internal standard, user values).
  * Out: the offset (V), the plain-words basis of each scale, and whether a typical (not measured)
- *   value entered. Source: convertPotential.ts (conversion through SHE).
+ *   value entered. Source: convertPotential.ts (conversion through SHE); temperature coefficients
+ *   are applied only when both ends have one (referenceTemperature.ts).
  */
+import { STANDARD_TEMPERATURE_K } from '../constants';
 import { referenceVsShe, type ConversionContext } from './convertPotential';
 import type { ReferenceId } from './referenceElectrodes';
 
@@ -27,11 +29,22 @@ export function referenceOffset(from: ReferenceId, to: ReferenceId, context: Con
   const std = context.internalStandard;
   if (std && to === 'Fc' && from === std.scale) return { offsetV: -std.eHalfV, from, to, basis: [direct(std)], typical: false };
   if (std && from === 'Fc' && to === std.scale) return { offsetV: std.eHalfV, from, to, basis: [direct(std)], typical: false };
-  const a = referenceVsShe(from, context);
-  const b = referenceVsShe(to, context);
+  let a = referenceVsShe(from, context);
+  let b = referenceVsShe(to, context);
+  // When one electrode has no published temperature dependence, correcting only the other would
+  // be half a correction: both stay at their 25 °C values then (the run warns).
+  if (a.at25Only || b.at25Only) {
+    const at25 = { ...context, temperatureK: STANDARD_TEMPERATURE_K };
+    if (!a.at25Only && TABULATED(from)) a = referenceVsShe(from, at25);
+    if (!b.at25Only && TABULATED(to)) b = referenceVsShe(to, at25);
+  }
   return { offsetV: a.eVsSheV - b.eVsSheV, from, to, basis: [a.basis, b.basis], typical: a.typical || b.typical };
 }
 
 function direct(std: NonNullable<ConversionContext['internalStandard']>): string {
   return `Fc⁺/Fc: E½ = ${std.eHalfV.toFixed(4)} V vs ${std.scale}, measured (${std.origin}); 0 V on the Fc⁺/Fc scale by definition`;
 }
+
+/** Scales whose value is a tabulated 25 °C number (not SHE itself, RHE, the internal standard or
+ *  the scales that exist only through a measured standard). */
+const TABULATED = (id: ReferenceId) => id !== 'SHE' && id !== 'RHE' && id !== 'Fc' && id !== 'pseudo' && id !== 'AgAg+';

@@ -14,6 +14,17 @@ describe('fitLine', () => {
     expect(fit.degreesOfFreedom).toBe(1);
   });
 
+  // Worked by hand: y = 10⁶x + 5·10⁶ plus residuals r = (1, −1, −1, 1)·10⁻⁴, which are orthogonal to
+  // 1 and x, so the fit is exactly that line and Σr² = 4·10⁻⁸: s = (4·10⁻⁸/2)^½ = 1.4142·10⁻⁴.
+  // Syy − b·Sxy (5·10¹² − 5·10¹²) cannot give this; the residuals themselves can (Draper & Smith
+  // 3rd ed. (1998) §1.3, residual sum of squares).
+  it('computes the residual scatter from the residuals when y is large against it', () => {
+    const r = [1e-4, -1e-4, -1e-4, 1e-4];
+    const fit = fitLine([0, 1, 2, 3], [0, 1, 2, 3].map((x, i) => 1e6 * x + 5e6 + r[i]!));
+    expect(Math.abs(fit.residualStdDev! / 1.41421356e-4 - 1)).toBeLessThan(1e-4);
+    expect(fit.slopeInterval![1] - fit.slopeInterval![0]).toBeGreaterThan(0);
+  });
+
   // F. J. Anscombe, "Graphs in statistical analysis", Am. Stat. 27, 17 (1973), data set I:
   // slope 0.500, intercept 3.00, r² 0.67; standard errors 0.118 (slope) and 1.125 (intercept)
   // as printed by common regression software for this set (from memory).

@@ -80,6 +80,19 @@ function weightedSums(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<n
   return { sw, mx, my, sxx, sxy, syy };
 }
 
+/**
+ * Σw·(y − ŷ)² from the residuals themselves. The shortcut Syy − b·Sxy subtracts two nearly equal
+ * numbers when the fit is close and y is large against its scatter, and loses every digit.
+ */
+function residualSumOfSquares(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number> | null, slope: number, intercept: number): number {
+  let ss = 0;
+  for (let i = 0; i < x.length; i++) {
+    const r = (y[i] as number) - (slope * (x[i] as number) + intercept);
+    ss += (w ? (w[i] as number) : 1) * r * r;
+  }
+  return ss;
+}
+
 function checkInput(x: ArrayLike<number>, y: ArrayLike<number>, options: FitLineOptions): void {
   const minPoints = options.throughOrigin ? 1 : 2;
   assertSameLength({ x, y }, minPoints);
@@ -104,7 +117,7 @@ export function fitLine(x: ArrayLike<number>, y: ArrayLike<number>, options: Fit
   if (!(s.sxx > 0)) throw new AnalysisError('OUT_OF_RANGE', 'fitLine: all x values are equal, so no slope can be fitted');
   const slope = s.sxy / s.sxx;
   const intercept = origin ? 0 : s.my - slope * s.mx;
-  const ssRes = Math.max(0, s.syy - slope * s.sxy);
+  const ssRes = residualSumOfSquares(x, y, options.weights ?? null, slope, intercept);
   const dof = n - (origin ? 1 : 2);
   const r2 = s.syy > 0 ? 1 - ssRes / s.syy : Number.NaN;
   if (dof < 1) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { thermalVoltageV } from '../constants';
-import { alphaFromHalfPeakWidth, chooseIrreversibleAlpha, classifySeriesCouple, suggestedElectronCount, surfaceKinetics } from './classifySeriesCouple';
+import { classifySeriesCouple, suggestedElectronCount, surfaceKinetics } from './classifySeriesCouple';
 import type { SeriesPoint } from './seriesPoint';
 
 function point(over: Partial<SeriesPoint>): SeriesPoint {
@@ -27,17 +27,6 @@ describe('classifySeriesCouple', () => {
     const pts = [0.1, 1, 10].map((s) => point({ scanRateVPerS: s, verdict: 'quasi-reversible', deltaEpV: 0.1 }));
     expect(classifySeriesCouple(pts, 1, 298.15, 0.97).regime).toBe('surface');
     expect(classifySeriesCouple(pts, 1, 298.15, 0.5).regime).toBe('diffusion');
-  });
-});
-
-describe('chooseIrreversibleAlpha', () => {
-  // Bard & Faulkner §6.3 (from memory): |Ep − Ep/2| = 1.857 RT/(αnₐF) → 95.4 mV for α = 0.5.
-  it('reads α from the half-peak width when no Ep–log v line exists', () => {
-    const w = 1.857 * thermalVoltageV(298.15) / 0.5;
-    expect(alphaFromHalfPeakWidth(w, 298.15)).toBeCloseTo(0.5, 12);
-    expect(chooseIrreversibleAlpha(null, null, [point({ forwardHalfPeakWidthV: w })], 1, 298.15).alpha).toBeCloseTo(0.5, 12);
-    expect(chooseIrreversibleAlpha(0.4, null, [], 1, 298.15)).toEqual({ alpha: 0.4, source: 'given by the user' });
-    expect(chooseIrreversibleAlpha(null, null, [], 1, 298.15).alpha).toBe(0.5);
   });
 });
 

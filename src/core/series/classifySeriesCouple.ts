@@ -1,6 +1,6 @@
 /**
  * Settles the transport regime and kinetic class of a series couple from the per-file verdicts
- * and peak separations, and picks the transfer coefficient for the irreversible Randles–Ševčík form.
+ * and peak separations (the transfer coefficient is chosen in analysis/seriesTransferCoefficient.ts).
  * Rules (design; thresholds named with their sources):
  *   - surface when most files call the couple adsorbed, or when over three or more scan rates
  *     log|ip| rises with log v at a slope inside LOG_LOG_SURFACE_BAND (ip ∝ v, Laviron 1974; band:
@@ -13,11 +13,8 @@
  *     |Ep − Ep/2| = 2.20·RT/nF (Nicholson & Shain 1964; the 1.25 margin is common practice, no
  *     source); otherwise the loss of the return peak is put down to chemistry and the forward
  *     peak is treated as reversible.
- * α for the irreversible form: the user's value; else from Ep against log v (Wang 2000 eq. 2-5);
- *   else from |Ep − Ep/2| = 1.857·RT/(α nₐ F) (Bard & Faulkner 2nd ed. §6.3, from memory); else 0.5.
  */
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
-import type { PeakPotentialVsLogScanRateResult } from './peakPotentialVsLogScanRate';
 import { median } from '../statistics/median';
 import { LOG_LOG_SURFACE_BAND } from './logLogSlope';
 import type { SeriesKineticClass, SeriesPoint, SeriesRegime } from './seriesPoint';
@@ -81,29 +78,6 @@ export function surfaceKinetics(points: SeriesPoint[], electronCount: number, te
   if (x.every((d) => Math.abs(d) <= limit)) return 'reversible';
   const grows = byRate.length >= 2 && x[x.length - 1]! > limit && x[x.length - 1]! - x[0]! >= 0.02;
   return grows ? 'quasi-reversible' : 'inconclusive';
-}
-
-/** α·nₐ from the forward peak's |Ep − Ep/2| (Bard & Faulkner §6.3: 1.857·RT/(α nₐ F)). */
-export function alphaFromHalfPeakWidth(halfPeakWidthV: number, temperatureK: number): number {
-  return (1.857 * thermalVoltageV(temperatureK)) / halfPeakWidthV;
-}
-
-export function chooseIrreversibleAlpha(
-  userAlpha: number | null,
-  shift: PeakPotentialVsLogScanRateResult | null,
-  points: SeriesPoint[],
-  transferElectronCount: number,
-  temperatureK: number,
-): { alpha: number; source: string } {
-  if (userAlpha !== null) return { alpha: userAlpha, source: 'given by the user' };
-  const a = shift?.alpha ?? null;
-  if (a !== null && a > 0.1 && a < 0.9) return { alpha: a, source: 'from Ep against log v (Wang 2000 eq. 2-5)' };
-  const widths = points.flatMap((p) => (p.forwardHalfPeakWidthV === null ? [] : [p.forwardHalfPeakWidthV]));
-  if (widths.length) {
-    const w = alphaFromHalfPeakWidth(median(widths), temperatureK) / transferElectronCount;
-    if (w > 0.1 && w < 0.9) return { alpha: w, source: 'from |Ep − Ep/2| (Bard & Faulkner §6.3)' };
-  }
-  return { alpha: 0.5, source: 'assumed 0.5 (no usable measurement)' };
 }
 
 /**

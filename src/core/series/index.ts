@@ -9,3 +9,6 @@ export * from './chargingCurrentGap';
 export * from './classifySeriesCouple';
 export type * from './seriesPoint';
 export * from './combinedDiffusionInterval';
+export * from './lavironIrreversibleWave';
+export * from './ohmicWidening';
+export * from './followUpSignature';

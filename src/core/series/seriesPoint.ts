@@ -21,6 +21,10 @@ export interface SeriesPoint extends Pick<CoupleResult, 'epaV' | 'epcV' | 'eHalf
   /** Nicholson (1966) ratio and the switch potential (V) of the file's couple; added later. */
   nicholsonRatio?: number | null;
   switchPotentialV?: number | null;
+  /** Reversible ΔEp expected at this file's switching potential (V); added later. */
+  reversibleDeltaEpV?: number | null;
+  /** i(Epa) − i(Epc), the signed total currents at the two peaks (A): ohmic ΔEp = this × Ru; added later. */
+  peakCurrentSpanA?: number | null;
 }
 
 /** Transport regime and kinetic class the series settles on for a couple. */

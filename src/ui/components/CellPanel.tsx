@@ -69,7 +69,7 @@ export function CellPanel() {
         <NumberField label="u(A)" unit="%" value={c.areaUncertaintyPercent} min={0} max={50} testId="area-uncertainty" title="relative standard uncertainty of the area, carried into D's second interval" onCommit={(v) => v !== null && set({ areaUncertaintyPercent: v })} />
         <NumberField label="u(C)" unit="%" value={c.concentrationUncertaintyPercent} min={0} max={50} testId="concentration-uncertainty" title="relative standard uncertainty of the concentration, carried into D's second interval" onCommit={(v) => v !== null && set({ concentrationUncertaintyPercent: v })} />
         <CellNumber resolved={resolved} field="alpha" label="αc" unit="of the reduction" placeholder="from the data" value={c.alpha} min={0.05} max={0.95} allowEmpty testId="alpha"
-          title="transfer coefficient of the reduction (cathodic, αc; an oxidation runs with 1 − αc) for the irreversible and Laviron analyses; leave empty to take it from the data (0.5 when it cannot be measured)" onCommit={(v) => set({ alpha: v })} />
+          title="αc, the cathodic transfer coefficient (of the reduction O + ne⁻ → R; an oxidation wave runs with 1 − αc); leave empty to measure it from a totally irreversible series, else 0.5 with 0.3–0.7 carried into D and k°" onCommit={(v) => set({ alpha: v })} />
       </div>
       {adsorbed ? <p className="hint" data-testid="cell-adsorbed">Adsorbed film: Γ follows from the peak charge and the area; the concentration is not used.</p> : null}
       <CellStandardFields resolved={resolved} set={set} />

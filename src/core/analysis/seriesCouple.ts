@@ -1,0 +1,101 @@
+/**
+ * One couple followed through a scan-rate series: its points, fits, regime and kinetic class,
+ * follow-up chemistry, transfer coefficient, D, ohmic check, k° (or Γ and k_s for a film), the
+ * meaning of its E½, the refined verdict and the diagnostics. Sources are in the called methods;
+ * the order of the steps is the design:
+ *   regime and class (classifySeriesCouple) → follow-up signature (followUpSignature) → α
+ *   (seriesTransferCoefficient) → D (seriesDiffusion) → ohmic check (ohmicWidening) → k°
+ *   (seriesRateConstant) → verdict (refineVerdictWithSeries), with k° never beside "reversible".
+ */
+import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
+import type { SeriesEvidence, Verdict } from '../couples/coupleTypes';
+import { classifySeriesCouple, electroactiveAreaFromStandard, followUpSignature, ohmicWidening } from '../series';
+import type { SeriesPoint } from '../series/seriesPoint';
+import { median } from '../statistics/median';
+import type { CoupleRef } from './matchSeriesCouples';
+import { describeSeriesCouple, describeHalfWave } from './seriesDiagnostics';
+import { seriesDiffusion } from './seriesDiffusion';
+import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, type ResolvedSeriesOptions } from './seriesFits';
+import { seriesFollowUp } from './seriesFollowUp';
+import { seriesRateConstant } from './seriesRateConstant';
+import { seriesSurface } from './seriesSurface';
+import { seriesTransferCoefficient } from './seriesTransferCoefficient';
+import type { SeriesCouple, SeriesFollowUp, SeriesRateConstant } from './seriesTypes';
+
+/** A of a reversible standard of known D from its forward slope (electroactiveAreaFromStandard.ts). */
+function electroactiveArea(fit: SeriesCouple['forwardFit'], reversible: boolean, o: ResolvedSeriesOptions): number | null {
+  if (!fit || !reversible || o.diffusionCm2PerS === null || o.concentrationMolPerCm3 === null) return null;
+  return electroactiveAreaFromStandard(
+    { slopeAPerSqrtVPerS: fit.slope, electronCount: o.electronCount, concentrationMolPerCm3: o.concentrationMolPerCm3, diffusionCm2PerS: o.diffusionCm2PerS },
+    { temperatureK: o.temperatureK },
+  );
+}
+
+/** The single-trace verdict refined with what the series shows (two scan rates at least). */
+function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>, followUp: SeriesFollowUp | null, regimeLine: string): Verdict {
+  const e: SeriesEvidence = { count: new Set(c.points.map((p) => p.scanRateVPerS)).size };
+  if ((e.count ?? 0) < 2) return first;
+  if (c.logLog) e.logLogSlope = c.logLog.slope;
+  if (c.peakShift.anodic) e.epaShiftVPerDecade = c.peakShift.anodic.slopeVPerDecade;
+  if (c.peakShift.cathodic) e.epcShiftVPerDecade = c.peakShift.cathodic.slopeVPerDecade;
+  if (c.forwardFit) e.sqrtScanRateR2 = c.forwardFit.r2;
+  const linear = fitAgainstScanRate(c.points, (p) => p.forwardIpA);
+  if (linear) e.scanRateR2 = linear.r2;
+  const refined = refineVerdictWithSeries(first, e);
+  if (followUp) {
+    return { ...refined, category: 'chemically-coupled', label: 'chemically coupled (product consumed by a follow-up reaction)', reasons: [...followUp.evidence, ...refined.reasons] };
+  }
+  if (c.ohmic?.limitsK0 && refined.category === 'quasi-reversible') {
+    return { ...refined, category: 'inconclusive', label: 'not classified (ΔEp widens with v, but ohmic drop explains it as well as slow electron transfer)', reasons: [...refined.reasons, c.ohmic.text] };
+  }
+  if (c.regime !== 'surface' || c.kineticClass !== 'quasi-reversible' || refined.category !== 'adsorbed') return refined;
+  // The slowest file of a slow film looks Nernstian; the series shows the Laviron regime.
+  return { ...refined, label: 'surface-confined (adsorbed; slow electron transfer, Laviron)', reasons: [...refined.reasons, regimeLine] };
+}
+
+/** Never k° beside "reversible": the value becomes a lower bound. */
+function boundedIfReversible(k: SeriesRateConstant | null, verdict: Verdict): SeriesRateConstant | null {
+  if (!k || k.status !== 'value' || verdict.category !== 'reversible') return k;
+  return { ...k, status: 'lower-bound', lowerBoundCmPerS: k.k0CmPerS, k0CmPerS: null, rangeCmPerS: null, reason: 'the series reads as reversible: the apparent k° is only a lower bound' };
+}
+
+function ohmicOf(points: SeriesPoint[], o: ResolvedSeriesOptions) {
+  const files = points.flatMap((p) => (p.deltaEpV !== null && p.reversibleDeltaEpV != null && p.peakCurrentSpanA != null
+    ? [{ fileIndex: p.fileIndex, scanRateVPerS: p.scanRateVPerS, deltaEpV: p.deltaEpV, reversibleDeltaEpV: p.reversibleDeltaEpV, peakCurrentSpanA: p.peakCurrentSpanA }] : []));
+  return files.length >= 2 ? ohmicWidening(files, { electronCount: o.electronCount, temperatureK: o.temperatureK, ruOhm: o.ruOhm }) : null;
+}
+
+export function buildSeriesCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
+  const forward = first.forwardDirection;
+  const logLog = fitLogLog(points);
+  const cls = classifySeriesCouple(points, o.electronCount, o.temperatureK, logLog?.slope ?? null);
+  const forwardFit = fitForwardAgainstSqrtScanRate(points);
+  const peakShift = { anodic: fitPeakShift(points, 'anodic', o), cathodic: fitPeakShift(points, 'cathodic', o) };
+  const forwardShift = forward === 'anodic' ? peakShift.anodic : peakShift.cathodic;
+  const diffusing = cls.regime === 'diffusion';
+  const signature = diffusing
+    ? followUpSignature({ points, forward, majority: cls.majority, forwardShiftVPerDecade: forwardShift?.slopeVPerDecade ?? null, electronCount: o.electronCount, temperatureK: o.temperatureK })
+    : null;
+  // Nicholson and Shain's EC scheme has a fast electron transfer: the forward peak's shift and narrowing are the chemistry's.
+  const kineticClass = signature?.kind === 'kinetic-zone' ? 'reversible' : cls.kineticClass;
+  const followUp = signature ? seriesFollowUp(points, o, signature) : null;
+  const transfer = diffusing ? seriesTransferCoefficient(points, kineticClass, forward, o) : null;
+  const diffusion = transfer ? seriesDiffusion({ fit: forwardFit, kineticClass, points, forward, transfer, followUp }, o).diffusion : null;
+  const ohmic = diffusing && !followUp ? ohmicOf(points, o) : null;
+  const chemistry = followUp ? 'a follow-up reaction consumes the product and moves the return peak, so ΔEp is not a measure of electron-transfer kinetics (Nicholson & Shain 1964)' : null;
+  const rateConstant = transfer ? seriesRateConstant({ points, forward, diffusion, transfer, reversible: kineticClass === 'reversible', chemistry, ohmic }, o) : null;
+  const surface = cls.regime === 'surface' ? seriesSurface(points, o, forward) : null;
+  const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
+  const couple: Omit<SeriesCouple, 'verdict'> = {
+    index, eHalfV: halves.length ? median(halves) : null, forwardDirection: forward, points, regime: cls.regime, kineticClass, followUp, transferCoefficient: transfer, ohmic,
+    forwardFit, anodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipaA), cathodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipcA), diffusion, logLog, peakShift,
+    alpha: surface ? (o.alpha ?? surface.lavironAlpha) : transfer && transfer.source !== 'assumed' ? transfer.alphaC : null,
+    rateConstant, electroactiveAreaCm2: electroactiveArea(forwardFit, diffusing && kineticClass === 'reversible' && !followUp, o), surface, diagnostics: [],
+  };
+  const regimeLine = describeSeriesCouple(couple, o)[0] ?? '';
+  const verdict = seriesVerdict(first.verdict, couple, followUp, regimeLine);
+  couple.rateConstant = boundedIfReversible(rateConstant, verdict);
+  couple.eHalfMeaning = describeHalfWave(couple);
+  couple.diagnostics = describeSeriesCouple(couple, o);
+  return { ...couple, verdict };
+}

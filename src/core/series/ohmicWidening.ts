@@ -1,0 +1,92 @@
+/**
+ * Uncompensated resistance against slow electron transfer: how much of the growth of ΔEp with
+ * scan rate the ohmic drop at the two peaks can account for, and whether k° is then only a lower
+ * bound.
+ * In: per file its scan rate (V/s), ΔEp (V), the reversible ΔEp expected at its switching potential
+ *   (V), and the signed total currents at Epa and Epc (A, IUPAC); n, T and the user's Ru (Ω, 0
+ *   when none was given). Out: per file the widening and the drop (V), whether ΔEp grows, the
+ *   drop's share of the widening, the Ru that alone would explain the widening at the fastest file,
+ *   and the verdict on k°.
+ * Sources: an uncompensated resistance moves each peak by i·Ru and widens ΔEp as slow kinetics do
+ *   (Bard & Faulkner, Electrochemical Methods 2nd ed. (2001) §1.3.4 and §6.5, from memory).
+ *   Near the reversible end (Nicholson, Anal. Chem. 37, 1351 (1965), Table I: ψ ≥ 2 for
+ *   n·ΔEp ≤ 72 mV) the kinetic widening grows about as 1/ψ ∝ v^½, just as i_p·Ru does, so one
+ *   concentration cannot tell them apart (the ohmic part scales with concentration, the kinetic
+ *   one does not). Correcting E − i·Ru after the measurement leaves part of the ohmic widening,
+ *   because the interface was not swept linearly (measured with this project's simulator: a
+ *   Nernstian couple with 300 Ω, corrected, still widens from 62 to 75 mV over 0.1–2 V/s).
+ * Rules (ours; common practice, no source): ΔEp grows when the fastest file's exceeds the
+ *   slowest's by more than 2/n mV (25 °C). With Ru given, k° is a lower bound when at a widening
+ *   file that widens most the drop |Δi|·Ru is at least half the widening. Without Ru, k° is a lower bound when every
+ *   file stays within n·ΔEp ≤ 72 mV (25 °C).
+ */
+import { STANDARD_TEMPERATURE_K } from '../constants';
+import { formatMillivolts } from '../units';
+
+export interface OhmicWideningFile {
+  fileIndex: number;
+  scanRateVPerS: number;
+  deltaEpV: number;
+  reversibleDeltaEpV: number;
+  /** i(Epa) − i(Epc), signed IUPAC currents at the two peaks (A): the ohmic ΔEp is this times Ru. */
+  peakCurrentSpanA: number;
+}
+
+export interface OhmicWideningOptions {
+  /** @default 1 */
+  electronCount?: number;
+  /** @default 298.15 */
+  temperatureK?: number;
+  /** The user's uncompensated resistance (Ω), already taken off the potentials; 0 when none. @default 0 */
+  ruOhm?: number;
+}
+
+export interface OhmicWideningResult {
+  ruOhm: number;
+  perFile: Array<{ fileIndex: number; wideningV: number; ohmicDropV: number | null }>;
+  grows: boolean;
+  /** Drop over widening at the file that widens most; null without Ru or widening. */
+  ohmicShare: number | null;
+  /** Ru (Ω) that alone would explain the widening of the fastest file. */
+  explainingRuOhm: number | null;
+  /** True when k° can only be a lower bound on this evidence. */
+  limitsK0: boolean;
+  text: string;
+}
+
+const mv = formatMillivolts;
+
+export function ohmicWidening(files: OhmicWideningFile[], options: OhmicWideningOptions = {}): OhmicWideningResult {
+  const n = options.electronCount ?? 1;
+  const scale = n * (STANDARD_TEMPERATURE_K / (options.temperatureK ?? STANDARD_TEMPERATURE_K));
+  const ruOhm = options.ruOhm ?? 0;
+  const byRate = [...files].sort((a, b) => a.scanRateVPerS - b.scanRateVPerS);
+  const perFile = byRate.map((f) => ({
+    fileIndex: f.fileIndex, wideningV: f.deltaEpV - f.reversibleDeltaEpV, ohmicDropV: ruOhm > 0 ? Math.abs(f.peakCurrentSpanA) * ruOhm : null,
+  }));
+  const first = byRate[0];
+  const last = byRate[byRate.length - 1];
+  const grows = !!first && !!last && last !== first && (last.deltaEpV - first.deltaEpV) * scale > 0.002;
+  const lastFile = perFile[perFile.length - 1];
+  const explainingRuOhm = lastFile && last && lastFile.wideningV > 0 && Math.abs(last.peakCurrentSpanA) > 0 ? lastFile.wideningV / Math.abs(last.peakCurrentSpanA) : null;
+  const widest = perFile.reduce<(typeof perFile)[number] | null>((a, f) => (a === null || f.wideningV > a.wideningV ? f : a), null);
+  const ohmicShare = widest && widest.ohmicDropV !== null && widest.wideningV * scale > 0.001 ? widest.ohmicDropV / widest.wideningV : null;
+  const nearReversible = byRate.every((f) => f.deltaEpV * scale <= 0.072);
+  const limitsK0 = grows && (ruOhm > 0 ? (ohmicShare ?? 0) >= 0.5 : nearReversible);
+  return { ruOhm, perFile, grows, ohmicShare, explainingRuOhm, limitsK0, text: describe(grows, ruOhm, ohmicShare, explainingRuOhm, limitsK0, last, lastFile) };
+}
+
+function describe(grows: boolean, ruOhm: number, share: number | null, explaining: number | null, limits: boolean, last: OhmicWideningFile | undefined, lastFile: { wideningV: number; ohmicDropV: number | null } | undefined): string {
+  if (!grows || !last || !lastFile) return 'ΔEp does not grow with scan rate: no ohmic or kinetic widening to weigh';
+  const at = `at ${Number(last.scanRateVPerS.toPrecision(6))} V/s ΔEp is ${mv(lastFile.wideningV)} wider than reversible`;
+  if (ruOhm > 0) {
+    const drop = `the iR correction (Ru = ${ruOhm} Ω) moved the peaks apart by ${mv(lastFile.ohmicDropV ?? 0)}`;
+    return limits
+      ? `${at}; ${drop}, ${((share ?? 0) * 100).toFixed(0)} % of the widening: a correction after the measurement leaves part of that drop, so the widening may be ohmic and k° is only a lower bound`
+      : `${at}; ${drop}, ${((share ?? 0) * 100).toFixed(0)} % of the widening: the widening is taken as kinetic`;
+  }
+  const ru = explaining === null ? '' : `; an uncompensated resistance of ${Number(explaining.toPrecision(2))} Ω alone would explain it`;
+  return limits
+    ? `${at}${ru}; every ΔEp stays at the reversible end (n·ΔEp ≤ 72 mV), where slow kinetics and ohmic drop widen ΔEp alike: without Ru, k° is only a lower bound (measure Ru, or vary the concentration)`
+    : `${at}${ru}; no Ru given: k° assumes the widening is kinetic`;
+}
