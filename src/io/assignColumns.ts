@@ -13,10 +13,14 @@ import type { ColumnRole, DetectedColumn, ImportOverrides } from './types';
 
 export interface RoleAssignment {
   columns: DetectedColumn[];
-  potential: number;
-  current: number;
-  time: number | null;
-  cycle: number | null;
+  /** Index (0-based) of the potential column in `columns`. */
+  potentialColumn: number;
+  /** Index of the current column. */
+  currentColumn: number;
+  /** Index of the time column, or null when there is none. */
+  timeColumn: number | null;
+  /** Index of the cycle-number column, or null when there is none. */
+  cycleColumn: number | null;
   headers: (HeaderReading | null)[];
   stats: ColumnStats[];
   warnings: ImportWarning[];
@@ -53,7 +57,7 @@ export function assignColumns(fileName: string, names: string[] | null, columns:
     unit: headers[j]?.unit?.symbol ?? '',
     explanation: s.why,
   }));
-  return { columns: detected, potential, current, time: time < 0 ? null : time, cycle: cycle < 0 ? null : cycle, headers, stats, warnings };
+  return { columns: detected, potentialColumn: potential, currentColumn: current, timeColumn: time < 0 ? null : time, cycleColumn: cycle < 0 ? null : cycle, headers, stats, warnings };
 }
 
 function slotFromHeader(h: HeaderReading | null, s: ColumnStats): Slot {

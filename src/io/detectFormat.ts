@@ -6,6 +6,7 @@
  */
 import { ImportError } from './errors';
 import { isNonFiniteToken, parseNumber, splitFields } from './textLines';
+import { DELIMITER_CHOICES, labelOf } from './overrideChoices';
 import type { DecimalMark, Delimiter, Guess, ImportOverrides } from './types';
 
 export interface TableLayout {
@@ -29,12 +30,8 @@ interface Candidate {
 }
 
 const DELIMITERS: Delimiter[] = [',', ';', '\t', 'whitespace'];
-const DELIMITER_NAME: Record<Delimiter, string> = { ',': "','", ';': "';'", '\t': 'tab', whitespace: 'runs of spaces' };
-
-/** Describes a delimiter for people: "';'", "tab", "runs of spaces". */
-export function delimiterName(d: Delimiter): string {
-  return DELIMITER_NAME[d];
-}
+/** A delimiter in words, from the one table of choices: "semicolon", "tab", "spaces". */
+const delimiterName = (d: Delimiter): string => labelOf(DELIMITER_CHOICES, d);
 
 interface LineClass {
   fields: number;
@@ -150,7 +147,7 @@ function detectIn(fileName: string, lines: string[], overrides: ImportOverrides)
   if (!best) throw noTableError(fileName, lines, overrides);
   const { c } = best;
   if (best.k > MAX_COLUMNS) {
-    throw new ImportError('TOO_MANY_COLUMNS', fileName, `the table has ${best.k} columns (split at ${DELIMITER_NAME[c.delimiter]}), more than the ${MAX_COLUMNS} any export of one voltammogram needs; export the potential, current and time columns, or choose another delimiter`, { line: best.first + startAt + 1 });
+    throw new ImportError('TOO_MANY_COLUMNS', fileName, `the table has ${best.k} columns (split at ${delimiterName(c.delimiter)}), more than the ${MAX_COLUMNS} any export of one voltammogram needs; export the potential, current and time columns, or choose another delimiter`, { line: best.first + startAt + 1 });
   }
   const first = best.first + startAt;
   const last = best.last + startAt;
@@ -167,7 +164,7 @@ function detectIn(fileName: string, lines: string[], overrides: ImportOverrides)
 
 /** "delimiter ';' — 412 of 412 table lines from line 6 split into 4 numeric fields". */
 export function describeDelimiter(d: Delimiter, forced: boolean, good: number, total: number, k: number, firstLine: number): string {
-  return `delimiter ${DELIMITER_NAME[d]}${forced ? ' (set by the user)' : ''} — ${good} of ${total} table lines from line ${firstLine} split into ${k} numeric fields`;
+  return `delimiter ${delimiterName(d)}${forced ? ' (set by the user)' : ''} — ${good} of ${total} table lines from line ${firstLine} split into ${k} numeric fields`;
 }
 
 function decimalExplanation(c: Candidate, rows: string[], forced: boolean): string {

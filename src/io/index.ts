@@ -6,7 +6,6 @@ export type { BatchFile, BatchItem, BatchOptions } from './importBatch';
 export { ImportError } from './errors';
 export type { ImportErrorCode, ImportWarning, ImportWarningCode } from './errors';
 export { parseUnitOf, CURRENT_FACTORS, POTENTIAL_FACTORS, TIME_FACTORS } from './units';
-export { delimiterName } from './detectFormat';
 export type {
   ColumnRole,
   CurrentConvention,

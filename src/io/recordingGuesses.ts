@@ -14,11 +14,11 @@ import type { UnitChoice } from './toMeasurement';
 import type { CurrentKind, Guess, PreambleValue } from './types';
 
 export function chooseReference(fileName: string, pre: PreambleReading, roles: RoleAssignment, header: HeaderFound, warnings: ImportWarning[]): Guess<string | null> {
-  const h = roles.headers[roles.potential];
+  const h = roles.headers[roles.potentialColumn];
   const fromColumn = h?.reference ?? null;
   const where = h?.referenceFrom === 'units row' && header.unitsLine !== null
     ? `the potential column's unit "${h.unitText}" in the units row on line ${header.unitsLine + 1}`
-    : `the potential column's name "${roles.columns[roles.potential]?.name ?? ''}"${header.guess.value !== null ? ` on line ${header.guess.value}` : ''}`;
+    : `the potential column's name "${roles.columns[roles.potentialColumn]?.name ?? ''}"${header.guess.value !== null ? ` on line ${header.guess.value}` : ''}`;
   if (pre.referenceElectrode) {
     const p = pre.referenceElectrode;
     if (fromColumn && !sameReference(fromColumn, p.value)) {
@@ -43,7 +43,7 @@ export interface CurrentKindChoice {
 }
 
 export function chooseCurrentKind(fileName: string, units: UnitChoice, roles: RoleAssignment, area: PreambleValue | null, warnings: ImportWarning[]): CurrentKindChoice {
-  const column = `column ${roles.current + 1} "${roles.columns[roles.current]?.name ?? ''}"`;
+  const column = `column ${roles.currentColumn + 1} "${roles.columns[roles.currentColumn]?.name ?? ''}"`;
   if (!units.currentDensity) {
     return { guess: { value: 'current', overridden: units.current.overridden, explanation: `current — ${column} holds a current (${units.current.value})` }, areaCm2: null };
   }

@@ -38,17 +38,17 @@ export interface CoreColumns {
 
 /** Picks units for potential, current and time from overrides, header units or magnitudes. */
 export function chooseUnits(fileName: string, a: RoleAssignment, o: ImportOverrides, warnings: ImportWarning[]): UnitChoice {
-  const pHead = a.headers[a.potential]?.unit;
-  const pStats = a.stats[a.potential];
+  const pHead = a.headers[a.potentialColumn]?.unit;
+  const pStats = a.stats[a.potentialColumn];
   let potential: Guess<PotentialUnit>;
   if (o.potentialUnit) potential = { value: o.potentialUnit, overridden: true, explanation: `potential unit ${o.potentialUnit} (set by the user)` };
-  else if (pHead?.kind === 'potential' && pHead.symbol in POTENTIAL_FACTORS) potential = { value: pHead.symbol as PotentialUnit, overridden: false, explanation: `potential unit ${pHead.symbol} — from ${unitSource(a, a.potential)}` };
+  else if (pHead?.kind === 'potential' && pHead.symbol in POTENTIAL_FACTORS) potential = { value: pHead.symbol as PotentialUnit, overridden: false, explanation: `potential unit ${pHead.symbol} — from ${unitSource(a, a.potentialColumn)}` };
   else {
     const mv = (pStats?.maxAbs ?? 0) > 20;
     potential = { value: mv ? 'mV' : 'V', overridden: false, explanation: mv ? `potential unit mV — no unit in the file and values reach ${pStats?.maxAbs}, too large for volts` : 'potential unit V — no unit in the file; values lie within ±20, as volts do' };
     warnings.push(makeWarning('UNIT_ASSUMED', `${fileName}: no potential unit found; read as ${potential.value}`));
   }
-  const cHead = a.headers[a.current]?.unit;
+  const cHead = a.headers[a.currentColumn]?.unit;
   let current: Guess<CurrentUnit>;
   let density = false;
   let currentFactor: number;
@@ -58,15 +58,15 @@ export function chooseUnits(fileName: string, a: RoleAssignment, o: ImportOverri
   } else if (cHead && (cHead.kind === 'current' || cHead.kind === 'currentDensity')) {
     density = cHead.kind === 'currentDensity';
     const base = cHead.symbol.replace(/\/.*$/, '') as CurrentUnit;
-    current = { value: base, overridden: false, explanation: `current unit ${cHead.symbol} — from ${unitSource(a, a.current)}${density ? ' (a current density)' : ''}` };
+    current = { value: base, overridden: false, explanation: `current unit ${cHead.symbol} — from ${unitSource(a, a.currentColumn)}${density ? ' (a current density)' : ''}` };
     currentFactor = cHead.factor;
-  } else if (a.headers[a.current]?.density) {
+  } else if (a.headers[a.currentColumn]?.density) {
     density = true;
-    current = { value: 'A', overridden: false, explanation: `current unit A/cm² — the column's name "${a.headers[a.current]?.label ?? ''}" marks a current density, but no unit is written; A/cm² assumed` };
+    current = { value: 'A', overridden: false, explanation: `current unit A/cm² — the column's name "${a.headers[a.currentColumn]?.label ?? ''}" marks a current density, but no unit is written; A/cm² assumed` };
     currentFactor = 1;
     warnings.push(makeWarning('UNIT_ASSUMED', `${fileName}: the current density column states no unit; read as A/cm² — set the current unit if it is mA/cm² or µA/cm²`));
   } else {
-    const max = a.stats[a.current]?.maxAbs ?? 0;
+    const max = a.stats[a.currentColumn]?.maxAbs ?? 0;
     current = { value: 'A', overridden: false, explanation: 'current unit A — no unit in the file, amperes assumed' };
     currentFactor = 1;
     const odd = max > 1 ? ` — values reach ${max}, which would be ${max} A: probably µA or mA, set the unit` : '';
@@ -79,16 +79,16 @@ export function chooseUnits(fileName: string, a: RoleAssignment, o: ImportOverri
 const unitSource = (a: RoleAssignment, j: number) => (a.headers[j]?.unitFrom === 'units row' ? 'the units row' : 'the header');
 
 function chooseTimeUnit(a: RoleAssignment, o: ImportOverrides): Guess<TimeUnit> | null {
-  if (a.time === null) return null;
+  if (a.timeColumn === null) return null;
   if (o.timeUnit) return { value: o.timeUnit, overridden: true, explanation: `time unit ${o.timeUnit} (set by the user)` };
-  const h = a.headers[a.time]?.unit;
-  if (h?.kind === 'time') return { value: h.symbol as TimeUnit, overridden: false, explanation: `time unit ${h.symbol} — from ${unitSource(a, a.time)}` };
+  const h = a.headers[a.timeColumn]?.unit;
+  if (h?.kind === 'time') return { value: h.symbol as TimeUnit, overridden: false, explanation: `time unit ${h.symbol} — from ${unitSource(a, a.timeColumn)}` };
   return { value: 's', overridden: false, explanation: 'time unit s — no unit in the file, seconds assumed' };
 }
 
 /** Builds the core columns; throws TOO_FEW_POINTS or CONSTANT_POTENTIAL when nothing usable is left. */
 export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment, u: UnitChoice, convention: CurrentConvention, areaCm2: PreambleValue | null, warnings: ImportWarning[]): CoreColumns {
-  const needed = [a.potential, a.current, a.time, a.cycle].filter((j): j is number => j !== null);
+  const needed = [a.potentialColumn, a.currentColumn, a.timeColumn, a.cycleColumn].filter((j): j is number => j !== null);
   const keep = new Uint8Array(t.rowCount);
   let kept = 0;
   const dropped: number[] = [];
@@ -106,14 +106,14 @@ export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment
     for (let i = 0, n = 0; i < t.rowCount; i++) if (keep[i]) out[n++] = (src[i] as number) * factor;
     return out;
   };
-  const potentialV = pick(a.potential, POTENTIAL_FACTORS[u.potential.value]);
-  assertPotentialChanges(fileName, potentialV, a.potential, t.lineOfRow[0] ?? 1);
+  const potentialV = pick(a.potentialColumn, POTENTIAL_FACTORS[u.potential.value]);
+  assertPotentialChanges(fileName, potentialV, a.potentialColumn, t.lineOfRow[0] ?? 1);
   const sign = convention === 'polarographic' ? -1 : 1;
   let currentFactor = u.currentFactor * sign;
   if (u.currentDensity && areaCm2) currentFactor *= areaCm2.value;
-  const currentA = pick(a.current, currentFactor);
-  const timeS = a.time !== null && u.time ? pick(a.time, TIME_FACTORS[u.time.value]) : null;
-  const cycleColumn = a.cycle !== null ? pick(a.cycle, 1) : null;
+  const currentA = pick(a.currentColumn, currentFactor);
+  const timeS = a.timeColumn !== null && u.time ? pick(a.timeColumn, TIME_FACTORS[u.time.value]) : null;
+  const cycleColumn = a.cycleColumn !== null ? pick(a.cycleColumn, 1) : null;
   const extraColumns: Record<string, Float64Array> = {};
   a.columns.forEach((c) => {
     if ((c.role === 'other' || c.role === 'index') && (a.stats[c.index]?.finite ?? 0) > 0) {
@@ -123,7 +123,7 @@ export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment
     }
   });
   const split = findSweepSegments(potentialV, { cycleColumn });
-  assertSwept(fileName, split, potentialV.length, a.potential);
+  assertSwept(fileName, split, potentialV.length, a.potentialColumn);
   return { potentialV, currentA, timeS, cycleColumn, extraColumns, split, rowsKept: kept, rowsDropped: droppedCount };
 }
 

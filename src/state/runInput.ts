@@ -21,7 +21,8 @@ import type { FileEntry, HalfwaveState } from './types';
 export function cellValuesOf(cell: SeriesCell, origin?: ResolvedCell['origin']): CellValues {
   const values: CellValues = {
     electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: millimolarToMolPerCm3(cell.concentrationMM),
-    temperatureK: celsiusToKelvin(cell.temperatureC), alpha: cell.alpha, ruOhm: cell.resistanceOhm, inputReference: cell.fileReference, pH: cell.pH,
+    temperatureK: celsiusToKelvin(cell.temperatureC), alpha: cell.alpha, transferElectronCount: cell.transferElectronCount,
+    formalPotentialV: cell.formalPotentialV, formalPotentialScale: 'recording', ruOhm: cell.resistanceOhm, inputReference: cell.fileReference, pH: cell.pH,
     areaRelativeUncertainty: cell.areaUncertaintyPercent / 100, concentrationRelativeUncertainty: cell.concentrationUncertaintyPercent / 100,
   };
   if (origin) {
@@ -47,7 +48,7 @@ export function seriesCellValues(state: RunSources, group: string): CellValues {
 export function methodOptionsOf(settings: AnalysisSettings): MethodOptions {
   return {
     smoothing: settings.smoothing, forwardBaseline: settings.forwardBaseline, returnBaseline: settings.returnBaseline,
-    minSignalToNoise: settings.minSignalToNoise, seriesCycle: 1,
+    minSignalToNoise: settings.minSignalToNoise, seriesCycle: 1, psiMethod: settings.psiMethod, spikeFilter: settings.spikeFilter,
   };
 }
 

@@ -40,16 +40,16 @@ export interface ResolvedCell {
 }
 
 export const CELL_FIELDS: readonly CellField[] = [
-  'electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'alpha', 'resistanceOhm', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent',
+  'electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'alpha', 'transferElectronCount', 'formalPotentialV', 'resistanceOhm', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent',
   'fileReference', 'pH', 'ferroceneHalfWaveV', 'internalStandardNearV', 'internalStandardFile', 'blankFiles',
 ];
 
 /**
- * Fields that only the series fits read (A, C, α and their uncertainties); every other field
+ * Fields that only the series fits read (A, C, α, nₐ, a known E°′, and the uncertainties of A and C); every other field
  * (n, T, Ru, the recording scale and its standard, the blanks) changes each file's own analysis,
  * whose potentials are on the display scale.
  */
-export const SERIES_ONLY_FIELDS: readonly CellField[] = ['areaCm2', 'concentrationMM', 'alpha', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent'];
+export const SERIES_ONLY_FIELDS: readonly CellField[] = ['areaCm2', 'concentrationMM', 'alpha', 'transferElectronCount', 'formalPotentialV', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent'];
 
 export function sameTraceCell(a: SeriesCell, b: SeriesCell): boolean {
   return CELL_FIELDS.every((k) => SERIES_ONLY_FIELDS.includes(k) || a[k] === b[k]);

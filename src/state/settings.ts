@@ -23,6 +23,10 @@ export interface ChemistrySettings {
   temperatureC: number;
   /** Transfer coefficient α given by the user; null = measured from the data (else 0.5). */
   alpha: number | null;
+  /** Electrons in the rate-determining step nₐ, for the irreversible equations (α·nₐ). */
+  transferElectronCount: number;
+  /** E°′ known from elsewhere (V, on the series' recording scale); null = not known. */
+  formalPotentialV: number | null;
   /** Uncompensated resistance Ru (Ω) for iR correction; 0 = none. */
   resistanceOhm: number;
   /** Relative standard uncertainty of the area and of the concentration (%), for D's combined interval. */
@@ -55,6 +59,10 @@ export interface AnalysisSettings {
   returnBaseline: Exclude<BaselineMethod, 'two-point'>;
   /** Peaks must stand this many noise standard deviations above their surroundings. */
   minSignalToNoise: number;
+  /** ψ from ΔEp: Nicholson's table (interpolated) or the Lavagnini et al. fit. */
+  psiMethod: 'table' | 'lavagnini';
+  /** Isolated bad points: left out by a Hampel test, or kept. */
+  spikeFilter: 'hampel' | 'off';
   chemistry: ChemistrySettings;
   reference: ReferenceSettings;
 }
@@ -71,7 +79,9 @@ export const defaultSettings: AnalysisSettings = {
   forwardBaseline: 'linear',
   returnBaseline: 'nicholson',
   minSignalToNoise: 8,
-  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: null, resistanceOhm: 0, areaUncertaintyPercent: 2, concentrationUncertaintyPercent: 2, blankFiles: [] },
+  psiMethod: 'table',
+  spikeFilter: 'hampel',
+  chemistry: { electronCount: 1, areaCm2: 0.0707, concentrationMM: 1, temperatureC: 25, alpha: null, transferElectronCount: 1, formalPotentialV: null, resistanceOhm: 0, areaUncertaintyPercent: 2, concentrationUncertaintyPercent: 2, blankFiles: [] },
   reference: { fileReference: 'AgCl-3M', displayReference: 'AgCl-3M', pH: 7, ferroceneHalfWaveV: null, internalStandardNearV: null, internalStandardFile: null },
 };
 
@@ -92,12 +102,16 @@ export function mergeSettings(base: AnalysisSettings, stored: unknown): Analysis
     forwardBaseline: pick(s.forwardBaseline, ['linear', 'polynomial'] as const, base.forwardBaseline),
     returnBaseline: pick(s.returnBaseline, ['linear', 'polynomial', 'nicholson'] as const, base.returnBaseline),
     minSignalToNoise: num(s.minSignalToNoise, base.minSignalToNoise),
+    psiMethod: pick(s.psiMethod, ['table', 'lavagnini'] as const, base.psiMethod),
+    spikeFilter: pick(s.spikeFilter, ['hampel', 'off'] as const, base.spikeFilter),
     chemistry: {
       electronCount: num(chem.electronCount, base.chemistry.electronCount),
       areaCm2: num(chem.areaCm2, base.chemistry.areaCm2),
       concentrationMM: num(chem.concentrationMM, base.chemistry.concentrationMM),
       temperatureC: num(chem.temperatureC, base.chemistry.temperatureC),
       alpha: chem.alpha === null ? null : num(chem.alpha, base.chemistry.alpha),
+      transferElectronCount: num(chem.transferElectronCount, base.chemistry.transferElectronCount),
+      formalPotentialV: chem.formalPotentialV === null ? null : num(chem.formalPotentialV, base.chemistry.formalPotentialV),
       resistanceOhm: num(chem.resistanceOhm, base.chemistry.resistanceOhm),
       areaUncertaintyPercent: num(chem.areaUncertaintyPercent, base.chemistry.areaUncertaintyPercent),
       concentrationUncertaintyPercent: num(chem.concentrationUncertaintyPercent, base.chemistry.concentrationUncertaintyPercent),
@@ -123,10 +137,10 @@ export function mergeSeriesCells(stored: unknown): Record<string, Partial<Series
   for (const [group, value] of Object.entries(asRecord(stored))) {
     const v = asRecord(value);
     const cell: Partial<SeriesCell> = {};
-    for (const key of ['electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'resistanceOhm', 'pH', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent'] as const) {
+    for (const key of ['electronCount', 'areaCm2', 'concentrationMM', 'temperatureC', 'resistanceOhm', 'pH', 'areaUncertaintyPercent', 'concentrationUncertaintyPercent', 'transferElectronCount'] as const) {
       if (typeof v[key] === 'number' && Number.isFinite(v[key])) cell[key] = v[key];
     }
-    for (const key of ['alpha', 'ferroceneHalfWaveV', 'internalStandardNearV'] as const) {
+    for (const key of ['alpha', 'formalPotentialV', 'ferroceneHalfWaveV', 'internalStandardNearV'] as const) {
       if (v[key] === null || (typeof v[key] === 'number' && Number.isFinite(v[key]))) cell[key] = v[key];
     }
     if (v.internalStandardFile === null || typeof v.internalStandardFile === 'string') cell.internalStandardFile = v.internalStandardFile;

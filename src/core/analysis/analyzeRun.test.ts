@@ -90,6 +90,18 @@ describe('analyzeRun conversions', () => {
     expect(she.reference.basis.join(' ')).toMatch(/0.197/);
     expect(() => run(sim, QUIET, { report: { outputReference: 'SHE' } }, [0.1])).toThrow(AnalysisError);
   });
+  // Same Ag/AgCl (sat. KCl) value: E°′ = −0.2 V vs Ag/AgCl is −0.003 V vs SHE, and k° of a
+  // totally irreversible couple from the forward peak uses the converted E°′.
+  it('moves an E°′ stated on the recording scale onto the reported scale', () => {
+    const sim = { k0CmPerS: 1e-4, alpha: 0.5, formalPotentialV: -0.2, startV: 0.4, switchV: -1.1, stepV: 0.002 };
+    const choices = (cell: CellValues) => ({ cell: { inputReference: 'Ag/AgCl', ...cell }, report: { outputReference: 'SHE' } });
+    const onRecording = run(sim, QUIET, choices({ formalPotentialV: -0.2, formalPotentialScale: 'recording' }), [0.05, 0.2, 1]);
+    const onReported = run(sim, QUIET, choices({ formalPotentialV: -0.2 + 0.197 }), [0.05, 0.2, 1]);
+    const k = (r: typeof onReported) => r.series[0]?.analysis.couples[0]?.rateConstant;
+    expect(k(onRecording)?.formalPotentialV).toBeCloseTo(-0.003, 9);
+    expect(k(onRecording)?.k0CmPerS).toBeCloseTo(k(onReported)?.k0CmPerS ?? Number.NaN, 12);
+    expect(Math.abs((k(onRecording)?.k0CmPerS ?? 1) / 1e-4 - 1)).toBeLessThan(0.3);
+  });
   // Fc⁺/Fc internal standard (IUPAC recommendation, Gritzner & Kůta 1984, from memory): the
   // standard's own E½ becomes 0 V; a second couple 0.35 V above it reads +0.35 V.
   it('references to an internal standard measured in the same file', () => {

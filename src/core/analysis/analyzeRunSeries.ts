@@ -40,20 +40,37 @@ function withCombinedIntervals(analysis: SeriesAnalysis, cell: ResolvedCell): vo
   }
 }
 
+/**
+ * E°′ on the reported scale. One stated on the recording scale moves by the files' own offset
+ * (the one their potentials moved by), which must then be the same for every file of the series;
+ * when it is not, E°′ is left unused and the run says why.
+ */
+function reportedFormalPotential(key: string, cell: ResolvedCell, members: RunFileResult[], warnings: RunWarning[]): number | null {
+  if (cell.formalPotentialV === null || cell.formalPotentialScale === 'reported') return cell.formalPotentialV;
+  const offsets = members.map((f) => f.reference.offsetV);
+  const first = offsets[0] ?? 0;
+  if (offsets.some((o) => Math.abs(o - first) > 1e-9)) {
+    warnings.push({ code: 'SERIES', series: key, message: 'E°′ was given on the recording scale, but the files of this series were recorded on different scales: E°′ is not used; give it on the reported scale instead' });
+    return null;
+  }
+  return cell.formalPotentialV + first;
+}
+
 /** `files`: the results of the series' files (internal-standard files are left out here). */
 export function analyzeRunSeries(key: string, cell: ResolvedCell, method: ResolvedMethod, output: ReferenceId | null, files: RunFileResult[]): RunSeriesResult {
   const members = files.filter((f) => f.role === 'series');
   if (!members.length) throw new AnalysisError('EMPTY_INPUT', `series "${key}": every file is an internal standard or a blank; nothing is left for the series`);
+  const early: RunWarning[] = [];
   const analysis = analyzeResolvedSeries(
     members.map((f) => ({ fileName: f.fileName, scanRateVPerS: f.scanRateVPerS, analysis: f.analysis })),
     {
       electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: cell.concentrationMolPerCm3, temperatureK: cell.temperatureK,
       alpha: cell.alpha, transferElectronCount: cell.transferElectronCount, diffusionRatio: cell.diffusionRatio, diffusionCm2PerS: cell.diffusionCm2PerS,
-      formalPotentialV: cell.formalPotentialV, ruOhm: cell.ruOhm, cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
+      formalPotentialV: reportedFormalPotential(key, cell, members, early), ruOhm: cell.ruOhm, cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
     },
   );
   withCombinedIntervals(analysis, cell);
-  const warnings: RunWarning[] = analysis.warnings.map((w) => ({ code: 'SERIES', series: key, message: w.message }));
+  const warnings: RunWarning[] = [...early, ...analysis.warnings.map((w) => ({ code: 'SERIES' as const, series: key, message: w.message }))];
   const refs = describeSeriesReferences(members, output, cell.temperatureK);
   warnings.push(...refs.warnings.map((w) => ({ ...w, series: key })));
   const capacitance = capacitanceOf(members, cell, warnings, key);

@@ -74,6 +74,7 @@ export function resolveCell(c: CellValues = {}): ResolvedCell {
     alpha: optional('cathodic transfer coefficient αc', c.alpha, 0.05, 0.95),
     transferElectronCount,
     formalPotentialV: optional('formal potential E°′ (V)', c.formalPotentialV, -10, 10),
+    formalPotentialScale: c.formalPotentialScale === 'recording' ? 'recording' : 'reported',
     diffusionRatio,
     diffusionCm2PerS: optional('diffusion coefficient D (cm²/s)', c.diffusionCm2PerS, Number.MIN_VALUE),
     ruOhm,

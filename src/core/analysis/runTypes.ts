@@ -100,6 +100,12 @@ export interface CellValues {
    * irreversible couple then comes from the forward peak alone. @default null
    */
   formalPotentialV?: number | null;
+  /**
+   * Scale formalPotentialV is stated on: the reported scale, or the scale the series' files were
+   * recorded on (the run then moves it by the files' own offset, so it follows a change of the
+   * reported scale). @default 'reported'
+   */
+  formalPotentialScale?: 'reported' | 'recording';
   /** D_O/D_R for Nicholson's k°. @default 1 */
   diffusionRatio?: number;
   /** Known D of the bulk species (cm²/s), used for k° and the electroactive area. @default null */
@@ -188,6 +194,7 @@ export interface ResolvedCell {
   alpha: number | null;
   transferElectronCount: number;
   formalPotentialV: number | null;
+  formalPotentialScale: 'reported' | 'recording';
   diffusionRatio: number;
   diffusionCm2PerS: number | null;
   ruOhm: number;

@@ -8,6 +8,7 @@ import { referenceChoices } from '../../state/display';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import type { CellField, ResolvedCell, SeriesCell } from '../../state/types';
 import { CellBlankFields } from './CellBlankFields';
+import { CellKineticsFields } from './CellKineticsFields';
 import { CellStandardFields } from './CellStandardFields';
 import { NumberField, type NumberFieldProps } from './NumberField';
 import { OriginBadge } from './OriginBadge';
@@ -72,6 +73,7 @@ export function CellPanel() {
           title="αc, the cathodic transfer coefficient (of the reduction O + ne⁻ → R; an oxidation wave runs with 1 − αc); leave empty to measure it from a totally irreversible series, else 0.5 with 0.3–0.7 carried into D and k°" onCommit={(v) => set({ alpha: v })} />
       </div>
       {adsorbed ? <p className="hint" data-testid="cell-adsorbed">Adsorbed film: Γ follows from the peak charge and the area; the concentration is not used.</p> : null}
+      <CellKineticsFields resolved={resolved} set={set} />
       <CellStandardFields resolved={resolved} set={set} />
       {group !== null ? <CellBlankFields cell={c} set={set} /> : null}
       {group !== null ? <CellOrigins resolved={resolved} group={group} /> : null}

@@ -34,6 +34,14 @@ export function MethodPanel() {
           onChange={(v) => update((x) => ({ ...x, returnBaseline: v }))} />
         <NumberField label="Peak must exceed noise by" unit="× σ" value={s.minSignalToNoise} min={1} max={1000} testId="min-snr"
           onCommit={(v) => v !== null && update((x) => ({ ...x, minSignalToNoise: v }))} />
+        <SelectField label="Isolated bad points" value={s.spikeFilter} testId="spike-filter"
+          title="a point far off the running median of its neighbours (Hampel test) is left out of the analysis and listed; off keeps every point"
+          options={[{ value: 'hampel', label: 'left out and listed (Hampel test)' }, { value: 'off', label: 'kept' }]}
+          onChange={(v) => update((x) => ({ ...x, spikeFilter: v }))} />
+        <SelectField label="ψ from ΔEp" value={s.psiMethod} testId="psi-method"
+          title="Nicholson's k° needs ψ(ΔEp): his 1965 table, interpolated over 61–212 mV, or the Lavagnini et al. 2004 closed form (63–141 mV, up to 7 % off the table)"
+          options={[{ value: 'table', label: 'Nicholson 1965 table, interpolated' }, { value: 'lavagnini', label: 'Lavagnini et al. 2004 closed form' }]}
+          onChange={(v) => update((x) => ({ ...x, psiMethod: v }))} />
       </div>
       <WindowsEditor />
     </section>
