@@ -1,6 +1,7 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { startApp } from '../state/app';
+import { preloadPlotly } from './plotlyLoader';
 import { App } from './App';
 import './styles.css';
 
@@ -11,5 +12,6 @@ if (root) {
       <App />
     </StrictMode>,
   );
+  preloadPlotly();
   void startApp();
 }

@@ -1,7 +1,7 @@
 /** Loaded files with status, progress, series group and any import error beside the file. */
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import type { FileEntry } from '../../state/types';
-import { bytes } from '../format';
+import { bytes, count } from '../format';
 
 const SOURCE_WORDS: Record<string, string> = {
   option: 'your override', time: 'the time column', metadata: 'the file header', filename: 'the file name',
@@ -26,7 +26,7 @@ function FileRow({ id }: { id: string }) {
   if (!file) return null;
   const act = halfwaveActions();
   return (
-    <li className={`file-row status-${file.status}${selected ? ' selected' : ''}`} data-testid="file-row" data-file-name={file.fileName} data-status={file.status}>
+    <li className={`file-row status-${file.status}${selected ? ' selected' : ''}`} data-testid="file-row" data-file-name={file.fileName} data-status={file.status} data-analysis={result?.status ?? 'none'}>
       <div className="file-head">
         <button type="button" className="file-name" aria-pressed={selected} disabled={!file.measurement} onClick={() => act.selectFile(id)} title={`${file.fileName} (${bytes(file.sizeBytes)})`}>
           {file.fileName}
@@ -64,6 +64,6 @@ function statusText(file: FileEntry, analysis: 'running' | 'ready' | 'error' | u
   if (file.status === 'importing') return `reading ${Math.round(file.progress * 100)} %`;
   if (file.status === 'error') return 'not read';
   const m = file.measurement;
-  const pts = m ? `${m.potentialV.length.toLocaleString('en')} pts, ${m.cycles.length} cycle${m.cycles.length === 1 ? '' : 's'}` : '';
+  const pts = m ? `${count(m.potentialV.length)} pts, ${m.cycles.length} cycle${m.cycles.length === 1 ? '' : 's'}` : '';
   return analysis === 'running' ? `${pts} · analysing` : analysis === 'error' ? `${pts} · analysis failed` : pts;
 }

@@ -4,7 +4,7 @@
  * Fit lines are drawn from the series result's own slope and intercept over the data range, so
  * the picture shows exactly the fit that produced the numbers in the table.
  */
-import type { Data, Layout } from 'plotly.js-dist-min';
+import type { Data, Layout } from 'plotly.js';
 import type { FitLineResult } from '../../core/regression/fitLine';
 import type { SeriesCouple } from '../../core/analysis/seriesTypes';
 import type { SeriesPoint } from '../../core/series/seriesPoint';

@@ -5,7 +5,7 @@
  * a potential axis increasing to the right; the polarographic choice plots −i (cathodic up) on
  * a potential axis increasing to the left. Pure: no DOM, no Plotly import.
  */
-import type { Data, Layout, Shape } from 'plotly.js-dist-min';
+import type { Data, Layout, Shape } from 'plotly.js';
 import type { VoltammogramAnalysis } from '../../core/analysis/types';
 import type { PeakResult, PeakWindow } from '../../core/peaks/peakTypes';
 import type { CycleRange } from '../../core/types';
