@@ -10,8 +10,8 @@ export const palette = {
   grid: '#e2e4de',
   plotBackground: '#fcfcfa',
   /** Trace colours for successive cycles / files (ink first, then Okabe–Ito). */
-  traces: ['#1d2a33', '#009E73', '#CC79A7', '#E69F00', '#56B4E9', '#0072B2', '#D55E00', '#7f7f7f'],
-  smoothed: '#E69F00',
+  traces: ['#1d2a33', '#E69F00', '#56B4E9', '#7f7f7f', '#009E73', '#CC79A7', '#0072B2', '#D55E00'],
+  smoothed: '#CC79A7',
   baseline: '#6b6b3a',
   anodic: '#D55E00',
   cathodic: '#0072B2',

@@ -5,7 +5,7 @@
  * a potential axis increasing to the right; the polarographic choice plots −i (cathodic up) on
  * a potential axis increasing to the left. Pure: no DOM, no Plotly import.
  */
-import type { Data, Layout, Shape } from 'plotly.js';
+import type { Annotations, Data, Layout, Shape } from 'plotly.js';
 import type { VoltammogramAnalysis } from '../../core/analysis/types';
 import type { PeakResult, PeakWindow } from '../../core/peaks/peakTypes';
 import type { CycleRange } from '../../core/types';
@@ -41,6 +41,11 @@ export interface TraceFigureInput {
   companions?: { name: string; potentialV: Float64Array; currentA: Float64Array; cycles: CycleRange[] }[];
   /** Most points drawn per trace. @default 6000 */
   maxPoints?: number;
+  /**
+   * Usable potential window of the electrode in its medium, on the display scale (V), drawn as a
+   * band behind the trace with its limits marked; a null limit leaves that side open.
+   */
+  workingWindow?: { lowerV: number | null; upperV: number | null; lowerLabel: string; upperLabel: string } | null;
 }
 
 export interface TraceFigure {
@@ -134,10 +139,10 @@ function peakTrace(peaks: PeakResult[], direction: 'anodic' | 'cathodic', tx: Ma
 
 function traceLayout(input: TraceFigureInput, scale: UnitScale, tx: Map1): Partial<Layout> {
   const polarographic = input.convention === 'polarographic';
-  const shapes: Partial<Shape>[] = input.peakWindows.map((w) => ({
+  const shapes: Partial<Shape>[] = [...workingWindowShapes(input), ...input.peakWindows.map((w): Partial<Shape> => ({
     type: 'rect', xref: 'x', yref: 'paper', x0: tx(w.fromV), x1: tx(w.toV), y0: 0, y1: 1, line: { width: 0 },
     fillcolor: w.direction === 'anodic' ? palette.anodicWindow : palette.cathodicWindow, layer: 'below',
-  }));
+  }))];
   return {
     font: baseFont,
     paper_bgcolor: '#ffffff',
@@ -157,6 +162,54 @@ function traceLayout(input: TraceFigureInput, scale: UnitScale, tx: Map1): Parti
     selectdirection: 'h',
     hovermode: 'closest',
     shapes,
+    annotations: workingWindowLabels(input),
     uirevision: `${input.fileName}|${input.convention}`,
   };
+}
+
+/** The working window as a band (layer below the traces) with a dashed line at each known limit. */
+function workingWindowShapes(input: TraceFigureInput): Partial<Shape>[] {
+  const w = visibleWindow(input);
+  if (!w) return [];
+  const edge = (x: number): Partial<Shape> => ({ type: 'line', xref: 'x', yref: 'paper', x0: x, x1: x, y0: 0, y1: 1, layer: 'below', line: { color: palette.baseline, width: 1, dash: 'dash' } });
+  return [
+    { type: 'rect', xref: 'x', yref: 'paper', x0: w.x0, x1: w.x1, y0: 0, y1: 1, line: { width: 0 }, fillcolor: palette.workingWindow, layer: 'below' },
+    ...w.edges.map((e) => edge(e.x)),
+  ];
+}
+
+function workingWindowLabels(input: TraceFigureInput): Partial<Annotations>[] {
+  return (visibleWindow(input)?.edges ?? []).map((e) => ({
+    x: e.x, xref: 'x', y: 0, yref: 'paper', yanchor: 'bottom', xanchor: e.side === 'lower' ? 'left' : 'right', text: e.label, showarrow: false,
+    font: { size: 10, color: palette.baseline },
+  }));
+}
+
+/**
+ * The band clipped to the recorded potential range (so it never widens the axis), and the limits
+ * that fall inside that range (widened by 5 % of it) as edges to mark.
+ */
+function visibleWindow(input: TraceFigureInput): { x0: number; x1: number; edges: { x: number; side: 'lower' | 'upper'; label: string }[] } | null {
+  const w = input.workingWindow;
+  if (!w || (w.lowerV === null && w.upperV === null)) return null;
+  const [lo, hi] = potentialRange(input);
+  const x0 = Math.max(lo, w.lowerV ?? lo);
+  const x1 = Math.min(hi, w.upperV ?? hi);
+  const margin = (hi - lo) * 0.05;
+  const inView = (x: number | null): x is number => x !== null && x >= lo - margin && x <= hi + margin;
+  const edges = [
+    ...(inView(w.lowerV) ? [{ x: w.lowerV, side: 'lower' as const, label: w.lowerLabel }] : []),
+    ...(inView(w.upperV) ? [{ x: w.upperV, side: 'upper' as const, label: w.upperLabel }] : []),
+  ];
+  return x1 > x0 ? { x0, x1, edges } : { x0: lo, x1: lo, edges };
+}
+
+function potentialRange(input: TraceFigureInput): [number, number] {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of input.potentialV) {
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  return [lo, hi];
 }
