@@ -42,7 +42,7 @@ const PROBE = `(() => {
     const now = performance.now();
     const want = Number(window.benchWant ?? 0);
     if (marks.firstPlot === undefined && plotRenders() > 0) marks.firstPlot = now;
-    if (want > 0 && ready() >= want && !busy() && plotRenders() > 0 && document.querySelector('[data-testid=couples-table]')) {
+    if (want > 0 && ready() >= want && !busy() && plotRenders() > 0 && document.querySelector('[data-testid=couples-table], [data-testid=results-table]')) {
       marks['shown' + want] ??= now;
     }
   };

@@ -1,6 +1,6 @@
 /**
  * PNG and SVG of a figure at publication size, made by Plotly in this page (nothing is sent
- * anywhere): 160 × 120 mm at 300 dpi for PNG (1890 × 1417 px), the same shape as SVG; light
+ * anywhere): 160 × 120 mm at 300 dpi for PNG (1890 × 1416 px), the same shape as SVG; light
  * background, larger type, axis titles with their units as on screen, no toolbar.
  */
 import type { Data, Layout } from 'plotly.js';
