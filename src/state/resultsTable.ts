@@ -49,19 +49,27 @@ function rowOf(id: string, s: Pick<HalfwaveState, 'files' | 'results'>, cycle: n
   };
 }
 
+/**
+ * A file's rows are kept while its result and its name, series and import warnings stay the same,
+ * so a table re-rendered for another file's result gets the same row objects (and skips them).
+ */
+const fileRows = new WeakMap<object, { key: string; rows: ResultsRow[] }>();
+
+function rowsOfFile(s: Pick<HalfwaveState, 'files' | 'results'>, id: string): ResultsRow[] {
+  const run = s.results[id]?.run;
+  const f = s.files[id];
+  if (!run || !f) return [];
+  const key = `${f.fileName}\u0000${f.group}\u0000${f.warnings.length}`;
+  const hit = fileRows.get(run);
+  if (hit && hit.key === key) return hit.rows;
+  const rows = run.analysis.cycles.flatMap((c) => c.couples.flatMap((k) => rowOf(id, s, c.index, k, run.analysis.noiseA) ?? []));
+  fileRows.set(run, { key, rows });
+  return rows;
+}
+
 /** Rows of the files of `group` (null: every file), sorted; files without a result yet are left out. */
 export function resultsRows(s: Pick<HalfwaveState, 'fileOrder' | 'files' | 'results'>, group: string | null, sort: ResultsSort | null = null): ResultsRow[] {
-  const rows: ResultsRow[] = [];
-  for (const id of s.fileOrder) {
-    if (group !== null && s.files[id]?.group !== group) continue;
-    const analysis = s.results[id]?.run?.analysis;
-    for (const c of analysis?.cycles ?? []) {
-      for (const k of c.couples) {
-        const row = rowOf(id, s, c.index, k, analysis?.noiseA ?? 0);
-        if (row) rows.push(row);
-      }
-    }
-  }
+  const rows = s.fileOrder.flatMap((id) => (group !== null && s.files[id]?.group !== group ? [] : rowsOfFile(s, id)));
   return sort ? sortRows(rows, sort) : rows;
 }
 

@@ -3,7 +3,7 @@
  * every file), sortable by any column; a click (or Enter) on a row shows that file and cycle on
  * the trace; Copy puts the rows on the clipboard as tab-separated text with units in the header.
  */
-import { useMemo, useState } from 'react';
+import { memo, useMemo, useState } from 'react';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import { resultsRows, resultsTsv, type ResultsColumn, type ResultsRow } from '../../state/resultsTable';
 import { chooseCurrentScale } from '../plots/currentScale';
@@ -20,13 +20,14 @@ export function ResultsTable() {
   const sort = useHalfwave((s) => s.resultsSort);
   const selected = useHalfwave((s) => s.selectedFileId);
   const cycle = useHalfwave((s) => s.selectedCycle);
+  // Keyed on the results, not on the files: files change with every progress tick of an import,
+  // and a file's name and series are read with its rows (cached per result, resultsTable.ts).
   const fileOrder = useHalfwave((s) => s.fileOrder);
-  const files = useHalfwave((s) => s.files);
   const results = useHalfwave((s) => s.results);
   const scale = useSeriesScale(group);
   const [copied, setCopied] = useState<string | null>(null);
   const shownGroup = scope === 'series' ? group : null;
-  const rows = useMemo(() => resultsRows({ fileOrder, files, results }, shownGroup, sort), [fileOrder, files, results, shownGroup, sort]);
+  const rows = useMemo(() => resultsRows({ fileOrder, files: halfwaveActions().files, results }, shownGroup, sort), [fileOrder, results, shownGroup, sort]);
   const act = halfwaveActions();
   const cur = chooseCurrentScale(Math.max(0, ...rows.map((r) => Math.max(r.ipaA ?? 0, r.ipcA ?? 0))));
   const columns: Column[] = [
@@ -68,8 +69,7 @@ export function ResultsTable() {
           </thead>
           <tbody>
             {rows.map((r) => (
-              <ResultLine key={`${r.fileId}-${r.cycle}-${r.couple}`} r={r} factor={cur.factor} current={r.fileId === selected && r.cycle === cycle}
-                show={() => act.selectFile(r.fileId, r.cycle)} />
+              <ResultLine key={`${r.fileId}-${r.cycle}-${r.couple}`} r={r} factor={cur.factor} current={r.fileId === selected && r.cycle === cycle} show={act.selectFile} />
             ))}
           </tbody>
         </table>
@@ -78,12 +78,12 @@ export function ResultsTable() {
   );
 }
 
-function ResultLine({ r, factor, current, show }: { r: ResultsRow; factor: number; current: boolean; show: () => void }) {
+const ResultLine = memo(function ResultLine({ r, factor, current, show }: { r: ResultsRow; factor: number; current: boolean; show: (id: string, cycle: number) => void }) {
   // Currents with the digits the file's noise allows; potentials to 0.1 mV.
   const ip = (v: number | null) => byNoise(v, r.noiseA, factor, 3);
   return (
-    <tr data-testid="results-row" data-file-name={r.fileName} className={current ? 'current' : undefined} onClick={show}>
-      <th scope="row"><button type="button" className="row-open" aria-pressed={current} title="Show this trace" onClick={(e) => { e.stopPropagation(); show(); }}>{r.fileName}</button></th>
+    <tr data-testid="results-row" data-file-name={r.fileName} className={current ? 'current' : undefined} onClick={() => show(r.fileId, r.cycle)}>
+      <th scope="row"><button type="button" className="row-open" aria-pressed={current} title="Show this trace" onClick={(e) => { e.stopPropagation(); show(r.fileId, r.cycle); }}>{r.fileName}</button></th>
       <td data-testid="results-v">{scanRate(r.scanRateVPerS)}</td>
       <td>{r.cycle}</td>
       <td>{fixed(r.epaV, 4)}</td><td>{fixed(r.epcV, 4)}</td><td data-testid="results-ehalf">{fixed(r.eHalfV, 4)}</td>
@@ -93,4 +93,4 @@ function ResultLine({ r, factor, current, show }: { r: ResultsRow; factor: numbe
       <td className="verdict" title={r.readingText}>{r.reading}</td><td>{r.warnings}</td>
     </tr>
   );
-}
+});
