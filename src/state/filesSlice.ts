@@ -12,8 +12,11 @@ import { toUserError, type FileEntry, type FileInput, type FilesSlice, type Slic
 
 export const DEFAULT_GROUP = 'series 1';
 
-/** Files read at the same time: two keep a two-worker pool busy without flooding memory. */
-const IMPORT_SLOTS = 2;
+/**
+ * Files read at the same time: four keep a queue in each of the two workers, so a worker never
+ * waits for the page to send the next file while the page draws the last answer.
+ */
+const IMPORT_SLOTS = 4;
 
 /** At most `slots` tasks at once, first come first served; a finished task hands its slot on. */
 export function createLimiter(slots: number): <T>(task: () => Promise<T>) => Promise<T> {

@@ -40,7 +40,7 @@ describe('working window and series overlays', () => {
     await page.waitForFunction(() => ((document.querySelector('[data-testid=trace-plot]') as Host | null)?.layout?.shapes ?? []).some((s) => s.type === 'rect'), null, { timeout: 10_000 });
     const { shapes } = await shapesOf(page);
     const band = shapes.find((s) => s.type === 'rect');
-    expect(band?.fillcolor).toBe('rgba(120, 120, 120, 0.16)');
+    expect(band?.fillcolor).toBe('rgba(0, 158, 115, 0.07)');
     expect(band!.x1).toBeGreaterThan(band!.x0);
   });
 
@@ -54,6 +54,17 @@ describe('working window and series overlays', () => {
     const { shapes, labels } = await shapesOf(page);
     expect(shapes.find((s) => s.type === 'line')?.x0).toBeCloseTo(0.05, 6);
     expect(labels).toContain('carbon and water oxidation');
+  });
+
+  it('a peak at or beyond a window limit is flagged as possible breakdown in the peaks table', async () => {
+    const page = app.page;
+    await page.getByTestId('tab-peaks').click();
+    expect(await page.getByTestId('peak-at-edge').count()).toBe(0);
+    // The probe's anodic peak is near −0.13 V vs Ag/AgCl (demo-data/README.md): a limit at −0.15 V puts it beyond.
+    await page.getByTestId('window-upper').fill('-0.15');
+    await page.getByTestId('window-upper').press('Enter');
+    await page.getByTestId('peak-at-edge').first().waitFor({ timeout: 10_000 });
+    await page.getByTestId('tab-couples').click();
   });
 
   it('carbon paste in the organic medium says it is not usable instead of drawing a band', async () => {

@@ -17,8 +17,8 @@ export const palette = {
   cathodic: '#0072B2',
   anodicWindow: 'rgba(213, 94, 0, 0.10)',
   cathodicWindow: 'rgba(0, 114, 178, 0.10)',
-  /** The usable potential window of the electrode in its medium (shaded outside it). */
-  workingWindow: 'rgba(120, 120, 120, 0.16)',
+  /** The usable potential window of the electrode in its medium (a light band over that range). */
+  workingWindow: 'rgba(0, 158, 115, 0.07)',
   fit: '#444444',
   fitBand: 'rgba(68, 68, 68, 0.16)',
   theory: '#111111',
