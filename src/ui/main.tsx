@@ -1,9 +1,27 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { startApp } from '../state/app';
+import { getAppStore, startApp } from '../state/app';
 import { preloadPlotly } from './plotlyLoader';
 import { App } from './App';
 import './styles.css';
+
+/**
+ * Plotly (1 MB) parses on the page's thread: start it once the first files are on their way to
+ * the workers, so its parse overlaps their reading instead of delaying it.
+ */
+function preloadPlotlyOnceFilesQueued(): void {
+  const store = getAppStore();
+  const stop = store.subscribe((s) => {
+    if (s.fileOrder.length === 0) return;
+    stop();
+    preloadPlotly();
+  });
+  // Nothing to load (no demo data): fetch it anyway, a little later.
+  setTimeout(() => {
+    stop();
+    preloadPlotly();
+  }, 3000);
+}
 
 const root = document.getElementById('root');
 if (root) {
@@ -12,6 +30,6 @@ if (root) {
       <App />
     </StrictMode>,
   );
-  preloadPlotly();
+  preloadPlotlyOnceFilesQueued();
   void startApp();
 }
