@@ -2,7 +2,8 @@
  * The Content-Security-Policy of the built page, written into dist/index.html by a build-only
  * Vite plugin (the dev server injects its own inline scripts and styles, so it runs without it).
  * Everything comes from the page's own origin: scripts (no inline script, no eval), styles, the
- * analysis workers (same-origin files, so no blob:), images, fonts and connections; no plugins,
+ * analysis workers (same-origin files, so no blob:), fonts and connections; images also from
+ * blob: and data: URLs, which the figure export draws through (an image cannot run script); no plugins,
  * no <base> or form targets elsewhere. Source: W3C, Content Security Policy Level 3 (2024
  * working draft), directives and hash sources.
  *
@@ -25,7 +26,8 @@ export const CONTENT_SECURITY_POLICY = [
   "default-src 'self'",
   "script-src 'self'",
   `style-src 'self' ${PLOTLY_STYLE_HASHES.join(' ')}`,
-  "img-src 'self'",
+  // Figure export: Plotly draws its SVG as a data: image onto a canvas, and the PNG is saved from a blob:.
+  "img-src 'self' blob: data:",
   "font-src 'self'",
   "connect-src 'self'",
   "worker-src 'self'",

@@ -8,7 +8,7 @@ import type { ImportResult } from '../io';
 
 const LABEL_WIDTH = 13;
 const row = (label: string, text: string) => `  ${label.padEnd(LABEL_WIDTH)}${text}\n`;
-/** The explanations start by naming their subject ("delimiter ';' — ..."); the label already does. */
+/** The explanations start by naming their subject ("delimiter semicolon — ..."); the label already does. */
 const strip = (text: string, subject: string) => (text.startsWith(`${subject} `) ? text.slice(subject.length + 1) : text);
 
 export function formatInspectText(outcomes: InputOutcome[]): string {

@@ -43,4 +43,12 @@ export interface Voltammogram {
   cycles: CycleRange[];
   scanRateVPerS: number | null;
   scanRateSource: ScanRateSource | null;
+  /**
+   * What `currentA` holds: a current (A), or a current density (A/cm²) when the file gave only a
+   * density and no electrode area; results are then per cm² of electrode. @default 'current'
+   */
+  currentKind?: CurrentKind;
 }
+
+/** A current in A, or a current density in A/cm². */
+export type CurrentKind = 'current' | 'density';

@@ -162,7 +162,7 @@ function detectIn(fileName: string, lines: string[], overrides: ImportOverrides)
   };
 }
 
-/** "delimiter ';' — 412 of 412 table lines from line 6 split into 4 numeric fields". */
+/** "delimiter semicolon — 412 of 412 table lines from line 6 split into 4 numeric fields". */
 export function describeDelimiter(d: Delimiter, forced: boolean, good: number, total: number, k: number, firstLine: number): string {
   return `delimiter ${delimiterName(d)}${forced ? ' (set by the user)' : ''} — ${good} of ${total} table lines from line ${firstLine} split into ${k} numeric fields`;
 }

@@ -49,13 +49,13 @@ export function filesTable(r: AnalyzeRunResult): TextTable {
   return {
     name: 'files',
     header: ['file', 'series', 'role', 'sample', 'operator', 'working electrode', 'reference electrode (as written)', 'recorded',
-      'scan rate / (mV s⁻¹)', 'scan rate from', 'blank', 'size / bytes', 'SHA-256', 'layout'],
+      'scan rate / (mV s⁻¹)', 'scan rate from', 'currents', 'blank', 'size / bytes', 'SHA-256', 'layout'],
     rows: r.files.map((f) => {
       const md = f.provenance.metadata;
       return [f.fileName, f.series, f.role, metadataLike(md, /sample|analyte|solution/i), metadataLike(md, /operator|user|analyst/i),
         metadataLike(md, /working|^we$|electrode(?!.*(ref|counter))/i), metadataLike(md, /ref/i), metadataLike(md, /date|recorded|time of/i),
-        String(Number((f.scanRateVPerS * 1000).toPrecision(6))), f.scanRateSource ?? '', f.blank?.fileName ?? '', String(f.provenance.sizeBytes ?? ''),
-        f.provenance.sha256 ?? '', f.provenance.layout ?? ''];
+        String(Number((f.scanRateVPerS * 1000).toPrecision(6))), f.scanRateSource ?? '', f.currentKind === 'density' ? 'densities, A/cm²' : 'A',
+        f.blank?.fileName ?? '', String(f.provenance.sizeBytes ?? ''), f.provenance.sha256 ?? '', f.provenance.layout ?? ''];
     }),
   };
 }
@@ -63,6 +63,7 @@ export function filesTable(r: AnalyzeRunResult): TextTable {
 export function couplesTable(r: AnalyzeRunResult): TextTable {
   const maxA = Math.max(0, ...r.files.flatMap((f) => f.analysis.cycles.flatMap((c) => c.couples.flatMap((k) => [k.ipaA ?? 0, k.ipcA ?? 0]))));
   const cu = currentUnit(maxA);
+  const anyDensity = r.files.some((f) => f.currentKind === 'density');
   const rows = r.files.flatMap((f) => {
     const uE = potentialStepV(f) / 2;
     const uI = f.analysis.noiseA;
@@ -72,13 +73,13 @@ export function couplesTable(r: AnalyzeRunResult): TextTable {
       return [f.fileName, f.series, String(Number((f.scanRateVPerS * 1000).toPrecision(6))), String(cy.index), String(k.index + 1),
         fixedFor(k.epaV, uE), fixedFor(k.epcV, uE), fixedFor(k.eHalfV, uE), fixedFor(k.deltaEpV, uE, 1000),
         fixedFor(k.ipaA, uI, cu.factor), fixedFor(k.ipcA, uI, cu.factor), fixedFor(k.ratio, rel), fixedFor(fwdWidth, uE, 1000),
-        k.verdict.category, String(f.warnings.length)];
+        k.verdict.category, String(f.warnings.length), ...(anyDensity ? [f.currentKind === 'density' ? 'per cm²' : ''] : [])];
     }));
   });
   return {
     name: 'couples',
     header: ['file', 'series', 'v / (mV s⁻¹)', 'cycle', 'couple', 'Epa / V', 'Epc / V', 'E½ / V', 'ΔEp / mV', `ipa / ${cu.unit}`, `ipc / ${cu.unit}`,
-      'ipc/ipa (return/forward)', '|Ep − Ep/2| of the forward peak / mV', 'reading', 'warnings'],
+      'ipc/ipa (return/forward)', '|Ep − Ep/2| of the forward peak / mV', 'reading', 'warnings', ...(anyDensity ? ['ipa, ipc per cm² of electrode'] : [])],
     rows,
   };
 }
@@ -93,6 +94,10 @@ function diffusionCells(c: SeriesCouple): string[] {
   const scale = 10 ** -Math.floor(Math.log10(d.diffusionCm2PerS));
   const at = (x: number | undefined) => (x === undefined ? '' : `${fixedFor(x, u, scale)}e${-Math.log10(scale)}`);
   const combined = d.combinedIntervalCm2PerS ?? null;
+  if (d.status === 'range-only') {
+    const range = d.rangeCm2PerS;
+    return ['', range ? `${at(range[0])} … ${at(range[1])} (range only)` : '', '', d.form, d.note ?? ''];
+  }
   return [at(d.diffusionCm2PerS), ci ? `${at(ci[0])} … ${at(ci[1])}` : '', combined ? `${at(combined[0])} … ${at(combined[1])}` : '', d.form, d.note ?? ''];
 }
 
@@ -104,9 +109,10 @@ function seriesRows(s: RunSeriesResult, cu: { unit: string; factor: number }): s
     const k = c.rateConstant;
     return [s.key, String(c.index + 1), String(c.points.length), fixedFor(c.eHalfV, 0.0001), c.verdict.category,
       f ? fixedFor(f.slope, f.slopeStdError ?? Math.abs(f.slope) * 1e-3, cu.factor) : '', f && Number.isFinite(f.r2) ? f.r2.toFixed(4) : '',
-      ...diffusionCells(c), sigFigs(k?.k0CmPerS, 2), sigFigs(k?.lowerBoundCmPerS, 2), c.alpha === null ? '' : c.alpha.toFixed(2),
+      ...diffusionCells(c), sigFigs(k?.k0CmPerS, 2), sigFigs(k?.lowerBoundCmPerS, 2), k && k.status === 'cannot-tell' ? `cannot tell${k.reason ? `: ${k.reason}` : ''}` : (k?.reason ?? ''),
+      c.alpha === null ? '' : c.alpha.toFixed(2),
       sigFigs(surface?.coverageFromChargeMolPerCm2 ?? surface?.coverageFromSlopeMolPerCm2, 3), sigFigs(surface?.ksPerS, 2), sigFigs(c.followUp?.rateConstantPerS, 2),
-      c.logLog ? c.logLog.slope.toFixed(2) : '', defaults];
+      c.logLog ? c.logLog.slope.toFixed(2) : '', s.currentKind === 'density' ? 'per cm² of electrode' : 'A', defaults];
   });
 }
 
@@ -116,8 +122,8 @@ export function seriesTable(r: AnalyzeRunResult): TextTable {
   return {
     name: 'series',
     header: ['series', 'couple', 'files', 'E½ (median) / V', 'reading', `|ip| vs v½ slope / (${cu.unit} s½ V⁻½)`, 'R²', 'D / (cm² s⁻¹)',
-      'D 95 % (regression)', 'D 95 % (with u(A), u(C))', 'D form', 'D note', 'k° / (cm s⁻¹)', 'k° lower bound / (cm s⁻¹)', 'α', 'Γ / (mol cm⁻²)',
-      'k_s / s⁻¹', 'k_f / s⁻¹', 'log|ip| vs log v slope', 'defaults used'],
+      'D 95 % (regression)', 'D 95 % (with u(A), u(C))', 'D form', 'D note', 'k° / (cm s⁻¹)', 'k° lower bound / (cm s⁻¹)', 'k° note', 'αc', 'Γ / (mol cm⁻²)',
+      'k_s / s⁻¹', 'k_f / s⁻¹', 'log|ip| vs log v slope', 'currents', 'defaults used'],
     rows: r.series.flatMap((s) => seriesRows(s, cu)),
   };
 }

@@ -9,6 +9,8 @@
  * (Nicholson's convention). `alpha` is always αc, the cathodic transfer coefficient (alphaMeaning
  * says so in each entry); `alphaNa` is α·nₐ of the forward wave. `k0` is null unless k0Status is
  * 'value' (never beside a reversible verdict); `D` is null when DStatus is 'range-only'.
+ * `currentKind` 'density' (files and series) means the file gave current densities and no area:
+ * its currents are A/cm², and the series' slope, D, Γ and Cd are per cm² of electrode.
  */
 import type { AnalyzeRunResult, RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
 import { ALPHA_MEANING, type SeriesCouple } from '../core/analysis/seriesTypes';
@@ -27,6 +29,7 @@ function fileEntry(f: RunFileResult, givenAs: string, r: AnalyzeRunResult) {
     sizeBytes: f.provenance.sizeBytes ?? null,
     sha256: f.provenance.sha256 ?? null,
     role: f.role,
+    currentKind: f.currentKind,
     spikes: (f.analysis.spikes ?? []).map((p) => ({ index: p.index, E: p.potentialV, i: currentInConvention(p.currentA, r.convention) })),
     cycles: f.analysis.cycles.map((c) => ({
       index: c.index,
@@ -53,6 +56,7 @@ function seriesEntry(s: RunSeriesResult, c: SeriesCouple) {
   return {
     series: s.key,
     couple: c.index,
+    currentKind: s.currentKind,
     slope: num(f?.slope),
     intercept: num(f?.intercept),
     r2: num(f?.r2),

@@ -3,7 +3,7 @@
  * (ImportDetection, each guess with a plain-language explanation) and what the user may force
  * (ImportOverrides). Arrays are always in SI/core units and the IUPAC current convention.
  */
-import type { CurrentConvention, Voltammogram } from '../core/types';
+import type { CurrentConvention, CurrentKind, Voltammogram } from '../core/types';
 import type { ImportWarning } from './errors';
 
 export type Delimiter = ',' | ';' | '\t' | 'whitespace';
@@ -13,8 +13,7 @@ export type TextEncoding = 'utf-8' | 'utf-16le' | 'utf-16be' | 'latin1';
 export type PotentialUnit = 'V' | 'mV' | 'µV';
 export type CurrentUnit = 'A' | 'mA' | 'µA' | 'nA' | 'pA';
 export type TimeUnit = 's' | 'ms' | 'µs' | 'min' | 'h';
-/** A current in A, or a current density in A/cm². */
-export type CurrentKind = 'current' | 'density';
+export type { CurrentKind } from '../core/types';
 export type ColumnRole = 'potential' | 'current' | 'time' | 'cycle' | 'index' | 'other';
 
 /** What the user may force. Column indices are 0-based here (the CLI takes 1-based ones). */

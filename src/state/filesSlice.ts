@@ -14,8 +14,11 @@ import { toUserError, type FileEntry, type FileInput, type FilesSlice, type Rest
 
 export const DEFAULT_GROUP = 'series 1';
 
-/** Files read at the same time: two keep a two-worker pool busy without flooding memory. */
-const IMPORT_SLOTS = 2;
+/**
+ * Files read at the same time: four keep a queue in each of the two workers, so a worker never
+ * waits for the page to send the next file while the page draws the last answer.
+ */
+const IMPORT_SLOTS = 4;
 
 /** At most `slots` tasks at once, first come first served; a finished task hands its slot on. */
 export function createLimiter(slots: number): <T>(task: () => Promise<T>) => Promise<T> {
@@ -170,8 +173,12 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       // name for an earlier, unloaded experiment must not leak into it.
       set((s) => {
         const seriesCells = { ...s.seriesCells };
-        for (const p of plan) delete seriesCells[p.group];
-        return { seriesCells };
+        const workingWindows = { ...s.workingWindows };
+        for (const p of plan) {
+          delete seriesCells[p.group];
+          delete workingWindows[p.group];
+        }
+        return { seriesCells, workingWindows };
       });
       const ids = (await Promise.all(plan.map((p) => get().addFiles(p.inputs, p.group)))).flat();
       return { ids, groups: plan.map((p) => p.group) };
@@ -180,7 +187,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     newWorkspace() {
       get().record(true);
       set({
-        files: {}, fileOrder: [], results: {}, series: {}, remembered: [], fileSettings: {}, seriesCells: {},
+        files: {}, fileOrder: [], results: {}, series: {}, remembered: [], fileSettings: {}, seriesCells: {}, workingWindows: {},
         selectedFileId: null, selectedGroup: null, importBatch: null,
         notice: 'New workspace: every file and series was cleared (Undo brings them back).',
       });

@@ -1,6 +1,6 @@
 /**
  * Undo and redo of everything a user changes: analysis settings (global, per series, per file),
- * the sign convention, and the workspace itself (a new workspace, an opened session). A step that
+ * the sign convention, the working windows, and the workspace itself (a new workspace, an opened session). A step that
  * replaced the workspace keeps the files, their results and series, so undo brings the numbers
  * back as they were; every step re-runs the analysis of what it restored.
  */
@@ -10,7 +10,7 @@ export const HISTORY_LIMIT = 100;
 
 /** The undoable state as it is now; with `workspace`, the files and their results too. */
 export function snapshotOf(s: HalfwaveState, workspace: boolean): HistorySnapshot {
-  const snap: HistorySnapshot = { settings: s.settings, fileSettings: s.fileSettings, seriesCells: s.seriesCells, convention: s.convention };
+  const snap: HistorySnapshot = { settings: s.settings, fileSettings: s.fileSettings, seriesCells: s.seriesCells, convention: s.convention, workingWindows: s.workingWindows };
   if (workspace) snap.workspace = workspaceOf(s);
   return snap;
 }
@@ -33,7 +33,7 @@ export const createHistorySlice: SliceCreator<HistorySlice> = (set, get) => {
     set((x) => ({
       past: from === 'past' ? x.past.slice(0, -1) : [...x.past, current],
       future: from === 'past' ? [current, ...x.future] : x.future.slice(1),
-      settings: target.settings, fileSettings: target.fileSettings, seriesCells: target.seriesCells, convention: target.convention,
+      settings: target.settings, fileSettings: target.fileSettings, seriesCells: target.seriesCells, convention: target.convention, workingWindows: target.workingWindows,
       ...(target.workspace ?? {}),
     }));
     return get().analyzeAll();

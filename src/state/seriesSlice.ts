@@ -6,7 +6,16 @@
 import type { RunFileResult } from '../core/analysis/runTypes';
 import { CancelledError } from '../worker/errors';
 import { runInputOf, seriesOptionsOf } from './runInput';
-import { toUserError, type SeriesSlice, type SliceCreator } from './types';
+import { toUserError, type HalfwaveState, type SeriesSlice, type SliceCreator } from './types';
+
+/** True when no file of the group waits to be read or has its analysis running. */
+export function groupSettled(s: Pick<HalfwaveState, 'fileOrder' | 'files' | 'results'>, group: string): boolean {
+  return s.fileOrder.every((id) => {
+    const f = s.files[id];
+    if (f?.group !== group) return true;
+    return f.status !== 'queued' && f.status !== 'importing' && s.results[id]?.status !== 'running';
+  });
+}
 
 export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => {
   const running = new Map<string, AbortController>();
@@ -71,6 +80,10 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
       clearTimeout(timers.get(group));
       timers.set(group, setTimeout(() => {
         timers.delete(group);
+        // While files of the group are still being read or analysed, the series would be fitted
+        // again for each of them (and its results copied to a worker each time): wait for the
+        // last one, whose analysis schedules the group again.
+        if (!groupSettled(get(), group)) return;
         void get().analyzeGroup(group);
       }, delayMs));
     },

@@ -9,7 +9,8 @@
 import { decodeBase64, encodeBase64, parseSession, serializeSession, SESSION_FORMAT, SESSION_VERSION, type SessionDocument, type SessionFileRecord } from '../io/session';
 import { defaultSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from './settings';
 import { isQuotaError, type StorageAdapter } from './storage';
-import type { HalfwaveState, HalfwaveStore } from './types';
+import type { HalfwaveState, HalfwaveStore, OverlayNormalisation, ReadoutTab, ViewSlice } from './types';
+import { mergeWorkingWindows } from './workingWindowSlice';
 
 export const AUTOSAVE_KEY = 'halfwave.autosave.v2';
 
@@ -17,6 +18,18 @@ function recordOf(state: HalfwaveState, id: string): SessionFileRecord | null {
   const f = state.files[id];
   if (!f || !f.measurement) return null;
   return { fileName: f.fileName, sha256: f.sha256, sizeBytes: f.sizeBytes, group: f.group, overrides: f.overrides, analysis: { ...(state.fileSettings[id] ?? {}) } };
+}
+
+const READOUT_TABS: readonly ReadoutTab[] = ['couples', 'files', 'peaks', 'import', 'notes'];
+const NORMALISATIONS: readonly OverlayNormalisation[] = ['current', 'density', 'diffusion', 'capacitive'];
+
+/** The series overlay's scaling and cycle from a session, or the defaults. */
+function overlayOf(v: unknown): ViewSlice['seriesOverlay'] {
+  const o = typeof v === 'object' && v !== null ? (v as Record<string, unknown>) : {};
+  return {
+    normalisation: NORMALISATIONS.includes(o.normalisation as OverlayNormalisation) ? (o.normalisation as OverlayNormalisation) : 'current',
+    cycle: Number.isInteger(o.cycle) && (o.cycle as number) >= 1 && (o.cycle as number) <= 10_000 ? (o.cycle as number) : 1,
+  };
 }
 
 export async function buildSessionDocument(state: HalfwaveState, includeRawData: boolean, now = new Date()): Promise<SessionDocument> {
@@ -36,9 +49,10 @@ export async function buildSessionDocument(state: HalfwaveState, includeRawData:
     view: {
       convention: state.convention, showSmoothed: state.showSmoothed, showBaselines: state.showBaselines, showCompanions: state.showCompanions,
       selectedCycle: state.selectedCycle, mainView: state.mainView, selectedFile: state.selectedFileId ? loaded.indexOf(state.selectedFileId) : -1,
-      selectedGroup: state.selectedGroup,
+      selectedGroup: state.selectedGroup, readoutTab: state.readoutTab, resultsScope: state.resultsScope,
+      seriesOverlay: { ...state.seriesOverlay },
     },
-    workbench: {},
+    workbench: { workingWindows: structuredClone(state.workingWindows) },
     files,
   };
 }
@@ -70,7 +84,11 @@ export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocu
     showBaselines: view.showBaselines !== false,
     showCompanions: view.showCompanions === true,
     selectedCycle: Number.isInteger(view.selectedCycle) && (view.selectedCycle as number) >= 0 ? (view.selectedCycle as number) : 1,
-    mainView: view.mainView === 'series' ? 'series' : 'trace',
+    mainView: view.mainView === 'series' || view.mainView === 'report' ? view.mainView : 'trace',
+    readoutTab: READOUT_TABS.includes(view.readoutTab as ReadoutTab) ? (view.readoutTab as ReadoutTab) : 'couples',
+    resultsScope: view.resultsScope === 'all' ? 'all' : 'series',
+    seriesOverlay: overlayOf(view.seriesOverlay),
+    workingWindows: mergeWorkingWindows(doc.workbench.workingWindows),
     selectedGroup: typeof view.selectedGroup === 'string' ? view.selectedGroup : null,
     remembered: waiting,
   });
@@ -113,22 +131,28 @@ export async function restoreAutosave(store: HalfwaveStore, storage: StorageAdap
   return true;
 }
 
-/** Saves the files' bytes that are not stored yet and forgets those no file uses; returns the names not saved for lack of space. */
-async function saveBytes(state: HalfwaveState, storage: StorageAdapter, stored: Set<string>): Promise<string[]> {
+interface NotSaved {
+  name: string;
+  sha256: string;
+  /** Why, when it was not the storage being full. */
+  reason: string | null;
+}
+
+/** Saves the files' bytes that are not stored yet and forgets those no file uses; returns the files whose bytes could not be written. */
+async function saveBytes(state: HalfwaveState, storage: StorageAdapter, stored: Set<string>): Promise<NotSaved[]> {
   const wanted = new Map<string, { name: string; source: Blob }>();
   for (const id of state.fileOrder) {
     const f = state.files[id];
     if (f?.sha256 && f.measurement) wanted.set(f.sha256, { name: f.fileName, source: f.source });
   }
-  const notSaved: string[] = [];
+  const notSaved: NotSaved[] = [];
   for (const [sha, f] of wanted) {
     if (stored.has(sha)) continue;
     try {
       await storage.writeBytes(sha, new Uint8Array(await f.source.arrayBuffer()));
       stored.add(sha);
     } catch (err) {
-      if (!isQuotaError(err)) throw err;
-      notSaved.push(f.name);
+      notSaved.push({ name: f.name, sha256: sha, reason: isQuotaError(err) ? null : ((err as Error | null)?.message ?? String(err)) });
     }
   }
   const keep = new Set([...wanted.keys(), ...state.remembered.flatMap((r) => (r.sha256 ? [r.sha256] : []))]);
@@ -148,15 +172,24 @@ export function attachAutosave(store: HalfwaveStore, storage: StorageAdapter, de
     stored ??= new Set(await storage.byteKeys().catch(() => []));
     const state = store.getState();
     const notSaved = await saveBytes(state, storage, stored);
+    const shas = notSaved.map((n) => n.sha256);
+    if (shas.join() !== store.getState().notKept.join()) store.setState({ notKept: shas });
     await storage.write(AUTOSAVE_KEY, await saveSessionText(store, false));
     if (notSaved.length) {
-      store.setState({ notice: `The browser's storage is full: ${notSaved.length} file${notSaved.length === 1 ? ' was' : 's were'} not kept for the next visit (${notSaved.slice(0, 3).join(', ')}${notSaved.length > 3 ? ', …' : ''}). Everything saved before is still there; save a session with data to keep the rest.` });
+      const names = notSaved.map((n) => n.name);
+      const list = `${names.slice(0, 3).join(', ')}${names.length > 3 ? ', …' : ''}`;
+      const other = notSaved.find((n) => n.reason !== null)?.reason;
+      store.setState({
+        notice: other === undefined
+          ? `The browser's storage is full: ${names.length} file${names.length === 1 ? ' was' : 's were'} not kept for the next visit (${list}). Everything saved before is still there; save a session with data to keep the rest.`
+          : `The browser's storage refused ${names.length} file${names.length === 1 ? '' : 's'} (${list}): ${other}. They were not kept for the next visit; save a session with data to keep them.`,
+      });
     }
   };
   const unsubscribe = store.subscribe((now, before) => {
     const changed = now.settings !== before.settings || now.fileSettings !== before.fileSettings || now.seriesCells !== before.seriesCells
       || now.files !== before.files || now.fileOrder !== before.fileOrder || now.convention !== before.convention || now.remembered !== before.remembered
-      || now.showSmoothed !== before.showSmoothed || now.showBaselines !== before.showBaselines;
+      || now.showSmoothed !== before.showSmoothed || now.showBaselines !== before.showBaselines || now.workingWindows !== before.workingWindows;
     if (!changed) return;
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => {

@@ -179,6 +179,17 @@ describe('uploads become their own series', () => {
     expect(cell.cell.resistanceOhm).toBe(0);
     expect(cell.origin.areaCm2).toBe('default');
   });
+
+  it('a working window chosen for an earlier experiment of the same name does not leak either; choosing one is undoable', async () => {
+    const store = newStore();
+    store.getState().setWorkingWindow('series 1', { material: 'gold', medium: 'aqueous-base' });
+    await store.getState().undo();
+    expect(store.getState().workingWindows).toEqual({});
+    await store.getState().redo();
+    expect(store.getState().workingWindows['series 1']?.material).toBe('gold');
+    await store.getState().addUpload([{ folder: null, inputs: [{ name: 'alpha.csv', data: csv }, { name: 'beta.csv', data: csv }] }]);
+    expect(store.getState().workingWindows).toEqual({});
+  });
 });
 
 /** Every number the screen holds, keyed by file name and series, for exact comparisons. */
@@ -207,7 +218,11 @@ describe('sessions round-trip exactly and replace the workspace', () => {
       ...f, peakWindows: [{ direction: 'cathodic', fromV: -0.2, toV: 0.1 }], baselines: [{ direction: 'anodic', fromV: -0.05, toV: 0.15, method: 'polynomial' }],
     }));
     await store.getState().updateSettings((s) => ({ ...s, reference: { ...s.reference, displayReference: 'SCE' } }));
+    store.getState().setWorkingWindow('run A', { material: 'platinum', medium: 'aqueous-acid', upperV: 1.2 });
+    await store.getState().updateSettings((s) => ({ ...s, psiMethod: 'lavagnini', spikeFilter: 'off' }));
+    await store.getState().updateSeriesCell('run B', (own) => ({ ...own, transferElectronCount: 2, formalPotentialV: 0.05 }));
     await store.getState().setConvention('polarographic');
+    store.getState().setView({ readoutTab: 'peaks', seriesOverlay: { normalisation: 'diffusion', cycle: 1 } });
     store.getState().selectFile(a.ids[1] as string);
     await settle(store);
     return store;
@@ -224,6 +239,8 @@ describe('sessions round-trip exactly and replace the workspace', () => {
     expect(t.seriesCells).toEqual(s.seriesCells);
     expect(t.settings).toEqual(s.settings);
     expect(t.convention).toBe('polarographic');
+    expect(t.workingWindows).toEqual({ 'run A': { material: 'platinum', medium: 'aqueous-acid', upperV: 1.2 } });
+    expect([t.readoutTab, t.seriesOverlay.normalisation]).toEqual(['peaks', 'diffusion']);
     expect(t.files[t.selectedFileId as string]?.fileName).toBe('a-200.csv');
     expect(numbersOf(fresh)).toEqual(numbersOf(store));
   });
@@ -298,6 +315,8 @@ describe('autosave keeps the files themselves', () => {
     storage.quotaBytes = [...storage.bytes.values()][0]!.length + 10;
     await store.getState().addFiles([{ name: 'second.csv', data: simulatedCsv(0.2) }], 'a');
     await vi.waitFor(() => expect(store.getState().notice ?? '').toMatch(/storage is full.*second\.csv/), { timeout: 20_000, interval: 5 });
+    const second = Object.values(store.getState().files).find((f) => f.fileName === 'second.csv');
+    expect(store.getState().notKept).toEqual([second?.sha256]);
     detach();
     expect(storage.bytes.size).toBe(1);
     const reloaded = newStore();

@@ -10,6 +10,7 @@ import type { HalfwaveState, HalfwaveStore, StoreDeps } from './types';
 import { createSeriesSlice } from './seriesSlice';
 import { createTheorySlice } from './theorySlice';
 import { createViewSlice } from './viewSlice';
+import { createWorkingWindowSlice } from './workingWindowSlice';
 
 export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
   return createStore<HalfwaveState>()((set, get) => ({
@@ -19,5 +20,6 @@ export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
     ...createHistorySlice(set, get, deps),
     ...createSeriesSlice(set, get, deps),
     ...createTheorySlice(set, get, deps),
+    ...createWorkingWindowSlice(set, get, deps),
   }));
 }

@@ -11,3 +11,12 @@ export function simulatedCsv(scanRateVPerS = 0.1, header = 'Time (s),Potential (
   for (let i = 0; i < sim.potentialV.length; i++) rows.push(`${sim.timeS[i]},${(sim.potentialV[i] as number) * potentialFactor},${sim.currentA[i]}`);
   return `${rows.join('\n')}\n`;
 }
+
+/** The simulator's trace of the same couple at `scanRateVPerS` (for the UI's plot-builder tests). */
+export function simulatedTrace(scanRateVPerS: number): { potentialV: Float64Array; currentA: Float64Array } {
+  const sim = simulateCv({ k0CmPerS: Infinity, scanRateVPerS });
+  return { potentialV: sim.potentialV, currentA: sim.currentA };
+}
+
+/** The core's least-squares line, for the UI's plot-builder tests. */
+export { fitLine } from '../core/regression/fitLine';

@@ -10,7 +10,9 @@ import type { ImportOverrides, Measurement } from '../io/types';
 import type { AnalysisClient } from '../worker/client';
 import type { SeriesCell } from './seriesCell';
 import type { AnalysisSettings, FileAnalysisSettings } from './settings';
+import type { ResultsSort } from './resultsTable';
 import type { StorageAdapter } from './storage';
+import type { WorkingWindowChoice, WorkingWindowSlice } from './workingWindowSlice';
 
 /** An error as the UI shows it: what, where, and its stable code. */
 export interface UserError {
@@ -121,14 +123,30 @@ export interface ViewSlice {
   /** Drag on the plot zooms, or marks a peak window of `windowDirection`. */
   dragMode: 'zoom' | 'window';
   windowDirection: 'anodic' | 'cathodic';
-  mainView: 'trace' | 'series';
+  mainView: 'trace' | 'series' | 'report';
   safetyOpen: boolean;
   notice: string | null;
-  setView(patch: Partial<Omit<ViewSlice, 'setView' | 'selectFile' | 'setConvention' | 'convention'>>): void;
+  /** SHA-256 of the files whose bytes the browser's storage could not keep for the next visit. */
+  notKept: string[];
+  /** Table shown under the trace. */
+  readoutTab: ReadoutTab;
+  /** The results table across files shows the current series, or every file. */
+  resultsScope: 'series' | 'all';
+  resultsSort: ResultsSort | null;
+  /** Series plots: how the overlaid voltammograms are scaled, and which cycle of each file is drawn. */
+  seriesOverlay: { normalisation: OverlayNormalisation; cycle: number };
+  setView(patch: Partial<Omit<ViewSlice, 'setView' | 'selectFile' | 'openSeries' | 'setConvention' | 'convention'>>): void;
   /** The sign convention of the display and the results (undoable). */
   setConvention(convention: CurrentDisplay): Promise<void>;
-  selectFile(id: string | null): void;
+  /** Selects the file (and cycle; default 1) and its series. */
+  selectFile(id: string | null, cycle?: number): void;
+  /** Shows a series: its first file on the trace and its results table below (after an upload). */
+  openSeries(group: string): void;
 }
+
+export type ReadoutTab = 'couples' | 'files' | 'peaks' | 'import' | 'notes';
+/** i as measured, i/A (density), i/v½ (diffusion-controlled waves coincide), i/v (capacitive and surface waves coincide). */
+export type OverlayNormalisation = 'current' | 'density' | 'diffusion' | 'capacitive';
 
 /** The files of a workspace and what was computed from them, kept by a step that replaced them. */
 export interface WorkspaceSnapshot {
@@ -146,6 +164,7 @@ export interface HistorySnapshot {
   fileSettings: Record<string, FileAnalysisSettings>;
   seriesCells: Record<string, Partial<SeriesCell>>;
   convention: CurrentDisplay;
+  workingWindows: Record<string, WorkingWindowChoice>;
   /** Present when the step replaced the workspace (new workspace, opened session). */
   workspace?: WorkspaceSnapshot;
 }
@@ -196,7 +215,7 @@ export interface TheorySlice {
   simulateTheory(id: string): Promise<void>;
 }
 
-export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice & SeriesSlice & TheorySlice;
+export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice & SeriesSlice & TheorySlice & WorkingWindowSlice;
 export type HalfwaveStore = StoreApi<HalfwaveState>;
 
 export interface StoreDeps {
@@ -226,6 +245,7 @@ export type { SeriesAnalysis, SeriesCouple } from '../core/analysis/seriesTypes'
 export type { SeriesPoint } from '../core/series/seriesPoint';
 export type { VoltammogramAnalysis } from '../core/analysis/types';
 export type { RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
+export type { WorkbookCell, WorkbookSheet } from '../io/resultsWorkbook';
 export type { BaselineMethod, BaselineSpec } from '../core/baseline/baselineTypes';
 export type { CoupleResult } from '../core/couples/coupleTypes';
 export type { PeakResult, PeakWindow } from '../core/peaks/peakTypes';

@@ -1,4 +1,4 @@
-/** What is on screen: selected file and cycle, current sign convention, overlays, drag mode. */
+/** What is on screen: selected file and cycle, current sign convention, overlays, drag mode, tables. */
 import type { SliceCreator, ViewSlice } from './types';
 
 export const createViewSlice: SliceCreator<ViewSlice> = (set, get) => ({
@@ -14,6 +14,11 @@ export const createViewSlice: SliceCreator<ViewSlice> = (set, get) => ({
   mainView: 'trace',
   safetyOpen: false,
   notice: null,
+  notKept: [],
+  readoutTab: 'couples',
+  resultsScope: 'series',
+  resultsSort: null,
+  seriesOverlay: { normalisation: 'current', cycle: 1 },
   setView(patch) {
     set(patch);
   },
@@ -24,9 +29,15 @@ export const createViewSlice: SliceCreator<ViewSlice> = (set, get) => ({
     set({ convention });
     return Promise.resolve();
   },
-  selectFile(id) {
+  selectFile(id, cycle = 1) {
     // The chosen file's series becomes the one the Series view and the Cell panel are about.
     const group = id ? get().files[id]?.group : undefined;
-    set({ selectedFileId: id, selectedCycle: 1, ...(group ? { selectedGroup: group } : {}) });
+    set({ selectedFileId: id, selectedCycle: cycle, ...(group ? { selectedGroup: group } : {}) });
+  },
+  openSeries(group) {
+    const s = get();
+    const first = s.fileOrder.find((id) => s.files[id]?.group === group && s.files[id]?.measurement) ?? null;
+    if (first) get().selectFile(first);
+    set({ selectedGroup: group, readoutTab: 'files', resultsScope: 'series', resultsSort: null, mainView: 'trace' });
   },
 });

@@ -1,5 +1,18 @@
-/** Number formatting for tables: fixed decimals per quantity, a dash for missing values. */
+/**
+ * Number formatting for tables and labels. Numbers never show a binary-float tail: values are
+ * rounded to a stated number of decimals or significant digits first. Prefixes are the SI ones
+ * (BIPM, The International System of Units, 9th ed. 2019, Table 7). `digitsForNoise` picks the
+ * decimals a value deserves from its uncertainty (one or two significant digits in the
+ * uncertainty, as the GUM recommends: JCGM 100:2008, §7.2.6).
+ */
 export const DASH = '—';
+
+const INTEGER = new Intl.NumberFormat('en');
+
+/** 1234567 → "1,234,567" (one shared formatter: creating one per call is slow). */
+export function count(n: number): string {
+  return INTEGER.format(n);
+}
 
 export function fixed(value: number | null | undefined, digits: number, factor = 1): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return DASH;
@@ -29,4 +42,27 @@ export function sci(value: number | null | undefined, digits = 3): string {
   const [mant, exp] = value.toExponential(digits - 1).split('e');
   const e = String(Number(exp)).replace(/./g, (ch) => SUPERSCRIPT[ch] ?? ch);
   return `${mant} × 10${e}`;
+}
+
+/**
+ * Decimals for a value whose standard uncertainty (same unit) is `uncertainty`: the uncertainty
+ * keeps two significant digits when it starts with 1 or 2, else one. Clamped to [0, maxDigits].
+ */
+export function digitsForNoise(uncertainty: number | null | undefined, maxDigits = 6): number | null {
+  if (uncertainty === null || uncertainty === undefined || !(uncertainty > 0) || !Number.isFinite(uncertainty)) return null;
+  const exponent = Math.floor(Math.log10(uncertainty));
+  const lead = uncertainty / 10 ** exponent;
+  const digits = -exponent + (lead < 3 ? 1 : 0);
+  return Math.min(maxDigits, Math.max(0, digits));
+}
+
+/** `value` in `factor` units with the decimals its uncertainty allows, else `fallback` decimals. */
+export function byNoise(value: number | null | undefined, uncertainty: number | null | undefined, factor: number, fallback: number): string {
+  const d = digitsForNoise(uncertainty === null || uncertainty === undefined ? null : Math.abs(uncertainty * factor));
+  return fixed(value, d ?? fallback, factor);
+}
+
+/** A scan rate in V/s without a float tail: 0.009999999999999988 → "0.01"; three significant digits. */
+export function scanRate(vPerS: number | null | undefined): string {
+  return sig(vPerS, 3);
 }

@@ -11,14 +11,17 @@ export function demoFileCount(): number {
   return readdirSync(resolve(import.meta.dirname, '../../demo-data')).filter((f) => /\.(csv|txt|tsv|dat)$/.test(f)).length;
 }
 
-/** Waits until `count` file rows are ready and the selected file's couples table is shown. */
+/**
+ * Waits until `count` file rows are ready and a results table is shown: the selected file's
+ * couples, or (after an upload, which opens its series) the table across files.
+ */
 export async function waitForFiles(page: Page, count: number, timeout = 90_000): Promise<void> {
   await page.waitForFunction(
     (n) => document.querySelectorAll('[data-testid=file-row][data-status=ready], [data-testid=file-row][data-status=error]').length >= n
       && !document.querySelector('[data-testid=import-progress]'),
     count, { timeout, polling: 250 },
   );
-  await page.getByTestId('couples-table').waitFor({ timeout });
+  await page.locator('[data-testid=couples-table], [data-testid=results-table]').first().waitFor({ timeout });
   await waitForAnalysis(page);
 }
 
@@ -62,8 +65,17 @@ export async function waitForRedraw(page: Page, before: number, testId = 'trace-
 /** A reversible one-electron couple from our own simulator, as a CSV export (time, E, I). */
 export { simulatedCsv } from '../../src/state/testSupport';
 
-/** Text of every cell with the test id in the couples table, as numbers. */
+/** Text of every cell with the test id in the couples table (its tab opened first), as numbers. */
 export async function coupleCells(page: Page, testId: string): Promise<number[]> {
+  if (await page.getByTestId('couples-table').count() === 0) {
+    await page.getByTestId('tab-couples').click();
+    await page.getByTestId('couples-table').waitFor({ timeout: 30_000 });
+  }
   const texts = await page.getByTestId('couples-table').getByTestId(testId).allTextContents();
   return texts.map(Number);
+}
+
+/** Clicks the file's row in the file list (the list box's option). */
+export async function selectFileRow(page: Page, fileName: string): Promise<void> {
+  await page.locator(`[data-testid=file-row][data-file-name="${fileName}"]`).click();
 }

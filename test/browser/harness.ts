@@ -43,14 +43,14 @@ export function isLocalUrl(url: string): boolean {
   }
 }
 
-export async function openApp(path = '', viewport = { width: 1366, height: 768 }): Promise<OpenedApp> {
+export async function openApp(path = '', viewport = { width: 1366, height: 768 }, colorScheme: 'light' | 'dark' = 'light'): Promise<OpenedApp> {
   const baseUrl = inject('baseUrl');
   const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: FLAGS });
   if (!announced) {
     console.log(`[browser] running in Chromium ${browser.version()} (${CHROMIUM}, headless) against ${baseUrl}`);
     announced = true;
   }
-  const context = await browser.newContext({ viewport, acceptDownloads: true });
+  const context = await browser.newContext({ viewport, acceptDownloads: true, colorScheme });
   const page = await context.newPage();
   const consoleErrors: string[] = [];
   const pageErrors: string[] = [];

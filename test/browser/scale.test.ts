@@ -138,6 +138,7 @@ describe('many files and a million-row file', () => {
     const page = app.page;
     await page.locator(`[data-testid=file-row][data-file-name="${BIG_NAME}"] .file-name`).click();
     await waitForAnalysis(page);
+    await page.getByTestId('tab-couples').click();
     await page.getByTestId('couples-table').waitFor();
     const [eHalf] = await coupleCells(page, 'cell-ehalf');
     const [dep] = await coupleCells(page, 'cell-dep');

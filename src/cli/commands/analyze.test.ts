@@ -21,7 +21,7 @@ describe('halfwave analyze --inspect', () => {
   it('reports delimiter, decimal mark, header, roles, units, rows, cycles and scan rate per file', async () => {
     const r = await run('analyze', join(FIX, 'cv_semicolon_comma_latin1.txt'), '--inspect');
     expect(r.code).toBe(0);
-    for (const s of ["delimiter    ';'", "decimal mark ','", 'header       on line 9', '"E (mV)" → potential [mV]', '"I (µA)" → current [µA]', '801 read, 0 skipped', 'cycles       2', '100 mV/s', '[source: metadata]', 'Ag/AgCl (3 M KCl)']) {
+    for (const s of ['delimiter    semicolon', "decimal mark ','", 'header       on line 9', '"E (mV)" → potential [mV]', '"I (µA)" → current [µA]', '801 read, 0 skipped', 'cycles       2', '100 mV/s', '[source: metadata]', 'Ag/AgCl (3 M KCl)']) {
       expect(r.stdout).toContain(s);
     }
   });

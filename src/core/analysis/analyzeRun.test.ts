@@ -188,6 +188,37 @@ describe('analyzeRun with several series', () => {
   });
 });
 
+// Randles–Ševčík (Bard & Faulkner, Electrochemical Methods 2nd ed. (2001), eq. 6.2.19) is linear
+// in the area: a file of current densities j = i/A gives the same D with 1 cm², whatever area the
+// cell states; iR correction needs j·A.
+describe('analyzeRun with current densities', () => {
+  const rates = [0.05, 0.2, 0.8];
+  const sim = { k0CmPerS: Infinity, formalPotentialV: 0.1, startV: 0.4, switchV: -0.2, diffusionOCm2PerS: D, diffusionRCm2PerS: D, areaCm2: 0.0707 };
+  const currents: RunFile[] = rates.map((v) => ({ fileName: `i-${v}`, voltammogram: simulatedVoltammogram({ ...sim, scanRateVPerS: v }) }));
+  const densities: RunFile[] = currents.map((f) => ({
+    fileName: f.fileName.replace('i-', 'j-'), voltammogram: { ...f.voltammogram, currentA: f.voltammogram.currentA.map((i) => i / 0.0707), currentKind: 'density' },
+  }));
+  it('gives D per cm² of electrode, the same as from the currents with the true area', () => {
+    const fromCurrents = runOf(currents, { cell: { ...CELL, areaCm2: 0.0707 } }).series[0];
+    const fromDensities = runOf(densities, { cell: { ...CELL, areaCm2: 3 } }).series[0];
+    expect(fromDensities?.currentKind).toBe('density');
+    const d = fromDensities?.analysis.couples[0]?.diffusion?.diffusionCm2PerS as number;
+    expect(d / (fromCurrents?.analysis.couples[0]?.diffusion?.diffusionCm2PerS as number)).toBeCloseTo(1, 9);
+    expect(fromDensities?.warnings.some((w) => /per cm² of electrode/.test(w.message))).toBe(true);
+    expect(fromDensities?.defaultsUsed.some((u) => u.field === 'areaCm2')).toBe(false);
+  });
+  it('refuses a series that mixes currents and densities, naming the files', () => {
+    expect(() => runOf([currents[0]!, densities[1]!], { cell: CELL })).toThrow(/mixes current densities.*j-0\.2.*i-0\.05/);
+  });
+  it('corrects the ohmic drop with j·A·Ru, or not at all without an area', () => {
+    const withArea = runOf(densities, { cell: { ...CELL, areaCm2: 0.0707, ruOhm: 100 } });
+    const asCurrents = runOf(currents, { cell: { ...CELL, areaCm2: 0.0707, ruOhm: 100 } });
+    expect(withArea.files[2]?.analysis.cycles[0]?.couples[0]?.deltaEpV).toBeCloseTo(asCurrents.files[2]?.analysis.cycles[0]?.couples[0]?.deltaEpV as number, 9);
+    const noArea = runOf(densities, { cell: { concentrationMolPerCm3: 1e-6, areaCm2: null, ruOhm: 100 } });
+    expect(noArea.warnings.some((w) => /not iR-corrected/.test(w.message))).toBe(true);
+  });
+});
+
 // A blank of the supporting electrolyte (the simulator's charging current alone, its own RC
 // charging model) subtracted before the analysis takes a couple with heavy double-layer charging
 // back to the numbers of the charging-free couple; the pairing is recorded per file.

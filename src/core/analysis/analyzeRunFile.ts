@@ -46,6 +46,22 @@ export function analysedPotential(v: Voltammogram, ruOhm: number, offsetV: numbe
   return offsetV === 0 ? corrected : corrected.map((e) => e + offsetV);
 }
 
+/**
+ * The resistance that multiplies this file's currentA to give the ohmic drop (V). A file of
+ * current densities (A/cm²) needs the electrode area for it: Ru·A (Ω·cm²) when the cell has an
+ * area, else no correction, with a warning.
+ */
+function ohmicFactor(file: ResolvedRunFile, cell: ResolvedCell, warnings: RunWarning[]): number {
+  if (!(cell.ruOhm > 0) || (file.input.voltammogram.currentKind ?? 'current') === 'current') return cell.ruOhm;
+  const fileName = file.input.fileName;
+  if (cell.areaCm2 === null) {
+    warnings.push({ code: 'TRACE', fileName, message: `the file holds current densities and no electrode area is known: Ru = ${cell.ruOhm} Ω cannot give the ohmic drop, so the potentials are not iR-corrected` });
+    return 0;
+  }
+  warnings.push({ code: 'OHMIC', fileName, message: `the file holds current densities: the ohmic drop is j·A·Ru with the cell's area A = ${cell.areaCm2} cm²` });
+  return cell.ruOhm * cell.areaCm2;
+}
+
 function traceWarnings(file: ResolvedRunFile, result: RunFileResult['analysis'], ruOhm: number): RunWarning[] {
   const fileName = file.input.fileName;
   const out: RunWarning[] = result.warnings.map((w) => ({ code: 'TRACE', fileName, message: w.message }));
@@ -53,7 +69,7 @@ function traceWarnings(file: ResolvedRunFile, result: RunFileResult['analysis'],
   if (ruOhm > 0) {
     let maxDrop = 0;
     for (const i of file.input.voltammogram.currentA) maxDrop = Math.max(maxDrop, Math.abs(i * ruOhm));
-    out.push({ code: 'OHMIC', fileName, message: `iR correction with Ru = ${ruOhm} Ω moves potentials by up to ${(maxDrop * 1000).toFixed(1)} mV` });
+    out.push({ code: 'OHMIC', fileName, message: `iR correction moves potentials by up to ${(maxDrop * 1000).toFixed(1)} mV` });
   }
   return out;
 }
@@ -63,8 +79,11 @@ function withoutBlank(file: ResolvedRunFile, warnings: RunWarning[]): { currentA
   const v = file.input.voltammogram;
   const b = file.blank;
   if (!b) return { currentA: v.currentA, blank: null };
-  const r = subtractBlank(v, b.voltammogram);
   const fileName = file.input.fileName;
+  if ((v.currentKind ?? 'current') !== (b.voltammogram.currentKind ?? 'current')) {
+    throw new AnalysisError('BAD_OPTION', `${fileName}: its currents are ${v.currentKind === 'density' ? 'densities (A/cm²)' : 'currents (A)'} but the blank ${b.fileName} holds ${b.voltammogram.currentKind === 'density' ? 'densities (A/cm²)' : 'currents (A)'}; one cannot be subtracted from the other`);
+  }
+  const r = subtractBlank(v, b.voltammogram);
   if (r.pointsOutsideBlank > 0) warnings.push({ code: 'BLANK', fileName, message: `${r.pointsOutsideBlank} of ${v.potentialV.length} points lie outside the potential range of the blank ${b.fileName}; its end value was used there` });
   // Charging current scales with v: a blank at another rate removes the wrong background (5 %: common practice, no source).
   if (Math.abs(r.scanRateRatio - 1) > 0.05) warnings.push({ code: 'BLANK', fileName, message: `the blank ${b.fileName} was recorded at ${(1 / r.scanRateRatio).toPrecision(3)}× this file's scan rate; its charging current does not match` });
@@ -75,8 +94,9 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
   const v = file.input.voltammogram;
   const blankWarnings: RunWarning[] = [];
   const { currentA, blank } = withoutBlank(file, blankWarnings);
+  const ruOhm = ohmicFactor(file, cell, blankWarnings);
   // The ohmic drop follows the whole current that flowed; the peaks are read on the current less the blank.
-  const potentialV = analysedPotential(v, cell.ruOhm, reference.offsetV, method.spikeFilter);
+  const potentialV = analysedPotential(v, ruOhm, reference.offsetV, method.spikeFilter);
   const analysed: Voltammogram = { ...v, currentA, ...(potentialV ? { potentialV } : {}) };
   const fileName = file.input.fileName;
   let analysis;
@@ -87,7 +107,7 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
     if (err instanceof AnalysisError) throw new AnalysisError(err.code, `${fileName}: ${err.message}`);
     throw err;
   }
-  const warnings = [...blankWarnings, ...traceWarnings(file, analysis, cell.ruOhm)];
+  const warnings = [...blankWarnings, ...traceWarnings(file, analysis, ruOhm)];
   let chargingGapA: number | null = null;
   if (cell.capacitancePotentialV !== null) {
     try {
@@ -99,6 +119,6 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
   }
   return {
     fileName, series: file.series, role: file.role, scanRateVPerS: file.scanRateVPerS, scanRateSource: file.scanRateSource,
-    reference, analysis, analysedPotentialV: potentialV, chargingGapA, provenance: file.input.provenance ?? {}, pointCount: v.potentialV.length, blank, warnings,
+    reference, analysis, analysedPotentialV: potentialV, chargingGapA, provenance: file.input.provenance ?? {}, pointCount: v.potentialV.length, currentKind: v.currentKind ?? 'current', blank, warnings,
   };
 }

@@ -8,6 +8,7 @@ import { AnalysisError } from '../errors';
 import { combinedDiffusionInterval, doubleLayerCapacitance } from '../series';
 import type { DoubleLayerCapacitanceResult } from '../series';
 import type { ReferenceId } from '../reference';
+import type { CurrentKind } from '../types';
 import { analyzeResolvedSeries } from './analyzeSeries';
 import { defaultsUsed } from './defaultsUsed';
 import { describeSeriesReferences } from './runReference';
@@ -56,11 +57,29 @@ function reportedFormalPotential(key: string, cell: ResolvedCell, members: RunFi
   return cell.formalPotentialV + first;
 }
 
+/**
+ * The cell the series' numbers use. Files of current densities (A/cm², no area stated) make the
+ * series per cm² of electrode: area 1 cm² in Randles–Ševčík, Γ and Cd, so the cell's area drops out.
+ * A series that mixes currents and densities cannot be given one area, and is refused.
+ */
+function perAreaCell(key: string, cell: ResolvedCell, members: RunFileResult[], warnings: RunWarning[]): { cell: ResolvedCell; kind: CurrentKind } {
+  const densities = members.filter((f) => f.currentKind === 'density');
+  if (!densities.length) return { cell, kind: 'current' };
+  if (densities.length < members.length) {
+    const currents = members.filter((f) => f.currentKind !== 'density').map((f) => f.fileName);
+    throw new AnalysisError('BAD_OPTION', `series "${key}" mixes current densities (A/cm²: ${densities.map((f) => f.fileName).join(', ')}) with currents (A: ${currents.join(', ')}); put them in separate series`);
+  }
+  warnings.push({ code: 'SERIES', series: key, message: 'the files hold current densities (A/cm²) and state no electrode area: D, Γ and Cd are per cm² of electrode, peak currents are in A/cm², and the cell\'s area is not used' });
+  return { cell: { ...cell, areaCm2: 1, origins: { ...cell.origins, areaCm2: 'header' } }, kind: 'density' };
+}
+
 /** `files`: the results of the series' files (internal-standard files are left out here). */
-export function analyzeRunSeries(key: string, cell: ResolvedCell, method: ResolvedMethod, output: ReferenceId | null, files: RunFileResult[]): RunSeriesResult {
+export function analyzeRunSeries(key: string, given: ResolvedCell, method: ResolvedMethod, output: ReferenceId | null, files: RunFileResult[]): RunSeriesResult {
   const members = files.filter((f) => f.role === 'series');
   if (!members.length) throw new AnalysisError('EMPTY_INPUT', `series "${key}": every file is an internal standard or a blank; nothing is left for the series`);
   const early: RunWarning[] = [];
+  const perArea = perAreaCell(key, given, members, early);
+  const cell = perArea.cell;
   const analysis = analyzeResolvedSeries(
     members.map((f) => ({ fileName: f.fileName, scanRateVPerS: f.scanRateVPerS, analysis: f.analysis })),
     {
@@ -69,6 +88,8 @@ export function analyzeRunSeries(key: string, cell: ResolvedCell, method: Resolv
       formalPotentialV: reportedFormalPotential(key, cell, members, early), ruOhm: cell.ruOhm, cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
     },
   );
+  // An area from a density's slope would be a ratio to 1 cm², not an area.
+  if (perArea.kind === 'density') for (const c of analysis.couples) c.electroactiveAreaCm2 = null;
   withCombinedIntervals(analysis, cell);
   const warnings: RunWarning[] = [...early, ...analysis.warnings.map((w) => ({ code: 'SERIES' as const, series: key, message: w.message }))];
   const refs = describeSeriesReferences(members, output, cell.temperatureK);
@@ -76,5 +97,5 @@ export function analyzeRunSeries(key: string, cell: ResolvedCell, method: Resolv
   const capacitance = capacitanceOf(members, cell, warnings, key);
   const defaults = defaultsUsed(key, cell, analysis);
   warnings.push(...defaults.warnings);
-  return { key, fileNames: members.map((f) => f.fileName), cell, analysis, capacitance, referenceBasis: refs.basis, defaultsUsed: defaults.used, warnings };
+  return { key, fileNames: members.map((f) => f.fileName), cell: given, currentKind: perArea.kind, analysis, capacitance, referenceBasis: refs.basis, defaultsUsed: defaults.used, warnings };
 }

@@ -11,7 +11,7 @@ import type { PeakWindow } from '../peaks/peakTypes';
 import type { ReferenceId } from '../reference';
 import type { DoubleLayerCapacitanceResult } from '../series';
 import type { SmoothingSetting } from '../smoothing/smoothingTypes';
-import type { CurrentConvention, ScanRateSource, Voltammogram } from '../types';
+import type { CurrentConvention, CurrentKind, ScanRateSource, Voltammogram } from '../types';
 import type { SeriesAnalysis } from './seriesTypes';
 import type { VoltammogramAnalysis } from './types';
 
@@ -244,6 +244,8 @@ export interface RunFileResult {
   chargingGapA: number | null;
   provenance: FileProvenance;
   pointCount: number;
+  /** 'density' when the file's currents are A/cm² (no area known): its currents, D and Γ are per cm². */
+  currentKind: CurrentKind;
   /** The blank subtracted before the analysis, with how well it matched; null when none. */
   blank: { fileName: string; sha256: string | null; pointsOutside: number; scanRateRatio: number } | null;
   /** Warnings of this file's trace analysis and iR correction. */
@@ -255,6 +257,11 @@ export interface RunSeriesResult {
   /** Files of the series (role 'series') in the run's order. */
   fileNames: string[];
   cell: ResolvedCell;
+  /**
+   * 'density' when the files hold current densities (A/cm²): the series' D, Γ and Cd are then per
+   * cm² of electrode and the cell's area is not used.
+   */
+  currentKind: CurrentKind;
   analysis: SeriesAnalysis;
   capacitance: DoubleLayerCapacitanceResult | null;
   /** Plain-words basis of every scale the series used. */

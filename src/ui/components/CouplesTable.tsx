@@ -10,6 +10,8 @@ export function CouplesTable() {
   if (!file?.measurement) return <p className="empty">No file selected.</p>;
   if (!result?.run) return <p className="empty">{result?.status === 'error' ? 'Analysis failed (see the trace).' : 'Analysing…'}</p>;
   if (rows.length === 0) return <p className="empty" data-testid="couples-empty">No peaks found in this cycle. Mark a peak window on the plot or lower the signal-to-noise threshold.</p>;
+  // A file of current densities (no area stated) gives peak currents per cm².
+  const perArea = file.measurement.currentKind === 'density' ? ' cm⁻²' : '';
   const cur = chooseCurrentScale(Math.max(...rows.map(({ k }) => Math.max(k.ipaA ?? 0, k.ipcA ?? 0))));
   return (
     <table className="data" data-testid="couples-table">
@@ -17,7 +19,7 @@ export function CouplesTable() {
       <thead>
         <tr>
           <th scope="col">Cycle</th><th scope="col">Epa / V</th><th scope="col">Epc / V</th><th scope="col">E½ / V</th>
-          <th scope="col">ΔEp / mV</th><th scope="col">ipa / {cur.unit}</th><th scope="col">ipc / {cur.unit}</th>
+          <th scope="col">ΔEp / mV</th><th scope="col">ipa / {cur.unit}{perArea}</th><th scope="col">ipc / {cur.unit}{perArea}</th>
           <th scope="col" title="return / forward peak current">ratio</th><th scope="col" title="|Ep − Ep/2| of the anodic / cathodic peak">|Ep−Ep/2| / mV</th>
           <th scope="col">Q / µC</th><th scope="col">Reading</th>
         </tr>

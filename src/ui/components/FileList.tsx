@@ -1,7 +1,13 @@
-/** Loaded files with status, progress, series group and any import error beside the file. */
+/**
+ * Loaded files as one list box: a single tab stop; the arrow keys, Home and End move the selection
+ * (WAI-ARIA listbox pattern, focus kept on the list with aria-activedescendant); each row shows the
+ * status, progress, scan rate and any import error. The selected file's series name and removal
+ * sit below the list (SelectedFileBar), so the rows hold nothing focusable.
+ */
+import { useEffect, useRef, type KeyboardEvent } from 'react';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import type { FileEntry } from '../../state/types';
-import { bytes } from '../format';
+import { bytes, count, scanRate } from '../format';
 
 const SOURCE_WORDS: Record<string, string> = {
   option: 'your override', time: 'the time column', metadata: 'the file header', filename: 'the file name',
@@ -9,11 +15,29 @@ const SOURCE_WORDS: Record<string, string> = {
 
 const SOURCE_SHORT: Record<string, string> = { option: 'set', time: 'time', metadata: 'header', filename: 'name' };
 
+const optionId = (id: string) => `file-option-${id}`;
+
 export function FileList() {
   const order = useHalfwave((s) => s.fileOrder);
+  const selected = useHalfwave((s) => s.selectedFileId);
+  const list = useRef<HTMLUListElement>(null);
+  useEffect(() => {
+    if (selected && list.current?.contains(document.activeElement)) document.getElementById(optionId(selected))?.scrollIntoView({ block: 'nearest' });
+  }, [selected]);
   if (order.length === 0) return <p className="empty">No files yet.</p>;
+  const onKey = (e: KeyboardEvent) => {
+    const s = halfwaveActions();
+    const usable = s.fileOrder.filter((id) => s.files[id]?.measurement);
+    const k = selected ? usable.indexOf(selected) : -1;
+    const next = e.key === 'ArrowDown' ? usable[Math.min(usable.length - 1, k + 1)] : e.key === 'ArrowUp' ? usable[Math.max(0, k - 1)]
+      : e.key === 'Home' ? usable[0] : e.key === 'End' ? usable[usable.length - 1] : undefined;
+    if (!next) return;
+    e.preventDefault();
+    s.selectFile(next);
+  };
   return (
-    <ul className="file-list" data-testid="file-list" aria-label="Loaded files">
+    <ul ref={list} className="file-list" data-testid="file-list" role="listbox" aria-label="Loaded files" tabIndex={0}
+      aria-activedescendant={selected && order.includes(selected) ? optionId(selected) : undefined} onKeyDown={onKey}>
       {order.map((id) => <FileRow key={id} id={id} />)}
     </ul>
   );
@@ -22,38 +46,32 @@ export function FileList() {
 function FileRow({ id }: { id: string }) {
   const file = useHalfwave((s) => s.files[id]);
   const selected = useHalfwave((s) => s.selectedFileId === id);
-  const result = useHalfwave((s) => s.results[id]);
+  const result = useHalfwave((s) => s.results[id]?.status);
+  const notKept = useHalfwave((s) => !!s.files[id]?.sha256 && s.notKept.includes(s.files[id]?.sha256 as string));
   if (!file) return null;
-  const act = halfwaveActions();
+  const m = file.measurement;
   return (
-    <li className={`file-row status-${file.status}${selected ? ' selected' : ''}`} data-testid="file-row" data-file-name={file.fileName} data-status={file.status}>
+    <li id={optionId(id)} role="option" aria-selected={selected} aria-disabled={!m}
+      className={`file-row status-${file.status}${selected ? ' selected' : ''}`} data-testid="file-row" data-file-name={file.fileName}
+      data-status={file.status} data-analysis={result ?? 'none'} data-kept={notKept ? 'no' : undefined} onClick={() => m && halfwaveActions().selectFile(id)}>
       <div className="file-head">
-        <button type="button" className="file-name" aria-pressed={selected} disabled={!file.measurement} onClick={() => act.selectFile(id)} title={`${file.fileName} (${bytes(file.sizeBytes)})`}>
-          {file.fileName}
-        </button>
-        <button type="button" className="icon" aria-label={`Remove ${file.fileName}`} title="Remove from the session" onClick={() => act.removeFile(id)}>×</button>
+        <span className="file-name" title={`${file.fileName} (${bytes(file.sizeBytes)}), series “${file.group}”`}>{file.fileName}</span>
       </div>
       <div className="file-meta">
-        <span>{statusText(file, result?.status)}</span>
-        {file.measurement?.scanRateVPerS ? (
-          <span title={`scan rate taken from ${SOURCE_WORDS[file.measurement.scanRateSource ?? ''] ?? 'unknown source'}`}>
-            {Number((file.measurement.scanRateVPerS * 1000).toPrecision(3))} mV/s · {SOURCE_SHORT[file.measurement.scanRateSource ?? ''] ?? '?'}
+        <span>{statusText(file, result)}</span>
+        {m?.scanRateVPerS ? (
+          <span title={`scan rate taken from ${SOURCE_WORDS[m.scanRateSource ?? ''] ?? 'unknown source'}`}>
+            {scanRate(m.scanRateVPerS * 1000)} mV/s · {SOURCE_SHORT[m.scanRateSource ?? ''] ?? '?'}
           </span>
-        ) : file.measurement ? <span className="warn-text">no scan rate</span> : null}
+        ) : m ? <span className="warn-text">no scan rate</span> : null}
       </div>
+      {notKept ? <p className="warn-text" data-testid="not-kept" title="The browser's storage could not keep this file's bytes: it will not come back on the next visit unless you save a session with data">not kept for the next visit</p> : null}
       {file.status === 'importing' ? <progress max={1} value={file.progress} aria-label={`reading ${file.fileName}`} /> : null}
       {file.error ? (
-        <p className="error-text" data-testid="file-error" role="alert">
+        <p className="error-text" data-testid="file-error">
           {file.error.message}
-          {file.measurement ? ' The previous reading of this file is kept.' : ''}
+          {m ? ' The previous reading of this file is kept.' : ''}
         </p>
-      ) : null}
-      {file.measurement ? (
-        <label className="group-field">
-          series
-          <input key={file.group} defaultValue={file.group} aria-label={`Series group of ${file.fileName}`} onBlur={(e) => act.setFileGroup(id, e.target.value)}
-            onKeyDown={(e) => e.key === 'Enter' && act.setFileGroup(id, e.currentTarget.value)} />
-        </label>
       ) : null}
     </li>
   );
@@ -64,6 +82,24 @@ function statusText(file: FileEntry, analysis: 'running' | 'ready' | 'error' | u
   if (file.status === 'importing') return `reading ${Math.round(file.progress * 100)} %`;
   if (file.status === 'error') return 'not read';
   const m = file.measurement;
-  const pts = m ? `${m.potentialV.length.toLocaleString('en')} pts, ${m.cycles.length} cycle${m.cycles.length === 1 ? '' : 's'}` : '';
+  const pts = m ? `${count(m.potentialV.length)} pts, ${m.cycles.length} cycle${m.cycles.length === 1 ? '' : 's'}` : '';
   return analysis === 'running' ? `${pts} · analysing` : analysis === 'error' ? `${pts} · analysis failed` : pts;
+}
+
+/** The selected file's series name and removal, below the list. */
+export function SelectedFileBar() {
+  const id = useHalfwave((s) => s.selectedFileId);
+  const file = useHalfwave((s) => (id ? s.files[id] : undefined));
+  if (!id || !file) return null;
+  const act = halfwaveActions();
+  return (
+    <div className="selected-file" data-testid="selected-file">
+      <label className="group-field">
+        series of {file.fileName}
+        <input key={`${id}-${file.group}`} defaultValue={file.group} data-testid="file-series" onBlur={(e) => act.setFileGroup(id, e.target.value)}
+          onKeyDown={(e) => e.key === 'Enter' && act.setFileGroup(id, e.currentTarget.value)} />
+      </label>
+      <button type="button" data-testid="file-remove" aria-label={`Remove ${file.fileName}`} title="Remove from the session" onClick={() => act.removeFile(id)}>Remove</button>
+    </div>
+  );
 }

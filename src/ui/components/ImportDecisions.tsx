@@ -1,5 +1,6 @@
 /** What the importer guessed for the selected file, why, and whether the user forced it. */
 import type { Guess } from '../../state/types';
+import { count, scanRate } from '../format';
 import { useSelection } from './useSelection';
 import { OverrideForm } from './OverrideForm';
 
@@ -7,6 +8,8 @@ const DELIMITERS: Record<string, string> = { ',': 'comma', ';': 'semicolon', '\t
 
 function show(value: unknown): string {
   if (value === null || value === undefined) return 'none';
+  // Numbers read back from the file (the scan rate) can carry a binary-float tail.
+  if (typeof value === 'number') return scanRate(value);
   if (typeof value === 'string' && value in DELIMITERS) return DELIMITERS[value] as string;
   return String(value);
 }
@@ -25,7 +28,7 @@ export function ImportDecisions() {
   return (
     <div className="decisions" data-testid="import-decisions">
       <p className="summary">
-        Table on lines {d.tableLines.first}–{d.tableLines.last}: {d.rowsRead.toLocaleString('en')} rows read, {d.rowsSkipped} skipped, {d.cycleCount} cycle{d.cycleCount === 1 ? '' : 's'}.
+        Table on lines {d.tableLines.first}–{d.tableLines.last}: {count(d.rowsRead)} rows read, {d.rowsSkipped} skipped, {d.cycleCount} cycle{d.cycleCount === 1 ? '' : 's'}.
         {file.measurement?.referenceElectrode ? ` Reference named in the file: ${file.measurement.referenceElectrode}.` : ''}
       </p>
       <table className="data compact">

@@ -2,12 +2,20 @@
 import { useEffect, useRef, useState } from 'react';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import { batchesFromDrop, batchesFromFolderPick, type FolderBatch } from '../folderDrop';
-import { FileList } from './FileList';
+import { FileList, SelectedFileBar } from './FileList';
 
-/** One upload: each folder, and each set of files with a common name stem, becomes its own new series. */
+/**
+ * One upload: each folder, and each set of files with a common name stem, becomes its own new
+ * series; once read, the first new series opens with its results table across files.
+ */
 function load(batches: FolderBatch[]): void {
   const upload = batches.filter((b) => b.files.length > 0).map((b) => ({ folder: b.folder, inputs: b.files.map((f) => ({ name: f.name, data: f })) }));
-  if (upload.length) void halfwaveActions().addUpload(upload);
+  if (upload.length === 0) return;
+  const act = halfwaveActions();
+  void act.addUpload(upload).then(({ groups }) => {
+    const first = groups.find((g) => act.groups().includes(g));
+    if (first) act.openSeries(first);
+  });
 }
 
 export function IntakePanel() {
@@ -80,6 +88,7 @@ export function IntakePanel() {
         </div>
       ) : null}
       <FileList />
+      <SelectedFileBar />
     </section>
   );
 }

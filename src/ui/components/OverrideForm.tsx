@@ -59,7 +59,7 @@ export function OverrideForm({ file }: { file: FileEntry }) {
           <input
             inputMode="decimal"
             data-testid="override-scan-rate"
-            defaultValue={draft.scanRateVPerS === undefined ? '' : String(draft.scanRateVPerS * 1000)}
+            defaultValue={draft.scanRateVPerS === undefined ? '' : String(Number((draft.scanRateVPerS * 1000).toPrecision(6)))}
             onBlur={(e) => {
               const v = Number(e.target.value.replace(',', '.'));
               setDraft(pickOne(draft, 'scanRateVPerS', e.target.value.trim() === '' || !(v > 0) ? AUTO : String(v / 1000), Number));

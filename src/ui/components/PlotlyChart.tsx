@@ -1,26 +1,21 @@
 /**
- * Plotly host. Plotly is loaded on first use (its own chunk, same origin) so the first paint does
- * not wait for it; updates go through Plotly.react. Only SVG trace types are used (no WebGL).
+ * Plotly host. Plotly (its basic bundle: scatter lines and markers, all this app draws) is loaded
+ * once, on its own same-origin chunk, started early by `preloadPlotly` so it parses while the
+ * workers read the first files; updates go through Plotly.react. Only SVG trace types are used.
+ * The toolbar holds only the view tools this app needs (zoom, pan, zoom in/out, reset): no image,
+ * sharing or cloud entries (the app's own export buttons make publication-size PNG and SVG).
  */
-import type PlotlyDefault from 'plotly.js-dist-min';
-import type { Config, Data, Layout, PlotlyHTMLElement, PlotSelectionEvent } from 'plotly.js-dist-min';
+import type { Config, Data, Layout, PlotlyHTMLElement, PlotSelectionEvent } from 'plotly.js';
 import { useEffect, useRef, useState } from 'react';
-
-type PlotlyApi = typeof PlotlyDefault;
-let plotlyLoading: Promise<PlotlyApi> | null = null;
-
-function loadPlotly(): Promise<PlotlyApi> {
-  // The bundle is CommonJS: the API is the default export (or the module itself in some loaders).
-  plotlyLoading ??= import('plotly.js-dist-min').then((m) => (m.default ?? (m as unknown as PlotlyApi)));
-  return plotlyLoading;
-}
+import { loadPlotly } from '../plotlyLoader';
+import { themedData, themedLayout } from '../plots/theme';
+import { useColorScheme } from '../useColorScheme';
 
 const config: Partial<Config> = {
   displaylogo: false,
   responsive: true,
   scrollZoom: false,
-  modeBarButtonsToRemove: ['lasso2d', 'select2d', 'autoScale2d'],
-  toImageButtonOptions: { format: 'svg', filename: 'halfwave-plot' },
+  modeBarButtons: [['zoom2d', 'pan2d', 'zoomIn2d', 'zoomOut2d', 'resetScale2d']],
 };
 
 export interface PlotlyChartProps {
@@ -36,6 +31,7 @@ export function PlotlyChart({ data, layout, testId, label, onRangeSelect }: Plot
   const host = useRef<HTMLDivElement>(null);
   const onSelect = useRef(onRangeSelect);
   const [failed, setFailed] = useState<string | null>(null);
+  const scheme = useColorScheme();
   onSelect.current = onRangeSelect;
 
   useEffect(() => {
@@ -44,7 +40,7 @@ export function PlotlyChart({ data, layout, testId, label, onRangeSelect }: Plot
       .then(async (Plotly) => {
         const el = host.current;
         if (!alive || !el) return;
-        const gd = (await Plotly.react(el, data, layout, config)) as PlotlyHTMLElement & { removeAllListeners?: (e: string) => void };
+        const gd = (await Plotly.react(el, themedData(data, scheme), themedLayout(layout, scheme), config)) as PlotlyHTMLElement & { removeAllListeners?: (e: string) => void };
         gd.removeAllListeners?.('plotly_selected');
         gd.on('plotly_selected', (ev: PlotSelectionEvent) => {
           const range = ev?.range?.x;
@@ -56,7 +52,7 @@ export function PlotlyChart({ data, layout, testId, label, onRangeSelect }: Plot
     return () => {
       alive = false;
     };
-  }, [data, layout]);
+  }, [data, layout, scheme]);
 
   useEffect(() => {
     const el = host.current;
@@ -66,5 +62,6 @@ export function PlotlyChart({ data, layout, testId, label, onRangeSelect }: Plot
   }, []);
 
   if (failed) return <p className="error-text" role="alert">The plot could not be drawn: {failed}</p>;
-  return <div ref={host} className="plot-host" data-testid={testId} role="img" aria-label={label} />;
+  // A figure, not an image: it holds the (focusable) toolbar buttons.
+  return <div ref={host} className="plot-host" data-testid={testId} role="figure" aria-label={label} />;
 }

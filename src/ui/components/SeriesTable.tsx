@@ -1,7 +1,11 @@
-/** Numbers of each series couple: fits with 95 % intervals, D, log–log reading, k°, Γ, k_s, verdict. */
+/** Numbers of each series couple: fits with 95 % intervals, D, log–log reading, k°, Γ, k_s, k_f, Cd, verdict; each derived number explains itself. */
+import type { ReactNode } from 'react';
 import type { FitLineResult } from '../../core/regression/fitLine';
-import type { SeriesAnalysis, SeriesCouple } from '../../state/types';
+import { explainCapacitance, explainCouple } from '../../state/explain';
+import type { RunSeriesResult, SeriesCouple } from '../../state/types';
 import { DASH, fixed, sci, sig } from '../format';
+import { Explained } from './Explained';
+import { DReading, K0Reading } from './SeriesReadings';
 
 function fitText(fit: FitLineResult | null | undefined, factor: number, unit: string): string {
   if (!fit) return DASH;
@@ -9,36 +13,41 @@ function fitText(fit: FitLineResult | null | undefined, factor: number, unit: st
   return `${sig(fit.slope, 4, factor)}${ci} ${unit}; intercept ${sig(fit.intercept, 3, factor)} µA; R² ${fixed(fit.r2, 4)}`;
 }
 
-function rows(c: SeriesCouple): [string, string][] {
+function rows(s: RunSeriesResult, c: SeriesCouple): [string, ReactNode][] {
   const d = c.diffusion;
-  const k = c.rateConstant;
-  const s = c.surface;
+  const t = c.transferCoefficient;
+  const sf = c.surface;
+  const x = explainCouple(s, c);
   return [
-    ['E½ (median)', c.eHalfV === null ? DASH : `${fixed(c.eHalfV, 4)} V`],
+    ['E½ (median)', c.eHalfV === null ? DASH : `${fixed(c.eHalfV, 4)} V${c.eHalfMeaning ? ` (${c.eHalfMeaning})` : ''}`],
     ['Regime / kinetics', `${c.regime}, ${c.kineticClass}`],
     c.regime === 'surface'
-      ? ['Forward |ip| vs v (slope 95 % CI)', fitText(s?.fit, 1e6, 'µA (V/s)⁻¹')]
+      ? ['Forward |ip| vs v (slope 95 % CI)', fitText(sf?.fit, 1e6, 'µA (V/s)⁻¹')]
       : ['Forward |ip| vs v½ (slope 95 % CI)', fitText(c.forwardFit, 1e6, 'µA (V/s)⁻½')],
-    ['D (Randles–Ševčík)', d ? `${sci(d.diffusionCm2PerS, 3)} cm²/s${d.intervalCm2PerS ? ` [${sci(d.intervalCm2PerS[0], 3)}, ${sci(d.intervalCm2PerS[1], 3)}]` : ''} (${d.form} form${d.alphaUsed !== null ? `, α ${fixed(d.alphaUsed, 2)}` : ''})` : DASH],
+    ['D (Randles–Ševčík)', d ? <><DReading result={s} c={c} explanation={x.D} /> — {d.form} form{d.alphaUsed !== null ? `, αc ${fixed(d.alphaUsed, 2)}` : ''}</> : DASH],
     ['log|ip| vs log v slope', c.logLog ? `${fixed(c.logLog.slope, 3)} → ${c.logLog.reading}` : DASH],
     ['dEpa / dlog v', c.peakShift.anodic ? `${fixed(c.peakShift.anodic.slopeVPerDecade, 1, 1000)} mV/decade` : DASH],
     ['dEpc / dlog v', c.peakShift.cathodic ? `${fixed(c.peakShift.cathodic.slopeVPerDecade, 1, 1000)} mV/decade` : DASH],
-    ['α (Ep–log v)', fixed(c.alpha, 2)],
-    ['k° (Nicholson, median)', k?.k0CmPerS != null ? `${sci(k.k0CmPerS, 3)} cm/s` : k?.lowerBoundCmPerS != null ? `≥ ${sci(k.lowerBoundCmPerS, 2)} cm/s` : DASH],
-    ['Γ from charge / from slope', s ? `${sci(s.coverageFromChargeMolPerCm2, 3)} / ${sci(s.coverageFromSlopeMolPerCm2, 3)} mol/cm²` : DASH],
-    ['k_s (Laviron)', s?.ksPerS != null ? `${sci(s.ksPerS, 3)} s⁻¹` : DASH],
+    ['αc and the forward αnₐ', t ? <Explained explanation={x.alpha}>{t.text}</Explained> : c.alpha === null ? DASH : <Explained explanation={x.alpha}>αc {fixed(c.alpha, 2)}</Explained>],
+    ['k° (median over files)', <K0Reading result={s} c={c} explanation={x.k0} />],
+    ['Ohmic drop', c.ohmic ? c.ohmic.text : DASH],
+    ['Γ from charge / from slope', sf ? <Explained explanation={x.gamma}>{sci(sf.coverageFromChargeMolPerCm2, 3)} / {sci(sf.coverageFromSlopeMolPerCm2, 3)} mol/cm²</Explained> : DASH],
+    ['k_s (Laviron)', sf?.ksPerS != null ? <Explained explanation={x.ks}>{sci(sf.ksPerS, 3)} s⁻¹</Explained> : DASH],
+    ['k_f (follow-up reaction)', c.followUp?.rateConstantPerS != null ? <Explained explanation={x.kf}>{sci(c.followUp.rateConstantPerS, 3)} s⁻¹</Explained>
+      : c.followUp?.lowerBoundPerS != null ? <Explained explanation={x.kf}>≥ {sci(c.followUp.lowerBoundPerS, 2)} s⁻¹</Explained> : DASH],
     ['Reading', c.verdict.label],
   ];
 }
 
-export function SeriesTable({ result }: { result: SeriesAnalysis }) {
+export function SeriesTable({ result }: { result: RunSeriesResult }) {
+  const cd = explainCapacitance(result);
   return (
-    <div className="series-tables" data-testid="series-table" data-d-first={result.couples[0]?.diffusion?.diffusionCm2PerS ?? undefined}>
-      {result.couples.map((c) => (
+    <div className="series-tables" data-testid="series-table" data-d-first={result.analysis.couples[0]?.diffusion?.diffusionCm2PerS ?? undefined}>
+      {result.analysis.couples.map((c) => (
         <table key={c.index} className="data kv">
           <caption>Couple {c.index + 1} · {c.points.length} scan rates</caption>
           <tbody>
-            {rows(c).map(([k, v]) => (
+            {rows(result, c).map(([k, v]) => (
               <tr key={k}><th scope="row">{k}</th><td className="wrap">{v}</td></tr>
             ))}
           </tbody>
@@ -47,7 +56,10 @@ export function SeriesTable({ result }: { result: SeriesAnalysis }) {
           ) : null}
         </table>
       ))}
-      {result.warnings.length > 0 ? <ul className="notes">{result.warnings.map((w) => <li key={w.message}>{w.message}</li>)}</ul> : null}
+      {result.capacitance ? (
+        <p data-testid="series-cd">Double-layer capacitance Cd = <Explained explanation={cd ?? undefined}>{sci(result.capacitance.capacitanceFPerCm2 * 1e6, 3)} µF/cm²</Explained></p>
+      ) : null}
+      {result.analysis.warnings.length > 0 ? <ul className="notes">{result.analysis.warnings.map((w) => <li key={w.message}>{w.message}</li>)}</ul> : null}
     </div>
   );
 }

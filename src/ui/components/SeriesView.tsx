@@ -1,19 +1,38 @@
-/** "Series": the chosen group's scan-rate study: three plots and the numbers behind them. */
+/**
+ * "Series": the chosen group's scan-rate study: every file overlaid (coloured by scan rate, in
+ * the chosen scaling and cycle), the three diagnostic plots with the fits and their 95 % bands,
+ * and the numbers behind them. Each figure can be saved as PNG or SVG.
+ */
 import { useEffect, useMemo, useState } from 'react';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
+import type { OverlayNormalisation } from '../../state/types';
+import { safeName } from '../download';
+import { buildOverlayFigure, type OverlayFile } from '../plots/overlayFigure';
 import { buildSeriesFigures } from '../plots/seriesFigures';
-import { PlotlyChart } from './PlotlyChart';
-import { SeriesTable } from './SeriesTable';
 import { CellSummary } from './CellSummary';
-import { useSeriesScale } from './useSeriesCell';
+import { FigureExportButtons } from './FigureExportButtons';
+import { PlotlyChart } from './PlotlyChart';
+import { SeriesHeadline } from './SeriesHeadline';
+import { SeriesTable } from './SeriesTable';
+import { useSeriesCell, useSeriesScale } from './useSeriesCell';
+
+const SCALINGS: { id: OverlayNormalisation; label: string }[] = [
+  { id: 'current', label: 'i' }, { id: 'density', label: 'i/A (density)' }, { id: 'diffusion', label: 'i/v½ (diffusion)' }, { id: 'capacitive', label: 'i/v (capacitive)' },
+];
+
+type FigureId = 'overlay' | 'current' | 'logLog' | 'peakPotential';
 
 export function SeriesView() {
   const groups = useHalfwaveShallow((s) => s.groups());
   const chosen = useHalfwave((s) => s.selectedGroup);
   const group = chosen && groups.includes(chosen) ? chosen : (groups[0] ?? null);
   const entry = useHalfwave((s) => (group ? s.series[group] : undefined));
+  const overlay = useHalfwave((s) => s.seriesOverlay);
+  const convention = useHalfwave((s) => s.convention);
   const scale = useSeriesScale(group);
+  const area = useSeriesCell(group).cell.areaCm2;
   const [coupleIndex, setCoupleIndex] = useState(0);
+  const [exported, setExported] = useState<FigureId>('overlay');
   const act = halfwaveActions();
   useEffect(() => {
     if (group && !entry) void act.analyzeGroup(group);
@@ -21,6 +40,13 @@ export function SeriesView() {
   const couples = entry?.result?.analysis.couples ?? [];
   const couple = couples[coupleIndex] ?? couples[0];
   const figs = useMemo(() => (couple ? buildSeriesFigures(couple, scale.name) : null), [couple, scale]);
+  const overlayFiles = useOverlayFiles(group);
+  const cycles = Math.max(1, ...overlayFiles.map((f) => f.cycles.length));
+  const overlayFig = useMemo(() => buildOverlayFigure({
+    files: overlayFiles, normalisation: overlay.normalisation, cycle: overlay.cycle, areaCm2: area, convention,
+    potentialAxisTitle: `E vs ${scale.name} / V`,
+  }), [overlayFiles, overlay, area, convention, scale.name]);
+  const all = { overlay: overlayFig, current: figs?.current ?? null, logLog: figs?.logLog ?? null, peakPotential: figs?.peakPotential ?? null };
 
   return (
     <section className="panel series" aria-labelledby="series-title" data-testid="series-view">
@@ -40,20 +66,62 @@ export function SeriesView() {
             </select>
           </label>
         ) : null}
+        <label>
+          Figure{' '}
+          <select value={exported} data-testid="series-figure" onChange={(e) => setExported(e.target.value as FigureId)}>
+            <option value="overlay">overlay</option><option value="current">|ip| against v½</option>
+            <option value="logLog">log|ip| against log v</option><option value="peakPotential">Ep against log v</option>
+          </select>
+        </label>
+        <FigureExportButtons figure={all[exported]} baseName={`halfwave-${safeName(group ?? 'series')}-${exported}`} what={`the ${exported} plot`} testId="series-figure" />
         <span className="status" role="status">{entry?.status === 'running' ? 'fitting…' : entry ? `${entry.fileIds.length} files` : ''}</span>
       </div>
       {group ? <CellSummary group={group} /> : null}
+      {group ? <SeriesHeadline group={group} /> : null}
       {entry?.error ? <p className="error-text" role="alert">{entry.error.message}</p> : null}
-      {figs ? (
-        <div className="series-plots">
-          <PlotlyChart data={figs.current.data} layout={figs.current.layout} testId="series-current-plot" label="Peak current against scan rate" />
-          <PlotlyChart data={figs.logLog.data} layout={figs.logLog.layout} testId="series-loglog-plot" label="log peak current against log scan rate" />
-          <PlotlyChart data={figs.peakPotential.data} layout={figs.peakPotential.layout} testId="series-ep-plot" label="Peak potential against log scan rate" />
-        </div>
-      ) : (
-        <p className="empty">{entry?.status === 'ready' ? 'No couple could be followed across the scan rates of this group.' : 'Waiting for the analyses of this group…'}</p>
-      )}
-      {entry?.result ? <SeriesTable result={entry.result.analysis} /> : null}
+      <div className="overlay-bar toolbar" role="group" aria-label="Overlay of the series">
+        <label>
+          Scale currents as{' '}
+          <select value={overlay.normalisation} data-testid="overlay-scaling" onChange={(e) => act.setView({ seriesOverlay: { ...overlay, normalisation: e.target.value as OverlayNormalisation } })}>
+            {SCALINGS.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
+          </select>
+        </label>
+        <label>
+          Cycle{' '}
+          <select value={overlay.cycle} data-testid="overlay-cycle" onChange={(e) => act.setView({ seriesOverlay: { ...overlay, cycle: Number(e.target.value) } })}>
+            {Array.from({ length: cycles }, (_, k) => <option key={k} value={k + 1}>{k + 1}</option>)}
+          </select>
+        </label>
+        {overlay.normalisation === 'density' && area === null ? <span className="warn-text">give the electrode area in the Cell panel</span> : null}
+      </div>
+      <div className="series-plots">
+        <PlotlyChart data={overlayFig.data} layout={overlayFig.layout} testId="series-overlay-plot" label="Every voltammogram of the series, coloured by scan rate" />
+        {figs ? (
+          <>
+            <PlotlyChart data={figs.current.data} layout={figs.current.layout} testId="series-current-plot" label="Peak current against scan rate" />
+            <PlotlyChart data={figs.logLog.data} layout={figs.logLog.layout} testId="series-loglog-plot" label="log peak current against log scan rate" />
+            <PlotlyChart data={figs.peakPotential.data} layout={figs.peakPotential.layout} testId="series-ep-plot" label="Peak potential against log scan rate" />
+          </>
+        ) : (
+          <p className="empty">{entry?.status === 'ready' ? 'No couple could be followed across the scan rates of this group.' : 'Waiting for the analyses of this group…'}</p>
+        )}
+      </div>
+      {entry?.result ? <SeriesTable result={entry.result} /> : null}
     </section>
   );
+}
+
+/** The series' files as drawn: analysed potentials on the display scale, currents as measured. */
+function useOverlayFiles(group: string | null): OverlayFile[] {
+  const fileOrder = useHalfwave((s) => s.fileOrder);
+  const files = useHalfwave((s) => s.files);
+  const results = useHalfwave((s) => s.results);
+  return useMemo(() => fileOrder.flatMap((id) => {
+    const f = files[id];
+    const run = results[id]?.run;
+    const m = f?.measurement;
+    if (!f || f.group !== group || !m || !run || !m.scanRateVPerS) return [];
+    const potentialV = run.analysedPotentialV ?? (run.reference.offsetV === 0 ? m.potentialV : m.potentialV.map((e) => e + run.reference.offsetV));
+    return [{ name: f.fileName, scanRateVPerS: m.scanRateVPerS, potentialV, currentA: m.currentA, cycles: m.cycles }];
+  }), [fileOrder, files, results, group]);
 }

@@ -5,6 +5,7 @@ import { buildTraceFigure } from '../plots/traceFigure';
 import { PlotlyChart } from './PlotlyChart';
 import { TraceToolbar } from './TraceToolbar';
 import { useSeriesCell, useSeriesScale } from './useSeriesCell';
+import { useWorkingWindow } from './useWorkingWindow';
 
 export function TracePanel() {
   const id = useHalfwave((s) => s.selectedFileId);
@@ -14,6 +15,7 @@ export function TracePanel() {
   const settings = useHalfwave((s) => s.settings);
   const view = useHalfwaveShallow((s) => ({ cycle: s.selectedCycle, convention: s.convention, showSmoothed: s.showSmoothed, showBaselines: s.showBaselines, dragMode: s.dragMode, dir: s.windowDirection }));
   const scale = useSeriesScale(file?.group ?? null);
+  const working = useWorkingWindow(file?.group ?? null);
   const cell = useSeriesCell(file?.group ?? null);
   const showTheory = useHalfwave((s) => s.showTheory);
   const theory = useHalfwave((s) => (id ? s.theory[id] : undefined));
@@ -41,11 +43,14 @@ export function TracePanel() {
       analysis: run?.analysis ?? null, cycle: view.cycle, convention: view.convention,
       showSmoothed: view.showSmoothed, showBaselines: view.showBaselines, dragMode: view.dragMode,
       peakWindows: windows ?? [], recordingOffsetV: offsetV,
-      potentialAxisTitle: `E${iRCorrected ? ' (iR-corrected)' : ''} vs ${scale.name} / V`,
+      potentialAxisTitle: `E${iRCorrected ? ' (iR-corrected)' : ''} vs ${scale.name} / V`, currentKind: m.currentKind,
       theory: theoryCurve,
       companions: companions.map((c) => ({ name: c.fileName, potentialV: c.potentialV, currentA: c.currentA, cycles: c.cycles })),
+      workingWindow: working && (working.lowerV !== null || working.upperV !== null)
+        ? { lowerV: working.lowerV, upperV: working.upperV, lowerLabel: working.entry.lower?.process ?? 'limit', upperLabel: working.entry.upper?.process ?? 'limit' }
+        : null,
     });
-  }, [m, shown, run, iRCorrected, offsetV, view, windows, scale, theoryCurve?.currentA, companions]);
+  }, [m, shown, run, iRCorrected, offsetV, view, windows, scale, theoryCurve?.currentA, companions, working]);
 
   const onRangeSelect = (a: number, b: number) => {
     if (!id || view.dragMode !== 'window') return;
@@ -58,7 +63,7 @@ export function TracePanel() {
   return (
     <section className="panel trace" aria-labelledby="trace-title">
       <h2 id="trace-title" className="visually-hidden">Trace</h2>
-      <TraceToolbar cycles={m?.cycles.map((c) => c.index) ?? []} status={result?.status ?? null} />
+      <TraceToolbar cycles={m?.cycles.map((c) => c.index) ?? []} status={result?.status ?? null} figure={figure} fileName={m?.fileName ?? 'trace'} />
       {figure ? (
         <PlotlyChart data={figure.data} layout={figure.layout} testId="trace-plot" label={`Voltammogram of ${m?.fileName ?? ''}`} onRangeSelect={onRangeSelect} />
       ) : (

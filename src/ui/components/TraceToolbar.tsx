@@ -1,7 +1,9 @@
 /** Controls above the trace: cycle, overlays, and what a drag on the plot does. */
 import { halfwaveActions, useHalfwave } from '../../state/react';
+import { safeName } from '../download';
+import { FigureExportButtons, type FigureExportProps } from './FigureExportButtons';
 
-export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'running' | 'ready' | 'error' | null }) {
+export function TraceToolbar({ cycles, status, figure, fileName }: { cycles: number[]; status: 'running' | 'ready' | 'error' | null; figure: FigureExportProps['figure']; fileName: string }) {
   const cycle = useHalfwave((s) => s.selectedCycle);
   const showSmoothed = useHalfwave((s) => s.showSmoothed);
   const showBaselines = useHalfwave((s) => s.showBaselines);
@@ -43,6 +45,7 @@ export function TraceToolbar({ cycles, status }: { cycles: number[]; status: 'ru
           <option value="cathodic">mark cathodic window</option>
         </select>
       </label>
+      <FigureExportButtons figure={figure} baseName={`halfwave-trace-${safeName(fileName.replace(/\.[^.]+$/, ''))}`} what="the trace" testId="trace" />
       <span className="status" role="status" data-testid="analysis-status" title="state of the analysis of this file">{status === 'running' ? 'analysing…' : status === 'ready' ? 'up to date' : ''}</span>
     </div>
   );

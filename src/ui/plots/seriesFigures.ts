@@ -4,7 +4,7 @@
  * Fit lines are drawn from the series result's own slope and intercept over the data range, so
  * the picture shows exactly the fit that produced the numbers in the table.
  */
-import type { Data, Layout } from 'plotly.js-dist-min';
+import type { Data, Layout } from 'plotly.js';
 import type { FitLineResult } from '../../core/regression/fitLine';
 import type { SeriesCouple } from '../../core/analysis/seriesTypes';
 import type { SeriesPoint } from '../../core/series/seriesPoint';
@@ -38,10 +38,13 @@ function currentFigure(c: SeriesCouple): Figure {
   const xOf = (p: SeriesPoint) => (surface ? p.scanRateVPerS : Math.sqrt(p.scanRateVPerS));
   const scale = chooseCurrentScale(Math.max(0, ...c.points.map((p) => Math.max(p.ipaA ?? 0, p.ipcA ?? 0))));
   const fit = surface ? c.surface?.fit ?? null : c.forwardFit;
-  const data: Data[] = [
+  const fitted = c.points.filter((p) => p.forwardIpA !== null && Number.isFinite(p.forwardIpA)).map(xOf);
+  const data: Data[] = [];
+  if (fit) data.push(...confidenceBandTraces(fit, fitted, scale.factor));
+  data.push(
     points(c.points, xOf, (p) => p.ipaA, scale.factor, 'ipa', palette.anodic, markers.anodic),
     points(c.points, xOf, (p) => p.ipcA, scale.factor, 'ipc', palette.cathodic, markers.cathodic),
-  ];
+  );
   if (fit) data.push(fitLine(fit, c.points.map(xOf), scale.factor, `forward-peak fit, R² ${fit.r2.toFixed(4)}`));
   const xTitle = surface ? 'v / (V s⁻¹)' : 'v½ / (V s⁻¹)½';
   return { data, layout: layout(xTitle, `|ip| / ${scale.unit}`, false) };
@@ -49,17 +52,23 @@ function currentFigure(c: SeriesCouple): Figure {
 
 function logLogFigure(c: SeriesCouple): Figure {
   const log = (v: number | null) => (v !== null && v > 0 ? Math.log10(v) : null);
-  const data: Data[] = [points(c.points, (p) => Math.log10(p.scanRateVPerS), (p) => log(p.forwardIpA), 1, 'forward peak', palette.traces[0], 'circle')];
-  if (c.logLog) data.push(fitLine(c.logLog.fit, c.points.map((p) => Math.log10(p.scanRateVPerS)), 1, `slope ${c.logLog.slope.toFixed(3)}`));
+  const lx = (p: SeriesPoint) => Math.log10(p.scanRateVPerS);
+  const data: Data[] = c.logLog ? confidenceBandTraces(c.logLog.fit, c.points.filter((p) => log(p.forwardIpA) !== null).map(lx), 1) : [];
+  data.push(points(c.points, lx, (p) => log(p.forwardIpA), 1, 'forward peak', palette.traces[0], 'circle'));
+  if (c.logLog) data.push(fitLine(c.logLog.fit, c.points.map(lx), 1, `slope ${c.logLog.slope.toFixed(3)}`));
   return { data, layout: layout('log₁₀(v / V s⁻¹)', 'log₁₀(|ip| / A)', false) };
 }
 
 function peakPotentialFigure(c: SeriesCouple, scaleName: string): Figure {
   const lx = (p: SeriesPoint) => Math.log10(p.scanRateVPerS);
-  const data: Data[] = [
+  const data: Data[] = [];
+  for (const [r, y] of [[c.peakShift.anodic, (p: SeriesPoint) => p.epaV], [c.peakShift.cathodic, (p: SeriesPoint) => p.epcV]] as const) {
+    if (r) data.push(...confidenceBandTraces(r.fit, c.points.filter((p) => y(p) !== null).map(lx), 1, data.length === 0));
+  }
+  data.push(
     points(c.points, lx, (p) => p.epaV, 1, 'Epa', palette.anodic, markers.anodic),
     points(c.points, lx, (p) => p.epcV, 1, 'Epc', palette.cathodic, markers.cathodic),
-  ];
+  );
   const xs = c.points.map(lx);
   for (const [dir, r] of [['anodic', c.peakShift.anodic], ['cathodic', c.peakShift.cathodic]] as const) {
     if (r) data.push(fitLine(r.fit, xs, 1, `${dir}: ${(r.slopeVPerDecade * 1000).toFixed(1)} mV/decade`));
@@ -84,6 +93,39 @@ function fitLine(fit: FitLineResult, xs: number[], factor: number, name: string)
     type: 'scatter', mode: 'lines', name, x, y: x.map((v) => (fit.slope * v + fit.intercept) * factor),
     line: { color: palette.fit, width: 1.2, dash: 'dot' }, hoverinfo: 'skip',
   } as Data;
+}
+
+/**
+ * The fit's 95 % confidence band for the mean response, ŷ(x) ± t·s·√(1/n + (x − x̄)²/Sxx)
+ * (N. R. Draper, H. Smith, Applied Regression Analysis, 3rd ed. (1998), §1.4), over the fitted
+ * x range. `xs` are the x values the fit used; Sxx follows from the fit's own slope error,
+ * Sxx = s²/se(slope)², so the band belongs to exactly the line drawn. None without a residual
+ * degree of freedom.
+ */
+export function confidenceBand(fit: FitLineResult, xs: number[], steps = 40): { x: number[]; lower: number[]; upper: number[] } | null {
+  const s = fit.residualStdDev;
+  const se = fit.slopeStdError;
+  const t = fit.tQuantile;
+  if (s === null || se === null || t === null || !(se > 0) || xs.length < 3) return null;
+  const n = xs.length;
+  const mean = xs.reduce((a, b) => a + b, 0) / n;
+  const sxx = (s * s) / (se * se);
+  const lo = Math.min(...xs);
+  const hi = Math.max(...xs);
+  const x = Array.from({ length: steps + 1 }, (_, k) => lo + ((hi - lo) * k) / steps);
+  const half = x.map((v) => t * s * Math.sqrt(1 / n + ((v - mean) ** 2) / sxx));
+  const yhat = x.map((v) => fit.slope * v + fit.intercept);
+  return { x, lower: yhat.map((y, k) => y - (half[k] as number)), upper: yhat.map((y, k) => y + (half[k] as number)) };
+}
+
+function confidenceBandTraces(fit: FitLineResult, xs: number[], factor: number, showLegend = true): Data[] {
+  const band = confidenceBand(fit, xs);
+  if (!band) return [];
+  const edge = { type: 'scatter', mode: 'lines', x: band.x, line: { width: 0, color: palette.fit }, hoverinfo: 'skip', legendgroup: 'band' } as const;
+  return [
+    { ...edge, y: band.lower.map((v) => v * factor), name: '95 % band', showlegend: false } as Data,
+    { ...edge, y: band.upper.map((v) => v * factor), name: `fit, ${Math.round(fit.confidenceLevel * 100)} % band`, showlegend: showLegend, fill: 'tonexty', fillcolor: palette.fitBand } as Data,
+  ];
 }
 
 function layout(xTitle: string, yTitle: string, legendInside: boolean): Partial<Layout> {

@@ -52,6 +52,17 @@ describe('buildTraceFigure', () => {
     expect(hidden.data).toHaveLength(3);
   });
 
+  it('marks the points the analysis left out and shades a steep rise at the window edge', () => {
+    const cycle = { index: 1, peaks: [], couples: [], warnings: [], windowEdges: [{ direction: 'anodic', segmentIndex: 0, fromV: 0.15, fromIndex: 1, toV: 0.2, currentA: 5e-6, atSwitch: true }] };
+    const flagged = { cycles: [cycle], smoothed: null, spikes: [{ index: 3, potentialV: 0.1, currentA: -2e-6, replacedByA: 1e-6 }] } as unknown as VoltammogramAnalysis;
+    const fig = buildTraceFigure({ ...base, analysis: flagged });
+    const left = fig.data.find((d) => (d as { name: string }).name === 'left-out points (1)') as { x: number[]; y: number[] };
+    expect(left.x).toEqual([0.1]);
+    expect(left.y).toEqual([expect.closeTo(-2, 12)]);
+    expect(fig.layout.shapes).toContainEqual(expect.objectContaining({ x0: 0.15, x1: 0.2, name: 'steep rise at the window edge' }));
+    expect(buildTraceFigure({ ...base, analysis: flagged, cycle: 2, cycles: [{ index: 2, start: 0, end: 5 }] }).layout.shapes).toEqual([]);
+  });
+
   it('draws companions of the series behind the trace and scales the current axis to them', () => {
     const big = Float64Array.from([0, 1e-3, 2e-3, -1e-3, 0]);
     const fig = buildTraceFigure({ ...base, companions: [{ name: 'b.csv', potentialV, currentA: big, cycles: base.cycles }] });

@@ -3,9 +3,11 @@
  * cycle, optional smoothed curve, the baselines exactly as subtracted, and peak markers with a
  * stem from baseline to peak (the drawn ip). Sign conventions: IUPAC plots i with anodic up on
  * a potential axis increasing to the right; the polarographic choice plots −i (cathodic up) on
- * a potential axis increasing to the left. Pure: no DOM, no Plotly import.
+ * a potential axis increasing to the left. Isolated bad points the analysis left out are marked
+ * with a cross, and the stretch where a sweep ends in a steeply rising current (the window edge)
+ * is shaded grey. Pure: no DOM, no Plotly import.
  */
-import type { Data, Layout, Shape } from 'plotly.js-dist-min';
+import type { Annotations, Data, Layout, Shape } from 'plotly.js';
 import type { VoltammogramAnalysis } from '../../core/analysis/types';
 import type { PeakResult, PeakWindow } from '../../core/peaks/peakTypes';
 import type { CycleRange } from '../../core/types';
@@ -35,12 +37,19 @@ export interface TraceFigureInput {
   recordingOffsetV: number;
   /** e.g. "E vs SCE / V". */
   potentialAxisTitle: string;
+  /** 'density' when currentA holds A/cm² (the file stated no area): the axis then reads j. @default 'current' */
+  currentKind?: 'current' | 'density';
   /** Simulated voltammogram to overlay (files' scale, IUPAC), with its legend text. */
   theory?: { potentialV: Float64Array; currentA: Float64Array; label: string } | null;
   /** Other voltammograms of the same series drawn thinly behind (same cycle), for comparison. */
   companions?: { name: string; potentialV: Float64Array; currentA: Float64Array; cycles: CycleRange[] }[];
   /** Most points drawn per trace. @default 6000 */
   maxPoints?: number;
+  /**
+   * Usable potential window of the electrode in its medium, on the display scale (V), drawn as a
+   * band behind the trace with its limits marked; a null limit leaves that side open.
+   */
+  workingWindow?: { lowerV: number | null; upperV: number | null; lowerLabel: string; upperLabel: string } | null;
 }
 
 export interface TraceFigure {
@@ -87,6 +96,14 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
   const peaks = (input.analysis?.cycles ?? []).filter((c) => shown.has(c.index)).flatMap((c) => c.peaks);
   if (input.showBaselines) data.push(...peaks.map((p, k) => baselineTrace(p, k === 0, same, ty)));
   data.push(...(['anodic', 'cathodic'] as const).map((d) => peakTrace(peaks.filter((p) => p.direction === d), d, same, ty, scale)));
+  const spikes = (input.analysis?.spikes ?? []).filter((p) => cycles.some((c) => p.index >= c.start && p.index < c.end));
+  if (spikes.length) {
+    data.push({
+      type: 'scatter', mode: 'markers', name: `left-out points (${spikes.length})`, x: spikes.map((p) => p.potentialV), y: spikes.map((p) => ty(p.currentA)),
+      marker: { symbol: 'x-thin-open', size: 9, color: palette.spike, line: { width: 1.5, color: palette.spike } },
+      hovertemplate: 'left out: an isolated bad point<br>E %{x:.4f} V<br>i %{y:.4g}<extra></extra>',
+    });
+  }
   return { data, layout: traceLayout(input, scale, tx), scale };
 }
 
@@ -134,10 +151,10 @@ function peakTrace(peaks: PeakResult[], direction: 'anodic' | 'cathodic', tx: Ma
 
 function traceLayout(input: TraceFigureInput, scale: UnitScale, tx: Map1): Partial<Layout> {
   const polarographic = input.convention === 'polarographic';
-  const shapes: Partial<Shape>[] = input.peakWindows.map((w) => ({
+  const shapes: Partial<Shape>[] = [...workingWindowShapes(input), ...windowEdgeShapes(input), ...input.peakWindows.map((w): Partial<Shape> => ({
     type: 'rect', xref: 'x', yref: 'paper', x0: tx(w.fromV), x1: tx(w.toV), y0: 0, y1: 1, line: { width: 0 },
     fillcolor: w.direction === 'anodic' ? palette.anodicWindow : palette.cathodicWindow, layer: 'below',
-  }));
+  }))];
   return {
     font: baseFont,
     paper_bgcolor: '#ffffff',
@@ -150,13 +167,72 @@ function traceLayout(input: TraceFigureInput, scale: UnitScale, tx: Map1): Parti
       gridcolor: palette.grid, zeroline: false, showline: true, linecolor: palette.ink, ticks: 'outside', mirror: true,
     },
     yaxis: {
-      title: { text: polarographic ? `−i / ${scale.unit} (cathodic up)` : `i / ${scale.unit} (anodic up)` },
+      title: { text: input.currentKind === 'density'
+        ? (polarographic ? `−j / (${scale.unit} cm⁻²) (cathodic up)` : `j / (${scale.unit} cm⁻²) (anodic up)`)
+        : (polarographic ? `−i / ${scale.unit} (cathodic up)` : `i / ${scale.unit} (anodic up)`) },
       gridcolor: palette.grid, zeroline: true, zerolinecolor: '#b9bcb2', showline: true, linecolor: palette.ink, ticks: 'outside', mirror: true,
     },
     dragmode: input.dragMode === 'window' ? 'select' : 'zoom',
     selectdirection: 'h',
     hovermode: 'closest',
     shapes,
+    annotations: workingWindowLabels(input),
     uirevision: `${input.fileName}|${input.convention}`,
   };
+}
+
+/** Stretches where a shown sweep ends in a current still rising steeply: shaded, below the traces. */
+function windowEdgeShapes(input: TraceFigureInput): Partial<Shape>[] {
+  const shown = (c: number) => input.cycle === 0 || c === input.cycle;
+  return (input.analysis?.cycles ?? []).filter((c) => shown(c.index)).flatMap((c) => (c.windowEdges ?? []).map((e): Partial<Shape> => ({
+    type: 'rect', xref: 'x', yref: 'paper', x0: Math.min(e.fromV, e.toV), x1: Math.max(e.fromV, e.toV), y0: 0, y1: 1,
+    line: { width: 0 }, fillcolor: palette.windowEdge, layer: 'below', name: 'steep rise at the window edge',
+  })));
+}
+
+/** The working window as a band (layer below the traces) with a dashed line at each known limit. */
+function workingWindowShapes(input: TraceFigureInput): Partial<Shape>[] {
+  const w = visibleWindow(input);
+  if (!w) return [];
+  const edge = (x: number): Partial<Shape> => ({ type: 'line', xref: 'x', yref: 'paper', x0: x, x1: x, y0: 0, y1: 1, layer: 'below', line: { color: palette.baseline, width: 1, dash: 'dash' } });
+  return [
+    { type: 'rect', xref: 'x', yref: 'paper', x0: w.x0, x1: w.x1, y0: 0, y1: 1, line: { width: 0 }, fillcolor: palette.workingWindow, layer: 'below' },
+    ...w.edges.map((e) => edge(e.x)),
+  ];
+}
+
+function workingWindowLabels(input: TraceFigureInput): Partial<Annotations>[] {
+  return (visibleWindow(input)?.edges ?? []).map((e) => ({
+    x: e.x, xref: 'x', y: 0, yref: 'paper', yanchor: 'bottom', xanchor: e.side === 'lower' ? 'left' : 'right', text: e.label, showarrow: false,
+    font: { size: 10, color: palette.baseline },
+  }));
+}
+
+/**
+ * The band clipped to the recorded potential range (so it never widens the axis), and the limits
+ * that fall inside that range (widened by 5 % of it) as edges to mark.
+ */
+function visibleWindow(input: TraceFigureInput): { x0: number; x1: number; edges: { x: number; side: 'lower' | 'upper'; label: string }[] } | null {
+  const w = input.workingWindow;
+  if (!w || (w.lowerV === null && w.upperV === null)) return null;
+  const [lo, hi] = potentialRange(input);
+  const x0 = Math.max(lo, w.lowerV ?? lo);
+  const x1 = Math.min(hi, w.upperV ?? hi);
+  const margin = (hi - lo) * 0.05;
+  const inView = (x: number | null): x is number => x !== null && x >= lo - margin && x <= hi + margin;
+  const edges = [
+    ...(inView(w.lowerV) ? [{ x: w.lowerV, side: 'lower' as const, label: w.lowerLabel }] : []),
+    ...(inView(w.upperV) ? [{ x: w.upperV, side: 'upper' as const, label: w.upperLabel }] : []),
+  ];
+  return x1 > x0 ? { x0, x1, edges } : { x0: lo, x1: lo, edges };
+}
+
+function potentialRange(input: TraceFigureInput): [number, number] {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of input.potentialV) {
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  return [lo, hi];
 }

@@ -1,17 +1,21 @@
-/** "Method": smoothing, baselines and peak-finding threshold, applied to every file. */
+/**
+ * "Peak finding": the analysis settings applied to every file (smoothing, baselines, the peak
+ * threshold) and the selected file's own peak windows. Not an experiment protocol: nothing here
+ * tells the instrument what to do.
+ */
 import type { AnalysisSettings } from '../../state/types';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import { NumberField } from './NumberField';
 import { SelectField } from './SelectField';
 import { WindowsEditor } from './WindowsEditor';
 
-export function MethodPanel() {
+export function PeakFindingPanel() {
   const s = useHalfwave((st) => st.settings);
   const update = (change: (x: AnalysisSettings) => AnalysisSettings) => void halfwaveActions().updateSettings(change);
   const smoothing = s.smoothing === 'off' ? null : s.smoothing;
   return (
     <section className="panel method" aria-labelledby="method-title">
-      <h2 id="method-title">Method</h2>
+      <h2 id="method-title">Peak finding</h2>
       <div className="field-grid">
         <label className="check">
           <input type="checkbox" checked={smoothing !== null} data-testid="smoothing-on"

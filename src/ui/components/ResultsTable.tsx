@@ -1,0 +1,100 @@
+/**
+ * The results table across files: one row per file, cycle and couple of the current series (or of
+ * every file), sortable by any column; a click (or Enter) on a row shows that file and cycle on
+ * the trace; Copy puts the rows on the clipboard as tab-separated text with units in the header.
+ */
+import { memo, useMemo, useState } from 'react';
+import { halfwaveActions, useHalfwave } from '../../state/react';
+import { resultsRows, resultsTsv, type ResultsColumn, type ResultsRow } from '../../state/resultsTable';
+import { chooseCurrentScale } from '../plots/currentScale';
+import { byNoise, DASH, fixed, scanRate } from '../format';
+import { copyText } from '../clipboard';
+import { SeriesHeadline } from './SeriesHeadline';
+import { useSeriesScale } from './useSeriesCell';
+
+interface Column { id: ResultsColumn; head: string; title?: string }
+
+export function ResultsTable() {
+  const scope = useHalfwave((s) => s.resultsScope);
+  const group = useHalfwave((s) => s.currentGroup());
+  const sort = useHalfwave((s) => s.resultsSort);
+  const selected = useHalfwave((s) => s.selectedFileId);
+  const cycle = useHalfwave((s) => s.selectedCycle);
+  // Keyed on the results, not on the files: files change with every progress tick of an import,
+  // and a file's name and series are read with its rows (cached per result, resultsTable.ts).
+  const fileOrder = useHalfwave((s) => s.fileOrder);
+  const results = useHalfwave((s) => s.results);
+  const scale = useSeriesScale(group);
+  const [copied, setCopied] = useState<string | null>(null);
+  const shownGroup = scope === 'series' ? group : null;
+  const rows = useMemo(() => resultsRows({ fileOrder, files: halfwaveActions().files, results }, shownGroup, sort), [fileOrder, results, shownGroup, sort]);
+  const act = halfwaveActions();
+  const cur = chooseCurrentScale(Math.max(0, ...rows.map((r) => Math.max(r.ipaA ?? 0, r.ipcA ?? 0))));
+  const columns: Column[] = [
+    { id: 'file', head: 'File' }, { id: 'scanRate', head: 'v / (V s⁻¹)' }, { id: 'cycle', head: 'Cycle' },
+    { id: 'epa', head: `Epa / V` }, { id: 'epc', head: 'Epc / V' }, { id: 'eHalf', head: 'E½ / V' }, { id: 'deltaEp', head: 'ΔEp / mV' },
+    { id: 'ipa', head: `ipa / ${cur.unit}` }, { id: 'ipc', head: `ipc / ${cur.unit}` }, { id: 'ratio', head: 'ratio', title: 'return / forward peak current' },
+    { id: 'halfWidth', head: '|Ep − Ep/2| / mV', title: 'of the forward peak' }, { id: 'reading', head: 'Reading' }, { id: 'warnings', head: 'Warnings' },
+  ];
+  // Read the sort from the store, not from this render: two quick clicks must toggle twice.
+  const sortBy = (c: ResultsColumn) => {
+    const now = halfwaveActions().resultsSort;
+    act.setView({ resultsSort: { column: c, descending: now?.column === c ? !now.descending : false } });
+  };
+  const copy = async () => {
+    const ok = await copyText(resultsTsv(rows, scale.name));
+    setCopied(ok ? `${rows.length} rows copied as tab-separated text` : 'The clipboard refused the text');
+  };
+  return (
+    <div className="results" data-testid="results-across-files">
+      <div className="results-bar">
+        <label>
+          Show{' '}
+          <select value={scope} data-testid="results-scope" onChange={(e) => act.setView({ resultsScope: e.target.value === 'all' ? 'all' : 'series' })}>
+            <option value="series">series “{group ?? DASH}”</option>
+            <option value="all">every file</option>
+          </select>
+        </label>
+        <button type="button" data-testid="results-copy" disabled={rows.length === 0} onClick={() => void copy()}>Copy as TSV</button>
+        <span className="hint" role="status">{copied ?? `${rows.length} row${rows.length === 1 ? '' : 's'} · potentials vs ${scale.name}`}</span>
+      </div>
+      {shownGroup ? <SeriesHeadline group={shownGroup} /> : null}
+      {rows.length === 0 ? <p className="empty">No couples found yet in these files.</p> : (
+        <table className="data" data-testid="results-table">
+          <caption className="visually-hidden">Couples of every file, potentials vs {scale.name}</caption>
+          <thead>
+            <tr>
+              {columns.map((c) => (
+                <th key={c.id} scope="col" title={c.title} aria-sort={sort?.column === c.id ? (sort.descending ? 'descending' : 'ascending') : 'none'}>
+                  <button type="button" className="sort" data-testid={`sort-${c.id}`} onClick={() => sortBy(c.id)}>{c.head}</button>
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <ResultLine key={`${r.fileId}-${r.cycle}-${r.couple}`} r={r} factor={cur.factor} current={r.fileId === selected && r.cycle === cycle} show={act.selectFile} />
+            ))}
+          </tbody>
+        </table>
+      )}
+    </div>
+  );
+}
+
+const ResultLine = memo(function ResultLine({ r, factor, current, show }: { r: ResultsRow; factor: number; current: boolean; show: (id: string, cycle: number) => void }) {
+  // Currents with the digits the file's noise allows; potentials to 0.1 mV.
+  const ip = (v: number | null) => byNoise(v, r.noiseA, factor, 3);
+  return (
+    <tr data-testid="results-row" data-file-name={r.fileName} className={current ? 'current' : undefined} onClick={() => show(r.fileId, r.cycle)}>
+      <th scope="row"><button type="button" className="row-open" aria-pressed={current} title="Show this trace" onClick={(e) => { e.stopPropagation(); show(r.fileId, r.cycle); }}>{r.fileName}</button></th>
+      <td data-testid="results-v">{scanRate(r.scanRateVPerS)}</td>
+      <td>{r.cycle}</td>
+      <td>{fixed(r.epaV, 4)}</td><td>{fixed(r.epcV, 4)}</td><td data-testid="results-ehalf">{fixed(r.eHalfV, 4)}</td>
+      <td data-testid="results-dep">{fixed(r.deltaEpV, 1, 1000)}</td>
+      <td>{ip(r.ipaA)}</td><td>{ip(r.ipcA)}</td>
+      <td>{fixed(r.ratio, 3)}</td><td>{fixed(r.forwardHalfWidthV, 1, 1000)}</td>
+      <td className="verdict" title={r.readingText}>{r.reading}</td><td>{r.warnings}</td>
+    </tr>
+  );
+});
