@@ -4,20 +4,25 @@
  */
 import { createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
 import { createPoolClient } from './poolClient';
+import { createWorkerLane, routeRequests } from './workerLane';
 
 /** Two workers where the machine has more than one core (the page thread stays free either way). */
 export function workerCount(hardwareConcurrency: number | undefined): number {
   return (hardwareConcurrency ?? 1) >= 2 ? 2 : 1;
 }
 
+function analysisWorker(name: string): WorkerLike {
+  return new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name }) as unknown as WorkerLike;
+}
+
+/** The pool serves every request but fits; fits run on workers of their own, ended on cancel (workerLane.ts). */
 export function spawnAnalysisClient(): AnalysisClient {
   if (typeof Worker === 'undefined') return lazyInThreadClient();
   try {
-    const clients = Array.from({ length: workerCount(globalThis.navigator?.hardwareConcurrency) }, (_, k) => {
-      const worker = new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name: `halfwave-analysis-${k + 1}` });
-      return createWorkerClient(worker as unknown as WorkerLike);
-    });
-    return clients.length === 1 ? (clients[0] as AnalysisClient) : createPoolClient(clients);
+    const clients = Array.from({ length: workerCount(globalThis.navigator?.hardwareConcurrency) }, (_, k) => createWorkerClient(analysisWorker(`halfwave-analysis-${k + 1}`)));
+    const general = clients.length === 1 ? (clients[0] as AnalysisClient) : createPoolClient(clients);
+    let fits = 0;
+    return routeRequests(general, { fit: createWorkerLane(() => analysisWorker(`halfwave-fit-${++fits}`)) });
   } catch {
     return lazyInThreadClient();
   }
