@@ -70,7 +70,7 @@ export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocu
     showBaselines: view.showBaselines !== false,
     showCompanions: view.showCompanions === true,
     selectedCycle: Number.isInteger(view.selectedCycle) && (view.selectedCycle as number) >= 0 ? (view.selectedCycle as number) : 1,
-    mainView: view.mainView === 'series' ? 'series' : 'trace',
+    mainView: view.mainView === 'series' || view.mainView === 'fit' ? view.mainView : 'trace',
     selectedGroup: typeof view.selectedGroup === 'string' ? view.selectedGroup : null,
     remembered: waiting,
   });
