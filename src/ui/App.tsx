@@ -1,6 +1,7 @@
 /** Arranges the regions: intake (left), trace and readout (centre), method and cell (right). */
 import { useHalfwave } from '../state/react';
 import { CellPanel } from './components/CellPanel';
+import { FitPanel } from './components/FitPanel';
 import { IntakePanel } from './components/IntakePanel';
 import { MethodPanel } from './components/MethodPanel';
 import { NoticeBar } from './components/NoticeBar';
@@ -29,8 +30,10 @@ export function App() {
               <PanelBoundary name="trace"><TracePanel /></PanelBoundary>
               <PanelBoundary name="readout"><ReadoutPanel /></PanelBoundary>
             </>
-          ) : (
+          ) : mainView === 'series' ? (
             <PanelBoundary name="series"><SeriesView /></PanelBoundary>
+          ) : (
+            <PanelBoundary name="fit"><FitPanel /></PanelBoundary>
           )}
         </div>
         <aside className="column right" aria-label="Analysis settings">
