@@ -10,6 +10,7 @@ import { toUserError, type FitEntry, type FitSlice, type SliceCreator } from './
 
 export const createFitSlice: SliceCreator<FitSlice> = (set, get, deps) => {
   const running = new Map<string, AbortController>();
+  const currentMemo = new Map<string, { sources: readonly unknown[]; current: boolean }>();
   const patchFit = (group: string, patch: Partial<FitEntry>) => set((s) => {
     const entry = s.fits[group];
     return entry ? { fits: { ...s.fits, [group]: { ...entry, ...patch } } } : {};
@@ -71,8 +72,16 @@ export const createFitSlice: SliceCreator<FitSlice> = (set, get, deps) => {
     },
 
     fitIsCurrent(group) {
-      const entry = get().fits[group];
-      return !!entry && entry.key === fitInputKey(get(), group, entry.setup);
+      const s = get();
+      const entry = s.fits[group];
+      if (!entry) return false;
+      // Screens ask on every store change (progress ticks); the key is rebuilt only when what it reads changed.
+      const sources = [s.files, s.fileOrder, s.fileSettings, s.settings, s.seriesCells, s.results, entry] as const;
+      const memo = currentMemo.get(group);
+      if (memo && memo.sources.every((x, k) => x === sources[k])) return memo.current;
+      const current = entry.key === fitInputKey(s, group, entry.setup);
+      currentMemo.set(group, { sources, current });
+      return current;
     },
 
     carryableFitValues(group) {
