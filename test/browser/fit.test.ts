@@ -4,8 +4,8 @@
  * α = 0.48, D = 5.5e-6 cm²/s, R_u = 120 Ω, six scan rates). The fit must recover the truth within
  * the tolerances of the fit issue (E°′ 2 mV, k° 25 %, D 5 %, α 0.05; common practice for a
  * simulated-data check, no source) with R_u held at the cell's 0 Ω, as a user who gave none would
- * run it. Then: progress while it runs, the page answering while it runs, cancel, and "use these
- * values" with its undo.
+ * run it. Then: progress while it runs, "use these values" with its undo, the results sheet with
+ * the fit, the page answering while a fit runs, cancel, and a window dragged on the plot.
  */
 import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -99,6 +99,35 @@ describe('fit view on the demo', () => {
     expect(await page.getByTestId('fit-results').count()).toBe(0);
     expect(await page.getByTestId('fit-progress').count()).toBe(0);
     expect(await page.getByTestId('fit-run').isEnabled()).toBe(true);
+  });
+
+  it('a drag across the plot in window mode sets the window; "Whole cycle" clears it', async () => {
+    const page = app.page;
+    const renders = async () => Number(await page.getByTestId('fit-plot').getAttribute('data-renders'));
+    const before = await renders();
+    await page.getByTestId('fit-drag-window').click();
+    await page.waitForFunction((n) => Number(document.querySelector('[data-testid=fit-plot]')?.getAttribute('data-renders')) > n, before, { timeout: 30_000 });
+    const box = await page.locator('[data-testid=fit-plot] .nsewdrag').first().boundingBox();
+    if (!box) throw new Error('plot drag layer not found');
+    const y = box.y + box.height / 2;
+    await page.mouse.move(box.x + box.width * 0.3, y);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width * 0.5, y, { steps: 8 });
+    await page.mouse.move(box.x + box.width * 0.7, y, { steps: 8 });
+    await page.mouse.up();
+    await page.waitForFunction(() => (document.querySelector('[data-testid=fit-window-from]') as HTMLInputElement | null)?.value !== '', null, { timeout: 10_000 });
+    const from = Number(await page.getByTestId('fit-window-from').inputValue());
+    const to = Number(await page.getByTestId('fit-window-to').inputValue());
+    // The quasi series sweeps 0 → 0.65 V (demo-data/README.md); the drag covered its middle.
+    expect(from).toBeGreaterThan(0);
+    expect(to).toBeLessThan(0.65);
+    expect(to - from).toBeGreaterThan(0.1);
+    await page.waitForFunction(() => ((document.querySelector('[data-testid=fit-plot]') as unknown as { layout?: { shapes?: unknown[] } })?.layout?.shapes ?? []).length === 1, null, { timeout: 10_000 });
+    await page.getByTestId('fit-window-clear').click();
+    expect(await page.getByTestId('fit-window-from').inputValue()).toBe('');
+  });
+
+  it('stayed free of console errors, page errors and outside requests', () => {
     expect(app.consoleErrors).toEqual([]);
     expect(app.pageErrors).toEqual([]);
     expect(app.outsideRequests).toEqual([]);
