@@ -8,7 +8,7 @@
  * working draft), directives and hash sources.
  *
  * Two inline stylesheets are allowed by their SHA-256 hash instead of 'unsafe-inline': Plotly
- * (plotly.js-dist-min 4.1.2) creates <style id="plotly.js-style-global"> empty and fills it
+ * (plotly.js-basic-dist-min 4.1.1) creates <style id="plotly.js-style-global"> empty and fills it
  * through CSSOM insertRule (which CSP does not govern), and inserts the map traces' stylesheet at
  * load. A Plotly upgrade that changes the second one shows up as a violation in the Chromium
  * CSP spec (test/browser/csp.test.ts), whose message gives the new hash.

@@ -7,7 +7,7 @@ import { ZERO_CELSIUS_K } from '../core/constants';
 import type { CoupleValues, FitMechanism, FitParameter, FitVoltammogramsOptions, SharedValues } from '../core/fit';
 import { optionNumberOrUndefined, optionString, type ParsedArgs } from './args';
 import { UsageError } from './errors';
-import { PARAMETER_NAMES } from './fitContract';
+import { PARAMETER_NAMES } from '../io';
 
 export type CompareChoice = 'auto' | 'none' | 'mechanism' | 'ru';
 

@@ -1,6 +1,6 @@
 /** The readable `fit` report (no --json): one block per couple, the shared values, the files, correlations, model choice and notes. */
-import type { FitResult, ModelComparison, ParameterEstimate } from '../core/fit';
-import { shortLabel, shortName } from './fitContract';
+import type { FitResult, ParameterEstimate } from '../core/fit';
+import { shortLabel, shortName, type ComparisonSummary } from '../io';
 
 const UNITS: Record<string, string> = { E0: 'V', k0: 'cm/s', alpha: '', D: 'cm²/s', Dratio: '', kf: '1/s', gamma: 'mol/cm²', ks: '1/s', Ru: 'Ω', Cdl: 'F/cm²' };
 /** `digits` significant digits; exponent notation for very small or large magnitudes. */
@@ -52,7 +52,7 @@ function strongCorrelations(r: FitResult): string[] {
   return out;
 }
 
-export function fitText(r: FitResult, files: string[], comparison: ModelComparison | null): string {
+export function fitText(r: FitResult, files: string[], comparison: ComparisonSummary | null): string {
   const count = r.records.length;
   const lines = [
     `halfwave fit: mechanism ${r.mechanism}, ${r.values.couples.length} couple(s), ${count} voltammogram${count > 1 ? 's fitted jointly' : ''}`,

@@ -8,6 +8,8 @@
  * the column heads, numbers rounded to what their uncertainty supports), then the same results in
  * SI units at full precision: raw peaks, raw couples (one row per file × cycle × couple), raw k0
  * per file, raw series (one row per series × couple), raw double-layer capacitance when measured.
+ * Whole-curve fits of series, when there are any, add the readable 'fit' and 'fit models' tables
+ * after the couples and the raw fit tables at the end (fitSheet.ts).
  * Signed currents follow the run's sign convention; peak heights and couple currents are positive
  * magnitudes. Left-out points and window edges get their own table when there are any. Every α
  * is named: alpha_c_cathodic is αc (of the reduction O + ne⁻ → R), alpha_n_forward_wave is α·nₐ
@@ -16,6 +18,7 @@
 import { currentInConvention } from '../core/conventions';
 import type { AnalyzeRunResult } from '../core/analysis/runTypes';
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
+import { fitModelsTable, fitTable, rawFitTables, type SeriesFit } from './fitSheet';
 import { couplesTable, filesTable, seriesTable } from './notebookTables';
 import { runContract } from './runContract';
 
@@ -26,11 +29,11 @@ export interface ResultsSheetMeta {
   command?: string;
 }
 
-type Cell = string | number | null | undefined;
+type Cell = string | number | boolean | null | undefined;
 
 function cell(v: Cell): string {
   if (v === null || v === undefined || (typeof v === 'number' && !Number.isFinite(v))) return '';
-  const s = typeof v === 'number' ? String(Number(v.toPrecision(10))) : v;
+  const s = typeof v === 'number' ? String(Number(v.toPrecision(10))) : String(v);
   return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 
@@ -135,9 +138,10 @@ function seriesRow(key: string, c: SeriesCouple): Cell[] {
     c.cathodicFit?.slope, c.cathodicFit?.r2, c.diagnostics.join('; ')];
 }
 
-/** The results sheet as CSV text (CRLF-free, UTF-8 characters as they are). */
-export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}): string {
-  const readable = [filesTable(result), seriesTable(result), couplesTable(result)].map((t) => [`# table: ${t.name}`, row(t.header), ...t.rows.map(row)]);
+/** The results sheet as CSV text (CRLF-free, UTF-8 characters as they are); `fits`: whole-curve fits of its series. */
+export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}, fits: readonly SeriesFit[] = []): string {
+  const tables = [filesTable(result), seriesTable(result), couplesTable(result), ...(fits.length ? [fitTable(fits), fitModelsTable(fits)] : [])];
+  const readable = tables.map((t) => [`# table: ${t.name}`, row(t.header), ...t.rows.map(row)]);
   const parts = [
     [...headerLines(result, meta), '# the tables below are rounded to what each number supports; the "raw" tables after them give every number in SI units at full precision'],
     ...readable,
@@ -156,6 +160,7 @@ export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta
         return row([s.key, c?.capacitanceFPerCm2, c?.capacitanceIntervalFPerCm2?.[0], c?.capacitanceIntervalFPerCm2?.[1], c?.model, c?.faradaicTailAPerSqrtVPerS, c?.fit?.intercept, c?.fit?.r2, c?.warning]);
       })]);
   }
+  if (fits.length) parts.push(...rawFitTables(fits).map((t) => [`# table: ${t.name}`, ...t.rows.map(row)]));
   return `${parts.map((p) => p.join('\n')).join('\n\n')}\n`;
 }
 
@@ -164,11 +169,11 @@ export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta
  * provenance (software, methods, method and report options, each series' cell, each file's
  * origin) and meta.
  */
-export function resultsSheetJson(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}): string {
+export function resultsSheetJson(result: AnalyzeRunResult, meta: ResultsSheetMeta = {}, fits: readonly SeriesFit[] = []): string {
   const provenance = {
     ...result.provenance,
     cells: Object.fromEntries(result.series.map((s) => [s.key, s.cell])),
     files: result.files.map((f) => ({ file: f.fileName, series: f.series, role: f.role, reference: f.reference, points: f.pointCount, ...f.provenance })),
   };
-  return `${JSON.stringify({ sheet: 'halfwave-results', version: 2, ...meta, ...runContract(result), provenance }, null, 2)}\n`;
+  return `${JSON.stringify({ sheet: 'halfwave-results', version: 2, ...meta, ...runContract(result, [], fits), provenance }, null, 2)}\n`;
 }

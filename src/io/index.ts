@@ -37,3 +37,5 @@ export { cellFromHeaders, referenceIdOf } from './cellFromHeaders';
 export type { HeaderCell } from './cellFromHeaders';
 export { runContract } from './runContract';
 export type { RunContract } from './runContract';
+export { fitContract, PARAMETER_NAMES, shortLabel, shortName, summariseComparison } from './fitContract';
+export type { ComparisonSummary } from './fitContract';

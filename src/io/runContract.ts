@@ -3,7 +3,8 @@
  * sheet carries, with the same keys wherever it appears. Field names and meanings are fixed
  * (outside checks depend on them): files[].{file, scanRate, scanRateSource, cycles[].{index,
  * peaks[], couples[]}}, series[].{couple, slope, intercept, r2, D, logLogSlope, k0, gamma},
- * warnings[]. Everything else is an extra field; `series[].series` names the scan-rate series a
+ * warnings[], fits[] (whole-curve fits of series, fitSheet.ts; empty when none was run). Everything
+ * else is an extra field; `series[].series` names the scan-rate series a
  * couple belongs to when a run holds several. Units: V, A, V/s, cm²/s, cm/s, mol/cm², 1/s, Ω;
  * ipa/ipc and ip are positive baseline-corrected magnitudes; `ratio` is return over forward peak
  * (Nicholson's convention). `alpha` is always αc, the cathodic transfer coefficient (alphaMeaning
@@ -15,6 +16,7 @@
 import type { AnalyzeRunResult, RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
 import { ALPHA_MEANING, type SeriesCouple } from '../core/analysis/seriesTypes';
 import { currentInConvention } from '../core/conventions';
+import { fitSheetEntry, type SeriesFit } from './fitSheet';
 
 /** Finite numbers pass, anything else becomes null (JSON has no NaN). */
 const num = (x: number | null | undefined): number | null => (x === null || x === undefined || !Number.isFinite(x) ? null : x);
@@ -120,12 +122,16 @@ function seriesEntry(s: RunSeriesResult, c: SeriesCouple) {
   };
 }
 
-/** The contract object; `givenAs[i]` is how file i was named (on the command line), else its file name. */
-export function runContract(r: AnalyzeRunResult, givenAs: string[] = []) {
+/**
+ * The contract object; `givenAs[i]` is how file i was named (on the command line), else its file
+ * name; `fits` the whole-curve fits of series made beside the run (the workbench's fit panel).
+ */
+export function runContract(r: AnalyzeRunResult, givenAs: string[] = [], fits: readonly SeriesFit[] = []) {
   return {
     files: r.files.map((f, i) => fileEntry(f, givenAs[i] ?? f.fileName, r)),
     series: r.series.flatMap((s) => s.analysis.couples.map((c) => seriesEntry(s, c))),
     warnings: r.warnings.map((w) => (w.fileName ? `${w.fileName}: ${w.message}` : w.series && r.series.length > 1 ? `${w.series}: ${w.message}` : w.message)),
+    fits: fits.map(fitSheetEntry),
     seriesGroups: r.series.map((s) => ({
       series: s.key, files: s.fileNames,
       capacitance: capacitanceOf(s),

@@ -5,6 +5,7 @@
  */
 import type { RunFileResult } from '../core/analysis/runTypes';
 import { CancelledError } from '../worker/errors';
+import { seriesFitOf } from './fitRequest';
 import { runInputOf, seriesOptionsOf } from './runInput';
 import { toUserError, type HalfwaveState, type SeriesSlice, type SliceCreator } from './types';
 
@@ -15,6 +16,12 @@ export function groupSettled(s: Pick<HalfwaveState, 'fileOrder' | 'files' | 'res
     if (f?.group !== group) return true;
     return f.status !== 'queued' && f.status !== 'importing' && s.results[id]?.status !== 'running';
   });
+}
+
+/** The finished fits of the exported series (null: all) whose files and cell have not changed since. */
+function currentFits(s: HalfwaveState, group: string | null) {
+  return Object.entries(s.fits).flatMap(([g, f]) => (f.result && f.status === 'ready' && (group === null || g === group) && s.fitIsCurrent(g)
+    ? [seriesFitOf(g, { names: f.fileNames, scale: f.scale, setup: f.setup, cell: f.cell, result: f.result, comparison: f.comparison })] : []));
 }
 
 export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => {
@@ -63,7 +70,7 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
     currentGroup() {
       const s = get();
       const groups = s.groups();
-      if (s.mainView === 'series') return s.selectedGroup && groups.includes(s.selectedGroup) ? s.selectedGroup : (groups[0] ?? null);
+      if (s.mainView !== 'trace') return s.selectedGroup && groups.includes(s.selectedGroup) ? s.selectedGroup : (groups[0] ?? null);
       const file = s.selectedFileId ? s.files[s.selectedFileId] : undefined;
       return file?.measurement ? file.group : (groups[0] ?? null);
     },
@@ -72,7 +79,7 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
       const s = get();
       const ids = group === null ? s.fileOrder : s.fileOrder.filter((id) => s.files[id]?.group === group);
       const meta = { createdAt: new Date().toISOString(), command: group === null ? 'Halfwave workbench export of every series' : `Halfwave workbench export of series "${group}"` };
-      const out = await deps.client.request('export', { run: runInputOf(s, ids), format, meta });
+      const out = await deps.client.request('export', { run: runInputOf(s, ids), format, meta, fits: currentFits(s, group) });
       return out.text;
     },
 

@@ -84,7 +84,7 @@ export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocu
     showBaselines: view.showBaselines !== false,
     showCompanions: view.showCompanions === true,
     selectedCycle: Number.isInteger(view.selectedCycle) && (view.selectedCycle as number) >= 0 ? (view.selectedCycle as number) : 1,
-    mainView: view.mainView === 'series' || view.mainView === 'report' ? view.mainView : 'trace',
+    mainView: view.mainView === 'series' || view.mainView === 'report' || view.mainView === 'fit' ? view.mainView : 'trace',
     readoutTab: READOUT_TABS.includes(view.readoutTab as ReadoutTab) ? (view.readoutTab as ReadoutTab) : 'couples',
     resultsScope: view.resultsScope === 'all' ? 'all' : 'series',
     seriesOverlay: overlayOf(view.seriesOverlay),

@@ -5,6 +5,7 @@
 import { createStore } from 'zustand/vanilla';
 import { createAnalysisSlice } from './analysisSlice';
 import { createFilesSlice } from './filesSlice';
+import { createFitSlice } from './fitSlice';
 import { createHistorySlice } from './historySlice';
 import type { HalfwaveState, HalfwaveStore, StoreDeps } from './types';
 import { createSeriesSlice } from './seriesSlice';
@@ -21,5 +22,6 @@ export function createHalfwaveStore(deps: StoreDeps): HalfwaveStore {
     ...createSeriesSlice(set, get, deps),
     ...createTheorySlice(set, get, deps),
     ...createWorkingWindowSlice(set, get, deps),
+    ...createFitSlice(set, get, deps),
   }));
 }

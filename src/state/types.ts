@@ -8,6 +8,10 @@ import type { ImportWarning } from '../io/errors';
 import type { SessionFileRecord } from '../io/session';
 import type { ImportOverrides, Measurement } from '../io/types';
 import type { AnalysisClient } from '../worker/client';
+import type { FitCell, FitResult } from '../core/fit';
+import type { ComparisonSummary } from '../io/fitContract';
+import type { FitProgressDetail } from '../worker/fitRun';
+import type { CarriedValue, FitSetup } from './fitRequest';
 import type { SeriesCell } from './seriesCell';
 import type { AnalysisSettings, FileAnalysisSettings } from './settings';
 import type { ResultsSort } from './resultsTable';
@@ -123,7 +127,7 @@ export interface ViewSlice {
   /** Drag on the plot zooms, or marks a peak window of `windowDirection`. */
   dragMode: 'zoom' | 'window';
   windowDirection: 'anodic' | 'cathodic';
-  mainView: 'trace' | 'series' | 'report';
+  mainView: 'trace' | 'series' | 'report' | 'fit';
   safetyOpen: boolean;
   notice: string | null;
   /** SHA-256 of the files whose bytes the browser's storage could not keep for the next visit. */
@@ -215,7 +219,51 @@ export interface TheorySlice {
   simulateTheory(id: string): Promise<void>;
 }
 
-export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice & SeriesSlice & TheorySlice & WorkingWindowSlice;
+export interface FitEntry {
+  status: 'running' | 'ready' | 'error' | 'cancelled';
+  /** What was fitted (the setup at the time). */
+  setup: FitSetup;
+  fileIds: string[];
+  fileNames: string[];
+  /** The cell of the fit in core units (cm², mol/cm³, n, K). */
+  cell: FitCell;
+  /** The scale E°′ and the window are shown on, and its offset from the files' recording scale (V). */
+  scale: { name: string; offsetV: number };
+  /** What the fit depended on (fitRequest.ts: fitInputKey); the fit is current while it is unchanged. */
+  key: string;
+  /** The latest progress report while running. */
+  progress: FitProgressDetail | null;
+  progressText: string;
+  /** The chosen model's fit, potentials on `scale`. */
+  result: FitResult | null;
+  comparison: ComparisonSummary | null;
+  error: UserError | null;
+  /** After "use these values": what went into the cell, and the undo depth right after (undo only while nothing came since). */
+  carried: { values: CarriedValue[]; historyDepth: number } | null;
+}
+
+export interface FitSlice {
+  /** The setup chosen for each series (fitSetupOf gives the default of a series without one). */
+  fitSetups: Record<string, FitSetup>;
+  /** The latest fit of each series. */
+  fits: Record<string, FitEntry>;
+  fitSetupOf(group: string): FitSetup;
+  /** Changes the setup; a new mechanism brings its default free parameters unless `free` is given too. */
+  setFitSetup(group: string, patch: Partial<FitSetup>): void;
+  /** Fits the series' files with its setup in the worker (a running fit of the series is cancelled). */
+  runFit(group: string): Promise<void>;
+  cancelFit(group: string): void;
+  /** True while the series' files, cell and scale are those the fit used. */
+  fitIsCurrent(group: string): boolean;
+  /** The fitted values the series' cell has a field for (α of a single couple, R_u), where the data determined them. */
+  carryableFitValues(group: string): CarriedValue[];
+  /** Carries them into the series' cell as one undoable step; returns what was carried (nothing for an outdated fit). */
+  useFitValues(group: string): Promise<CarriedValue[]>;
+  /** Takes them back (the store's undo) when that step is still the last one; false otherwise. */
+  undoFitValues(group: string): Promise<boolean>;
+}
+
+export type HalfwaveState = FilesSlice & AnalysisSlice & ViewSlice & HistorySlice & SeriesSlice & TheorySlice & WorkingWindowSlice & FitSlice;
 export type HalfwaveStore = StoreApi<HalfwaveState>;
 
 export interface StoreDeps {
@@ -244,6 +292,8 @@ export type { CellField, CellOrigin, ResolvedCell, SeriesCell } from './seriesCe
 export type { SeriesAnalysis, SeriesCouple } from '../core/analysis/seriesTypes';
 export type { SeriesPoint } from '../core/series/seriesPoint';
 export type { VoltammogramAnalysis } from '../core/analysis/types';
+export type { CarriedValue, FitSetup } from './fitRequest';
+export type { FitProgressDetail } from '../worker/fitRun';
 export type { RunFileResult, RunSeriesResult } from '../core/analysis/runTypes';
 export type { WorkbookCell, WorkbookSheet } from '../io/resultsWorkbook';
 export type { BaselineMethod, BaselineSpec } from '../core/baseline/baselineTypes';

@@ -1,6 +1,7 @@
 /** Arranges the regions: intake (left), trace and readout, series or report (centre), settings (right). */
 import { useHalfwave } from '../state/react';
 import { CellPanel } from './components/CellPanel';
+import { FitPanel } from './components/FitPanel';
 import { IntakePanel } from './components/IntakePanel';
 import { NoticeBar } from './components/NoticeBar';
 import { PanelBoundary } from './components/PanelBoundary';
@@ -36,6 +37,8 @@ export function App() {
               </>
             ) : mainView === 'series' ? (
               <PanelBoundary name="series"><SeriesView /></PanelBoundary>
+            ) : mainView === 'fit' ? (
+              <PanelBoundary name="fit"><FitPanel /></PanelBoundary>
             ) : (
               <PanelBoundary name="report"><ReportView /></PanelBoundary>
             )}

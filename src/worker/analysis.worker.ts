@@ -21,9 +21,9 @@ async function serve(req: WorkerRequest): Promise<void> {
   try {
     const output = await runHandler(req.type, req.input as never, {
       signal: ctrl.signal,
-      progress(fraction, stage) {
+      progress(fraction, stage, detail) {
         if (ctrl.signal.aborted) throw new CancelledError();
-        post({ type: 'progress', requestId, fraction, stage });
+        post({ type: 'progress', requestId, fraction, stage, ...(detail ? { detail } : {}) });
       },
     });
     if (ctrl.signal.aborted) throw new CancelledError();

@@ -9,11 +9,11 @@
  * This file does not import the handlers, so the page bundle stays free of the analysis code.
  */
 import { CancelledError, reviveError, WorkerLostError } from './errors';
-import { inputTransferables, type PageToWorker, type RequestInput, type RequestOutput, type RequestType, type WorkerRequest, type WorkerToPage } from './protocol';
+import { inputTransferables, type PageToWorker, type ProgressDetail, type RequestInput, type RequestOutput, type RequestType, type WorkerRequest, type WorkerToPage } from './protocol';
 
 export interface RequestOptions {
-  /** Called with fraction done (0…1) and a short stage text. */
-  onProgress?: (fraction: number, stage: string) => void;
+  /** Called with fraction done (0…1), a short stage text and, for some requests, the numbers behind it. */
+  onProgress?: (fraction: number, stage: string, detail?: ProgressDetail) => void;
   /** Abort to cancel; the promise then rejects with CancelledError. */
   signal?: AbortSignal;
 }
@@ -67,7 +67,7 @@ export function createWorkerClient(worker: WorkerLike): AnalysisClient {
     const entry = pending.get(msg.requestId);
     if (!entry) return;
     if (msg.type === 'progress') {
-      entry.onProgress?.(msg.fraction, msg.stage);
+      entry.onProgress?.(msg.fraction, msg.stage, msg.detail);
       return;
     }
     pending.delete(msg.requestId);

@@ -9,11 +9,12 @@ import { findSweepSegments } from '../core/sweeps/findSweepSegments';
 import { importVoltammogramAsync } from '../io';
 import { CancelledError } from './errors';
 import { exportRun } from './exportRun';
-import type { RequestInput, RequestOutput, RequestType } from './protocol';
+import { runFitRequest } from './fitRun';
+import type { ProgressDetail, RequestInput, RequestOutput, RequestType } from './protocol';
 
 export interface HandlerContext {
-  /** Report progress, 0…1, with a short stage text. Throws CancelledError once cancelled. */
-  progress(fraction: number, stage: string): void;
+  /** Report progress, 0…1, with a short stage text (and its numbers). Throws CancelledError once cancelled. */
+  progress(fraction: number, stage: string, detail?: ProgressDetail): void;
   /** Aborted when the caller cancels; long handlers stop at their next turn. */
   signal: AbortSignal;
 }
@@ -37,6 +38,8 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
   runFiles: (input) => analyzeRunFiles(input.run, input.only),
   runSeries: (input) => analyzeRunSeriesStep(input),
   export: (input) => ({ text: exportRun(input) }),
+  // The core checks the signal before every simulation (AnalysisError CANCELLED, which runHandler turns into CancelledError).
+  fit: (input, ctx) => runFitRequest(input, { signal: ctx.signal, onProgress: (fraction, stage, detail) => ctx.progress(fraction, stage, detail) }),
   simulate: (input) => {
     const sim = simulateCv(input.params);
     return { potentialV: sim.potentialV, currentA: sim.currentA };

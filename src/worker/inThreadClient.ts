@@ -21,9 +21,9 @@ export function createInThreadClient(): AnalysisClient {
         check();
         const output = await runHandler(type, input, {
           signal,
-          progress(fraction, stage) {
+          progress(fraction, stage, detail) {
             check();
-            options.onProgress?.(fraction, stage);
+            options.onProgress?.(fraction, stage, detail);
           },
         });
         check();

@@ -12,6 +12,7 @@ import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSw
 import type { ImportOverrides, ImportResult } from '../io/types';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
 import type { ExportRunInput } from './exportRun';
+import type { FitOutcome, FitProgressDetail, FitRequest } from './fitRun';
 
 export interface RequestMap {
   /** Split a potential trace into sweeps and cycles (core/sweeps/findSweepSegments). */
@@ -44,6 +45,15 @@ export interface RequestMap {
     input: { params: Partial<CvSimulationInput> };
     output: { potentialV: Float64Array; currentA: Float64Array };
   };
+  /**
+   * Whole-curve fit of a series (core/fit: fitWithComparison), with progress per iteration. The
+   * fit cannot look at messages while it computes, so a cancel ends the worker that runs it
+   * (fitLane.ts); in-thread, the fit stops at its next simulation.
+   */
+  fit: {
+    input: FitRequest;
+    output: FitOutcome;
+  };
   /** Results sheet (CSV or JSON) of a run, through core analyzeRun and io/exportResults. */
   export: {
     input: ExportRunInput;
@@ -74,7 +84,12 @@ export interface ProgressMessage {
   fraction: number;
   /** Short human-readable stage, e.g. "parsing rows". */
   stage: string;
+  /** Numbers behind the stage text, for requests that report more than a fraction (a fit's iteration and cost). */
+  detail?: ProgressDetail;
 }
+
+/** What a progress report may carry beside its fraction, by the kind of work. */
+export type ProgressDetail = FitProgressDetail;
 
 export type ResultMessage = {
   [K in RequestType]: { type: 'result'; requestId: number; request: K; output: RequestOutput<K> };

@@ -4,21 +4,25 @@
  */
 import { createWorkerClient, type AnalysisClient, type WorkerLike } from './client';
 import { createPoolClient } from './poolClient';
+import { createWorkerLane, routeRequests } from './workerLane';
 
 /** Two workers where the machine has more than one core (the page thread stays free either way). */
 export function workerCount(hardwareConcurrency: number | undefined): number {
   return (hardwareConcurrency ?? 1) >= 2 ? 2 : 1;
 }
 
+function analysisWorker(name: string): WorkerLike {
+  return new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name }) as unknown as WorkerLike;
+}
+
+/** The pool serves every request but fits; fits run on workers of their own, ended on cancel (workerLane.ts). */
 export function spawnAnalysisClient(): AnalysisClient {
   if (typeof Worker === 'undefined') return lazyInThreadClient();
   try {
     // Factories, so the pool can start a worker again when one stops on its own.
-    const factories = Array.from({ length: workerCount(globalThis.navigator?.hardwareConcurrency) }, (_, k) => () => {
-      const worker = new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name: `halfwave-analysis-${k + 1}` });
-      return createWorkerClient(worker as unknown as WorkerLike);
-    });
-    return createPoolClient(factories);
+    const factories = Array.from({ length: workerCount(globalThis.navigator?.hardwareConcurrency) }, (_, k) => () => createWorkerClient(analysisWorker(`halfwave-analysis-${k + 1}`)));
+    let fits = 0;
+    return routeRequests(createPoolClient(factories), { fit: createWorkerLane(() => analysisWorker(`halfwave-fit-${++fits}`)) });
   } catch {
     return lazyInThreadClient();
   }

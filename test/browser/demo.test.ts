@@ -77,7 +77,7 @@ describe('demo data at start', () => {
     expect(text).toMatch(/hydrogen/i);
     expect(text).toMatch(/safety officer/);
     await app.page.keyboard.press('Escape');
-    expect(await app.page.getByTestId('safety-drawer').count()).toBe(0);
+    await app.page.getByTestId('safety-drawer').waitFor({ state: 'detached', timeout: 10_000 });
   });
 
   it('stayed free of console errors, page errors and outside requests', () => {

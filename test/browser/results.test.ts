@@ -45,7 +45,7 @@ describe('results table across files', () => {
     const page = app.page;
     await page.getByTestId('sort-scanRate').click();
     await page.getByTestId('sort-scanRate').click();
-    expect(await page.getByTestId('results-v').first().textContent()).toBe('0.5');
+    await page.waitForFunction(() => document.querySelector('[data-testid=results-v]')?.textContent === '0.5', null, { timeout: 10_000 });
     expect(await page.locator('th[aria-sort=descending]').count()).toBe(1);
     await page.getByTestId('results-row').first().click();
     await page.waitForFunction(() => document.querySelector('[data-testid=file-row][aria-selected=true]')?.getAttribute('data-file-name') === 'cv_500mVs.csv', null, { timeout: 10_000 });

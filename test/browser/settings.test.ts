@@ -7,7 +7,7 @@
  */
 import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { coupleCells, demoFileCount, readPlot, waitForAnalysis, waitForFiles, waitForRedraw } from './appHelpers';
+import { coupleCells, demoFileCount, readPlot, waitForAnalysis, waitForFiles, waitForRedraw, dragAcrossPlot } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 async function commitNumber(app: OpenedApp, testId: string, value: string): Promise<void> {
@@ -99,14 +99,7 @@ describe('changing settings, exporting, saving', () => {
     const before = await readPlot(page);
     await page.getByTestId('drag-mode').selectOption('anodic');
     await waitForRedraw(page, before.renders);
-    const box = await page.locator('[data-testid=trace-plot] .nsewdrag').first().boundingBox();
-    if (!box) throw new Error('plot drag layer not found');
-    const y = box.y + box.height / 2;
-    await page.mouse.move(box.x + box.width * 0.3, y);
-    await page.mouse.down();
-    await page.mouse.move(box.x + box.width * 0.5, y, { steps: 8 });
-    await page.mouse.move(box.x + box.width * 0.7, y, { steps: 8 });
-    await page.mouse.up();
+    await dragAcrossPlot(page, 'trace-plot');
     await page.getByTestId('peak-window').first().waitFor({ timeout: 10_000 });
     expect(await page.getByTestId('peak-window').count()).toBe(1);
     await waitForAnalysis(page);

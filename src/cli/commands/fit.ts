@@ -4,14 +4,12 @@
  * does; prints the JSON contract (--json) or a readable report.
  */
 import { ZERO_CELSIUS_K } from '../../core/constants';
-import { AnalysisError } from '../../core/errors';
-import { compareFitModels, fitVoltammograms, mechanismCandidates, ohmicCandidates, type FitCell, type FitInput, type FitResult, type FitVoltammogramsOptions, type ModelComparison } from '../../core/fit';
-import { cellFromHeaders, type Measurement } from '../../io';
+import { fitWithComparison, type FitCell, type FitInput, type FitVoltammogramsOptions, type FitWithComparisonResult } from '../../core/fit';
+import { cellFromHeaders, fitContract, summariseComparison, type Measurement } from '../../io';
 import { parseArgs, type OptionSpec } from '../args';
 import type { CliCommand, CliIo } from '../command';
 import { UsageError } from '../errors';
 import { parseFitArgs, type FitArgs } from '../fitArgs';
-import { fitContract } from '../fitContract';
 import { fitText } from '../fitText';
 import { readInputs } from '../readInputs';
 import { IMPORT_OPTION_HELP, IMPORT_OPTION_SPEC, parseOverrides } from './analyze';
@@ -85,8 +83,9 @@ export const fitCommand: CliCommand = {
     const measurements = read.measurements;
     const names = read.files.map((f) => f.path);
     const input = fitInput(measurements, args, names);
-    const { result, comparison } = withFileNames(names, () => runFit(input, args));
-    io.stdout(args.json ? `${JSON.stringify(fitContract(result, names, comparison), null, 2)}\n` : fitText(result, names, comparison));
+    const { result, comparison } = runFit(input, args, names);
+    const summary = comparison ? summariseComparison(comparison) : null;
+    io.stdout(args.json ? `${JSON.stringify(fitContract(result, names, summary), null, 2)}\n` : fitText(result, names, summary));
     return 0;
   },
 };
@@ -108,29 +107,12 @@ function fitInput(measurements: Measurement[], args: FitArgs, names: string[]): 
   return { records: measurements, cell };
 }
 
-function runFit(input: FitInput, args: FitArgs): { result: FitResult; comparison: ModelComparison | null } {
+function runFit(input: FitInput, args: FitArgs, names: string[]): FitWithComparisonResult {
   const options: FitVoltammogramsOptions = { mechanism: args.mechanism, coupleCount: args.coupleCount, cycle: args.cycle, start: args.start, maxIterations: args.maxIterations };
   if (args.free) options.free = args.free;
   if (args.windowV) options.windowV = args.windowV;
   const compare = args.compare === 'auto' ? (input.records.length > 1 && args.mechanism !== 'surface' ? 'mechanism' : 'none') : args.compare;
-  if (compare === 'none') return { result: fitVoltammograms(input, options), comparison: null };
   if (compare === 'mechanism' && args.mechanism === 'surface') throw new UsageError('--compare mechanism compares E with EC; it does not apply to --mechanism surface');
-  const ruFitted = (options.free ?? []).includes('uncompensatedOhm');
-  const all = compare === 'mechanism' ? mechanismCandidates(options) : ohmicCandidates(options);
-  const chosen = compare === 'mechanism' ? args.mechanism : ruFitted ? 'R_u fitted' : (all[0]?.label as string);
-  // Only the fit shown needs profile bounds; the alternative needs its sum of squares.
-  const candidates = all.map((c) => (c.label === chosen ? c : { ...c, options: { ...c.options, profile: false } }));
-  const comparison = compareFitModels(input, candidates);
-  const result = comparison.candidates.find((c) => c.label === chosen)?.result as FitResult;
-  return { result, comparison };
-}
-
-/** The core numbers voltammograms from 1; the user knows them by file name. */
-function withFileNames<T>(names: string[], run: () => T): T {
-  try {
-    return run();
-  } catch (err) {
-    if (!(err instanceof AnalysisError)) throw err;
-    throw new AnalysisError(err.code, err.message.replace(/voltammogram (\d+)/g, (_, k: string) => `"${names[Number(k) - 1] ?? `voltammogram ${k}`}"`));
-  }
+  // The core numbers voltammograms from 1; the user knows them by file name.
+  return fitWithComparison(input, options, { compare, recordNames: names });
 }

@@ -34,11 +34,17 @@ export interface ModelComparison {
 export interface CompareFitModelsOptions {
   onProgress?: FitVoltammogramsOptions['onProgress'];
   signal?: FitVoltammogramsOptions['signal'];
+  /** Called before each candidate's fit starts (0-based index in the given order). */
+  onCandidate?: ((label: string, index: number) => void) | undefined;
 }
 
 export function compareFitModels(input: FitInput, candidates: FitCandidate[], options: CompareFitModelsOptions = {}): ModelComparison {
   if (candidates.length < 2) throw new AnalysisError('BAD_OPTION', `a comparison needs two or more candidate models, got ${candidates.length}`);
-  const fits = candidates.map((c) => ({ label: c.label, result: fitVoltammograms(input, { ...c.options, ...options }) }));
+  const { onCandidate, ...shared } = options;
+  const fits = candidates.map((c, k) => {
+    onCandidate?.(c.label, k);
+    return { label: c.label, result: fitVoltammograms(input, { ...c.options, ...shared }) };
+  });
   const bestBic = Math.min(...fits.map((f) => f.result.criteria.bic));
   const bestAic = Math.min(...fits.map((f) => f.result.criteria.aic));
   const ranked = fits

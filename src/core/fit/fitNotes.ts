@@ -41,7 +41,7 @@ export function fitNotes(r: Pick<FitResult, 'parameters' | 'correlation' | 'conv
     if (e.status === 'undetermined') notes.push(`${name} is not determined by these data${e.parameter === 'alpha' ? ' (α has no effect on a reversible wave)' : ''}`);
     if (e.atSearchLimit && e.status === 'estimate') {
       const spec = PARAMETER_SPECS[e.parameter];
-      notes.push(`${name} sits at the edge of its search range (${spec.lo}–${spec.hi} ${unit}): treat it as a limit, not a measurement`);
+      notes.push(`${name} sits at the edge of its search range (${spec.lo}–${spec.hi}${unit ? ` ${unit}` : ''}): treat it as a limit, not a measurement`);
     }
   }
   notes.push(...correlationNotes(r, coupleCount));

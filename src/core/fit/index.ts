@@ -8,3 +8,5 @@ export { PARAMETER_SPECS, DEFAULT_FREE } from './fitParameters';
 export type * from './fitTypes';
 export { compareFitModels, mechanismCandidates, ohmicCandidates } from './compareFitModels';
 export type { CompareFitModelsOptions, EvidenceGrade, FitCandidate, ModelComparison } from './compareFitModels';
+export { fitWithComparison } from './fitWithComparison';
+export type { FitComparisonChoice, FitWithComparisonOptions, FitWithComparisonResult } from './fitWithComparison';

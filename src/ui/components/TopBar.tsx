@@ -34,6 +34,7 @@ export function TopBar() {
         <span className="group-label">View</span>
         <button type="button" role="radio" aria-checked={mainView === 'trace'} data-testid="view-trace" onClick={() => act.setView({ mainView: 'trace' })}>Trace</button>
         <button type="button" role="radio" aria-checked={mainView === 'series'} data-testid="view-series" onClick={() => act.setView({ mainView: 'series' })}>Series</button>
+        <button type="button" role="radio" aria-checked={mainView === 'fit'} data-testid="view-fit" onClick={() => act.setView({ mainView: 'fit' })} title="Fit simulated voltammograms to a whole series">Fit</button>
         <button type="button" role="radio" aria-checked={mainView === 'report'} data-testid="view-report" onClick={() => act.setView({ mainView: 'report' })}>Report</button>
       </div>
       <span className="spacer" />

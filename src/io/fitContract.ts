@@ -1,13 +1,30 @@
 /**
- * The `fit --json` object. Fixed fields (outside checks depend on them): mechanism, params
+ * The `fit --json` object, also one entry of the results sheet's `fits` (fitSheet.ts). Fixed fields (outside checks depend on them): mechanism, params
  * (first couple in E°′ order, plus R_u and C_dl), stderr, bounds, couples[] (same keys per couple,
  * each with its own stderr, bounds and status), correlation, rms, iterations, converged, notes.
  * Everything else is an extra field. Units: E0 V, k0 cm/s, D cm²/s, kf and ks 1/s, gamma mol/cm²,
  * Ru Ω, Cdl F/cm², rms A. A value that the data give only as a bound, or not at all, is null in
  * params/couples; its interval is in bounds ([lo, null] for a lower bound).
  */
-import type { ModelComparison } from '../core/fit';
-import type { CoupleParameter, FitParameter, FitResult, ParameterEstimate, SharedParameter } from '../core/fit';
+import type { CoupleParameter, EvidenceGrade, FitParameter, FitResult, ModelComparison, ParameterEstimate, SharedParameter } from '../core/fit';
+
+/**
+ * A model comparison without the candidates' whole fits: what the contract, the results sheet and
+ * the screen show of it (and what crosses from the worker to the page).
+ */
+export interface ComparisonSummary {
+  preferred: string;
+  evidence: EvidenceGrade;
+  recommendation: string;
+  candidates: { label: string; aic: number; bic: number; deltaAic: number; deltaBic: number; converged: boolean; parameterCount: number }[];
+}
+
+export function summariseComparison(c: ModelComparison): ComparisonSummary {
+  return {
+    preferred: c.preferred, evidence: c.evidence, recommendation: c.recommendation,
+    candidates: c.candidates.map((k) => ({ label: k.label, aic: k.aic, bic: k.bic, deltaAic: k.deltaAic, deltaBic: k.deltaBic, converged: k.result.converged, parameterCount: k.result.criteria.parameterCount })),
+  };
+}
 
 /** Short CLI names of the fit parameters and their core names. */
 export const PARAMETER_NAMES: Readonly<Record<string, FitParameter>> = {
@@ -42,7 +59,7 @@ function coupleEntry(r: FitResult, couple: number) {
   return { values: out, stderr, bounds, status };
 }
 
-export function fitContract(r: FitResult, files: string[], comparison: ModelComparison | null) {
+export function fitContract(r: FitResult, files: string[], comparison: ComparisonSummary | null) {
   const couples = r.values.couples.map((_, j) => coupleEntry(r, j));
   const first = couples[0] ?? { values: {}, stderr: {}, bounds: {}, status: {} };
   return {
@@ -63,9 +80,10 @@ export function fitContract(r: FitResult, files: string[], comparison: ModelComp
     stopReason: r.stopReason,
     criteria: { aic: r.criteria.aic, bic: r.criteria.bic, parameters: r.criteria.parameterCount },
     files: r.records.map((rec, k) => ({ file: files[k] ?? `voltammogram ${k + 1}`, scanRate: rec.scanRateVPerS, points: rec.pointCount, rms: rec.rmsA, background: rec.background })),
+    status: first.status,
     modelChoice: comparison ? {
       preferred: comparison.preferred, evidence: comparison.evidence, recommendation: comparison.recommendation,
-      candidates: comparison.candidates.map((c) => ({ model: c.label, bic: c.bic, aic: c.aic, deltaBic: c.deltaBic, deltaAic: c.deltaAic, converged: c.result.converged })),
+      candidates: comparison.candidates.map((c) => ({ model: c.label, bic: c.bic, aic: c.aic, deltaBic: c.deltaBic, deltaAic: c.deltaAic, converged: c.converged })),
     } : null,
   };
 }

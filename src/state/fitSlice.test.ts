@@ -1,0 +1,109 @@
+/**
+ * The fit slice without React, through its actions and the in-thread client (the worker's
+ * handler table): a series is fitted with its own cell, progress shows while it runs, a cancel
+ * leaves no result, errors reach the user, "use these values" carries α and R_u into the cell
+ * and undo takes them back, and the results sheet carries the fit while it is current.
+ * Input: seeded noisy voltammograms from the project's simulator (validated against Nicholson &
+ * Shain, Anal. Chem. 36 (1964) 706 and Nicholson, Anal. Chem. 37 (1965) 1351 in
+ * src/core/simulation); tolerances are those of the fit issue (E°′ 2 mV, k° 25 %, D 5 %).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { noisyVoltammograms } from '../core/fit/fitTestSupport';
+import type { Voltammogram } from '../core/types';
+import { createInThreadClient } from '../worker/inThreadClient';
+import { createHalfwaveStore } from './store';
+import type { FitProgressDetail, HalfwaveStore } from './types';
+
+const toCsv = (v: Voltammogram) => `time_s,potential_V,current_A\n${Array.from(v.potentialV, (e, i) => `${v.timeS![i]},${e},${v.currentA[i]}`).join('\n')}\n`;
+
+/** 1 mM, 0.0707 cm², k° = 0.01 cm/s, D = 8e-6 cm²/s, E°′ = 0.05 V, R_u = 80 Ω, two scan rates, 2 mV steps. */
+let csv: string[] = [];
+beforeAll(() => {
+  csv = noisyVoltammograms({ startV: 0.45, switchV: -0.35, stepV: 0.002, uncompensatedOhm: 80, doubleLayerFPerCm2: 20e-6 },
+    [{ formalPotentialV: 0.05, k0CmPerS: 0.01, alpha: 0.5, diffusionOCm2PerS: 8e-6, diffusionRCm2PerS: 8e-6 }], [0.1, 1]).map(toCsv);
+});
+
+async function seriesStore(): Promise<HalfwaveStore> {
+  const store = createHalfwaveStore({ client: createInThreadClient(), storage: null });
+  store.getState().seedSeriesCell('quasi', { areaCm2: 0.0707, concentrationMM: 1, resistanceOhm: 80 });
+  await store.getState().addFiles(csv.map((data, k) => ({ name: `quasi_${k}.csv`, data })), 'quasi');
+  return store;
+}
+
+describe('fit slice', () => {
+  it('fits the series with its cell and shows progress while it runs; the result is kept for the series', async () => {
+    const store = await seriesStore();
+    const act = store.getState();
+    expect(act.fitSetupOf('quasi')).toMatchObject({ mechanism: 'E', compare: 'mechanism', windowV: null });
+    act.setFitSetup('quasi', { compare: 'none' });
+    const seen: FitProgressDetail[] = [];
+    const stop = store.subscribe((s) => {
+      const p = s.fits.quasi?.progress;
+      if (p && seen.at(-1) !== p) seen.push(p);
+    });
+    await act.runFit('quasi');
+    stop();
+    const entry = store.getState().fits.quasi;
+    expect(entry?.status).toBe('ready');
+    expect(seen.some((p) => p.stage === 'iterate' && (p.costA2 ?? 0) > 0)).toBe(true);
+    expect(entry?.fileNames).toEqual(['quasi_0.csv', 'quasi_1.csv']);
+    expect(entry?.cell).toMatchObject({ areaCm2: 0.0707, concentrationMolPerCm3: 1e-6, electronCount: 1 });
+    const c = entry?.result?.values.couples[0];
+    // Fit issue tolerances; R_u held at the cell's 80 Ω, the simulator's value.
+    expect(Math.abs((c?.formalPotentialV ?? 0) - 0.05)).toBeLessThan(0.002);
+    expect(Math.abs((c?.k0CmPerS ?? 0) / 0.01 - 1)).toBeLessThan(0.25);
+    expect(Math.abs((c?.diffusionOCm2PerS ?? 0) / 8e-6 - 1)).toBeLessThan(0.05);
+    expect(entry?.result?.values.shared.uncompensatedOhm).toBe(80);
+    expect(store.getState().fitIsCurrent('quasi')).toBe(true);
+  });
+
+  it('a cancel while it iterates leaves the series without a result, marked cancelled', async () => {
+    const store = await seriesStore();
+    store.getState().setFitSetup('quasi', { compare: 'none' });
+    const stop = store.subscribe((s) => {
+      if (s.fits.quasi?.progress?.stage === 'iterate') s.cancelFit('quasi');
+    });
+    await store.getState().runFit('quasi');
+    stop();
+    expect(store.getState().fits.quasi).toMatchObject({ status: 'cancelled', result: null, error: null });
+  });
+
+  it('a window outside the data is a user error that says what and keeps the files', async () => {
+    const store = await seriesStore();
+    store.getState().setFitSetup('quasi', { compare: 'none', windowV: [2, 3] });
+    await store.getState().runFit('quasi');
+    const entry = store.getState().fits.quasi;
+    expect(entry?.status).toBe('error');
+    expect(entry?.error?.code).toMatch(/^[A-Z_]+$/);
+    expect(entry?.error?.message).toMatch(/window|points/i);
+    expect(store.getState().fileOrder).toHaveLength(2);
+  });
+
+  it('"use these values" carries α and R_u into the cell in one undoable step; the sheet carries the fit while it is current', async () => {
+    const store = await seriesStore();
+    const act = store.getState();
+    act.setFitSetup('quasi', { compare: 'none', free: ['formalPotentialV', 'k0CmPerS', 'alpha', 'diffusionOCm2PerS', 'uncompensatedOhm'] });
+    await act.runFit('quasi');
+    const carry = store.getState().carryableFitValues('quasi');
+    expect(carry.map((v) => v.field).sort()).toEqual(['alpha', 'resistanceOhm']);
+    const before = store.getState().seriesCells.quasi;
+    await act.useFitValues('quasi');
+    const own = store.getState().seriesCells.quasi;
+    for (const v of carry) expect(own?.[v.field]).toBe(v.value);
+    // Carrying the fit's own free values leaves it current: the sheet still has it.
+    expect(store.getState().fitIsCurrent('quasi')).toBe(true);
+    const json = JSON.parse(await act.exportGroup('quasi', 'json')) as { fits: { series: string; params: Record<string, number | null>; criteria: { bic: number } }[] };
+    expect(json.fits).toHaveLength(1);
+    expect(json.fits[0]?.series).toBe('quasi');
+    expect(Math.abs((json.fits[0]?.params.E0 ?? 0) - 0.05)).toBeLessThan(0.002);
+    expect(Number.isFinite(json.fits[0]?.criteria.bic)).toBe(true);
+    expect(await act.undoFitValues('quasi')).toBe(true);
+    expect(store.getState().seriesCells.quasi).toEqual(before);
+    expect(store.getState().fits.quasi?.carried).toBeNull();
+    // A changed area makes the fit outdated: it is no longer carried over, nor written into the sheet.
+    await act.updateSeriesCell('quasi', (o) => ({ ...o, areaCm2: 0.1 }));
+    expect(store.getState().fitIsCurrent('quasi')).toBe(false);
+    expect(await act.useFitValues('quasi')).toEqual([]);
+    expect(await act.exportGroup('quasi', 'csv')).not.toContain('# table: fit');
+  });
+});
