@@ -1,17 +1,19 @@
 /**
  * From what is on screen to the worker's `fit` request, and back: the series' files (its own
- * voltammograms, not its blanks), its resolved cell in core units (through runInput's
+ * voltammograms, not its blanks, each with the blank the analysis subtracts taken off first, as
+ * the analysis does: core/background), its resolved cell in core units (through runInput's
  * seriesCellValues, as the analysis gets it), the values the fit holds (R_u and α from the cell
  * unless they are fitted), the display scale the result is shown on, and the values a fit can
  * carry back into the cell. Pure functions of the store's state.
  */
 import type { FitCell, FitComparisonChoice, FitMechanism, FitModelValues, FitParameter, FitResult } from '../core/fit';
 import { DEFAULT_FREE } from '../core/fit/fitParameters';
+import { subtractBlank } from '../core/background/subtractBlank';
 import { roundToUncertainty } from '../core/statistics/roundToUncertainty';
 import type { SeriesFit } from '../io/fitSheet';
 import type { FitRequest } from '../worker/fitRun';
 import { displayScale, runScaleKey, scaleFromRunKey } from './display';
-import { blankNames, seriesCellValues } from './runInput';
+import { blankNames, blankOf, measurementNamed, seriesCellValues } from './runInput';
 import { resolveCell } from './seriesCell';
 import type { HalfwaveState } from './types';
 
@@ -73,7 +75,7 @@ export function fitInputKey(state: FitSources, group: string, setup: FitSetup): 
   const { ids } = fitFilesOf(state, group);
   const { cell, held } = fitCellOf(state, group, setup);
   const heldNow = { ru: setup.free.includes('uncompensatedOhm') ? null : held.uncompensatedOhm, alpha: setup.free.includes('alpha') ? null : held.alpha ?? null };
-  return JSON.stringify({ files: ids.map((id) => state.files[id]?.measurement?.id ?? id), cell, heldNow, scale: fitScaleOf(state, group), setup });
+  return JSON.stringify({ files: ids.map((id) => state.files[id]?.measurement?.id ?? id), blanks: fitBlanksOf(state, ids), cell, heldNow, scale: fitScaleOf(state, group), setup });
 }
 
 export interface BuiltFitRequest {
@@ -83,19 +85,46 @@ export interface BuiltFitRequest {
   cell: FitCell;
   scale: { name: string; offsetV: number };
   key: string;
+  /** What was done to the data before the fit (blanks subtracted, densities fitted per cm²), for the fit's notes. */
+  notes: string[];
+}
+
+/** The blank each fitted file subtracts (file name, or null), in the order of `ids`. */
+function fitBlanksOf(state: FitSources, ids: string[]): (string | null)[] {
+  return ids.map((id) => {
+    const name = blankOf(state, id);
+    return name && measurementNamed(state, name) ? name : null;
+  });
 }
 
 export function fitRequestOf(state: FitSources, group: string, setup: FitSetup): BuiltFitRequest {
   const { ids, names } = fitFilesOf(state, group);
-  const { cell, held } = fitCellOf(state, group, setup);
-  const records = ids.map((id) => {
+  const { cell: cellValues, held } = fitCellOf(state, group, setup);
+  const measurements = ids.map((id) => {
     const m = state.files[id]?.measurement;
     if (!m) throw new Error(`file ${id} has no measurement`);
-    return { potentialV: m.potentialV, currentA: m.currentA, timeS: m.timeS, segments: m.segments, cycles: m.cycles, scanRateVPerS: m.scanRateVPerS, scanRateSource: m.scanRateSource };
+    return m;
+  });
+  // Current densities (A/cm², no area stated): fitted per cm² of electrode, as the analysis does; never mixed with currents.
+  const densities = measurements.filter((m) => m.currentKind === 'density');
+  if (densities.length && densities.length < measurements.length) {
+    throw new Error(`the series mixes current densities (${densities.map((m) => m.fileName).join(', ')}) with currents; fit files of one kind`);
+  }
+  const cell: FitCell = densities.length ? { ...cellValues, areaCm2: 1 } : cellValues;
+  const blanks = fitBlanksOf(state, ids);
+  const records = measurements.map((m, k) => {
+    const blank = blanks[k] ? measurementNamed(state, blanks[k] as string) : null;
+    if (blank && (blank.currentKind ?? 'current') !== (m.currentKind ?? 'current')) throw new Error(`${m.fileName} and its blank ${blank.fileName} hold different kinds of current (density and current)`);
+    const currentA = blank ? subtractBlank(m, blank).currentA : m.currentA;
+    return { potentialV: m.potentialV, currentA, timeS: m.timeS, segments: m.segments, cycles: m.cycles, scanRateVPerS: m.scanRateVPerS, scanRateSource: m.scanRateSource };
   });
   const start = { couples: held.alpha === undefined ? [] : Array.from({ length: setup.coupleCount }, () => ({ alpha: held.alpha as number })), shared: held.uncompensatedOhm === undefined ? {} : { uncompensatedOhm: held.uncompensatedOhm } };
   const options = { mechanism: setup.mechanism, coupleCount: setup.coupleCount, free: setup.free, start, ...(setup.windowV ? { windowV: setup.windowV } : {}) };
-  return { request: { records, fileNames: names, cell, options, compare: setup.compare }, ids, names, cell, scale: fitScaleOf(state, group), key: fitInputKey(state, group, setup) };
+  const notes: string[] = [];
+  const pairs = names.flatMap((n, k) => (blanks[k] ? [`${n} − ${blanks[k]}`] : []));
+  if (pairs.length) notes.push(`blank subtracted before the fit, as in the analysis: ${pairs.join('; ')}`);
+  if (densities.length) notes.push('the files give current densities (A/cm²) and no area: fitted with A = 1 cm², so D, Γ and C_dl are per cm² of electrode');
+  return { request: { records, fileNames: names, cell, options, compare: setup.compare }, ids, names, cell, scale: fitScaleOf(state, group), key: fitInputKey(state, group, setup), notes };
 }
 
 /** The fit's potentials (E°′ values and intervals, the window) moved onto the display scale. */

@@ -11,6 +11,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { noisyVoltammograms } from '../core/fit/fitTestSupport';
 import type { Voltammogram } from '../core/types';
 import { createInThreadClient } from '../worker/inThreadClient';
+import { subtractBlank } from '../core/background/subtractBlank';
+import { fitRequestOf } from './fitRequest';
 import { createHalfwaveStore } from './store';
 import type { FitProgressDetail, HalfwaveStore } from './types';
 
@@ -105,5 +107,31 @@ describe('fit slice', () => {
     expect(store.getState().fitIsCurrent('quasi')).toBe(false);
     expect(await act.useFitValues('quasi')).toEqual([]);
     expect(await act.exportGroup('quasi', 'csv')).not.toContain('# table: fit');
+  });
+
+  it('the blank the analysis subtracts is taken off before the fit too, and a new blank makes the fit outdated', async () => {
+    const store = await seriesStore();
+    // A made-up background (demo only): 2 µA + 5 µA/V·E, recorded on the first file's own potentials and times.
+    const lines = (csv[0] as string).trim().split('\n');
+    const blankCsv = [lines[0], ...lines.slice(1).map((l) => {
+      const [t, e] = l.split(',');
+      return `${t},${e},${2e-6 + 5e-6 * Number(e)}`;
+    })].join('\n') + '\n';
+    await store.getState().addFiles([{ name: 'electrolyte_only.csv', data: blankCsv }], 'quasi');
+    const act = store.getState();
+    act.setFitSetup('quasi', { compare: 'none' });
+    const keyBefore = fitRequestOf(store.getState(), 'quasi', act.fitSetupOf('quasi')).key;
+    await act.updateSeriesCell('quasi', (o) => ({ ...o, blankFiles: ['electrolyte_only.csv'] }));
+    const built = fitRequestOf(store.getState(), 'quasi', act.fitSetupOf('quasi'));
+    expect(built.names).toEqual(['quasi_0.csv', 'quasi_1.csv']);
+    expect(built.key).not.toBe(keyBefore);
+    const files = Object.values(store.getState().files);
+    const m0 = files.find((f) => f.fileName === 'quasi_0.csv')?.measurement;
+    const blank = files.find((f) => f.fileName === 'electrolyte_only.csv')?.measurement;
+    if (!m0 || !blank) throw new Error('files not loaded');
+    // The same subtraction as the analysis (core/background/subtractBlank), point for point.
+    expect(Array.from(built.request.records[0]?.currentA ?? [])).toEqual(Array.from(subtractBlank(m0, blank).currentA));
+    expect(built.notes).toEqual(['blank subtracted before the fit, as in the analysis: quasi_0.csv − electrolyte_only.csv; quasi_1.csv − electrolyte_only.csv']);
+    expect(built.request.records[0]?.currentA[10]).toBeCloseTo((m0.currentA[10] as number) - (2e-6 + 5e-6 * (m0.potentialV[10] as number)), 12);
   });
 });

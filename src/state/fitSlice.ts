@@ -42,7 +42,7 @@ export const createFitSlice: SliceCreator<FitSlice> = (set, get, deps) => {
         set((s) => ({ fits: { ...s.fits, [group]: failed(setup, toUserError(err)) } }));
         return;
       }
-      const { request, ids, names, cell, scale, key } = built;
+      const { request, ids, names, cell, scale, key, notes } = built;
       const entry: FitEntry = { status: 'running', setup, fileIds: ids, fileNames: names, cell, scale, key, progress: null, progressText: 'starting', result: null, comparison: null, error: null, carried: null };
       set((s) => ({ fits: { ...s.fits, [group]: entry } }));
       if (ids.length === 0) {
@@ -57,7 +57,8 @@ export const createFitSlice: SliceCreator<FitSlice> = (set, get, deps) => {
           },
         });
         if (running.get(group) !== ctrl) return;
-        patchFit(group, { status: 'ready', result: shiftFitResult(out.result, scale.offsetV), comparison: out.comparison, progress: null, progressText: '' });
+        const result = shiftFitResult(out.result, scale.offsetV);
+        patchFit(group, { status: 'ready', result: notes.length ? { ...result, notes: [...notes, ...result.notes] } : result, comparison: out.comparison, progress: null, progressText: '' });
       } catch (err) {
         if (running.get(group) !== ctrl) return;
         if (err instanceof CancelledError) patchFit(group, { status: 'cancelled', progressText: '' });

@@ -86,7 +86,8 @@ export function blankOf(state: RunSources, id: string): string | null {
   return nearestBlank(f.measurement.scanRateVPerS, blanks);
 }
 
-function measurementNamed(state: RunSources, name: string) {
+/** The measurement of the first loaded file of that name (blanks are named by file name). */
+export function measurementNamed(state: RunSources, name: string) {
   for (const id of state.fileOrder) if (state.files[id]?.fileName === name && state.files[id]?.measurement) return state.files[id]?.measurement ?? null;
   return null;
 }

@@ -325,3 +325,52 @@ describe('autosave keeps the files themselves', () => {
     expect(reloaded.getState().remembered.map((r) => r.fileName)).toEqual(['second.csv']);
   });
 });
+
+describe('blanks (supporting electrolyte alone) for a series and for one file', () => {
+  /** The simulated couple with a made-up background of 1 µA + 2 µA/V·E added, or that background alone. */
+  function withBackground(v: number, onlyBackground: boolean): string {
+    const [head, ...rows] = simulatedCsv(v).trim().split('\n');
+    return [head, ...rows.map((r) => {
+      const [t, e, i] = r.split(',').map(Number) as [number, number, number];
+      return `${t},${e},${(onlyBackground ? 0 : i) + 1e-6 + 2e-6 * e}`;
+    })].join('\n') + '\n';
+  }
+
+  it('each file subtracts the series blank nearest its scan rate, a file can choose its own or none, and the sheet records the pairing', async () => {
+    const clean = newStore();
+    const [ref] = await clean.getState().addFiles([{ name: 'clean.csv', data: simulatedCsv(0.1) }]);
+    const ipaClean = firstCouple(clean, ref as string).ipaA as number;
+
+    const store = newStore();
+    const ids = await store.getState().addFiles([
+      { name: 'cv_100mVs.csv', data: withBackground(0.1, false) }, { name: 'cv_500mVs.csv', data: withBackground(0.5, false) },
+      { name: 'blank_100mVs.csv', data: withBackground(0.1, true) }, { name: 'blank_500mVs.csv', data: withBackground(0.5, true) },
+    ], 'probe');
+    const [slow, fast] = ids as [string, string];
+    await store.getState().updateSeriesCell('probe', (c) => ({ ...c, blankFiles: ['blank_100mVs.csv', 'blank_500mVs.csv'] }));
+    const blankOfRun = (id: string) => store.getState().results[id]?.run?.blank?.fileName ?? null;
+    expect([blankOfRun(slow), blankOfRun(fast)]).toEqual(['blank_100mVs.csv', 'blank_500mVs.csv']);
+    // Subtracted exactly, the background leaves the clean couple's peak (same simulator, same baseline method).
+    expect(firstCouple(store, slow).ipaA).toBeCloseTo(ipaClean, 12);
+
+    await store.getState().updateFileSettings(slow, (fs) => ({ ...fs, blankFile: null }));
+    expect(blankOfRun(slow)).toBeNull();
+    await store.getState().updateFileSettings(slow, (fs) => ({ ...fs, blankFile: 'blank_500mVs.csv' }));
+    expect(blankOfRun(slow)).toBe('blank_500mVs.csv');
+    // A blank at 5× the file's scan rate: the mismatch is said, not hidden.
+    expect((store.getState().results[slow]?.run?.warnings ?? []).some((w) => /blank_500mVs\.csv.*scan rate/.test(w.message))).toBe(true);
+    // Undo goes back to the series' nearest blank.
+    await store.getState().undo();
+    await store.getState().undo();
+    await store.getState().analyzeAll();
+    expect(blankOfRun(slow)).toBe('blank_100mVs.csv');
+
+    await store.getState().analyzeGroup('probe');
+    const sheet = JSON.parse(await store.getState().exportGroup('probe', 'json')) as { files: { file: string; blank: string | null; role: string }[] };
+    // The blanks are listed too, as blanks (their SHA-256 is part of the provenance).
+    expect(sheet.files.map((f) => [f.file, f.role, f.blank])).toEqual([
+      ['cv_100mVs.csv', 'series', 'blank_100mVs.csv'], ['cv_500mVs.csv', 'series', 'blank_500mVs.csv'],
+      ['blank_100mVs.csv', 'blank', null], ['blank_500mVs.csv', 'blank', null],
+    ]);
+  });
+});

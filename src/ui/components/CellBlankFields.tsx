@@ -1,8 +1,15 @@
-/** The blanks of a series (supporting electrolyte alone): each file subtracts the one nearest its scan rate. */
-import { useHalfwaveShallow } from '../../state/react';
+/**
+ * The blanks of a series (supporting electrolyte alone): each file subtracts the one nearest its
+ * scan rate, unless the file on screen is given its own blank, or none.
+ */
+import { blankNames, blankOf } from '../../state/runInput';
+import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
 import type { SeriesCell } from '../../state/types';
 
-export function CellBlankFields({ cell, set }: { cell: SeriesCell; set: (patch: Partial<SeriesCell>) => void }) {
+const SERIES_CHOICE = '';
+const NO_BLANK = '\u0000none';
+
+export function CellBlankFields({ group, cell, set }: { group: string; cell: SeriesCell; set: (patch: Partial<SeriesCell>) => void }) {
   const names = useHalfwaveShallow((s) => [...new Set(s.fileOrder.flatMap((id) => (s.files[id]?.measurement ? [s.files[id].fileName] : [])))]);
   const free = names.filter((n) => !cell.blankFiles.includes(n));
   return (
@@ -21,6 +28,40 @@ export function CellBlankFields({ cell, set }: { cell: SeriesCell; set: (patch: 
           {free.map((n) => <option key={n} value={n}>{n}</option>)}
         </select>
       ) : null}
+      <FileBlankChoice group={group} names={names} />
     </div>
+  );
+}
+
+/** The file on screen: the series' nearest blank (the default), a blank of its own, or none. */
+function FileBlankChoice({ group, names }: { group: string; names: string[] }) {
+  const id = useHalfwave((s) => s.selectedFileId);
+  const file = useHalfwave((s) => (id ? s.files[id] : undefined));
+  const own = useHalfwave((s) => (id ? s.fileSettings[id]?.blankFile : undefined));
+  const seriesPick = useHalfwave((s) => {
+    if (!id) return null;
+    const fs = s.fileSettings[id];
+    // What the series alone would give this file (its own choice set aside).
+    return blankOf({ ...s, fileSettings: { ...s.fileSettings, [id]: { peakWindows: fs?.peakWindows ?? [], baselines: fs?.baselines ?? [] } } }, id);
+  });
+  const isBlank = useHalfwave((s) => !!file && blankNames(s).has(file.fileName));
+  if (!id || !file?.measurement || file.group !== group || isBlank) return null;
+  const value = own === undefined ? SERIES_CHOICE : own === null ? NO_BLANK : own;
+  const choose = (v: string) => {
+    const blankFile = v === SERIES_CHOICE ? undefined : v === NO_BLANK ? null : v;
+    void halfwaveActions().updateFileSettings(id, (fs) => {
+      const { blankFile: _old, ...rest } = fs;
+      return blankFile === undefined ? rest : { ...rest, blankFile };
+    });
+  };
+  return (
+    <label className="file-blank">
+      {file.fileName} subtracts{' '}
+      <select data-testid="file-blank" value={value} onChange={(e) => choose(e.target.value)}>
+        <option value={SERIES_CHOICE}>{seriesPick ? `the series' nearest in scan rate (${seriesPick})` : "the series' blank (none set)"}</option>
+        <option value={NO_BLANK}>no blank</option>
+        {names.filter((n) => n !== file.fileName).map((n) => <option key={n} value={n}>{n}</option>)}
+      </select>
+    </label>
   );
 }

@@ -75,7 +75,7 @@ export function CellPanel() {
       {adsorbed ? <p className="hint" data-testid="cell-adsorbed">Adsorbed film: Γ follows from the peak charge and the area; the concentration is not used.</p> : null}
       <CellKineticsFields resolved={resolved} set={set} />
       <CellStandardFields resolved={resolved} set={set} />
-      {group !== null ? <CellBlankFields cell={c} set={set} /> : null}
+      {group !== null ? <CellBlankFields group={group} cell={c} set={set} /> : null}
       {group !== null ? <CellOrigins resolved={resolved} group={group} /> : null}
       {defaultsUsed?.length ? (
         <ul className="warn-text defaults-used" data-testid="defaults-used">
