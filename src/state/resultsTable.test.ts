@@ -30,4 +30,29 @@ describe('results across files', () => {
     // No binary-float tails: at most six significant digits.
     for (const cell of first.slice(5, 13)) expect(cell.replace(/^-/, '').replace('.', '').replace(/^0+/, '').length).toBeLessThanOrEqual(6);
   });
+
+  it('says which rows are current densities: µA cm⁻² in the heads when all are, a currents column in a mix', async () => {
+    const store = createHalfwaveStore({ client: createInThreadClient(), storage: null });
+    // The same simulated couple written as a density (A/cm² over its 0.0707 cm²), with no area stated.
+    const [head, ...rows] = simulatedCsv(0.1).trim().split('\n');
+    const density = ['Time (s),Potential (V),j (A/cm2)', ...rows.map((r) => {
+      const [t, e, i] = r.split(',').map(Number) as [number, number, number];
+      return `${t},${e},${i / 0.0707}`;
+    })].join('\n') + '\n';
+    expect(head).toBe('Time (s),Potential (V),Current (A)');
+    await store.getState().addFiles([{ name: 'film_j.csv', data: density }], 'dens');
+    await store.getState().addFiles([{ name: 'disk_i.csv', data: simulatedCsv(0.1) }], 'curr');
+    const s = store.getState();
+    const dens = resultsRows(s, 'dens');
+    expect(dens.map((r) => r.perArea)).toEqual([true]);
+    expect(resultsTsv(dens, 'SCE').split('\n')[0]).toContain('\tipa / µA cm⁻²\tipc / µA cm⁻²\t');
+    const all = resultsRows(s, null);
+    const tsv = resultsTsv(all, 'SCE').split('\n').map((l) => l.split('\t'));
+    expect(tsv[0]?.at(-1)).toBe('currents');
+    expect(tsv[0]?.[9]).toBe('ipa / µA or µA cm⁻²');
+    expect(tsv.slice(1, 3).map((l) => [l[0], l.at(-1)])).toEqual([['film_j.csv', 'per cm²'], ['disk_i.csv', 'current']]);
+    // The density is the current over the area: ipc/A to 0.1 % (same simulated couple).
+    const curr = all.find((r) => r.fileName === 'disk_i.csv');
+    expect(Math.abs((all[0]?.ipcA as number) * 0.0707 / (curr?.ipcA as number) - 1)).toBeLessThan(1e-3);
+  });
 });

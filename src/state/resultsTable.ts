@@ -22,6 +22,8 @@ export interface ResultsRow extends Pick<CoupleResult, 'epaV' | 'epcV' | 'eHalfV
   warnings: number;
   /** Current noise of the file (A): the current columns show the digits it allows. */
   noiseA: number;
+  /** True when the file gave current densities: ipa and ipc are then A/cm². */
+  perArea: boolean;
 }
 
 export type ResultsColumn = 'file' | 'scanRate' | 'cycle' | 'epa' | 'epc' | 'eHalf' | 'deltaEp' | 'ipa' | 'ipc' | 'ratio' | 'halfWidth' | 'reading' | 'warnings';
@@ -46,6 +48,7 @@ function rowOf(id: string, s: Pick<HalfwaveState, 'files' | 'results'>, cycle: n
     epaV: k.epaV, epcV: k.epcV, eHalfV: k.eHalfV, deltaEpV: k.deltaEpV, ipaA: k.ipaA, ipcA: k.ipcA, ratio: k.ratio,
     forwardHalfWidthV: k.forwardDirection === 'anodic' ? k.anodicHalfPeakWidthV : k.cathodicHalfPeakWidthV,
     reading: k.verdict.category, readingText: k.verdict.label, warnings: run.warnings.length + f.warnings.length, noiseA,
+    perArea: run.currentKind === 'density',
   };
 }
 
@@ -88,15 +91,25 @@ export function sortRows(rows: ResultsRow[], sort: ResultsSort): ResultsRow[] {
 
 const cell = (v: number | null, factor = 1, digits = 6) => (v === null || !Number.isFinite(v) ? '' : String(Number((v * factor).toPrecision(digits))));
 
+/** The unit of the peak-current columns: per cm² when every row is a density; 'mixed' when some are. */
+export function currentColumnsPerArea(rows: ResultsRow[]): boolean | 'mixed' {
+  const n = rows.filter((r) => r.perArea).length;
+  return n === 0 ? false : n === rows.length ? true : 'mixed';
+}
+
 /**
  * Tab-separated text with a header line (units in the heads), one line per row. Values in the
  * header's units, six significant digits at most (no float tails), empty where not determined.
+ * Current densities: the heads say µA cm⁻² when every row is one; a mix gets a 'currents' column.
  */
 export function resultsTsv(rows: ResultsRow[], scaleName: string): string {
+  const perArea = currentColumnsPerArea(rows);
+  const ipUnit = perArea === true ? 'µA cm⁻²' : perArea === 'mixed' ? 'µA or µA cm⁻²' : 'µA';
   const head = ['file', 'series', 'v / (V/s)', 'cycle', 'couple', `Epa / V vs ${scaleName}`, `Epc / V vs ${scaleName}`, `E½ / V vs ${scaleName}`, 'ΔEp / mV',
-    'ipa / µA', 'ipc / µA', 'ipc/ipa or ipa/ipc (return/forward)', '|Ep − Ep/2| forward / mV', 'reading', 'warnings'];
+    `ipa / ${ipUnit}`, `ipc / ${ipUnit}`, 'ipc/ipa or ipa/ipc (return/forward)', '|Ep − Ep/2| forward / mV', 'reading', 'warnings', ...(perArea === 'mixed' ? ['currents'] : [])];
   const lines = rows.map((r) => [r.fileName, r.group, cell(r.scanRateVPerS, 1, 3), String(r.cycle), String(r.couple + 1), cell(r.epaV), cell(r.epcV), cell(r.eHalfV),
-    cell(r.deltaEpV, 1000, 4), cell(r.ipaA, 1e6), cell(r.ipcA, 1e6), cell(r.ratio, 1, 4), cell(r.forwardHalfWidthV, 1000, 4), r.readingText, String(r.warnings)]
+    cell(r.deltaEpV, 1000, 4), cell(r.ipaA, 1e6), cell(r.ipcA, 1e6), cell(r.ratio, 1, 4), cell(r.forwardHalfWidthV, 1000, 4), r.readingText, String(r.warnings),
+    ...(perArea === 'mixed' ? [r.perArea ? 'per cm²' : 'current'] : [])]
     .map((t) => t.replace(/[\t\n\r]+/g, ' ')).join('\t'));
   return `${[head.join('\t'), ...lines].join('\n')}\n`;
 }

@@ -3,11 +3,11 @@
  * see each bad file's error beside it while everything already loaded stays, check the numbers of
  * the new file against Randles–Ševčík, then override a detected unit and read the file again.
  */
-import { mkdir, mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { coupleCells, demoFileCount, simulatedCsv, waitForAnalysis, waitForFiles } from './appHelpers';
+import { coupleCells, demoFileCount, selectFileRow, simulatedCsv, waitForAnalysis, waitForFiles } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 const PNG_HEADER = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 0, 0, 0, 1, 0, 0, 0, 1]);
@@ -98,6 +98,24 @@ describe('picking files', () => {
     expect(await page.getByTestId('series-table').textContent()).toContain('2 scan rates');
     await page.getByTestId('view-trace').click();
     await rm(root, { recursive: true });
+  });
+
+  // Our own fixture in the layout of a plotting program's export (test/fixtures/README.md): names
+  // E, j, j; a units row "V RHE", (blank), "mA cm-2"; a sample code as a comment line.
+  it('"How the file was read" says which column is a density and why, the scale named in the units row, and the header block', async () => {
+    const page = app.page;
+    const name = 'oer_film_10mVs-1.txt';
+    await page.getByTestId('file-input').setInputFiles([{ name, mimeType: 'text/plain', buffer: await readFile(join('test', 'fixtures', 'exports', name)) }]);
+    await page.locator(`[data-testid=file-row][data-file-name="${name}"][data-status=ready]`).waitFor({ timeout: 60_000 });
+    await selectFileRow(page, name);
+    await page.getByTestId('tab-import').click();
+    await page.waitForFunction(() => document.querySelector('[data-testid=header-block]')?.textContent?.includes('units on line 2'), null, { timeout: 30_000 });
+    expect(await page.getByTestId('header-block').textContent()).toBe('Header block: names on line 1; units on line 2; comment line 3 left out.');
+    const kind = page.getByTestId('guess-current-or-density');
+    expect(await kind.locator('td').nth(0).textContent()).toBe('current density');
+    expect(await kind.locator('td').nth(2).textContent()).toMatch(/cm/);
+    expect(await page.getByTestId('guess-recording-scale-named-in-the-file').locator('td').nth(0).textContent()).toBe('RHE');
+    await page.getByTestId('tab-couples').click();
   });
 
   it('stayed free of console errors, page errors and outside requests', () => {

@@ -11,6 +11,7 @@ function show(value: unknown): string {
   // Numbers read back from the file (the scan rate) can carry a binary-float tail.
   if (typeof value === 'number') return scanRate(value);
   if (typeof value === 'string' && value in DELIMITERS) return DELIMITERS[value] as string;
+  if (value === 'density') return 'current density';
   return String(value);
 }
 
@@ -22,14 +23,23 @@ export function ImportDecisions() {
     ['Text encoding', d.encoding], ['Line ending', d.lineEnding], ['Delimiter', d.delimiter], ['Decimal mark', d.decimalMark],
     ['Header line', d.headerLine], ['Potential unit', d.potentialUnit], ['Current unit', d.currentUnit],
     ...(d.timeUnit ? [['Time unit', d.timeUnit] as [string, Guess<unknown>]] : []),
+    ['Current or density', d.currentKind],
     ['Current sign convention', d.currentConvention],
+    ['Recording scale named in the file', d.reference],
     ['Scan rate (V/s)', d.scanRate],
   ];
+  const block = d.headerBlock;
+  const blockParts = [
+    block.namesLine !== null ? `names on line ${block.namesLine}` : 'no line of names',
+    block.unitsLine !== null ? `units on line ${block.unitsLine}` : null,
+    block.commentLines.length ? `comment line${block.commentLines.length === 1 ? '' : 's'} ${block.commentLines.join(', ')} left out` : null,
+  ].filter(Boolean);
   return (
     <div className="decisions" data-testid="import-decisions">
       <p className="summary">
         Table on lines {d.tableLines.first}–{d.tableLines.last}: {count(d.rowsRead)} rows read, {d.rowsSkipped} skipped, {d.cycleCount} cycle{d.cycleCount === 1 ? '' : 's'}.
-        {file.measurement?.referenceElectrode ? ` Reference named in the file: ${file.measurement.referenceElectrode}.` : ''}
+        {' '}<span data-testid="header-block">Header block: {blockParts.join('; ')}.</span>
+        {file.measurement?.densityAreaCm2 ? ` Current density × the stated area ${file.measurement.densityAreaCm2.value} cm² (line ${file.measurement.densityAreaCm2.line}) gives the current.` : ''}
       </p>
       <table className="data compact">
         <thead><tr><th scope="col">Decision</th><th scope="col">Value</th><th scope="col">Set by</th><th scope="col">Why</th></tr></thead>

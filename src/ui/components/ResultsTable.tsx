@@ -5,7 +5,7 @@
  */
 import { memo, useMemo, useState } from 'react';
 import { halfwaveActions, useHalfwave } from '../../state/react';
-import { resultsRows, resultsTsv, type ResultsColumn, type ResultsRow } from '../../state/resultsTable';
+import { currentColumnsPerArea, resultsRows, resultsTsv, type ResultsColumn, type ResultsRow } from '../../state/resultsTable';
 import { chooseCurrentScale } from '../plots/currentScale';
 import { byNoise, DASH, fixed, scanRate } from '../format';
 import { copyText } from '../clipboard';
@@ -30,10 +30,14 @@ export function ResultsTable() {
   const rows = useMemo(() => resultsRows({ fileOrder, files: halfwaveActions().files, results }, shownGroup, sort), [fileOrder, results, shownGroup, sort]);
   const act = halfwaveActions();
   const cur = chooseCurrentScale(Math.max(0, ...rows.map((r) => Math.max(r.ipaA ?? 0, r.ipcA ?? 0))));
+  // Densities (A/cm²): the heads say so when every row is one; in a mix each density cell says so itself.
+  const perArea = currentColumnsPerArea(rows);
+  const ipUnit = `${cur.unit}${perArea === true ? ' cm⁻²' : ''}`;
   const columns: Column[] = [
     { id: 'file', head: 'File' }, { id: 'scanRate', head: 'v / (V s⁻¹)' }, { id: 'cycle', head: 'Cycle' },
     { id: 'epa', head: `Epa / V` }, { id: 'epc', head: 'Epc / V' }, { id: 'eHalf', head: 'E½ / V' }, { id: 'deltaEp', head: 'ΔEp / mV' },
-    { id: 'ipa', head: `ipa / ${cur.unit}` }, { id: 'ipc', head: `ipc / ${cur.unit}` }, { id: 'ratio', head: 'ratio', title: 'return / forward peak current' },
+    { id: 'ipa', head: `ipa / ${ipUnit}`, ...(perArea === 'mixed' ? { title: `cells marked “/cm²” are current densities (${cur.unit} cm⁻²)` } : {}) },
+    { id: 'ipc', head: `ipc / ${ipUnit}` }, { id: 'ratio', head: 'ratio', title: 'return / forward peak current' },
     { id: 'halfWidth', head: '|Ep − Ep/2| / mV', title: 'of the forward peak' }, { id: 'reading', head: 'Reading' }, { id: 'warnings', head: 'Warnings' },
   ];
   // Read the sort from the store, not from this render: two quick clicks must toggle twice.
@@ -73,7 +77,7 @@ export function ResultsTable() {
           </thead>
           <tbody>
             {rows.map((r) => (
-              <ResultLine key={`${r.fileId}-${r.cycle}-${r.couple}`} r={r} factor={cur.factor} current={r.fileId === selected && r.cycle === cycle} show={act.selectFile} />
+              <ResultLine key={`${r.fileId}-${r.cycle}-${r.couple}`} r={r} factor={cur.factor} markPerArea={perArea === 'mixed'} current={r.fileId === selected && r.cycle === cycle} show={act.selectFile} />
             ))}
           </tbody>
         </table>
@@ -82,9 +86,9 @@ export function ResultsTable() {
   );
 }
 
-const ResultLine = memo(function ResultLine({ r, factor, current, show }: { r: ResultsRow; factor: number; current: boolean; show: (id: string, cycle: number) => void }) {
+const ResultLine = memo(function ResultLine({ r, factor, markPerArea, current, show }: { r: ResultsRow; factor: number; markPerArea: boolean; current: boolean; show: (id: string, cycle: number) => void }) {
   // Currents with the digits the file's noise allows; potentials to 0.1 mV.
-  const ip = (v: number | null) => byNoise(v, r.noiseA, factor, 3);
+  const ip = (v: number | null) => `${byNoise(v, r.noiseA, factor, 3)}${markPerArea && r.perArea && v !== null ? ' /cm²' : ''}`;
   return (
     <tr data-testid="results-row" data-file-name={r.fileName} className={current ? 'current' : undefined} onClick={() => show(r.fileId, r.cycle)}>
       <th scope="row"><button type="button" className="row-open" aria-pressed={current} title="Show this trace" onClick={(e) => { e.stopPropagation(); show(r.fileId, r.cycle); }}>{r.fileName}</button></th>
