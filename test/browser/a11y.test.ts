@@ -1,20 +1,13 @@
 /**
  * Accessibility and comfort: axe-core (through @axe-core/playwright) finds no serious or critical
- * violation on the trace, series and report views, in the light and the dark theme; the plot
+ * violation on the trace, series and report views (the fit view: test/browser/fit.test.ts), in the light and the dark theme; the plot
  * toolbar holds only view tools; a skip link leads to the plot; the file list is one tab stop
  * moved with the arrow keys; the safety drawer holds focus and gives it back on Escape.
  */
-import { AxeBuilder } from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, waitForFiles } from './appHelpers';
+import { demoFileCount, seriousViolations, waitForFiles } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
-
-async function seriousViolations(page: Page): Promise<string[]> {
-  const result = await new AxeBuilder({ page: page as never }).analyze();
-  return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map((v) => `${v.id}: ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);
-}
 
 async function showView(page: Page, view: 'trace' | 'series' | 'report', ready: string): Promise<void> {
   await page.getByTestId(`view-${view}`).click();

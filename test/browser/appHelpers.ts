@@ -3,6 +3,7 @@
  * app has read and analysed them, and reading what Plotly drew (Plotly keeps the figure on its
  * host element as `data` and `layout`).
  */
+import { AxeBuilder } from '@axe-core/playwright';
 import { readdirSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { Page } from 'playwright-core';
@@ -90,4 +91,11 @@ export async function dragAcrossPlot(page: Page, testId: string): Promise<void> 
   await page.mouse.move(box.x + box.width * 0.5, y, { steps: 8 });
   await page.mouse.move(box.x + box.width * 0.7, y, { steps: 8 });
   await page.mouse.up();
+}
+
+/** axe-core's serious and critical violations on the page as it is (rule id and the first nodes). */
+export async function seriousViolations(page: Page): Promise<string[]> {
+  const result = await new AxeBuilder({ page: page as never }).analyze();
+  return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id}: ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);
 }

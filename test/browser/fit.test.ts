@@ -9,7 +9,7 @@
  */
 import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, waitForFiles, dragAcrossPlot } from './appHelpers';
+import { demoFileCount, dragAcrossPlot, seriousViolations, waitForFiles } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 async function cell(app: OpenedApp, key: string, column: 'value' | 'error'): Promise<string> {
@@ -58,6 +58,8 @@ describe('fit view on the demo', () => {
     expect(traces.filter((a) => a === 'y2')).toHaveLength(6);
     expect(await page.getByTestId('fit-recommendation').textContent()).toMatch(/ΔBIC/);
     expect(await page.getByTestId('fit-correlations').locator('li').count()).toBeGreaterThan(0);
+    // The fit view with its results passes axe-core (no serious or critical violation), as the other views do.
+    expect(await seriousViolations(page)).toEqual([]);
   });
 
   it('"use these values" puts the fitted α into the series’ cell, and undo takes it back', async () => {
