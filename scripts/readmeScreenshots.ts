@@ -7,7 +7,7 @@ import { chromium } from 'playwright-core';
 import { preview } from 'vite';
 const server = await preview({ preview: { host: '127.0.0.1', port: 0, open: false }, logLevel: 'warn' });
 const port = (server.httpServer.address() as { port: number }).port;
-const browser = await chromium.launch({ executablePath: process.env.HALFWAVE_CHROMIUM ?? '/usr/bin/chromium', headless: true, args: ['--no-sandbox', '--disable-gpu'] });
+const browser = await chromium.launch({ executablePath: process.env.HALFWAVE_CHROMIUM ?? '/usr/bin/chromium', headless: true, args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'] });
 for (const scheme of ['light', 'dark'] as const) {
   const page = await (await browser.newContext({ viewport: { width: 1440, height: 900 }, colorScheme: scheme })).newPage();
   await page.goto(`http://127.0.0.1:${port}/`);
@@ -33,6 +33,12 @@ for (const scheme of ['light', 'dark'] as const) {
   await page.waitForFunction(() => document.querySelectorAll('.report-figures img').length === 3, null, { timeout: 60000 });
   await page.waitForTimeout(500);
   await page.screenshot({ path: 'docs/screenshots/report.png' });
+  await page.getByTestId('view-fit').click();
+  await page.getByTestId('fit-group').selectOption('quasi FcAmide');
+  await page.getByTestId('fit-run').click();
+  await page.getByTestId('fit-results').waitFor({ timeout: 300000 });
+  await page.waitForTimeout(800);
+  await page.screenshot({ path: 'docs/screenshots/fit.png' });
 }
 await browser.close();
 server.httpServer.close();

@@ -8,6 +8,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { buildFitFigure, type FitFigureFile, type FitFigureInput } from './fitFigure';
+import { sequentialColour } from './palette';
 
 const file = (name: string, v: number, factor: number): FitFigureFile => ({
   name, scanRateVPerS: v, potentialV: Float64Array.from([0, 0.1, 0.2, 0.1, 0]), currentA: Float64Array.from([0, 1, 5, -2, -1].map((x) => x * factor * 1e-6)),
@@ -29,6 +30,8 @@ describe('buildFitFigure', () => {
     expect(fig.layout.shapes).toEqual([]);
     expect(fig.layout.yaxis2).toBeUndefined();
     expect(fig.layout.yaxis?.domain).toEqual([0, 1]);
+    // Coloured in order of scan rate on the series overlay's sequential scale: slowest at one end, fastest at the other.
+    expect(fig.data.map((d) => (d as { line: { color: string } }).line.color)).toEqual([sequentialColour(0), sequentialColour(1)]);
   });
 
   it('a single off point (the vertex) does not set the residual axis: the range follows the 99.5th percentile', () => {

@@ -11,7 +11,7 @@ import type { Data, Layout, Shape } from 'plotly.js';
 import type { CycleRange } from '../../core/types';
 import { chooseCurrentScale, maxAbs, type UnitScale } from './currentScale';
 import { decimateMinMax } from './decimate';
-import { baseFont, palette, traceColour } from './palette';
+import { baseFont, palette, sequentialColour } from './palette';
 
 export interface FitFigureFile {
   name: string;
@@ -61,7 +61,8 @@ export function buildFitFigure(input: FitFigureInput): FitFigure {
   const data: Data[] = [];
   order.forEach((k, rank) => {
     const f = input.files[k] as FitFigureFile;
-    const colour = traceColour(rank);
+    // In order of scan rate on the sequential scale the series overlay uses.
+    const colour = sequentialColour(order.length === 1 ? 0 : rank / (order.length - 1));
     const r = ranges[k] as CycleRange;
     const xy = decimateMinMax(f.potentialV, f.currentA, r.start, r.end, max);
     data.push({
