@@ -21,21 +21,23 @@ const doc: SessionDocument = {
   ],
 };
 
+/** 'parsed', or the code of the SessionError the text is refused with (any other error fails the test). */
+function codeOf(text: string): string {
+  try {
+    parseSession(text);
+    return 'parsed';
+  } catch (err) {
+    expect(err).toBeInstanceOf(SessionError);
+    return (err as SessionError).code;
+  }
+}
+
 describe('session text', () => {
   it('round-trips a document unchanged', () => {
     expect(parseSession(serializeSession(doc))).toEqual(doc);
   });
 
   it('names the problem when the text is not a session', () => {
-    const codeOf = (text: string) => {
-      try {
-        parseSession(text);
-        return 'parsed';
-      } catch (err) {
-        expect(err).toBeInstanceOf(SessionError);
-        return (err as SessionError).code;
-      }
-    };
     expect(codeOf('E/V,I/A\n0,1\n')).toBe('NOT_JSON');
     expect(codeOf('{"format":"other"}')).toBe('NOT_A_SESSION');
     expect(codeOf('{"format":"halfwave-session","version":99,"files":[]}')).toBe('NEWER_VERSION');
@@ -45,14 +47,6 @@ describe('session text', () => {
 
   // Hostile input (common practice for parsers of untrusted JSON, no source): refused whole, with the reason.
   it('refuses prototype keys anywhere, cut-short text, wrong override values and enormous text', () => {
-    const codeOf = (text: string) => {
-      try {
-        parseSession(text);
-        return 'parsed';
-      } catch (err) {
-        return (err as SessionError).code;
-      }
-    };
     expect(codeOf('{"format":"halfwave-session","version":2,"files":[],"settings":{"__proto__":{"polluted":1}}}')).toBe('UNSAFE_KEY');
     expect(codeOf('{"format":"halfwave-session","version":2,"files":[{"fileName":"a","sha256":null,"analysis":{"constructor":{"prototype":{}}}}]}')).toBe('UNSAFE_KEY');
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();

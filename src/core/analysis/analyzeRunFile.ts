@@ -51,7 +51,7 @@ export function analysedPotential(v: Voltammogram, ruOhm: number, offsetV: numbe
  * current densities (A/cm²) needs the electrode area for it: Ru·A (Ω·cm²) when the cell has an
  * area, else no correction, with a warning.
  */
-function ohmicFactor(file: ResolvedRunFile, cell: ResolvedCell, warnings: RunWarning[]): number {
+function ohmicFactor(file: ResolvedRunFile, cell: Pick<ResolvedCell, 'ruOhm' | 'areaCm2'>, warnings: RunWarning[]): number {
   if (!(cell.ruOhm > 0) || (file.input.voltammogram.currentKind ?? 'current') === 'current') return cell.ruOhm;
   const fileName = file.input.fileName;
   if (cell.areaCm2 === null) {

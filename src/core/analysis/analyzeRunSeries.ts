@@ -15,7 +15,7 @@ import { describeSeriesReferences } from './runReference';
 import type { ResolvedCell, ResolvedMethod, RunFileResult, RunSeriesResult, RunWarning } from './runTypes';
 import type { SeriesAnalysis } from './seriesTypes';
 
-function capacitanceOf(files: RunFileResult[], cell: ResolvedCell, warnings: RunWarning[], key: string): DoubleLayerCapacitanceResult | null {
+function capacitanceOf(files: RunFileResult[], cell: Pick<ResolvedCell, 'capacitancePotentialV' | 'areaCm2'>, warnings: RunWarning[], key: string): DoubleLayerCapacitanceResult | null {
   const gaps = files.filter((f) => f.chargingGapA !== null);
   if (cell.capacitancePotentialV === null || !gaps.length) return null;
   if (cell.areaCm2 === null) {
@@ -30,7 +30,7 @@ function capacitanceOf(files: RunFileResult[], cell: ResolvedCell, warnings: Run
 }
 
 /** D's interval with the stated uncertainty of A and C (GUM; combinedDiffusionInterval.ts), on each couple that has D. */
-function withCombinedIntervals(analysis: SeriesAnalysis, cell: ResolvedCell): void {
+function withCombinedIntervals(analysis: SeriesAnalysis, cell: Pick<ResolvedCell, 'areaRelativeUncertainty' | 'concentrationRelativeUncertainty'>): void {
   for (const c of analysis.couples) {
     const d = c.diffusion;
     if (!d) continue;
@@ -46,7 +46,7 @@ function withCombinedIntervals(analysis: SeriesAnalysis, cell: ResolvedCell): vo
  * (the one their potentials moved by), which must then be the same for every file of the series;
  * when it is not, E°′ is left unused and the run says why.
  */
-function reportedFormalPotential(key: string, cell: ResolvedCell, members: RunFileResult[], warnings: RunWarning[]): number | null {
+function reportedFormalPotential(key: string, cell: Pick<ResolvedCell, 'formalPotentialV' | 'formalPotentialScale'>, members: RunFileResult[], warnings: RunWarning[]): number | null {
   if (cell.formalPotentialV === null || cell.formalPotentialScale === 'reported') return cell.formalPotentialV;
   const offsets = members.map((f) => f.reference.offsetV);
   const first = offsets[0] ?? 0;

@@ -18,14 +18,14 @@ import type { FileReference, ResolvedCell, ResolvedReport, RunFileResult, RunWar
 import type { VoltammogramAnalysis } from './types';
 
 /** The scale a file was recorded on: its series' choice, else its metadata, else unknown. */
-export function recordingScaleOf(file: ResolvedRunFile, cell: ResolvedCell): ReferenceId | null {
+export function recordingScaleOf(file: ResolvedRunFile, cell: Pick<ResolvedCell, 'inputReference'>): ReferenceId | null {
   if (cell.inputReference) return cell.inputReference;
   const named = file.input.referenceElectrode;
   return named ? (findReferenceElectrode(named)?.id ?? null) : null;
 }
 
 /** The conversion context of a series: pH, temperature, user values and a given internal standard. */
-export function conversionContextOf(cell: ResolvedCell, report: ResolvedReport): ConversionContext {
+export function conversionContextOf(cell: Pick<ResolvedCell, 'temperatureK' | 'pH' | 'internalStandard'>, report: Pick<ResolvedReport, 'referenceOverridesVsSheV'>): ConversionContext {
   const context: ConversionContext = { temperatureK: cell.temperatureK, overridesVsSheV: report.referenceOverridesVsSheV };
   if (cell.pH !== null) context.pH = cell.pH;
   const std = cell.internalStandard;
@@ -38,7 +38,7 @@ export function conversionContextOf(cell: ResolvedCell, report: ResolvedReport):
  * `unconvertible: 'keep-recording-scale'` an impossible conversion leaves it on its own scale with
  * a note instead of failing; the screen's display scale comes from here too.
  */
-export function scaleOffset(input: ReferenceId | null, report: ResolvedReport, context: ConversionContext, what: string, unknownWhy = 'nothing says what it was recorded against'): FileReference {
+export function scaleOffset(input: ReferenceId | null, report: Pick<ResolvedReport, 'outputReference' | 'unconvertible'>, context: ConversionContext, what: string, unknownWhy = 'nothing says what it was recorded against'): FileReference {
   const output = report.outputReference;
   if (output === null) return { input, output, offsetV: 0, basis: [], typical: false, note: null };
   try {
