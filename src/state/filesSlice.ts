@@ -187,7 +187,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     newWorkspace() {
       get().record(true);
       set({
-        files: {}, fileOrder: [], results: {}, series: {}, remembered: [], fileSettings: {}, seriesCells: {}, workingWindows: {},
+        files: {}, fileOrder: [], results: {}, series: {}, remembered: [], fileSettings: {}, seriesCells: {}, workingWindows: {}, fitSetups: {}, fits: {},
         selectedFileId: null, selectedGroup: null, importBatch: null,
         notice: 'New workspace: every file and series was cleared (Undo brings them back).',
       });

@@ -7,7 +7,7 @@
  * carry back into the cell. Pure functions of the store's state.
  */
 import type { FitCell, FitComparisonChoice, FitMechanism, FitModelValues, FitParameter, FitResult } from '../core/fit';
-import { DEFAULT_FREE } from '../core/fit/fitParameters';
+import { COUPLE_PARAMETERS, DEFAULT_FREE } from '../core/fit/fitParameters';
 import { subtractBlank } from '../core/background/subtractBlank';
 import { roundToUncertainty } from '../core/statistics/roundToUncertainty';
 import type { SeriesFit } from '../io/fitSheet';
@@ -29,6 +29,33 @@ export interface FitSetup {
 }
 
 export type FitSources = Pick<HalfwaveState, 'files' | 'fileOrder' | 'fileSettings' | 'settings' | 'seriesCells' | 'convention' | 'results' | 'series'>;
+
+const MECHANISMS: FitMechanism[] = ['E', 'EC', 'surface'];
+const COMPARISONS: FitComparisonChoice[] = ['none', 'mechanism', 'ru'];
+
+/**
+ * Fit setups read back from a session or the autosave: each field checked, anything unknown left
+ * out, so a setup from another version or a hand-edited file never reaches the fit unchecked.
+ */
+export function mergeFitSetups(stored: unknown): Record<string, FitSetup> {
+  const out: Record<string, FitSetup> = {};
+  if (typeof stored !== 'object' || stored === null || Array.isArray(stored)) return out;
+  for (const [group, value] of Object.entries(stored as Record<string, unknown>)) {
+    if (typeof value !== 'object' || value === null) continue;
+    const v = value as Record<string, unknown>;
+    const mechanism = MECHANISMS.find((m) => m === v.mechanism);
+    const compare = COMPARISONS.find((c) => c === v.compare);
+    if (!mechanism || !compare || (mechanism === 'surface' && compare === 'mechanism')) continue;
+    const known: FitParameter[] = [...COUPLE_PARAMETERS[mechanism], 'uncompensatedOhm', 'doubleLayerFPerCm2', 'background'];
+    const free = Array.isArray(v.free) ? known.filter((p) => (v.free as unknown[]).includes(p)) : [];
+    const coupleCount = Number.isInteger(v.coupleCount) && (v.coupleCount as number) >= 1 && (v.coupleCount as number) <= 4 ? (v.coupleCount as number) : 1;
+    const w = v.windowV;
+    const windowV = Array.isArray(w) && w.length === 2 && w.every((x) => typeof x === 'number' && Number.isFinite(x) && Math.abs(x) <= 10) && (w[0] as number) < (w[1] as number) ? [w[0], w[1]] as [number, number] : null;
+    if (!free.length) continue;
+    out[group] = { mechanism, coupleCount, free, windowV, compare };
+  }
+  return out;
+}
 
 /** The starting setup of a series: a surface film when the analysis found only adsorbed couples, else E; E against EC when there are two or more files. */
 export function defaultFitSetup(state: FitSources, group: string): FitSetup {

@@ -12,7 +12,7 @@ import { noisyVoltammograms } from '../core/fit/fitTestSupport';
 import type { Voltammogram } from '../core/types';
 import { createInThreadClient } from '../worker/inThreadClient';
 import { subtractBlank } from '../core/background/subtractBlank';
-import { fitRequestOf } from './fitRequest';
+import { fitRequestOf, mergeFitSetups } from './fitRequest';
 import { createHalfwaveStore } from './store';
 import type { FitProgressDetail, HalfwaveStore } from './types';
 
@@ -133,5 +133,22 @@ describe('fit slice', () => {
     expect(Array.from(built.request.records[0]?.currentA ?? [])).toEqual(Array.from(subtractBlank(m0, blank).currentA));
     expect(built.notes).toEqual(['blank subtracted before the fit, as in the analysis: quasi_0.csv − electrolyte_only.csv; quasi_1.csv − electrolyte_only.csv']);
     expect(built.request.records[0]?.currentA[10]).toBeCloseTo((m0.currentA[10] as number) - (2e-6 + 5e-6 * (m0.potentialV[10] as number)), 12);
+  });
+});
+
+describe('fit setups read back from a session', () => {
+  it('keep what is valid and leave out what is not (unknown mechanism, parameters of another mechanism, a reversed window)', () => {
+    expect(mergeFitSetups({
+      good: { mechanism: 'EC', coupleCount: 2, free: ['formalPotentialV', 'followUpRatePerS', 'coverageMolPerCm2'], windowV: [-0.2, 0.3], compare: 'mechanism' },
+      reversed: { mechanism: 'E', coupleCount: 9, free: ['k0CmPerS'], windowV: [0.3, -0.2], compare: 'none' },
+      film: { mechanism: 'surface', coupleCount: 1, free: ['coverageMolPerCm2'], windowV: null, compare: 'mechanism' },
+      strange: { mechanism: 'ECE', free: ['k0CmPerS'], compare: 'none' },
+      empty: { mechanism: 'E', free: ['followUpRatePerS'], compare: 'none' },
+    })).toEqual({
+      good: { mechanism: 'EC', coupleCount: 2, free: ['formalPotentialV', 'followUpRatePerS'], windowV: [-0.2, 0.3], compare: 'mechanism' },
+      reversed: { mechanism: 'E', coupleCount: 1, free: ['k0CmPerS'], windowV: null, compare: 'none' },
+    });
+    expect(mergeFitSetups([])).toEqual({});
+    expect(mergeFitSetups(null)).toEqual({});
   });
 });

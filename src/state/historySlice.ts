@@ -18,7 +18,7 @@ export function snapshotOf(s: HalfwaveState, workspace: boolean): HistorySnapsho
 function workspaceOf(s: HalfwaveState): WorkspaceSnapshot {
   return {
     files: s.files, fileOrder: s.fileOrder, results: s.results, series: s.series, remembered: s.remembered,
-    selectedFileId: s.selectedFileId, selectedGroup: s.selectedGroup,
+    selectedFileId: s.selectedFileId, selectedGroup: s.selectedGroup, fitSetups: s.fitSetups, fits: s.fits,
   };
 }
 

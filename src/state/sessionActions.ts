@@ -10,6 +10,7 @@ import { decodeBase64, encodeBase64, parseSession, serializeSession, SESSION_FOR
 import { defaultSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from './settings';
 import { isQuotaError, type StorageAdapter } from './storage';
 import type { HalfwaveState, HalfwaveStore, OverlayNormalisation, ReadoutTab, ViewSlice } from './types';
+import { mergeFitSetups } from './fitRequest';
 import { mergeWorkingWindows } from './workingWindowSlice';
 
 export const AUTOSAVE_KEY = 'halfwave.autosave.v2';
@@ -52,7 +53,7 @@ export async function buildSessionDocument(state: HalfwaveState, includeRawData:
       selectedGroup: state.selectedGroup, readoutTab: state.readoutTab, resultsScope: state.resultsScope,
       seriesOverlay: { ...state.seriesOverlay },
     },
-    workbench: { workingWindows: structuredClone(state.workingWindows) },
+    workbench: { workingWindows: structuredClone(state.workingWindows), fitSetups: structuredClone(state.fitSetups) },
     files,
   };
 }
@@ -89,6 +90,8 @@ export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocu
     resultsScope: view.resultsScope === 'all' ? 'all' : 'series',
     seriesOverlay: overlayOf(view.seriesOverlay),
     workingWindows: mergeWorkingWindows(doc.workbench.workingWindows),
+    // The fit setups come back; the fits themselves are run again (they are deterministic: same data, same setup, same numbers).
+    fitSetups: mergeFitSetups(doc.workbench.fitSetups), fits: {},
     selectedGroup: typeof view.selectedGroup === 'string' ? view.selectedGroup : null,
     remembered: waiting,
   });
@@ -189,7 +192,8 @@ export function attachAutosave(store: HalfwaveStore, storage: StorageAdapter, de
   const unsubscribe = store.subscribe((now, before) => {
     const changed = now.settings !== before.settings || now.fileSettings !== before.fileSettings || now.seriesCells !== before.seriesCells
       || now.files !== before.files || now.fileOrder !== before.fileOrder || now.convention !== before.convention || now.remembered !== before.remembered
-      || now.showSmoothed !== before.showSmoothed || now.showBaselines !== before.showBaselines || now.workingWindows !== before.workingWindows;
+      || now.showSmoothed !== before.showSmoothed || now.showBaselines !== before.showBaselines || now.workingWindows !== before.workingWindows
+      || now.fitSetups !== before.fitSetups;
     if (!changed) return;
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => {

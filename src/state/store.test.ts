@@ -223,6 +223,7 @@ describe('sessions round-trip exactly and replace the workspace', () => {
     await store.getState().updateSeriesCell('run B', (own) => ({ ...own, transferElectronCount: 2, formalPotentialV: 0.05 }));
     await store.getState().setConvention('polarographic');
     store.getState().setView({ readoutTab: 'peaks', seriesOverlay: { normalisation: 'diffusion', cycle: 1 } });
+    store.getState().setFitSetup('run A', { mechanism: 'EC', windowV: [-0.25, 0.25], compare: 'none' });
     store.getState().selectFile(a.ids[1] as string);
     await settle(store);
     return store;
@@ -240,6 +241,8 @@ describe('sessions round-trip exactly and replace the workspace', () => {
     expect(t.settings).toEqual(s.settings);
     expect(t.convention).toBe('polarographic');
     expect(t.workingWindows).toEqual({ 'run A': { material: 'platinum', medium: 'aqueous-acid', upperV: 1.2 } });
+    expect(t.fitSetups).toEqual(s.fitSetups);
+    expect(t.fitSetups['run A']).toMatchObject({ mechanism: 'EC', windowV: [-0.25, 0.25], compare: 'none' });
     expect([t.readoutTab, t.seriesOverlay.normalisation]).toEqual(['peaks', 'diffusion']);
     expect(t.files[t.selectedFileId as string]?.fileName).toBe('a-200.csv');
     expect(numbersOf(fresh)).toEqual(numbersOf(store));

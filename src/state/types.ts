@@ -161,6 +161,9 @@ export interface WorkspaceSnapshot {
   remembered: SessionFileRecord[];
   selectedFileId: string | null;
   selectedGroup: string | null;
+  /** The fit setups and fits of the replaced workspace. */
+  fitSetups: Record<string, FitSetup>;
+  fits: Record<string, FitEntry>;
 }
 
 export interface HistorySnapshot {
