@@ -24,6 +24,8 @@ const toCsv = (v: Voltammogram) => `time_s,potential_V,current_A\n${Array.from(v
 let dir = '';
 const files: string[] = [];
 const reversible: string[] = [];
+const withLeak: string[] = [];
+const blanks: string[] = [];
 
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'halfwave-fit-'));
@@ -32,6 +34,12 @@ beforeAll(() => {
   quasi.forEach((v, k) => { files.push(join(dir, `quasi_${k}.csv`)); writeFileSync(files[k]!, toCsv(v)); });
   const nernst = noisyVoltammograms({ ...waveform, uncompensatedOhm: 120 }, [{ formalPotentialV: 0, k0CmPerS: Infinity, concentrationOMolPerCm3: 5e-6 }], [0.1, 0.5, 2]);
   nernst.forEach((v, k) => { reversible.push(join(dir, `nernst_${k}.csv`)); writeFileSync(reversible[k]!, toCsv(v)); });
+  // A made-up background (demo only): 3 µA + 4 µA/V·E on top of the quasi-reversible files, and the same background alone as each rate's blank.
+  const leak = (v: Voltammogram, withSignal: boolean): Voltammogram => ({ ...v, currentA: Float64Array.from(v.potentialV, (e, i) => (withSignal ? v.currentA[i]! : 0) + 3e-6 + 4e-6 * e) });
+  quasi.forEach((v, k) => {
+    withLeak.push(join(dir, `leaky_${k}.csv`)); writeFileSync(withLeak[k]!, toCsv(leak(v, true)));
+    blanks.push(join(dir, `blank_${k}.csv`)); writeFileSync(blanks[k]!, toCsv(leak(v, false)));
+  });
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
@@ -108,10 +116,20 @@ describe('halfwave fit', () => {
     expect(window.stderr).toContain('quasi_0.csv');
   });
 
+  it('--blank subtracts each file\'s blank nearest in scan rate first, as analyze does: the same tolerances hold, and the notes name the pairs', async () => {
+    const r = await run('fit', ...withLeak, '--area', '0.0707', '--conc', '1', '--ru', '50', '--compare', 'none', ...blanks.flatMap((b) => ['--blank', b]), '--json');
+    expect(r.code).toBe(0);
+    const c = JSON.parse(r.stdout) as Contract;
+    expect(Math.abs(c.params.E0! - 0.05)).toBeLessThan(0.002);
+    expect(Math.abs(c.params.k0! / 0.01 - 1)).toBeLessThan(0.25);
+    expect(Math.abs(c.params.D! / 8e-6 - 1)).toBeLessThan(0.05);
+    expect(c.notes[0]).toMatch(/^blank subtracted before the fit.*leaky_0\.csv − blank_0\.csv; .*leaky_2\.csv − blank_2\.csv$/);
+  });
+
   it('--help lists every option with its unit and default', async () => {
     const r = await run('fit', '--help');
     expect(r.code).toBe(0);
-    for (const s of ['--mechanism M', '[E]', '--couples N', '--free LIST', '--window LO:HI', '--area CM2', '--conc MM', '--n N', '--temp CELSIUS', '--scan-rate V_PER_S', '--ru OHM', '--json', '--start LIST', '--compare C', 'Exit codes']) {
+    for (const s of ['--mechanism M', '[E]', '--couples N', '--free LIST', '--window LO:HI', '--area CM2', '--conc MM', '--n N', '--temp CELSIUS', '--scan-rate V_PER_S', '--ru OHM', '--blank FILE', '--json', '--start LIST', '--compare C', 'Exit codes']) {
       expect(r.stdout).toContain(s);
     }
   });

@@ -4,6 +4,7 @@
  * does; prints the JSON contract (--json) or a readable report.
  */
 import { ZERO_CELSIUS_K } from '../../core/constants';
+import { nearestBlank, subtractBlank } from '../../core/background';
 import { fitWithComparison, type FitCell, type FitInput, type FitVoltammogramsOptions, type FitWithComparisonResult } from '../../core/fit';
 import { cellFromHeaders, fitContract, summariseComparison, type Measurement } from '../../io';
 import { parseArgs, type OptionSpec } from '../args';
@@ -17,7 +18,7 @@ import { IMPORT_OPTION_HELP, IMPORT_OPTION_SPEC, parseOverrides } from './analyz
 const V: OptionSpec = { value: true };
 const SPEC: Record<string, OptionSpec> = {
   mechanism: V, couples: V, free: V, start: V, window: V, cycle: V, compare: V, 'max-iterations': V,
-  area: V, conc: V, n: V, temp: V, 'scan-rate': V, ru: V, json: { value: false }, ...IMPORT_OPTION_SPEC,
+  area: V, conc: V, n: V, temp: V, 'scan-rate': V, ru: V, blank: { value: true, repeat: true }, json: { value: false }, ...IMPORT_OPTION_SPEC,
 };
 
 const HELP = `Usage: halfwave fit FILE|FOLDER... [options]
@@ -58,6 +59,9 @@ Cell (the same for all files, never fitted):
   --scan-rate V_PER_S   scan rate of every file, V/s [time column, preamble or file name]
   --ru OHM              uncompensated resistance, Ω: held at this value, or the start when Ru is
                         in --free [held at 0; estimated from ΔEp across the files when fitted]
+  --blank FILE          a blank (supporting electrolyte alone, same electrode), subtracted before
+                        the fit as analyze does; repeatable or a folder: each file subtracts the
+                        blank nearest its scan rate, named in the notes
 
 Output:
   --json                one JSON object on stdout: mechanism, params (first couple in order of
@@ -80,15 +84,34 @@ export const fitCommand: CliCommand = {
     const args = parseFitArgs(parsed);
     const overrides = parseOverrides(parsed);
     const read = readInputs(args.files, { overrides });
-    const measurements = read.measurements;
     const names = read.files.map((f) => f.path);
+    const blankPaths = parsed.options.get('blank') ?? [];
+    const blanks = blankPaths.length ? readInputs(blankPaths, { overrides }).measurements : [];
+    const { measurements, notes } = withBlanksSubtracted(read.measurements, blanks, names);
     const input = fitInput(measurements, args, names);
-    const { result, comparison } = runFit(input, args, names);
+    const fitted = runFit(input, args, names);
+    const { comparison } = fitted;
+    const result = notes.length ? { ...fitted.result, notes: [...notes, ...fitted.result.notes] } : fitted.result;
     const summary = comparison ? summariseComparison(comparison) : null;
     io.stdout(args.json ? `${JSON.stringify(fitContract(result, names, summary), null, 2)}\n` : fitText(result, names, summary));
     return 0;
   },
 };
+
+/** Each file minus the blank nearest its scan rate (core/background, as analyze and the screen do), with the pairing as a note. */
+function withBlanksSubtracted(measurements: Measurement[], blanks: Measurement[], names: string[]): { measurements: Measurement[]; notes: string[] } {
+  if (!blanks.length) return { measurements, notes: [] };
+  const rates = blanks.map((b) => ({ fileName: b.fileName, scanRateVPerS: b.scanRateVPerS }));
+  const pairs: string[] = [];
+  const out = measurements.map((m, k) => {
+    const blank = blanks.find((b) => b.fileName === nearestBlank(m.scanRateVPerS, rates));
+    if (!blank) return m;
+    if ((blank.currentKind ?? 'current') !== (m.currentKind ?? 'current')) throw new UsageError(`"${names[k]}" and its blank "${blank.fileName}" hold different kinds of current (density and current)`);
+    pairs.push(`${names[k]} − ${blank.fileName}`);
+    return { ...m, currentA: subtractBlank(m, blank).currentA };
+  });
+  return { measurements: out, notes: [`blank subtracted before the fit, as in the analysis: ${pairs.join('; ')}`] };
+}
 
 function fitInput(measurements: Measurement[], args: FitArgs, names: string[]): FitInput {
   measurements.forEach((m, k) => {
