@@ -6,6 +6,7 @@
 import { DEFAULT_SERIES_KEY } from '../core/analysis/resolveRun';
 import type { CellValues, MethodOptions, ReportOptions, RunBlank, RunFile, RunInput } from '../core/analysis/runTypes';
 import { nearestBlank } from '../core/background/nearestBlank';
+import { subtractBlank } from '../core/background/subtractBlank';
 import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
 import { describeLayout } from '../io/describeLayout';
 import { SOFTWARE } from '../version';
@@ -158,4 +159,28 @@ export function runInputOf(state: RunSources, ids: string[] = state.fileOrder): 
     report: reportOptionsOf(state),
     software: { ...SOFTWARE },
   };
+}
+
+const subtracted = new WeakMap<object, { blank: object; currentA: Float64Array }>();
+
+/**
+ * The current a file is analysed on: as recorded, or less its blank (the same subtraction the run
+ * makes, core/background), with the blank's name; kept per measurement and blank, so a redraw does
+ * not subtract again. A blank of another kind of current is left to the run to refuse.
+ */
+export function analysedCurrentOf(state: RunSources, id: string): { currentA: Float64Array; blank: string | null } | null {
+  const m = state.files[id]?.measurement;
+  if (!m) return null;
+  const name = blankNames(state).has(m.fileName) ? null : blankOf(state, id);
+  const blank = name ? measurementNamed(state, name) : null;
+  if (!name || !blank || (blank.currentKind ?? 'current') !== (m.currentKind ?? 'current')) return { currentA: m.currentA, blank: null };
+  const hit = subtracted.get(m);
+  if (hit && hit.blank === blank) return { currentA: hit.currentA, blank: name };
+  try {
+    const currentA = subtractBlank(m, blank).currentA;
+    subtracted.set(m, { blank, currentA });
+    return { currentA, blank: name };
+  } catch {
+    return { currentA: m.currentA, blank: null };
+  }
 }

@@ -6,6 +6,7 @@
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
 import { AUTOSAVE_KEY, attachAutosave, openSessionText, restoreAutosave, saveSessionText } from './sessionActions';
+import { analysedCurrentOf } from './runInput';
 import { resolveCell } from './seriesCell';
 import { defaultSettings } from './settings';
 import { memoryStorageAdapter } from './storage';
@@ -355,6 +356,11 @@ describe('blanks (supporting electrolyte alone) for a series and for one file', 
     expect([blankOfRun(slow), blankOfRun(fast)]).toEqual(['blank_100mVs.csv', 'blank_500mVs.csv']);
     // Subtracted exactly, the background leaves the clean couple's peak (same simulator, same baseline method).
     expect(firstCouple(store, slow).ipaA).toBeCloseTo(ipaClean, 12);
+    // The trace is drawn on the same current the analysis used: recorded less its blank.
+    const shown = analysedCurrentOf(store.getState(), slow);
+    const m = store.getState().files[slow]?.measurement;
+    expect(shown?.blank).toBe('blank_100mVs.csv');
+    expect(shown?.currentA[100]).toBeCloseTo((m?.currentA[100] as number) - (1e-6 + 2e-6 * (m?.potentialV[100] as number)), 15);
 
     await store.getState().updateFileSettings(slow, (fs) => ({ ...fs, blankFile: null }));
     expect(blankOfRun(slow)).toBeNull();

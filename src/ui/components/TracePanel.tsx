@@ -1,6 +1,7 @@
 /** "Trace": the selected voltammogram with peaks, baselines and (optionally) the smoothed curve. */
 import { useEffect, useMemo } from 'react';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
+import { analysedCurrentOf } from '../../state/runInput';
 import { buildTraceFigure } from '../plots/traceFigure';
 import { PlotlyChart } from './PlotlyChart';
 import { TraceToolbar } from './TraceToolbar';
@@ -31,6 +32,8 @@ export function TracePanel() {
   const theoryCurve = showTheory && theory?.curve ? { ...theory.curve, label: 'theory (simulated, fitted values)' } : null;
   const m = file?.measurement ?? null;
   const run = result?.run ?? null;
+  // The current the picks were made on: less the file's blank when it has one.
+  const analysed = useHalfwaveShallow((s) => (id ? analysedCurrentOf(s, id) : null) ?? { currentA: null, blank: null });
   // Until the analysis is back, the recorded potentials are shifted by the series' display offset.
   const offsetV = run?.reference.offsetV ?? scale.offsetV;
   const shown = useMemo(() => (!m ? null : run?.analysedPotentialV ?? (offsetV === 0 || run ? m.potentialV : m.potentialV.map((e) => e + offsetV))), [m, run, offsetV]);
@@ -39,7 +42,8 @@ export function TracePanel() {
   const figure = useMemo(() => {
     if (!m || !shown) return null;
     return buildTraceFigure({
-      fileName: m.fileName, potentialV: shown, currentA: m.currentA, cycles: m.cycles,
+      fileName: m.fileName, potentialV: shown, currentA: analysed.currentA ?? m.currentA, cycles: m.cycles,
+      blank: analysed.blank ? { name: analysed.blank, recordedA: m.currentA } : null,
       analysis: run?.analysis ?? null, cycle: view.cycle, convention: view.convention,
       showSmoothed: view.showSmoothed, showBaselines: view.showBaselines, dragMode: view.dragMode,
       peakWindows: windows ?? [], recordingOffsetV: offsetV,
@@ -50,7 +54,7 @@ export function TracePanel() {
         ? { lowerV: working.lowerV, upperV: working.upperV, lowerLabel: working.entry.lower?.process ?? 'limit', upperLabel: working.entry.upper?.process ?? 'limit' }
         : null,
     });
-  }, [m, shown, run, iRCorrected, offsetV, view, windows, scale, theoryCurve?.currentA, companions, working]);
+  }, [m, shown, run, iRCorrected, offsetV, view, windows, scale, theoryCurve?.currentA, companions, working, analysed.currentA, analysed.blank]);
 
   const onRangeSelect = (a: number, b: number) => {
     if (!id || view.dragMode !== 'window') return;

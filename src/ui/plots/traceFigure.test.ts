@@ -80,4 +80,15 @@ describe('buildTraceFigure', () => {
     expect((fig.data[1] as { x: number[] }).x[2]).toBeCloseTo(0.2, 12);
     expect(fig.layout.shapes?.[0]).toMatchObject({ x0: expect.closeTo(0.25, 12), x1: expect.closeTo(0.35, 12) });
   });
+
+  it('with a blank subtracted: the current less the blank is the trace the picks sit on, the recording drawn faintly behind', () => {
+    const recordedA = currentA.map((a) => a + 3e-6);
+    const fig = buildTraceFigure({ ...base, blank: { name: 'electrolyte.csv', recordedA } });
+    const names = fig.data.map((d) => (d as { name: string }).name);
+    expect(names.slice(0, 2)).toEqual(['as recorded (before electrolyte.csv)', 'cycle 1, less the blank']);
+    expect(ys(fig, 1)).toEqual([0, 1, 5, -2, -1].map((v) => expect.closeTo(v, 9)));
+    expect(ys(fig, 0)).toEqual([3, 4, 8, 1, 2].map((v) => expect.closeTo(v, 9)));
+    // The current axis covers both.
+    expect(fig.scale.unit).toBe('µA');
+  });
 });

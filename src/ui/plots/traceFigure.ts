@@ -19,7 +19,10 @@ export interface TraceFigureInput {
   fileName: string;
   /** Potentials as analysed, on the display scale (V). */
   potentialV: Float64Array;
+  /** The current analysed: as recorded, or less the blank named in `blank`. */
   currentA: Float64Array;
+  /** When a blank was subtracted: its name and the current as recorded, drawn faintly behind. @default null */
+  blank?: { name: string; recordedA: Float64Array } | null;
   cycles: CycleRange[];
   /** The analysis of the shown potentials (its potentials on the display scale). */
   analysis: VoltammogramAnalysis | null;
@@ -61,7 +64,9 @@ export interface TraceFigure {
 export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
   const cycles = input.cycle === 0 ? input.cycles : input.cycles.filter((c) => c.index === input.cycle);
   const companions = (input.companions ?? []).map((c) => ({ ...c, range: pickCycle(c.cycles, input.cycle) }));
+  const blank = input.blank ?? null;
   const scale = chooseCurrentScale(Math.max(0, ...cycles.map((c) => maxAbs(input.currentA, c.start, c.end)),
+    ...(blank ? cycles.map((c) => maxAbs(blank.recordedA, c.start, c.end)) : []),
     ...companions.map((c) => (c.range ? maxAbs(c.currentA, c.range.start, c.range.end) : 0))));
   const sign = input.convention === 'polarographic' ? -1 : 1;
   const tx = (v: number) => v + input.recordingOffsetV;
@@ -77,7 +82,14 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
       line: { color: palette.companion, width: 1 }, hovertemplate: `${c.name}<br>E %{x:.4f} V<br>i %{y:.4g}<extra></extra>`,
     });
   });
-  cycles.forEach((c, k) => data.push(line(input, c.start, c.end, `cycle ${c.index}`, traceColour(k), same, ty)));
+  if (blank) {
+    // What was recorded, before the blank was taken off: the picks below are on the current less the blank.
+    cycles.forEach((c, k) => data.push({
+      ...line({ ...input, currentA: blank.recordedA }, c.start, c.end, `as recorded (before ${blank.name})`, palette.companion, same, ty, 1),
+      legendgroup: 'recorded', showlegend: k === 0,
+    }));
+  }
+  cycles.forEach((c, k) => data.push(line(input, c.start, c.end, blank ? `cycle ${c.index}, less the blank` : `cycle ${c.index}`, traceColour(k), same, ty)));
   const smoothed = input.analysis?.smoothed;
   if (input.showSmoothed && smoothed) {
     for (const c of cycles) {
