@@ -2,6 +2,7 @@
 import { useMemo, useState } from 'react';
 import type { DisplayScale } from '../../state/display';
 import { fitFilesOf } from '../../state/fitRequest';
+import { analysedCurrentOf } from '../../state/runInput';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
 import type { FitSetup } from '../../state/types';
 import { buildFitFigure } from '../plots/fitFigure';
@@ -15,16 +16,18 @@ export function FitPlot({ group, setup, scale }: { group: string; setup: FitSetu
   const currentIds = useHalfwaveShallow((s) => fitFilesOf(s, group).ids);
   const ids = result && entry ? entry.fileIds : currentIds;
   const measurements = useHalfwaveShallow((s) => ids.map((id) => s.files[id]?.measurement ?? null));
+  // The currents the fit saw: less each file's blank, as fitRequest.ts sends them.
+  const currents = useHalfwaveShallow((s) => ids.map((id) => analysedCurrentOf(s, id)?.currentA ?? null));
   const convention = useHalfwave((s) => s.convention);
   const offsetV = result && entry ? entry.scale.offsetV : scale.offsetV;
   const scaleName = result && entry ? entry.scale.name : scale.name;
   const [lo, hi] = setup.windowV ?? [null, null];
   const fig = useMemo(() => {
-    const files = measurements.flatMap((m) => (m ? [{ name: m.fileName, scanRateVPerS: m.scanRateVPerS, potentialV: m.potentialV, currentA: m.currentA, cycles: m.cycles }] : []));
+    const files = measurements.flatMap((m, k) => (m ? [{ name: m.fileName, scanRateVPerS: m.scanRateVPerS, potentialV: m.potentialV, currentA: currents[k] ?? m.currentA, cycles: m.cycles }] : []));
     const model = result && files.length === result.records.length ? result.records : null;
     const windowV: [number, number] | null = lo === null || hi === null ? null : [lo + offsetV, hi + offsetV];
     return buildFitFigure({ files, model, offsetV, scaleName, convention, windowV, dragMode });
-  }, [measurements, result, offsetV, scaleName, convention, lo, hi, dragMode]);
+  }, [measurements, currents, result, offsetV, scaleName, convention, lo, hi, dragMode]);
   const act = halfwaveActions();
   const onRange = (a: number, b: number) => act.setFitSetup(group, { windowV: [Math.min(a, b) - offsetV, Math.max(a, b) - offsetV] });
   return (

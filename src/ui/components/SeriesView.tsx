@@ -5,6 +5,7 @@
  */
 import { useEffect, useMemo, useState } from 'react';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
+import { analysedCurrentOf } from '../../state/runInput';
 import type { OverlayNormalisation } from '../../state/types';
 import { safeName } from '../download';
 import { buildOverlayFigure, type OverlayFile } from '../plots/overlayFigure';
@@ -111,17 +112,18 @@ export function SeriesView() {
   );
 }
 
-/** The series' files as drawn: analysed potentials on the display scale, currents as measured. */
+/** The series' files as drawn: analysed potentials on the display scale, currents as analysed (less a blank). */
 function useOverlayFiles(group: string | null): OverlayFile[] {
   const fileOrder = useHalfwave((s) => s.fileOrder);
   const files = useHalfwave((s) => s.files);
   const results = useHalfwave((s) => s.results);
+  const currents = useHalfwaveShallow((s) => Object.fromEntries(s.fileOrder.flatMap((id) => (s.files[id]?.group === group ? [[id, analysedCurrentOf(s, id)?.currentA ?? null]] : []))));
   return useMemo(() => fileOrder.flatMap((id) => {
     const f = files[id];
     const run = results[id]?.run;
     const m = f?.measurement;
     if (!f || f.group !== group || !m || !run || !m.scanRateVPerS) return [];
     const potentialV = run.analysedPotentialV ?? (run.reference.offsetV === 0 ? m.potentialV : m.potentialV.map((e) => e + run.reference.offsetV));
-    return [{ name: f.fileName, scanRateVPerS: m.scanRateVPerS, potentialV, currentA: m.currentA, cycles: m.cycles }];
-  }), [fileOrder, files, results, group]);
+    return [{ name: f.fileName, scanRateVPerS: m.scanRateVPerS, potentialV, currentA: currents[id] ?? m.currentA, cycles: m.cycles }];
+  }), [fileOrder, files, results, group, currents]);
 }
