@@ -1,6 +1,6 @@
 /** `analyze --help`: the analysis options beyond the fixed contract (parsed in analyzeReport.ts). */
-export const ANALYSIS_OPTION_HELP = `Further analysis options:
-  --ref NAME            report potentials on this scale: SHE, SCE, NCE, SSCE, AgCl-sat, AgCl-3M,
+export const ANALYSIS_OPTION_HELP = `Scales, kinetics and further analysis options:
+  --ref NAME            report potentials on this reference scale: SHE, SCE, NCE, SSCE, AgCl-sat, AgCl-3M,
                         AgCl-3.5M, AgCl-1M, AgCl-0.1M, MSE-sat, MSE-1M-H2SO4, HgO-1M, HgO-0.1M,
                         RHE (needs --ph), Fc (internal standard)
   --from-ref NAME       scale the files were measured on (default: the file's metadata)

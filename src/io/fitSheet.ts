@@ -20,7 +20,7 @@ export interface SeriesFit {
   fileNames: string[];
   /** The scale E°′ and the window are on, and its offset from the files' recording scale (V). */
   scale: { name: string; offsetV: number };
-  setup: { mechanism: FitMechanism; coupleCount: number; free: FitParameter[]; compare: FitComparisonChoice };
+  setup: { mechanism: FitMechanism; coupleCount: number; free: FitParameter[]; compare: FitComparisonChoice; cycle?: number };
   cell: FitCell;
   result: FitResult;
   comparison: ComparisonSummary | null;
@@ -33,12 +33,13 @@ export function fitSheetEntry(f: SeriesFit) {
     potentialScale: f.scale.name,
     free: f.setup.free.map(shortName),
     compared: f.setup.compare,
+    cycle: f.setup.cycle ?? 1,
     cell: { area: f.cell.areaCm2, conc: f.cell.concentrationMolPerCm3, n: f.cell.electronCount, T: f.cell.temperatureK },
     ...fitContract(f.result, f.fileNames, f.comparison),
   };
 }
 
-const modelName = (f: SeriesFit) => `${f.setup.mechanism}, ${f.setup.coupleCount} couple${f.setup.coupleCount > 1 ? 's' : ''}`;
+const modelName = (f: SeriesFit) => `${f.setup.mechanism}, ${f.setup.coupleCount} couple${f.setup.coupleCount > 1 ? 's' : ''}${(f.setup.cycle ?? 1) > 1 ? `, cycle ${f.setup.cycle}` : ''}`;
 const windowText = (r: FitResult) => `${Math.min(...r.windowV).toFixed(3)} … ${Math.max(...r.windowV).toFixed(3)}`;
 
 export function fitTable(fits: readonly SeriesFit[]): TextTable {

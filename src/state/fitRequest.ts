@@ -22,8 +22,10 @@ export interface FitSetup {
   /** Independent couples in the record, 1–4. */
   coupleCount: number;
   free: FitParameter[];
-  /** Potential window fitted, on the series' recording scale (V); null: the whole first cycle. */
+  /** Potential window fitted, on the series' recording scale (V); null: the whole cycle. */
   windowV: [number, number] | null;
+  /** 1-based cycle fitted (earlier cycles are simulated too). */
+  cycle: number;
   /** Also fit the alternative model and say which the data favour. */
   compare: FitComparisonChoice;
 }
@@ -51,8 +53,9 @@ export function mergeFitSetups(stored: unknown): Record<string, FitSetup> {
     const coupleCount = Number.isInteger(v.coupleCount) && (v.coupleCount as number) >= 1 && (v.coupleCount as number) <= 4 ? (v.coupleCount as number) : 1;
     const w = v.windowV;
     const windowV = Array.isArray(w) && w.length === 2 && w.every((x) => typeof x === 'number' && Number.isFinite(x) && Math.abs(x) <= 10) && (w[0] as number) < (w[1] as number) ? [w[0], w[1]] as [number, number] : null;
+    const cycle = Number.isInteger(v.cycle) && (v.cycle as number) >= 1 && (v.cycle as number) <= 1000 ? (v.cycle as number) : 1;
     if (!free.length) continue;
-    out[group] = { mechanism, coupleCount, free, windowV, compare };
+    out[group] = { mechanism, coupleCount, free, windowV, cycle, compare };
   }
   return out;
 }
@@ -62,7 +65,7 @@ export function defaultFitSetup(state: FitSources, group: string): FitSetup {
   const couples = state.series[group]?.result?.analysis.couples ?? [];
   const mechanism: FitMechanism = couples.length > 0 && couples.every((c) => c.regime === 'surface') ? 'surface' : 'E';
   const compare: FitComparisonChoice = mechanism !== 'surface' && fitFilesOf(state, group).ids.length > 1 ? 'mechanism' : 'none';
-  return { mechanism, coupleCount: 1, free: [...DEFAULT_FREE[mechanism]], windowV: null, compare };
+  return { mechanism, coupleCount: 1, free: [...DEFAULT_FREE[mechanism]], windowV: null, cycle: 1, compare };
 }
 
 /** A setup with a new mechanism: its default free parameters, and no E-against-EC comparison for a film. */
@@ -114,6 +117,8 @@ export interface BuiltFitRequest {
   key: string;
   /** What was done to the data before the fit (blanks subtracted, densities fitted per cm²), for the fit's notes. */
   notes: string[];
+  /** True when the files gave current densities: the fit is per cm², its R_u in Ω·cm². */
+  perArea: boolean;
 }
 
 /** The blank each fitted file subtracts (file name, or null), in the order of `ids`. */
@@ -138,6 +143,10 @@ export function fitRequestOf(state: FitSources, group: string, setup: FitSetup):
     throw new Error(`the series mixes current densities (${densities.map((m) => m.fileName).join(', ')}) with currents; fit files of one kind`);
   }
   const cell: FitCell = densities.length ? { ...cellValues, areaCm2: 1 } : cellValues;
+  // Per cm², the ohmic drop is j·(R_u·A): a held R_u (Ω) becomes R_u·A (Ω·cm²) with the cell's area; without one it cannot be used.
+  const areaKnown = Number.isFinite(cellValues.areaCm2) && cellValues.areaCm2 > 0;
+  const cellRuOhm = held.uncompensatedOhm ?? 0;
+  if (densities.length && held.uncompensatedOhm !== undefined) held.uncompensatedOhm = areaKnown ? cellRuOhm * cellValues.areaCm2 : 0;
   const blanks = fitBlanksOf(state, ids);
   const records = measurements.map((m, k) => {
     const blank = blanks[k] ? measurementNamed(state, blanks[k] as string) : null;
@@ -146,12 +155,15 @@ export function fitRequestOf(state: FitSources, group: string, setup: FitSetup):
     return { potentialV: m.potentialV, currentA, timeS: m.timeS, segments: m.segments, cycles: m.cycles, scanRateVPerS: m.scanRateVPerS, scanRateSource: m.scanRateSource };
   });
   const start = { couples: held.alpha === undefined ? [] : Array.from({ length: setup.coupleCount }, () => ({ alpha: held.alpha as number })), shared: held.uncompensatedOhm === undefined ? {} : { uncompensatedOhm: held.uncompensatedOhm } };
-  const options = { mechanism: setup.mechanism, coupleCount: setup.coupleCount, free: setup.free, start, ...(setup.windowV ? { windowV: setup.windowV } : {}) };
+  const options = { mechanism: setup.mechanism, coupleCount: setup.coupleCount, free: setup.free, start, cycle: setup.cycle ?? 1, ...(setup.windowV ? { windowV: setup.windowV } : {}) };
   const notes: string[] = [];
   const pairs = names.flatMap((n, k) => (blanks[k] ? [`${n} − ${blanks[k]}`] : []));
   if (pairs.length) notes.push(`blank subtracted before the fit, as in the analysis: ${pairs.join('; ')}`);
-  if (densities.length) notes.push('the files give current densities (A/cm²) and no area: fitted with A = 1 cm², so D, Γ and C_dl are per cm² of electrode');
-  return { request: { records, fileNames: names, cell, options, compare: setup.compare }, ids, names, cell, scale: fitScaleOf(state, group), key: fitInputKey(state, group, setup), notes };
+  if (densities.length) {
+    notes.push('the files give current densities (A/cm²) and no area: fitted with A = 1 cm², so D, Γ and C_dl are per cm² of electrode and R_u is R_u·A in Ω·cm²');
+    if (cellRuOhm > 0 && !areaKnown) notes.push('R_u of the cell was not used: with current densities it needs the electrode area');
+  }
+  return { request: { records, fileNames: names, cell, options, compare: setup.compare }, ids, names, cell, scale: fitScaleOf(state, group), key: fitInputKey(state, group, setup), notes, perArea: densities.length > 0 };
 }
 
 /** The fit's potentials (E°′ values and intervals, the window) moved onto the display scale. */
@@ -189,7 +201,7 @@ export function seriesFitOf(group: string, entry: { names: string[]; scale: { na
   const { setup } = entry;
   return {
     series: group, fileNames: entry.names, scale: entry.scale, cell: entry.cell, comparison: entry.comparison,
-    setup: { mechanism: setup.mechanism, coupleCount: setup.coupleCount, free: setup.free, compare: setup.compare },
+    setup: { mechanism: setup.mechanism, coupleCount: setup.coupleCount, free: setup.free, compare: setup.compare, cycle: setup.cycle ?? 1 },
     // The sheet needs no per-point model currents.
     result: { ...entry.result, records: entry.result.records.map((rec) => ({ ...rec, indices: new Int32Array(0), modelA: new Float64Array(0) })) },
   };

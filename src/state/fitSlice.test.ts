@@ -124,6 +124,10 @@ describe('fit slice', () => {
     await act.updateSeriesCell('quasi', (o) => ({ ...o, blankFiles: ['electrolyte_only.csv'] }));
     const built = fitRequestOf(store.getState(), 'quasi', act.fitSetupOf('quasi'));
     expect(built.names).toEqual(['quasi_0.csv', 'quasi_1.csv']);
+    expect(built.request.options.cycle).toBe(1);
+    act.setFitSetup('quasi', { cycle: 2 });
+    expect(fitRequestOf(store.getState(), 'quasi', store.getState().fitSetupOf('quasi')).request.options.cycle).toBe(2);
+    act.setFitSetup('quasi', { cycle: 1 });
     expect(built.key).not.toBe(keyBefore);
     const files = Object.values(store.getState().files);
     const m0 = files.find((f) => f.fileName === 'quasi_0.csv')?.measurement;
@@ -136,17 +140,37 @@ describe('fit slice', () => {
   });
 });
 
+describe('a fit of current densities', () => {
+  it('is per cm²: area 1, the cell\'s R_u held as R_u·A (Ω·cm²), said in the notes, and R_u is not carried back', async () => {
+    const store = createHalfwaveStore({ client: createInThreadClient(), storage: null });
+    store.getState().seedSeriesCell('dens', { areaCm2: 0.0707, concentrationMM: 1, resistanceOhm: 80 });
+    const asDensity = (text: string) => {
+      const [, ...rows] = text.trim().split('\n');
+      return ['time_s,potential_V,j (A/cm2)', ...rows.map((r) => {
+        const [t, e, i] = r.split(',').map(Number) as [number, number, number];
+        return `${t},${e},${i / 0.0707}`;
+      })].join('\n') + '\n';
+    };
+    await store.getState().addFiles(csv.map((data, k) => ({ name: `dens_${k}.csv`, data: asDensity(data) })), 'dens');
+    const built = fitRequestOf(store.getState(), 'dens', store.getState().fitSetupOf('dens'));
+    expect(built.perArea).toBe(true);
+    expect(built.cell.areaCm2).toBe(1);
+    expect(built.request.options.start?.shared?.uncompensatedOhm).toBeCloseTo(80 * 0.0707, 12);
+    expect(built.notes.join(' ')).toMatch(/current densities.*A = 1 cm².*Ω·cm²/);
+  });
+});
+
 describe('fit setups read back from a session', () => {
   it('keep what is valid and leave out what is not (unknown mechanism, parameters of another mechanism, a reversed window)', () => {
     expect(mergeFitSetups({
-      good: { mechanism: 'EC', coupleCount: 2, free: ['formalPotentialV', 'followUpRatePerS', 'coverageMolPerCm2'], windowV: [-0.2, 0.3], compare: 'mechanism' },
+      good: { mechanism: 'EC', coupleCount: 2, free: ['formalPotentialV', 'followUpRatePerS', 'coverageMolPerCm2'], windowV: [-0.2, 0.3], cycle: 2, compare: 'mechanism' },
       reversed: { mechanism: 'E', coupleCount: 9, free: ['k0CmPerS'], windowV: [0.3, -0.2], compare: 'none' },
       film: { mechanism: 'surface', coupleCount: 1, free: ['coverageMolPerCm2'], windowV: null, compare: 'mechanism' },
       strange: { mechanism: 'ECE', free: ['k0CmPerS'], compare: 'none' },
       empty: { mechanism: 'E', free: ['followUpRatePerS'], compare: 'none' },
     })).toEqual({
-      good: { mechanism: 'EC', coupleCount: 2, free: ['formalPotentialV', 'followUpRatePerS'], windowV: [-0.2, 0.3], compare: 'mechanism' },
-      reversed: { mechanism: 'E', coupleCount: 1, free: ['k0CmPerS'], windowV: null, compare: 'none' },
+      good: { mechanism: 'EC', coupleCount: 2, free: ['formalPotentialV', 'followUpRatePerS'], windowV: [-0.2, 0.3], cycle: 2, compare: 'mechanism' },
+      reversed: { mechanism: 'E', coupleCount: 1, free: ['k0CmPerS'], windowV: null, cycle: 1, compare: 'none' },
     });
     expect(mergeFitSetups([])).toEqual({});
     expect(mergeFitSetups(null)).toEqual({});

@@ -42,8 +42,8 @@ export const createFitSlice: SliceCreator<FitSlice> = (set, get, deps) => {
         set((s) => ({ fits: { ...s.fits, [group]: failed(setup, toUserError(err)) } }));
         return;
       }
-      const { request, ids, names, cell, scale, key, notes } = built;
-      const entry: FitEntry = { status: 'running', setup, fileIds: ids, fileNames: names, cell, scale, key, progress: null, progressText: 'starting', result: null, comparison: null, error: null, carried: null };
+      const { request, ids, names, cell, scale, key, notes, perArea } = built;
+      const entry: FitEntry = { status: 'running', setup, fileIds: ids, fileNames: names, cell, perArea, scale, key, progress: null, progressText: 'starting', result: null, comparison: null, error: null, carried: null };
       set((s) => ({ fits: { ...s.fits, [group]: entry } }));
       if (ids.length === 0) {
         patchFit(group, { status: 'error', error: { code: 'EMPTY_INPUT', message: `series "${group}" has no voltammogram to fit` } });
@@ -86,8 +86,10 @@ export const createFitSlice: SliceCreator<FitSlice> = (set, get, deps) => {
     },
 
     carryableFitValues(group) {
-      const r = get().fits[group]?.result;
-      return r ? carryableValues(r) : [];
+      const entry = get().fits[group];
+      const r = entry?.result;
+      // A fit per cm² has R_u·A (Ω·cm²), not the cell's R_u (Ω): it is not carried.
+      return r ? carryableValues(r).filter((v) => !(entry?.perArea && v.field === 'resistanceOhm')) : [];
     },
 
     async useFitValues(group) {

@@ -230,6 +230,8 @@ export interface FitEntry {
   fileNames: string[];
   /** The cell of the fit in core units (cm², mol/cm³, n, K). */
   cell: FitCell;
+  /** The files gave current densities: the fit is per cm² (area 1), its R_u in Ω·cm². */
+  perArea?: boolean;
   /** The scale E°′ and the window are shown on, and its offset from the files' recording scale (V). */
   scale: { name: string; offsetV: number };
   /** What the fit depended on (fitRequest.ts: fitInputKey); the fit is current while it is unchanged. */

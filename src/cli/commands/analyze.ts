@@ -69,7 +69,6 @@ Analysis options:
   --n N                 electrons transferred
   --temp CELSIUS        temperature in °C (default: the file's, else 25 °C)
   --scan-rate V_PER_S   scan rate in V/s; beats the time column, preamble and file name
-  --ref NAME            report potentials on this reference scale (see below)
   --json                machine-readable output on stdout
   --csv FILE            also write the results table to FILE
   --inspect             print what was detected in each file (no analysis)

@@ -25,6 +25,7 @@ let dir = '';
 const files: string[] = [];
 const reversible: string[] = [];
 const withLeak: string[] = [];
+const densities: string[] = [];
 const blanks: string[] = [];
 
 beforeAll(() => {
@@ -36,6 +37,11 @@ beforeAll(() => {
   nernst.forEach((v, k) => { reversible.push(join(dir, `nernst_${k}.csv`)); writeFileSync(reversible[k]!, toCsv(v)); });
   // A made-up background (demo only): 3 µA + 4 µA/V·E on top of the quasi-reversible files, and the same background alone as each rate's blank.
   const leak = (v: Voltammogram, withSignal: boolean): Voltammogram => ({ ...v, currentA: Float64Array.from(v.potentialV, (e, i) => (withSignal ? v.currentA[i]! : 0) + 3e-6 + 4e-6 * e) });
+  // The same files written as current densities over their 0.0707 cm², with no area stated.
+  quasi.forEach((v, k) => {
+    densities.push(join(dir, `density_${k}.csv`));
+    writeFileSync(densities[k]!, `Time (s),Potential (V),j (A/cm2)\n${Array.from(v.potentialV, (e, i) => `${v.timeS![i]},${e},${v.currentA[i]! / 0.0707}`).join('\n')}\n`);
+  });
   quasi.forEach((v, k) => {
     withLeak.push(join(dir, `leaky_${k}.csv`)); writeFileSync(withLeak[k]!, toCsv(leak(v, true)));
     blanks.push(join(dir, `blank_${k}.csv`)); writeFileSync(blanks[k]!, toCsv(leak(v, false)));
@@ -124,6 +130,20 @@ describe('halfwave fit', () => {
     expect(Math.abs(c.params.k0! / 0.01 - 1)).toBeLessThan(0.25);
     expect(Math.abs(c.params.D! / 8e-6 - 1)).toBeLessThan(0.05);
     expect(c.notes[0]).toMatch(/^blank subtracted before the fit.*leaky_0\.csv − blank_0\.csv; .*leaky_2\.csv − blank_2\.csv$/);
+  });
+
+  it('current densities are fitted per cm² (area 1, said in the notes): D and k° as from the currents; a mix with currents is refused', async () => {
+    // Per cm², the resistance is R_u·A = 50 Ω × 0.0707 cm² = 3.535 Ω·cm².
+    const r = await run('fit', ...densities, '--conc', '1', '--ru', '3.535', '--compare', 'none', '--json');
+    expect(r.code).toBe(0);
+    const c = JSON.parse(r.stdout) as Contract;
+    expect(Math.abs(c.params.E0! - 0.05)).toBeLessThan(0.002);
+    expect(Math.abs(c.params.k0! / 0.01 - 1)).toBeLessThan(0.25);
+    expect(Math.abs(c.params.D! / 8e-6 - 1)).toBeLessThan(0.05);
+    expect(c.notes.some((n) => /current densities.*A = 1 cm².*Ω·cm²/.test(n))).toBe(true);
+    const mixed = await run('fit', densities[0]!, files[1]!, '--area', '0.0707', '--conc', '1');
+    expect(mixed.code).toBe(2);
+    expect(mixed.stderr).toMatch(/density_0\.csv.*current densities/);
   });
 
   it('--help lists every option with its unit and default', async () => {

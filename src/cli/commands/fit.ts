@@ -88,6 +88,7 @@ export const fitCommand: CliCommand = {
     const blankPaths = parsed.options.get('blank') ?? [];
     const blanks = blankPaths.length ? readInputs(blankPaths, { overrides }).measurements : [];
     const { measurements, notes } = withBlanksSubtracted(read.measurements, blanks, names);
+    if (measurements.some((m) => m.currentKind === 'density')) notes.push('the files give current densities (A/cm²) and no area: fitted with A = 1 cm² (--area is not used), so D, Γ and C_dl are per cm² of electrode and R_u is R_u·A in Ω·cm²');
     const input = fitInput(measurements, args, names);
     const fitted = runFit(input, args, names);
     const { comparison } = fitted;
@@ -119,7 +120,12 @@ function fitInput(measurements: Measurement[], args: FitArgs, names: string[]): 
   });
   // The files' headers as analyze and the screen read them (io/cellFromHeaders.ts), then the flags.
   const headers = cellFromHeaders(measurements).values;
-  const areaCm2 = args.areaCm2 ?? headers.areaCm2;
+  // Current densities (A/cm², no area stated) are fitted per cm² of electrode, as the workbench does; never mixed with currents.
+  const densities = measurements.filter((m) => m.currentKind === 'density');
+  if (densities.length && densities.length < measurements.length) {
+    throw new UsageError(`${densities.map((m) => `"${m.fileName}"`).join(', ')} hold current densities (A/cm²) and the other files currents (A): fit them separately`);
+  }
+  const areaCm2 = densities.length ? 1 : args.areaCm2 ?? headers.areaCm2;
   if (areaCm2 === undefined) throw new UsageError('the electrode area is needed: give --area CM2 (no file states it)');
   const conc = args.concentrationMolPerCm3 ?? headers.concentrationMolPerCm3;
   if (conc === undefined && args.mechanism !== 'surface') throw new UsageError('the bulk concentration is needed for E and EC: give --conc MM');

@@ -217,6 +217,14 @@ describe('analyzeRun with current densities', () => {
     const noArea = runOf(densities, { cell: { concentrationMolPerCm3: 1e-6, areaCm2: null, ruOhm: 100 } });
     expect(noArea.warnings.some((w) => /not iR-corrected/.test(w.message))).toBe(true);
   });
+  it('names a left-out bad point in µA/cm² when the currents are densities', () => {
+    const j = densities[0]!.voltammogram;
+    const spiked = Float64Array.from(j.currentA);
+    spiked[40] = (spiked[40] as number) + 3 * Math.max(...Array.from(j.currentA, Math.abs));
+    const run = runOf([{ ...densities[0]!, voltammogram: { ...j, currentA: spiked } }], { cell: CELL });
+    const note = run.warnings.find((w) => /isolated bad point/.test(w.message))?.message ?? '';
+    expect(note).toMatch(/µA\/cm² at/);
+  });
 });
 
 // A blank of the supporting electrolyte (the simulator's charging current alone, its own RC

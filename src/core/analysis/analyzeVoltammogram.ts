@@ -49,7 +49,7 @@ export function analyzeResolvedVoltammogram(v: Voltammogram, trace: TraceOptions
     (seg) => ({ window: windowForSpan(v.potentialV, seg, 0.015 / resolved.electronCount), order: 2 }),
   );
   const warnings: AnalysisWarning[] = [];
-  if (spikes.length) warnings.push({ code: 'SPIKES', message: spikeMessage(spikes) });
+  if (spikes.length) warnings.push({ code: 'SPIKES', message: spikeMessage(spikes, v.currentKind === 'density' ? 'µA/cm²' : 'µA') });
   if (!sig.timeKnown) warnings.push({ code: 'NO_TIME_AXIS', message: 'no time column and no scan rate: peak charges are not computed' });
   const range = currentRange(sig);
   const scale = Math.max(...[currentRangeEnd(sig, 1), -currentRangeEnd(sig, -1)].map(Math.abs));
@@ -73,8 +73,8 @@ export function analyzeResolvedVoltammogram(v: Voltammogram, trace: TraceOptions
   };
 }
 
-function spikeMessage(spikes: SpikePoint[]): string {
-  const shown = spikes.slice(0, 8).map((p) => `${(p.currentA * 1e6).toPrecision(3)} µA at ${p.potentialV.toFixed(3)} V (point ${p.index})`).join(', ');
+function spikeMessage(spikes: SpikePoint[], unit: 'µA' | 'µA/cm²'): string {
+  const shown = spikes.slice(0, 8).map((p) => `${(p.currentA * 1e6).toPrecision(3)} ${unit} at ${p.potentialV.toFixed(3)} V (point ${p.index})`).join(', ');
   return `${spikes.length} isolated bad point${spikes.length > 1 ? 's' : ''} left out of peak finding and baselines (Hampel test against a running median): ${shown}${spikes.length > 8 ? ', …' : ''}`;
 }
 

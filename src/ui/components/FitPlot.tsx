@@ -22,12 +22,13 @@ export function FitPlot({ group, setup, scale }: { group: string; setup: FitSetu
   const offsetV = result && entry ? entry.scale.offsetV : scale.offsetV;
   const scaleName = result && entry ? entry.scale.name : scale.name;
   const [lo, hi] = setup.windowV ?? [null, null];
+  const cycle = (result && entry ? entry.setup.cycle : setup.cycle) ?? 1;
   const fig = useMemo(() => {
     const files = measurements.flatMap((m, k) => (m ? [{ name: m.fileName, scanRateVPerS: m.scanRateVPerS, potentialV: m.potentialV, currentA: currents[k] ?? m.currentA, cycles: m.cycles }] : []));
     const model = result && files.length === result.records.length ? result.records : null;
     const windowV: [number, number] | null = lo === null || hi === null ? null : [lo + offsetV, hi + offsetV];
-    return buildFitFigure({ files, model, offsetV, scaleName, convention, windowV, dragMode });
-  }, [measurements, currents, result, offsetV, scaleName, convention, lo, hi, dragMode]);
+    return buildFitFigure({ files, model, offsetV, scaleName, convention, windowV, dragMode, cycle });
+  }, [measurements, currents, result, offsetV, scaleName, convention, lo, hi, dragMode, cycle]);
   const act = halfwaveActions();
   const onRange = (a: number, b: number) => act.setFitSetup(group, { windowV: [Math.min(a, b) - offsetV, Math.max(a, b) - offsetV] });
   return (

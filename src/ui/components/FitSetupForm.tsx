@@ -39,6 +39,8 @@ const round = (v: number) => Number(v.toFixed(4));
 export function FitSetupForm({ group, setup, scale }: { group: string; setup: FitSetup; scale: DisplayScale }) {
   const running = useHalfwave((s) => s.fits[group]?.status === 'running');
   const fileCount = useHalfwave((s) => s.series[group]?.fileIds.length ?? 0);
+  // Cycles every file of the series has (the fit needs the chosen cycle in each).
+  const cycles = useHalfwave((s) => Math.max(1, Math.min(...(s.series[group]?.fileIds ?? []).map((id) => s.files[id]?.measurement?.cycles.length ?? 1))));
   const act = halfwaveActions();
   const change = (patch: Partial<FitSetup>) => act.setFitSetup(group, patch);
   const toggle = (p: FitParameter, on: boolean) => change({ free: on ? [...setup.free, p] : setup.free.filter((x) => x !== p) });
@@ -54,6 +56,8 @@ export function FitSetupForm({ group, setup, scale }: { group: string; setup: Fi
       <SelectField label="Mechanism" value={setup.mechanism} options={MECHANISMS} testId="fit-mechanism" onChange={(m) => change({ mechanism: m })} />
       <SelectField label="Couples in the record" value={String(setup.coupleCount)} options={['1', '2', '3', '4'].map((v) => ({ value: v, label: v }))}
         testId="fit-couples" onChange={(v) => change({ coupleCount: Number(v) })} />
+      <SelectField label="Cycle fitted" value={String(Math.min(setup.cycle ?? 1, cycles))} options={Array.from({ length: cycles }, (_, k) => ({ value: String(k + 1), label: k === 0 ? '1 (earlier cycles are simulated too)' : String(k + 1) }))}
+        testId="fit-cycle" onChange={(v) => change({ cycle: Number(v) })} />
       <fieldset className="fit-free" data-testid="fit-free">
         <legend>Fitted (unticked values are held)</legend>
         {freeChoicesOf(setup.mechanism).map((p) => (
