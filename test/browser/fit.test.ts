@@ -62,6 +62,16 @@ describe('fit view on the demo', () => {
     expect(await seriousViolations(page)).toEqual([]);
   });
 
+  it('the notebook report carries the current fit: model, window and the parameter table', async () => {
+    const page = app.page;
+    await page.getByTestId('view-report').click();
+    await page.getByTestId('report-fit').waitFor({ timeout: 30_000 });
+    expect(await page.getByTestId('report-fit-model').textContent()).toMatch(/Model (E|EC), 1 couple, cycle 1; 6 files fitted together/);
+    expect(await page.getByTestId('report-fit').locator('th', { hasText: 'E°′' }).count()).toBe(1);
+    await page.getByTestId('view-fit').click();
+    await page.getByTestId('fit-results').waitFor();
+  });
+
   it('"use these values" puts the fitted α into the series’ cell, and undo takes it back', async () => {
     const page = app.page;
     expect(await page.getByTestId('alpha').inputValue()).toBe('');

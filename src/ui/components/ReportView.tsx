@@ -6,6 +6,7 @@
  * print dialog can save it as PDF.
  */
 import { useEffect, useState } from 'react';
+import { fitParameterRows } from '../../state/fitView';
 import { useHalfwave } from '../../state/react';
 import { reportModel } from '../../state/report';
 import { figureImageUrl } from '../figureExport';
@@ -50,6 +51,7 @@ export function ReportView() {
           <div key={x.key}><dt>{x.name}</dt><dd>{x.formula}<br />Source: {x.source}<br />Inputs: {x.inputs.map(([k, v]) => `${k} = ${v}`).join('; ')}{x.note ? <><br />{x.note}</> : null}</dd></div>
         ))}
       </dl>
+      <ReportFit group={group} />
       <h3>Methods</h3>
       <ul>{model.methods.map((m) => <li key={m}>{m}</li>)}</ul>
       <h3>Parameters and cell</h3>
@@ -60,6 +62,32 @@ export function ReportView() {
         <tbody>{model.files.map((f) => <tr key={f.name}><th scope="row">{f.name}</th><td>{bytes(f.sizeBytes)}</td><td>{scanRate(f.scanRateVPerS)}</td><td className="hash">{f.sha256 ?? '—'}</td><td className="wrap">{f.layout}</td></tr>)}</tbody>
       </table>
     </section>
+  );
+}
+
+/** The series' whole-curve fit, while it is current: model, window, parameters with errors, and its notes. */
+function ReportFit({ group }: { group: string }) {
+  const entry = useHalfwave((s) => s.fits[group]);
+  const current = useHalfwave((s) => s.fitIsCurrent(group));
+  const r = entry?.status === 'ready' ? entry.result : null;
+  if (!entry || !r || !current) return null;
+  const rows = fitParameterRows(r, entry.scale.name);
+  return (
+    <>
+      <h3>Whole-curve fit</h3>
+      <p data-testid="report-fit-model">
+        Model {entry.setup.mechanism}, {entry.setup.coupleCount} couple{entry.setup.coupleCount > 1 ? 's' : ''}, cycle {entry.setup.cycle ?? 1}; {entry.fileNames.length} files fitted together;
+        window {fixed(Math.min(...r.windowV), 3)} … {fixed(Math.max(...r.windowV), 3)} V vs {entry.scale.name}; {r.converged ? `converged after ${r.iterations} iterations` : 'did not converge'}; rms residual {sci(r.rmsA)} A.
+        Nonlinear least squares of simulated to measured current (Levenberg–Marquardt); standard errors from the Jacobian at the optimum.
+      </p>
+      <table className="data" data-testid="report-fit">
+        <thead><tr><th scope="col">Parameter</th><th scope="col">Value</th><th scope="col">± standard error</th><th scope="col">95 % interval</th><th scope="col">What the data say</th></tr></thead>
+        <tbody>{rows.map((p) => (
+          <tr key={`${p.key}-${p.couple ?? 'all'}`}><th scope="row">{p.symbol}{p.couple !== null && entry.setup.coupleCount > 1 ? ` (couple ${p.couple + 1})` : ''}{p.unit ? ` / ${p.unit}` : ''}</th><td>{p.value}</td><td>{p.error}</td><td>{p.interval}</td><td className="wrap">{p.reading}</td></tr>
+        ))}</tbody>
+      </table>
+      {r.notes.length ? <ul>{r.notes.map((n) => <li key={n}>{n}</li>)}</ul> : null}
+    </>
   );
 }
 
