@@ -198,11 +198,29 @@ export function attachAutosave(store: HalfwaveStore, storage: StorageAdapter, de
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => {
       timer = null;
-      void save().catch((err: unknown) => store.setState({
-        notice: isQuotaError(err) ? "The browser's storage is full: the latest changes were not kept for the next visit; what was saved before is still there." : `Autosave failed: ${(err as Error).message}`,
-      }));
+      run();
     }, delayMs);
   });
+  // One save at a time: a save that started earlier, from an older state, must not finish after a
+  // newer one and put back its view of what was kept. A change during a save saves once more after it.
+  let running = false;
+  let again = false;
+  const run = () => {
+    if (running) {
+      again = true;
+      return;
+    }
+    running = true;
+    void save().catch((err: unknown) => store.setState({
+      notice: isQuotaError(err) ? "The browser's storage is full: the latest changes were not kept for the next visit; what was saved before is still there." : `Autosave failed: ${(err as Error).message}`,
+    })).finally(() => {
+      running = false;
+      if (again) {
+        again = false;
+        run();
+      }
+    });
+  };
   return () => {
     if (timer) clearTimeout(timer);
     unsubscribe();

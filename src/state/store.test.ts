@@ -310,6 +310,41 @@ describe('autosave keeps the files themselves', () => {
     expect(numbersOf(reloaded)).toEqual(numbersOf(store));
   });
 
+  it('saves one at a time: a slow save from an older state cannot put back its view of what was kept', async () => {
+    const store = newStore();
+    const storage = memoryStorageAdapter();
+    // The first byte write hangs until released, as a slow disk would; any later write finds the storage full.
+    let release: () => void = () => undefined;
+    const gate = new Promise<void>((resolve) => (release = resolve));
+    let writes = 0;
+    let inFlight = 0;
+    let mostInFlight = 0;
+    const write = storage.writeBytes;
+    storage.writeBytes = async (key, b) => {
+      writes++;
+      mostInFlight = Math.max(mostInFlight, ++inFlight);
+      try {
+        if (writes === 1) {
+          await gate;
+          return await write(key, b);
+        }
+        throw new DOMException('the storage quota is used up', 'QuotaExceededError');
+      } finally {
+        inFlight--;
+      }
+    };
+    const detach = attachAutosave(store, storage, 1);
+    await store.getState().addFiles([{ name: 'slow.csv', data: simulatedCsv(0.05) }], 'a');
+    await vi.waitFor(() => expect(writes).toBe(1), { timeout: 20_000, interval: 5 });
+    await store.getState().addFiles([{ name: 'late.csv', data: simulatedCsv(0.2) }], 'a');
+    release();
+    const late = Object.values(store.getState().files).find((f) => f.fileName === 'late.csv');
+    await vi.waitFor(() => expect(store.getState().notKept).toEqual([late?.sha256]), { timeout: 20_000, interval: 5 });
+    // The change waited for the running save instead of starting a second one beside it.
+    expect(mostInFlight).toBe(1);
+    detach();
+  });
+
   it('when storage is full it says which files were not kept, and keeps what was saved', async () => {
     const store = newStore();
     const storage = memoryStorageAdapter();

@@ -55,7 +55,9 @@ describe('changing settings, exporting, saving', () => {
 
   it('a new smoothing window re-runs the analysis and the smoothed curve can be drawn', async () => {
     const page = app.page;
-    await page.getByTestId('show-smoothed').check();
+    // A click, then a wait: the box is drawn from the store at the next frame (check() reads it at once).
+    await page.getByTestId('show-smoothed').click();
+    await page.waitForFunction(() => (document.querySelector('[data-testid=show-smoothed]') as HTMLInputElement | null)?.checked === true, null, { timeout: 10_000 });
     await commitNumber(app, 'smoothing-window', '11');
     await waitForAnalysis(page);
     await page.waitForFunction(() => ((document.querySelector('[data-testid=trace-plot]') as unknown as { data?: { name: string }[] })?.data ?? []).some((d) => d.name.startsWith('smoothed')), null, { timeout: 30_000 });

@@ -4,12 +4,15 @@
  */
 import { blankNames, blankOf } from '../../state/runInput';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
+import { resolveCell } from '../../state/seriesCell';
 import type { SeriesCell } from '../../state/types';
 
 const SERIES_CHOICE = '';
 const NO_BLANK = '\u0000none';
 
 export function CellBlankFields({ group, cell, set }: { group: string; cell: SeriesCell; set: (patch: Partial<SeriesCell>) => void }) {
+  // The blanks as the store has them at event time (components render once per frame).
+  const blanksNow = () => resolveCell(halfwaveActions(), group).cell.blankFiles;
   const names = useHalfwaveShallow((s) => [...new Set(s.fileOrder.flatMap((id) => (s.files[id]?.measurement ? [s.files[id].fileName] : [])))]);
   const free = names.filter((n) => !cell.blankFiles.includes(n));
   return (
@@ -18,12 +21,12 @@ export function CellBlankFields({ group, cell, set }: { group: string; cell: Ser
       {cell.blankFiles.length ? (
         <ul className="chips">
           {cell.blankFiles.map((n) => (
-            <li key={n}>{n} <button type="button" aria-label={`Stop subtracting ${n}`} onClick={() => set({ blankFiles: cell.blankFiles.filter((x) => x !== n) })}>×</button></li>
+            <li key={n}>{n} <button type="button" aria-label={`Stop subtracting ${n}`} onClick={() => set({ blankFiles: blanksNow().filter((x) => x !== n) })}>×</button></li>
           ))}
         </ul>
       ) : <p className="hint">None: peaks are measured on the currents as recorded.</p>}
       {free.length ? (
-        <select aria-label="Add a blank" data-testid="add-blank" value="" onChange={(e) => e.target.value && set({ blankFiles: [...cell.blankFiles, e.target.value] })}>
+        <select aria-label="Add a blank" data-testid="add-blank" value="" onChange={(e) => e.target.value && set({ blankFiles: [...blanksNow().filter((x) => x !== e.target.value), e.target.value] })}>
           <option value="">add a blank…</option>
           {free.map((n) => <option key={n} value={n}>{n}</option>)}
         </select>

@@ -43,11 +43,16 @@ export function FitSetupForm({ group, setup, scale }: { group: string; setup: Fi
   const cycles = useHalfwave((s) => Math.max(1, Math.min(...(s.series[group]?.fileIds ?? []).map((id) => s.files[id]?.measurement?.cycles.length ?? 1))));
   const act = halfwaveActions();
   const change = (patch: Partial<FitSetup>) => act.setFitSetup(group, patch);
-  const toggle = (p: FitParameter, on: boolean) => change({ free: on ? [...setup.free, p] : setup.free.filter((x) => x !== p) });
+  // From the store at event time, so quick clicks build on each other (components render once per frame).
+  const toggle = (p: FitParameter, on: boolean) => {
+    const free = act.fitSetupOf(group).free;
+    change({ free: on ? [...free.filter((x) => x !== p), p] : free.filter((x) => x !== p) });
+  };
   const shown = setup.windowV ? setup.windowV.map((v) => round(v + scale.offsetV)) : null;
   const setEnd = (k: 0 | 1, v: number | null) => {
     if (v === null) return;
-    const other = shown ? shown[1 - k] as number : v;
+    const stored = act.fitSetupOf(group).windowV;
+    const other = stored ? round((stored[1 - k] as number) + scale.offsetV) : v;
     const ends = (k === 0 ? [v, other] : [other, v]).map((x) => x - scale.offsetV) as [number, number];
     change({ windowV: ends });
   };

@@ -20,10 +20,14 @@ export function WorkingWindowPanel() {
   const scale = useSeriesScale(group);
   if (!group) return null;
   const set = halfwaveActions().setWorkingWindow;
+  // Handlers read the choice from the store, not from this render: a second pick before the next
+  // frame's render must build on the first.
+  const now = () => halfwaveActions().workingWindows[group];
   const pick = (material: string, medium: string) => set(group, material === NONE ? null : { material: material as ElectrodeMaterial, medium: (medium || 'aqueous-neutral') as WindowMedium });
   const edit = (which: 'lowerV' | 'upperV', displayed: number | null) => {
-    if (!choice || !shown) return;
-    const { [which]: _old, ...rest } = choice;
+    const current = now();
+    if (!current || !shown) return;
+    const { [which]: _old, ...rest } = current;
     set(group, displayed === null ? rest : { ...rest, [which]: displayed - shown.offsetV });
   };
   return (
@@ -31,14 +35,14 @@ export function WorkingWindowPanel() {
       <h2 id="window-title">Working window</h2>
       <div className="field-grid">
         <label className="field">Working electrode
-          <select value={choice?.material ?? NONE} data-testid="window-material" onChange={(e) => pick(e.target.value, choice?.medium ?? '')}>
+          <select value={choice?.material ?? NONE} data-testid="window-material" onChange={(e) => pick(e.target.value, now()?.medium ?? '')}>
             <option value={NONE}>not shown</option>
             {ELECTRODE_MATERIALS.map((m) => <option key={m.id} value={m.id}>{m.label}</option>)}
           </select>
         </label>
         {choice ? (
           <label className="field">Medium
-            <select value={choice.medium} data-testid="window-medium" onChange={(e) => pick(choice.material, e.target.value)}>
+            <select value={choice.medium} data-testid="window-medium" onChange={(e) => pick(now()?.material ?? choice.material, e.target.value)}>
               {WINDOW_MEDIA.map((m) => <option key={m.id} value={m.id}>{m.label}</option>)}
             </select>
           </label>
