@@ -83,13 +83,13 @@ export function SeriesView() {
       <div className="overlay-bar toolbar" role="group" aria-label="Overlay of the series">
         <label>
           Scale currents as{' '}
-          <select value={overlay.normalisation} data-testid="overlay-scaling" onChange={(e) => act.setView({ seriesOverlay: { ...overlay, normalisation: e.target.value as OverlayNormalisation } })}>
+          <select value={overlay.normalisation} data-testid="overlay-scaling" onChange={(e) => act.setView({ seriesOverlay: { ...halfwaveActions().seriesOverlay, normalisation: e.target.value as OverlayNormalisation } })}>
             {SCALINGS.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
           </select>
         </label>
         <label>
           Cycle{' '}
-          <select value={overlay.cycle} data-testid="overlay-cycle" onChange={(e) => act.setView({ seriesOverlay: { ...overlay, cycle: Number(e.target.value) } })}>
+          <select value={overlay.cycle} data-testid="overlay-cycle" onChange={(e) => act.setView({ seriesOverlay: { ...halfwaveActions().seriesOverlay, cycle: Number(e.target.value) } })}>
             {Array.from({ length: cycles }, (_, k) => <option key={k} value={k + 1}>{k + 1}</option>)}
           </select>
         </label>
