@@ -79,6 +79,8 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     } catch (err) {
       const kept = get().files[id]?.measurement ?? null;
       patch(id, { status: kept ? 'ready' : 'error', progress: 0, error: toUserError(err) });
+      // Series fits wait while files are read (seriesSlice.ts); a failed last file must release them too.
+      get().scheduleGroup(entry.group);
     }
   }
 
