@@ -5,7 +5,8 @@
 import type { AnalysisClient } from '../worker/client';
 import { spawnAnalysisClient } from '../worker/spawn';
 import { DEMO_SERIES_CELLS, loadDemoInputs } from './demo';
-import { attachAutosave, restoreAutosave } from './sessionActions';
+import { attachAutosave } from './autosave';
+import { restoreAutosave } from './sessionActions';
 import { defaultStorageAdapter } from './storage';
 import { createHalfwaveStore } from './store';
 import type { HalfwaveStore } from './types';
