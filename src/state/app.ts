@@ -5,7 +5,8 @@
 import type { AnalysisClient } from '../worker/client';
 import { spawnAnalysisClient } from '../worker/spawn';
 import { DEMO_SERIES_CELLS, loadDemoInputs } from './demo';
-import { attachAutosave, restoreAutosave } from './sessionActions';
+import { attachAutosave } from './autosave';
+import { restoreAutosave } from './sessionActions';
 import { defaultStorageAdapter } from './storage';
 import { createHalfwaveStore } from './store';
 import type { HalfwaveStore } from './types';
@@ -31,10 +32,14 @@ export function crashAnalysisWorkers(): void {
  * one; on a first visit it loads the demo scenario instead.
  */
 export async function startApp(store: HalfwaveStore = getAppStore(), storage = defaultStorageAdapter()): Promise<void> {
+  // The demo's one chunk is fetched while the browser's storage is read, not after (on a
+  // first visit the two waits would otherwise add up); a restored workspace leaves it unused.
+  const demoLoading = loadDemoInputs();
+  demoLoading.catch(() => undefined);
   const restored = await restoreAutosave(store, storage);
   attachAutosave(store, storage);
   if (restored) return;
-  const demo = await loadDemoInputs();
+  const demo = await demoLoading;
   if (demo.length === 0) return;
   store.setState({ notice: `Loading ${demo.length} demo voltammograms, simulated by Halfwave (not measurements).` });
   // One scan-rate series per demo scenario: the file name up to its scan-rate part.

@@ -10,6 +10,7 @@ import { WorkerLostError } from '../worker/errors';
 import type { ImportOverrides } from '../io/types';
 import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
 import { mergeFileSettings } from './settings';
+import { bytesOf, textBlob } from './textBytes';
 import { toUserError, type FileEntry, type FileInput, type FilesSlice, type RestoredFile, type SliceCreator } from './types';
 
 export const DEFAULT_GROUP = 'series 1';
@@ -51,7 +52,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
 
   /** Reads a file in a worker; when the worker stops mid-file, reads it once more from the kept bytes. */
   async function readFile(entry: FileEntry, overrides: ImportOverrides, id: string) {
-    const ask = async () => deps.client.request('import', { fileName: entry.fileName, data: await entry.source.arrayBuffer(), overrides }, {
+    const ask = async () => deps.client.request('import', { fileName: entry.fileName, data: await bytesOf(entry.source), overrides }, {
       onProgress: (fraction) => patch(id, { progress: fraction }),
     });
     try {
@@ -78,6 +79,8 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     } catch (err) {
       const kept = get().files[id]?.measurement ?? null;
       patch(id, { status: kept ? 'ready' : 'error', progress: 0, error: toUserError(err) });
+      // Series fits wait while files are read (seriesSlice.ts); a failed last file must release them too.
+      get().scheduleGroup(entry.group);
     }
   }
 
@@ -116,7 +119,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   /** Adds files, each with its series, import overrides and (when restoring) its own windows and baselines; reads them. */
   async function restoreFiles(records: RestoredFile[]): Promise<string[]> {
     const entries: FileEntry[] = records.map((input) => {
-      const source = typeof input.data === 'string' ? new Blob([input.data], { type: 'text/plain' }) : input.data;
+      const source = typeof input.data === 'string' ? textBlob(input.data) : input.data;
       return {
         id: `file-${nextId++}`, fileName: input.name, sizeBytes: source.size, source, sha256: null, group: input.group,
         status: 'queued', progress: 0, error: null, measurement: null, warnings: [], overrides: input.overrides,

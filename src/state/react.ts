@@ -11,20 +11,42 @@ import type { HalfwaveState } from './types';
 
 type Listener = () => void;
 
+/**
+ * While files are being read, components hear of changes at most this often (ms): each render
+ * lays out and paints the growing file list again, on the same thread that passes every worker
+ * answer on and sends the next file, so drawing every frame slowed the reading itself.
+ */
+export const READING_FRAME_MS = 200;
+
 /** The store as React sees it: the same state, with change notices coalesced per frame. */
-function framedStore(store: StoreApi<HalfwaveState>): StoreApi<HalfwaveState> {
+export function framedStore(store: StoreApi<HalfwaveState>): StoreApi<HalfwaveState> {
   const listeners = new Set<Listener>();
   let scheduled = false;
+  let waiting: ReturnType<typeof setTimeout> | null = null;
+  let lastFlushMs = -Infinity;
   const flush = () => {
     scheduled = false;
+    lastFlushMs = performance.now();
     for (const l of [...listeners]) l();
   };
-  store.subscribe(() => {
-    if (scheduled) return;
-    scheduled = true;
-    // A hidden page gets no animation frames: fall back to a timer so it still catches up.
+  // A hidden page gets no animation frames: fall back to a timer so it still catches up.
+  const nextFrame = () => {
+    waiting = null;
     if (typeof requestAnimationFrame === 'function' && globalThis.document?.visibilityState !== 'hidden') requestAnimationFrame(flush);
     else setTimeout(flush, 16);
+  };
+  store.subscribe((state) => {
+    const reading = state.importBatch !== null;
+    // The last file read: draw at the next frame, not at the end of the wait.
+    if (waiting && !reading) {
+      clearTimeout(waiting);
+      nextFrame();
+    }
+    if (scheduled) return;
+    scheduled = true;
+    const waitMs = reading ? lastFlushMs + READING_FRAME_MS - performance.now() : 0;
+    if (waitMs > 0) waiting = setTimeout(nextFrame, waitMs);
+    else nextFrame();
   });
   return {
     ...store,

@@ -89,6 +89,30 @@ export function cellFromPreambles(measurements: readonly Measurement[]): { value
   return { values, evidence, notes: found.notes };
 }
 
+type GroupPreambles = { measurements: Measurement[]; fromFiles: ReturnType<typeof cellFromPreambles> };
+
+/**
+ * What a group's file headers state, kept while the store's files and their order are the same
+ * objects: one state is asked many times (each file read and analysed asks for its series'
+ * cell), and reading every header of the group each time made a batch quadratic. The store
+ * replaces these objects on every change, never edits them in place.
+ */
+const preambleMemo = new WeakMap<CellSources['files'], Map<string | null, { fileOrder: string[]; value: GroupPreambles }>>();
+
+function groupPreambles(state: CellSources, group: string | null): GroupPreambles {
+  const byGroup = preambleMemo.get(state.files) ?? new Map<string | null, { fileOrder: string[]; value: GroupPreambles }>();
+  preambleMemo.set(state.files, byGroup);
+  const hit = byGroup.get(group);
+  if (hit && hit.fileOrder === state.fileOrder) return hit.value;
+  const measurements = group === null ? [] : state.fileOrder
+    .map((id) => state.files[id])
+    .filter((f) => f?.group === group && f.measurement)
+    .map((f) => f?.measurement as Measurement);
+  const value = { measurements, fromFiles: cellFromPreambles(measurements) };
+  byGroup.set(group, { fileOrder: state.fileOrder, value });
+  return value;
+}
+
 export interface CellSources {
   settings: AnalysisSettings;
   seriesCells: Record<string, Partial<SeriesCell>>;
@@ -97,11 +121,7 @@ export interface CellSources {
 }
 
 export function resolveCell(state: CellSources, group: string | null): ResolvedCell {
-  const measurements = group === null ? [] : state.fileOrder
-    .map((id) => state.files[id])
-    .filter((f) => f?.group === group && f.measurement)
-    .map((f) => f?.measurement as Measurement);
-  const fromFiles = cellFromPreambles(measurements);
+  const { measurements, fromFiles } = groupPreambles(state, group);
   const own = group === null ? {} : (state.seriesCells[group] ?? {});
   const cell = { ...defaultCell(state.settings), ...fromFiles.values, ...own };
   const origin = Object.fromEntries(CELL_FIELDS.map((k) => [k, k in own ? 'entered' : k in fromFiles.values ? 'header' : 'default'])) as Record<CellField, CellOrigin>;

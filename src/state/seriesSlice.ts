@@ -1,7 +1,7 @@
 /**
  * Scan-rate series: the files of one group, each with its own analysis (its own windows and
  * baselines), combined in the worker into ip–v½ fits, log–log slope, Ep–log v, D, k° and Γ.
- * A series is re-run shortly after any of its files is re-analysed.
+ * A series is re-run shortly after any of its files is re-analysed, once no file is being read.
  */
 import type { RunFileResult } from '../core/analysis/runTypes';
 import { CancelledError } from '../worker/errors';
@@ -18,6 +18,11 @@ export function groupSettled(s: Pick<HalfwaveState, 'fileOrder' | 'files' | 'res
   });
 }
 
+/** True while a file of any series waits to be read or is being read. */
+export function readingFiles(s: Pick<HalfwaveState, 'fileOrder' | 'files'>): boolean {
+  return s.fileOrder.some((id) => s.files[id]?.status === 'queued' || s.files[id]?.status === 'importing');
+}
+
 /** The finished fits of the exported series (null: all) whose files and cell have not changed since. */
 function currentFits(s: HalfwaveState, group: string | null) {
   return Object.entries(s.fits).flatMap(([g, f]) => (f.result && f.status === 'ready' && (group === null || g === group) && s.fitIsCurrent(g)
@@ -27,6 +32,8 @@ function currentFits(s: HalfwaveState, group: string | null) {
 export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => {
   const running = new Map<string, AbortController>();
   const timers = new Map<string, ReturnType<typeof setTimeout>>();
+  /** Settled series whose fit waits until no file is being read. */
+  const deferred = new Set<string>();
 
   return {
     series: {},
@@ -91,7 +98,14 @@ export const createSeriesSlice: SliceCreator<SeriesSlice> = (set, get, deps) => 
         // again for each of them (and its results copied to a worker each time): wait for the
         // last one, whose analysis schedules the group again.
         if (!groupSettled(get(), group)) return;
-        void get().analyzeGroup(group);
+        // A series fit can hold a worker for a second (its working curves are simulated) while
+        // other series' files queue behind it: fit once the reading is done. The last file read
+        // schedules its own series, which brings the waiting ones along.
+        deferred.add(group);
+        if (readingFiles(get())) return;
+        const waiting = [...deferred];
+        deferred.clear();
+        for (const g of waiting) if (groupSettled(get(), g)) void get().analyzeGroup(g);
       }, delayMs));
     },
   };

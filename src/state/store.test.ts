@@ -5,7 +5,8 @@
  */
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
-import { AUTOSAVE_KEY, attachAutosave, openSessionText, restoreAutosave, saveSessionText } from './sessionActions';
+import { attachAutosave } from './autosave';
+import { AUTOSAVE_KEY, openSessionText, restoreAutosave, saveSessionText } from './sessionActions';
 import { analysedCurrentOf } from './runInput';
 import { resolveCell } from './seriesCell';
 import { defaultSettings } from './settings';

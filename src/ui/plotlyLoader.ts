@@ -1,6 +1,6 @@
 /**
  * Loads Plotly's basic bundle once (its own same-origin chunk). `preloadPlotly` starts the load at
- * app start, so the bundle parses while the workers read the first files instead of after them.
+ * app start, so the bundle is evaluated while the workers start, before the first files' answers.
  */
 import type PlotlyBasic from 'plotly.js-basic-dist-min';
 

@@ -129,7 +129,8 @@ describe('fit view on the demo', () => {
     expect(to - from).toBeGreaterThan(0.1);
     await page.waitForFunction(() => ((document.querySelector('[data-testid=fit-plot]') as unknown as { layout?: { shapes?: unknown[] } })?.layout?.shapes ?? []).length === 1, null, { timeout: 10_000 });
     await page.getByTestId('fit-window-clear').click();
-    expect(await page.getByTestId('fit-window-from').inputValue()).toBe('');
+    await page.waitForFunction(() => (document.querySelector('[data-testid=fit-window-from]') as HTMLInputElement | null)?.value === '', null, { timeout: 10_000 });
+    expect(await page.getByTestId('fit-window-to').inputValue()).toBe('');
   });
 
   it('stayed free of console errors, page errors and outside requests', () => {
