@@ -6,29 +6,22 @@
  */
 import { useMemo } from 'react';
 import type { FitSetup } from '../../state/types';
-import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
+import { useHalfwave } from '../../state/react';
 import '../fit.css';
 import { FitPlot } from './FitPlot';
 import { FitResults } from './FitResults';
 import { FitSetupForm } from './FitSetupForm';
+import { SeriesPicker, useShownSeries } from './SeriesPicker';
 import { useSeriesScale } from './useSeriesCell';
 
 export function FitPanel() {
-  const groups = useHalfwaveShallow((s) => s.groups());
-  const chosen = useHalfwave((s) => s.selectedGroup);
-  const group = chosen && groups.includes(chosen) ? chosen : (groups[0] ?? null);
+  const { groups, group } = useShownSeries();
   const status = useHalfwave((s) => (group ? s.fits[group]?.status : undefined));
-  const act = halfwaveActions();
   return (
     <section className="panel fit" aria-labelledby="fit-title" data-testid="fit-view">
       <div className="toolbar">
         <h2 id="fit-title">Whole-curve fit</h2>
-        <label>
-          Series{' '}
-          <select value={group ?? ''} data-testid="fit-group" onChange={(e) => act.selectGroup(e.target.value)}>
-            {groups.map((g) => <option key={g} value={g}>{g}</option>)}
-          </select>
-        </label>
+        <SeriesPicker groups={groups} group={group} testId="fit-group" />
         <span className="status" role="status" data-testid="fit-status">{statusText(status)}</span>
       </div>
       {group ? <FitSeries key={group} group={group} /> : <p className="empty">Load the voltammograms of a scan-rate series to fit them.</p>}

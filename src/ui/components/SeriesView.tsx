@@ -14,6 +14,7 @@ import { CellSummary } from './CellSummary';
 import { FigureExportButtons } from './FigureExportButtons';
 import { PlotlyChart } from './PlotlyChart';
 import { SeriesHeadline } from './SeriesHeadline';
+import { SeriesPicker, useShownSeries } from './SeriesPicker';
 import { SeriesTable } from './SeriesTable';
 import { useSeriesCell, useSeriesScale } from './useSeriesCell';
 
@@ -24,9 +25,7 @@ const SCALINGS: { id: OverlayNormalisation; label: string }[] = [
 type FigureId = 'overlay' | 'current' | 'logLog' | 'peakPotential';
 
 export function SeriesView() {
-  const groups = useHalfwaveShallow((s) => s.groups());
-  const chosen = useHalfwave((s) => s.selectedGroup);
-  const group = chosen && groups.includes(chosen) ? chosen : (groups[0] ?? null);
+  const { groups, group } = useShownSeries();
   const entry = useHalfwave((s) => (group ? s.series[group] : undefined));
   const overlay = useHalfwave((s) => s.seriesOverlay);
   const convention = useHalfwave((s) => s.convention);
@@ -53,12 +52,7 @@ export function SeriesView() {
     <section className="panel series" aria-labelledby="series-title" data-testid="series-view">
       <div className="toolbar">
         <h2 id="series-title">Scan-rate series</h2>
-        <label>
-          Series{' '}
-          <select value={group ?? ''} data-testid="series-group" onChange={(e) => { setCoupleIndex(0); act.selectGroup(e.target.value); }}>
-            {groups.map((g) => <option key={g} value={g}>{g}</option>)}
-          </select>
-        </label>
+        <SeriesPicker groups={groups} group={group} testId="series-group" onPick={() => setCoupleIndex(0)} />
         {couples.length > 1 ? (
           <label>
             Couple{' '}
