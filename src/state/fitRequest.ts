@@ -8,12 +8,12 @@
  */
 import type { FitCell, FitComparisonChoice, FitMechanism, FitModelValues, FitParameter, FitResult } from '../core/fit';
 import { COUPLE_PARAMETERS, DEFAULT_FREE } from '../core/fit/fitParameters';
-import { subtractBlank } from '../core/background/subtractBlank';
+import { perAreaFit } from '../core/fit/perAreaFit';
 import { roundToUncertainty } from '../core/statistics/roundToUncertainty';
 import type { SeriesFit } from '../io/fitSheet';
 import type { FitRequest } from '../worker/fitRun';
 import { displayScale, runScaleKey, scaleFromRunKey } from './display';
-import { blankNames, blankOf, measurementNamed, seriesCellValues } from './runInput';
+import { analysedCurrentOf, blankNames, blankOf, measurementNamed, seriesCellValues } from './runInput';
 import { resolveCell } from './seriesCell';
 import type { HalfwaveState } from './types';
 
@@ -137,21 +137,16 @@ export function fitRequestOf(state: FitSources, group: string, setup: FitSetup):
     if (!m) throw new Error(`file ${id} has no measurement`);
     return m;
   });
-  // Current densities (A/cm², no area stated): fitted per cm² of electrode, as the analysis does; never mixed with currents.
-  const densities = measurements.filter((m) => m.currentKind === 'density');
-  if (densities.length && densities.length < measurements.length) {
-    throw new Error(`the series mixes current densities (${densities.map((m) => m.fileName).join(', ')}) with currents; fit files of one kind`);
-  }
-  const cell: FitCell = densities.length ? { ...cellValues, areaCm2: 1 } : cellValues;
-  // Per cm², the ohmic drop is j·(R_u·A): a held R_u (Ω) becomes R_u·A (Ω·cm²) with the cell's area; without one it cannot be used.
-  const areaKnown = Number.isFinite(cellValues.areaCm2) && cellValues.areaCm2 > 0;
-  const cellRuOhm = held.uncompensatedOhm ?? 0;
-  if (densities.length && held.uncompensatedOhm !== undefined) held.uncompensatedOhm = areaKnown ? cellRuOhm * cellValues.areaCm2 : 0;
+  // Current densities are fitted per cm², the cell's R_u held as R_u·A (core/fit/perAreaFit.ts).
+  const perArea = perAreaFit(measurements, cellValues, held.uncompensatedOhm, Number.isFinite(cellValues.areaCm2) ? cellValues.areaCm2 : null);
+  const { cell } = perArea;
+  if (perArea.ruOhm !== undefined) held.uncompensatedOhm = perArea.ruOhm;
   const blanks = fitBlanksOf(state, ids);
   const records = measurements.map((m, k) => {
     const blank = blanks[k] ? measurementNamed(state, blanks[k] as string) : null;
     if (blank && (blank.currentKind ?? 'current') !== (m.currentKind ?? 'current')) throw new Error(`${m.fileName} and its blank ${blank.fileName} hold different kinds of current (density and current)`);
-    const currentA = blank ? subtractBlank(m, blank).currentA : m.currentA;
+    // The current less its blank, as the analysis and the plots have it (runInput.ts, one subtraction kept per file).
+    const currentA = analysedCurrentOf(state, ids[k] as string)?.currentA ?? m.currentA;
     return { potentialV: m.potentialV, currentA, timeS: m.timeS, segments: m.segments, cycles: m.cycles, scanRateVPerS: m.scanRateVPerS, scanRateSource: m.scanRateSource };
   });
   const start = { couples: held.alpha === undefined ? [] : Array.from({ length: setup.coupleCount }, () => ({ alpha: held.alpha as number })), shared: held.uncompensatedOhm === undefined ? {} : { uncompensatedOhm: held.uncompensatedOhm } };
@@ -159,11 +154,8 @@ export function fitRequestOf(state: FitSources, group: string, setup: FitSetup):
   const notes: string[] = [];
   const pairs = names.flatMap((n, k) => (blanks[k] ? [`${n} − ${blanks[k]}`] : []));
   if (pairs.length) notes.push(`blank subtracted before the fit, as in the analysis: ${pairs.join('; ')}`);
-  if (densities.length) {
-    notes.push('the files give current densities (A/cm²) and no area: fitted with A = 1 cm², so D, Γ and C_dl are per cm² of electrode and R_u is R_u·A in Ω·cm²');
-    if (cellRuOhm > 0 && !areaKnown) notes.push('R_u of the cell was not used: with current densities it needs the electrode area');
-  }
-  return { request: { records, fileNames: names, cell, options, compare: setup.compare }, ids, names, cell, scale: fitScaleOf(state, group), key: fitInputKey(state, group, setup), notes, perArea: densities.length > 0 };
+  notes.push(...perArea.notes);
+  return { request: { records, fileNames: names, cell, options, compare: setup.compare }, ids, names, cell, scale: fitScaleOf(state, group), key: fitInputKey(state, group, setup), notes, perArea: perArea.perArea };
 }
 
 /** The fit's potentials (E°′ values and intervals, the window) moved onto the display scale. */

@@ -5,7 +5,7 @@
  */
 import { ZERO_CELSIUS_K } from '../../core/constants';
 import { nearestBlank, subtractBlank } from '../../core/background';
-import { fitWithComparison, type FitCell, type FitInput, type FitVoltammogramsOptions, type FitWithComparisonResult } from '../../core/fit';
+import { fitWithComparison, perAreaFit, type FitCell, type FitInput, type FitVoltammogramsOptions, type FitWithComparisonResult } from '../../core/fit';
 import { cellFromHeaders, fitContract, summariseComparison, type Measurement } from '../../io';
 import { parseArgs, type OptionSpec } from '../args';
 import type { CliCommand, CliIo } from '../command';
@@ -88,8 +88,8 @@ export const fitCommand: CliCommand = {
     const blankPaths = parsed.options.get('blank') ?? [];
     const blanks = blankPaths.length ? readInputs(blankPaths, { overrides }).measurements : [];
     const { measurements, notes } = withBlanksSubtracted(read.measurements, blanks, names);
-    if (measurements.some((m) => m.currentKind === 'density')) notes.push('the files give current densities (A/cm²) and no area: fitted with A = 1 cm² (--area is not used), so D, Γ and C_dl are per cm² of electrode and R_u is R_u·A in Ω·cm²');
-    const input = fitInput(measurements, args, names);
+    const { input, notes: cellNotes } = fitInput(measurements, args, names);
+    notes.push(...cellNotes);
     const fitted = runFit(input, args, names);
     const { comparison } = fitted;
     const result = notes.length ? { ...fitted.result, notes: [...notes, ...fitted.result.notes] } : fitted.result;
@@ -114,18 +114,15 @@ function withBlanksSubtracted(measurements: Measurement[], blanks: Measurement[]
   return { measurements: out, notes: [`blank subtracted before the fit, as in the analysis: ${pairs.join('; ')}`] };
 }
 
-function fitInput(measurements: Measurement[], args: FitArgs, names: string[]): FitInput {
+function fitInput(measurements: Measurement[], args: FitArgs, names: string[]): { input: FitInput; notes: string[] } {
   measurements.forEach((m, k) => {
     if (!m.scanRateVPerS) throw new UsageError(`"${names[k]}" has no scan rate (no time column, preamble or file name gives one): give --scan-rate`);
   });
   // The files' headers as analyze and the screen read them (io/cellFromHeaders.ts), then the flags.
   const headers = cellFromHeaders(measurements).values;
-  // Current densities (A/cm², no area stated) are fitted per cm² of electrode, as the workbench does; never mixed with currents.
-  const densities = measurements.filter((m) => m.currentKind === 'density');
-  if (densities.length && densities.length < measurements.length) {
-    throw new UsageError(`${densities.map((m) => `"${m.fileName}"`).join(', ')} hold current densities (A/cm²) and the other files currents (A): fit them separately`);
-  }
-  const areaCm2 = densities.length ? 1 : args.areaCm2 ?? headers.areaCm2;
+  // Current densities (A/cm², no area stated) are fitted per cm² (core/fit/perAreaFit.ts); --area is then not used.
+  const densities = measurements.some((m) => m.currentKind === 'density');
+  const areaCm2 = densities ? 1 : args.areaCm2 ?? headers.areaCm2;
   if (areaCm2 === undefined) throw new UsageError('the electrode area is needed: give --area CM2 (no file states it)');
   const conc = args.concentrationMolPerCm3 ?? headers.concentrationMolPerCm3;
   if (conc === undefined && args.mechanism !== 'surface') throw new UsageError('the bulk concentration is needed for E and EC: give --conc MM');
@@ -133,7 +130,9 @@ function fitInput(measurements: Measurement[], args: FitArgs, names: string[]): 
     areaCm2, concentrationMolPerCm3: conc ?? 0, electronCount: args.electronCount ?? 1,
     temperatureK: args.temperatureK ?? headers.temperatureK ?? 25 + ZERO_CELSIUS_K,
   };
-  return { records: measurements, cell };
+  // --ru is given per cm² for densities (R_u·A, Ω·cm²), so it passes as it is.
+  const perArea = perAreaFit(measurements, cell, undefined, null);
+  return { input: { records: measurements, cell: perArea.cell }, notes: perArea.notes };
 }
 
 function runFit(input: FitInput, args: FitArgs, names: string[]): FitWithComparisonResult {

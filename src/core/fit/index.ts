@@ -9,4 +9,5 @@ export type * from './fitTypes';
 export { compareFitModels, mechanismCandidates, ohmicCandidates } from './compareFitModels';
 export type { CompareFitModelsOptions, EvidenceGrade, FitCandidate, ModelComparison } from './compareFitModels';
 export { fitWithComparison } from './fitWithComparison';
+export { perAreaFit, type PerAreaFit } from './perAreaFit';
 export type { FitComparisonChoice, FitWithComparisonOptions, FitWithComparisonResult } from './fitWithComparison';
