@@ -133,7 +133,7 @@ describe('fit slice', () => {
     const m0 = files.find((f) => f.fileName === 'quasi_0.csv')?.measurement;
     const blank = files.find((f) => f.fileName === 'electrolyte_only.csv')?.measurement;
     if (!m0 || !blank) throw new Error('files not loaded');
-    // The same subtraction as the analysis (core/background/subtractBlank), point for point.
+    // The same subtraction as the analysis (core/background/subtractBlank), point for point (arithmetic, no published value).
     expect(Array.from(built.request.records[0]?.currentA ?? [])).toEqual(Array.from(subtractBlank(m0, blank).currentA));
     expect(built.notes).toEqual(['blank subtracted before the fit, as in the analysis: quasi_0.csv − electrolyte_only.csv; quasi_1.csv − electrolyte_only.csv']);
     expect(built.request.records[0]?.currentA[10]).toBeCloseTo((m0.currentA[10] as number) - (2e-6 + 5e-6 * (m0.potentialV[10] as number)), 12);
@@ -155,6 +155,7 @@ describe('a fit of current densities', () => {
     const built = fitRequestOf(store.getState(), 'dens', store.getState().fitSetupOf('dens'));
     expect(built.perArea).toBe(true);
     expect(built.cell.areaCm2).toBe(1);
+    // j·(R_u·A) = i·R_u (Ohm's law, common practice, no source).
     expect(built.request.options.start?.shared?.uncompensatedOhm).toBeCloseTo(80 * 0.0707, 12);
     expect(built.notes.join(' ')).toMatch(/current densities.*A = 1 cm².*Ω·cm²/);
   });

@@ -51,7 +51,7 @@ describe('results across files', () => {
     expect(tsv[0]?.at(-1)).toBe('currents');
     expect(tsv[0]?.[9]).toBe('ipa / µA or µA cm⁻²');
     expect(tsv.slice(1, 3).map((l) => [l[0], l.at(-1)])).toEqual([['film_j.csv', 'per cm²'], ['disk_i.csv', 'current']]);
-    // The density is the current over the area: ipc/A to 0.1 % (same simulated couple).
+    // The density is the current over the area, j = i/A (definition, common practice, no source): ipc/A to 0.1 %.
     const curr = all.find((r) => r.fileName === 'disk_i.csv');
     expect(Math.abs((all[0]?.ipcA as number) * 0.0707 / (curr?.ipcA as number) - 1)).toBeLessThan(1e-3);
   });

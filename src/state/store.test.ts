@@ -390,7 +390,8 @@ describe('blanks (supporting electrolyte alone) for a series and for one file', 
     await store.getState().updateSeriesCell('probe', (c) => ({ ...c, blankFiles: ['blank_100mVs.csv', 'blank_500mVs.csv'] }));
     const blankOfRun = (id: string) => store.getState().results[id]?.run?.blank?.fileName ?? null;
     expect([blankOfRun(slow), blankOfRun(fast)]).toEqual(['blank_100mVs.csv', 'blank_500mVs.csv']);
-    // Subtracted exactly, the background leaves the clean couple's peak (same simulator, same baseline method).
+    // Subtracted exactly, the background leaves the clean couple's peak (same simulator, same baseline method;
+    // arithmetic, no published value).
     expect(firstCouple(store, slow).ipaA).toBeCloseTo(ipaClean, 12);
     // The trace is drawn on the same current the analysis used: recorded less its blank.
     const shown = analysedCurrentOf(store.getState(), slow);

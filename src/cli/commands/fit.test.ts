@@ -122,6 +122,7 @@ describe('halfwave fit', () => {
     expect(window.stderr).toContain('quasi_0.csv');
   });
 
+  // Tolerances of the fit issue (E°′ 2 mV, k° 25 %, D 5 %); oracle: the validated simulator.
   it('--blank subtracts each file\'s blank nearest in scan rate first, as analyze does: the same tolerances hold, and the notes name the pairs', async () => {
     const r = await run('fit', ...withLeak, '--area', '0.0707', '--conc', '1', '--ru', '50', '--compare', 'none', ...blanks.flatMap((b) => ['--blank', b]), '--json');
     expect(r.code).toBe(0);
@@ -132,6 +133,7 @@ describe('halfwave fit', () => {
     expect(c.notes[0]).toMatch(/^blank subtracted before the fit.*leaky_0\.csv − blank_0\.csv; .*leaky_2\.csv − blank_2\.csv$/);
   });
 
+  // Same oracle and tolerances; j = i/A and R_u·A per cm² (common practice, no source).
   it('current densities are fitted per cm² (area 1, said in the notes): D and k° as from the currents; a mix with currents is refused', async () => {
     // Per cm², the resistance is R_u·A = 50 Ω × 0.0707 cm² = 3.535 Ω·cm².
     const r = await run('fit', ...densities, '--conc', '1', '--ru', '3.535', '--compare', 'none', '--json');

@@ -81,6 +81,7 @@ describe('buildTraceFigure', () => {
     expect(fig.layout.shapes?.[0]).toMatchObject({ x0: expect.closeTo(0.25, 12), x1: expect.closeTo(0.35, 12) });
   });
 
+  // Arithmetic on hand-made columns, no published value.
   it('with a blank subtracted: the current less the blank is the trace the picks sit on, the recording drawn faintly behind', () => {
     const recordedA = currentA.map((a) => a + 3e-6);
     const fig = buildTraceFigure({ ...base, blank: { name: 'electrolyte.csv', recordedA } });
