@@ -1,4 +1,4 @@
-// Lint: TypeScript rules plus the one-way import flow ui → state → worker → io → core.
+// Lint: TypeScript rules plus the one-way import flow ui → state → worker → run → io → core.
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import globals from 'globals';
@@ -22,19 +22,24 @@ export default tseslint.config(
     files: ['src/core/**/*.ts'],
     rules: noImportsFrom(
       ['node:*', 'fs', 'path', 'os', 'react', 'react-dom', 'react-dom/*', 'plotly.js*', 'zustand', 'papaparse',
-        '**/io/**', '**/worker/**', '**/state/**', '**/ui/**', '**/cli/**'],
+        '**/io/**', '**/run/**', '**/worker/**', '**/state/**', '**/ui/**', '**/cli/**'],
       'src/core is pure numerics: no DOM, React, Node, I/O or app layers.',
     ),
   },
   {
     files: ['src/io/**/*.ts'],
-    rules: noImportsFrom(['node:*', 'fs', 'path', 'react', 'react-dom', '**/worker/**', '**/state/**', '**/ui/**', '**/cli/**'],
+    rules: noImportsFrom(['node:*', 'fs', 'path', 'react', 'react-dom', '**/run/**', '**/worker/**', '**/state/**', '**/ui/**', '**/cli/**'],
       'src/io may import only src/core and parsing libraries.'),
+  },
+  {
+    files: ['src/run/**/*.ts'],
+    rules: noImportsFrom(['node:*', 'fs', 'path', 'react', 'react-dom', 'zustand', '**/worker/**', '**/state/**', '**/ui/**', '**/cli/**'],
+      'src/run (settings, series cells and the run input built from them) may import only io and core.'),
   },
   {
     files: ['src/worker/**/*.ts'],
     rules: noImportsFrom(['node:*', 'fs', 'react', 'react-dom', '**/state/**', '**/ui/**', '**/cli/**'],
-      'src/worker may import io and core only.'),
+      'src/worker may import run, io and core only.'),
   },
   {
     files: ['src/state/**/*.ts'],

@@ -1,12 +1,14 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import { contentSecurityPolicy } from './scripts/contentSecurityPolicy';
+import { demoBundle } from './scripts/demoBundle';
+import { preloadPlotly } from './scripts/preloadPlotly';
 
 // Static build: everything is served from the same origin; no request leaves the machine. The
 // built index.html carries the Content-Security-Policy of scripts/contentSecurityPolicy.ts.
 export default defineConfig({
   base: './',
-  plugins: [react(), contentSecurityPolicy()],
+  plugins: [react(), contentSecurityPolicy(), preloadPlotly(), demoBundle('demo-data')],
   worker: { format: 'es' },
   server: { host: '127.0.0.1', port: 5173 },
   preview: { host: '127.0.0.1', port: 4173 },

@@ -17,9 +17,9 @@ import { performance } from 'node:perf_hooks';
 import { chromium, type Page } from 'playwright-core';
 import { preview } from 'vite';
 import { handlers, type HandlerContext } from '../src/worker/handlers';
-import { cellValuesOf, methodOptionsOf } from '../src/state/runInput';
-import { defaultCell } from '../src/state/seriesCell';
-import { defaultSettings } from '../src/state/settings';
+import { cellValuesOf, methodOptionsOf } from '../src/run/runInput';
+import { defaultCell } from '../src/run/seriesCell';
+import { defaultSettings } from '../src/run/settings';
 import { smallCvFiles } from './scaleData';
 import type { BenchRow } from './types';
 
@@ -93,6 +93,7 @@ async function switchMs(page: Page, name: string): Promise<number> {
 
 export async function runBrowserBench(): Promise<BenchRow[]> {
   if (!existsSync('dist/index.html')) throw new Error('dist/index.html is missing: run `npm run build` first');
+  if (!existsSync(CHROMIUM)) throw new Error(`no Chromium at ${CHROMIUM}: install it (apt-get install -y chromium) or name it in HALFWAVE_CHROMIUM`);
   const server = await preview({ preview: { host: '127.0.0.1', port: 0, strictPort: false, open: false }, logLevel: 'warn' });
   const address = server.httpServer.address();
   if (!address || typeof address === 'string') throw new Error('preview server has no TCP address');

@@ -13,7 +13,7 @@ import { nearestBlank } from '../core/background';
 import type { CurrentConvention } from '../core/types';
 import { cellFromHeaders, describeLayout, groupIntoSeries, SERIES_GROUPINGS } from '../io';
 import type { Measurement, SeriesGrouping } from '../io';
-import { runInputOf as runInputFromSources } from '../state/runInput';
+import { runInputOf as runInputFromSources } from '../run/runInput';
 import { SOFTWARE } from '../version';
 import { sessionSources } from './sessionSources';
 import { resultsSheetCsv, resultsSheetJson } from '../io/exportResults';

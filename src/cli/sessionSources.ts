@@ -8,8 +8,8 @@
  */
 import { groupIntoSeries } from '../io';
 import { parseSession, SessionError, type SessionFileRecord } from '../io/session';
-import type { RunSources } from '../state/runInput';
-import { defaultSettings, emptyFileSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from '../state/settings';
+import type { RunSources } from '../run/runInput';
+import { defaultSettings, emptyFileSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from '../run/settings';
 import { UsageError } from './errors';
 import type { InputsRead } from './readInputs';
 

@@ -185,7 +185,7 @@ export function encodeBase64(bytes: Uint8Array): string {
   return btoa(binary);
 }
 
-export function decodeBase64(text: string): Uint8Array {
+export function decodeBase64(text: string): Uint8Array<ArrayBuffer> {
   let binary: string;
   try {
     binary = atob(text);

@@ -4,9 +4,9 @@
  * the settings on screen.
  */
 import { CancelledError } from '../worker/errors';
-import { fileRunRequest } from './runInput';
-import { resolveCell, sameTraceCell } from './seriesCell';
-import { defaultSettings, emptyFileSettings } from './settings';
+import { fileRunRequest, runRequestKey } from '../run/runInput';
+import { resolveCell, sameTraceCell } from '../run/seriesCell';
+import { defaultSettings, emptyFileSettings } from '../run/settings';
 import { toUserError, type AnalysisSlice, type SliceCreator } from './types';
 
 export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps) => {
@@ -20,16 +20,25 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
     results: {},
     seriesCells: {},
 
-    async analyzeFile(id) {
+    async analyzeFile(id, ahead) {
       const m = get().files[id]?.measurement;
       if (!m) return;
       running.get(id)?.abort();
+      const request = fileRunRequest(get(), id);
+      // The worker that read the file analysed it already; its result stands when it ran the very request the page would send.
+      if (ahead && ahead.key === runRequestKey(request)) {
+        running.delete(id);
+        set((s) => ({ results: { ...s.results, [id]: { status: 'ready', run: ahead.result, error: null } } }));
+        const group = get().files[id]?.group;
+        if (group) get().scheduleGroup(group);
+        return;
+      }
       const ctrl = new AbortController();
       running.set(id, ctrl);
       const prev = get().results[id];
       set((s) => ({ results: { ...s.results, [id]: { status: 'running', run: prev?.run ?? null, error: null } } }));
       try {
-        const [run] = await deps.client.request('runFiles', fileRunRequest(get(), id), { signal: ctrl.signal });
+        const [run] = await deps.client.request('runFiles', request, { signal: ctrl.signal });
         set((s) => ({ results: { ...s.results, [id]: { status: 'ready', run: run ?? null, error: null } } }));
         const group = get().files[id]?.group;
         if (group) get().scheduleGroup(group);

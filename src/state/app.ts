@@ -4,7 +4,7 @@
  */
 import type { AnalysisClient } from '../worker/client';
 import { spawnAnalysisClient } from '../worker/spawn';
-import { DEMO_SERIES_CELLS, loadDemoInputs } from './demo';
+import { DEMO_SERIES_CELLS, fetchDemoInputs, type DemoInputs } from './demo';
 import { attachAutosave } from './autosave';
 import { restoreAutosave } from './sessionActions';
 import { defaultStorageAdapter } from './storage';
@@ -29,18 +29,22 @@ export function crashAnalysisWorkers(): void {
 
 /**
  * Called once at start: brings back the last workspace (files included) when the browser kept
- * one; on a first visit it loads the demo scenario instead.
+ * one; on a first visit it loads the demo scenario instead (`loadDemo`: by default the document
+ * the page names, state/demo.ts).
  */
-export async function startApp(store: HalfwaveStore = getAppStore(), storage = defaultStorageAdapter()): Promise<void> {
-  // The demo's one chunk is fetched while the browser's storage is read, not after (on a
-  // first visit the two waits would otherwise add up); a restored workspace leaves it unused.
-  const demoLoading = loadDemoInputs();
+export async function startApp(store: HalfwaveStore = getAppStore(), storage = defaultStorageAdapter(), loadDemo: () => Promise<DemoInputs> = fetchDemoInputs): Promise<void> {
+  // The demo is fetched while the browser's storage is read, not after (on a first visit the two
+  // waits would otherwise add up); a restored workspace leaves it unused.
+  const demoLoading = loadDemo();
   demoLoading.catch(() => undefined);
   const restored = await restoreAutosave(store, storage);
   attachAutosave(store, storage);
   if (restored) return;
-  const demo = await demoLoading;
-  if (demo.length === 0) return;
+  const { inputs: demo, problem } = await demoLoading;
+  if (demo.length === 0) {
+    if (problem) store.setState({ notice: problem });
+    return;
+  }
   store.setState({ notice: `Loading ${demo.length} demo voltammograms, simulated by Halfwave (not measurements).` });
   // One scan-rate series per demo scenario: the file name up to its scan-rate part.
   const groups = new Map<string, typeof demo>();

@@ -6,6 +6,7 @@
  */
 import { AUTOSAVE_KEY, saveSessionText } from './sessionActions';
 import { isQuotaError, type StorageAdapter } from './storage';
+import { bytesOf, type FileSource } from './textBytes';
 import type { HalfwaveState, HalfwaveStore } from './types';
 
 interface NotSaved {
@@ -17,7 +18,7 @@ interface NotSaved {
 
 /** Saves the files' bytes that are not stored yet and forgets those no file uses; returns the files whose bytes could not be written. */
 async function saveBytes(state: HalfwaveState, storage: StorageAdapter, stored: Set<string>): Promise<NotSaved[]> {
-  const wanted = new Map<string, { name: string; source: Blob }>();
+  const wanted = new Map<string, { name: string; source: FileSource }>();
   for (const id of state.fileOrder) {
     const f = state.files[id];
     if (f?.sha256 && f.measurement) wanted.set(f.sha256, { name: f.fileName, source: f.source });
@@ -26,7 +27,7 @@ async function saveBytes(state: HalfwaveState, storage: StorageAdapter, stored: 
   for (const [sha, f] of wanted) {
     if (stored.has(sha)) continue;
     try {
-      await storage.writeBytes(sha, new Uint8Array(await f.source.arrayBuffer()));
+      await storage.writeBytes(sha, new Uint8Array(await bytesOf(f.source)));
       stored.add(sha);
     } catch (err) {
       notSaved.push({ name: f.name, sha256: sha, reason: isQuotaError(err) ? null : ((err as Error | null)?.message ?? String(err)) });

@@ -1,14 +1,51 @@
 /**
  * The demo voltammograms shipped with the app (written by `npm run demo-data` from our own
- * simulator into demo-data/). Bundled same-origin by Vite as one lazily loaded chunk
- * (demoFiles.ts), never fetched from another host.
+ * simulator into demo-data/), served from the app's own origin as one file (made by
+ * scripts/demoBundle.ts, which documents its layout; index.html names it in a preload link, so its
+ * download starts with the page's). The page never parses the voltammograms: the analysis workers
+ * read their bytes.
  */
-import type { SeriesCell } from './seriesCell';
+import type { SeriesCell } from '../run/seriesCell';
 import type { FileInput } from './types';
 
-export async function loadDemoInputs(): Promise<FileInput[]> {
-  const { DEMO_FILES } = await import('./demoFiles');
-  return Object.keys(DEMO_FILES).sort().map((path) => ({ name: path.slice(path.lastIndexOf('/') + 1), data: DEMO_FILES[path] as string }));
+/** The demo files, or why there are none. */
+export interface DemoInputs {
+  inputs: FileInput[];
+  problem: string | null;
+}
+
+/** The id of the preload link that names the demo file (scripts/demoBundle.ts writes it). */
+const DEMO_LINK_ID = 'halfwave-demo';
+
+/** Fetches the demo file the page's preload link names; none when the page names none. */
+export async function fetchDemoInputs(): Promise<DemoInputs> {
+  const href = typeof document === 'undefined' ? null : document.getElementById(DEMO_LINK_ID)?.getAttribute('href');
+  if (!href) return { inputs: [], problem: null };
+  try {
+    const res = await fetch(href);
+    if (!res.ok) throw new Error(`HTTP ${res.status}`);
+    return { inputs: demoInputsOf(new Uint8Array(await res.arrayBuffer())), problem: null };
+  } catch (err) {
+    return { inputs: [], problem: `The demo voltammograms could not be loaded from the app's own server (${err instanceof Error ? err.message : String(err)}).` };
+  }
+}
+
+/** The files of a demo bundle (a JSON line naming each file and its length, then their bytes), in its order. */
+export function demoInputsOf(bundle: Uint8Array<ArrayBuffer>): FileInput[] {
+  const eol = bundle.indexOf(0x0a);
+  if (eol < 0) throw new Error('the demo file has no header line');
+  const head = JSON.parse(new TextDecoder().decode(bundle.subarray(0, eol))) as { files?: unknown };
+  if (!Array.isArray(head.files)) throw new Error('the demo file names no files');
+  const parts: Array<{ name: string; start: number; end: number }> = [];
+  let at = eol + 1;
+  for (const f of head.files as Array<{ name?: unknown; bytes?: unknown }>) {
+    if (typeof f?.name !== 'string' || !Number.isInteger(f.bytes) || (f.bytes as number) < 0) throw new Error('the demo file\'s header line is not a list of names and lengths');
+    parts.push({ name: f.name, start: at, end: at + (f.bytes as number) });
+    at += f.bytes as number;
+  }
+  if (at !== bundle.length) throw new Error(`the demo file holds ${bundle.length - eol - 1} bytes after its header, not the ${at - eol - 1} it names`);
+  // Views on the one buffer: each file's bytes are copied only as they are sent to a worker.
+  return parts.map((p) => ({ name: p.name, data: bundle.subarray(p.start, p.end) }));
 }
 
 /**

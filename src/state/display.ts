@@ -6,9 +6,9 @@
 import { resolveCell, resolveReport } from '../core/analysis/resolveRun';
 import { conversionContextOf, scaleOffset } from '../core/analysis/runReference';
 import { REFERENCE_ELECTRODES, type ReferenceId } from '../core/reference';
-import { cellValuesOf, reportOptionsOf } from './runInput';
-import type { SeriesCell } from './seriesCell';
-import type { AnalysisSettings } from './settings';
+import { cellValuesOf, reportOptionsOf } from '../run/runInput';
+import type { SeriesCell } from '../run/seriesCell';
+import type { AnalysisSettings } from '../run/settings';
 import type { HalfwaveState } from './types';
 
 export interface ReferenceChoice {

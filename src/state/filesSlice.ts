@@ -8,39 +8,56 @@ import { groupIntoSeries } from '../io/groupIntoSeries';
 import { naturalCompare } from '../io/naturalOrder';
 import { WorkerLostError } from '../worker/errors';
 import type { ImportOverrides } from '../io/types';
-import { resolveCell, sameTraceCell, type SeriesCell } from './seriesCell';
-import { mergeFileSettings } from './settings';
-import { bytesOf, textBlob } from './textBytes';
+import { runAheadOf } from '../run/runInput';
+import { bytesOf, sourceOf, sourceSize } from './textBytes';
+import { resolveCell, sameTraceCell, type SeriesCell } from '../run/seriesCell';
+import { mergeFileSettings } from '../run/settings';
 import { toUserError, type FileEntry, type FileInput, type FilesSlice, type RestoredFile, type SliceCreator } from './types';
 
 export const DEFAULT_GROUP = 'series 1';
 
 /**
- * Files read at the same time: four keep a queue in each of the two workers, so a worker never
- * waits for the page to send the next file while the page draws the last answer.
+ * Files read at the same time: up to 32, as long as they hold no more than 16 MB together (always
+ * one, however large). The whole demo or a folder of small exports is handed to the workers at
+ * once, so they never wait for the page to send the next file while it draws the last answer,
+ * and a few large files still go two or three at a time.
  */
-const IMPORT_SLOTS = 4;
+const IMPORT_SLOTS = 32;
+const IMPORT_BYTES = 16 * 1024 * 1024;
 
-/** At most `slots` tasks at once, first come first served; a finished task hands its slot on. */
-export function createLimiter(slots: number): <T>(task: () => Promise<T>) => Promise<T> {
+/**
+ * At most `slots` tasks at once whose weights add up to no more than `budget` (a task heavier
+ * than the budget runs alone), first come first served; a finished task hands its place on.
+ */
+export function createLimiter(slots: number, budget = Infinity): <T>(task: () => Promise<T>, weight?: number) => Promise<T> {
   let active = 0;
-  const waiting: (() => void)[] = [];
-  return async (task) => {
-    if (active >= slots) await new Promise<void>((resolve) => waiting.push(resolve));
-    else active++;
+  let used = 0;
+  const waiting: Array<{ weight: number; go: () => void }> = [];
+  const fits = (weight: number) => active === 0 || (active < slots && used + weight <= budget);
+  const take = (weight: number) => {
+    active++;
+    used += weight;
+  };
+  return async (task, weight = 0) => {
+    if (waiting.length === 0 && fits(weight)) take(weight);
+    else await new Promise<void>((go) => waiting.push({ weight, go }));
     try {
       return await task();
     } finally {
-      const next = waiting.shift();
-      if (next) next();
-      else active--;
+      active--;
+      used -= weight;
+      while (waiting.length > 0 && fits(waiting[0]!.weight)) {
+        const next = waiting.shift()!;
+        take(next.weight);
+        next.go();
+      }
     }
   };
 }
 
 export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   let nextId = 1;
-  const limit = createLimiter(IMPORT_SLOTS);
+  const limit = createLimiter(IMPORT_SLOTS, IMPORT_BYTES);
   // Work on one file stays in order (a re-import never overtakes the first reading).
   const chains = new Map<string, Promise<void>>();
 
@@ -50,11 +67,20 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       return entry ? { files: { ...s.files, [id]: { ...entry, ...change } } } : {};
     });
 
+  const aheadOf = (id: string) => {
+    const ahead = runAheadOf(get(), id);
+    return ahead ? { ahead } : {};
+  };
+
   /** Reads a file in a worker; when the worker stops mid-file, reads it once more from the kept bytes. */
   async function readFile(entry: FileEntry, overrides: ImportOverrides, id: string) {
-    const ask = async () => deps.client.request('import', { fileName: entry.fileName, data: await bytesOf(entry.source), overrides }, {
-      onProgress: (fraction) => patch(id, { progress: fraction }),
-    });
+    // The snapshot of the file's run is taken as each attempt is sent, after the bytes are read.
+    const ask = async () => {
+      const data = await bytesOf(entry.source);
+      return deps.client.request('import', { fileName: entry.fileName, data, overrides, ...aheadOf(id) }, {
+        onProgress: (fraction) => patch(id, { progress: fraction }),
+      });
+    };
     try {
       return await ask();
     } catch (err) {
@@ -75,7 +101,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       applyRemembered(id);
       if (get().selectedFileId === null) get().selectFile(id);
       refreshGroup(entry.group, cellBefore, id);
-      await get().analyzeFile(id);
+      await get().analyzeFile(id, out.ahead);
     } catch (err) {
       const kept = get().files[id]?.measurement ?? null;
       patch(id, { status: kept ? 'ready' : 'error', progress: 0, error: toUserError(err) });
@@ -111,7 +137,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   }
 
   function enqueue(id: string, overrides: ImportOverrides): Promise<void> {
-    const run = (chains.get(id) ?? Promise.resolve()).then(() => limit(() => importOne(id, overrides)));
+    const run = (chains.get(id) ?? Promise.resolve()).then(() => limit(() => importOne(id, overrides), get().files[id]?.sizeBytes ?? 0));
     chains.set(id, run);
     return run;
   }
@@ -119,9 +145,9 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   /** Adds files, each with its series, import overrides and (when restoring) its own windows and baselines; reads them. */
   async function restoreFiles(records: RestoredFile[]): Promise<string[]> {
     const entries: FileEntry[] = records.map((input) => {
-      const source = typeof input.data === 'string' ? textBlob(input.data) : input.data;
+      const source = sourceOf(input.data);
       return {
-        id: `file-${nextId++}`, fileName: input.name, sizeBytes: source.size, source, sha256: null, group: input.group,
+        id: `file-${nextId++}`, fileName: input.name, sizeBytes: sourceSize(source), source, sha256: null, group: input.group,
         status: 'queued', progress: 0, error: null, measurement: null, warnings: [], overrides: input.overrides,
       };
     });

@@ -13,8 +13,8 @@ import { roundToUncertainty } from '../core/statistics/roundToUncertainty';
 import type { SeriesFit } from '../io/fitSheet';
 import type { FitRequest } from '../worker/fitRun';
 import { displayScale, runScaleKey, scaleFromRunKey } from './display';
-import { analysedCurrentOf, blankNames, blankOf, measurementNamed, seriesCellValues } from './runInput';
-import { resolveCell } from './seriesCell';
+import { analysedCurrentOf, blankNames, blankOf, measurementNamed, seriesCellValues } from '../run/runInput';
+import { resolveCell } from '../run/seriesCell';
 import type { HalfwaveState } from './types';
 
 export interface FitSetup {

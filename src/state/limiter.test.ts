@@ -1,4 +1,4 @@
-/** The import limiter: never more than its slots at once, first come first served (hand-worked). */
+/** The import limiter: never more than its slots or its weight budget at once, first come first served (hand-worked). */
 import { describe, expect, it, vi } from 'vitest';
 import { createLimiter } from './filesSlice';
 
@@ -33,5 +33,33 @@ describe('createLimiter', () => {
     const limit = createLimiter(1);
     await expect(limit(() => Promise.reject(new Error('bad file')))).rejects.toThrow('bad file');
     expect(await limit(() => Promise.resolve('next'))).toBe('next');
+  });
+
+  it('keeps the weights of the tasks running within the budget, lets one heavier task run alone, and never lets a light task overtake', async () => {
+    const limit = createLimiter(10, 100);
+    const running = new Set<string>();
+    const seen: string[][] = [];
+    const release = new Map<string, () => void>();
+    const task = (name: string, weight: number) => limit(async () => {
+      running.add(name);
+      seen.push([...running].sort());
+      await new Promise<void>((r) => release.set(name, r));
+      running.delete(name);
+    }, weight);
+    const all = Promise.all([task('a', 60), task('b', 30), task('huge', 500), task('c', 5), task('d', 5)]);
+    await vi.waitFor(() => expect(release.has('b')).toBe(true));
+    // a + b = 90 fit; 'huge' waits for the budget to be free, and 'c' (5) waits behind it.
+    expect([...running].sort()).toEqual(['a', 'b']);
+    release.get('a')!();
+    release.get('b')!();
+    await vi.waitFor(() => expect(release.has('huge')).toBe(true));
+    expect([...running]).toEqual(['huge']);
+    release.get('huge')!();
+    await vi.waitFor(() => expect(release.has('d')).toBe(true));
+    expect([...running].sort()).toEqual(['c', 'd']);
+    release.get('c')!();
+    release.get('d')!();
+    await all;
+    expect(seen.every((names) => names.length === 1 || names.every((n) => n !== 'huge'))).toBe(true);
   });
 });

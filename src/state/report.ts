@@ -9,7 +9,7 @@ import { describeLayout } from '../io/describeLayout';
 import { SOFTWARE } from '../version';
 import { explainCouple, type Explanation } from './explain';
 import { resultsRows, type ResultsRow } from './resultsTable';
-import { resolveCell, type CellOrigin } from './seriesCell';
+import { resolveCell, type CellOrigin } from '../run/seriesCell';
 import type { HalfwaveState, RunSeriesResult } from './types';
 
 export interface ReportModel {

@@ -7,9 +7,11 @@
  */
 import { describe, expect, it, vi } from 'vitest';
 import { createInThreadClient } from '../worker/inThreadClient';
+import type { RunInput } from '../core/analysis/runTypes';
+import type { RequestInput, RequestOutput } from '../worker/protocol';
 import { displayScale } from './display';
-import { runInputOf } from './runInput';
-import { resolveCell, selectSeriesCell } from './seriesCell';
+import { fileRunRequest, runAheadSources, runInputOf } from '../run/runInput';
+import { resolveCell, selectSeriesCell } from '../run/seriesCell';
 import { openSessionText, saveSessionText } from './sessionActions';
 import { createHalfwaveStore } from './store';
 import { simulatedCsv } from './testSupport';
@@ -65,9 +67,18 @@ describe('inheritance of a new series', () => {
       client: {
         transport: inner.transport,
         dispose: () => inner.dispose(),
-        request: (type, input, options) => {
-          if (type === 'runFiles') seen.push(Object.values((input as { run: { cells: Record<string, { temperatureK?: number }> } }).run.cells)[0]?.temperatureK);
-          return inner.request(type, input, options);
+        // Every analysis of a file: made where the file is read (the import's run ahead, rebuilt
+        // here from the same snapshot), or asked for on its own.
+        request: async (type, input, options) => {
+          const out = await inner.request(type, input, options);
+          const kelvin = (run: RunInput) => Object.values(run.cells ?? {})[0]?.temperatureK;
+          if (type === 'import') {
+            const i = input as RequestInput<'import'>;
+            const o = out as RequestOutput<'import'>;
+            if (i.ahead && o.ahead) seen.push(kelvin(fileRunRequest(runAheadSources(i.ahead, { fileName: i.fileName, measurement: o.measurement, sha256: o.sha256, warnings: o.warnings }), i.ahead.fileId).run));
+          }
+          if (type === 'runFiles') seen.push(kelvin((input as RequestInput<'runFiles'>).run));
+          return out;
         },
       },
     });

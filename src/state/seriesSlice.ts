@@ -6,7 +6,7 @@
 import type { RunFileResult } from '../core/analysis/runTypes';
 import { CancelledError } from '../worker/errors';
 import { seriesFitOf } from './fitRequest';
-import { runInputOf, seriesOptionsOf } from './runInput';
+import { runInputOf, seriesOptionsOf } from '../run/runInput';
 import { toUserError, type HalfwaveState, type SeriesSlice, type SliceCreator } from './types';
 
 /** True when no file of the group waits to be read or has its analysis running. */

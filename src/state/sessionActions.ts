@@ -7,9 +7,10 @@
  * file's bytes to the browser's storage, so a reload brings the whole workspace back.
  */
 import { decodeBase64, encodeBase64, parseSession, serializeSession, SESSION_FORMAT, SESSION_VERSION, type SessionDocument, type SessionFileRecord } from '../io/session';
-import { defaultSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from './settings';
+import { defaultSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from '../run/settings';
 import type { StorageAdapter } from './storage';
-import type { HalfwaveState, HalfwaveStore, OverlayNormalisation, ReadoutTab, ViewSlice } from './types';
+import { bytesOf as bytesOfSource, type FileSource } from './textBytes';
+import type { FileEntry, HalfwaveState, HalfwaveStore, OverlayNormalisation, ReadoutTab, ViewSlice } from './types';
 import { mergeFitSetups } from './fitRequest';
 import { mergeWorkingWindows } from './workingWindowSlice';
 
@@ -38,7 +39,7 @@ export async function buildSessionDocument(state: HalfwaveState, includeRawData:
   for (const id of state.fileOrder) {
     const record = recordOf(state, id);
     if (!record) continue;
-    if (includeRawData) record.dataBase64 = encodeBase64(new Uint8Array(await (state.files[id] as { source: Blob }).source.arrayBuffer()));
+    if (includeRawData) record.dataBase64 = encodeBase64(new Uint8Array(await bytesOfSource((state.files[id] as FileEntry).source)));
     files.push(record);
   }
   // Files still waiting for their bytes stay in the session, so saving again loses nothing.
@@ -67,7 +68,7 @@ export async function saveSessionText(store: HalfwaveStore, includeRawData: bool
  * bytes when they are at hand (in the session, or in the browser's storage). Returns the names of
  * files that still wait for their bytes.
  */
-export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocument, bytesOf: (r: SessionFileRecord) => Uint8Array | Blob | null): Promise<string[]> {
+export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocument, bytesOf: (r: SessionFileRecord) => FileSource | null): Promise<string[]> {
   const s = store.getState();
   // Bytes of files already in the workspace serve a session saved without data (same SHA-256).
   const loaded = new Map(Object.values(s.files).flatMap((f) => (f.sha256 && f.measurement ? [[f.sha256, f.source] as const] : [])));
@@ -96,7 +97,7 @@ export async function openSessionDocument(store: HalfwaveStore, doc: SessionDocu
     remembered: waiting,
   });
   const ids = await store.getState().restoreFiles(withData.flatMap(({ r, bytes }) => (bytes ? [{
-    name: r.fileName, data: bytes instanceof Blob ? bytes : new Blob([bytes as Uint8Array<ArrayBuffer>]), group: r.group, overrides: r.overrides,
+    name: r.fileName, data: bytes, group: r.group, overrides: r.overrides,
     fileSettings: Object.keys(r.analysis).length ? mergeFileSettings(r.analysis) : null,
   }] : [])));
   const chosen = typeof view.selectedFile === 'number' ? ids[view.selectedFile] : undefined;
@@ -122,7 +123,7 @@ export async function restoreAutosave(store: HalfwaveStore, storage: StorageAdap
   } catch {
     return false;
   }
-  const bytes = new Map<string, Uint8Array>();
+  const bytes = new Map<string, Uint8Array<ArrayBuffer>>();
   for (const r of doc.files) {
     const b = r.sha256 ? await storage.readBytes(r.sha256).catch(() => null) : null;
     if (b && r.sha256) bytes.set(r.sha256, b);

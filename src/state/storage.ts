@@ -11,7 +11,7 @@ export interface StorageAdapter {
   read(key: string): Promise<string | null>;
   write(key: string, text: string): Promise<void>;
   remove(key: string): Promise<void>;
-  readBytes(key: string): Promise<Uint8Array | null>;
+  readBytes(key: string): Promise<Uint8Array<ArrayBuffer> | null>;
   writeBytes(key: string, bytes: Uint8Array): Promise<void>;
   removeBytes(key: string): Promise<void>;
   /** Keys of every stored byte record. */
@@ -20,9 +20,9 @@ export interface StorageAdapter {
 
 const BYTES = 'bytes:';
 
-export function memoryStorageAdapter(initial: Record<string, string> = {}): StorageAdapter & { data: Map<string, string>; bytes: Map<string, Uint8Array>; quotaBytes: number } {
+export function memoryStorageAdapter(initial: Record<string, string> = {}): StorageAdapter & { data: Map<string, string>; bytes: Map<string, Uint8Array<ArrayBuffer>>; quotaBytes: number } {
   const data = new Map(Object.entries(initial));
-  const bytes = new Map<string, Uint8Array>();
+  const bytes = new Map<string, Uint8Array<ArrayBuffer>>();
   const adapter = {
     data,
     bytes,
@@ -74,18 +74,44 @@ export function workspaceStore(dbName = 'halfwave', storeName = 'workspace'): Us
   return (mode, callback) => (db ??= open()).then((d) => callback(d.transaction(storeName, mode).objectStore(storeName)));
 }
 
-export function indexedDbStorageAdapter(store: UseStore = workspaceStore()): StorageAdapter {
+/**
+ * False only when the browser says that no database of that name exists (a first visit). Opening
+ * one to read it would create it, which costs a first visit a good part of its start-up.
+ */
+async function databaseMayExist(dbName: string): Promise<boolean> {
+  if (typeof indexedDB.databases !== 'function') return true;
+  try {
+    return (await indexedDB.databases()).some((d) => d.name === dbName);
+  } catch {
+    return true;
+  }
+}
+
+export function indexedDbStorageAdapter(store: UseStore = workspaceStore(), dbName = 'halfwave'): StorageAdapter {
+  // Asked once; any write makes the database exist.
+  let exists: Promise<boolean> | null = null;
+  const mayRead = () => (exists ??= databaseMayExist(dbName));
+  const written = () => {
+    exists = Promise.resolve(true);
+  };
   return {
-    read: async (key) => (await get<string>(key, store)) ?? null,
-    write: (key, text) => set(key, text, store),
+    read: async (key) => ((await mayRead()) ? ((await get<string>(key, store)) ?? null) : null),
+    write: (key, text) => {
+      written();
+      return set(key, text, store);
+    },
     remove: (key) => del(key, store),
     readBytes: async (key) => {
-      const v = await get<Uint8Array | ArrayBuffer>(BYTES + key, store);
+      if (!(await mayRead())) return null;
+      const v = await get<Uint8Array<ArrayBuffer> | ArrayBuffer>(BYTES + key, store);
       return v === undefined ? null : v instanceof Uint8Array ? v : new Uint8Array(v);
     },
-    writeBytes: (key, b) => set(BYTES + key, b, store),
+    writeBytes: (key, b) => {
+      written();
+      return set(BYTES + key, b, store);
+    },
     removeBytes: (key) => del(BYTES + key, store),
-    byteKeys: async () => (await keys<IDBValidKey>(store)).flatMap((k) => (typeof k === 'string' && k.startsWith(BYTES) ? [k.slice(BYTES.length)] : [])),
+    byteKeys: async () => ((await mayRead()) ? (await keys<IDBValidKey>(store)).flatMap((k) => (typeof k === 'string' && k.startsWith(BYTES) ? [k.slice(BYTES.length)] : [])) : []),
   };
 }
 

@@ -1,18 +1,22 @@
 /**
- * The bytes of blobs made from text (the demo, files given as text), kept beside the blob:
- * a blob's own read is a round trip through the browser that waits for the page's thread,
- * and every import would wait for it.
+ * A file's original bytes as the store keeps them, to read the file again (with other import
+ * choices, or after a worker stopped) and to save it: the File the user picked (a Blob: the
+ * browser holds it, it can be large), or the bytes themselves when the page already has them (the
+ * demo, a restored workspace or session, text). Bytes are not wrapped in a Blob: making a Blob,
+ * or a slice of one, and reading it back each go through the browser, and on a first visit the
+ * page's thread would spend a good part of the demo's start-up on them (measured in Chromium).
  */
-const textBytes = new WeakMap<Blob, Uint8Array<ArrayBuffer>>();
+export type FileSource = Blob | Uint8Array<ArrayBuffer>;
 
-export function textBlob(text: string): Blob {
-  const bytes = new TextEncoder().encode(text);
-  const blob = new Blob([bytes], { type: 'text/plain' });
-  textBytes.set(blob, bytes);
-  return blob;
+export function sourceOf(data: string | FileSource): FileSource {
+  return typeof data === 'string' ? new TextEncoder().encode(data) : data;
 }
 
-/** A fresh copy of the blob's bytes (the worker takes the buffer over). */
-export async function bytesOf(source: Blob): Promise<ArrayBuffer> {
-  return textBytes.get(source)?.slice().buffer ?? source.arrayBuffer();
+export function sourceSize(source: FileSource): number {
+  return source instanceof Uint8Array ? source.byteLength : source.size;
+}
+
+/** A fresh copy of the file's bytes (the worker takes the buffer over). */
+export async function bytesOf(source: FileSource): Promise<ArrayBuffer> {
+  return source instanceof Uint8Array ? source.slice().buffer : source.arrayBuffer();
 }

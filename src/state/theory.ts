@@ -8,7 +8,7 @@
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
 import { displayScale } from './display';
-import { cellOfFile } from './seriesCell';
+import { cellOfFile } from '../run/seriesCell';
 import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
 import type { HalfwaveState } from './types';
 

@@ -8,12 +8,15 @@ import type { ImportWarning } from '../io/errors';
 import type { SessionFileRecord } from '../io/session';
 import type { ImportOverrides, Measurement } from '../io/types';
 import type { AnalysisClient } from '../worker/client';
+import type { RunAheadResult } from '../worker/protocol';
+import type { FileSource } from './textBytes';
+import type { CurrentDisplay } from '../run/runInput';
 import type { FitCell, FitResult } from '../core/fit';
 import type { ComparisonSummary } from '../io/fitContract';
 import type { FitProgressDetail } from '../worker/fitRun';
 import type { CarriedValue, FitSetup } from './fitRequest';
-import type { SeriesCell } from './seriesCell';
-import type { AnalysisSettings, FileAnalysisSettings } from './settings';
+import type { SeriesCell } from '../run/seriesCell';
+import type { AnalysisSettings, FileAnalysisSettings } from '../run/settings';
 import type { ResultsSort } from './resultsTable';
 import type { StorageAdapter } from './storage';
 import type { WorkingWindowChoice, WorkingWindowSlice } from './workingWindowSlice';
@@ -32,8 +35,8 @@ export interface FileEntry {
   id: string;
   fileName: string;
   sizeBytes: number;
-  /** The original bytes, kept (as a Blob: cheap) so the file can be re-imported with overrides. */
-  source: Blob;
+  /** The original bytes, kept so the file can be re-imported with overrides and saved (textBytes.ts). */
+  source: FileSource;
   sha256: string | null;
   group: string;
   status: FileStatus;
@@ -48,7 +51,7 @@ export interface FileEntry {
 
 export interface FileInput {
   name: string;
-  data: Blob | string;
+  data: FileSource | string;
 }
 
 /** A file put back with what it had: its series, import overrides and own windows and baselines. */
@@ -101,7 +104,8 @@ export interface AnalysisSlice {
   results: Record<string, AnalysisEntry>;
   /** Cell values entered for each series (group); the rest come from its files or the defaults (seriesCell.ts). */
   seriesCells: Record<string, Partial<SeriesCell>>;
-  analyzeFile(id: string): Promise<void>;
+  /** `ahead`: the run the worker made when it read the file; used when its key matches the run the page would ask for. */
+  analyzeFile(id: string, ahead?: RunAheadResult): Promise<void>;
   analyzeAll(): Promise<void>;
   updateSettings(change: (s: AnalysisSettings) => AnalysisSettings): Promise<void>;
   updateFileSettings(id: string, change: (s: FileAnalysisSettings) => FileAnalysisSettings): Promise<void>;
@@ -111,7 +115,7 @@ export interface AnalysisSlice {
   seedSeriesCell(group: string, values: Partial<SeriesCell>): void;
 }
 
-export type CurrentDisplay = 'iupac' | 'polarographic';
+export type { CurrentDisplay };
 
 export interface ViewSlice {
   selectedFileId: string | null;
@@ -292,8 +296,8 @@ export function toUserError(err: unknown): UserError {
 
 /** Importer types the UI shows (re-exported: the UI reaches io only through state). */
 export type { CurrentUnit, Guess, ImportDetection, ImportOverrides, Measurement, PotentialUnit } from '../io/types';
-export type { AnalysisSettings, FileAnalysisSettings } from './settings';
-export type { CellField, CellOrigin, ResolvedCell, SeriesCell } from './seriesCell';
+export type { AnalysisSettings, FileAnalysisSettings } from '../run/settings';
+export type { CellField, CellOrigin, ResolvedCell, SeriesCell } from '../run/seriesCell';
 export type { SeriesAnalysis, SeriesCouple } from '../core/analysis/seriesTypes';
 export type { SeriesPoint } from '../core/series/seriesPoint';
 export type { VoltammogramAnalysis } from '../core/analysis/types';

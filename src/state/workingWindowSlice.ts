@@ -10,9 +10,9 @@
 import { resolveCell, resolveReport } from '../core/analysis/resolveRun';
 import { conversionContextOf, scaleOffset } from '../core/analysis/runReference';
 import { ELECTRODE_MATERIALS, WINDOW_MEDIA, workingWindow, type ElectrodeMaterial, type WindowMedium, type WorkingWindowEntry } from '../core/potentialWindow';
-import { cellValuesOf, reportOptionsOf } from './runInput';
-import type { SeriesCell } from './seriesCell';
-import type { AnalysisSettings } from './settings';
+import { cellValuesOf, reportOptionsOf } from '../run/runInput';
+import type { SeriesCell } from '../run/seriesCell';
+import type { AnalysisSettings } from '../run/settings';
 import type { SliceCreator } from './types';
 
 export interface WorkingWindowChoice {

@@ -14,15 +14,31 @@ function post(msg: WorkerToPage, transfer: Transferable[] = []): void {
   scope.postMessage(msg, transfer);
 }
 
-async function serve(req: WorkerRequest): Promise<void> {
+/**
+ * File imports run one after another, in the order sent; every other request runs at once (an
+ * import yields between chunks, so a re-analysis is not held up by a long file). Interleaved, the
+ * files of a batch would all finish near the end of it; in turn, each answer goes back as soon as
+ * its file is read, and the page can show the first while the worker reads the rest.
+ */
+let imports: Promise<void> = Promise.resolve();
+
+/** Least time between two plain progress reports of one request (ms). */
+const PROGRESS_MS = 100;
+
+async function serve(req: WorkerRequest, ctrl: AbortController): Promise<void> {
   const { requestId } = req;
-  const ctrl = new AbortController();
-  running.set(requestId, ctrl);
+  let lastProgress = performance.now();
   try {
     const output = await runHandler(req.type, req.input as never, {
       signal: ctrl.signal,
       progress(fraction, stage, detail) {
         if (ctrl.signal.aborted) throw new CancelledError();
+        // A plain fraction goes out at most every PROGRESS_MS, none in a request's first PROGRESS_MS
+        // (a small file is read before anyone could see its bar, and each message costs the page a
+        // store update); reports with numbers (a fit's iterations) all go.
+        const now = performance.now();
+        if (!detail && now - lastProgress < PROGRESS_MS) return;
+        lastProgress = now;
         post({ type: 'progress', requestId, fraction, stage, ...(detail ? { detail } : {}) });
       },
     });
@@ -37,6 +53,13 @@ async function serve(req: WorkerRequest): Promise<void> {
 
 scope.onmessage = (event: MessageEvent<PageToWorker>) => {
   const msg = event.data;
-  if (msg.type === 'cancel') running.get(msg.requestId)?.abort();
-  else void serve(msg);
+  if (msg.type === 'cancel') {
+    running.get(msg.requestId)?.abort();
+    return;
+  }
+  // Registered now, so a cancel reaches a request still waiting for its turn (it then ends at once).
+  const ctrl = new AbortController();
+  running.set(msg.requestId, ctrl);
+  if (msg.type === 'import') imports = imports.then(() => serve(msg, ctrl));
+  else void serve(msg, ctrl);
 };

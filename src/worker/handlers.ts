@@ -10,7 +10,9 @@ import { importVoltammogramAsync } from '../io';
 import { CancelledError } from './errors';
 import { exportRun } from './exportRun';
 import { runFitRequest } from './fitRun';
-import type { ProgressDetail, RequestInput, RequestOutput, RequestType } from './protocol';
+import type { ImportResult } from '../io/types';
+import { fileRunRequest, runAheadSources, runRequestKey, type RunAhead } from '../run/runInput';
+import type { ProgressDetail, RequestInput, RequestOutput, RequestType, RunAheadResult } from './protocol';
 
 export interface HandlerContext {
   /** Report progress, 0…1, with a short stage text (and its numbers). Throws CancelledError once cancelled. */
@@ -33,7 +35,8 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
       signal: ctx.signal,
       onProgress: (fraction: number) => ctx.progress(fraction, 'reading rows'),
     });
-    return { ...result, sha256 };
+    const ahead = input.ahead ? runAhead(input.ahead, input.fileName, result, sha256) : undefined;
+    return { ...result, sha256, ...(ahead ? { ahead } : {}) };
   },
   runFiles: (input) => analyzeRunFiles(input.run, input.only),
   runSeries: (input) => analyzeRunSeriesStep(input),
@@ -45,6 +48,20 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
     return { potentialV: sim.potentialV, currentA: sim.currentA };
   },
 };
+
+/**
+ * The file's run, made from the page's snapshot and the file just read, by the same request
+ * builder the page uses. A run that fails is left to the page, which runs it again and shows why.
+ */
+function runAhead(ahead: RunAhead, fileName: string, read: ImportResult, sha256: string | null): RunAheadResult | undefined {
+  try {
+    const request = fileRunRequest(runAheadSources(ahead, { fileName, measurement: read.measurement, sha256, warnings: read.warnings }), ahead.fileId);
+    const key = runRequestKey(request);
+    return { key, result: analyzeRunFiles(request.run, request.only)[0] ?? null };
+  } catch {
+    return undefined;
+  }
+}
 
 /** Hex SHA-256 of the bytes (FIPS 180-4), or null where Web Crypto is unavailable. */
 export async function sha256Hex(data: ArrayBuffer): Promise<string | null> {

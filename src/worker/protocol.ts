@@ -11,6 +11,7 @@ import type { RunFileResult, RunInput, RunSeriesResult } from '../core/analysis/
 import type { FindSweepSegmentsOptions, SweepSplit } from '../core/sweeps/findSweepSegments';
 import type { ImportOverrides, ImportResult } from '../io/types';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
+import type { RunAhead } from '../run/runInput';
 import type { ExportRunInput } from './exportRun';
 import type { FitOutcome, FitProgressDetail, FitRequest } from './fitRun';
 
@@ -22,8 +23,10 @@ export interface RequestMap {
   };
   /** Read one export file (io/importVoltammogram); `data` is transferred. */
   import: {
-    input: { fileName: string; data: ArrayBuffer; overrides: ImportOverrides };
-    output: ImportResult & { sha256: string | null };
+    /** `ahead`: the rest of the file's run, so the worker analyses the file as soon as it is read (state/runInput.ts). */
+    input: { fileName: string; data: ArrayBuffer; overrides: ImportOverrides; ahead?: RunAhead };
+    /** `ahead`: the run key and the file's result, when asked for and the run did not fail. */
+    output: ImportResult & { sha256: string | null; ahead?: RunAheadResult };
   };
   /**
    * The per-file part of an analysis run (core/analysis/analyzeRun: analyzeRunFiles): peaks,
@@ -59,6 +62,12 @@ export interface RequestMap {
     input: ExportRunInput;
     output: { text: string };
   };
+}
+
+/** A file analysed where it was read: the key of the run request used (runRequestKey) and the file's result. */
+export interface RunAheadResult {
+  key: string;
+  result: RunFileResult | null;
 }
 
 export type RequestType = keyof RequestMap;

@@ -6,9 +6,14 @@ import { createWorkerClient, type AnalysisClient, type WorkerLike } from './clie
 import { createPoolClient } from './poolClient';
 import { createWorkerLane, routeRequests } from './workerLane';
 
-/** Two workers where the machine has more than one core (the page thread stays free either way). */
+/**
+ * Analysis workers beside the page's own thread: one core is left to the page (it handles the
+ * answers, the store and the plots), up to two workers. On a two-core machine a second worker
+ * only competes with the page: measured with `npm run bench:browser`, the demo was shown later and
+ * a 120-file folder read more slowly with two workers than with one.
+ */
 export function workerCount(hardwareConcurrency: number | undefined): number {
-  return (hardwareConcurrency ?? 1) >= 2 ? 2 : 1;
+  return Math.max(1, Math.min(2, (hardwareConcurrency ?? 1) - 1));
 }
 
 function analysisWorker(name: string): WorkerLike {

@@ -4,7 +4,7 @@
  * demo series, and the polarographic switch flips the plot.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, readPlot, waitForFiles, waitForRedraw } from './appHelpers';
+import { demoFileCount, readPlot, simulatedCsv, waitForFiles, waitForRedraw } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 describe('demo data at start', () => {
@@ -85,4 +85,26 @@ describe('demo data at start', () => {
     expect(app.pageErrors).toEqual([]);
     expect(app.outsideRequests).toEqual([]);
   });
+});
+
+describe('a demo file that cannot be loaded', () => {
+  for (const [what, answer] of [
+    ['is missing on the server', { status: 404, body: 'not here' }],
+    ['is damaged (cut short)', { status: 200, body: '{"files":[{"name":"cut.csv","bytes":4000}]}\nE,I\n0.1,' }],
+  ] as const) {
+    it(`${what}: the page says so, starts empty and still reads the user's own files`, async () => {
+      const app = await openApp('', undefined, undefined, async (context) => {
+        await context.route('**/demo-voltammograms-*.bin', (route) => route.fulfill({ ...answer, contentType: 'application/octet-stream' }));
+      });
+      try {
+        await app.page.waitForFunction(() => /demo voltammograms could not be loaded/.test(document.querySelector('[data-testid=notice]')?.textContent ?? ''), null, { timeout: 60_000 });
+        expect(await app.page.getByTestId('file-row').count()).toBe(0);
+        await app.page.getByTestId('file-input').setInputFiles([{ name: 'own_100mVs.csv', mimeType: 'text/csv', buffer: Buffer.from(simulatedCsv(0.1)) }]);
+        await waitForFiles(app.page, 1);
+        expect(app.pageErrors).toEqual([]);
+      } finally {
+        await app.close();
+      }
+    });
+  }
 });

@@ -4,7 +4,7 @@
  * and any request to a host other than this machine (such requests are also blocked, so a leak
  * fails loudly instead of hanging).
  */
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { inject } from 'vitest';
 
 export const CHROMIUM = process.env.HALFWAVE_CHROMIUM ?? '/usr/bin/chromium';
@@ -43,7 +43,8 @@ export function isLocalUrl(url: string): boolean {
   }
 }
 
-export async function openApp(path = '', viewport = { width: 1366, height: 768 }, colorScheme: 'light' | 'dark' = 'light'): Promise<OpenedApp> {
+/** `prepare`: called before the page loads (to answer some of its requests differently, say). */
+export async function openApp(path = '', viewport = { width: 1366, height: 768 }, colorScheme: 'light' | 'dark' = 'light', prepare?: (context: BrowserContext) => Promise<void>): Promise<OpenedApp> {
   const baseUrl = inject('baseUrl');
   const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: FLAGS });
   if (!announced) {
@@ -73,6 +74,7 @@ export async function openApp(path = '', viewport = { width: 1366, height: 768 }
     outsideRequests.push(url);
     return route.abort('blockedbyclient');
   });
+  await prepare?.(context);
   await page.goto(new URL(path, baseUrl).toString(), { waitUntil: 'load' });
   return {
     page,

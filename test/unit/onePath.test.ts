@@ -15,6 +15,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../../src/cli/main';
 import type { RunContract } from '../../src/io';
 import { startApp } from '../../src/state/app';
+import { demoInputsOf } from '../../src/state/demo';
+import { demoBundleBytes } from '../../scripts/demoBundle';
 import { openSessionText, saveSessionText } from '../../src/state/sessionActions';
 import { memoryStorageAdapter } from '../../src/state/storage';
 import { createHalfwaveStore } from '../../src/state/store';
@@ -153,7 +155,8 @@ describe('the screen, the results sheet and analyze --json compute through one p
   let demoStore: HalfwaveStore;
   beforeAll(async () => {
     demoStore = createHalfwaveStore({ client: createInThreadClient(), storage: null });
-    await startApp(demoStore, memoryStorageAdapter());
+    // The demo document as the build serves it (scripts/demoBundle.ts), read from demo-data/.
+    await startApp(demoStore, memoryStorageAdapter(), async () => ({ inputs: demoInputsOf(new Uint8Array(demoBundleBytes('demo-data'))), problem: null }));
   }, 120_000);
 
   it('on the demo data as the app opens it', async () => {

@@ -2,9 +2,9 @@
  * The blanks of a series (supporting electrolyte alone): each file subtracts the one nearest its
  * scan rate, unless the file on screen is given its own blank, or none.
  */
-import { blankNames, blankOf } from '../../state/runInput';
+import { blankNames, blankOf } from '../../run/runInput';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
-import { resolveCell } from '../../state/seriesCell';
+import { resolveCell } from '../../run/seriesCell';
 import type { SeriesCell } from '../../state/types';
 
 const SERIES_CHOICE = '';

@@ -2,7 +2,7 @@
 import { useMemo, useState } from 'react';
 import type { DisplayScale } from '../../state/display';
 import { fitFilesOf } from '../../state/fitRequest';
-import { analysedCurrentOf } from '../../state/runInput';
+import { analysedCurrentOf } from '../../run/runInput';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
 import type { FitSetup } from '../../state/types';
 import { buildFitFigure } from '../plots/fitFigure';

@@ -5,7 +5,7 @@
  */
 import { useEffect, useMemo, useState } from 'react';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
-import { analysedCurrentOf } from '../../state/runInput';
+import { analysedCurrentOf } from '../../run/runInput';
 import type { OverlayNormalisation } from '../../state/types';
 import { safeName } from '../download';
 import { buildOverlayFigure, type OverlayFile } from '../plots/overlayFigure';

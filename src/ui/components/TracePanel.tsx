@@ -1,7 +1,7 @@
 /** "Trace": the selected voltammogram with peaks, baselines and (optionally) the smoothed curve. */
 import { useEffect, useMemo } from 'react';
 import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/react';
-import { analysedCurrentOf } from '../../state/runInput';
+import { analysedCurrentOf } from '../../run/runInput';
 import { buildTraceFigure } from '../plots/traceFigure';
 import { PlotlyChart } from './PlotlyChart';
 import { TraceToolbar } from './TraceToolbar';

@@ -2,7 +2,7 @@
 import { useMemo } from 'react';
 import { displayScale, runScaleKey, scaleFromRunKey, type DisplayScale } from '../../state/display';
 import { useHalfwave } from '../../state/react';
-import { selectSeriesCell } from '../../state/seriesCell';
+import { selectSeriesCell } from '../../run/seriesCell';
 import type { ResolvedCell } from '../../state/types';
 
 export function useSeriesCell(group: string | null): ResolvedCell {

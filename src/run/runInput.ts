@@ -11,8 +11,9 @@ import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
 import { describeLayout } from '../io/describeLayout';
 import { SOFTWARE } from '../version';
 import { resolveCell as resolveSeriesCell, type ResolvedCell, type SeriesCell } from './seriesCell';
-import { emptyFileSettings, type AnalysisSettings } from './settings';
-import type { FileEntry, HalfwaveState } from './types';
+import { emptyFileSettings, type AnalysisSettings, type FileAnalysisSettings } from './settings';
+import type { ImportWarning } from '../io/errors';
+import type { Measurement } from '../io/types';
 
 /**
  * A series' cell in the core's units, with the origin of each value (so the results can name a
@@ -54,7 +55,7 @@ export function methodOptionsOf(settings: AnalysisSettings): MethodOptions {
 }
 
 /** Every series is reported on the display scale; one that cannot be converted stays on its own scale, with a warning. */
-export function reportOptionsOf(state: Pick<HalfwaveState, 'convention' | 'settings'>): ReportOptions {
+export function reportOptionsOf(state: Pick<RunSources, 'convention' | 'settings'>): ReportOptions {
   return { outputReference: state.settings.reference.displayReference, outputConvention: state.convention, unconvertible: 'keep-recording-scale' };
 }
 
@@ -62,8 +63,27 @@ export function reportOptionsOf(state: Pick<HalfwaveState, 'convention' | 'setti
  * What the run input is made from: the store's state, or the same fields rebuilt from a saved
  * session by the command line (cli/sessionSources.ts), so both map it the one same way.
  */
-export interface RunSources extends Pick<HalfwaveState, 'fileOrder' | 'fileSettings' | 'settings' | 'seriesCells' | 'convention'> {
-  files: Record<string, Pick<FileEntry, 'fileName' | 'group' | 'measurement' | 'sizeBytes' | 'sha256' | 'warnings'> | undefined>;
+export interface RunSources {
+  fileOrder: string[];
+  fileSettings: Record<string, FileAnalysisSettings>;
+  settings: AnalysisSettings;
+  seriesCells: Record<string, Partial<SeriesCell>>;
+  /** The sign convention of the display and the results. */
+  convention: CurrentDisplay;
+  files: Record<string, RunFileSource | undefined>;
+}
+
+/** The sign convention of currents on screen and in the results: IUPAC (anodic positive) or polarographic. */
+export type CurrentDisplay = 'iupac' | 'polarographic';
+
+/** What the run takes of a loaded file: its reading and where it came from. */
+export interface RunFileSource {
+  fileName: string;
+  group: string;
+  measurement: Measurement | null;
+  sizeBytes: number;
+  sha256: string | null;
+  warnings: ImportWarning[];
 }
 
 /** Names of every file some series or file uses as a blank. */
@@ -159,6 +179,55 @@ export function runInputOf(state: RunSources, ids: string[] = state.fileOrder): 
     report: reportOptionsOf(state),
     software: { ...SOFTWARE },
   };
+}
+
+/**
+ * Everything a file's run takes from the workbench except the file's own reading: the worker that
+ * reads the file analyses it at once from this (`runAheadSources`), with no round trip through
+ * the page. Only the file's series and its own settings are sent; whatever the other files add
+ * (their headers, blanks, an internal standard) shows as a different run key, and the page then
+ * runs the file again as usual (analysisSlice.ts).
+ */
+export interface RunAhead {
+  fileId: string;
+  group: string;
+  sizeBytes: number;
+  settings: AnalysisSettings;
+  convention: RunSources['convention'];
+  seriesCells: RunSources['seriesCells'];
+  fileSettings: RunSources['fileSettings'];
+}
+
+/** The snapshot for a file about to be read; null when its run needs other files (blanks, a measured internal standard). */
+export function runAheadOf(state: RunSources, id: string): RunAhead | null {
+  const f = state.files[id];
+  if (!f) return null;
+  const cell = resolveSeriesCell(state, f.group).cell;
+  if (cell.blankFiles.length > 0 || state.fileSettings[id]?.blankFile || (cell.internalStandardNearV !== null && cell.fileReference !== 'Fc')) return null;
+  const own = state.fileSettings[id];
+  const entered = state.seriesCells[f.group];
+  return {
+    fileId: id, group: f.group, sizeBytes: f.sizeBytes, settings: state.settings, convention: state.convention,
+    seriesCells: entered ? { [f.group]: entered } : {}, fileSettings: own ? { [id]: own } : {},
+  };
+}
+
+/** The run sources of a snapshot with the file as read: the one file, nothing else loaded. */
+export function runAheadSources(ahead: RunAhead, file: Pick<RunFileSource, 'fileName' | 'measurement' | 'sha256' | 'warnings'>): RunSources {
+  return {
+    settings: ahead.settings, convention: ahead.convention, seriesCells: ahead.seriesCells, fileSettings: ahead.fileSettings,
+    fileOrder: [ahead.fileId],
+    files: { [ahead.fileId]: { ...file, group: ahead.group, sizeBytes: ahead.sizeBytes } },
+  };
+}
+
+/**
+ * A file run request as text, with every column replaced by its length (the columns of a run
+ * made ahead are the very file the page then holds): two requests with the same key give the
+ * same result.
+ */
+export function runRequestKey(request: { run: RunInput; only: string[] }): string {
+  return JSON.stringify(request, (_key, value: unknown) => (ArrayBuffer.isView(value) ? `#${(value as Float64Array).length}` : value));
 }
 
 const subtracted = new WeakMap<object, { blank: object; currentA: Float64Array }>();
