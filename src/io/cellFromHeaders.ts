@@ -84,7 +84,23 @@ function areaFromLines(m: Pick<Measurement, 'preamble' | 'fileName'>): { value: 
 
 type HeaderSource = Pick<Measurement, 'fileName' | 'preamble' | 'areaCm2' | 'concentrationMolPerCm3' | 'temperatureK' | 'referenceElectrode'>;
 
+/**
+ * What one file's header states, kept per file (a file's reading never changes): a series' cell is
+ * resolved again as each of its files is read, over all of them, and a folder of a hundred files
+ * would read every header a hundred times.
+ */
+const stated = new WeakMap<HeaderSource, Found>();
+
 function valuesOf(m: HeaderSource): Found {
+  let found = stated.get(m);
+  if (!found) {
+    found = readValues(m);
+    stated.set(m, found);
+  }
+  return found;
+}
+
+function readValues(m: HeaderSource): Found {
   const out: Found = { values: {}, evidence: {} };
   const put = (field: Field, value: number | ReferenceId, line: number, text: string) => {
     (out.values as Record<Field, unknown>)[field] = value;
