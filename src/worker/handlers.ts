@@ -26,8 +26,10 @@ type Handler<K extends RequestType> = (input: RequestInput<K>, ctx: HandlerConte
 export const handlers: { [K in RequestType]: Handler<K> } = {
   segments: (input) => findSweepSegments(input.potentialV, input.options),
   import: async (input, ctx) => {
-    // Hash first: the importer may keep views on the buffer, and the digest needs it intact.
-    const sha256 = await sha256Hex(input.data);
+    // Web Crypto copies the bytes when digest() is called (W3C Web Cryptography API, digest(),
+    // step 2), so the hash runs beside the reading, on the browser's own thread.
+    const hashing = sha256Hex(input.data);
+    hashing.catch(() => undefined);
     ctx.progress(0, 'reading');
     // The async form yields between chunks, so a cancel message is seen mid-file.
     const result = await importVoltammogramAsync(input.fileName, input.data, {
@@ -35,6 +37,7 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
       signal: ctx.signal,
       onProgress: (fraction: number) => ctx.progress(fraction, 'reading rows'),
     });
+    const sha256 = await hashing;
     const ahead = input.ahead ? runAhead(input.ahead, input.fileName, result, sha256) : undefined;
     return { ...result, sha256, ...(ahead ? { ahead } : {}) };
   },
