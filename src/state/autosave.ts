@@ -6,7 +6,7 @@
  */
 import { AUTOSAVE_KEY, saveSessionText } from './sessionActions';
 import { isQuotaError, type StorageAdapter } from './storage';
-import { bytesOf, type FileSource } from './textBytes';
+import { bytesOf, type FileSource } from './fileSource';
 import type { HalfwaveState, HalfwaveStore } from './types';
 
 interface NotSaved {

@@ -9,7 +9,7 @@ import { naturalCompare } from '../io/naturalOrder';
 import { WorkerLostError } from '../worker/errors';
 import type { ImportOverrides } from '../io/types';
 import { runAheadOf } from '../run/runInput';
-import { bytesOf, sourceOf, sourceSize } from './textBytes';
+import { bytesOf, sourceOf, sourceSize } from './fileSource';
 import { resolveCell, sameTraceCell, type SeriesCell } from '../run/seriesCell';
 import { mergeFileSettings } from '../run/settings';
 import { toUserError, type FileEntry, type FileInput, type FilesSlice, type RestoredFile, type SliceCreator } from './types';

@@ -9,7 +9,7 @@
 import { decodeBase64, encodeBase64, parseSession, serializeSession, SESSION_FORMAT, SESSION_VERSION, type SessionDocument, type SessionFileRecord } from '../io/session';
 import { defaultSettings, mergeFileSettings, mergeSeriesCells, mergeSettings } from '../run/settings';
 import type { StorageAdapter } from './storage';
-import { bytesOf as bytesOfSource, type FileSource } from './textBytes';
+import { bytesOf as bytesOfSource, type FileSource } from './fileSource';
 import type { FileEntry, HalfwaveState, HalfwaveStore, OverlayNormalisation, ReadoutTab, ViewSlice } from './types';
 import { mergeFitSetups } from './fitRequest';
 import { mergeWorkingWindows } from './workingWindowSlice';

@@ -9,7 +9,7 @@ import type { SessionFileRecord } from '../io/session';
 import type { ImportOverrides, Measurement } from '../io/types';
 import type { AnalysisClient } from '../worker/client';
 import type { RunAheadResult } from '../worker/protocol';
-import type { FileSource } from './textBytes';
+import type { FileSource } from './fileSource';
 import type { CurrentDisplay } from '../run/runInput';
 import type { FitCell, FitResult } from '../core/fit';
 import type { ComparisonSummary } from '../io/fitContract';
@@ -35,7 +35,7 @@ export interface FileEntry {
   id: string;
   fileName: string;
   sizeBytes: number;
-  /** The original bytes, kept so the file can be re-imported with overrides and saved (textBytes.ts). */
+  /** The original bytes, kept so the file can be re-imported with overrides and saved (fileSource.ts). */
   source: FileSource;
   sha256: string | null;
   group: string;
