@@ -136,6 +136,8 @@ function detectIn(fileName: string, lines: string[], overrides: ImportOverrides)
   const body = lines.slice(startAt);
   let best: Scored | null = null;
   for (const delimiter of overrides.delimiter ? [overrides.delimiter] : DELIMITERS) {
+    // A delimiter that no line holds splits no line into two fields, so it cannot score: not tried.
+    if (!overrides.delimiter && delimiter !== 'whitespace' && !body.some((l) => l.includes(delimiter))) continue;
     const split = body.map((l) => splitFields(l, delimiter));
     // With ',' as delimiter a decimal comma is possible only inside quoted fields ("0,12","3,4").
     const decimals: DecimalMark[] = overrides.decimalMark ? [overrides.decimalMark] : ['.', ','];

@@ -105,6 +105,9 @@ const rows: Row[] = [
     } },
   { name: 'polarographic file named in the preamble', layout: { delimiter: ',', header: H, columns: ['potential', 'current'], polarographic: true, preamble: ['Sign convention: cathodic current positive'] },
     check: (r) => expect(r.measurement.currentConvention).toBe('polarographic') },
+  // Layout detection skips a delimiter no line holds; these two make the remaining candidates decide.
+  { name: 'tab table under a preamble holding commas and semicolons', layout: { delimiter: '\t', header: H, columns: ['potential', 'current'], preamble: ['Operator: A. N. Other; bench 3', 'Electrolyte: 0.1 M KCl, degassed'] } },
+  { name: 'spaces only: no comma, semicolon or tab anywhere in the file', layout: { delimiter: 'spaces', columns: ['potential', 'current'] } },
   { name: 'scan rate from the file name only', fileName: 'series2_50mVs.csv', layout: { delimiter: ',', header: H, columns: ['potential', 'current'] },
     check: (r) => {
       expect(r.measurement.scanRateSource).toBe('filename');
