@@ -68,7 +68,8 @@ function traceWarnings(file: ResolvedRunFile, result: RunFileResult['analysis'],
   for (const c of result.cycles) for (const w of c.warnings) out.push({ code: 'TRACE', fileName, message: `cycle ${c.index}: ${w.message}` });
   if (ruOhm > 0) {
     let maxDrop = 0;
-    for (const i of file.input.voltammogram.currentA) maxDrop = Math.max(maxDrop, Math.abs(i * ruOhm));
+    const currentA = file.input.voltammogram.currentA;
+    for (let k = 0; k < currentA.length; k++) maxDrop = Math.max(maxDrop, Math.abs((currentA[k] as number) * ruOhm));
     out.push({ code: 'OHMIC', fileName, message: `iR correction moves potentials by up to ${(maxDrop * 1000).toFixed(1)} mV` });
   }
   return out;

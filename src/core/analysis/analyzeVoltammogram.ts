@@ -81,7 +81,10 @@ function spikeMessage(spikes: SpikePoint[], unit: 'µA' | 'µA/cm²'): string {
 /** Largest (sign 1) or smallest (sign −1) located current. */
 function currentRangeEnd(sig: SweepSignals, sign: 1 | -1): number {
   let best = -Infinity;
-  for (const i of sig.locatingA) best = Math.max(best, sign * i);
+  // An index loop: for…of over a typed array allocates an iterator result per point until the
+  // engine optimises the loop, and a first run of the analysis is never optimised yet.
+  const a = sig.locatingA;
+  for (let k = 0; k < a.length; k++) best = Math.max(best, sign * (a[k] as number));
   return sign * best;
 }
 
