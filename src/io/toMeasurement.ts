@@ -88,14 +88,15 @@ function chooseTimeUnit(a: RoleAssignment, o: ImportOverrides): Guess<TimeUnit> 
 
 /** Builds the core columns; throws TOO_FEW_POINTS or CONSTANT_POTENTIAL when nothing usable is left. */
 export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment, u: UnitChoice, convention: CurrentConvention, areaCm2: PreambleValue | null, warnings: ImportWarning[]): CoreColumns {
-  const needed = [a.potentialColumn, a.currentColumn, a.timeColumn, a.cycleColumn].filter((j): j is number => j !== null);
+  const needed = [a.potentialColumn, a.currentColumn, a.timeColumn, a.cycleColumn].filter((j): j is number => j !== null).map((j) => t.columns[j] as Float64Array);
   const keep = new Uint8Array(t.rowCount);
   let kept = 0;
   const dropped: number[] = [];
   let droppedCount = 0;
   for (let i = 0; i < t.rowCount; i++) {
     let ok = true;
-    for (const j of needed) if (!Number.isFinite((t.columns[j] as Float64Array)[i] as number)) ok = false;
+    // Index loops: this runs once per row, and a first file is read before the engine optimises it.
+    for (let n = 0; n < needed.length; n++) if (!Number.isFinite((needed[n] as Float64Array)[i] as number)) ok = false;
     if (ok) { keep[i] = 1; kept++; } else { droppedCount++; if (dropped.length < 20) dropped.push(t.lineOfRow[i] as number); }
   }
   if (droppedCount) warnings.push(makeWarning('SKIPPED_ROWS', `${fileName}: ${droppedCount} rows skipped because a needed value was not a finite number (NaN, Inf or empty) — lines ${describeLines(dropped, droppedCount)}`, dropped, droppedCount));
