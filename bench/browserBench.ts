@@ -12,7 +12,7 @@
  * 3. With those files loaded, a click on another file until its trace is drawn again (median).
  */
 import { mkdtemp, rm, writeFile } from 'node:fs/promises';
-import { existsSync, readdirSync, readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -22,6 +22,7 @@ import { handlers, type HandlerContext } from '../src/worker/handlers';
 import { cellValuesOf, methodOptionsOf } from '../src/run/runInput';
 import { defaultCell } from '../src/run/seriesCell';
 import { defaultSettings } from '../src/run/settings';
+import { demoFileNames } from '../scripts/demoBundle';
 import { smallCvFiles } from './scaleData';
 import type { BenchRow } from './types';
 
@@ -109,11 +110,11 @@ export async function runBrowserBench(): Promise<BenchRow[]> {
   const dir = await mkdtemp(join(tmpdir(), 'halfwave-bench-'));
   try {
     // The yardstick first, while nothing else runs.
-    const demoFiles = readdirSync('demo-data').filter((f) => /\.(csv|txt|tsv|dat)$/.test(f)).map((f) => ({ name: f, text: readFileSync(join('demo-data', f), 'utf8') }));
+    const demoFiles = demoFileNames('demo-data').map((f) => ({ name: f, text: readFileSync(join('demo-data', f), 'utf8') }));
     const demoNodeMs = await nodeBatchMs(demoFiles);
     const page = await (await browser.newContext({ viewport: { width: 1366, height: 768 } })).newPage();
     await page.addInitScript({ content: PROBE });
-    const demoCount = readdirSync('demo-data').filter((f) => /\.(csv|txt|tsv|dat)$/.test(f)).length;
+    const demoCount = demoFiles.length;
     await page.addInitScript({ content: `window.benchWant = ${demoCount};` });
     await page.goto(`http://127.0.0.1:${address.port}/`);
     const shownMs = await waitMark(page, `shown${demoCount}`);

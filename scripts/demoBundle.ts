@@ -18,9 +18,14 @@ const ASSET_NAME = 'demo-voltammograms.bin';
 /** The preload link's id: state/demo.ts finds the file's address by it. */
 const DEMO_LINK_ID = 'halfwave-demo';
 
-/** The demo files of a folder, in name order (exports only: the folder's README is not one), as one file. */
+/** The demo exports of a folder, in name order (the folder's README is not one). */
+export function demoFileNames(dir: string): string[] {
+  return readdirSync(dir).filter((f) => /\.(csv|txt|tsv|dat)$/i.test(f)).sort();
+}
+
+/** The demo files of a folder, in name order, as one file. */
 export function demoBundleBytes(dir: string): Uint8Array {
-  const names = readdirSync(dir).filter((f) => /\.(csv|txt|tsv|dat)$/i.test(f)).sort();
+  const names = demoFileNames(dir);
   const files = names.map((name) => ({ name, data: readFileSync(join(dir, name)) }));
   const head = Buffer.from(`${JSON.stringify({ files: files.map((f) => ({ name: f.name, bytes: f.data.length })) })}\n`, 'utf8');
   return new Uint8Array(Buffer.concat([head, ...files.map((f) => f.data)]));

@@ -1,6 +1,6 @@
 /**
- * Loaded files: queue many imports through the workers, two at a time (so 100+ files and
- * million-row files never block the page), track per-file progress and errors, re-import with
+ * Loaded files: queue many imports through the workers, a bounded number at a time (so 100+
+ * files and million-row files never block the page), track per-file progress and errors, re-import with
  * overrides, and group files into scan-rate series. A failed import never removes anything that
  * was already loaded: a failed re-import keeps the previous measurement beside its error.
  */

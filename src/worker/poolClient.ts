@@ -1,7 +1,8 @@
 /**
  * Several analysis clients behind one: each request goes to the client with the fewest requests
  * in flight (ties to the first). Requests carry everything they need, so any worker can serve
- * any request; a pool of two keeps both cores busy while many files are read and analysed.
+ * any request; where the machine has cores to spare, a pool of two reads and analyses many files
+ * side by side (spawn.ts decides how many).
  * A member given as a factory is started again when its worker stops on its own, and a request
  * the lost worker was doing is sent once more to a live one — except a file import, whose bytes
  * went to the lost worker (the store reads the file again).

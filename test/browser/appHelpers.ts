@@ -4,12 +4,12 @@
  * host element as `data` and `layout`).
  */
 import { AxeBuilder } from '@axe-core/playwright';
-import { readdirSync } from 'node:fs';
+import { demoFileNames } from '../../scripts/demoBundle';
 import { resolve } from 'node:path';
 import type { Page } from 'playwright-core';
 
 export function demoFileCount(): number {
-  return readdirSync(resolve(import.meta.dirname, '../../demo-data')).filter((f) => /\.(csv|txt|tsv|dat)$/.test(f)).length;
+  return demoFileNames(resolve(import.meta.dirname, '../../demo-data')).length;
 }
 
 /**
