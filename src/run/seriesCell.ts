@@ -92,26 +92,43 @@ export function cellFromPreambles(measurements: readonly Measurement[]): { value
 type GroupPreambles = { measurements: Measurement[]; fromFiles: ReturnType<typeof cellFromPreambles> };
 
 /**
- * What a group's file headers state, kept while the store's files and their order are the same
- * objects: one state is asked many times (each file read and analysed asks for its series'
- * cell), and reading every header of the group each time made a batch quadratic. The store
- * replaces these objects on every change, never edits them in place.
+ * What a group's file headers state, kept while the group holds the same measurements in the same
+ * order: one state is asked many times (each file read and analysed asks for its series' cell,
+ * and every progress tick replaces the store's `files`), and reading every header of the group
+ * each time made a batch quadratic. Kept per file order (a new order is a new list of files, and
+ * the old entries go with it); the store replaces these objects on every change, never edits
+ * them in place.
  */
-const preambleMemo = new WeakMap<CellSources['files'], Map<string | null, { fileOrder: string[]; value: GroupPreambles }>>();
+const preambleMemo = new WeakMap<readonly string[], Map<string | null, GroupPreambles>>();
 
 function groupPreambles(state: CellSources, group: string | null): GroupPreambles {
-  const byGroup = preambleMemo.get(state.files) ?? new Map<string | null, { fileOrder: string[]; value: GroupPreambles }>();
-  preambleMemo.set(state.files, byGroup);
+  const measurements: Measurement[] = [];
+  if (group !== null) {
+    for (let i = 0; i < state.fileOrder.length; i++) {
+      const f = state.files[state.fileOrder[i] as string];
+      if (f?.group === group && f.measurement) measurements.push(f.measurement);
+    }
+  }
+  let byGroup = preambleMemo.get(state.fileOrder);
+  if (!byGroup) {
+    byGroup = new Map();
+    preambleMemo.set(state.fileOrder, byGroup);
+  }
   const hit = byGroup.get(group);
-  if (hit && hit.fileOrder === state.fileOrder) return hit.value;
-  const measurements = group === null ? [] : state.fileOrder
-    .map((id) => state.files[id])
-    .filter((f) => f?.group === group && f.measurement)
-    .map((f) => f?.measurement as Measurement);
+  if (hit && sameItems(hit.measurements, measurements)) return hit;
   const value = { measurements, fromFiles: cellFromPreambles(measurements) };
-  byGroup.set(group, { fileOrder: state.fileOrder, value });
+  byGroup.set(group, value);
   return value;
 }
+
+function sameItems<T>(a: readonly T[], b: readonly T[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+/** The resolved cell of each group's headers, for the settings and entered values it was made from. */
+const resolvedMemo = new WeakMap<GroupPreambles, { settings: AnalysisSettings; own: Partial<SeriesCell> | undefined; value: ResolvedCell }>();
 
 export interface CellSources {
   settings: AnalysisSettings;
@@ -120,10 +137,19 @@ export interface CellSources {
   fileOrder: string[];
 }
 
+/** The cell of a group, its three layers merged. The same state gives the same (shared, not to be edited) object. */
 export function resolveCell(state: CellSources, group: string | null): ResolvedCell {
-  const { measurements, fromFiles } = groupPreambles(state, group);
-  const own = group === null ? {} : (state.seriesCells[group] ?? {});
-  const cell = { ...defaultCell(state.settings), ...fromFiles.values, ...own };
+  const preambles = groupPreambles(state, group);
+  const entered = group === null ? undefined : state.seriesCells[group];
+  const hit = resolvedMemo.get(preambles);
+  if (hit && hit.settings === state.settings && hit.own === entered && hit.value.group === group) return hit.value;
+  const value = mergeCell(preambles, entered ?? {}, state.settings, group);
+  resolvedMemo.set(preambles, { settings: state.settings, own: entered, value });
+  return value;
+}
+
+function mergeCell({ measurements, fromFiles }: GroupPreambles, own: Partial<SeriesCell>, settings: AnalysisSettings, group: string | null): ResolvedCell {
+  const cell = { ...defaultCell(settings), ...fromFiles.values, ...own };
   const origin = Object.fromEntries(CELL_FIELDS.map((k) => [k, k in own ? 'entered' : k in fromFiles.values ? 'header' : 'default'])) as Record<CellField, CellOrigin>;
   const evidence = Object.fromEntries(CELL_FIELDS.map((k) => [k, origin[k] === 'entered' ? 'entered for this series'
     : origin[k] === 'header' ? (fromFiles.evidence[k] ?? 'stated in a file header') : 'the default (no file states it, nobody entered it)'])) as Record<CellField, string>;

@@ -112,6 +112,25 @@ describe('the memo the UI reads', () => {
     store.getState().seedSeriesCell('disk', { areaCm2: 0.02 });
     expect(selectSeriesCell(store.getState(), 'disk').cell.areaCm2).toBe(0.02);
   });
+
+  it('reads the headers again only when the series holds other files, not on every change of the store', async () => {
+    const store = newStore();
+    const [first] = await loadSeries(store, 'gold', PREAMBLE);
+    const before = resolveCell(store.getState(), 'gold');
+    // A change that leaves the series' files as they were (a file's progress) gives the same object.
+    store.setState((s) => ({ files: { ...s.files, [first as string]: { ...s.files[first as string]!, progress: 0.5 } } }));
+    expect(resolveCell(store.getState(), 'gold')).toBe(before);
+    // A file that joins the series without a header leaves the values, in a new object counting it.
+    await store.getState().addFiles([{ name: 'gold-0.4.csv', data: csv(0.4) }], 'gold');
+    const after = resolveCell(store.getState(), 'gold');
+    expect(after).not.toBe(before);
+    expect(after.fileCount).toBe(4);
+    expect(after.cell.areaCm2).toBe(0.0314);
+    // A value entered for the series wins over the header, at once.
+    store.getState().seedSeriesCell('gold', { areaCm2: 0.05 });
+    expect(resolveCell(store.getState(), 'gold').cell.areaCm2).toBe(0.05);
+    expect(resolveCell(store.getState(), 'gold').origin.areaCm2).toBe('entered');
+  });
 });
 
 describe('editing one series', () => {

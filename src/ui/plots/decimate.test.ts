@@ -46,3 +46,18 @@ describe('chooseCurrentScale', () => {
     expect(chooseCurrentScale(maxAbs([0, 0])).unit).toBe('µA');
   });
 });
+
+describe('decimateMinMax with maps', () => {
+  it('applies the maps to the points it keeps, in one pass (worked by hand)', () => {
+    expect(decimateMinMax([1, 2, 3], [4, 5, 6], 0, 3, 10, (v) => v + 0.5, (a) => -2 * a)).toEqual({ x: [1.5, 2.5, 3.5], y: [-8, -10, -12] });
+  });
+
+  it('keeps a bucket\'s minimum before its maximum when it comes first, each point once (worked by hand)', () => {
+    // 9 points, 3 points allowed: one bucket of 9, then the last point.
+    const y = [0, -5, 1, 2, 9, 3, 0, 0, 1];
+    const x = y.map((_, i) => i);
+    expect(decimateMinMax(x, y, 0, 9, 3)).toEqual({ x: [0, 1, 4, 8], y: [0, -5, 9, 1] });
+    // The bucket's first point is its maximum: kept once.
+    expect(decimateMinMax(x, [9, 1, -2, 3, 0, 0, 0, 0, 0], 0, 9, 3)).toEqual({ x: [0, 2, 8], y: [9, -2, 0] });
+  });
+});

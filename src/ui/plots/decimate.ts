@@ -10,14 +10,23 @@ export interface XY {
   y: number[];
 }
 
-export function decimateMinMax(x: ArrayLike<number>, y: ArrayLike<number>, start: number, end: number, maxPoints: number): XY {
+type Map1 = (v: number) => number;
+const same: Map1 = (v) => v;
+
+/**
+ * The thinned points of `start…end`, with `mapX` and `mapY` applied to the points kept (so a
+ * redraw makes no second pass over them). One pass, no allocation per bucket: the first drawing
+ * of a page runs this before the engine has optimised it.
+ */
+export function decimateMinMax(x: ArrayLike<number>, y: ArrayLike<number>, start: number, end: number, maxPoints: number, mapX: Map1 = same, mapY: Map1 = same): XY {
   const n = end - start;
   const out: XY = { x: [], y: [] };
+  const keep = (i: number) => {
+    out.x.push(mapX(x[i] as number));
+    out.y.push(mapY(y[i] as number));
+  };
   if (n <= maxPoints) {
-    for (let i = start; i < end; i++) {
-      out.x.push(x[i] as number);
-      out.y.push(y[i] as number);
-    }
+    for (let i = start; i < end; i++) keep(i);
     return out;
   }
   const buckets = Math.max(1, Math.floor(maxPoints / 3));
@@ -27,16 +36,26 @@ export function decimateMinMax(x: ArrayLike<number>, y: ArrayLike<number>, start
     const z = Math.min(end, start + Math.floor((b + 1) * size));
     let lo = a;
     let hi = a;
+    let yLo = y[a] as number;
+    let yHi = yLo;
     for (let i = a + 1; i < z; i++) {
-      if ((y[i] as number) < (y[lo] as number)) lo = i;
-      if ((y[i] as number) > (y[hi] as number)) hi = i;
+      const v = y[i] as number;
+      if (v < yLo) {
+        lo = i;
+        yLo = v;
+      }
+      if (v > yHi) {
+        hi = i;
+        yHi = v;
+      }
     }
-    for (const i of [...new Set([a, lo, hi])].sort((p, q) => p - q)) {
-      out.x.push(x[i] as number);
-      out.y.push(y[i] as number);
-    }
+    // The bucket's first point, then its extremes in trace order, each once.
+    keep(a);
+    const first = Math.min(lo, hi);
+    const second = Math.max(lo, hi);
+    if (first !== a) keep(first);
+    if (second !== first) keep(second);
   }
-  out.x.push(x[end - 1] as number);
-  out.y.push(y[end - 1] as number);
+  keep(end - 1);
   return out;
 }

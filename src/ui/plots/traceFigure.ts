@@ -75,10 +75,10 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
   const data: Data[] = [];
   companions.forEach((c, k) => {
     if (!c.range) return;
-    const xy = decimateMinMax(c.potentialV, c.currentA, c.range.start, c.range.end, 1500);
+    const xy = decimateMinMax(c.potentialV, c.currentA, c.range.start, c.range.end, 1500, tx, ty);
     // One legend entry for all of them; hovering names each file.
     data.push({
-      type: 'scatter', mode: 'lines', name: 'other files of the series', legendgroup: 'series', showlegend: k === 0, x: xy.x.map(tx), y: xy.y.map(ty),
+      type: 'scatter', mode: 'lines', name: 'other files of the series', legendgroup: 'series', showlegend: k === 0, x: xy.x, y: xy.y,
       line: { color: palette.companion, width: 1 }, hovertemplate: `${c.name}<br>E %{x:.4f} V<br>i %{y:.4g}<extra></extra>`,
     });
   });
@@ -98,9 +98,9 @@ export function buildTraceFigure(input: TraceFigureInput): TraceFigure {
   }
   if (input.theory) {
     const t = input.theory;
-    const xy = decimateMinMax(t.potentialV, t.currentA, 0, t.potentialV.length, input.maxPoints ?? 6000);
+    const xy = decimateMinMax(t.potentialV, t.currentA, 0, t.potentialV.length, input.maxPoints ?? 6000, tx, ty);
     data.push({
-      type: 'scatter', mode: 'lines', name: t.label, x: xy.x.map(tx), y: xy.y.map(ty),
+      type: 'scatter', mode: 'lines', name: t.label, x: xy.x, y: xy.y,
       line: { color: palette.theory, width: 1.6, dash: 'dot' }, hovertemplate: 'theory<br>E %{x:.4f} V<br>i %{y:.4g}<extra></extra>',
     });
   }
@@ -127,9 +127,9 @@ function pickCycle(cycles: CycleRange[], cycle: number): CycleRange | undefined 
 }
 
 function line(input: TraceFigureInput, start: number, end: number, name: string, color: string, tx: Map1, ty: Map1, width = 1.6): Data {
-  const xy = decimateMinMax(input.potentialV, input.currentA, start, end, input.maxPoints ?? 6000);
+  const xy = decimateMinMax(input.potentialV, input.currentA, start, end, input.maxPoints ?? 6000, tx, ty);
   return {
-    type: 'scatter', mode: 'lines', name, x: xy.x.map(tx), y: xy.y.map(ty),
+    type: 'scatter', mode: 'lines', name, x: xy.x, y: xy.y,
     line: { color, width }, hovertemplate: 'E %{x:.4f} V<br>i %{y:.4g}<extra>%{fullData.name}</extra>',
   };
 }
