@@ -12,7 +12,10 @@ export interface ColumnStats {
   allIntegers: boolean;
   nonDecreasing: boolean;
   strictlyIncreasing: boolean;
-  /** Distinct values seen, counted up to 1001. */
+  /**
+   * Distinct values seen, counted up to 1001 while every value is a whole number (only such
+   * columns are asked; a column of fractions stops counting at its first fraction).
+   */
   distinct: number;
   /** Total variation divided by the span (max − min); Infinity when the span is 0. */
   wander: number;
@@ -40,7 +43,7 @@ export function columnStats(col: Float64Array, maxPoints = 20000): ColumnStats {
     if (v < min) min = v;
     if (v > max) max = v;
     if (allIntegers && !Number.isInteger(v)) allIntegers = false;
-    if (seen.size <= 1000) seen.add(v);
+    if (allIntegers && seen.size <= 1000) seen.add(v);
     if (prev === prev) {
       if (v < prev) nonDecreasing = false;
       if (v <= prev) strictlyIncreasing = false;

@@ -42,7 +42,10 @@ interface LineClass {
 function classify(fields: string[], c: Candidate): LineClass {
   let numbers = 0;
   let numericLike = 0;
-  for (const f of fields) {
+  // Index loops: for…of allocates an iterator result per step in code not yet optimised, and this
+  // runs on every sampled line of a page's first files.
+  for (let i = 0; i < fields.length; i++) {
+    const f = fields[i] as string;
     if (Number.isFinite(parseNumber(f, c.decimal === ','))) {
       numbers++;
       numericLike++;
@@ -63,7 +66,10 @@ interface Scored {
 function scoreCandidate(lines: string[], split: string[][], c: Candidate): Scored | null {
   const cls = split.map((f) => classify(f, c));
   const widths = new Map<number, number>();
-  for (const x of cls) if (x.data) widths.set(x.fields, (widths.get(x.fields) ?? 0) + 1);
+  for (let i = 0; i < cls.length; i++) {
+    const x = cls[i] as LineClass;
+    if (x.data) widths.set(x.fields, (widths.get(x.fields) ?? 0) + 1);
+  }
   let k = 0;
   let best = 0;
   for (const [w, count] of widths) if (count > best || (count === best && w > k)) [k, best] = [w, count];

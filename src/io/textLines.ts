@@ -10,19 +10,19 @@ export type LineEnding = 'LF' | 'CRLF' | 'CR' | 'mixed' | 'none';
 
 /** Returns the text with every line ending turned into "\n", and what the file used. */
 export function normaliseLineEnds(text: string): { text: string; lineEnding: Guess<LineEnding> } {
-  const crlf = countMatches(text, /\r\n/g, 200000);
-  const cr = countMatches(text, /\r(?!\n)/g, 200000);
-  const lf = countMatches(text, /(?<!\r)\n/g, 200000);
-  const kinds = [crlf > 0, cr > 0, lf > 0].filter(Boolean).length;
+  const crlf = occursIn(text, /\r\n/, 200000);
+  const cr = occursIn(text, /\r(?!\n)/, 200000);
+  const lf = occursIn(text, /(?<!\r)\n/, 200000);
+  const kinds = [crlf, cr, lf].filter(Boolean).length;
   const value: LineEnding = kinds === 0 ? 'none' : kinds > 1 ? 'mixed' : crlf ? 'CRLF' : cr ? 'CR' : 'LF';
   const names: Record<LineEnding, string> = { LF: 'LF (Unix)', CRLF: 'CRLF (Windows)', CR: 'CR (classic Mac)', mixed: 'mixed', none: 'none (a single line)' };
   const out = crlf || cr ? text.replace(/\r\n?/g, '\n') : text;
   return { text: out, lineEnding: { value, overridden: false, explanation: `line endings ${names[value]}` } };
 }
 
-function countMatches(text: string, re: RegExp, limit: number): number {
-  const head = text.length > limit ? text.slice(0, limit) : text;
-  return head.match(re)?.length ?? 0;
+/** Whether `re` matches within the first `limit` characters (a search that stops at the first match, listing none). */
+function occursIn(text: string, re: RegExp, limit: number): boolean {
+  return re.test(text.length > limit ? text.slice(0, limit) : text);
 }
 
 export interface SampledLines {
@@ -53,7 +53,10 @@ export function sampleLines(text: string, maxLines = 4000, maxChars = 1 << 20): 
 export function splitFields(line: string, delimiter: Delimiter): string[] {
   if (delimiter === 'whitespace') {
     const t = line.trim();
-    return t === '' ? [] : t.split(/\s+/).map(unquote);
+    if (t === '') return [];
+    const parts = t.split(/\s+/);
+    for (let i = 0; i < parts.length; i++) parts[i] = unquote(parts[i] as string);
+    return parts;
   }
   if (line.indexOf('"') === -1) {
     const parts = line.split(delimiter);

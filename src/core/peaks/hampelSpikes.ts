@@ -32,15 +32,19 @@ export interface HampelSpikesResult {
   cleanedA: Float64Array;
 }
 
-function windowMedianAndScale(x: ArrayLike<number>, lo: number, hi: number, buf: Float64Array): { m: number; s: number } {
-  const n = hi - lo;
-  for (let j = 0; j < n; j++) buf[j] = x[lo + j] as number;
-  const w = buf.subarray(0, n).sort();
+/**
+ * Median m and 1.4826·MAD of x[lo, lo + w.length), written to out[0] and out[1]. `w` is the
+ * window's own scratch buffer: one per trace, nothing allocated per point.
+ */
+function windowMedianAndScale(x: ArrayLike<number>, lo: number, w: Float64Array, out: Float64Array): void {
+  const n = w.length;
+  for (let j = 0; j < n; j++) w[j] = x[lo + j] as number;
+  w.sort();
   const m = n % 2 ? w[(n - 1) / 2]! : (w[n / 2 - 1]! + w[n / 2]!) / 2;
   for (let j = 0; j < n; j++) w[j] = Math.abs(w[j]! - m);
   w.sort();
-  const mad = n % 2 ? w[(n - 1) / 2]! : (w[n / 2 - 1]! + w[n / 2]!) / 2;
-  return { m, s: 1.4826 * mad };
+  out[0] = m;
+  out[1] = 1.4826 * (n % 2 ? w[(n - 1) / 2]! : (w[n / 2 - 1]! + w[n / 2]!) / 2);
 }
 
 export function hampelSpikes(currentA: Float64Array, segments: SweepSegment[], options: HampelSpikesOptions = {}): HampelSpikesResult {
@@ -50,8 +54,10 @@ export function hampelSpikes(currentA: Float64Array, segments: SweepSegment[], o
   if (currentA.length < 2 * k + 1) return { indices: [], cleanedA };
   const floor = madSecondDifferenceNoise(currentA);
   const buf = new Float64Array(2 * k + 1);
+  const ms = new Float64Array(2);
   const indices: number[] = [];
-  for (const [s, seg] of segments.entries()) {
+  for (let s = 0; s < segments.length; s++) {
+    const seg = segments[s] as SweepSegment;
     const start = ownStart(segments, s);
     if (seg.end - start < 2 * k + 1) continue;
     const flagged: Array<{ i: number; m: number }> = [];
@@ -60,8 +66,9 @@ export function hampelSpikes(currentA: Float64Array, segments: SweepSegment[], o
     const first = start + 2;
     for (let i = first; i < seg.end; i++) {
       const lo = Math.max(start, Math.min(i - k, seg.end - 2 * k - 1));
-      const { m, s: scale } = windowMedianAndScale(currentA, lo, lo + 2 * k + 1, buf);
-      if (Math.abs((currentA[i] as number) - m) > t * Math.max(scale, floor)) flagged.push({ i, m });
+      windowMedianAndScale(currentA, lo, buf, ms);
+      const m = ms[0] as number;
+      if (Math.abs((currentA[i] as number) - m) > t * Math.max(ms[1] as number, floor)) flagged.push({ i, m });
     }
     for (let a = 0; a < flagged.length;) {
       let b = a;
