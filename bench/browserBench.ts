@@ -4,29 +4,31 @@
  * figures and ratios measured in one run; nothing here passes or fails on a time.
  *
  * 1. Page load → demo fully shown: every demo file read and analysed, the first trace drawn and
- *    its couples table on screen (the first-plot time is printed too). Beside it, the same files
+ *    its couples table on screen (the first-plot time is printed too), counted both from
+ *    navigation (the stricter start) and from the page's load event. Beside it, the same files
  *    read and analysed in Node on one thread, as a yardstick of the machine's speed at the time:
  *    on a shared machine the same page can take half as long again from one hour to the next.
  * 2. The 120-file batch of bench/scaleData.ts picked at once, read and analysed in the page,
  *    against the same work in Node through the worker's own handlers (one thread).
  * 3. With those files loaded, a click on another file until its trace is drawn again (median).
+ * All of it runs in three rounds, each in a fresh browser context; each figure is the median of
+ * the rounds, printed with their range, and each ratio is taken within one round.
  */
 import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { existsSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { performance } from 'node:perf_hooks';
-import { chromium, type Page } from 'playwright-core';
+import { chromium, type Browser, type Page } from 'playwright-core';
 import { preview } from 'vite';
-import { handlers, type HandlerContext } from '../src/worker/handlers';
-import { cellValuesOf, methodOptionsOf } from '../src/run/runInput';
-import { defaultCell } from '../src/run/seriesCell';
-import { defaultSettings } from '../src/run/settings';
+import { spawnSync } from 'node:child_process';
+import { nodeBatchMs } from './nodeBatch';
 import { demoFileNames } from '../scripts/demoBundle';
 import { smallCvFiles } from './scaleData';
 import type { BenchRow } from './types';
 
 const CHROMIUM = process.env.HALFWAVE_CHROMIUM ?? '/usr/bin/chromium';
+/** The build to time: dist/, or another build folder named in HALFWAVE_BENCH_DIST (to compare two builds at the same hour). */
+const DIST = process.env.HALFWAVE_BENCH_DIST ?? 'dist';
 const SMALL_FILES = 120;
 const SWITCHES = 7;
 
@@ -63,17 +65,11 @@ async function waitMark(page: Page, name: string): Promise<number> {
   return page.evaluate((n) => (window as unknown as { benchMarks: Record<string, number> }).benchMarks[n] as number, name);
 }
 
-/** The same work in Node, one thread: read each file, then analyse it, through the worker's handlers. */
-async function nodeBatchMs(files: { name: string; text: string }[]): Promise<number> {
-  const ctx: HandlerContext = { progress: () => undefined, signal: new AbortController().signal };
-  const one = async (f: { name: string; text: string }) => {
-    const read = await handlers.import({ fileName: f.name, data: new TextEncoder().encode(f.text).buffer as ArrayBuffer, overrides: {} }, ctx);
-    handlers.runFiles({ run: { files: [{ fileName: f.name, voltammogram: read.measurement }], cells: { 'series 1': cellValuesOf(defaultCell(defaultSettings)) }, method: methodOptionsOf(defaultSettings) } }, ctx);
-  };
-  await one(files[0]!);
-  const t0 = performance.now();
-  for (const f of files) await one(f);
-  return performance.now() - t0;
+/** The same batch in a fresh Node process, first pass: the engine compiles as it goes (bench/nodeBatch.ts). */
+function coldNodeBatchMs(count: number): number {
+  const run = spawnSync(process.execPath, [...process.execArgv, 'bench/nodeBatch.ts', String(count)], { encoding: 'utf8' });
+  if (run.status !== 0) throw new Error(`bench/nodeBatch.ts failed: ${run.stderr}`);
+  return (JSON.parse(run.stdout.trim().split('\n').pop() ?? '{}') as { coldMs: number }).coldMs;
 }
 
 /** Click another file and time (in the page) until the trace has been drawn again. */
@@ -100,36 +96,41 @@ async function switchMs(page: Page, name: string): Promise<number> {
   }, name);
 }
 
-export async function runBrowserBench(): Promise<BenchRow[]> {
-  if (!existsSync('dist/index.html')) throw new Error('dist/index.html is missing: run `npm run build` first');
-  if (!existsSync(CHROMIUM)) throw new Error(`no Chromium at ${CHROMIUM}: install it (apt-get install -y chromium) or name it in HALFWAVE_CHROMIUM`);
-  const server = await preview({ preview: { host: '127.0.0.1', port: 0, strictPort: false, open: false }, logLevel: 'warn' });
-  const address = server.httpServer.address();
-  if (!address || typeof address === 'string') throw new Error('preview server has no TCP address');
-  const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run'] });
-  const dir = await mkdtemp(join(tmpdir(), 'halfwave-bench-'));
+/** Rounds, each in a fresh browser context; the figures are their medians, printed with the range. */
+const ROUNDS = 3;
+
+interface Round {
+  loadEventMs: number;
+  firstPlotMs: number;
+  shownMs: number;
+  demoNodeMs: number;
+  batchPageMs: number;
+  batchNodeMs: number;
+  /** The same batch in a fresh Node process, first pass. */
+  coldNodeMs: number;
+  switchMs: number[];
+}
+
+/**
+ * One round: the demo files in Node (the yardstick), the page loaded in a fresh context until
+ * the demo is shown, then the 120 files picked, with Node's time for them taken just before and
+ * just after; then file switches.
+ */
+async function oneRound(browser: Browser, port: number, demoFiles: { name: string; text: string }[], files: { name: string; text: string }[], paths: string[]): Promise<Round> {
+  const demoNodeMs = await nodeBatchMs(demoFiles);
+  const context = await browser.newContext({ viewport: { width: 1366, height: 768 } });
   try {
-    // The yardstick first, while nothing else runs.
-    const demoFiles = demoFileNames('demo-data').map((f) => ({ name: f, text: readFileSync(join('demo-data', f), 'utf8') }));
-    const demoNodeMs = await nodeBatchMs(demoFiles);
-    const page = await (await browser.newContext({ viewport: { width: 1366, height: 768 } })).newPage();
+    const page = await context.newPage();
     await page.addInitScript({ content: PROBE });
     const demoCount = demoFiles.length;
     await page.addInitScript({ content: `window.benchWant = ${demoCount};` });
-    await page.goto(`http://127.0.0.1:${address.port}/`);
+    await page.goto(`http://127.0.0.1:${port}/`);
     const shownMs = await waitMark(page, `shown${demoCount}`);
     const firstPlotMs = await waitMark(page, 'firstPlot');
     const loadEventMs = await page.evaluate<number>("performance.getEntriesByType('navigation')[0]?.loadEventEnd ?? NaN");
-
-    const files = smallCvFiles(SMALL_FILES);
-    const paths = await Promise.all(files.map(async (f) => {
-      const path = join(dir, f.name);
-      await writeFile(path, f.text);
-      return path;
-    }));
     // Node's time is taken before and after the page's, and averaged: the machine's load drifts.
     const nodeBeforeMs = await nodeBatchMs(files);
-    const want = demoCount + SMALL_FILES;
+    const want = demoCount + files.length;
     await page.evaluate((n) => {
       const w = window as unknown as { benchWant: number; benchMarks: Record<string, number> };
       w.benchWant = n;
@@ -138,22 +139,64 @@ export async function runBrowserBench(): Promise<BenchRow[]> {
     await page.getByTestId('file-input').setInputFiles(paths);
     const batchPageMs = (await waitMark(page, `shown${want}`)) - (await waitMark(page, 'picked'));
     const batchNodeMs = (nodeBeforeMs + (await nodeBatchMs(files))) / 2;
-
-    const times: number[] = [];
+    const coldNodeMs = coldNodeBatchMs(files.length);
+    const switches: number[] = [];
     // Never the file already selected (the upload opens its series on the first file).
-    for (let k = 0; k < SWITCHES; k++) times.push(await switchMs(page, files[(k * 17 + 7) % SMALL_FILES]!.name));
-    times.sort((a, b) => a - b);
-    const switchMedian = times[Math.floor(times.length / 2)]!;
+    for (let k = 0; k < SWITCHES; k++) switches.push(await switchMs(page, files[(k * 17 + 7) % files.length]!.name));
+    return { loadEventMs, firstPlotMs, shownMs, demoNodeMs, batchPageMs, batchNodeMs, coldNodeMs, switchMs: switches };
+  } finally {
+    await context.close();
+  }
+}
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  const m = Math.floor(s.length / 2);
+  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
+}
+
+/** "1,930–2,210 over 3 rounds" (digits as the unit needs). */
+function range(values: number[], unit: string): string {
+  const f = (v: number) => (unit === '×' ? v.toFixed(2) : Math.round(v).toLocaleString('en-US'));
+  return `${f(Math.min(...values))}–${f(Math.max(...values))} over ${values.length} rounds`;
+}
+
+export async function runBrowserBench(): Promise<BenchRow[]> {
+  if (!existsSync(join(DIST, 'index.html'))) throw new Error(`${DIST}/index.html is missing: run \`npm run build\` first`);
+  if (!existsSync(CHROMIUM)) throw new Error(`no Chromium at ${CHROMIUM}: install it (apt-get install -y chromium) or name it in HALFWAVE_CHROMIUM`);
+  const server = await preview({ build: { outDir: DIST }, preview: { host: '127.0.0.1', port: 0, strictPort: false, open: false }, logLevel: 'warn' });
+  const address = server.httpServer.address();
+  if (!address || typeof address === 'string') throw new Error('preview server has no TCP address');
+  const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run'] });
+  const dir = await mkdtemp(join(tmpdir(), 'halfwave-bench-'));
+  try {
+    const demoFiles = demoFileNames('demo-data').map((f) => ({ name: f, text: readFileSync(join('demo-data', f), 'utf8') }));
+    const files = smallCvFiles(SMALL_FILES);
+    const paths = await Promise.all(files.map(async (f) => {
+      const path = join(dir, f.name);
+      await writeFile(path, f.text);
+      return path;
+    }));
+    const rounds: Round[] = [];
+    for (let r = 0; r < ROUNDS; r++) rounds.push(await oneRound(browser, address.port, demoFiles, files, paths));
+    const row = (name: string, values: number[], unit: string, goal?: string): BenchRow => ({
+      name, value: median(values), unit, note: [range(values, unit), goal].filter(Boolean).join('; '),
+    });
+    const pick = (f: (r: Round) => number) => rounds.map(f);
+    const want = demoFiles.length + SMALL_FILES;
     return [
-      { name: 'navigation → the page\'s load event', value: loadEventMs, unit: 'ms', note: 'the times below count from navigation, the stricter start' },
-      { name: 'page load → first trace drawn', value: firstPlotMs, unit: 'ms' },
-      { name: `page load → demo fully shown (${demoCount} files)`, value: shownMs, unit: 'ms', note: 'read, analysed, trace and couples table on screen; goal ≤ 2,000 ms' },
-      { name: 'the demo files read + analysed in Node', value: demoNodeMs, unit: 'ms', note: 'one thread, warm: the machine\'s speed at the time' },
-      { name: 'demo shown / its Node time', value: shownMs / demoNodeMs, unit: '×' },
-      { name: `${SMALL_FILES} files read + analysed in the page`, value: batchPageMs, unit: 'ms', note: 'from the pick to every file analysed' },
-      { name: 'the same work in Node (one thread)', value: batchNodeMs, unit: 'ms', note: 'worker handlers in-thread; mean of a run before and after' },
-      { name: 'page / Node', value: batchPageMs / batchNodeMs, unit: '×', note: 'goal ≤ 2' },
-      { name: `switch file with ${want} loaded (median of ${SWITCHES})`, value: switchMedian, unit: 'ms', note: 'click → trace drawn again; goal < 100 ms' },
+      row('navigation → the page\'s load event', pick((r) => r.loadEventMs), 'ms'),
+      row('navigation → first trace drawn', pick((r) => r.firstPlotMs), 'ms'),
+      row(`navigation → demo fully shown (${demoFiles.length} files)`, pick((r) => r.shownMs), 'ms', 'read, analysed, trace and couples table on screen; goal ≤ 2,000 ms from navigation, the stricter start'),
+      row('load event → demo fully shown', pick((r) => r.shownMs - r.loadEventMs), 'ms', 'the same goal counted from the page\'s load event'),
+      row('the demo files read + analysed in Node', pick((r) => r.demoNodeMs), 'ms', 'one thread, warm, just before each round: the machine\'s speed at the time'),
+      row('demo shown / its Node time', pick((r) => r.shownMs / r.demoNodeMs), '×'),
+      row(`${SMALL_FILES} files read + analysed in the page`, pick((r) => r.batchPageMs), 'ms', 'from the pick to every file analysed'),
+      row('the same work in Node (one thread)', pick((r) => r.batchNodeMs), 'ms', 'worker handlers in-thread; mean of a run just before and just after the page\'s'),
+      row('page / Node', pick((r) => r.batchPageMs / r.batchNodeMs), '×', 'each round\'s own ratio; goal ≤ 2'),
+      row('the same work in a fresh Node process', pick((r) => r.coldNodeMs), 'ms', 'first pass, the engine compiling as it goes (as a page\'s worker must); for comparison, no goal'),
+      row('page / fresh Node', pick((r) => r.batchPageMs / r.coldNodeMs), '×'),
+      row(`switch file with ${want} loaded (median of ${SWITCHES} per round)`, pick((r) => median(r.switchMs)), 'ms', 'click → trace drawn again; goal < 100 ms'),
     ];
   } finally {
     await browser.close();
@@ -164,7 +207,7 @@ export async function runBrowserBench(): Promise<BenchRow[]> {
 
 async function main(): Promise<void> {
   const rows = await runBrowserBench();
-  console.log(`\n## browser (headless Chromium, ${CHROMIUM})`);
+  console.log(`\n## browser (headless Chromium, ${CHROMIUM}, ${DIST}/)`);
   const width = Math.max(...rows.map((r) => r.name.length));
   for (const r of rows) console.log(`${r.name.padEnd(width)}  ${r.value.toFixed(r.unit === '×' ? 2 : 0).padStart(9)} ${r.unit.padEnd(3)}${r.note ? `  ${r.note}` : ''}`);
 }

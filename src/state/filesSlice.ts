@@ -60,6 +60,8 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   const limit = createLimiter(IMPORT_SLOTS, IMPORT_BYTES);
   // Work on one file stays in order (a re-import never overtakes the first reading).
   const chains = new Map<string, Promise<void>>();
+  /** Told of each file as soon as it is read (before its analysis), while an upload waits for its first one. */
+  const readWatchers = new Set<(id: string) => void>();
 
   const patch = (id: string, change: Partial<FileEntry>) =>
     set((s) => {
@@ -101,7 +103,9 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
       applyRemembered(id);
       if (get().selectedFileId === null) get().selectFile(id);
       refreshGroup(entry.group, cellBefore, id);
-      await get().analyzeFile(id, out.ahead);
+      const analysed = get().analyzeFile(id, out.ahead);
+      for (const watch of [...readWatchers]) watch(id);
+      await analysed;
     } catch (err) {
       const kept = get().files[id]?.measurement ?? null;
       patch(id, { status: kept ? 'ready' : 'error', progress: 0, error: toUserError(err) });
@@ -185,7 +189,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
     },
 
 
-    async addUpload(batches) {
+    async addUpload(batches, onFirstRead) {
       const taken = new Set(Object.values(get().files).map((f) => f?.group));
       const plan: Array<{ group: string; inputs: FileInput[] }> = [];
       for (const batch of batches) {
@@ -209,8 +213,19 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
         }
         return { seriesCells, workingWindows };
       });
-      const ids = (await Promise.all(plan.map((p) => get().addFiles(p.inputs, p.group)))).flat();
-      return { ids, groups: plan.map((p) => p.group) };
+      const first = plan[0]?.group;
+      const watch = (id: string) => {
+        if (first === undefined || get().files[id]?.group !== first) return;
+        readWatchers.delete(watch);
+        onFirstRead?.(first);
+      };
+      if (onFirstRead && first !== undefined) readWatchers.add(watch);
+      try {
+        const ids = (await Promise.all(plan.map((p) => get().addFiles(p.inputs, p.group)))).flat();
+        return { ids, groups: plan.map((p) => p.group) };
+      } finally {
+        readWatchers.delete(watch);
+      }
     },
 
     newWorkspace() {

@@ -170,6 +170,20 @@ describe('uploads become their own series', () => {
     expect(loose.ids.map((id) => store.getState().files[id]?.group)).toEqual(['p', 'p', 'q', 'q']);
   });
 
+  it('names the first new series once, as soon as one of its files is read, before the upload is done', async () => {
+    const store = newStore();
+    const told: Array<{ group: string; read: number; total: number }> = [];
+    const up = await store.getState().addUpload([{ folder: null, inputs: ['p_1mVs.csv', 'p_2mVs.csv', 'p_3mVs.csv', 'q_1mVs.csv', 'q_2mVs.csv'].map((name) => ({ name, data: csv })) }], (group) => {
+      const s = store.getState();
+      told.push({ group, read: s.fileOrder.filter((id) => s.files[id]?.measurement).length, total: s.fileOrder.length });
+    });
+    expect(up.groups).toEqual(['p', 'q']);
+    expect(told).toHaveLength(1);
+    expect(told[0]?.group).toBe('p');
+    // Told while the rest of the upload was still being read.
+    expect(told[0]?.read).toBeLessThan(told[0]?.total as number);
+  });
+
   it('values saved for an earlier, unloaded experiment of the same name do not leak into a new upload', async () => {
     const store = newStore();
     // As after a reload: the autosave brought back cell values for "series 1", but not its files.

@@ -82,8 +82,10 @@ export interface FilesSlice {
    * An upload (a drop, a file pick, a folder pick): each folder, and inside it each set of files
    * with a common name stem, becomes a new series with a unique name that starts from the defaults
    * and its own files' headers. Returns the new files' ids and the new series' names.
+   * `onFirstRead` is called once, with the first new series, as soon as one of its files is read
+   * (so the series can be shown while the rest are read).
    */
-  addUpload(batches: UploadBatch[]): Promise<{ ids: string[]; groups: string[] }>;
+  addUpload(batches: UploadBatch[], onFirstRead?: (group: string) => void): Promise<{ ids: string[]; groups: string[] }>;
   reimportFile(id: string, overrides: ImportOverrides): Promise<void>;
   removeFile(id: string): void;
   setFileGroup(id: string, group: string): void;

@@ -6,15 +6,22 @@ import { FileList, SelectedFileBar } from './FileList';
 
 /**
  * One upload: each folder, and each set of files with a common name stem, becomes its own new
- * series; once read, the first new series opens with its results table across files.
+ * series; the first new series opens with its results table across files as soon as its first
+ * file is read (the rest fill in as they come), or, when none of its files could be read, the
+ * first new series that has a file once the upload is done.
  */
 function load(batches: FolderBatch[]): void {
   const upload = batches.filter((b) => b.files.length > 0).map((b) => ({ folder: b.folder, inputs: b.files.map((f) => ({ name: f.name, data: f })) }));
   if (upload.length === 0) return;
   const act = halfwaveActions();
-  void act.addUpload(upload).then(({ groups }) => {
+  let opened = false;
+  const open = (group: string) => {
+    opened = true;
+    act.openSeries(group);
+  };
+  void act.addUpload(upload, open).then(({ groups }) => {
     const first = groups.find((g) => act.groups().includes(g));
-    if (first) act.openSeries(first);
+    if (!opened && first) open(first);
   });
 }
 
