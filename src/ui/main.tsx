@@ -1,3 +1,5 @@
+// First: it starts reading the demo file while the modules below are evaluated.
+import { demoReading } from './earlyStart';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { crashAnalysisWorkers, getAppStore, startApp } from '../state/app';
@@ -40,7 +42,7 @@ if (root) {
     setTimeout(renderAndLoadPlots, 0);
   });
   const atLatest = setTimeout(renderAndLoadPlots, RENDER_AT_LATEST_MS);
-  void startApp(store).finally(renderAndLoadPlots);
+  void startApp(store, undefined, () => demoReading).finally(renderAndLoadPlots);
   // The browser tests stop the workers mid-run to check that the work resumes; only with ?test-hooks.
   if (new URLSearchParams(location.search).has('test-hooks')) (window as unknown as { halfwaveTestHooks: unknown }).halfwaveTestHooks = { crashAnalysisWorkers };
 }
