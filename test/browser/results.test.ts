@@ -36,6 +36,12 @@ describe('results table across files', () => {
     expect(v).toEqual(SIX_RATES_V_PER_S.map(String));
     const selected = await page.locator('[data-testid=file-row][aria-selected=true]').getAttribute('data-file-name');
     expect(selected).toBe('cv_020mVs.csv');
+    // The file list shows the new file, below the demo's, without the user scrolling to it.
+    await page.waitForFunction(() => {
+      const row = document.querySelector('[data-testid=file-row][aria-selected=true]')?.getBoundingClientRect();
+      const list = document.querySelector('[data-testid=file-list]')?.getBoundingClientRect();
+      return !!row && !!list && row.top >= list.top - 1 && row.bottom <= list.bottom + 1;
+    }, null, { timeout: 10_000 });
     for (const head of ['v / (V s⁻¹)', 'E½ / V', 'ΔEp / mV', 'ipa / µA', '|Ep − Ep/2| / mV']) {
       expect(await page.getByTestId('results-table').locator('th', { hasText: head }).count()).toBeGreaterThan(0);
     }

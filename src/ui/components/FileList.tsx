@@ -21,8 +21,10 @@ export function FileList() {
   const order = useHalfwave((s) => s.fileOrder);
   const selected = useHalfwave((s) => s.selectedFileId);
   const list = useRef<HTMLUListElement>(null);
+  // The selected file stays in sight, however it was chosen: the arrow keys, a row of the results
+  // table, or an upload that opened its series (its files come after everything loaded before).
   useEffect(() => {
-    if (selected && list.current?.contains(document.activeElement)) document.getElementById(optionId(selected))?.scrollIntoView({ block: 'nearest' });
+    if (selected) document.getElementById(optionId(selected))?.scrollIntoView({ block: 'nearest' });
   }, [selected]);
   if (order.length === 0) return <p className="empty">No files yet.</p>;
   const onKey = (e: KeyboardEvent) => {
