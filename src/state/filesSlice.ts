@@ -9,7 +9,7 @@ import { naturalCompare } from '../io/naturalOrder';
 import { WorkerLostError } from '../worker/errors';
 import type { ImportOverrides } from '../io/types';
 import { runAheadOf } from '../run/runInput';
-import { bytesOf, sourceOf, sourceSize } from './fileSource';
+import { createBytesReader, sourceOf, sourceSize } from './fileSource';
 import { resolveCell, sameTraceCell, type SeriesCell } from '../run/seriesCell';
 import { mergeFileSettings } from '../run/settings';
 import { toUserError, type FileEntry, type FileInput, type FilesSlice, type RestoredFile, type SliceCreator } from './types';
@@ -24,16 +24,22 @@ export const DEFAULT_GROUP = 'series 1';
  */
 const IMPORT_SLOTS = 32;
 const IMPORT_BYTES = 16 * 1024 * 1024;
+/** Files started together once that many places are free: read from the disk in one go. */
+const IMPORT_TOGETHER = 8;
 
 /**
  * At most `slots` tasks at once whose weights add up to no more than `budget` (a task heavier
  * than the budget runs alone), first come first served; a finished task hands its place on.
+ * With `together` > 1, waiting tasks start only once that many places are free (or nothing
+ * runs), so they start in groups: the files of a group are read from the disk in one go
+ * (fileSource.ts createBytesReader).
  */
-export function createLimiter(slots: number, budget = Infinity): <T>(task: () => Promise<T>, weight?: number) => Promise<T> {
+export function createLimiter(slots: number, budget = Infinity, together = 1): <T>(task: () => Promise<T>, weight?: number) => Promise<T> {
   let active = 0;
   let used = 0;
   const waiting: Array<{ weight: number; go: () => void }> = [];
   const fits = (weight: number) => active === 0 || (active < slots && used + weight <= budget);
+  const groupFree = () => active === 0 || active <= slots - together;
   const take = (weight: number) => {
     active++;
     used += weight;
@@ -46,7 +52,9 @@ export function createLimiter(slots: number, budget = Infinity): <T>(task: () =>
     } finally {
       active--;
       used -= weight;
-      while (waiting.length > 0 && fits(waiting[0]!.weight)) {
+      // Checked once: the group then fills every place that fits.
+      const start = groupFree();
+      while (start && waiting.length > 0 && fits(waiting[0]!.weight)) {
         const next = waiting.shift()!;
         take(next.weight);
         next.go();
@@ -57,7 +65,8 @@ export function createLimiter(slots: number, budget = Infinity): <T>(task: () =>
 
 export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   let nextId = 1;
-  const limit = createLimiter(IMPORT_SLOTS, IMPORT_BYTES);
+  const limit = createLimiter(IMPORT_SLOTS, IMPORT_BYTES, IMPORT_TOGETHER);
+  const bytesOf = createBytesReader();
   // Work on one file stays in order (a re-import never overtakes the first reading).
   const chains = new Map<string, Promise<void>>();
   /** Told of each file as soon as it is read (before its analysis), while an upload waits for its first one. */

@@ -62,4 +62,31 @@ describe('createLimiter', () => {
     await all;
     expect(seen.every((names) => names.length === 1 || names.every((n) => n !== 'huge'))).toBe(true);
   });
+
+  it('with places given in groups, starts waiting tasks only once a group of places is free, then all that fit', async () => {
+    const limit = createLimiter(4, Infinity, 2);
+    const running = new Set<number>();
+    const release = new Map<number, () => void>();
+    const task = (k: number) => limit(async () => {
+      running.add(k);
+      await new Promise<void>((r) => release.set(k, r));
+      running.delete(k);
+      return k;
+    });
+    const all = Promise.all([1, 2, 3, 4, 5, 6, 7].map(task));
+    await vi.waitFor(() => expect(running.size).toBe(4));
+    release.get(1)!();
+    // One place free: 5 waits for a second one.
+    await vi.waitFor(() => expect(running.has(1)).toBe(false));
+    await new Promise((r) => setTimeout(r, 10));
+    expect([...running].sort()).toEqual([2, 3, 4]);
+    release.get(2)!();
+    // Two free: 5 and 6 start together.
+    await vi.waitFor(() => expect([...running].sort()).toEqual([3, 4, 5, 6]));
+    for (const k of [3, 4, 5, 6]) release.get(k)!();
+    // Nothing else runs: the last task starts alone.
+    await vi.waitFor(() => expect(release.has(7)).toBe(true));
+    release.get(7)!();
+    expect(await all).toEqual([1, 2, 3, 4, 5, 6, 7]);
+  });
 });
