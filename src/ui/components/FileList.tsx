@@ -4,7 +4,7 @@
  * status, progress, scan rate and any import error. The selected file's series name and removal
  * sit below the list (SelectedFileBar), so the rows hold nothing focusable.
  */
-import { useEffect, useRef, type KeyboardEvent } from 'react';
+import { memo, useEffect, useRef, type KeyboardEvent } from 'react';
 import { halfwaveActions, useHalfwave } from '../../state/react';
 import type { FileEntry } from '../../state/types';
 import { bytes, count, scanRate } from '../format';
@@ -20,6 +20,12 @@ const optionId = (id: string) => `file-option-${id}`;
 export function FileList() {
   const order = useHalfwave((s) => s.fileOrder);
   const selected = useHalfwave((s) => s.selectedFileId);
+  // The list reads the store once for all its rows; a row is drawn again only when its own file,
+  // analysis status or selection changed (memo). With a store hook per row, every change of the
+  // store asked each of a few hundred rows whether it was concerned.
+  const files = useHalfwave((s) => s.files);
+  const results = useHalfwave((s) => s.results);
+  const notKept = useHalfwave((s) => s.notKept);
   const list = useRef<HTMLUListElement>(null);
   // The selected file stays in sight, however it was chosen: the arrow keys, a row of the results
   // table, or an upload that opened its series (its files come after everything loaded before).
@@ -40,17 +46,24 @@ export function FileList() {
   return (
     <ul ref={list} className="file-list" data-testid="file-list" role="listbox" aria-label="Loaded files" tabIndex={0}
       aria-activedescendant={selected && order.includes(selected) ? optionId(selected) : undefined} onKeyDown={onKey}>
-      {order.map((id) => <FileRow key={id} id={id} />)}
+      {order.map((id) => {
+        const file = files[id];
+        const sha = file?.sha256;
+        return file ? <FileRow key={id} id={id} file={file} selected={selected === id} analysis={results[id]?.status} notKept={!!sha && notKept.includes(sha)} /> : null;
+      })}
     </ul>
   );
 }
 
-function FileRow({ id }: { id: string }) {
-  const file = useHalfwave((s) => s.files[id]);
-  const selected = useHalfwave((s) => s.selectedFileId === id);
-  const result = useHalfwave((s) => s.results[id]?.status);
-  const notKept = useHalfwave((s) => !!s.files[id]?.sha256 && s.notKept.includes(s.files[id]?.sha256 as string));
-  if (!file) return null;
+interface FileRowProps {
+  id: string;
+  file: FileEntry;
+  selected: boolean;
+  analysis: 'running' | 'ready' | 'error' | undefined;
+  notKept: boolean;
+}
+
+const FileRow = memo(function FileRow({ id, file, selected, analysis: result, notKept }: FileRowProps) {
   const m = file.measurement;
   return (
     <li id={optionId(id)} role="option" aria-selected={selected} aria-disabled={!m}
@@ -77,7 +90,7 @@ function FileRow({ id }: { id: string }) {
       ) : null}
     </li>
   );
-}
+});
 
 function statusText(file: FileEntry, analysis: 'running' | 'ready' | 'error' | undefined): string {
   if (file.status === 'queued') return 'waiting';
