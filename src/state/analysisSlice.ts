@@ -7,6 +7,7 @@ import { CancelledError } from '../worker/errors';
 import { fileRunRequest, runRequestKey } from '../run/runInput';
 import { resolveCell, sameTraceCell } from '../run/seriesCell';
 import { defaultSettings, emptyFileSettings } from '../run/settings';
+import type { RunFileResult } from '../core/analysis/runTypes';
 import { toUserError, type AnalysisSlice, type SliceCreator } from './types';
 
 export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps) => {
@@ -24,13 +25,17 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       const m = get().files[id]?.measurement;
       if (!m) return;
       running.get(id)?.abort();
+      /** Keeps the file's result and lets its series be analysed again. */
+      const done = (run: RunFileResult | null) => {
+        set((s) => ({ results: { ...s.results, [id]: { status: 'ready', run, error: null } } }));
+        const group = get().files[id]?.group;
+        if (group) get().scheduleGroup(group);
+      };
       const request = fileRunRequest(get(), id);
       // The worker that read the file analysed it already; its result stands when it ran the very request the page would send.
       if (ahead && ahead.key === runRequestKey(request)) {
         running.delete(id);
-        set((s) => ({ results: { ...s.results, [id]: { status: 'ready', run: ahead.result, error: null } } }));
-        const group = get().files[id]?.group;
-        if (group) get().scheduleGroup(group);
+        done(ahead.result);
         return;
       }
       const ctrl = new AbortController();
@@ -39,9 +44,7 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       set((s) => ({ results: { ...s.results, [id]: { status: 'running', run: prev?.run ?? null, error: null } } }));
       try {
         const [run] = await deps.client.request('runFiles', request, { signal: ctrl.signal });
-        set((s) => ({ results: { ...s.results, [id]: { status: 'ready', run: run ?? null, error: null } } }));
-        const group = get().files[id]?.group;
-        if (group) get().scheduleGroup(group);
+        done(run ?? null);
       } catch (err) {
         if (err instanceof CancelledError) return;
         set((s) => ({ results: { ...s.results, [id]: { status: 'error', run: null, error: toUserError(err) } } }));

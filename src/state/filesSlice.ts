@@ -66,7 +66,7 @@ export function createLimiter(slots: number, budget = Infinity, together = 1): <
 export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   let nextId = 1;
   const limit = createLimiter(IMPORT_SLOTS, IMPORT_BYTES, IMPORT_TOGETHER);
-  const bytesOf = createBytesReader();
+  const readBytes = createBytesReader();
   // Work on one file stays in order (a re-import never overtakes the first reading).
   const chains = new Map<string, Promise<void>>();
   /** Told of each file as soon as it is read (before its analysis), while an upload waits for its first one. */
@@ -87,7 +87,7 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   async function readFile(entry: FileEntry, overrides: ImportOverrides, id: string) {
     // The snapshot of the file's run is taken as each attempt is sent, after the bytes are read.
     const ask = async () => {
-      const data = await bytesOf(entry.source);
+      const data = await readBytes(entry.source);
       return deps.client.request('import', { fileName: entry.fileName, data, overrides, ...aheadOf(id) }, {
         onProgress: (fraction) => patch(id, { progress: fraction }),
       });
