@@ -93,9 +93,13 @@ export async function dragAcrossPlot(page: Page, testId: string): Promise<void> 
   await page.mouse.up();
 }
 
-/** axe-core's serious and critical violations on the page as it is (rule id and the first nodes). */
-export async function seriousViolations(page: Page): Promise<string[]> {
-  const result = await new AxeBuilder({ page: page as never }).analyze();
+/**
+ * axe-core's serious and critical violations on the page as it is, or only inside the element
+ * `within` selects (rule id and the first nodes).
+ */
+export async function seriousViolations(page: Page, within?: string): Promise<string[]> {
+  const builder = new AxeBuilder({ page: page as never });
+  const result = await (within ? builder.include(within) : builder).analyze();
   return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical')
     .map((v) => `${v.id}: ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);
 }

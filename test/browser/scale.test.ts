@@ -11,7 +11,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bigCvTrace, smallCvFiles, traceCsv } from '../../bench/scaleData';
-import { coupleCells, demoFileCount, waitForAnalysis, waitForFiles } from './appHelpers';
+import { coupleCells, demoFileCount, seriousViolations, waitForAnalysis, waitForFiles } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 const SMALL_FILES = 120;
@@ -102,6 +102,23 @@ describe('many files and a million-row file', () => {
     expect(Math.min(...counts)).toBeLessThan(SMALL_FILES / 2);
     expect(Math.max(...counts)).toBeGreaterThan(SMALL_FILES / 2);
     expect(probe.maxRowBars).toBeGreaterThan(0);
+  });
+
+  it(`the results table of the ${SMALL_FILES} files draws the rows in view, and the last when scrolled to, its columns keeping their widths`, async () => {
+    const page = app.page;
+    await page.getByTestId('tab-files').click();
+    const table = page.getByTestId('results-table');
+    await page.waitForFunction((n) => document.querySelector('[data-testid=results-table]')?.getAttribute('aria-rowcount') === String(n + 1), SMALL_FILES, { timeout: 30_000 });
+    expect(await page.getByTestId('results-row').count()).toBeLessThan(SMALL_FILES / 2);
+    expect(await page.getByTestId('results-row').first().getAttribute('aria-rowindex')).toBe('2');
+    const widths = () => table.locator('thead th').evaluateAll((ths) => ths.map((t) => Math.round(t.getBoundingClientRect().width)));
+    const before = await widths();
+    await page.evaluate(() => document.querySelector('[data-testid=results-table]')?.closest('.tab-body')?.scrollTo(0, 1e6));
+    await page.waitForFunction((n) => [...document.querySelectorAll('[data-testid=results-row]')].at(-1)?.getAttribute('aria-rowindex') === String(n + 1), SMALL_FILES, { timeout: 10_000 });
+    expect(await page.getByTestId('results-row').last().getAttribute('data-file-name')).toBe(smallCvFiles(SMALL_FILES).at(-1)?.name);
+    expect(await widths()).toEqual(before);
+    // Rows stood in for are hidden from assistive technology; the table says how many there are.
+    expect(await seriousViolations(page, '[data-testid=results-across-files]')).toEqual([]);
   });
 
   it(`reads and analyses a ${BIG_ROWS.toLocaleString('en')}-row file with progress, the page answering a click while it reads`, async () => {

@@ -2,6 +2,8 @@
  * The results table across files: one row per file, cycle and couple of the current series (or of
  * every file), sortable by any column; a click (or Enter) on a row shows that file and cycle on
  * the trace; Copy puts the rows on the clipboard as tab-separated text with units in the header.
+ * A long table draws only the rows in view (useRowWindow.ts); a hidden row of each column's
+ * widest text keeps the column widths still while it scrolls.
  */
 import { memo, useMemo, useState } from 'react';
 import { halfwaveActions, useHalfwave } from '../../state/react';
@@ -11,6 +13,7 @@ import { byNoise, DASH, fixed, scanRate } from '../format';
 import { copyText } from '../clipboard';
 import { SeriesHeadline } from './SeriesHeadline';
 import { useSeriesScale } from './useSeriesCell';
+import { useRowWindow } from './useRowWindow';
 
 interface Column { id: ResultsColumn; head: string; title?: string }
 
@@ -33,6 +36,10 @@ export function ResultsTable() {
   // Densities (A/cm²): the heads say so when every row is one; in a mix each density cell says so itself.
   const perArea = currentColumnsPerArea(rows);
   const ipUnit = `${cur.unit}${perArea === true ? ' cm⁻²' : ''}`;
+  const markPerArea = perArea === 'mixed';
+  const win = useRowWindow(rows.length);
+  const windowed = win.end - win.start < rows.length;
+  const widest = useMemo(() => (windowed ? widestCells(rows, cur.factor, markPerArea) : null), [rows, cur.factor, markPerArea, windowed]);
   const columns: Column[] = [
     { id: 'file', head: 'File' }, { id: 'scanRate', head: 'v / (V s⁻¹)' }, { id: 'cycle', head: 'Cycle' },
     { id: 'epa', head: `Epa / V` }, { id: 'epc', head: 'Epc / V' }, { id: 'eHalf', head: 'E½ / V' }, { id: 'deltaEp', head: 'ΔEp / mV' },
@@ -64,7 +71,7 @@ export function ResultsTable() {
       </div>
       {shownGroup ? <SeriesHeadline group={shownGroup} /> : null}
       {rows.length === 0 ? <p className="empty">No couples found yet in these files.</p> : (
-        <table className="data" data-testid="results-table">
+        <table className="data" data-testid="results-table" aria-rowcount={rows.length + 1}>
           <caption className="visually-hidden">Couples of every file, potentials vs {scale.name}</caption>
           <thead>
             <tr>
@@ -75,10 +82,13 @@ export function ResultsTable() {
               ))}
             </tr>
           </thead>
-          <tbody>
-            {rows.map((r) => (
-              <ResultLine key={`${r.fileId}-${r.cycle}-${r.couple}`} r={r} factor={cur.factor} markPerArea={perArea === 'mixed'} current={r.fileId === selected && r.cycle === cycle} show={act.selectFile} />
+          <tbody ref={win.bodyRef}>
+            {widest ? <tr className="sizer" aria-hidden="true">{widest.map((text, k) => (k === 0 ? <th key={k} scope="row"><span className="row-open">{text}</span></th> : <td key={k}>{text}</td>))}</tr> : null}
+            {win.start > 0 ? <tr className="stand-in" aria-hidden="true" style={{ height: win.start * win.rowHeight }}><td colSpan={columns.length} /></tr> : null}
+            {rows.slice(win.start, win.end).map((r, k) => (
+              <ResultLine key={`${r.fileId}-${r.cycle}-${r.couple}`} r={r} index={win.start + k} factor={cur.factor} markPerArea={markPerArea} current={r.fileId === selected && r.cycle === cycle} show={act.selectFile} />
             ))}
+            {win.end < rows.length ? <tr className="stand-in" aria-hidden="true" style={{ height: (rows.length - win.end) * win.rowHeight }}><td colSpan={columns.length} /></tr> : null}
           </tbody>
         </table>
       )}
@@ -86,19 +96,39 @@ export function ResultsTable() {
   );
 }
 
-const ResultLine = memo(function ResultLine({ r, factor, markPerArea, current, show }: { r: ResultsRow; factor: number; markPerArea: boolean; current: boolean; show: (id: string, cycle: number) => void }) {
+/** A row's cells as text, in column order: the same for the drawn rows and the width-keeping row. */
+function cellTexts(r: ResultsRow, factor: number, markPerArea: boolean): string[] {
   // Currents with the digits the file's noise allows; potentials to 0.1 mV.
   const ip = (v: number | null) => `${byNoise(v, r.noiseA, factor, 3)}${markPerArea && r.perArea && v !== null ? ' /cm²' : ''}`;
+  return [
+    r.fileName, scanRate(r.scanRateVPerS), String(r.cycle),
+    fixed(r.epaV, 4), fixed(r.epcV, 4), fixed(r.eHalfV, 4), fixed(r.deltaEpV, 1, 1000),
+    ip(r.ipaA), ip(r.ipcA), fixed(r.ratio, 3), fixed(r.forwardHalfWidthV, 1, 1000), r.reading, String(r.warnings),
+  ];
+}
+
+/** Each column's longest text over all rows. */
+function widestCells(rows: ResultsRow[], factor: number, markPerArea: boolean): string[] {
+  const out: string[] = [];
+  for (const r of rows) {
+    const cells = cellTexts(r, factor, markPerArea);
+    for (let k = 0; k < cells.length; k++) if ((cells[k] as string).length > (out[k]?.length ?? -1)) out[k] = cells[k] as string;
+  }
+  return out;
+}
+
+const ResultLine = memo(function ResultLine({ r, index, factor, markPerArea, current, show }: { r: ResultsRow; index: number; factor: number; markPerArea: boolean; current: boolean; show: (id: string, cycle: number) => void }) {
+  const [file, v, cyc, epa, epc, eHalf, dep, ipa, ipc, ratio, halfWidth, reading, warnings] = cellTexts(r, factor, markPerArea);
   return (
-    <tr data-testid="results-row" data-file-name={r.fileName} className={current ? 'current' : undefined} onClick={() => show(r.fileId, r.cycle)}>
-      <th scope="row"><button type="button" className="row-open" aria-pressed={current} title="Show this trace" onClick={(e) => { e.stopPropagation(); show(r.fileId, r.cycle); }}>{r.fileName}</button></th>
-      <td data-testid="results-v">{scanRate(r.scanRateVPerS)}</td>
-      <td>{r.cycle}</td>
-      <td>{fixed(r.epaV, 4)}</td><td>{fixed(r.epcV, 4)}</td><td data-testid="results-ehalf">{fixed(r.eHalfV, 4)}</td>
-      <td data-testid="results-dep">{fixed(r.deltaEpV, 1, 1000)}</td>
-      <td>{ip(r.ipaA)}</td><td>{ip(r.ipcA)}</td>
-      <td>{fixed(r.ratio, 3)}</td><td>{fixed(r.forwardHalfWidthV, 1, 1000)}</td>
-      <td className="verdict" title={r.readingText}>{r.reading}</td><td>{r.warnings}</td>
+    <tr data-testid="results-row" data-row="" aria-rowindex={index + 2} data-file-name={r.fileName} className={current ? 'current' : undefined} onClick={() => show(r.fileId, r.cycle)}>
+      <th scope="row"><button type="button" className="row-open" aria-pressed={current} title="Show this trace" onClick={(e) => { e.stopPropagation(); show(r.fileId, r.cycle); }}>{file}</button></th>
+      <td data-testid="results-v">{v}</td>
+      <td>{cyc}</td>
+      <td>{epa}</td><td>{epc}</td><td data-testid="results-ehalf">{eHalf}</td>
+      <td data-testid="results-dep">{dep}</td>
+      <td>{ipa}</td><td>{ipc}</td>
+      <td>{ratio}</td><td>{halfWidth}</td>
+      <td className="verdict" title={r.readingText}>{reading}</td><td>{warnings}</td>
     </tr>
   );
 });
