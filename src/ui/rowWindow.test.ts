@@ -1,6 +1,6 @@
 // The window arithmetic of long tables (common practice, no source: list virtualisation).
 import { describe, expect, it } from 'vitest';
-import { rowWindow, sameWindow, WINDOW_FROM_ROWS, WINDOW_MARGIN_ROWS } from './rowWindow';
+import { rowWindow, WINDOW_FROM_ROWS, WINDOW_MARGIN_ROWS } from './rowWindow';
 
 describe('rowWindow', () => {
   const view = { count: 1000, rowHeight: 20, viewTop: 0, viewHeight: 200 };
@@ -25,10 +25,5 @@ describe('rowWindow', () => {
   it('draws everything when it cannot measure', () => {
     expect(rowWindow({ ...view, rowHeight: 0 })).toEqual({ start: 0, end: 1000 });
     expect(rowWindow({ ...view, viewTop: Number.NaN })).toEqual({ start: 0, end: 1000 });
-  });
-
-  it('tells a moved window from the same one', () => {
-    expect(sameWindow({ start: 1, end: 5 }, { start: 1, end: 5 })).toBe(true);
-    expect(sameWindow({ start: 1, end: 5 }, { start: 2, end: 5 })).toBe(false);
   });
 });

@@ -36,8 +36,3 @@ export function rowWindow({ count, rowHeight, viewTop, viewHeight, margin = WIND
   const start = Math.min(count, Math.max(0, first));
   return { start, end: Math.min(count, Math.max(start, last)) };
 }
-
-/** The same window, or a new one only when it moved: renders happen on change, not on every scroll event. */
-export function sameWindow(a: RowWindow, b: RowWindow): boolean {
-  return a.start === b.start && a.end === b.end;
-}
