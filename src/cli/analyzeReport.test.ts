@@ -107,6 +107,11 @@ describe('analyze output options', () => {
     expect(doc.series[0]?.D).toBeNull();
     expect(doc.warnings.join(' ')).toMatch(/area/);
   });
+  it('prints a k° bound it cannot compute (no area, so no D) as "—", not "≥ —"', async () => {
+    const r = await cli(['analyze', folder, '--conc', '1']);
+    expect(r.out).toMatch(/k° = — cm\/s/);
+    expect(r.out).not.toContain('≥ —');
+  });
   it('refuses --ref when the files do not say what they were measured against', async () => {
     const r = await cli(['analyze', folder, '--ref', 'SHE', '--json']);
     expect(r.code).toBe(2);

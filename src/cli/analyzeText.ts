@@ -38,7 +38,8 @@ function dText(c: SeriesCouple): string {
 function k0Text(c: SeriesCouple): string {
   const k = c.rateConstant;
   if (!k) return '—';
-  if (k.status === 'lower-bound') return `≥ ${e(k.lowerBoundCmPerS)}`;
+  // A bound needs D: without it there is no number (a note below the line says why), not "≥ —".
+  if (k.status === 'lower-bound') return k.lowerBoundCmPerS === null ? '—' : `≥ ${e(k.lowerBoundCmPerS)}`;
   if (k.status === 'cannot-tell') return 'cannot tell';
   return `${e(k.k0CmPerS)}${rangeText(k.rangeCmPerS)}`;
 }
