@@ -112,6 +112,16 @@ describe('analyze output options', () => {
     expect(r.out).toMatch(/k° = — cm\/s/);
     expect(r.out).not.toContain('≥ —');
   });
+  it('lists under "Reading the files" what the import doubted: here currents that run the loop the polarographic way', async () => {
+    const vg = simulatedVoltammogram({ k0CmPerS: Infinity, scanRateVPerS: 0.1 });
+    const lines = ['time_s,potential_V,current_A'];
+    for (let k = 0; k < vg.potentialV.length; k++) lines.push(`${vg.timeS?.[k]},${vg.potentialV[k]},${-(vg.currentA[k] as number)}`);
+    const file = join(dir, 'cathodic_positive.csv');
+    writeFileSync(file, `${lines.join('\n')}\n`);
+    const r = await cli(['analyze', file]);
+    expect(r.out).toMatch(/Reading the files:\n {2}- cathodic_positive\.csv: the current runs round the loop the wrong way/);
+    expect((await cli(['analyze', file, '--convention', 'polarographic'])).out).not.toContain('Reading the files:');
+  });
   it('refuses --ref when the files do not say what they were measured against', async () => {
     const r = await cli(['analyze', folder, '--ref', 'SHE', '--json']);
     expect(r.code).toBe(2);

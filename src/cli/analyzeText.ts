@@ -70,6 +70,10 @@ export function analyzeText(r: AnalyzeRunResult): string {
     for (const c of s.analysis.couples) parts.push(...seriesLines(c));
     if (s.capacitance) parts.push(`  double-layer capacitance: ${f(s.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
   }
+  // What the importer could only guess or doubt (each message names its file); --inspect has the rest.
+  const read = r.files.flatMap((file) => file.provenance.importWarnings ?? []);
+  if (read.length) parts.push('', 'Reading the files:');
+  for (const m of read) parts.push(`  - ${m}`);
   // One push per warning: a spread of 10⁵ warnings (a trace of many tiny cycles) overflows the stack.
   if (r.warnings.length) parts.push('', 'Warnings:');
   for (const w of r.warnings) parts.push(`  - ${w.fileName ? `${w.fileName}: ` : w.series ? `${w.series}: ` : ''}${w.message}`);

@@ -5,6 +5,7 @@
 import { assignColumns } from './assignColumns';
 import type { RoleAssignment } from './assignColumns';
 import { chooseScanRate } from './chooseScanRate';
+import { loopOrientation } from '../core/sweeps/loopOrientation';
 import { makeWarning } from './errors';
 import type { ImportWarning } from './errors';
 import type { HeaderFound } from './detectHeader';
@@ -24,13 +25,18 @@ export function assembleMeasurement(fileName: string, front: FrontMatter, table:
   const { header } = front;
   const roles = assignColumns(fileName, header.names, table.columns, o, header.units);
   warnings.push(...roles.warnings);
-  const convention = chooseConvention(o, pre);
+  let convention = chooseConvention(o, pre);
   const units = chooseUnits(fileName, roles, o, warnings);
   const kind = chooseCurrentKind(fileName, units, roles, pre.areaCm2, warnings);
   const reference = chooseReference(fileName, pre, roles, header, warnings);
   const cols = buildColumns(fileName, table, roles, units, convention.value, pre.areaCm2, warnings);
   const written = pre.scanRateVPerS ?? scanRateInNames(header);
   const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: written }, warnings);
+  const doubt = !convention.overridden && !pre.convention ? reversedLoop(cols) : null;
+  if (doubt) {
+    convention = { ...convention, explanation: `${convention.explanation}; but the loop of cycle ${doubt.cycle} runs the polarographic way round (∮ i dE / ∮ |i dE| = ${doubt.orientation.toFixed(2)}): check` };
+    warnings.push(makeWarning('CONVENTION_DOUBTED', `${fileName}: the current runs round the loop the wrong way for anodic-positive (IUPAC) currents (over cycle ${doubt.cycle}, ∮ i dE / ∮ |i dE| = ${doubt.orientation.toFixed(2)}); the file does not say which sign it uses. If the instrument records cathodic current as positive (polarographic convention), set that convention for this file: read as they are, its peaks are missed or taken the wrong way round`));
+  }
   if (cols.timeS && !isNonDecreasing(cols.timeS)) {
     warnings.push(makeWarning('TIME_NOT_MONOTONIC', `${fileName}: the time column goes backwards in places (restarts per cycle?); it is kept as read`));
   }
@@ -57,6 +63,27 @@ export function assembleMeasurement(fileName: string, front: FrontMatter, table:
     extraColumns: cols.extraColumns,
     detection: { ...buildDetection(front, table, roles, units, convention, scan, cols), currentKind: kind.guess, reference },
   };
+}
+
+/**
+ * How far below zero the loop orientation of the first closed cycle must be before the file's
+ * currents are doubted (core/sweeps/loopOrientation.ts; common practice, no source). A featureless
+ * trace gives about 0; simulated couples read as IUPAC gave 0.6–1, and still 0.13 when started
+ * far on the wrong side of E°′ with only the other form present.
+ */
+export const REVERSED_LOOP_BELOW = -0.1;
+
+/**
+ * Read as IUPAC (the file states no convention), a first closed cycle whose loop runs the other
+ * way round means the instrument most likely wrote cathodic current as positive. Said, not
+ * changed: a chemist can tell, the import cannot.
+ */
+function reversedLoop(cols: CoreColumns): { cycle: number; orientation: number } | null {
+  for (const c of cols.split.cycles) {
+    const orientation = loopOrientation(cols.potentialV, cols.currentA, c.start, c.end);
+    if (orientation !== null) return orientation < REVERSED_LOOP_BELOW ? { cycle: c.index, orientation } : null;
+  }
+  return null;
 }
 
 /** A scan rate written in a column name ("j @ 50 mV s-1"), as a preamble value on the header line. */

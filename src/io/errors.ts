@@ -64,7 +64,8 @@ export type ImportWarningCode =
   | 'SCAN_RATE_DISAGREES'
   | 'SCAN_RATE_UNEVEN'
   | 'TIME_NOT_MONOTONIC'
-  | 'CYCLE_COLUMN_IGNORED';
+  | 'CYCLE_COLUMN_IGNORED'
+  | 'CONVENTION_DOUBTED';
 
 export interface ImportWarning {
   code: ImportWarningCode;
