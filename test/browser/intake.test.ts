@@ -118,6 +118,34 @@ describe('picking files', () => {
     await page.getByTestId('tab-couples').click();
   });
 
+  // In the IUPAC convention the i–E loop encloses a positive area (the charging current has the
+  // sign of the sweep: Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), §1.2.2, from
+  // memory). This file writes cathodic current as positive and does not say so.
+  it('questions a file whose currents run the loop the polarographic way, and reads it right once told', async () => {
+    const page = app.page;
+    const name = 'cathodic-positive-100mVs.csv';
+    const flipped = simulatedCsv(0.1).trim().split('\n').map((line, k) => (k === 0 ? line : line.replace(/,([^,]+)$/, (_m, i: string) => `,${-Number(i)}`))).join('\n');
+    await page.getByTestId('file-input').setInputFiles([{ name, mimeType: 'text/csv', buffer: Buffer.from(flipped) }]);
+    await page.locator(`[data-testid=file-row][data-file-name="${name}"][data-status=ready]`).waitFor({ timeout: 60_000 });
+    await selectFileRow(page, name);
+    await page.getByTestId('tab-notes').click();
+    await page.waitForFunction((n) => document.querySelector('[data-testid=notes-list]')?.textContent?.includes(`${n}: the current runs round the loop the wrong way`), name, { timeout: 30_000 });
+    await page.getByTestId('tab-import').click();
+    await page.getByTestId('override-current-convention').selectOption('polarographic');
+    await page.getByTestId('reimport').click();
+    await page.waitForFunction(() => document.querySelector('[data-testid=guess-current-sign-convention] td:nth-of-type(2)')?.textContent === 'you', null, { timeout: 30_000 });
+    await waitForAnalysis(page);
+    await page.getByTestId('tab-couples').click();
+    // Read as cathodic-positive, it is the reversible couple again (values as in the test above).
+    await page.getByTestId('couples-table').waitFor({ timeout: 30_000 });
+    const [eHalf] = await coupleCells(page, 'cell-ehalf');
+    const [ipc] = await coupleCells(page, 'cell-ipc');
+    expect(Math.abs(eHalf as number)).toBeLessThan(0.003);
+    expect(Math.abs((ipc as number) / 18.99 - 1)).toBeLessThan(0.03);
+    await page.getByTestId('tab-notes').click();
+    expect(await page.evaluate(() => document.querySelector('[data-testid=notes-list]')?.textContent ?? '')).not.toContain('the wrong way');
+  });
+
   it('stayed free of console errors, page errors and outside requests', () => {
     expect(app.consoleErrors).toEqual([]);
     expect(app.pageErrors).toEqual([]);

@@ -39,7 +39,7 @@ export function OverrideForm({ file }: { file: FileEntry }) {
         {sel('timeColumn', 'Time column', colOptions, Number)}
         {sel('potentialUnit', 'Potential unit', (['V', 'mV', 'µV'] as PotentialUnit[]).map((u) => [u, u]), (s) => s as PotentialUnit, 'override-potential-unit')}
         {sel('currentUnit', 'Current unit', (['A', 'mA', 'µA', 'nA', 'pA'] as CurrentUnit[]).map((u) => [u, u]), (s) => s as CurrentUnit, 'override-current-unit')}
-        {sel('currentConvention', 'Current sign in file', [['iupac', 'anodic positive (IUPAC)'], ['polarographic', 'cathodic positive']], (s) => s as Draft['currentConvention'])}
+        {sel('currentConvention', 'Current sign in file', [['iupac', 'anodic positive (IUPAC)'], ['polarographic', 'cathodic positive']], (s) => s as Draft['currentConvention'], 'override-current-convention')}
         {sel('encoding', 'Text encoding', [['utf-8', 'UTF-8'], ['utf-16le', 'UTF-16 LE'], ['utf-16be', 'UTF-16 BE'], ['latin1', 'Latin-1']], (s) => s as Draft['encoding'])}
         {sel('cycleColumn', 'Cycles from', [['-1', 'the potential trace (ignore any cycle column)'], ...colOptions], Number)}
         <label className="field">
