@@ -25,6 +25,14 @@ describe('readInputs', () => {
     expect(read.measurements.map((m) => m.fileName)).toEqual(['run1_50mVs.csv', 'run2_50mVs.csv', 'run10_50mVs.csv']);
   });
 
+  it('a folder given with a trailing slash, or as "sub/.." (as "." would be), is named by its own name', () => {
+    const dir = folder({ 'run1_50mVs.csv': text });
+    mkdirSync(join(dir, 'sub'));
+    const name = dir.split(/[\\/]/).pop();
+    expect(readInputs([`${dir}/`]).files.map((f) => f.folder)).toEqual([name]);
+    expect(readInputs([`${dir}/sub/..`]).files.map((f) => f.folder)).toEqual([name]);
+  });
+
   it('a missing path and an empty folder are UsageErrors naming them', () => {
     expect(() => readInputs(['/no/such/file.csv'])).toThrow(UsageError);
     expect(() => readInputs(['/no/such/file.csv'])).toThrow('/no/such/file.csv');

@@ -6,7 +6,7 @@
  * with `keepGoing` it is collected instead and the other files are still read.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { basename, join } from 'node:path';
+import { basename, join, resolve } from 'node:path';
 import { sha256Hex } from '../core/provenance/sha256';
 import { importVoltammogram, ImportError } from '../io';
 import { naturalCompare } from '../io/naturalOrder';
@@ -72,7 +72,8 @@ export function expandInputs(paths: string[]): Array<{ path: string; folder: str
       .filter((n) => statSync(join(p, n)).isFile())
       .sort(naturalCompare);
     if (!names.length) throw new UsageError(`the folder "${p}" holds no data files`);
-    const folder = basename(p.replace(/[\\/]+$/, '')) || p;
+    // Named by its own name, also when given as "." or "..".
+    const folder = basename(resolve(p)) || p;
     out.push(...names.map((n) => ({ path: join(p, n), folder })));
   }
   return out;
