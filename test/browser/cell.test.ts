@@ -46,11 +46,12 @@ describe('each series has its own cell', () => {
   it('selecting a film file shows and edits the film series’ cell: the 2 mm gold disk', async () => {
     const page = app.page;
     await page.locator('[data-testid=file-row][data-file-name^="film_FcSAM"] .file-name').first().click();
+    await page.waitForFunction((text) => document.querySelector('[data-testid=cell-series]')?.textContent === text, "Cell of series 'film FcSAM' (8 files)", { timeout: 10_000 });
     await waitForAnalysis(page);
-    expect(await page.getByTestId('cell-series').textContent()).toBe("Cell of series 'film FcSAM' (8 files)");
     expect(Number(await page.getByTestId('area').inputValue())).toBe(0.0314);
     await page.locator('[data-testid=file-row][data-file-name^="probe_RuHex"] .file-name').first().click();
-    expect(await page.getByTestId('cell-series').textContent()).toBe("Cell of series 'probe RuHex' (6 files)");
+    // The panel is drawn at the next frame after the click, not within it: wait for it.
+    await page.waitForFunction((text) => document.querySelector('[data-testid=cell-series]')?.textContent === text, "Cell of series 'probe RuHex' (6 files)", { timeout: 10_000 });
     expect(Number(await page.getByTestId('area').inputValue())).toBe(0.0707);
     expect(Number(await page.getByTestId('concentration').inputValue())).toBe(1);
   });
