@@ -71,7 +71,7 @@ export function assembleMeasurement(fileName: string, front: FrontMatter, table:
  * trace gives about 0; simulated couples read as IUPAC gave 0.6–1, and still 0.13 when started
  * far on the wrong side of E°′ with only the other form present.
  */
-export const REVERSED_LOOP_BELOW = -0.1;
+const REVERSED_LOOP_BELOW = -0.1;
 
 /**
  * Read as IUPAC (the file states no convention), a first closed cycle whose loop runs the other
