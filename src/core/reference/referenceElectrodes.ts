@@ -59,16 +59,33 @@ export const REFERENCE_ELECTRODES: readonly ReferenceElectrode[] = [
 
 /** Looks a reference electrode up by id or alias (case-insensitive); null when unknown. */
 export function findReferenceElectrode(name: string): ReferenceElectrode | null {
-  // Second pass: the filling electrolyte's name is left out, its concentration kept.
-  const stripElectrolyte = (n: string) => n.replace(/ (kcl|nacl|naoh|koh|h2so4|k2so4)\b/g, '');
   const key = normalizeReferenceName(name);
-  const loose = stripElectrolyte(key);
-  const matches = (r: ReferenceElectrode, k: string, strip: boolean) =>
-    [r.id, ...r.aliases].some((a) => {
+  const { exact, loose } = aliasTables();
+  return exact.get(key) ?? loose.get(stripElectrolyte(key)) ?? byKeyword(key);
+}
+
+/** Second pass: the filling electrolyte's name is left out, its concentration kept. */
+const stripElectrolyte = (n: string) => n.replace(/ (kcl|nacl|naoh|koh|h2so4|k2so4)\b/g, '');
+
+let aliasMaps: { exact: Map<string, ReferenceElectrode>; loose: Map<string, ReferenceElectrode> } | null = null;
+
+/**
+ * Every id and alias of the table, normalised once (a lookup runs for each header and preamble
+ * line of each file read). The first electrode in table order keeps a spelling two could share.
+ */
+function aliasTables(): NonNullable<typeof aliasMaps> {
+  if (aliasMaps) return aliasMaps;
+  const exact = new Map<string, ReferenceElectrode>();
+  const loose = new Map<string, ReferenceElectrode>();
+  for (const r of REFERENCE_ELECTRODES) {
+    for (const a of [r.id, ...r.aliases]) {
       const n = normalizeReferenceName(a);
-      return (strip ? stripElectrolyte(n) : n) === k;
-    });
-  return REFERENCE_ELECTRODES.find((r) => matches(r, key, false)) ?? REFERENCE_ELECTRODES.find((r) => matches(r, loose, true)) ?? byKeyword(key);
+      if (!exact.has(n)) exact.set(n, r);
+      const l = stripElectrolyte(n);
+      if (!loose.has(l)) loose.set(l, r);
+    }
+  }
+  return (aliasMaps = { exact, loose });
 }
 
 /**
