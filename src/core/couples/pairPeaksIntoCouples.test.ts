@@ -49,6 +49,16 @@ describe('pairPeaksIntoCouples with one dominant peak per direction', () => {
     const withFeature = pairPeaksIntoCouples([0.35, 0.6], [-0.35], { anodicWeights: [1, 0.1], cathodicWeights: [1] });
     expect(withFeature).toContainEqual({ anodic: 0, cathodic: 0 });
   });
+  // Hand example of the cost balance: a return peak of weight 0.355 (an irreversible couple's at a
+  // fast scan) 0.85 V from the forward peak. Left single, both cost 0.6 + 0.355·0.6 = 0.813, less
+  // than the pair's 0.85; the two dominant peaks are joined all the same, as nothing competes.
+  it('joins the two dominant peaks when the cost balance alone would leave both single', () => {
+    expect(pairPeaksIntoCouples([0.4203], [-0.4301], { anodicWeights: [0.355], cathodicWeights: [1] })).toEqual([{ anodic: 0, cathodic: 0 }]);
+    // A small couple (0.30/0.28 V) pairs up inside them; joined, the dominant peaks would cross it: left single.
+    const crossed = pairPeaksIntoCouples([0.4203, 0.3], [-0.4301, 0.28], { anodicWeights: [0.355, 0.2], cathodicWeights: [1, 0.2] });
+    expect(crossed).toContainEqual({ anodic: 1, cathodic: 1 });
+    expect(crossed).not.toContainEqual({ anodic: 0, cathodic: 0 });
+  });
   it('keeps the narrow limit when a direction has two comparable peaks, and beyond 2·maxDeltaEpV', () => {
     expect(pairPeaksIntoCouples([0.35, 0.6], [-0.35], { anodicWeights: [1, 0.8] })).not.toContainEqual({ anodic: 0, cathodic: 0 });
     expect(pairPeaksIntoCouples([0.7], [-0.6])).toHaveLength(2);

@@ -7,7 +7,8 @@
  * other peak smaller), those two may pair up to `wideMaxDeltaEpV` apart: a totally irreversible
  * couple routinely shows ΔEp of 0.5–1 V (e.g. k° = 1e-5 cm/s, α = 0.5 gives ≈ 0.7 V at 0.1 V/s,
  * Wang, Analytical Electrochemistry 2nd ed. (2000) eq. 2-5), while with several comparable peaks per
- * direction the narrow limit keeps separate couples apart.
+ * direction the narrow limit keeps separate couples apart. Those two dominant peaks, if the cost
+ * balance leaves both single, are joined when no other pair lies between them.
  * Method: order-preserving assignment (common practice, no source); limits are ours.
  * In: peak potentials (V) of each kind. Out: pairs of indices into the input lists, unpaired
  *   peaks as pairs with null on the missing side, sorted by mid-potential.
@@ -67,25 +68,39 @@ export function pairPeaksIntoCouples(anodicV: readonly number[], cathodicV: read
       );
     }
   }
-  const pairs: PeakPair[] = [];
+  // Backtracked in sorted positions; [x, -1] and [-1, y] are single peaks.
+  const matched: Array<[number, number]> = [];
   let x = a.length;
   let y = c.length;
   while (x > 0 || y > 0) {
     const here = best[x]![y]!;
-    if (x > 0 && y > 0 && here === best[x - 1]![y - 1]! + cost(x - 1, y - 1)) {
-      pairs.push({ anodic: a[--x]!.i, cathodic: c[--y]!.i });
-    } else if (x > 0 && here === best[x - 1]![y]! + a[x - 1]!.w) {
-      pairs.push({ anodic: a[--x]!.i, cathodic: null });
-    } else {
-      pairs.push({ anodic: null, cathodic: c[--y]!.i });
-    }
+    if (x > 0 && y > 0 && here === best[x - 1]![y - 1]! + cost(x - 1, y - 1)) matched.push([--x, --y]);
+    else if (x > 0 && here === best[x - 1]![y]! + a[x - 1]!.w) matched.push([--x, -1]);
+    else matched.push([-1, --y]);
   }
+  if (da >= 0 && dc >= 0 && Number.isFinite(cost(da, dc))) joinDominant(matched, da, dc);
+  const pairs: PeakPair[] = matched.map(([px, py]) => ({ anodic: px < 0 ? null : a[px]!.i, cathodic: py < 0 ? null : c[py]!.i }));
   const mid = (p: PeakPair) => {
     const va = p.anodic === null ? null : anodicV[p.anodic]!;
     const vc = p.cathodic === null ? null : cathodicV[p.cathodic]!;
     return va !== null && vc !== null ? (va + vc) / 2 : (va ?? vc ?? 0);
   };
   return pairs.sort((p, q) => mid(p) - mid(q));
+}
+
+/**
+ * The two dominant peaks, both left single, become one couple when they are within the wide limit
+ * and cross no other pair. The cost balance can leave them apart: a totally irreversible couple's
+ * return peak is small (ip ratio 0.3-0.4 at fast scans), so its weight·maxDeltaEpV plus the forward
+ * peak's undercut a ΔEp of 0.8 V, though nothing else competes for either peak.
+ */
+function joinDominant(matched: Array<[number, number]>, da: number, dc: number): void {
+  const ka = matched.findIndex(([x, y]) => x === da && y < 0);
+  const kc = matched.findIndex(([x, y]) => y === dc && x < 0);
+  if (ka < 0 || kc < 0) return;
+  if (matched.some(([x, y]) => x >= 0 && y >= 0 && x < da !== y < dc)) return;
+  matched.splice(Math.max(ka, kc), 1);
+  matched.splice(Math.min(ka, kc), 1, [da, dc]);
 }
 
 /** Position of the only peak whose weight reaches `threshold`, or −1 when there are none or several. */
