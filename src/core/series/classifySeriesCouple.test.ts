@@ -21,6 +21,8 @@ describe('classifySeriesCouple', () => {
     const rt = thermalVoltageV(298.15);
     expect(classifySeriesCouple([point({ verdict: 'irreversible', forwardHalfPeakWidthV: 3.7 * rt })], 1, 298.15).kineticClass).toBe('irreversible');
     expect(classifySeriesCouple([point({ verdict: 'irreversible', forwardHalfPeakWidthV: 2.2 * rt })], 1, 298.15).kineticClass).toBe('reversible');
+    // A peak only on the return sweep (no forward peak, so no width): not called reversible.
+    expect(classifySeriesCouple([point({ verdict: 'irreversible', forwardHalfPeakWidthV: null })], 1, 298.15).kineticClass).toBe('inconclusive');
   });
   // Laviron 1974: ip ∝ v for a surface couple; a log–log slope near 1 over ≥ 3 scan rates wins.
   it('uses the log–log slope to recognise a surface couple', () => {
