@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { celsiusToKelvin, diskAreaCm2, formatMillivolts, kelvinToCelsius, millimolarToMolPerCm3, molPerCm3ToMillimolar } from './units';
+import { celsiusToKelvin, diskAreaCm2, formatMillivolts, formatScanRate, kelvinToCelsius, millimolarToMolPerCm3, molPerCm3ToMillimolar } from './units';
 
 // BIPM, SI Brochure 9th ed. (2019), §2.3.1: T/K = t/°C + 273.15; Table 8: 1 L = 1000 cm³.
 describe('unit conversions', () => {
@@ -18,5 +18,16 @@ describe('unit conversions', () => {
   it('formats mV with the digits asked for', () => {
     expect(formatMillivolts(0.05916)).toBe('59.2 mV');
     expect(formatMillivolts(-0.0012, 2)).toBe('-1.20 mV');
+  });
+});
+
+// IEEE 754 doubles: a scan rate fitted from a time column carries a float tail (0.1 → 0.10000000000000005);
+// messages print six significant digits at most (common practice, no source).
+describe('formatScanRate', () => {
+  it('prints no binary-float tail', () => {
+    expect(formatScanRate(0.10000000000000005)).toBe('0.1 V/s');
+    expect(formatScanRate(100.00000000000006)).toBe('100 V/s');
+    expect(formatScanRate(0.049999999999999996)).toBe('0.05 V/s');
+    expect(formatScanRate(0.0123456789)).toBe('0.0123457 V/s');
   });
 });

@@ -32,6 +32,11 @@ export function diskAreaCm2(diameterCm: number): number {
   return (Math.PI * diameterCm * diameterCm) / 4;
 }
 
+/** A scan rate for messages, without a binary-float tail: 0.1 V/s read from a time column is 0.10000000000000005. */
+export function formatScanRate(scanRateVPerS: number): string {
+  return `${Number(scanRateVPerS.toPrecision(6))} V/s`;
+}
+
 /** A potential difference in mV for messages, e.g. "59.2 mV" (digits after the point). */
 export function formatMillivolts(potentialV: number, digits = 1): string {
   return `${(potentialV * 1000).toFixed(digits)} mV`;

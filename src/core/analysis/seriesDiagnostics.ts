@@ -9,7 +9,7 @@
  *   electron transfer the peaks move apart by RT/(αnₐF) and RT/((1 − α)nₐF) per unit of ln v
  *   (Wang eq. 2-5; Laviron 1979 for films), so their midpoint is E°′ only for α = 0.5.
  */
-import { formatMillivolts } from '../units';
+import { formatMillivolts, formatScanRate } from '../units';
 import type { ResolvedSeriesOptions } from './seriesFits';
 import type { SeriesCouple } from './seriesTypes';
 
@@ -104,9 +104,9 @@ function describeRegime(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptio
   const last = pts[pts.length - 1];
   const n = o.electronCount;
   if (c.kineticClass === 'quasi-reversible' && first && last) {
-    return `surface, slow electron transfer (Laviron): n·ΔEp grows from ${mv(n * first.deltaEpV!)} at ${first.scanRateVPerS} V/s to ${mv(n * last.deltaEpV!)} at ${last.scanRateVPerS} V/s`;
+    return `surface, slow electron transfer (Laviron): n·ΔEp grows from ${mv(n * first.deltaEpV!)} at ${formatScanRate(first.scanRateVPerS)} to ${mv(n * last.deltaEpV!)} at ${formatScanRate(last.scanRateVPerS)}`;
   }
-  if (c.kineticClass === 'reversible' && last) return `surface, fast electron transfer: n·ΔEp stays ≤ 28.5 mV up to ${last.scanRateVPerS} V/s`;
+  if (c.kineticClass === 'reversible' && last) return `surface, fast electron transfer: n·ΔEp stays ≤ 28.5 mV up to ${formatScanRate(last.scanRateVPerS)}`;
   return 'surface, electron-transfer rate not determined from ΔEp';
 }
 

@@ -23,6 +23,7 @@
  */
 import { AnalysisError, assertFiniteInRange } from '../errors';
 import { STANDARD_TEMPERATURE_K } from '../constants';
+import { formatScanRate } from '../units';
 import type { PeakDirection } from '../peaks/peakTypes';
 import { simulateCv } from '../simulation';
 import { oneCyclePeaks } from '../simulation/simulatedPeaks';
@@ -93,5 +94,5 @@ export function correctedIrreversibleRateConstant(input: CorrectedIrreversibleIn
     est = next;
     if (moved < 1e-3) return { ...est, departureV, twoPeakK0CmPerS: first.k0CmPerS, iterations: iteration };
   }
-  throw new AnalysisError('NOT_CONVERGED', `the simulated peak departures did not settle for Epa = ${input.epaV.toFixed(4)} V, Epc = ${input.epcV.toFixed(4)} V at ${input.scanRateVPerS} V/s`);
+  throw new AnalysisError('NOT_CONVERGED', `the simulated peak departures did not settle for Epa = ${input.epaV.toFixed(4)} V, Epc = ${input.epcV.toFixed(4)} V at ${formatScanRate(input.scanRateVPerS)}`);
 }

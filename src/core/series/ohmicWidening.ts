@@ -21,7 +21,7 @@
  *   file stays within n·ΔEp ≤ 72 mV (25 °C).
  */
 import { STANDARD_TEMPERATURE_K } from '../constants';
-import { formatMillivolts } from '../units';
+import { formatMillivolts, formatScanRate } from '../units';
 
 export interface OhmicWideningFile {
   fileIndex: number;
@@ -78,7 +78,7 @@ export function ohmicWidening(files: OhmicWideningFile[], options: OhmicWidening
 
 function describe(grows: boolean, ruOhm: number, share: number | null, explaining: number | null, limits: boolean, last: OhmicWideningFile | undefined, lastFile: { wideningV: number; ohmicDropV: number | null } | undefined): string {
   if (!grows || !last || !lastFile) return 'ΔEp does not grow with scan rate: no ohmic or kinetic widening to weigh';
-  const at = `at ${Number(last.scanRateVPerS.toPrecision(6))} V/s ΔEp is ${mv(lastFile.wideningV)} wider than reversible`;
+  const at = `at ${formatScanRate(last.scanRateVPerS)} ΔEp is ${mv(lastFile.wideningV)} wider than reversible`;
   if (ruOhm > 0) {
     const drop = `the iR correction (Ru = ${ruOhm} Ω) moved the peaks apart by ${mv(lastFile.ohmicDropV ?? 0)}`;
     return limits
