@@ -10,6 +10,7 @@
  *   (Wang eq. 2-5; Laviron 1979 for films), so their midpoint is E°′ only for α = 0.5.
  */
 import { formatMillivolts, formatScanRate } from '../units';
+import { irreversibleShiftText } from '../series/peakPotentialVsLogScanRate';
 import type { ResolvedSeriesOptions } from './seriesFits';
 import type { SeriesCouple } from './seriesTypes';
 
@@ -17,7 +18,7 @@ const mv = formatMillivolts;
 const sci = (v: number, d = 3) => v.toExponential(d - 1);
 const span = (r: [number, number] | null | undefined, unit: string) => (r ? `; range ${sci(r[0])}–${sci(r[1])} ${unit}` : '');
 
-function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
+function describeDrift(c: Omit<SeriesCouple, 'verdict'>, temperatureK: number): string[] {
   const out: string[] = [];
   const halves = c.points.flatMap((p) => (p.eHalfV === null ? [] : [p.eHalfV]));
   if (halves.length >= 2) out.push(`E½ spans ${mv(Math.max(...halves) - Math.min(...halves))} over the series`);
@@ -25,7 +26,7 @@ function describeDrift(c: Omit<SeriesCouple, 'verdict'>): string[] {
   if (shift && c.regime === 'surface') {
     out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate over the whole series (Nernstian film: 0; Laviron, n·ΔEp > 200 mV: 2.303RT/((1 − αc)nF) anodic or 2.303RT/(αc·nF) cathodic, 118 mV for αc = 0.5)`);
   } else if (shift) {
-    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate (reversible: 0; totally irreversible: ±29.6/(αnₐ) mV, αnₐ of the forward wave)`);
+    out.push(`forward ${c.forwardDirection} peak moves ${mv(shift.slopeVPerDecade)} per tenfold scan rate (reversible: 0; totally irreversible: ±${irreversibleShiftText(temperatureK)}, αnₐ of the forward wave)`);
   }
   return out;
 }
@@ -122,5 +123,5 @@ export function describeHalfWave(c: Omit<SeriesCouple, 'verdict'>): string {
 }
 
 export function describeSeriesCouple(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {
-  return [describeRegime(c, o), ...describeDrift(c), ...describeLines(c), ...describeDiffusion(c, o), ...describeFollowUp(c), ...describeSurface(c), describeHalfWave(c)];
+  return [describeRegime(c, o), ...describeDrift(c, o.temperatureK), ...describeLines(c), ...describeDiffusion(c, o), ...describeFollowUp(c), ...describeSurface(c), describeHalfWave(c)];
 }

@@ -24,7 +24,7 @@ import { thermalVoltageV, STANDARD_TEMPERATURE_K } from '../constants';
 import type { PeakDirection } from '../peaks/peakTypes';
 import { median } from '../statistics/median';
 import type { SeriesKineticClass, SeriesPoint } from '../series/seriesPoint';
-import { peakPotentialVsLogScanRate } from '../series/peakPotentialVsLogScanRate';
+import { irreversibleShiftText, peakPotentialVsLogScanRate } from '../series/peakPotentialVsLogScanRate';
 import type { SeriesTransferCoefficient } from './seriesTypes';
 
 export interface TransferCoefficientCell {
@@ -105,7 +105,7 @@ export function seriesTransferCoefficient(points: SeriesPoint[], kineticClass: S
   const width = shift ? null : fromHalfPeakWidth(files, cell.temperatureK);
   const m = shift ?? width;
   if (!m) return assumed(forward, na, 'fewer than two scan rates beyond Nicholson\'s table and no peak width');
-  const how = shift ? `Ep against log v over ${files.length} files (29.6/(αnₐ) mV per decade)` : '|Ep − Ep/2| = 1.857RT/(αnₐF)';
+  const how = shift ? `Ep against log v over ${files.length} files (${irreversibleShiftText(cell.temperatureK)} per decade)` : '|Ep − Ep/2| = 1.857RT/(αnₐF)';
   const alphaC = alphaCFromForward(m.value, forward, na);
   const ends = m.range.map((x) => alphaCFromForward(x, forward, na));
   const possible = alphaC >= 0.05 && alphaC <= 0.95;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { AnalysisError } from '../errors';
-import { irreversiblePeakShiftVPerDecade, peakPotentialVsLogScanRate } from './peakPotentialVsLogScanRate';
+import { irreversiblePeakShiftVPerDecade, irreversibleShiftText, peakPotentialVsLogScanRate } from './peakPotentialVsLogScanRate';
 
 describe('peakPotentialVsLogScanRate', () => {
   // Wang (2000) eq. 2-5; Bard & Faulkner §6.3: α = 0.5, nₐ = 1 → 59.16 mV per decade at 25 °C
@@ -31,5 +31,14 @@ describe('peakPotentialVsLogScanRate', () => {
   });
   it('rejects non-positive scan rates', () => {
     expect(() => peakPotentialVsLogScanRate({ scanRatesVPerS: [0, 1], peakPotentialsV: [0, 0], direction: 'anodic' })).toThrow(AnalysisError);
+  });
+});
+
+// Bard & Faulkner 2nd ed. (2001) eq. 6.3.4 via Wang (2000) eq. 2-5: (ln 10)·RT/(2F) is 29.58 mV at
+// 25 °C and 30.77 mV at 37 °C (CODATA 2018 R and F).
+describe('irreversibleShiftText', () => {
+  it('states the slope at the series temperature', () => {
+    expect(irreversibleShiftText(298.15)).toBe('29.6/(αnₐ) mV');
+    expect(irreversibleShiftText(310.15)).toBe('30.8/(αnₐ) mV');
   });
 });

@@ -37,6 +37,11 @@ export function irreversiblePeakShiftVPerDecade(alphaTimesTransferElectrons: num
   return (Math.LN10 * thermalVoltageV(temperatureK)) / (2 * alphaTimesTransferElectrons);
 }
 
+/** The same shift for messages, at the series' temperature: "29.6/(αnₐ) mV" at 25 °C. */
+export function irreversibleShiftText(temperatureK: number): string {
+  return `${(irreversiblePeakShiftVPerDecade(1, temperatureK) * 1000).toFixed(1)}/(αnₐ) mV`;
+}
+
 export function peakPotentialVsLogScanRate(
   input: { scanRatesVPerS: ArrayLike<number>; peakPotentialsV: ArrayLike<number>; direction: 'anodic' | 'cathodic' },
   options: PeakPotentialVsLogScanRateOptions = {},
