@@ -11,6 +11,10 @@
  * 2. The 120-file batch of bench/scaleData.ts picked at once, read and analysed in the page,
  *    against the same work in Node through the worker's own handlers (one thread).
  * 3. With those files loaded, a click on another file until its trace is drawn again (median).
+ * 4. The floor under 2: a fresh analysis worker of the same build, in the same page, given the
+ *    demo files and then the 120 files as bytes already in memory (with the run snapshot the app
+ *    sent with its own first file), nothing else running: the engine's own start-up, without
+ *    the page's reading, drawing and bookkeeping.
  * All of it runs in three rounds, each in a fresh browser context; each figure is the median of
  * the rounds, printed with their range, and each ratio is taken within one round.
  */
@@ -60,6 +64,44 @@ const PROBE = `(() => {
   requestAnimationFrame(frame);
 })();`;
 
+/** Keeps the run snapshot (`ahead`) the app sends with its first import, for the worker-alone run. */
+const CAPTURE_AHEAD = `(() => {
+  const send = Worker.prototype.postMessage;
+  Worker.prototype.postMessage = function (message, transfer) {
+    if (message && message.type === 'import' && message.input && message.input.ahead && !window.benchAhead) window.benchAhead = message.input.ahead;
+    return send.call(this, message, transfer);
+  };
+})();`;
+
+/**
+ * A fresh worker of the page's own build fed the demo, then the batch, all at once from memory;
+ * resolves with the batch's time (ms). Text, not a function, for the reason PROBE is.
+ */
+const WORKER_ALONE = `(async () => {
+  const { demo, batch } = window.benchWorkerFiles;
+  const url = performance.getEntriesByType('resource').map((e) => e.name).find((n) => n.includes('analysis.worker'));
+  if (!url || !window.benchAhead) throw new Error('no analysis worker script or run snapshot seen');
+  const worker = new Worker(url, { type: 'module' });
+  let id = 1e6;
+  const run = (list) => new Promise((resolve, reject) => {
+    let left = list.length;
+    const t0 = performance.now();
+    worker.onmessage = (e) => {
+      if (e.data.type === 'error') reject(new Error(e.data.message));
+      else if (e.data.type === 'result' && --left === 0) resolve(performance.now() - t0);
+    };
+    for (const f of list) {
+      const data = new TextEncoder().encode(f.text).buffer;
+      worker.postMessage({ type: 'import', requestId: id++, input: { fileName: f.name, data, overrides: {}, ahead: { ...window.benchAhead, fileId: 'bench-' + id } } }, [data]);
+    }
+  });
+  await run(demo);
+  await new Promise((r) => setTimeout(r, 500));
+  const ms = await run(batch);
+  worker.terminate();
+  return ms;
+})()`;
+
 async function waitMark(page: Page, name: string): Promise<number> {
   await page.waitForFunction((n) => (window as unknown as { benchMarks: Record<string, number> }).benchMarks[n] !== undefined, name, { timeout: 600_000, polling: 50 });
   return page.evaluate((n) => (window as unknown as { benchMarks: Record<string, number> }).benchMarks[n] as number, name);
@@ -108,6 +150,8 @@ interface Round {
   batchNodeMs: number;
   /** The same batch in a fresh Node process, first pass. */
   coldNodeMs: number;
+  /** The batch in a fresh worker of the same build, demo first, nothing else running (WORKER_ALONE). */
+  workerAloneMs: number;
   switchMs: number[];
 }
 
@@ -122,6 +166,7 @@ async function oneRound(browser: Browser, port: number, demoFiles: { name: strin
   try {
     const page = await context.newPage();
     await page.addInitScript({ content: PROBE });
+    await page.addInitScript({ content: CAPTURE_AHEAD });
     const demoCount = demoFiles.length;
     await page.addInitScript({ content: `window.benchWant = ${demoCount};` });
     await page.goto(`http://127.0.0.1:${port}/`);
@@ -143,7 +188,9 @@ async function oneRound(browser: Browser, port: number, demoFiles: { name: strin
     const switches: number[] = [];
     // Never the file already selected (the upload opens its series on the first file).
     for (let k = 0; k < SWITCHES; k++) switches.push(await switchMs(page, files[(k * 17 + 7) % files.length]!.name));
-    return { loadEventMs, firstPlotMs, shownMs, demoNodeMs, batchPageMs, batchNodeMs, coldNodeMs, switchMs: switches };
+    await page.evaluate((f) => { (window as unknown as { benchWorkerFiles: unknown }).benchWorkerFiles = f; }, { demo: demoFiles, batch: files });
+    const workerAloneMs = await page.evaluate<number>(WORKER_ALONE);
+    return { loadEventMs, firstPlotMs, shownMs, demoNodeMs, batchPageMs, batchNodeMs, coldNodeMs, workerAloneMs, switchMs: switches };
   } finally {
     await context.close();
   }
@@ -196,6 +243,8 @@ export async function runBrowserBench(): Promise<BenchRow[]> {
       row('page / Node', pick((r) => r.batchPageMs / r.batchNodeMs), '×', 'each round\'s own ratio; goal ≤ 2'),
       row('the same work in a fresh Node process', pick((r) => r.coldNodeMs), 'ms', 'first pass, the engine compiling as it goes (as a page\'s worker must); for comparison, no goal'),
       row('page / fresh Node', pick((r) => r.batchPageMs / r.coldNodeMs), '×'),
+      row('the same work in a fresh worker alone', pick((r) => r.workerAloneMs), 'ms', 'same build and page, demo first, bytes from memory, no page work: what the engine alone costs'),
+      row('worker alone / Node', pick((r) => r.workerAloneMs / r.batchNodeMs), '×', 'the floor under page / Node; the rest is the page\'s own share'),
       row(`switch file with ${want} loaded (median of ${SWITCHES} per round)`, pick((r) => median(r.switchMs)), 'ms', 'click → trace drawn again; goal < 100 ms'),
     ];
   } finally {
