@@ -14,7 +14,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { baselineAt, sampleBaseline } from './baselineCurve';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
-import { decayAfterPrevious, decayAfterSwitch, type BaselineRef } from './extendedDecayBaselines';
+import { decayAfterPrevious, decayAfterSwitch, reversibleTailOfPrevious, type BaselineRef } from './extendedDecayBaselines';
 import { polynomialBaseline } from './polynomialBaseline';
 import { switchedChargingBaseline } from './switchedChargingBaseline';
 import { twoPointBaseline } from './twoPointBaseline';
@@ -43,6 +43,8 @@ export interface BaselineRequest {
    * where that current starts; the decay is fitted before it and no charging step is measured.
    */
   forwardDecayEnd?: number;
+  /** n and T of the cell: the reversible shape of a previous wave (reversibleTailOfPrevious) is drawn with them. */
+  wave?: { temperatureK: number; electronCount: number };
 }
 
 export interface BaselineOutcome {
@@ -66,7 +68,9 @@ export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request:
   if (method === 'nicholson') {
     const fw = request.forward;
     const prev = request.previous ?? null;
-    const decay = attempt(() => (prev ? decayAfterPrevious(sig, peak, prev, request.marginPoints) : fw ? decayAfterSwitch(sig, peak, fw, request.forwardDecayEnd) : null));
+    const decay = attempt(() => (prev
+      ? ((request.wave ? reversibleTailOfPrevious(sig, peak, prev, request.wave, request.marginPoints) : null) ?? decayAfterPrevious(sig, peak, prev, request.marginPoints))
+      : fw ? decayAfterSwitch(sig, peak, fw, request.forwardDecayEnd) : null));
     if (decay) {
       const under = (prev ?? fw)!.background;
       return { curve: decay.curve, evaluate: decay.evaluate, background: (k) => under(k) ?? under(peak.index), fallbackReason: null };

@@ -4,12 +4,17 @@
  * the switch (the forward decay continued past the switch, Nicholson, Anal. Chem. 38 (1966)
  * 1406, from memory), and a wave sitting on the tail of an earlier wave on the same sweep (the
  * same convention applied within one sweep; our extension). The fit itself is
- * nicholsonReturnBaseline.ts.
+ * nicholsonReturnBaseline.ts. Where the earlier wave is reversible, its own exact shape is
+ * extended instead (reversibleTailOfPrevious).
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { nicholsonReturnBaseline, type NicholsonReturnBaselineResult } from './nicholsonReturnBaseline';
+import { reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
+import { anchorAt, sampleBaseline } from './baselineCurve';
+import type { BaselineCurve } from './baselineTypes';
+import { thermalVoltageV } from '../constants';
 
 /** A peak with the baseline drawn under it and that baseline as a function of point index. */
 export interface BaselineRef {
@@ -50,13 +55,20 @@ export function decayAfterSwitch(sig: SweepSignals, peak: PeakCandidate, fw: Bas
   }, { switchStep: vertex === fSeg.end - 1 });
 }
 
-/** Decay of the previous wave, fitted between it and this wave's foot, extended under this wave. */
-export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev: BaselineRef, marginPoints: number): NicholsonReturnBaselineResult | null {
+/** Where the earlier wave's current is seen alone: from a fifth of the way past its peak to this wave's foot (sweep-relative). */
+function betweenWaves(sig: SweepSignals, peak: PeakCandidate, prev: BaselineRef, marginPoints: number) {
   const seg = sig.segments[peak.segmentIndex]!;
   const s = seg.direction === 'positive' ? 1 : -1;
   const y = sig.locatingA.subarray(seg.start, seg.end).map((v) => s * v);
   const from = prev.peak.index - seg.start + Math.round((peak.index - prev.peak.index) / 5);
-  const w = findPrePeakWindow(y, from, peak.index - seg.start, { noise: sig.noiseA, marginPoints });
+  return findPrePeakWindow(y, from, peak.index - seg.start, { noise: sig.noiseA, marginPoints });
+}
+
+/** Decay of the previous wave, fitted between it and this wave's foot, extended under this wave. */
+export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev: BaselineRef, marginPoints: number): NicholsonReturnBaselineResult | null {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  const w = betweenWaves(sig, peak, prev, marginPoints);
   if (!w || w.end - w.start < 5) return null;
   const bg = prev.evaluate;
   if (bg(seg.start + w.start) === null || bg(peak.index) === null) return null;
@@ -66,4 +78,70 @@ export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev:
   );
   // The earlier wave's current must be decaying in the sweep's direction of interest.
   return s * fit.cottrellCoefficientA > 0 ? fit : null;
+}
+
+/** Half-peak width of a reversible wave, 2.20·RT/nF (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21): the shape is used within ±10 % of it. */
+const WIDTH_TOLERANCE = 0.1;
+
+/**
+ * The previous wave's own current extended under this one, when that wave is reversible: its
+ * height above its own baseline times the reversible shape (reversibleWaveShape.ts, Nicholson &
+ * Shain 1964) placed by its Ep, over its own baseline. Unlike the fitted decay, this holds right
+ * after the peak, so waves 150-250 mV apart are measured as well as lone ones. Used only when
+ * the wave's half-peak width is reversible (±10 %) and, where the current between the waves is
+ * seen alone, the shape follows it there (rms within max(4σ, 3 % of the height)); else null.
+ */
+export function reversibleTailOfPrevious(
+  sig: SweepSignals,
+  peak: PeakCandidate,
+  prev: BaselineRef,
+  wave: { temperatureK: number; electronCount: number },
+  marginPoints: number,
+): { curve: BaselineCurve; evaluate: (index: number) => number | null } | null {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  const p = prev.peak.index;
+  const base = prev.evaluate(p);
+  if (base === null || prev.peak.segmentIndex !== peak.segmentIndex) return null;
+  const height = s * (sig.locatingA[p]! - base);
+  if (!(height > 0)) return null;
+  const nfrt = wave.electronCount / thermalVoltageV(wave.temperatureK);
+  // The rising side's half-peak point.
+  let k = p;
+  while (k > seg.start && prev.evaluate(k - 1) !== null && s * (sig.locatingA[k - 1]! - prev.evaluate(k - 1)!) > height / 2) k--;
+  if (k <= seg.start || prev.evaluate(k - 1) === null) return null;
+  const above = (j: number) => s * (sig.locatingA[j]! - prev.evaluate(j)!);
+  const f = (height / 2 - above(k - 1)) / (above(k) - above(k - 1));
+  const halfV = sig.potentialV[k - 1]! + f * (sig.potentialV[k]! - sig.potentialV[k - 1]!);
+  const width = Math.abs(prev.peak.potentialV - halfV) * nfrt;
+  if (!(Math.abs(width / 2.2 - 1) <= WIDTH_TOLERANCE)) return null;
+  const eHalf = prev.peak.potentialV + (s * reversiblePeakXi()) / nfrt;
+  const xiAt = (j: number) => -s * nfrt * (sig.potentialV[j]! - eHalf);
+  // Past the switch the wave's current goes on decaying in time as if the potential had stayed at
+  // the vertex (Nicholson's convention): Cottrell, ∝ 1/√t′ with t′ counted from E½ (σt′ = −ξ).
+  const vertex = seg.end - 1;
+  const next = sig.segments[peak.segmentIndex + 1];
+  const xiV = xiAt(vertex);
+  const evaluate = (j: number): number | null => {
+    const under = prev.evaluate(j);
+    if (under === null || j < p) return null;
+    if (j < seg.end) return under + s * height * reversibleWaveShape(xiAt(j));
+    if (!next || j >= next.end || -xiV < 3) return null;
+    const later = nfrt * Math.abs(sig.potentialV[j]! - sig.potentialV[vertex]!);
+    return under + s * height * reversibleWaveShape(xiV) * Math.sqrt(-xiV / (-xiV + later));
+  };
+  const w = betweenWaves(sig, peak, prev, marginPoints);
+  if (w && w.end - w.start >= 5) {
+    let sum = 0;
+    for (let j = seg.start + w.start; j < seg.start + w.end; j++) sum += (sig.locatingA[j]! - (evaluate(j) ?? NaN)) ** 2;
+    const rms = Math.sqrt(sum / (w.end - w.start));
+    if (!(rms <= Math.max(4 * sig.noiseA, 0.03 * height))) return null;
+  }
+  if (evaluate(seg.end - 1) === null) return null;
+  const curve = sampleBaseline(sig.potentialV, p, seg.end, (j) => evaluate(j)!, {
+    method: 'nicholson',
+    anchors: [anchorAt(sig, p)],
+    description: `the previous wave (Ep ${(prev.peak.potentialV * 1000).toFixed(1)} mV, reversible: |Ep − Ep/2| = ${(width / nfrt * 1000).toFixed(1)} mV) extended under this peak with the reversible wave's own shape (Nicholson & Shain 1964), over that wave's baseline`,
+  });
+  return { curve, evaluate };
 }
