@@ -72,7 +72,10 @@ export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request:
       ? ((request.wave ? reversibleTailOfPrevious(sig, peak, prev, request.wave, request.marginPoints) : null) ?? decayAfterPrevious(sig, peak, prev, request.marginPoints))
       : fw ? decayAfterSwitch(sig, peak, fw, request.forwardDecayEnd) : null));
     if (decay) {
-      const under = (prev ?? fw)!.background;
+      // Another couple's wave is background to this one (its Ep is found above it); the couple's
+      // own forward decay is not (ΔEp tables refer to the total return current).
+      if (prev) return { curve: decay.curve, evaluate: decay.evaluate, background: decay.evaluate, fallbackReason: null };
+      const under = fw!.background;
       return { curve: decay.curve, evaluate: decay.evaluate, background: (k) => under(k) ?? under(peak.index), fallbackReason: null };
     }
     const why = prev ? 'the current after the previous peak does not decay cleanly enough to extend' : fw ? 'too few points between the forward peak and the switch for the extended decay' : 'no forward peak on the preceding sweep to extend';
