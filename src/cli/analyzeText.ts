@@ -1,9 +1,10 @@
 /** The readable `analyze` report (no --json): a couple table per file and cycle, then the series. */
 import type { AnalyzeRunResult } from '../core/analysis/runTypes';
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
+import { formatFixed } from '../core/units';
 
 const f = (x: number | null | undefined, digits: number, scale = 1) =>
-  x === null || x === undefined || !Number.isFinite(x) ? '—' : (x * scale).toFixed(digits);
+  x === null || x === undefined || !Number.isFinite(x) ? '—' : formatFixed(x * scale, digits);
 const e = (x: number | null | undefined, digits = 3) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toExponential(digits - 1));
 
 const COLUMNS: Array<[string, number]> = [

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { celsiusToKelvin, diskAreaCm2, formatMillivolts, formatScanRate, kelvinToCelsius, millimolarToMolPerCm3, molPerCm3ToMillimolar } from './units';
+import { celsiusToKelvin, diskAreaCm2, formatFixed, formatMillivolts, formatScanRate, kelvinToCelsius, millimolarToMolPerCm3, molPerCm3ToMillimolar } from './units';
 
 // BIPM, SI Brochure 9th ed. (2019), §2.3.1: T/K = t/°C + 273.15; Table 8: 1 L = 1000 cm³.
 describe('unit conversions', () => {
@@ -29,5 +29,17 @@ describe('formatScanRate', () => {
     expect(formatScanRate(100.00000000000006)).toBe('100 V/s');
     expect(formatScanRate(0.049999999999999996)).toBe('0.05 V/s');
     expect(formatScanRate(0.0123456789)).toBe('0.0123457 V/s');
+  });
+});
+
+// Rounding convention (common practice, no source): a value that rounds to zero prints without a sign.
+describe('formatFixed', () => {
+  it('prints no negative zero', () => {
+    expect(formatFixed(-0.00002, 3)).toBe('0.000');
+    expect(formatFixed(-0.0004, 3)).toBe('0.000');
+    expect(formatFixed(-0.0006, 3)).toBe('-0.001');
+    expect(formatFixed(-0, 1)).toBe('0.0');
+    expect(formatFixed(-0.2, 0)).toBe('0');
+    expect(formatFixed(1.25, 1)).toBe((1.25).toFixed(1));
   });
 });

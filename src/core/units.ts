@@ -32,6 +32,12 @@ export function diskAreaCm2(diameterCm: number): number {
   return (Math.PI * diameterCm * diameterCm) / 4;
 }
 
+/** `value.toFixed(digits)` without a minus on a value that rounds to zero ("0.0000", not "-0.0000"). */
+export function formatFixed(value: number, digits: number): string {
+  const text = value.toFixed(digits);
+  return /^-0\.?0*$/.test(text) ? text.slice(1) : text;
+}
+
 /** A scan rate for messages, without a binary-float tail: 0.1 V/s read from a time column is 0.10000000000000005. */
 export function formatScanRate(scanRateVPerS: number): string {
   return `${Number(scanRateVPerS.toPrecision(6))} V/s`;

@@ -11,6 +11,9 @@ import type { SeriesCell } from '../run/seriesCell';
 import type { AnalysisSettings } from '../run/settings';
 import type { HalfwaveState } from './types';
 
+/** Fixed decimals without a negative zero, the one rule for the screen, the command line and the core's texts. */
+export { formatFixed } from '../core/units';
+
 export interface ReferenceChoice {
   id: ReferenceId;
   label: string;

@@ -9,7 +9,7 @@ import type { SeriesCouple } from '../core/analysis/seriesTypes';
 import type { CvSimulationInput } from '../core/simulation/simulationTypes';
 import { displayScale } from './display';
 import { cellOfFile } from '../run/seriesCell';
-import { celsiusToKelvin, millimolarToMolPerCm3 } from '../core/units';
+import { celsiusToKelvin, formatFixed, millimolarToMolPerCm3 } from '../core/units';
 import type { HalfwaveState } from './types';
 
 export type TheoryPlan = { ok: true; params: Partial<CvSimulationInput>; description: string } | { ok: false; reason: string };
@@ -55,7 +55,7 @@ export function planTheory(state: HalfwaveState, fileId: string): TheoryPlan {
   const { startV, switchV } = sweepOf(potentialV, cycle.start, cycle.end, first.direction);
   const alpha = couple.alpha ?? c.alpha ?? couple.diffusion?.alphaUsed ?? 0.5;
   const scale = displayScale(state.settings, c);
-  const e0Text = `E°′ ${eHalfShownV.toFixed(4)} V vs ${scale.name}`;
+  const e0Text = `E°′ ${formatFixed(eHalfShownV, 4)} V vs ${scale.name}`;
   const common: Partial<CvSimulationInput> = {
     formalPotentialV: eHalfV, alpha, electronCount: c.electronCount, areaCm2: c.areaCm2, temperatureK: celsiusToKelvin(c.temperatureC),
     scanRateVPerS: m.scanRateVPerS, startV, switchV, cycles: 1, stepV: Math.min(0.001, Math.abs(switchV - startV) / 200),

@@ -5,6 +5,8 @@
  * decimals a value deserves from its uncertainty (one or two significant digits in the
  * uncertainty, as the GUM recommends: JCGM 100:2008, §7.2.6).
  */
+import { formatFixed } from '../state/display';
+
 export const DASH = '—';
 
 const INTEGER = new Intl.NumberFormat('en');
@@ -16,9 +18,7 @@ export function count(n: number): string {
 
 export function fixed(value: number | null | undefined, digits: number, factor = 1): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return DASH;
-  const text = (value * factor).toFixed(digits);
-  // A value that rounds to zero reads "0.0000", not "-0.0000".
-  return /^-0\.?0*$/.test(text) ? text.slice(1) : text;
+  return formatFixed(value * factor, digits);
 }
 
 /** Significant figures, for currents and charges whose magnitude varies. */

@@ -1,7 +1,7 @@
 /** One line with the series' key numbers (D with its 95 % interval, k°, Γ, k_s), each explaining itself. */
 import { explainCouple } from '../../state/explain';
 import { useHalfwave } from '../../state/react';
-import { DASH, sci } from '../format';
+import { DASH, fixed, sci } from '../format';
 import { Explained } from './Explained';
 import { DReading, K0Reading } from './SeriesReadings';
 
@@ -20,7 +20,7 @@ export function SeriesHeadline({ group }: { group: string }) {
         const sf = c.surface;
         return (
           <p key={c.index}>
-            <span className="headline-couple">Couple {c.index + 1}{c.eHalfV !== null ? ` (E½ ${c.eHalfV.toFixed(3)} V)` : ''}:</span>{' '}
+            <span className="headline-couple">Couple {c.index + 1}{c.eHalfV !== null ? ` (E½ ${fixed(c.eHalfV, 3)} V)` : ''}:</span>{' '}
             {d ? <span data-testid="headline-d">D: <DReading result={result} c={c} explanation={x.D} /></span> : null}
             {k ? <> · k°: <K0Reading result={result} c={c} explanation={x.k0} /></> : null}
             {sf?.coverageFromChargeMolPerCm2 != null ? <> · Γ = <Explained explanation={x.gamma}>{sci(sf.coverageFromChargeMolPerCm2)} mol/cm²</Explained></> : null}

@@ -8,6 +8,7 @@ import { halfwaveActions, useHalfwave, useHalfwaveShallow } from '../../state/re
 import { analysedCurrentOf } from '../../run/runInput';
 import type { OverlayNormalisation } from '../../state/types';
 import { safeName } from '../download';
+import { fixed } from '../format';
 import { buildOverlayFigure, type OverlayFile } from '../plots/overlayFigure';
 import { buildSeriesFigures } from '../plots/seriesFigures';
 import { CellSummary } from './CellSummary';
@@ -57,7 +58,7 @@ export function SeriesView() {
           <label>
             Couple{' '}
             <select value={coupleIndex} onChange={(e) => setCoupleIndex(Number(e.target.value))}>
-              {couples.map((c, k) => <option key={k} value={k}>{k + 1}{c.eHalfV !== null ? ` (E½ ${c.eHalfV.toFixed(3)} V)` : ''}</option>)}
+              {couples.map((c, k) => <option key={k} value={k}>{k + 1}{c.eHalfV !== null ? ` (E½ ${fixed(c.eHalfV, 3)} V)` : ''}</option>)}
             </select>
           </label>
         ) : null}
