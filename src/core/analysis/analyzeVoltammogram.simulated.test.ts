@@ -191,6 +191,17 @@ describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', 
     expect(Math.abs(forward.ipcA! / 13.007e-6 - 1)).toBeLessThan(0.02);
   });
 
+  // Nicholson, Anal. Chem. 38 (1966) 1406: the return peak is measured from the extended forward
+  // decay. At 2 V/s (k° = 1e-5 cm/s, α = 0.5) the return peak is small and 0.86 V from the forward
+  // one; it must still be its partner, measured that way (design check, no source for the ratio).
+  it('k° = 1e-5 cm/s at 2 V/s: the small, far return peak is paired and measured over the extended decay', () => {
+    const cycle = analyzeVoltammogram(simulatedVoltammogram({ ...base, k0CmPerS: 1e-5, switchV: -0.9, startV: 0.5, scanRateVPerS: 2 })).cycles[0]!;
+    expect(cycle.couples).toHaveLength(1);
+    const couple = cycle.couples[0]!;
+    expect(couple.deltaEpV!).toBeGreaterThan(0.8);
+    expect(cycle.peaks[couple.anodicPeak!]!.baseline.description).toMatch(/decay fitted/);
+  });
+
   // Nicholson & Shain 1964 (EC): a follow-up reaction consumes the product, so the return peak is
   // smaller; with k_f = 0.5 /s and a 4 s excursion past E½ the ratio falls well below 0.8.
   it('EC with k_f = 0.5 /s: ratio < 0.8 and verdict chemically-coupled', () => {

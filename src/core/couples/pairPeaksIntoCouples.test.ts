@@ -59,6 +59,13 @@ describe('pairPeaksIntoCouples with one dominant peak per direction', () => {
     expect(crossed).toContainEqual({ anodic: 1, cathodic: 1 });
     expect(crossed).not.toContainEqual({ anodic: 0, cathodic: 0 });
   });
+  // A direction's only peak counts as dominant from a third of the usual weight (0.1): a totally
+  // irreversible couple's return peak at a fast scan (ratio 0.2-0.4 by prominence); a smaller lone
+  // feature stays single beyond the narrow limit.
+  it('pairs a direction\'s only peak from weight 0.1 up to the wide limit', () => {
+    expect(pairPeaksIntoCouples([0.39], [-0.39], { anodicWeights: [0.15], cathodicWeights: [1] })).toEqual([{ anodic: 0, cathodic: 0 }]);
+    expect(pairPeaksIntoCouples([0.39], [-0.39], { anodicWeights: [0.05], cathodicWeights: [1] })).toHaveLength(2);
+  });
   it('keeps the narrow limit when a direction has two comparable peaks, and beyond 2·maxDeltaEpV', () => {
     expect(pairPeaksIntoCouples([0.35, 0.6], [-0.35], { anodicWeights: [1, 0.8] })).not.toContainEqual({ anodic: 0, cathodic: 0 });
     expect(pairPeaksIntoCouples([0.7], [-0.6])).toHaveLength(2);

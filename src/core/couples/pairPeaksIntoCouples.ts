@@ -3,8 +3,8 @@
  * matched without crossings (the k-th couple's peaks lie between those of the couples on either
  * side), by dynamic programming that minimises Σ|ΔEp| over pairs plus a penalty of
  * weight·`maxDeltaEpV` for each unpaired peak. A pair is allowed only when −`maxNegativeDeltaEpV` ≤ Epa − Epc ≤
- * `maxDeltaEpV`. When each direction has a single dominant peak (weight ≥ `dominantWeight`; every
- * other peak smaller), those two may pair up to `wideMaxDeltaEpV` apart: a totally irreversible
+ * `maxDeltaEpV`. When each direction has a single dominant peak (weight ≥ `dominantWeight`, every
+ * other peak smaller; a direction's only peak needs a third of that), those two may pair up to `wideMaxDeltaEpV` apart: a totally irreversible
  * couple routinely shows ΔEp of 0.5–1 V (e.g. k° = 1e-5 cm/s, α = 0.5 gives ≈ 0.7 V at 0.1 V/s,
  * Wang, Analytical Electrochemistry 2nd ed. (2000) eq. 2-5), while with several comparable peaks per
  * direction the narrow limit keeps separate couples apart. Those two dominant peaks, if the cost
@@ -103,8 +103,14 @@ function joinDominant(matched: Array<[number, number]>, da: number, dc: number):
   matched.splice(Math.min(ka, kc), 1, [da, dc]);
 }
 
-/** Position of the only peak whose weight reaches `threshold`, or −1 when there are none or several. */
+/**
+ * Position of the only peak whose weight reaches `threshold`, or −1 when there are none or several.
+ * A direction's only peak needs a third of it: a totally irreversible couple's return peak falls
+ * to 0.2-0.4 of the forward one at fast scans, and with nothing else in its direction it is the
+ * forward peak's only possible partner.
+ */
 function loneDominant(peaks: ReadonlyArray<{ w: number }>, threshold: number): number {
+  if (peaks.length === 1) return peaks[0]!.w >= threshold / 3 ? 0 : -1;
   const strong = peaks.flatMap((p, k) => (p.w >= threshold ? [k] : []));
   return strong.length === 1 ? strong[0]! : -1;
 }
