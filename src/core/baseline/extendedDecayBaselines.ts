@@ -12,7 +12,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { nicholsonReturnBaseline, type NicholsonReturnBaselineResult } from './nicholsonReturnBaseline';
 import { reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
-import { anchorAt, sampleBaseline } from './baselineCurve';
+import { anchorAt, formatMv, sampleBaseline } from './baselineCurve';
 import type { BaselineCurve } from './baselineTypes';
 import { thermalVoltageV } from '../constants';
 
@@ -80,14 +80,16 @@ export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev:
   return s * fit.cottrellCoefficientA > 0 ? fit : null;
 }
 
-/** Half-peak width of a reversible wave, 2.20·RT/nF (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21): the shape is used within ±10 % of it. */
+/** |Ep − Ep/2| of a reversible wave in units of RT/nF (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21). */
+const REVERSIBLE_HALF_WIDTH = 2.2;
+/** How far the earlier wave's half-peak width may stray from REVERSIBLE_HALF_WIDTH for its shape to be used (our margin). */
 const WIDTH_TOLERANCE = 0.1;
 
 /**
  * The previous wave's own current extended under this one, when that wave is reversible: its
  * height above its own baseline times the reversible shape (reversibleWaveShape.ts, Nicholson &
  * Shain 1964) placed by its Ep, over its own baseline. Unlike the fitted decay, this holds right
- * after the peak, so waves 150-250 mV apart are measured as well as lone ones. Used only when
+ * after the peak, so waves 200-300 mV apart are measured as well as lone ones. Used only when
  * the wave's half-peak width is reversible (±10 %) and, where the current between the waves is
  * seen alone, the shape follows it there (rms within max(4σ, 3 % of the height)); else null.
  */
@@ -104,17 +106,11 @@ export function reversibleTailOfPrevious(
   const base = prev.evaluate(p);
   if (base === null || prev.peak.segmentIndex !== peak.segmentIndex) return null;
   const height = s * (sig.locatingA[p]! - base);
-  if (!(height > 0)) return null;
+  const halfV = height > 0 ? risingHalfPeakPotential(sig, prev, height, seg.start) : null;
+  if (halfV === null) return null;
   const nfrt = wave.electronCount / thermalVoltageV(wave.temperatureK);
-  // The rising side's half-peak point.
-  let k = p;
-  while (k > seg.start && prev.evaluate(k - 1) !== null && s * (sig.locatingA[k - 1]! - prev.evaluate(k - 1)!) > height / 2) k--;
-  if (k <= seg.start || prev.evaluate(k - 1) === null) return null;
-  const above = (j: number) => s * (sig.locatingA[j]! - prev.evaluate(j)!);
-  const f = (height / 2 - above(k - 1)) / (above(k) - above(k - 1));
-  const halfV = sig.potentialV[k - 1]! + f * (sig.potentialV[k]! - sig.potentialV[k - 1]!);
-  const width = Math.abs(prev.peak.potentialV - halfV) * nfrt;
-  if (!(Math.abs(width / 2.2 - 1) <= WIDTH_TOLERANCE)) return null;
+  const widthV = Math.abs(prev.peak.potentialV - halfV);
+  if (!(Math.abs((widthV * nfrt) / REVERSIBLE_HALF_WIDTH - 1) <= WIDTH_TOLERANCE)) return null;
   const eHalf = prev.peak.potentialV + (s * reversiblePeakXi()) / nfrt;
   const xiAt = (j: number) => -s * nfrt * (sig.potentialV[j]! - eHalf);
   // Past the switch the wave's current goes on decaying in time as if the potential had stayed at
@@ -137,11 +133,27 @@ export function reversibleTailOfPrevious(
     const rms = Math.sqrt(sum / (w.end - w.start));
     if (!(rms <= Math.max(4 * sig.noiseA, 0.03 * height))) return null;
   }
-  if (evaluate(seg.end - 1) === null) return null;
+  if (evaluate(vertex) === null) return null;
   const curve = sampleBaseline(sig.potentialV, p, seg.end, (j) => evaluate(j)!, {
     method: 'nicholson',
     anchors: [anchorAt(sig, p)],
-    description: `the previous wave (Ep ${(prev.peak.potentialV * 1000).toFixed(1)} mV, reversible: |Ep − Ep/2| = ${(width / nfrt * 1000).toFixed(1)} mV) extended under this peak with the reversible wave's own shape (Nicholson & Shain 1964), over that wave's baseline`,
+    description: `the previous wave (Ep ${formatMv(prev.peak.potentialV)}, reversible: |Ep − Ep/2| = ${formatMv(widthV)}) extended under this peak with the reversible wave's own shape (Nicholson & Shain 1964), over that wave's baseline`,
   });
   return { curve, evaluate };
+}
+
+/** Ep/2 of a wave on its rising side, where its current above its own baseline is half of `height`; null when that baseline does not reach so far. */
+function risingHalfPeakPotential(sig: SweepSignals, wave: BaselineRef, height: number, sweepStart: number): number | null {
+  const s = sig.segments[wave.peak.segmentIndex]!.direction === 'positive' ? 1 : -1;
+  const above = (j: number) => {
+    const b = wave.evaluate(j);
+    return b === null ? null : s * (sig.locatingA[j]! - b);
+  };
+  let k = wave.peak.index;
+  while (k > sweepStart && (above(k - 1) ?? -Infinity) > height / 2) k--;
+  const lo = k > sweepStart ? above(k - 1) : null;
+  const hi = above(k);
+  if (lo === null || hi === null || hi === lo) return null;
+  const f = (height / 2 - lo) / (hi - lo);
+  return sig.potentialV[k - 1]! + f * (sig.potentialV[k]! - sig.potentialV[k - 1]!);
 }
