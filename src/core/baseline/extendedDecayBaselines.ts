@@ -90,8 +90,8 @@ const WIDTH_TOLERANCE = 0.1;
  * height above its own baseline times the reversible shape (reversibleWaveShape.ts, Nicholson &
  * Shain 1964) placed by its Ep, over its own baseline. Unlike the fitted decay, this holds right
  * after the peak, so waves 200-300 mV apart are measured as well as lone ones. Used only when
- * the wave's half-peak width is reversible (±10 %) and, where the current between the waves is
- * seen alone, the shape follows it there (rms within max(4σ, 3 % of the height)); else null.
+ * the wave's half-peak width is reversible (±10 %) and, between the waves, the shape nowhere
+ * stands above the data by more than max(4σ, 3 % of the height); else null.
  */
 export function reversibleTailOfPrevious(
   sig: SweepSignals,
@@ -126,12 +126,14 @@ export function reversibleTailOfPrevious(
     const later = nfrt * Math.abs(sig.potentialV[j]! - sig.potentialV[vertex]!);
     return under + s * height * reversibleWaveShape(xiV) * Math.sqrt(-xiV / (-xiV + later));
   };
+  // Between the waves the current is this shape plus, nearer this wave, its foot, which only adds
+  // current in the sweep's direction: the shape must nowhere stand above the data.
   const w = betweenWaves(sig, peak, prev, marginPoints);
-  if (w && w.end - w.start >= 5) {
-    let sum = 0;
-    for (let j = seg.start + w.start; j < seg.start + w.end; j++) sum += (sig.locatingA[j]! - (evaluate(j) ?? NaN)) ** 2;
-    const rms = Math.sqrt(sum / (w.end - w.start));
-    if (!(rms <= Math.max(4 * sig.noiseA, 0.03 * height))) return null;
+  if (w) {
+    const tolerance = Math.max(4 * sig.noiseA, 0.03 * height);
+    for (let j = seg.start + w.start; j < seg.start + w.end; j++) {
+      if (!(s * ((evaluate(j) ?? NaN) - sig.locatingA[j]!) <= tolerance)) return null;
+    }
   }
   if (evaluate(vertex) === null) return null;
   const curve = sampleBaseline(sig.potentialV, p, seg.end, (j) => evaluate(j)!, {
