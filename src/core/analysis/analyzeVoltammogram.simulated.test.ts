@@ -233,6 +233,21 @@ describe('analyzeVoltammogram on simulated slow, coupled and adsorbed couples', 
     expect(Math.abs(couple.ipcA! / 0.6638e-6 - 1)).toBeLessThan(0.02);
     expect(Math.abs(couple.cathodicChargeC! / 0.6822e-6 - 1)).toBeLessThan(0.03);
   });
+
+  // Two such layers 200 mV apart (currents add): the wave after the first sits on its tail, drawn
+  // with the layer's own shape 4e^ξ/(1 + e^ξ)² (the same sources), so every ip is 0.6638 µA ±2 %
+  // and each ΔEp below 2 mV (the fitted decay it replaces gave the later peaks 16 % low).
+  it('two Nernstian adsorbed layers 200 mV apart: each ip ±2 %, ΔEp < 2 mV', () => {
+    const layer = { ...base, mechanism: 'surface' as const, surfaceRatePerS: Infinity, switchV: -0.6 };
+    const couples = analyzeVoltammogram(simulatedVoltammogram(layer, { extra: [{ formalPotentialV: -0.2 }] })).cycles[0]!.couples;
+    expect(couples).toHaveLength(2);
+    for (const c of couples) {
+      expect(c.verdict.category).toBe('adsorbed');
+      expect(Math.abs(c.deltaEpV!)).toBeLessThan(0.002);
+      expect(Math.abs(c.ipcA! / 0.6638e-6 - 1)).toBeLessThan(0.02);
+      expect(Math.abs(c.ipaA! / 0.6638e-6 - 1)).toBeLessThan(0.02);
+    }
+  });
 });
 
 describe('polynomial baseline on a closed peak', () => {

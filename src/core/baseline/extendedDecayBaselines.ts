@@ -4,8 +4,8 @@
  * the switch (the forward decay continued past the switch, Nicholson, Anal. Chem. 38 (1966)
  * 1406, from memory), and a wave sitting on the tail of an earlier wave on the same sweep (the
  * same convention applied within one sweep; our extension). The fit itself is
- * nicholsonReturnBaseline.ts. Where the earlier wave is reversible, its own exact shape is
- * extended instead (reversibleTailOfPrevious).
+ * nicholsonReturnBaseline.ts. Where the earlier wave is reversible (a dissolved couple or an
+ * adsorbed layer), its own exact shape is extended instead (reversibleTailOfPrevious).
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
@@ -80,18 +80,41 @@ export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev:
   return s * fit.cottrellCoefficientA > 0 ? fit : null;
 }
 
-/** |Ep − Ep/2| of a reversible wave in units of RT/nF (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21). */
-const REVERSIBLE_HALF_WIDTH = 2.2;
-/** How far the earlier wave's half-peak width may stray from REVERSIBLE_HALF_WIDTH for its shape to be used (our margin). */
+/**
+ * The earlier-wave shapes this extension knows, each by its |Ep − Ep/2| in units of RT/nF: a
+ * reversible wave of a dissolved couple, 2.20 (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21), and a
+ * Nernstian adsorbed layer, 1.763, half its 90.6/n mV width at half height (Laviron, J.
+ * Electroanal. Chem. 52 (1974) 355; Bard & Faulkner eq. 14.3.9: i ∝ e^ξ/(1 + e^ξ)², ξ = nF(E − E°′)/RT).
+ */
+const SHAPES = [
+  {
+    halfWidth: 2.2,
+    words: "the reversible wave's own shape (Nicholson & Shain 1964)",
+    // Peak at ξ = −1.109 past E½; after the switch, Cottrell's 1/√t′ with t′ counted from E½ (σt′ = −ξ).
+    at: (xiFromPeak: number) => reversibleWaveShape(xiFromPeak + reversiblePeakXi()),
+    afterSwitch: (xiFromPeakAtVertex: number, later: number) => {
+      const xi = xiFromPeakAtVertex + reversiblePeakXi();
+      return -xi < 3 ? null : reversibleWaveShape(xi) * Math.sqrt(-xi / (-xi + later));
+    },
+  },
+  {
+    halfWidth: 1.763,
+    words: "a Nernstian adsorbed layer's shape, 4e^ξ/(1 + e^ξ)² (Laviron 1974)",
+    at: (xi: number) => 4 * Math.exp(xi) / (1 + Math.exp(xi)) ** 2,
+    // A converted layer carries no current while the potential stays past it.
+    afterSwitch: () => 0,
+  },
+] as const;
+/** How far the earlier wave's half-peak width may stray from a shape's for that shape to be used (our margin). */
 const WIDTH_TOLERANCE = 0.1;
 
 /**
- * The previous wave's own current extended under this one, when that wave is reversible: its
- * height above its own baseline times the reversible shape (reversibleWaveShape.ts, Nicholson &
- * Shain 1964) placed by its Ep, over its own baseline. Unlike the fitted decay, this holds right
- * after the peak, so waves 200-300 mV apart are measured as well as lone ones. Used only when
- * the wave's half-peak width is reversible (±10 %) and, between the waves, the shape nowhere
- * stands above the data by more than max(4σ, 3 % of the height); else null.
+ * The previous wave's own current extended under this one, when that wave has a known shape (a
+ * reversible wave of a dissolved couple, or a Nernstian adsorbed layer; SHAPES): its height above
+ * its own baseline times that shape placed by its Ep, over its own baseline. Unlike the fitted
+ * decay, this holds right after the peak, so waves 150-300 mV apart are measured as well as lone
+ * ones. Used only when the wave's half-peak width is a shape's (±10 %) and, between the waves, the
+ * shape nowhere stands above the data by more than max(4σ, 3 % of the height); else null.
  */
 export function reversibleTailOfPrevious(
   sig: SweepSignals,
@@ -110,21 +133,20 @@ export function reversibleTailOfPrevious(
   if (halfV === null) return null;
   const nfrt = wave.electronCount / thermalVoltageV(wave.temperatureK);
   const widthV = Math.abs(prev.peak.potentialV - halfV);
-  if (!(Math.abs((widthV * nfrt) / REVERSIBLE_HALF_WIDTH - 1) <= WIDTH_TOLERANCE)) return null;
-  const eHalf = prev.peak.potentialV + (s * reversiblePeakXi()) / nfrt;
-  const xiAt = (j: number) => -s * nfrt * (sig.potentialV[j]! - eHalf);
-  // Past the switch the wave's current goes on decaying in time as if the potential had stayed at
-  // the vertex (Nicholson's convention): Cottrell, ∝ 1/√t′ with t′ counted from E½ (σt′ = −ξ).
+  const shape = SHAPES.find((x) => Math.abs((widthV * nfrt) / x.halfWidth - 1) <= WIDTH_TOLERANCE);
+  if (!shape) return null;
+  // ξ from the peak, decreasing along the sweep.
+  const xiAt = (j: number) => -s * nfrt * (sig.potentialV[j]! - prev.peak.potentialV);
+  // Past the switch the wave goes on as if the potential had stayed at the vertex (Nicholson's convention).
   const vertex = seg.end - 1;
   const next = sig.segments[peak.segmentIndex + 1];
-  const xiV = xiAt(vertex);
   const evaluate = (j: number): number | null => {
     const under = prev.evaluate(j);
     if (under === null || j < p) return null;
-    if (j < seg.end) return under + s * height * reversibleWaveShape(xiAt(j));
-    if (!next || j >= next.end || -xiV < 3) return null;
-    const later = nfrt * Math.abs(sig.potentialV[j]! - sig.potentialV[vertex]!);
-    return under + s * height * reversibleWaveShape(xiV) * Math.sqrt(-xiV / (-xiV + later));
+    if (j < seg.end) return under + s * height * shape.at(xiAt(j));
+    if (!next || j >= next.end) return null;
+    const tail = shape.afterSwitch(xiAt(vertex), nfrt * Math.abs(sig.potentialV[j]! - sig.potentialV[vertex]!));
+    return tail === null ? null : under + s * height * tail;
   };
   // Between the waves the current is this shape plus, nearer this wave, its foot, which only adds
   // current in the sweep's direction: the shape must nowhere stand above the data.
@@ -139,7 +161,7 @@ export function reversibleTailOfPrevious(
   const curve = sampleBaseline(sig.potentialV, p, seg.end, (j) => evaluate(j)!, {
     method: 'nicholson',
     anchors: [anchorAt(sig, p)],
-    description: `the previous wave (Ep ${formatMv(prev.peak.potentialV)}, reversible: |Ep − Ep/2| = ${formatMv(widthV)}) extended under this peak with the reversible wave's own shape (Nicholson & Shain 1964), over that wave's baseline`,
+    description: `the previous wave (Ep ${formatMv(prev.peak.potentialV)}, |Ep − Ep/2| = ${formatMv(widthV)}) extended under this peak with ${shape.words}, over that wave's baseline`,
   });
   return { curve, evaluate };
 }
