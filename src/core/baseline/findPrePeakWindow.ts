@@ -9,7 +9,9 @@
  *   noise σ (same unit). Out: the fit window [start, end) in local indices, or null when fewer
  *   than 5 points lie before the peak. An optional margin then trims the window's end: the
  *   exponential foot of a wave carries a little faradaic current even below the threshold, and a
- *   margin of 2·RT/nF cuts that residue by a factor e² (our choice).
+ *   margin of 2·RT/nF cuts that residue by a factor e² (our choice). Where the noise sets the
+ *   threshold above 0.3 % of the height, the foot is found that many times higher up its
+ *   exponential rise, and the margin grows by ln(that factor)·RT/nF (at most half the window).
  */
 
 export interface PrePeakWindow {
@@ -22,8 +24,9 @@ export interface FindPrePeakWindowOptions {
   noise?: number;
   /** Foot threshold as a fraction of the peak height above the line. @default 0.003 */
   footFraction?: number;
-  /** Points dropped from the end of the window, so the rising foot stays out of the fit. At most
-   * 30 % of the window is dropped. @default 0 */
+  /** Points dropped from the end of the window, so the rising foot stays out of the fit: 2·RT/nF
+   * in points (more when the noise raises the threshold). At most 30 % of the window is dropped
+   * (50 % when the noise raised it). @default 0 */
   marginPoints?: number;
 }
 
@@ -45,17 +48,24 @@ export function findPrePeakWindow(y: ArrayLike<number>, regionStart: number, pea
   const fraction = options.footFraction ?? 0.003;
   const minEnd = regionStart + 4;
   let end = Math.max(minEnd, regionStart + Math.floor((peak - regionStart) / 2));
+  // How far above the 0.3 % level the noise put the foot (1 when it did not).
+  let raised = 1;
   for (let pass = 0; pass < 6; pass++) {
     const { slope, intercept } = fitLineLocal(y, regionStart, end);
     const line = (k: number) => intercept + slope * k;
-    const height = (y[peak] as number) - line(peak);
-    const threshold = Math.max(3 * noise, fraction * Math.abs(height));
+    const height = Math.abs((y[peak] as number) - line(peak));
+    const threshold = Math.max(3 * noise, fraction * height);
+    raised = height > 0 ? threshold / (fraction * height) : 1;
     let k = peak;
     while (k > regionStart && (y[k] as number) - line(k) > threshold) k--;
     const next = Math.max(minEnd, k + 1);
     if (next === end) break;
     end = next;
   }
-  const margin = Math.min(Math.max(0, Math.round(options.marginPoints ?? 0)), Math.floor(0.3 * (end - regionStart)));
+  // The foot rises as e^(nFE/RT): found at `raised` times the 0.3 % level, it lies ln(raised)·RT/nF
+  // past where that level is, so the margin (2·RT/nF) grows by as much (at most half the window).
+  const rtnf = Math.max(0, options.marginPoints ?? 0) / 2;
+  const wanted = Math.round(rtnf * (2 + Math.log(Math.max(1, raised))));
+  const margin = Math.min(wanted, Math.floor((raised > 1 ? 0.5 : 0.3) * (end - regionStart)));
   return { start: regionStart, end: Math.max(minEnd, end - margin) };
 }
