@@ -9,6 +9,7 @@
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
+import { crossing } from '../peaks/levelCrossing';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { nicholsonReturnBaseline, type NicholsonReturnBaselineResult } from './nicholsonReturnBaseline';
 import { reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
@@ -171,13 +172,7 @@ function risingHalfPeakPotential(sig: SweepSignals, wave: BaselineRef, height: n
   const s = sig.segments[wave.peak.segmentIndex]!.direction === 'positive' ? 1 : -1;
   const above = (j: number) => {
     const b = wave.evaluate(j);
-    return b === null ? null : s * (sig.locatingA[j]! - b);
+    return b === null ? NaN : s * (sig.locatingA[j]! - b);
   };
-  let k = wave.peak.index;
-  while (k > sweepStart && (above(k - 1) ?? -Infinity) > height / 2) k--;
-  const lo = k > sweepStart ? above(k - 1) : null;
-  const hi = above(k);
-  if (lo === null || hi === null || hi === lo) return null;
-  const f = (height / 2 - lo) / (hi - lo);
-  return sig.potentialV[k - 1]! + f * (sig.potentialV[k]! - sig.potentialV[k - 1]!);
+  return crossing(sig, above, wave.peak.index, sweepStart, -1, height / 2);
 }

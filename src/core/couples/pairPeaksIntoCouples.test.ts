@@ -49,7 +49,7 @@ describe('pairPeaksIntoCouples with one dominant peak per direction', () => {
     const withFeature = pairPeaksIntoCouples([0.35, 0.6], [-0.35], { anodicWeights: [1, 0.1], cathodicWeights: [1] });
     expect(withFeature).toContainEqual({ anodic: 0, cathodic: 0 });
   });
-  // Hand example of the cost balance: a return peak of weight 0.355 (an irreversible couple's at a
+  // Hand example of the cost balance (our pairing rule; common practice, no source): a return peak of weight 0.355 (an irreversible couple's at a
   // fast scan) 0.85 V from the forward peak. Left single, both cost 0.6 + 0.355·0.6 = 0.813, less
   // than the pair's 0.85; the two dominant peaks are joined all the same, as nothing competes.
   it('joins the two dominant peaks when the cost balance alone would leave both single', () => {
@@ -59,7 +59,7 @@ describe('pairPeaksIntoCouples with one dominant peak per direction', () => {
     expect(crossed).toContainEqual({ anodic: 1, cathodic: 1 });
     expect(crossed).not.toContainEqual({ anodic: 0, cathodic: 0 });
   });
-  // A direction's only peak counts as dominant from a third of the usual weight (0.1): a totally
+  // Our rule (common practice, no source): a direction's only peak counts as dominant from a third of the usual weight (0.1): a totally
   // irreversible couple's return peak at a fast scan (ratio 0.2-0.4 by prominence); a smaller lone
   // feature stays single beyond the narrow limit.
   it('pairs a direction\'s only peak from weight 0.1 up to the wide limit', () => {

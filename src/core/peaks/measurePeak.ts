@@ -21,6 +21,7 @@ import { baselineAt } from '../baseline/baselineCurve';
 import type { PeakCandidate } from './locatePeaksInSweep';
 import type { SweepSignals } from './sweepSignals';
 import { refinePeakQuadratic } from './refinePeakQuadratic';
+import { crossing } from './levelCrossing';
 
 export function measurePeak(
   sig: SweepSignals,
@@ -114,20 +115,6 @@ function baselineAtPotential(sig: SweepSignals, baseline: BaselineCurve, peak: P
     if (t >= 0 && t <= 1) return here + t * (other - here);
   }
   return here;
-}
-
-/** Potential where corrected(k) first falls to `level`, walking from `from` towards `limit`. */
-function crossing(sig: SweepSignals, corrected: (k: number) => number, from: number, limit: number, dir: 1 | -1, level: number): number | null {
-  for (let k = from; dir > 0 ? k < limit : k > limit; k += dir) {
-    const a = corrected(k);
-    const b = corrected(k + dir);
-    if (a >= level && b < level) {
-      const e0 = sig.potentialV[k]!;
-      const e1 = sig.potentialV[k + dir]!;
-      return e0 + ((a - level) / (a - b)) * (e1 - e0);
-    }
-  }
-  return null;
 }
 
 /** Corrected current tailOffsetV past Ep over ip; null when the sweep or baseline ends before. */
