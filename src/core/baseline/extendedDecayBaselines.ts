@@ -12,7 +12,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { crossing } from '../peaks/levelCrossing';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { nicholsonReturnBaseline, type NicholsonReturnBaselineResult } from './nicholsonReturnBaseline';
-import { reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
+import { REVERSIBLE_HALF_WIDTH, SHAPE_WIDTH_TOLERANCE, reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
 import { anchorAt, formatMv, sampleBaseline } from './baselineCurve';
 import type { BaselineCurve } from './baselineTypes';
 import { thermalVoltageV } from '../constants';
@@ -89,7 +89,7 @@ export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev:
  */
 const SHAPES = [
   {
-    halfWidth: 2.2,
+    halfWidth: REVERSIBLE_HALF_WIDTH,
     words: "the reversible wave's own shape (Nicholson & Shain 1964)",
     // Peak at ξ = −1.109 past E½; after the switch, Cottrell's 1/√t′ with t′ counted from E½ (σt′ = −ξ).
     at: (xiFromPeak: number) => reversibleWaveShape(xiFromPeak + reversiblePeakXi()),
@@ -106,8 +106,6 @@ const SHAPES = [
     afterSwitch: () => 0,
   },
 ] as const;
-/** How far the earlier wave's half-peak width may stray from a shape's for that shape to be used (our margin). */
-const WIDTH_TOLERANCE = 0.1;
 
 /**
  * The previous wave's own current extended under this one, when that wave has a known shape (a
@@ -134,7 +132,7 @@ export function reversibleTailOfPrevious(
   if (halfV === null) return null;
   const nfrt = wave.electronCount / thermalVoltageV(wave.temperatureK);
   const widthV = Math.abs(prev.peak.potentialV - halfV);
-  const shape = SHAPES.find((x) => Math.abs((widthV * nfrt) / x.halfWidth - 1) <= WIDTH_TOLERANCE);
+  const shape = SHAPES.find((x) => Math.abs((widthV * nfrt) / x.halfWidth - 1) <= SHAPE_WIDTH_TOLERANCE);
   if (!shape) return null;
   // ξ from the peak, decreasing along the sweep.
   const xiAt = (j: number) => -s * nfrt * (sig.potentialV[j]! - prev.peak.potentialV);

@@ -23,6 +23,8 @@ export interface LinearPrePeakBaselineInput extends BaselineTrace {
 export interface LinearPrePeakBaselineOptions {
   /** Fit the line against potential or against point index (time-like). @default 'potential' */
   abscissa?: 'potential' | 'index';
+  /** What was taken out of the window's current before the fit, for the description (e.g. a wave's foot). */
+  less?: string;
 }
 
 export interface LinearBaselineResult {
@@ -56,7 +58,7 @@ export function linearPrePeakBaseline(
   const curve = sampleBaseline(input.potentialV, input.spanStart, input.spanEnd, lineAt, {
     method: 'linear',
     anchors: [anchorAt(input, input.fitStart), anchorAt(input, input.fitEnd - 1)],
-    description: `least-squares line through ${input.fitEnd - input.fitStart} points from ${formatMv(a)} to ${formatMv(b)}, extrapolated under the peak`,
+    description: `least-squares line through ${input.fitEnd - input.fitStart} points from ${formatMv(a)} to ${formatMv(b)}, ${options.less ? `less ${options.less}, ` : ''}extrapolated under the peak`,
   });
   return { curve, slopeAPerV: byIndex ? NaN : slope, interceptA: byIndex ? NaN : intercept };
 }

@@ -1,0 +1,75 @@
+/**
+ * The pre-peak line of a reversible wave, fitted with the wave's own foot taken out.
+ *
+ * A diffusion wave starts long before its peak: its foot rises as e^(−ξ), and Nicholson & Shain's
+ * integral equation (Anal. Chem. 36 (1964) 706, eq. 24) gives √π·χ = e^(−ξ) there, i.e.
+ * i/ip = e^(−ξ)/0.4463 (ξ = nF(E − E½)/RT along a reduction sweep): 0.1 % of the peak 200 mV
+ * before E½ (n = 1, 25 °C), 1 % at 140 mV. A straight line fitted through that convex rise and
+ * extrapolated under the peak leans towards it, and a sweep that starts 200 mV before E½ then reads
+ * ip 3 % low (150 mV: 10 %). Here the foot, the wave's height times its reversible shape placed by
+ * its Ep (reversibleWaveShape.ts), is subtracted from the window before the line is fitted, and the
+ * height is measured again over the new line (four passes).
+ *
+ * Only for a wave whose |Ep − Ep/2| reads reversible (2.20 RT/nF ± 10 %). A quasi-reversible or
+ * resistance-broadened wave that still passes lies further out than its E½: the foot placed from
+ * its Ep is then smaller than the real one, so the correction falls short but never overshoots.
+ * Null when the wave does not read reversible (the plain line is then used).
+ */
+import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
+import type { SweepSignals } from '../peaks/sweepSignals';
+import { crossing } from '../peaks/levelCrossing';
+import { thermalVoltageV } from '../constants';
+import type { BaselineCurve } from './baselineTypes';
+import { linearPrePeakBaseline } from './linearPrePeakBaseline';
+import { readsReversible, reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
+
+const PASSES = 4;
+/** How far past Ep the tail is read (in RT/nF), and the least it may have kept of the height there. */
+const TAIL_AT = 3;
+const TAIL_KEPT = 0.5;
+
+export function lineUnderReversibleFoot(
+  sig: SweepSignals,
+  peak: PeakCandidate,
+  window: [number, number],
+  wave: { temperatureK: number; electronCount: number },
+): BaselineCurve | null {
+  const seg = sig.segments[peak.segmentIndex]!;
+  const s = seg.direction === 'positive' ? 1 : -1;
+  const nfrt = wave.electronCount / thermalVoltageV(wave.temperatureK);
+  const [fitStart, fitEnd] = window;
+  const spanStart = Math.min(fitStart, peak.index);
+  // ξ of the wave at point j, counted from its peak and decreasing along the sweep.
+  const xiFromPeak = (j: number) => -s * nfrt * (sig.potentialV[j]! - peak.potentialV);
+  const footless = Float64Array.from(sig.currentA);
+  let fit = linearPrePeakBaseline({ ...sig, fitStart, fitEnd, spanStart, spanEnd: seg.end });
+  for (let pass = 0; pass < PASSES; pass++) {
+    const line = fit.curve;
+    const under = (j: number) => line.currentA[j - line.startIndex]!;
+    const height = s * (sig.locatingA[peak.index]! - under(peak.index));
+    if (!(height > 0)) return null;
+    const halfV = crossing(sig, (j) => s * (sig.locatingA[j]! - under(j)), peak.index, spanStart, -1, height / 2);
+    if (halfV === null || !readsReversible(Math.abs(peak.potentialV - halfV) * nfrt)) return null;
+    if (pass === 0 && !diffusing(sig, peak, under, height, nfrt, s)) return null;
+    for (let j = fitStart; j < fitEnd; j++) {
+      footless[j] = sig.currentA[j]! - s * height * reversibleWaveShape(xiFromPeak(j) + reversiblePeakXi());
+    }
+    fit = linearPrePeakBaseline({ potentialV: sig.potentialV, currentA: footless, fitStart, fitEnd, spanStart, spanEnd: seg.end }, { less: "the wave's own reversible foot (Nicholson & Shain 1964)" });
+  }
+  // The anchors mark the window on the data as recorded.
+  return { ...fit.curve, anchors: fit.curve.anchors.map((a) => ({ ...a, currentA: sig.currentA[a.index!]! })) };
+}
+
+/**
+ * A dissolved species' wave keeps 0.68 of its height 3 RT/nF past Ep (reversibleWaveShape.ts); an
+ * adsorbed layer's has fallen to 0.18 (Nernstian) and, broadened by slow kinetics to the same
+ * half-peak width, still well below half. False also when the sweep ends before that point.
+ */
+function diffusing(sig: SweepSignals, peak: PeakCandidate, under: (j: number) => number, height: number, nfrt: number, s: 1 | -1): boolean {
+  const seg = sig.segments[peak.segmentIndex]!;
+  for (let j = peak.index; j < seg.end; j++) {
+    if (s * (sig.potentialV[j]! - peak.potentialV) * nfrt < TAIL_AT) continue;
+    return s * (sig.locatingA[j]! - under(j)) >= TAIL_KEPT * height;
+  }
+  return false;
+}
