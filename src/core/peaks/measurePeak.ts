@@ -20,7 +20,7 @@ import type { PeakResult } from './peakTypes';
 import { baselineAt } from '../baseline/baselineCurve';
 import type { PeakCandidate } from './locatePeaksInSweep';
 import type { SweepSignals } from './sweepSignals';
-import { refinePeakQuadratic } from './refinePeakQuadratic';
+import { reachOf, refinePeakDeskewed, refinePeakQuadratic } from './refinePeakQuadratic';
 import { crossing } from './levelCrossing';
 
 export function measurePeak(
@@ -71,7 +71,8 @@ export function measurePeak(
  * Ep measured on the current minus its background (a sloping charging current would otherwise
  * pull the raw extremum sideways): the same parabola fit as in locatePeaksInSweep, on raw − background.
  * An extended decay is not part of the background, so a return peak keeps the extremum of the
- * total faradaic current that the published ΔEp tables refer to. Falls back to the located peak.
+ * total faradaic current that the published ΔEp tables refer to. The parabola is fitted with the
+ * peak's skew taken off (refinePeakDeskewed). Falls back to the located peak.
  */
 function relocateAboveBackground(sig: SweepSignals, peak: PeakCandidate, background: (k: number) => number | null, s: 1 | -1): PeakCandidate {
   const seg = sig.segments[peak.segmentIndex]!;
@@ -89,10 +90,24 @@ function relocateAboveBackground(sig: SweepSignals, peak: PeakCandidate, backgro
   const e = sig.potentialV.subarray(a, b + 1);
   const c = Float64Array.from(e, (_, j) => sig.currentA[a + j]! - (background(a + j) ?? NaN));
   if (!c.every(Number.isFinite) || c.length < 3) return peak;
-  const v = refinePeakQuadratic({ potentialV: e, currentA: c, from: 0, to: c.length }, { orientation: s });
-  if (!v) return peak;
+  const plain = refinePeakQuadratic({ potentialV: e, currentA: c, from: 0, to: c.length }, { orientation: s });
+  if (!plain) return peak;
+  const v = refinePeakDeskewed({ potentialV: e, currentA: c }, pointsNear(sig, seg, plain.potentialV, 2 * reachOf(e, plain.potentialV), background), plain, { orientation: s }) ?? plain;
   const near = a + nearestIndex(e, v.potentialV);
   return { ...peak, index: near, potentialV: v.potentialV, currentA: v.currentA + (background(near) ?? 0) };
+}
+
+/** The sweep's points within `reachV` of a potential, as current minus background. */
+function pointsNear(sig: SweepSignals, seg: { start: number; end: number }, potentialV: number, reachV: number, background: (k: number) => number | null): { potentialV: number[]; currentA: number[] } {
+  const out: { potentialV: number[]; currentA: number[] } = { potentialV: [], currentA: [] };
+  for (let k = seg.start; k < seg.end; k++) {
+    const e = sig.potentialV[k]!;
+    const c = sig.currentA[k]! - (background(k) ?? NaN);
+    if (Math.abs(e - potentialV) > reachV || !Number.isFinite(c)) continue;
+    out.potentialV.push(e);
+    out.currentA.push(c);
+  }
+  return out;
 }
 
 function nearestIndex(e: Float64Array, potentialV: number): number {

@@ -25,7 +25,8 @@ export interface PeakResult {
   /**
    * Peak potential Ep (V): vertex of a local parabola fitted to the raw points minus their
    * background (charging/leakage line; an extended decay of an earlier wave is not removed, so a
-   * return peak's Ep is the extremum the published ΔEp tables refer to).
+   * return peak's Ep is the extremum the published ΔEp tables refer to), with the peak's skew
+   * (a cubic term) taken off first (refinePeakQuadratic.ts, refinePeakDeskewed).
    */
   potentialV: number;
   /** Baseline-corrected peak current, positive magnitude (A). */
