@@ -13,7 +13,7 @@
  *     otherwise D cannot be separated from k_f and only its range is given.
  */
 import { STANDARD_TEMPERATURE_K, inverseThermalVoltagePerV } from '../constants';
-import { TABLE_RANGE_MV, followUpCurrentFunction, kineticPeakCurrentRatio, nicholsonPsiAtAlpha } from '../kinetics';
+import { NICHOLSON_SWITCH_PAST_V, TABLE_RANGE_MV, followUpCurrentFunction, kineticPeakCurrentRatio, nicholsonPsiAtAlpha } from '../kinetics';
 import type { FitLineResult } from '../regression';
 import { RANDLES_SEVCIK_REVERSIBLE, randlesSevcikDiffusion, type RandlesSevcikOptions } from '../series';
 import type { PeakDirection } from '../peaks/peakTypes';
@@ -51,9 +51,9 @@ function dOf(fit: FitLineResult, cell: Cell, rs: RandlesSevcikOptions): Diffusio
 
 const statsOf = (x: DiffusionOfFit | null) => ({ slopeRelativeStdError: x?.rel ?? null, slopeDegreesOfFreedom: x?.dof ?? 0 });
 
-/** |Eλ − E½| of a file (V), 0.3 V when either is unknown. */
+/** |Eλ − E½| of a file (V); when either is unknown, that of Nicholson's table (112.5 mV), so the table is used as it stands. */
 export function switchPastHalfWave(p: SeriesPoint): number {
-  return p.switchPotentialV != null && p.eHalfV !== null ? Math.abs(p.switchPotentialV - p.eHalfV) : 0.3;
+  return p.switchPotentialV != null && p.eHalfV !== null ? Math.abs(p.switchPotentialV - p.eHalfV) : NICHOLSON_SWITCH_PAST_V;
 }
 
 /** Forward |ip| with each file divided by `factor` (files where it is null are left out), fitted against v^½. */

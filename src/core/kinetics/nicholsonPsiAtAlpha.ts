@@ -1,18 +1,21 @@
 /**
- * Nicholson's ψ from ΔEp when the transfer coefficient is not 0.5.
+ * Nicholson's ψ from ΔEp for any transfer coefficient and switching potential.
  * In: deltaEpV (Epa − Epc, V), the forward wave's transfer coefficient (αc for a reduction first,
  *   1 − αc for an oxidation first), |Eλ − E½| (V), n, T, the ψ method for α = 0.5.
  * Out: ψ (pure number), the α = 0.5 value it scales, and the factor.
  * Source: R. S. Nicholson, Anal. Chem. 37, 1351 (1965): ψ = γ^α·k°/(π D_O nFv/RT)^½ holds for any
- *   α, but his ΔEp–ψ table was computed for α = 0.5; he notes ΔEp depends little on α between 0.3
- *   and 0.7 near the reversible end. Further out it does: with αc = 0.3 a ΔEp of 214 mV means
- *   ψ ≈ 0.14, not 0.1 (measured here with the simulator).
- * Method (ours): ψ(ΔEp, α) = ψ_table(ΔEp) · ψ_sim(ΔEp, α)/ψ_sim(ΔEp, 0.5), where ψ_sim are working
- *   curves from this project's simulator (src/core/simulation, tied to Nicholson's table within
- *   2 mV) computed with the same switching distance (rounded to 0.1 V, at least 0.2 V), so that
- *   the switching potential's own effect cancels in the ratio and the table stays the reference.
- *   A mirror image makes an oxidation first with αc the same problem as a reduction first with
- *   1 − αc, so every curve is simulated as a reduction first. Curves are cached per (α, switch).
+ *   α, but his ΔEp–ψ table was computed for α = 0.5 with the switch 112.5/n mV past E½. He notes
+ *   ΔEp depends little on α between 0.3 and 0.7 near the reversible end. Further out it does: with
+ *   αc = 0.3 a ΔEp of 214 mV means ψ ≈ 0.14, not 0.1 (measured here with the simulator). The switch
+ *   matters near the reversible end: 500 mV past E½, ΔEp is 2.2 mV narrower at ψ = 4 and 1.9 mV at
+ *   ψ = 2 than in the table, so the table alone would read ψ 30-40 % high there (simulated, and on an
+ *   independent semi-integral simulation alike).
+ * Method (ours): ψ(ΔEp, α, Eλ) = ψ_table(ΔEp) · ψ_sim(ΔEp; α, Eλ)/ψ_sim(ΔEp; 0.5, 112.5 mV), where
+ *   ψ_sim are working curves from this project's simulator (src/core/simulation, tied to
+ *   Nicholson's table within 2 mV) at the couple's α and switching distance (rounded to 50 mV,
+ *   0.1–0.8 V) and at the table's own, so the table stays the reference and only the difference is
+ *   simulated. A mirror image makes an oxidation first with αc the same problem as a reduction first
+ *   with 1 − αc, so every curve is simulated as a reduction first. Curves are cached per (α, switch).
  */
 import { assertFiniteInRange } from '../errors';
 import { STANDARD_TEMPERATURE_K, inverseThermalVoltagePerV } from '../constants';
@@ -23,7 +26,7 @@ import { nicholsonPsi, type NicholsonPsiMethod } from './nicholsonPsi';
 export interface NicholsonPsiAtAlphaOptions {
   /** Transfer coefficient of the forward wave. @default 0.5 */
   forwardAlpha?: number;
-  /** |Eλ − E½| (V). @default 0.3 */
+  /** |Eλ − E½| (V). @default 0.1125 (the table's own: the table is used as it stands) */
   switchPastHalfWaveV?: number;
   /** @default 1 */
   electronCount?: number;
@@ -41,12 +44,15 @@ export interface NicholsonPsiAtAlphaResult {
   factor: number;
 }
 
+/** |Eλ − E½| of Nicholson's table (n = 1), V. */
+export const NICHOLSON_SWITCH_PAST_V = 0.1125;
+
 const PSI_GRID = [20, 10, 7, 5, 3, 2, 1.5, 1, 0.75, 0.5, 0.35, 0.25, 0.175, 0.1, 0.07];
 const curves = new Map<string, { deltaEpMv: number[]; lnPsi: number[] }>();
 
 /** ΔEp (mV, n = 1, 25 °C) of a simulated reduction-first cycle at each ψ of the grid. */
 function workingCurve(alpha: number, switchPastV: number): { deltaEpMv: number[]; lnPsi: number[] } {
-  const key = `${alpha.toFixed(3)}|${switchPastV.toFixed(1)}`;
+  const key = `${alpha.toFixed(3)}|${switchPastV.toFixed(4)}`;
   const hit = curves.get(key);
   if (hit) return hit;
   const f = inverseThermalVoltagePerV(STANDARD_TEMPERATURE_K);
@@ -80,11 +86,13 @@ export function nicholsonPsiAtAlpha(deltaEpV: number, options: NicholsonPsiAtAlp
   const temperatureK = options.temperatureK ?? STANDARD_TEMPERATURE_K;
   assertFiniteInRange('forwardAlpha', alpha, 0.05, 0.95);
   const half = nicholsonPsi(deltaEpV, { electronCount: n, temperatureK, method: options.method ?? 'table' });
-  if (Math.abs(alpha - 0.5) < 1e-9) return { psi: half.psi, psiAtHalf: half.psi, factor: 1 };
-  const past = (options.switchPastHalfWaveV ?? 0.3) * n * (STANDARD_TEMPERATURE_K / temperatureK);
+  const past = (options.switchPastHalfWaveV ?? NICHOLSON_SWITCH_PAST_V) * n * (STANDARD_TEMPERATURE_K / temperatureK);
   assertFiniteInRange('switchPastHalfWaveV', past, 0);
-  const switchPastV = Math.min(0.8, Math.max(0.2, Math.round(past * 10) / 10));
+  // Within 25 mV of the table's switch the difference is below 0.3 mV of ΔEp.
+  const asTable = Math.abs(past - NICHOLSON_SWITCH_PAST_V) < 0.025;
+  if (Math.abs(alpha - 0.5) < 1e-9 && asTable) return { psi: half.psi, psiAtHalf: half.psi, factor: 1 };
+  const switchPastV = asTable ? NICHOLSON_SWITCH_PAST_V : Math.min(0.8, Math.max(0.1, Math.round(past * 20) / 20));
   const x = half.nDeltaEpMv25;
-  const factor = Math.exp(lnPsiAt(workingCurve(alpha, switchPastV), x) - lnPsiAt(workingCurve(0.5, switchPastV), x));
+  const factor = Math.exp(lnPsiAt(workingCurve(alpha, switchPastV), x) - lnPsiAt(workingCurve(0.5, NICHOLSON_SWITCH_PAST_V), x));
   return { psi: half.psi * factor, psiAtHalf: half.psi, factor };
 }
