@@ -83,7 +83,7 @@ export async function runScaleBench(): Promise<BenchRow[]> {
   const perPointOneUs = (oneCycle.analyseMs * 1000) / oneCycle.points;
 
   return [
-    { name: `${SMALL_FILES} files × 1,201 rows: import + analyse`, value: batchMs, unit: 'ms', note: 'one thread; the app spreads this over two workers' },
+    { name: `${SMALL_FILES} files × 1,201 rows: import + analyse`, value: batchMs, unit: 'ms', note: 'one thread; the app runs one worker per spare core, at most two (one on a two-core machine)' },
     { name: 'per file', value: batchMs / SMALL_FILES, unit: 'ms', note: `of which analysis ${(analyseMs / SMALL_FILES).toFixed(1)} ms` },
     { name: `${(big.points).toLocaleString('en')} rows (10 cycles): import`, value: big.importMs, unit: 'ms', note: `${(text.length / 1e6).toFixed(1)} MB CSV, SHA-256 included` },
     { name: `${(big.points).toLocaleString('en')} rows (10 cycles): analyse`, value: big.analyseMs, unit: 'ms' },
