@@ -17,7 +17,7 @@ export function PeaksTable() {
   if (rows.length === 0) return <p className="empty">No peaks.</p>;
   const cur = chooseCurrentScale(Math.max(...rows.map(({ p }) => p.heightA)));
   return (
-    <table className="data" data-testid="peaks-table">
+    <table className="data peaks" data-testid="peaks-table">
       <thead>
         <tr>
           <th scope="col">Cycle</th><th scope="col">Kind</th><th scope="col">Ep / V vs {scale.name}</th><th scope="col">ip / {cur.unit}{file?.measurement?.currentKind === 'density' ? ' cm⁻²' : ''}</th>
