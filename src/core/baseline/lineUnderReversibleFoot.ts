@@ -12,7 +12,9 @@
  *
  * Only for a wave whose |Ep − Ep/2| reads reversible (2.20 RT/nF ± 10 %). A quasi-reversible or
  * resistance-broadened wave that still passes lies further out than its E½: the foot placed from
- * its Ep is then smaller than the real one, so the correction falls short but never overshoots.
+ * its Ep is then smaller than the real one, so the correction falls short. The shape starts far
+ * before the wave; a sweep that starts only 150 mV before E½ (with the solution at rest) has its own
+ * start-up current as well, and ip reads 1 % high there.
  * Null when the wave does not read reversible (the plain line is then used).
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
@@ -41,8 +43,8 @@ export function lineUnderReversibleFoot(
   const spanStart = Math.min(fitStart, peak.index);
   // ξ of the wave at point j, counted from its peak and decreasing along the sweep.
   const xiFromPeak = (j: number) => -s * nfrt * (sig.potentialV[j]! - peak.potentialV);
-  const footless = Float64Array.from(sig.currentA);
-  let fit = linearPrePeakBaseline({ ...sig, fitStart, fitEnd, spanStart, spanEnd: seg.end });
+  const span = { potentialV: sig.potentialV, currentA: sig.currentA, fitStart, fitEnd, spanStart, spanEnd: seg.end };
+  let fit = linearPrePeakBaseline(span);
   for (let pass = 0; pass < PASSES; pass++) {
     const line = fit.curve;
     const under = (j: number) => line.currentA[j - line.startIndex]!;
@@ -51,13 +53,10 @@ export function lineUnderReversibleFoot(
     const halfV = crossing(sig, (j) => s * (sig.locatingA[j]! - under(j)), peak.index, spanStart, -1, height / 2);
     if (halfV === null || !readsReversible(Math.abs(peak.potentialV - halfV) * nfrt)) return null;
     if (pass === 0 && !diffusing(sig, peak, under, height, nfrt, s)) return null;
-    for (let j = fitStart; j < fitEnd; j++) {
-      footless[j] = sig.currentA[j]! - s * height * reversibleWaveShape(xiFromPeak(j) + reversiblePeakXi());
-    }
-    fit = linearPrePeakBaseline({ potentialV: sig.potentialV, currentA: footless, fitStart, fitEnd, spanStart, spanEnd: seg.end }, { less: "the wave's own reversible foot (Nicholson & Shain 1964)" });
+    const foot = (j: number) => s * height * reversibleWaveShape(xiFromPeak(j) + reversiblePeakXi());
+    fit = linearPrePeakBaseline(span, { less: { what: "the wave's own reversible foot (Nicholson & Shain 1964)", currentA: foot } });
   }
-  // The anchors mark the window on the data as recorded.
-  return { ...fit.curve, anchors: fit.curve.anchors.map((a) => ({ ...a, currentA: sig.currentA[a.index!]! })) };
+  return fit.curve;
 }
 
 /**

@@ -23,8 +23,8 @@ export interface LinearPrePeakBaselineInput extends BaselineTrace {
 export interface LinearPrePeakBaselineOptions {
   /** Fit the line against potential or against point index (time-like). @default 'potential' */
   abscissa?: 'potential' | 'index';
-  /** What was taken out of the window's current before the fit, for the description (e.g. a wave's foot). */
-  less?: string;
+  /** A current taken out of the window's points before the fit (e.g. a wave's own foot), and what it is, for the description. */
+  less?: { what: string; currentA: (index: number) => number };
 }
 
 export interface LinearBaselineResult {
@@ -47,7 +47,7 @@ export function linearPrePeakBaseline(
   const y: number[] = [];
   for (let k = input.fitStart; k < input.fitEnd; k++) {
     x.push(byIndex ? k : (input.potentialV[k] as number));
-    y.push(input.currentA[k] as number);
+    y.push((input.currentA[k] as number) - (options.less?.currentA(k) ?? 0));
   }
   const fit = new SimpleLinearRegression(x, y);
   const slope = Number.isFinite(fit.slope) ? fit.slope : 0;
@@ -58,7 +58,7 @@ export function linearPrePeakBaseline(
   const curve = sampleBaseline(input.potentialV, input.spanStart, input.spanEnd, lineAt, {
     method: 'linear',
     anchors: [anchorAt(input, input.fitStart), anchorAt(input, input.fitEnd - 1)],
-    description: `least-squares line through ${input.fitEnd - input.fitStart} points from ${formatMv(a)} to ${formatMv(b)}, ${options.less ? `less ${options.less}, ` : ''}extrapolated under the peak`,
+    description: `least-squares line through ${input.fitEnd - input.fitStart} points from ${formatMv(a)} to ${formatMv(b)}, ${options.less ? `less ${options.less.what}, ` : ''}extrapolated under the peak`,
   });
   return { curve, slopeAPerV: byIndex ? NaN : slope, interceptA: byIndex ? NaN : intercept };
 }
