@@ -12,6 +12,20 @@ const opts = { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 };
 const rev = (s: number) => randlesSevcikPeakCurrent({ ...cell, diffusionCm2PerS: 7.6e-6, scanRateVPerS: s });
 
 describe('analyzeSeries', () => {
+  // E½ = (Epa + Epc)/2 needs both peaks (Bard & Faulkner 2nd ed. §6.2, from memory); a file whose
+  // return peak left the window keeps its place in the couple but says nothing about E½.
+  it("takes the couple's E½ from the files with both peaks, not from a lone peak's Ep", () => {
+    const files = [
+      { fileName: 'a.csv', scanRateVPerS: 0.1, analysis: fakeAnalysis([{ epaV: 0.23, epcV: 0.17, ipaA: rev(0.1), ipcA: rev(0.1) }]) },
+      { fileName: 'b.csv', scanRateVPerS: 0.2, analysis: fakeAnalysis([{ epaV: null, epcV: 0.16, ipaA: null, ipcA: rev(0.2) }]) },
+      { fileName: 'c.csv', scanRateVPerS: 0.4, analysis: fakeAnalysis([{ epaV: null, epcV: 0.15, ipaA: null, ipcA: rev(0.4) }]) },
+    ];
+    const r = analyzeSeries(files, opts);
+    expect(r.couples).toHaveLength(1);
+    expect(r.couples[0]?.points).toHaveLength(3);
+    expect(r.couples[0]?.eHalfV).toBeCloseTo(0.2, 10);
+  });
+
   // Randles–Ševčík (Bard & Faulkner 2nd ed. §6.2): five reversible points → D = 7.600e-6 cm²/s,
   // log–log slope 0.500, intercept 0; a second couple is matched separately by E½.
   it('recovers D and the log–log slope of a reversible couple, and keeps two couples apart', () => {

@@ -26,4 +26,20 @@ describe('matchSeriesCouples (design: nearest group, tracked from slow to fast)'
     expect(groups[0]?.map((r) => r.fileIndex)).toEqual([1, 0]);
     expect(groups[1]).toHaveLength(1);
   });
+
+  // A slow film (Laviron): E½ stays near 0.2 V while Epc runs out to 0.03 V at 20 V/s; at 50 V/s the
+  // anodic peak has left the window and the cathodic one, at −0.006 V, stands alone. It follows the
+  // cathodic peaks' trend, 34 mV on, not the E½ 210 mV away.
+  it('puts a lone peak with the group whose latest peak of the same direction is nearest', () => {
+    const pair = (epa: number, epc: number) => fakeAnalysis([{ epaV: epa, epcV: epc, ipaA: 1e-6, ipcA: 1e-6 }]).cycles[0]?.couples ?? [];
+    const lone = fakeAnalysis([{ epaV: null, epcV: -0.006, ipaA: null, ipcA: 1e-6 }]).cycles[0]?.couples ?? [];
+    const files = [
+      { scanRateVPerS: 10, couples: pair(0.47, 0.053) },
+      { scanRateVPerS: 20, couples: pair(0.529, 0.028) },
+      { scanRateVPerS: 50, couples: lone },
+    ];
+    const groups = matchSeriesCouples(files, 0.1);
+    expect(groups).toHaveLength(1);
+    expect(groups[0]?.map((r) => r.fileIndex)).toEqual([0, 1, 2]);
+  });
 });

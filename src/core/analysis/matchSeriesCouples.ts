@@ -5,7 +5,10 @@
  * Method (design, common practice, no source): files are visited from the slowest scan rate up;
  *   each couple joins the group whose latest position is nearest, within `toleranceV`, so that a
  *   couple whose peaks drift with scan rate (slow kinetics) is still followed; otherwise it opens
- *   a new group. Groups are returned in order of their median position.
+ *   a new group. A lone peak (its partner lost, e.g. beyond the switch at a fast rate) is compared
+ *   with the group's latest peak of the same direction, not with its E½: a slow film's cathodic
+ *   peak lies far from E½ but follows its own trend. Groups are returned in order of their median
+ *   position.
  */
 import { median } from '../statistics/median';
 import type { CoupleResult } from '../couples/coupleTypes';
@@ -34,7 +37,7 @@ export function matchSeriesCouples(
     });
     const taken = new Set<number>();
     // Closest pairs first, so two nearby couples do not steal each other's group.
-    const pairs = refs.flatMap((r, k) => groups.map((g, gi) => ({ k, gi, d: Math.abs((g[g.length - 1] as CoupleRef).positionV - r.positionV) })));
+    const pairs = refs.flatMap((r, k) => groups.map((g, gi) => ({ k, gi, d: distanceV(g, r) })));
     pairs.sort((a, b) => a.d - b.d);
     const placed = new Set<number>();
     for (const p of pairs) {
@@ -53,3 +56,15 @@ export function matchSeriesCouples(
     .map(({ g }) => g.sort((a, b) => (files[a.fileIndex]?.scanRateVPerS ?? 0) - (files[b.fileIndex]?.scanRateVPerS ?? 0)));
 }
 
+
+/** How far a couple lies from a group: from its latest E½, or for a lone peak from its latest peak of that direction. */
+function distanceV(group: CoupleRef[], r: CoupleRef): number {
+  const last = group[group.length - 1] as CoupleRef;
+  if (r.couple.eHalfV !== null) return Math.abs(last.positionV - r.positionV);
+  const lone = (c: CoupleResult) => (r.couple.epaV !== null ? c.epaV : c.epcV);
+  for (let k = group.length - 1; k >= 0; k--) {
+    const e = lone((group[k] as CoupleRef).couple);
+    if (e !== null) return Math.abs(e - r.positionV);
+  }
+  return Math.abs(last.positionV - r.positionV);
+}
