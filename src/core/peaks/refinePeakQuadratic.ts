@@ -49,7 +49,7 @@ export function refinePeakQuadratic(input: RefinePeakQuadraticInput, options: Re
   }
   // A parabola needs three distinct potentials (a staircase can repeat them); else keep the point.
   if (x.length < 3 || new Set(x).size < 3) return null;
-  const fit = fitPolynomial(x, y, 2);
+  const fit = fitParabola(x, y);
   if (!fit) return null;
   const [c0 = NaN, c1 = NaN, c2 = NaN] = fit;
   if (!(orientation * c2 < 0)) return null;
@@ -58,10 +58,10 @@ export function refinePeakQuadratic(input: RefinePeakQuadraticInput, options: Re
   return { potentialV: centre + xv, currentA: c0 + c1 * xv + c2 * xv * xv };
 }
 
-/** Least-squares coefficients [c0, c1, …], or null when the normal equations are singular (potentials too close to tell apart). */
-function fitPolynomial(x: number[], y: number[], degree: number): number[] | null {
+/** Least-squares coefficients [c0, c1, c2], or null when the normal equations are singular (potentials too close to tell apart). */
+function fitParabola(x: number[], y: number[]): number[] | null {
   try {
-    return new PolynomialRegression(x, y, degree).coefficients;
+    return new PolynomialRegression(x, y, 2).coefficients;
   } catch (err) {
     if (err instanceof Error && /singular/i.test(err.message)) return null;
     throw err;
@@ -89,13 +89,20 @@ export function refinePeakDeskewed(
   const orientation = options.orientation ?? 1;
   const e0 = plain.potentialV;
   const reach = reachOf(top.potentialV, e0);
-  const x = wide.potentialV.map((e) => e - e0);
-  if (x.length < 8 || !(Math.min(...x) <= -1.5 * reach) || !(Math.max(...x) >= 1.5 * reach)) return null;
-  const cubic = fitPolynomial(x, wide.currentA, 3);
+  if (!(reach > 0) || wide.potentialV.length < 8) return null;
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const e of wide.potentialV) {
+    lo = Math.min(lo, e - e0);
+    hi = Math.max(hi, e - e0);
+  }
+  if (!(lo <= -1.5 * reach) || !(hi >= 1.5 * reach)) return null;
+  const cubic = cubicCoefficients(wide.potentialV.map((e) => (e - e0) / reach), wide.currentA);
   if (!cubic) return null;
-  const [, , b2 = NaN, b3 = NaN] = cubic;
+  const b2 = cubic[2]! / (reach * reach);
+  const b3 = cubic[3]! / (reach * reach * reach);
   if (!(orientation * b2 < 0) || !Number.isFinite(b3)) return null;
-  const skew = (e: number) => b3 * (e - e0) ** 3;
+  const skew = (e: number) => b3 * (e - e0) * (e - e0) * (e - e0);
   const flat = Float64Array.from({ length: top.currentA.length }, (_, k) => (top.currentA[k] as number) - skew(top.potentialV[k] as number));
   const v = refinePeakQuadratic({ potentialV: top.potentialV, currentA: flat, from: 0, to: flat.length }, { orientation });
   if (!v || Math.abs(v.potentialV - e0) > 0.5 * reach) return null;
@@ -107,4 +114,37 @@ export function reachOf(potentialV: ArrayLike<number>, vertexV: number): number 
   let reach = 0;
   for (let k = 0; k < potentialV.length; k++) reach = Math.max(reach, Math.abs((potentialV[k] as number) - vertexV));
   return reach;
+}
+
+/**
+ * Least-squares cubic c0 + c1·u + c2·u² + c3·u³ (u of order 1) by its normal equations, solved by
+ * Gaussian elimination with partial pivoting; null when they are singular. Only +, −, × and ÷, so
+ * the page's engine and Node's give the same bits.
+ */
+function cubicCoefficients(u: number[], y: number[]): number[] | null {
+  const m = Array.from({ length: 4 }, () => [0, 0, 0, 0, 0]);
+  for (let i = 0; i < u.length; i++) {
+    const p = [1, u[i]!, u[i]! * u[i]!, u[i]! * u[i]! * u[i]!];
+    for (let r = 0; r < 4; r++) {
+      for (let c = 0; c < 4; c++) m[r]![c]! += p[r]! * p[c]!;
+      m[r]![4]! += p[r]! * y[i]!;
+    }
+  }
+  for (let c = 0; c < 4; c++) {
+    let best = c;
+    for (let r = c + 1; r < 4; r++) if (Math.abs(m[r]![c]!) > Math.abs(m[best]![c]!)) best = r;
+    if (!(Math.abs(m[best]![c]!) > 0)) return null;
+    [m[c], m[best]] = [m[best]!, m[c]!];
+    for (let r = c + 1; r < 4; r++) {
+      const f = m[r]![c]! / m[c]![c]!;
+      for (let k = c; k < 5; k++) m[r]![k]! -= f * m[c]![k]!;
+    }
+  }
+  const out = [0, 0, 0, 0];
+  for (let r = 3; r >= 0; r--) {
+    let v = m[r]![4]!;
+    for (let k = r + 1; k < 4; k++) v -= m[r]![k]! * out[k]!;
+    out[r] = v / m[r]![r]!;
+  }
+  return out.every(Number.isFinite) ? out : null;
 }
