@@ -74,9 +74,9 @@ function fitParabola(x: number[], y: number[]): number[] | null {
  * couples with 2 % noise the window holds the top 6 % and each Ep moved about 1 mV outwards, ΔEp
  * 2 mV wide. The skew is the cubic term b₃ of a cubic fitted over `wide` (the points within twice
  * the window's reach of the vertex; a cubic's b₃ on a symmetric span is not moved by the shape's
- * even terms). b₃·(E − E₀)³ is taken off the `top` points (the parabola's window) and the parabola fitted again; the
- * vertex current gets it back. Source: least-squares projection of a cubic term onto a parabola
- * (our correction; common practice, no source).
+ * even terms). b₃·(E − E₀)³ is taken off the `top` points (the parabola's window) and the
+ * parabola fitted again; the vertex current gets it back. Source: least-squares projection of a
+ * cubic term onto a parabola (our correction; common practice, no source).
  * Null (keep the plain vertex) when `wide` does not reach 1.5 times the window on both sides, the
  * cubic does not open the peak's way, or the corrected vertex moves by more than half the window.
  */
