@@ -68,6 +68,8 @@ describe('αc and the forward wave', () => {
     const c = analyseSimulatedSeries({ ...reductionFirst, startV: 0.5, switchV: -0.5, k0CmPerS: 0.01, alpha: 0.5 }, [0.1, 0.3, 1, 2], cell).couple;
     expect(c.kineticClass).toBe('quasi-reversible');
     expect(c.transferCoefficient?.source).toBe('assumed');
+    // Where α is assumed, the reading points to what measures it (our wording).
+    expect(c.transferCoefficient?.text).toContain('whole-curve fit');
     expect(c.alpha).toBeNull();
     expect(rel(c.rateConstant?.k0CmPerS, 0.01)).toBeLessThan(0.05);
     expect(rel(c.diffusion?.diffusionCm2PerS, 1e-5)).toBeLessThan(0.03);

@@ -99,6 +99,7 @@ export function seriesTransferCoefficient(points: SeriesPoint[], kineticClass: S
     };
   }
   if (kineticClass === 'reversible') return { ...assumed(forward, na, ''), text: 'αc does not enter: the couple reads as reversible' };
+  if (kineticClass === 'quasi-reversible') return assumed(forward, na, 'the series is not totally irreversible, so Ep against log v does not measure α; a whole-curve fit of the series does (Fit view, or fit on the command line)');
   if (kineticClass !== 'irreversible') return assumed(forward, na, 'the series is not totally irreversible, so Ep against log v does not measure α');
   const files = irreversibleFiles(points, cell.electronCount, cell.temperatureK);
   const shift = fromPeakShift(files, forward, cell.temperatureK);
