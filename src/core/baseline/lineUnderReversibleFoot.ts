@@ -43,20 +43,39 @@ export function lineUnderReversibleFoot(
   const spanStart = Math.min(fitStart, peak.index);
   // ξ of the wave at point j, counted from its peak and decreasing along the sweep.
   const xiFromPeak = (j: number) => -s * nfrt * (sig.potentialV[j]! - peak.potentialV);
-  const span = { potentialV: sig.potentialV, currentA: sig.currentA, fitStart, fitEnd, spanStart, spanEnd: seg.end };
-  let fit = linearPrePeakBaseline(span);
-  for (let pass = 0; pass < PASSES; pass++) {
-    const line = fit.curve;
-    const under = (j: number) => line.currentA[j - line.startIndex]!;
+  let foot = (_j: number) => 0;
+  for (let pass = 0; pass <= PASSES; pass++) {
+    const line = lineThrough(sig, fitStart, fitEnd, foot);
+    if (!line) return null;
+    const under = (j: number) => line.intercept + line.slope * sig.potentialV[j]!;
     const height = s * (sig.locatingA[peak.index]! - under(peak.index));
     if (!(height > 0)) return null;
     const halfV = crossing(sig, (j) => s * (sig.locatingA[j]! - under(j)), peak.index, spanStart, -1, height / 2);
     if (halfV === null || !readsReversible(Math.abs(peak.potentialV - halfV) * nfrt)) return null;
     if (pass === 0 && !diffusing(sig, peak, under, height, nfrt, s)) return null;
-    const foot = (j: number) => s * height * reversibleWaveShape(xiFromPeak(j) + reversiblePeakXi());
-    fit = linearPrePeakBaseline(span, { less: { what: "the wave's own reversible foot (Nicholson & Shain 1964)", currentA: foot } });
+    if (pass < PASSES) foot = (j) => s * height * reversibleWaveShape(xiFromPeak(j) + reversiblePeakXi());
   }
-  return fit.curve;
+  return linearPrePeakBaseline(
+    { potentialV: sig.potentialV, currentA: sig.currentA, fitStart, fitEnd, spanStart, spanEnd: seg.end },
+    { less: { what: "the wave's own reversible foot (Nicholson & Shain 1964)", currentA: foot } },
+  ).curve;
+}
+
+/** Least-squares line I = intercept + slope·E through the window's current less `less` (closed form). */
+function lineThrough(sig: SweepSignals, from: number, to: number, less: (j: number) => number): { slope: number; intercept: number } | null {
+  // Potentials counted from the window's first point, for a well-conditioned sum.
+  const e0 = sig.potentialV[from]!;
+  let n = 0, sx = 0, sy = 0, sxx = 0, sxy = 0;
+  for (let j = from; j < to; j++) {
+    const x = sig.potentialV[j]! - e0;
+    const y = sig.currentA[j]! - less(j);
+    if (!Number.isFinite(x) || !Number.isFinite(y)) return null;
+    n++; sx += x; sy += y; sxx += x * x; sxy += x * y;
+  }
+  const det = n * sxx - sx * sx;
+  if (n < 2 || !(det !== 0)) return null;
+  const slope = (n * sxy - sx * sy) / det;
+  return { slope, intercept: (sy - slope * sx) / n - slope * e0 };
 }
 
 /**

@@ -92,21 +92,29 @@ function relocateAboveBackground(sig: SweepSignals, peak: PeakCandidate, backgro
   if (!c.every(Number.isFinite) || c.length < 3) return peak;
   const plain = refinePeakQuadratic({ potentialV: e, currentA: c, from: 0, to: c.length }, { orientation: s });
   if (!plain) return peak;
-  const v = refinePeakDeskewed({ potentialV: e, currentA: c }, pointsNear(sig, seg, plain.potentialV, 2 * reachOf(e, plain.potentialV), background), plain, { orientation: s }) ?? plain;
+  const v = refinePeakDeskewed({ potentialV: e, currentA: c }, pointsNear(sig, seg, k, plain.potentialV, 2 * reachOf(e, plain.potentialV), background), plain, { orientation: s }) ?? plain;
   const near = a + nearestIndex(e, v.potentialV);
   return { ...peak, index: near, potentialV: v.potentialV, currentA: v.currentA + (background(near) ?? 0) };
 }
 
-/** The sweep's points within `reachV` of a potential, as current minus background. */
-function pointsNear(sig: SweepSignals, seg: { start: number; end: number }, potentialV: number, reachV: number, background: (k: number) => number | null): { potentialV: number[]; currentA: number[] } {
+/**
+ * The sweep's points within `reachV` of a potential, as current minus background, walking out from
+ * point `from` (on a sweep the potential is monotonic, so the walk stops at the first point beyond).
+ */
+function pointsNear(sig: SweepSignals, seg: { start: number; end: number }, from: number, potentialV: number, reachV: number, background: (k: number) => number | null): { potentialV: number[]; currentA: number[] } {
   const out: { potentialV: number[]; currentA: number[] } = { potentialV: [], currentA: [] };
-  for (let k = seg.start; k < seg.end; k++) {
+  const take = (k: number) => {
     const e = sig.potentialV[k]!;
+    if (Math.abs(e - potentialV) > reachV) return false;
     const c = sig.currentA[k]! - (background(k) ?? NaN);
-    if (Math.abs(e - potentialV) > reachV || !Number.isFinite(c)) continue;
-    out.potentialV.push(e);
-    out.currentA.push(c);
-  }
+    if (Number.isFinite(c)) {
+      out.potentialV.push(e);
+      out.currentA.push(c);
+    }
+    return true;
+  };
+  for (let k = from; k >= seg.start && take(k); k--);
+  for (let k = from + 1; k < seg.end && take(k); k++);
   return out;
 }
 

@@ -2,13 +2,13 @@
  * Sub-sample peak position: a least-squares parabola I = c0 + c1·x + c2·x² (x = E − E_centre)
  * fitted to the raw points around a located extremum; its vertex gives Ep and the peak current.
  * Source: local quadratic (parabolic) interpolation of an extremum (common practice, no source);
- *   fit by ml-regression-polynomial.
+ *   fit by its normal equations (regression/polynomialCoefficients.ts).
  * In: potential (V) and current (A, IUPAC) columns, the window [from, to) of point indices, and
  *   whether a maximum (+1, anodic) or a minimum (−1, cathodic) is sought.
  * Out: { potentialV, currentA } of the vertex, or null when the parabola opens the wrong way or
  *   its vertex falls outside the window (the caller then keeps the data point).
  */
-import { PolynomialRegression } from 'ml-regression-polynomial';
+import { polynomialCoefficients } from '../regression/polynomialCoefficients';
 import { AnalysisError } from '../errors';
 
 export interface RefinePeakQuadraticInput {
@@ -49,23 +49,17 @@ export function refinePeakQuadratic(input: RefinePeakQuadraticInput, options: Re
   }
   // A parabola needs three distinct potentials (a staircase can repeat them); else keep the point.
   if (x.length < 3 || new Set(x).size < 3) return null;
-  const fit = fitParabola(x, y);
+  // Fitted on u = x/scale (of order 1); potentials within a picovolt cannot be told apart.
+  const scale = Math.max(-lo, hi);
+  if (!(scale > 1e-12)) return null;
+  const fit = polynomialCoefficients(x.map((v) => v / scale), y, 2);
   if (!fit) return null;
   const [c0 = NaN, c1 = NaN, c2 = NaN] = fit;
   if (!(orientation * c2 < 0)) return null;
-  const xv = -c1 / (2 * c2);
+  const uv = -c1 / (2 * c2);
+  const xv = uv * scale;
   if (!(xv >= lo && xv <= hi)) return null;
-  return { potentialV: centre + xv, currentA: c0 + c1 * xv + c2 * xv * xv };
-}
-
-/** Least-squares coefficients [c0, c1, c2], or null when the normal equations are singular (potentials too close to tell apart). */
-function fitParabola(x: number[], y: number[]): number[] | null {
-  try {
-    return new PolynomialRegression(x, y, 2).coefficients;
-  } catch (err) {
-    if (err instanceof Error && /singular/i.test(err.message)) return null;
-    throw err;
-  }
+  return { potentialV: centre + xv, currentA: c0 + c1 * uv + c2 * uv * uv };
 }
 
 /**
@@ -97,7 +91,7 @@ export function refinePeakDeskewed(
     hi = Math.max(hi, e - e0);
   }
   if (!(lo <= -1.5 * reach) || !(hi >= 1.5 * reach)) return null;
-  const cubic = cubicCoefficients(wide.potentialV.map((e) => (e - e0) / reach), wide.currentA);
+  const cubic = polynomialCoefficients(wide.potentialV.map((e) => (e - e0) / reach), wide.currentA, 3);
   if (!cubic) return null;
   const b2 = cubic[2]! / (reach * reach);
   const b3 = cubic[3]! / (reach * reach * reach);
@@ -114,37 +108,4 @@ export function reachOf(potentialV: ArrayLike<number>, vertexV: number): number 
   let reach = 0;
   for (let k = 0; k < potentialV.length; k++) reach = Math.max(reach, Math.abs((potentialV[k] as number) - vertexV));
   return reach;
-}
-
-/**
- * Least-squares cubic c0 + c1·u + c2·u² + c3·u³ (u of order 1) by its normal equations, solved by
- * Gaussian elimination with partial pivoting; null when they are singular. Only +, −, × and ÷, so
- * the page's engine and Node's give the same bits.
- */
-function cubicCoefficients(u: number[], y: number[]): number[] | null {
-  const m = Array.from({ length: 4 }, () => [0, 0, 0, 0, 0]);
-  for (let i = 0; i < u.length; i++) {
-    const p = [1, u[i]!, u[i]! * u[i]!, u[i]! * u[i]! * u[i]!];
-    for (let r = 0; r < 4; r++) {
-      for (let c = 0; c < 4; c++) m[r]![c]! += p[r]! * p[c]!;
-      m[r]![4]! += p[r]! * y[i]!;
-    }
-  }
-  for (let c = 0; c < 4; c++) {
-    let best = c;
-    for (let r = c + 1; r < 4; r++) if (Math.abs(m[r]![c]!) > Math.abs(m[best]![c]!)) best = r;
-    if (!(Math.abs(m[best]![c]!) > 0)) return null;
-    [m[c], m[best]] = [m[best]!, m[c]!];
-    for (let r = c + 1; r < 4; r++) {
-      const f = m[r]![c]! / m[c]![c]!;
-      for (let k = c; k < 5; k++) m[r]![k]! -= f * m[c]![k]!;
-    }
-  }
-  const out = [0, 0, 0, 0];
-  for (let r = 3; r >= 0; r--) {
-    let v = m[r]![4]!;
-    for (let k = r + 1; k < 4; k++) v -= m[r]![k]! * out[k]!;
-    out[r] = v / m[r]![r]!;
-  }
-  return out.every(Number.isFinite) ? out : null;
 }

@@ -3,3 +3,4 @@ export { fitLine } from './fitLine';
 export type { FitLineOptions, FitLineResult } from './fitLine';
 export { logGamma, regularizedIncompleteBeta, studentTCdf, studentTQuantile } from './studentTQuantile';
 export * from './fitLinearModel';
+export { polynomialCoefficients } from './polynomialCoefficients';
