@@ -47,7 +47,8 @@ function k0Text(c: SeriesCouple): string {
 
 function seriesLines(c: SeriesCouple): string[] {
   const fit = c.forwardFit;
-  const out = [`couple ${c.index}: E½ = ${f(c.eHalfV, 4)} V over ${c.points.length} file(s); ${c.verdict.label}`];
+  const half = c.eHalfV === null ? 'no E½ (no file has both peaks)' : `E½ = ${f(c.eHalfV, 4)} V`;
+  const out = [`couple ${c.index}: ${half} over ${c.points.length} file(s); ${c.verdict.label}`];
   const surfaceFit = c.regime === 'surface' ? (c.surface?.fit ?? null) : null;
   if (surfaceFit) {
     out.push(`  |ip| vs v: slope ${e(surfaceFit.slope)} A·s/V, intercept ${e(surfaceFit.intercept)} A, R² ${f(surfaceFit.r2, 5)}   k_s = ${e(c.surface?.ksPerS)} 1/s`);

@@ -24,6 +24,10 @@ describe('analyzeSeries', () => {
     expect(r.couples).toHaveLength(1);
     expect(r.couples[0]?.points).toHaveLength(3);
     expect(r.couples[0]?.eHalfV).toBeCloseTo(0.2, 10);
+    // With no file holding both peaks there is no E½ at all, only the lone peaks' Ep.
+    const lone = analyzeSeries(files.slice(1), opts).couples[0];
+    expect(lone?.eHalfV).toBeNull();
+    expect(lone?.eHalfMeaning).toMatch(/no E½/);
   });
 
   // Randles–Ševčík (Bard & Faulkner 2nd ed. §6.2): five reversible points → D = 7.600e-6 cm²/s,

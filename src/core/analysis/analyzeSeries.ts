@@ -19,6 +19,7 @@ import type { ResolvedSeriesOptions } from './seriesFits';
 import { buildSeriesCouple } from './seriesCouple';
 import type { AnalyzeSeriesOptions, SeriesAnalysis, SeriesCouple, SeriesFileInput, SeriesWarning } from './seriesTypes';
 import type { SeriesPoint } from '../series/seriesPoint';
+import { median } from '../statistics/median';
 import type { CycleAnalysis } from './types';
 
 /** Checks the series options and fills in the defaults (the run does this once in resolveRun). */
@@ -111,7 +112,7 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
   if (needsD && o.concentrationMolPerCm3 === null) out.push({ code: 'NO_CONCENTRATION', message: 'no concentration given: D is not reported' });
   for (const c of couples) {
     if (c.points.length < files.length && files.length > 1) {
-      out.push({ code: 'UNMATCHED_COUPLE', couple: c.index, message: `couple ${c.index} (E½ ≈ ${c.eHalfV?.toFixed(3) ?? '?'} V) is found in ${c.points.length} of ${files.length} files` });
+      out.push({ code: 'UNMATCHED_COUPLE', couple: c.index, message: `couple ${c.index} (${c.eHalfV !== null ? `E½ ≈ ${c.eHalfV.toFixed(3)} V` : `lone peak at ${lonePeakV(c)?.toFixed(3) ?? '?'} V`}) is found in ${c.points.length} of ${files.length} files` });
     }
     const k = c.rateConstant;
     if (k && k.status !== 'value' && (k.status === 'cannot-tell' || c.kineticClass !== 'reversible')) {
@@ -129,4 +130,10 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
     }
   }
   return out;
+}
+
+/** Median Ep of a couple's lone peaks (for a couple that has no E½). */
+function lonePeakV(c: SeriesCouple): number | null {
+  const eps = c.points.flatMap((p) => (p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
+  return eps.length ? median(eps) : null;
 }

@@ -85,9 +85,8 @@ export function buildSeriesCouple(index: number, points: SeriesPoint[], first: C
   const chemistry = followUp ? 'a follow-up reaction consumes the product and moves the return peak, so ΔEp is not a measure of electron-transfer kinetics (Nicholson & Shain 1964)' : null;
   const rateConstant = transfer ? seriesRateConstant({ points, forward, diffusion, transfer, reversible: kineticClass === 'reversible', chemistry, ohmic }, o) : null;
   const surface = cls.regime === 'surface' ? seriesSurface(points, o, forward) : null;
-  // E½ of the files that have both peaks; a lone peak's Ep stands in only where no file has both.
-  const paired = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : []));
-  const halves = paired.length ? paired : points.flatMap((p) => (p.epaV !== null ? [p.epaV] : p.epcV !== null ? [p.epcV] : []));
+  // E½ of the files that have both peaks; none where no file has (a lone peak's Ep is not E½).
+  const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : []));
   const couple: Omit<SeriesCouple, 'verdict'> = {
     index, eHalfV: halves.length ? median(halves) : null, forwardDirection: forward, points, regime: cls.regime, kineticClass, followUp, transferCoefficient: transfer, ohmic,
     forwardFit, anodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipaA), cathodicFit: fitAgainstSqrtScanRate(points, (p) => p.ipcA), diffusion, logLog, peakShift,

@@ -113,6 +113,7 @@ function describeRegime(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptio
 
 /** What the couple's E½ is. */
 export function describeHalfWave(c: Omit<SeriesCouple, 'verdict'>): string {
+  if (c.eHalfV === null) return 'no E½: no file has both peaks of this couple (a lone peak gives Ep only)';
   if (c.followUp) return 'E½ is the peak midpoint (Epa + Epc)/2; the follow-up reaction moves the forward peak, so it is not E°′';
   if (c.regime === 'surface') {
     return c.kineticClass === 'reversible' ? 'E½ ≈ E°′ of the film (Nernstian, ΔEp ≈ 0)' : 'E½ is the peak midpoint of a slow film, not E°′: the peaks move apart unequally unless αc = 0.5 (Laviron 1979)';

@@ -24,6 +24,15 @@ describe('classifySeriesCouple', () => {
     // A peak only on the return sweep (no forward peak, so no width): not called reversible.
     expect(classifySeriesCouple([point({ verdict: 'irreversible', forwardHalfPeakWidthV: null })], 1, 298.15).kineticClass).toBe('inconclusive');
   });
+  // Nicholson & Shain 1964: a fast follow-up reaction narrows the forward peak to 1.857 RT/nF and
+  // takes the return peak away; so does αnₐ ≈ 1. At one scan rate nothing tells them apart; over
+  // several, the chemistry reading (and its Ep shift test) applies.
+  it('leaves a lone narrow forward peak at one scan rate inconclusive', () => {
+    const rt = thermalVoltageV(298.15);
+    const lone = (v: number) => point({ scanRateVPerS: v, verdict: 'irreversible', epaV: null, eHalfV: null, deltaEpV: null, ipaA: null, forwardHalfPeakWidthV: 1.857 * rt });
+    expect(classifySeriesCouple([lone(0.1)], 1, 298.15).kineticClass).toBe('inconclusive');
+    expect(classifySeriesCouple([lone(0.1), lone(0.2)], 1, 298.15).kineticClass).toBe('reversible');
+  });
   // Laviron 1974: ip ∝ v for a surface couple; a log–log slope near 1 over ≥ 3 scan rates wins.
   it('uses the log–log slope to recognise a surface couple', () => {
     const pts = [0.1, 1, 10].map((s) => point({ scanRateVPerS: s, verdict: 'quasi-reversible', deltaEpV: 0.1 }));

@@ -12,8 +12,8 @@
  *   - an irreversible-looking couple is irreversible when its forward peak is broader than 1.25× the reversible
  *     |Ep − Ep/2| = 2.20·RT/nF (Nicholson & Shain 1964; the 1.25 margin is common practice, no
  *     source); otherwise the loss of the return peak is put down to chemistry and the forward
- *     peak is treated as reversible; with no forward peak at all (a lone peak on the return sweep)
- *     the class is inconclusive.
+ *     peak is treated as reversible; with no forward peak at all (a lone peak on the return sweep),
+ *     or a lone forward peak at a single scan rate, the class is inconclusive.
  */
 import { STANDARD_TEMPERATURE_K, thermalVoltageV } from '../constants';
 import { median } from '../statistics/median';
@@ -56,8 +56,10 @@ export function classifySeriesCouple(
     case 'quasi-reversible':
       return { regime: 'diffusion', kineticClass: deltas.length && median(deltas) > 0.212 ? 'irreversible' : 'quasi-reversible', majority };
     case 'irreversible': {
-      // A lone peak on the return sweep has no forward width to judge by: nothing to tell.
-      if (widths.length === 0) return { regime: 'diffusion', kineticClass: 'inconclusive', majority };
+      // A lone peak on the return sweep has no forward width to judge by: nothing to tell. Nor has
+      // a lone forward peak at one scan rate: a fast follow-up reaction and a slow electron transfer
+      // (αnₐ near 1) both narrow it, and only its shift with v tells them apart.
+      if (widths.length === 0 || (rates < 2 && deltas.length === 0)) return { regime: 'diffusion', kineticClass: 'inconclusive', majority };
       const broad = median(widths) > 1.25 * (2.2 * rt) / electronCount;
       return { regime: 'diffusion', kineticClass: broad ? 'irreversible' : 'reversible', majority };
     }
