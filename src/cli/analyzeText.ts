@@ -70,7 +70,7 @@ export function analyzeText(r: AnalyzeRunResult): string {
     parts.push('', `Series "${s.key}" (${s.fileNames.length} file${s.fileNames.length === 1 ? '' : 's'}):`);
     if (!s.analysis.couples.length) parts.push('  no couples found');
     for (const c of s.analysis.couples) parts.push(...seriesLines(c));
-    if (s.capacitance) parts.push(`  double-layer capacitance: ${f(s.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
+    if (s.capacitance) parts.push(`  double-layer capacitance: ${s.capacitance.model === 'single-rate' ? '≤ ' : ''}${f(s.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
   }
   // What the importer could only guess or doubt (each message names its file); --inspect has the rest.
   const read = r.files.flatMap((file) => file.provenance.importWarnings ?? []);

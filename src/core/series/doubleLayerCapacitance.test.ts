@@ -12,6 +12,9 @@ describe('doubleLayerCapacitance', () => {
     const r = doubleLayerCapacitance({ scanRatesVPerS: [0.1], gapCurrentsA: [0.2828e-6], areaCm2: 0.0707 });
     expect(Math.abs(r.capacitanceFPerCm2 / 20e-6 - 1)).toBeLessThan(1e-3);
     expect(r.fit).toBeNull();
+    // At one rate a faradaic tail can only widen the gap: the value is an upper bound, and says so.
+    expect(r.model).toBe('single-rate');
+    expect(r.warning).toMatch(/upper bound/);
   });
   // Same relation over a series, with a constant leak that must land in the intercept.
   it('recovers Cd from the slope of a series despite a constant offset', () => {

@@ -72,7 +72,7 @@ export function doubleLayerCapacitance(input: { scanRatesVPerS: ArrayLike<number
   const distinct = new Set(rates).size;
   const drift = driftWarning(points, rates);
   if (distinct < 2) {
-    return { capacitanceFPerCm2: points.reduce((a, b) => a + b, 0) / points.length, capacitanceIntervalFPerCm2: null, model: 'single-rate', faradaicTailAPerSqrtVPerS: null, pointCapacitancesFPerCm2: points, fit: null, warning: 'one scan rate: a faradaic tail or leak cannot be told from the charging current' };
+    return { capacitanceFPerCm2: points.reduce((a, b) => a + b, 0) / points.length, capacitanceIntervalFPerCm2: null, model: 'single-rate', faradaicTailAPerSqrtVPerS: null, pointCapacitancesFPerCm2: points, fit: null, warning: 'one scan rate: gap/(2Av) is only an upper bound on Cd, since a faradaic tail in the region (a diffusing couple\'s return current) widens the gap and cannot be told from the charging current at one rate; record two or more scan rates' };
   }
   const fit = fitLine(rates, half);
   if (distinct < 3) {

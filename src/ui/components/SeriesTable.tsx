@@ -57,7 +57,7 @@ export function SeriesTable({ result }: { result: RunSeriesResult }) {
         </table>
       ))}
       {result.capacitance ? (
-        <p data-testid="series-cd">Double-layer capacitance Cd = <Explained explanation={cd ?? undefined}>{sci(result.capacitance.capacitanceFPerCm2 * 1e6, 3)} µF/cm²</Explained></p>
+        <p data-testid="series-cd">Double-layer capacitance Cd {result.capacitance.model === 'single-rate' ? '≤' : '='} <Explained explanation={cd ?? undefined}>{sci(result.capacitance.capacitanceFPerCm2 * 1e6, 3)} µF/cm²</Explained></p>
       ) : null}
       {result.analysis.warnings.length > 0 ? <ul className="notes">{result.analysis.warnings.map((w) => <li key={w.message}>{w.message}</li>)}</ul> : null}
     </div>
