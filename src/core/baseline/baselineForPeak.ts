@@ -14,7 +14,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { baselineAt, sampleBaseline } from './baselineCurve';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
-import { lineUnderReversibleFoot } from './lineUnderReversibleFoot';
+import { lineUnderOwnFoot } from './lineUnderOwnFoot';
 import { decayAfterPrevious, decayAfterSwitch, reversibleTailOfPrevious, type BaselineRef } from './extendedDecayBaselines';
 import { polynomialBaseline } from './polynomialBaseline';
 import { switchedChargingBaseline } from './switchedChargingBaseline';
@@ -148,14 +148,14 @@ function preWindow(sig: SweepSignals, peak: PeakCandidate, regionStart: number, 
 type WindowRequest = Pick<BaselineRequest, 'regionStart' | 'marginPoints' | 'wave'>;
 
 /**
- * The pre-peak line; in a window found automatically, a reversible wave's own foot is taken out
- * before the fit (lineUnderReversibleFoot.ts). A window the user set is fitted as it stands.
+ * The pre-peak line; in a window found automatically, the foot of a wave of known shape (a
+ * reversible dissolved couple, a Nernstian film) is taken out before the fit (lineUnderOwnFoot.ts). A window the user set is fitted as it stands.
  */
 function linearCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, spec: BaselineSpec | null): BaselineCurve {
   const seg = sig.segments[peak.segmentIndex]!;
   const w = preWindow(sig, peak, r.regionStart, spec, r.marginPoints);
   if (!w || w[1] - w[0] < 2) return flatCurve(sig, peak, r.regionStart);
-  const footless = !spec?.anchorsV && r.wave ? lineUnderReversibleFoot(sig, peak, w, r.wave) : null;
+  const footless = !spec?.anchorsV && r.wave ? lineUnderOwnFoot(sig, peak, w, r.wave) : null;
   if (footless) return footless;
   const spanStart = Math.min(w[0], peak.index);
   return linearPrePeakBaseline({ ...sig, fitStart: w[0], fitEnd: w[1], spanStart, spanEnd: seg.end }).curve;

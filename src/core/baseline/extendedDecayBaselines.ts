@@ -90,6 +90,7 @@ export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev:
 const SHAPES = [
   {
     halfWidth: REVERSIBLE_HALF_WIDTH,
+    diffusing: true,
     words: "the reversible wave's own shape (Nicholson & Shain 1964)",
     // Peak at ξ = −1.109 past E½; after the switch, Cottrell's 1/√t′ with t′ counted from E½ (σt′ = −ξ).
     at: (xiFromPeak: number) => reversibleWaveShape(xiFromPeak + reversiblePeakXi()),
@@ -100,12 +101,20 @@ const SHAPES = [
   },
   {
     halfWidth: 1.763,
+    diffusing: false,
     words: "a Nernstian adsorbed layer's shape, 4e^ξ/(1 + e^ξ)² (Laviron 1974)",
     at: (xi: number) => 4 * Math.exp(xi) / (1 + Math.exp(xi)) ** 2,
     // A converted layer carries no current while the potential stays past it.
     afterSwitch: () => 0,
   },
 ] as const;
+
+export type WaveShape = (typeof SHAPES)[number];
+
+/** The known shape whose |Ep − Ep/2| (in units of RT/nF) a wave's matches within SHAPE_WIDTH_TOLERANCE. */
+export function waveShapeFor(halfWidth: number): WaveShape | undefined {
+  return SHAPES.find((x) => Math.abs(halfWidth / x.halfWidth - 1) <= SHAPE_WIDTH_TOLERANCE);
+}
 
 /**
  * The previous wave's own current extended under this one, when that wave has a known shape (a
@@ -132,7 +141,7 @@ export function reversibleTailOfPrevious(
   if (halfV === null) return null;
   const nfrt = wave.electronCount / thermalVoltageV(wave.temperatureK);
   const widthV = Math.abs(prev.peak.potentialV - halfV);
-  const shape = SHAPES.find((x) => Math.abs((widthV * nfrt) / x.halfWidth - 1) <= SHAPE_WIDTH_TOLERANCE);
+  const shape = waveShapeFor(widthV * nfrt);
   if (!shape) return null;
   // ξ from the peak, decreasing along the sweep.
   const xiAt = (j: number) => -s * nfrt * (sig.potentialV[j]! - prev.peak.potentialV);

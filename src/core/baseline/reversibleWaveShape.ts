@@ -16,11 +16,6 @@ export const REVERSIBLE_HALF_WIDTH = 2.2;
 /** How far a measured |Ep − Ep/2| may stray from a known wave shape's for that shape to be used (our margin). */
 export const SHAPE_WIDTH_TOLERANCE = 0.1;
 
-/** Whether a half-peak width |Ep − Ep/2|, in units of RT/nF, is a reversible wave's (± SHAPE_WIDTH_TOLERANCE). */
-export function readsReversible(halfWidth: number): boolean {
-  return Math.abs(halfWidth / REVERSIBLE_HALF_WIDTH - 1) <= SHAPE_WIDTH_TOLERANCE;
-}
-
 const START_XI = 12;
 const END_XI = -60;
 const STEP = 0.02;

@@ -6,8 +6,9 @@
  *   ed. §6.2, from memory); charge Q = ∫|I − I_baseline| dt (Faraday's law).
  * Charge limits (our choice): from the last point before the peak where the corrected current is
  *   ≤ 0 (or the baseline's start) to the first point after it where the corrected current falls
- *   below 1 % of ip (or the end of the sweep / baseline). For a diffusion wave the latter is usually
- *   the switch, so Q is "charge passed under the wave up to the switch".
+ *   below 0.1 % of ip (or the end of the sweep / baseline; at 1 % a Nernstian film's θ(1 − θ) tail
+ *   left 0.25 % of its charge out). For a diffusion wave the latter is usually the switch, so Q is
+ *   "charge passed under the wave up to the switch".
  * Tail (our measure of a closed peak): the corrected current `tailOffsetV` past Ep, in the sweep
  *   direction, over ip. A surface-confined wave falls to ~1 % of ip 6·RT/nF past Ep (θ(1 − θ)
  *   shape, Bard & Faulkner 2nd ed. §14.3, from memory), a diffusing one keeps about half of it.
@@ -154,7 +155,7 @@ function chargeUnderPeak(sig: SweepSignals, corrected: (k: number) => number, pe
   let a = peak;
   while (a > lo && corrected(a - 1) > 0) a--;
   let b = peak;
-  while (b < hi - 1 && corrected(b + 1) > 0.01 * heightA) b++;
+  while (b < hi - 1 && corrected(b + 1) > 0.001 * heightA) b++;
   let q = 0;
   for (let k = a; k < b; k++) q += 0.5 * (corrected(k) + corrected(k + 1)) * (sig.timeS[k + 1]! - sig.timeS[k]!);
   return Math.abs(q);

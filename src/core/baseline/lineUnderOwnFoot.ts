@@ -1,21 +1,24 @@
 /**
- * The pre-peak line of a reversible wave, fitted with the wave's own foot taken out.
+ * The pre-peak line of a wave with a known shape, fitted with the wave's own foot taken out.
  *
  * A diffusion wave starts long before its peak: its foot rises as e^(−ξ), and Nicholson & Shain's
  * integral equation (Anal. Chem. 36 (1964) 706, eq. 24) gives √π·χ = e^(−ξ) there, i.e.
  * i/ip = e^(−ξ)/0.4463 (ξ = nF(E − E½)/RT along a reduction sweep): 0.1 % of the peak 200 mV
- * before E½ (n = 1, 25 °C), 1 % at 140 mV. A straight line fitted through that convex rise and
- * extrapolated under the peak leans towards it, and a sweep that starts 200 mV before E½ then reads
- * ip 3 % low (150 mV: 10 %). Here the foot, the wave's height times its reversible shape placed by
- * its Ep (reversibleWaveShape.ts), is subtracted from the window before the line is fitted, and the
- * height is measured again over the new line (four passes).
+ * before E½ (n = 1, 25 °C), 1 % at 140 mV. A Nernstian adsorbed layer's 4e^ξ/(1 + e^ξ)² (Laviron,
+ * J. Electroanal. Chem. 52 (1974) 355) is as wide: 1.2 % of its peak 150 mV before E°′. A straight
+ * line fitted through that convex rise and extrapolated under the peak leans towards it: a sweep
+ * that starts 200 mV before E½ read a reversible couple's ip 3 % low (150 mV: 10 %). Here the foot,
+ * the wave's height times its shape placed by its Ep (the shapes of extendedDecayBaselines.ts), is
+ * subtracted from the window before the line is fitted, and the height is measured again over the
+ * new line (four passes).
  *
- * Only for a wave whose |Ep − Ep/2| reads reversible (2.20 RT/nF ± 10 %). A quasi-reversible or
- * resistance-broadened wave that still passes lies further out than its E½: the foot placed from
- * its Ep is then smaller than the real one, so the correction falls short. The shape starts far
- * before the wave; a sweep that starts only 150 mV before E½ (with the solution at rest) has its own
- * start-up current as well, and ip reads 1 % high there.
- * Null when the wave does not read reversible (the plain line is then used).
+ * Only for a wave whose |Ep − Ep/2| is a known shape's (2.20 RT/nF for a dissolved couple, 1.763
+ * for a Nernstian film; ± 10 %) and whose tail agrees (a dissolved couple's stays up, a film's
+ * falls). A quasi-reversible or resistance-broadened wave that still passes lies further out than
+ * its E½: the foot placed from its Ep is then smaller than the real one, so the correction falls
+ * short. The diffusion shape starts far before the wave; a sweep that starts only 150 mV before E½
+ * (with the solution at rest) has its own start-up current as well, and ip reads 1 % high there.
+ * Null otherwise (the plain line is then used).
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
@@ -23,14 +26,14 @@ import { crossing } from '../peaks/levelCrossing';
 import { thermalVoltageV } from '../constants';
 import type { BaselineCurve } from './baselineTypes';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
-import { readsReversible, reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
+import { waveShapeFor, type WaveShape } from './extendedDecayBaselines';
 
 const PASSES = 4;
 /** How far past Ep the tail is read (in RT/nF), and the least it may have kept of the height there. */
 const TAIL_AT = 3;
 const TAIL_KEPT = 0.5;
 
-export function lineUnderReversibleFoot(
+export function lineUnderOwnFoot(
   sig: SweepSignals,
   peak: PeakCandidate,
   window: [number, number],
@@ -44,6 +47,7 @@ export function lineUnderReversibleFoot(
   // ξ of the wave at point j, counted from its peak and decreasing along the sweep.
   const xiFromPeak = (j: number) => -s * nfrt * (sig.potentialV[j]! - peak.potentialV);
   let foot = (_j: number) => 0;
+  let shape: WaveShape | undefined;
   for (let pass = 0; pass <= PASSES; pass++) {
     const line = lineThrough(sig, fitStart, fitEnd, foot);
     if (!line) return null;
@@ -51,13 +55,15 @@ export function lineUnderReversibleFoot(
     const height = s * (sig.locatingA[peak.index]! - under(peak.index));
     if (!(height > 0)) return null;
     const halfV = crossing(sig, (j) => s * (sig.locatingA[j]! - under(j)), peak.index, spanStart, -1, height / 2);
-    if (halfV === null || !readsReversible(Math.abs(peak.potentialV - halfV) * nfrt)) return null;
-    if (pass === 0 && !diffusing(sig, peak, under, height, nfrt, s)) return null;
-    if (pass < PASSES) foot = (j) => s * height * reversibleWaveShape(xiFromPeak(j) + reversiblePeakXi());
+    const found = halfV === null ? undefined : waveShapeFor(Math.abs(peak.potentialV - halfV) * nfrt);
+    if (!found || (shape && found !== shape)) return null;
+    if (pass === 0 && diffusing(sig, peak, under, height, nfrt, s) !== found.diffusing) return null;
+    shape = found;
+    if (pass < PASSES) foot = (j) => s * height * found.at(xiFromPeak(j));
   }
   return linearPrePeakBaseline(
     { potentialV: sig.potentialV, currentA: sig.currentA, fitStart, fitEnd, spanStart, spanEnd: seg.end },
-    { less: { what: "the wave's own reversible foot (Nicholson & Shain 1964)", currentA: foot } },
+    { less: { what: `the wave's own foot, from ${shape!.words}`, currentA: foot } },
   ).curve;
 }
 
@@ -79,9 +85,10 @@ function lineThrough(sig: SweepSignals, from: number, to: number, less: (j: numb
 }
 
 /**
- * A dissolved species' wave keeps 0.68 of its height 3 RT/nF past Ep (reversibleWaveShape.ts); an
- * adsorbed layer's has fallen to 0.18 (Nernstian) and, broadened by slow kinetics to the same
- * half-peak width, still well below half. False also when the sweep ends before that point.
+ * Whether the wave's tail stays up: a dissolved species' wave keeps 0.68 of its height 3 RT/nF past
+ * Ep (reversibleWaveShape.ts); an adsorbed layer's has fallen to 0.18 (Nernstian) and, broadened by
+ * slow kinetics to a dissolved couple's half-peak width, still well below half. False also when
+ * the sweep ends before that point.
  */
 function diffusing(sig: SweepSignals, peak: PeakCandidate, under: (j: number) => number, height: number, nfrt: number, s: 1 | -1): boolean {
   const seg = sig.segments[peak.segmentIndex]!;

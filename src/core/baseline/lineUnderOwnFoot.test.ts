@@ -21,7 +21,7 @@ const forwardPeak = (startV: number, extra: object = {}) => {
   return peak!;
 };
 
-describe('lineUnderReversibleFoot', () => {
+describe('lineUnderOwnFoot', () => {
   // Derived from Nicholson & Shain's eq. 24: for ξ ≫ 1 its right side is e^(−ξ)(1 − e^(−ξ) …),
   // solved to first order by √π·χ = e^(−ξ); within 1.5 % from ξ = 5 (the table's own steps included).
   it('uses a shape whose foot is e^(−ξ)/0.4463 of the peak', () => {
@@ -32,7 +32,7 @@ describe('lineUnderReversibleFoot', () => {
   it.each([0.4, 0.45, 0.5, 0.7])('a sweep started at %f V (E½ 0.2 V) gives ipc within 0.3 % of Randles–Ševčík', (startV) => {
     const peak = forwardPeak(startV);
     expect(Math.abs(peak.heightA / randlesSevcikA - 1)).toBeLessThan(0.003);
-    expect(peak.baseline.description).toContain("less the wave's own reversible foot");
+    expect(peak.baseline.description).toContain("less the wave's own foot, from the reversible wave's own shape");
   });
 
   // Bard & Faulkner eq. 6.2.20 (from the same table): Ep = E½ − 1.109 RT/nF = 171.5 mV here.
