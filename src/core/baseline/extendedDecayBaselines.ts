@@ -12,7 +12,7 @@ import type { SweepSignals } from '../peaks/sweepSignals';
 import { crossing } from '../peaks/levelCrossing';
 import { findPrePeakWindow } from './findPrePeakWindow';
 import { nicholsonReturnBaseline, type NicholsonReturnBaselineResult } from './nicholsonReturnBaseline';
-import { REVERSIBLE_HALF_WIDTH, SHAPE_WIDTH_TOLERANCE, reversiblePeakXi, reversibleWaveShape } from './reversibleWaveShape';
+import { waveShapeFor } from './knownWaveShapes';
 import { anchorAt, formatMv, sampleBaseline } from './baselineCurve';
 import type { BaselineCurve } from './baselineTypes';
 import { thermalVoltageV } from '../constants';
@@ -82,43 +82,8 @@ export function decayAfterPrevious(sig: SweepSignals, peak: PeakCandidate, prev:
 }
 
 /**
- * The earlier-wave shapes this extension knows, each by its |Ep − Ep/2| in units of RT/nF: a
- * reversible wave of a dissolved couple, 2.20 (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21), and a
- * Nernstian adsorbed layer, 1.763, half its 90.6/n mV width at half height (Laviron, J.
- * Electroanal. Chem. 52 (1974) 355; Bard & Faulkner eq. 14.3.9: i ∝ e^ξ/(1 + e^ξ)², ξ = nF(E − E°′)/RT).
- */
-const SHAPES = [
-  {
-    halfWidth: REVERSIBLE_HALF_WIDTH,
-    diffusing: true,
-    words: "the reversible wave's own shape (Nicholson & Shain 1964)",
-    // Peak at ξ = −1.109 past E½; after the switch, Cottrell's 1/√t′ with t′ counted from E½ (σt′ = −ξ).
-    at: (xiFromPeak: number) => reversibleWaveShape(xiFromPeak + reversiblePeakXi()),
-    afterSwitch: (xiFromPeakAtVertex: number, later: number) => {
-      const xi = xiFromPeakAtVertex + reversiblePeakXi();
-      return -xi < 3 ? null : reversibleWaveShape(xi) * Math.sqrt(-xi / (-xi + later));
-    },
-  },
-  {
-    halfWidth: 1.763,
-    diffusing: false,
-    words: "a Nernstian adsorbed layer's shape, 4e^ξ/(1 + e^ξ)² (Laviron 1974)",
-    at: (xi: number) => 4 * Math.exp(xi) / (1 + Math.exp(xi)) ** 2,
-    // A converted layer carries no current while the potential stays past it.
-    afterSwitch: () => 0,
-  },
-] as const;
-
-export type WaveShape = (typeof SHAPES)[number];
-
-/** The known shape whose |Ep − Ep/2| (in units of RT/nF) a wave's matches within SHAPE_WIDTH_TOLERANCE. */
-export function waveShapeFor(halfWidth: number): WaveShape | undefined {
-  return SHAPES.find((x) => Math.abs(halfWidth / x.halfWidth - 1) <= SHAPE_WIDTH_TOLERANCE);
-}
-
-/**
  * The previous wave's own current extended under this one, when that wave has a known shape (a
- * reversible wave of a dissolved couple, or a Nernstian adsorbed layer; SHAPES): its height above
+ * reversible wave of a dissolved couple, or a Nernstian adsorbed layer; knownWaveShapes.ts): its height above
  * its own baseline times that shape placed by its Ep, over its own baseline. Unlike the fitted
  * decay, this holds right after the peak, so waves 150-300 mV apart are measured as well as lone
  * ones. Used only when the wave's half-peak width is a shape's (±10 %) and, between the waves, the

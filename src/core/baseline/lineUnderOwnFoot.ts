@@ -8,7 +8,7 @@
  * J. Electroanal. Chem. 52 (1974) 355) is as wide: 1.2 % of its peak 150 mV before E°′. A straight
  * line fitted through that convex rise and extrapolated under the peak leans towards it: a sweep
  * that starts 200 mV before E½ read a reversible couple's ip 3 % low (150 mV: 10 %). Here the foot,
- * the wave's height times its shape placed by its Ep (the shapes of extendedDecayBaselines.ts), is
+ * the wave's height times its shape placed by its Ep (knownWaveShapes.ts), is
  * subtracted from the window before the line is fitted, and the height is measured again over the
  * new line (four passes).
  *
@@ -26,7 +26,7 @@ import { crossing } from '../peaks/levelCrossing';
 import { thermalVoltageV } from '../constants';
 import type { BaselineCurve } from './baselineTypes';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
-import { waveShapeFor, type WaveShape } from './extendedDecayBaselines';
+import { waveShapeFor, type WaveShape } from './knownWaveShapes';
 
 const PASSES = 4;
 /** How far past Ep the tail is read (in RT/nF), and the least it may have kept of the height there. */

@@ -11,11 +11,6 @@
  *   for ξ decreasing along the sweep; an oxidation sweep is the same with ξ = −nF(E − E½)/RT.
  */
 
-/** |Ep − Ep/2| of a reversible wave in units of RT/nF (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21). */
-export const REVERSIBLE_HALF_WIDTH = 2.2;
-/** How far a measured |Ep − Ep/2| may stray from a known wave shape's for that shape to be used (our margin). */
-export const SHAPE_WIDTH_TOLERANCE = 0.1;
-
 const START_XI = 12;
 const END_XI = -60;
 const STEP = 0.02;
