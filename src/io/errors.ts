@@ -13,7 +13,8 @@
  * never changes. NOT_A_SWEEP: the potential turns back at nearly every point. BAD_OVERRIDE: a
  * user override that cannot apply. TOO_MANY_COLUMNS: rows wider than any export of one
  * voltammogram. RAGGED_TABLE: most rows far narrower than the table's first rows (padding them
- * would take memory out of all proportion to the file). INTERNAL: a fault in the importer
+ * would take memory out of all proportion to the file). UNREADABLE: the browser could not hand
+ * over the bytes of a picked file (moved, deleted or changed since the pick). INTERNAL: a fault in the importer
  * itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
  */
 export type ImportErrorCode =
@@ -30,6 +31,7 @@ export type ImportErrorCode =
   | 'BAD_OVERRIDE'
   | 'TOO_MANY_COLUMNS'
   | 'RAGGED_TABLE'
+  | 'UNREADABLE'
   | 'INTERNAL';
 
 export class ImportError extends Error {

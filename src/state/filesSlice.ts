@@ -9,7 +9,7 @@ import { naturalCompare } from '../io/naturalOrder';
 import { WorkerLostError } from '../worker/errors';
 import type { ImportOverrides } from '../io/types';
 import { runAheadOf } from '../run/runInput';
-import { createBytesReader, sourceOf, sourceSize } from './fileSource';
+import { bytesOf, sourceOf, sourceSize } from './fileSource';
 import { resolveCell, sameTraceCell, type SeriesCell } from '../run/seriesCell';
 import { mergeFileSettings } from '../run/settings';
 import { toUserError, type FileEntry, type FileInput, type FilesSlice, type RestoredFile, type SliceCreator } from './types';
@@ -32,8 +32,8 @@ const IMPORT_TOGETHER = 8;
  * At most `slots` tasks at once whose weights add up to no more than `budget` (a task heavier
  * than the budget runs alone), first come first served; a finished task hands its place on.
  * With `together` > 1, waiting tasks start only once that many places are free (or nothing
- * runs), so they start in groups: the files of a group are read from the disk in one go
- * (fileSource.ts createBytesReader).
+ * runs), so they start in groups: the requests of a group reach the worker together, and it
+ * reads their files from the disk in one go (worker/importBytes.ts).
  */
 export function createLimiter(slots: number, budget = Infinity, together = 1): <T>(task: () => Promise<T>, weight?: number) => Promise<T> {
   let active = 0;
@@ -67,7 +67,6 @@ export function createLimiter(slots: number, budget = Infinity, together = 1): <
 export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   let nextId = 1;
   const limit = createLimiter(IMPORT_SLOTS, IMPORT_BYTES, IMPORT_TOGETHER);
-  const readBytes = createBytesReader();
   // Work on one file stays in order (a re-import never overtakes the first reading).
   const chains = new Map<string, Promise<void>>();
   /** Told of each file as soon as it is read (before its analysis), while an upload waits for its first one. */
@@ -88,7 +87,8 @@ export const createFilesSlice: SliceCreator<FilesSlice> = (set, get, deps) => {
   async function readFile(entry: FileEntry, overrides: ImportOverrides, id: string) {
     // The snapshot of the file's run is taken as each attempt is sent, after the bytes are read.
     const ask = async () => {
-      const data = await readBytes(entry.source);
+      // A picked file goes as its Blob: the worker reads it, off this thread (worker/importBytes.ts).
+      const data = entry.source instanceof Uint8Array ? await bytesOf(entry.source) : entry.source;
       return deps.client.request('import', { fileName: entry.fileName, data, overrides, ...aheadOf(id) }, {
         onProgress: (fraction) => patch(id, { progress: fraction }),
       });

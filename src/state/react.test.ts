@@ -5,7 +5,7 @@
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { framedStore, READING_FRAME_MS } from './react';
+import { framedStore, insideControlEvent, READING_FRAME_MS } from './react';
 import type { HalfwaveState } from './types';
 
 interface Probe {
@@ -13,9 +13,9 @@ interface Probe {
   count: number;
 }
 
-function probeStore() {
+function probeStore(userAction = () => false) {
   const store = createStore<Probe>()(() => ({ importBatch: null, count: 0 }));
-  const framed = framedStore(store as unknown as StoreApi<HalfwaveState>);
+  const framed = framedStore(store as unknown as StoreApi<HalfwaveState>, userAction);
   const heard = vi.fn();
   framed.subscribe(heard);
   const bump = () => store.setState((s) => ({ count: s.count + 1 }));
@@ -65,5 +65,27 @@ describe('store changes reach components', () => {
     expect(heard).toHaveBeenCalledTimes(2);
     vi.advanceTimersByTime(READING_FRAME_MS);
     expect(heard).toHaveBeenCalledTimes(2);
+  });
+
+  it('a change made by a user\'s action on a control is heard at once, even while files are read, and takes what waited with it', () => {
+    let clicking = false;
+    const { store, heard, bump } = probeStore(() => clicking);
+    store.setState({ importBatch: { done: 0, total: 3 } });
+    vi.advanceTimersByTime(16);
+    expect(heard).toHaveBeenCalledTimes(1);
+    bump();
+    clicking = true;
+    bump();
+    clicking = false;
+    expect(heard).toHaveBeenCalledTimes(2);
+    // Nothing was left waiting.
+    vi.advanceTimersByTime(READING_FRAME_MS * 2);
+    expect(heard).toHaveBeenCalledTimes(2);
+  });
+});
+
+describe('insideControlEvent', () => {
+  it('is false outside any event (a worker answer comes in a promise continuation)', () => {
+    expect(insideControlEvent()).toBe(false);
   });
 });

@@ -18,24 +18,56 @@ type Listener = () => void;
  */
 export const READING_FRAME_MS = 200;
 
-/** The store as React sees it: the same state, with change notices coalesced per frame. */
-export function framedStore(store: StoreApi<HalfwaveState>): StoreApi<HalfwaveState> {
+/**
+ * True while the page handles a user's action on a control: a click, a key, an edited field.
+ * React must hear of that change within the event, or it puts a controlled input (a checkbox, a
+ * field) back to its old value until the next notice, up to READING_FRAME_MS later while files are
+ * read. A worker's answer (a message) and a file pick or drop (which starts a reading) are left
+ * to the frames. `window.event` is the event being handled (WHATWG DOM, "current event").
+ */
+export function insideControlEvent(): boolean {
+  const ev = (globalThis as { event?: unknown }).event;
+  if (typeof Event === 'undefined' || !(ev instanceof Event) || !ev.isTrusted) return false;
+  if (ev.type === 'message' || ev.type === 'drop') return false;
+  return !(typeof HTMLInputElement !== 'undefined' && ev.target instanceof HTMLInputElement && ev.target.type === 'file');
+}
+
+/**
+ * The store as React sees it: the same state, with change notices coalesced per frame, except a
+ * change made by a user's action on a control, heard at once (`insideControlEvent`).
+ */
+export function framedStore(store: StoreApi<HalfwaveState>, now = insideControlEvent): StoreApi<HalfwaveState> {
   const listeners = new Set<Listener>();
   let scheduled = false;
   let waiting: ReturnType<typeof setTimeout> | null = null;
   let lastFlushMs = -Infinity;
+  let cancelFrame: (() => void) | null = null;
   const flush = () => {
     scheduled = false;
+    cancelFrame = null;
     lastFlushMs = performance.now();
     for (const l of [...listeners]) l();
   };
   // A hidden page gets no animation frames: fall back to a timer so it still catches up.
   const nextFrame = () => {
     waiting = null;
-    if (typeof requestAnimationFrame === 'function' && globalThis.document?.visibilityState !== 'hidden') requestAnimationFrame(flush);
-    else setTimeout(flush, 16);
+    if (typeof requestAnimationFrame === 'function' && globalThis.document?.visibilityState !== 'hidden') {
+      const id = requestAnimationFrame(flush);
+      cancelFrame = () => cancelAnimationFrame(id);
+    } else {
+      const id = setTimeout(flush, 16);
+      cancelFrame = () => clearTimeout(id);
+    }
   };
   store.subscribe((state) => {
+    if (now()) {
+      // Whatever waited goes with it.
+      if (waiting) clearTimeout(waiting);
+      cancelFrame?.();
+      waiting = null;
+      flush();
+      return;
+    }
     const reading = state.importBatch !== null;
     // The last file read: draw at the next frame, not at the end of the wait.
     if (waiting && !reading) {

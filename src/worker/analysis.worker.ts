@@ -5,6 +5,7 @@
  */
 import { describeError, CancelledError } from './errors';
 import { runHandler } from './handlers';
+import { startReading } from './importBytes';
 import { collectTransferables, type PageToWorker, type WorkerRequest, type WorkerToPage } from './protocol';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
@@ -60,6 +61,9 @@ scope.onmessage = (event: MessageEvent<PageToWorker>) => {
   // Registered now, so a cancel reaches a request still waiting for its turn (it then ends at once).
   const ctrl = new AbortController();
   running.set(msg.requestId, ctrl);
-  if (msg.type === 'import') imports = imports.then(() => serve(msg, ctrl));
+  if (msg.type === 'import') {
+    startReading(msg.input.data);
+    imports = imports.then(() => serve(msg, ctrl));
+  }
   else void serve(msg, ctrl);
 };

@@ -103,6 +103,15 @@ describe.each(transports)('analysis client over %s', (_name, make) => {
     expect(e.message.indexOf('words.txt', 1)).toBe(-1);
   });
 
+  it('reads a picked file given as its Blob, as it reads the same bytes given as a buffer', async () => {
+    const text = 'E/V,I/A\n' + Array.from(triangle(1), (e, k) => `${e},${Math.sin(k / 7) * 1e-6}`).join('\n');
+    const fromBlob = await client.request('import', { fileName: 'picked.csv', data: new Blob([text]), overrides: {} });
+    const fromBytes = await client.request('import', { fileName: 'picked.csv', data: new TextEncoder().encode(text).buffer, overrides: {} });
+    expect(fromBlob.measurement.potentialV.length).toBe(201);
+    expect(Array.from(fromBlob.measurement.currentA)).toEqual(Array.from(fromBytes.measurement.currentA));
+    expect(fromBlob.sha256).toBe(fromBytes.sha256);
+  });
+
   it('rejects with CancelledError when the signal is already aborted', async () => {
     const ctrl = new AbortController();
     ctrl.abort();
@@ -115,7 +124,7 @@ describe('cancelling an import in the worker', () => {
   it('stops between chunks and answers with CancelledError, never a result', async () => {
     const client = createWorkerClient(await loadWorkerEntry());
     const rows = ['E/V,I/A'];
-    for (let i = 0; i < 200_000; i++) rows.push(`${((i % 2000) < 1000 ? i % 1000 : 1000 - (i % 1000)) / 1000},${Math.sin(i / 50) * 1e-6}`);
+    for (let i = 0; i < 400_000; i++) rows.push(`${((i % 2000) < 1000 ? i % 1000 : 1000 - (i % 1000)) / 1000},${Math.sin(i / 50) * 1e-6}`);
     const data = new TextEncoder().encode(rows.join('\n')).buffer;
     const ctrl = new AbortController();
     const before = posted.length;

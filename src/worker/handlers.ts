@@ -9,6 +9,7 @@ import { findSweepSegments } from '../core/sweeps/findSweepSegments';
 import { importVoltammogramAsync } from '../io';
 import { CancelledError } from './errors';
 import { exportRun } from './exportRun';
+import { importBytes } from './importBytes';
 import { runFitRequest } from './fitRun';
 import type { ImportResult } from '../io/types';
 import { fileRunRequest, runAheadSources, runRequestKey, type RunAhead } from '../run/runInput';
@@ -26,13 +27,14 @@ type Handler<K extends RequestType> = (input: RequestInput<K>, ctx: HandlerConte
 export const handlers: { [K in RequestType]: Handler<K> } = {
   segments: (input) => findSweepSegments(input.potentialV, input.options),
   import: async (input, ctx) => {
+    const data = await importBytes(input.fileName, input.data);
     // Web Crypto copies the bytes when digest() is called (W3C Web Cryptography API, digest(),
     // step 2), so the hash runs beside the reading, on the browser's own thread.
-    const hashing = sha256Hex(input.data);
+    const hashing = sha256Hex(data);
     hashing.catch(() => undefined);
     ctx.progress(0, 'reading');
     // The async form yields between chunks, so a cancel message is seen mid-file.
-    const result = await importVoltammogramAsync(input.fileName, input.data, {
+    const result = await importVoltammogramAsync(input.fileName, data, {
       overrides: input.overrides,
       signal: ctx.signal,
       onProgress: (fraction: number) => ctx.progress(fraction, 'reading rows'),

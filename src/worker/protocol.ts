@@ -21,10 +21,13 @@ export interface RequestMap {
     input: { potentialV: Float64Array; options: Omit<FindSweepSegmentsOptions, 'cycleColumn'> };
     output: SweepSplit;
   };
-  /** Read one export file (io/importVoltammogram); `data` is transferred. */
+  /**
+   * Read one export file (io/importVoltammogram). `data`: a picked file's Blob, which the worker
+   * reads itself (importBytes.ts), or bytes the page holds, transferred.
+   */
   import: {
     /** `ahead`: the rest of the file's run, so the worker analyses the file as soon as it is read (state/runInput.ts). */
-    input: { fileName: string; data: ArrayBuffer; overrides: ImportOverrides; ahead?: RunAhead };
+    input: { fileName: string; data: ArrayBuffer | Blob; overrides: ImportOverrides; ahead?: RunAhead };
     /** `ahead`: the run key and the file's result, when asked for and the run did not fail. */
     output: ImportResult & { sha256: string | null; ahead?: RunAheadResult };
   };
@@ -122,11 +125,11 @@ export type WorkerToPage = ProgressMessage | ResultMessage | ErrorMessage;
 
 /**
  * Buffers of a request that may be moved to the worker. Only the import's file bytes: they were
- * read for this request alone. Voltammogram columns stay with the page (the plot shows them), so
- * they are copied.
+ * read for this request alone (a Blob is a handle, cloned at no cost). Voltammogram columns stay
+ * with the page (the plot shows them), so they are copied.
  */
 export function inputTransferables(request: WorkerRequest): ArrayBuffer[] {
-  return request.type === 'import' ? [request.input.data] : [];
+  return request.type === 'import' && request.input.data instanceof ArrayBuffer ? [request.input.data] : [];
 }
 
 /**
