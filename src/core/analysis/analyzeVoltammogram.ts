@@ -18,7 +18,7 @@ import { toIupacCurrent } from '../conventions/currentConvention';
 import type { Voltammogram } from '../types';
 import { prepareSweepSignals, windowForSpan, type SweepSignals } from '../peaks/sweepSignals';
 import { hampelSpikes } from '../peaks/hampelSpikes';
-import { analyzeCycle } from './analyzeCycle';
+import { analyzeCycles } from './laterCycles';
 import { resolveCell, resolveMethod } from './resolveRun';
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import type { AnalysisWarning, AnalyzeVoltammogramOptions, ResolvedAnalyzeOptions, SpikePoint, VoltammogramAnalysis } from './types';
@@ -59,9 +59,10 @@ export function analyzeResolvedVoltammogram(v: Voltammogram, trace: TraceOptions
   }
   const peakThresholdA = Math.max(resolved.minSignalToNoise * sig.noiseA, resolved.minProminenceA, resolved.minRelativeProminence * range, Number.MIN_VALUE);
   const wanted = new Set(resolved.cycles);
-  const cycles = v.cycles
-    .filter((c) => wanted.has(c.index))
-    .map((c) => (flat ? { index: c.index, peaks: [], couples: [], warnings: [{ code: 'NO_PEAKS' as const, message: 'flat trace: no peaks searched', cycle: c.index }] } : analyzeCycle(sig, c, resolved, peakThresholdA)));
+  const chosen = v.cycles.filter((c) => wanted.has(c.index));
+  const cycles = flat
+    ? chosen.map((c) => ({ index: c.index, peaks: [], couples: [], warnings: [{ code: 'NO_PEAKS' as const, message: 'flat trace: no peaks searched', cycle: c.index }] }))
+    : analyzeCycles(sig, chosen, resolved, peakThresholdA);
   return {
     cycles,
     smoothed: resolved.smoothing === 'off' ? null : { currentA: sig.shownA, derivativeAPerV: sig.shownSlopeAPerV },

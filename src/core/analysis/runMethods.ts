@@ -14,5 +14,6 @@ export const RUN_METHODS: string[] = [
   'Double-layer capacitance: forward–reverse gap/2 = a + A·Cd·v + c·v^½ (Bard & Faulkner 2nd ed. §1.2; the v^½ term a faradaic tail, §6.2)',
   'Reference scales via SHE (Bard & Faulkner inside cover; Sawyer et al. 1995; Int. J. Corrosion 2010, 756950); RHE by the Nernst equation; calomel away from 25 °C after Ives & Janz (1961), Ag/AgCl from E°(T) of Bates & Bower (1954)',
   'iR correction: E − i·Ru with IUPAC current sign',
+  'Cycles after the first: measured on the decay the earlier cycles drive, the current that holds the semi-integral of the faradaic current at its value at the cycle\'s start (Bard & Faulkner 2nd ed. §6.7, convolutive voltammetry), the charging current from its step at the turn taken out first; flagged where the start does not bring the surface back to rest',
   'Isolated bad points: Hampel identifier on a 7-point running median (Hampel, J. Am. Stat. Assoc. 69, 383 (1974); Pearson, IEEE Trans. Control Syst. Technol. 10, 55 (2002))',
 ];

@@ -28,7 +28,8 @@ export type AnalysisWarningCode =
   | 'UNPAIRED_PEAK'
   | 'LOW_SIGNAL'
   | 'SPIKES'
-  | 'WINDOW_EDGE';
+  | 'WINDOW_EDGE'
+  | 'NOT_AT_REST';
 
 export interface AnalysisWarning {
   code: AnalysisWarningCode;
