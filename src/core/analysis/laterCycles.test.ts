@@ -13,6 +13,7 @@ import { FARADAY_C_PER_MOL as F, inverseThermalVoltagePerV } from '../constants'
 import { simulatedVoltammogram } from '../peaks/simulatedVoltammogram';
 import { analyzeVoltammogram } from './analyzeVoltammogram';
 import { EARLIER_CYCLES_NOTE } from './laterCycles';
+import { findSweepSegments } from '../sweeps/findSweepSegments';
 
 const A = 0.0707;
 const D = 1e-5;
@@ -45,6 +46,30 @@ describe('later cycles of a reversible couple', () => {
       }
     }
     expect(a.cycles[0]!.peaks.every((p) => !p.baseline.description.includes(EARLIER_CYCLES_NOTE))).toBe(true);
+  });
+
+  it('a record that starts inside its range (three sweeps a cycle) has its later cycles measured from the vertex where the surface is back at rest', () => {
+    const v = simulatedVoltammogram(base);
+    // A sweep at rest from 0.15 V up to the 0.3 V start is put in front (no faradaic current
+    // there: 0.15 V is 5.8 RT/F from E°′): each cycle then runs 0.15 → 0.3 → −0.3 → 0.15 V.
+    const dE = (v.potentialV[0] as number) - (v.potentialV[1] as number);
+    const dt = (v.timeS![1] as number) - (v.timeS![0] as number);
+    const lead = Math.round(0.15 / dE);
+    const potentialV = Float64Array.from({ length: lead + v.potentialV.length }, (_, k) => (k < lead ? 0.15 + k * dE : (v.potentialV[k - lead] as number)));
+    const currentA = Float64Array.from({ length: potentialV.length }, (_, k) => (k < lead ? 0 : (v.currentA[k - lead] as number)));
+    const timeS = Float64Array.from({ length: potentialV.length }, (_, k) => k * dt);
+    const split = findSweepSegments(potentialV);
+    // Three whole cycles, and the last rise from 0.15 to 0.3 V as a fourth.
+    expect(split.cycles.length).toBe(4);
+    const a = analyzeVoltammogram({ ...v, potentialV, currentA, timeS, segments: split.segments, cycles: split.cycles });
+    const first = a.cycles[0]!.couples[0]!;
+    expect(Math.abs(first.ipcA! / randlesSevcik - 1)).toBeLessThan(0.015);
+    for (const cycle of a.cycles.slice(1, 3)) {
+      const c = cycle.couples[0]!;
+      expect(Math.abs(c.ipcA! / first.ipcA! - 1)).toBeLessThan(0.005);
+      expect(Math.abs(c.ipaA! / first.ipaA! - 1)).toBeLessThan(0.005);
+      expect(Math.abs(c.deltaEpV! - first.deltaEpV!)).toBeLessThan(0.0005);
+    }
   });
 
   it('a slow couple whose return wave still runs at the start gets a NOT_AT_REST warning on its later cycle', () => {

@@ -10,12 +10,13 @@
  * cycle can be measured as a wave from rest and the decay drawn as part of its baseline.
  *
  * In: time (s, or any clock proportional to it), IUPAC current (A) and the sweeps of the whole
- *   record; the cycle; the noise level. Out: the decay over the cycle's points (A, IUPAC sign),
- *   the charging current taken out before it was computed, and the faradaic current at the
- *   cycle's start; 'not-at-rest' when the semi-integral at the turn is still more than
- *   REST_SHARE of its value at the switch before it (the earlier product is not turned back:
- *   a slow couple whose return wave reaches the start potential); or null when the cycle does
- *   not start at a turn of the potential, or when no faradaic current is left there (an
+ *   record; the cycle; the noise level. Out: the decay from the cycle's first turn at which the
+ *   surface is back at rest (the cycle's start, or, for a record that starts inside its range,
+ *   the vertex on that side) to the cycle's end (A, IUPAC sign), with the charging current taken
+ *   out before it was computed and the faradaic current at the turn; 'not-at-rest' for a later
+ *   cycle where no turn brings the product left at the surface below REST_SHARE of its amount at
+ *   the switch before (from the semi-integral: a slow couple whose return wave reaches the start
+ *   potential); or null when no faradaic current is left at the turn (the first cycle, an
  *   adsorbed film, a wave that does not turn back).
  * Source: for planar semi-infinite diffusion the semi-integral of the faradaic current,
  *   I(t) = π^(−½)·∫₀ᵗ i(u)(t − u)^(−½) du, equals nFA·D_O^½·(C_O* − C_O(0, t)) whatever the kinetics
@@ -82,33 +83,48 @@ export interface EarlierCycleInput {
 
 export function earlierCycleDecay(input: EarlierCycleInput, cycle: CycleRange): EarlierCycleDecay | NotAtRest | null {
   const { segments } = input;
-  const firstOf = segments.findIndex((s) => s.cycle === cycle.index);
-  if (firstOf < 1) return null;
-  const before = segments[firstOf - 1]!;
-  const first = segments[firstOf]!;
-  // The cycle must start where the potential turned (a shared vertex, or back to back).
-  if (before.direction === first.direction || !(before.end - 1 === first.start || before.end === first.start)) return null;
+  let least: number | null = null;
+  // The turns at the starts of the cycle's sweeps, in order: the cycle's own start when it is a
+  // turn, else (a cycle that starts inside a sweep) the first vertex within it, and so on.
+  for (let k = Math.max(1, segments.findIndex((s) => s.cycle === cycle.index)); k < segments.length && segments[k]!.cycle === cycle.index; k++) {
+    const before = segments[k - 1]!;
+    const first = segments[k]!;
+    if (before.direction === first.direction || !(before.end - 1 === first.start || before.end === first.start)) continue;
+    const found = decayFromTurn(input, k, cycle.end);
+    if (found === null || found.kind === 'decay') return found;
+    least = Math.min(least ?? Infinity, found.share);
+  }
+  // No turn brought the surface back to rest: said only where earlier cycles left a product.
+  return least !== null && cycle.index > 1 && segments.some((s) => s.cycle < cycle.index) ? { kind: 'not-at-rest', share: least } : null;
+}
+
+/** The decay from the turn that starts sweep k, or why there is none (null: nothing left to carry). */
+function decayFromTurn(input: EarlierCycleInput, k: number, end: number): EarlierCycleDecay | NotAtRest | null {
+  const { segments } = input;
+  const before = segments[k - 1]!;
   const turn = before.end - 1;
-  const end = cycle.end;
-  const sign = (k: number) => (segments[k]!.direction === 'positive' ? 1 : -1);
-  const step = chargingStep(input, turn, before, first, sign(firstOf - 1), sign(firstOf));
+  const sign = (m: number) => (segments[m]!.direction === 'positive' ? 1 : -1);
+  const step = chargingStep(input, turn, before, segments[k]!, sign(k - 1), sign(k));
   if (!step) return null;
   const { chargingA, atTurnA } = step;
   // The faradaic history up to the turn, the charging taken out with each sweep's sign.
   const faradaic = new Float64Array(turn + 1);
   let largest = 0;
-  for (let k = 0; k < firstOf; k++) {
-    const seg = segments[k]!;
-    const s = sign(k);
+  for (let m = 0; m < k; m++) {
+    const seg = segments[m]!;
+    const s = sign(m);
     // A vertex shared with the sweep before belongs to that sweep.
-    const own = k > 0 && segments[k - 1]!.end - 1 === seg.start ? seg.start + 1 : seg.start;
+    const own = m > 0 && segments[m - 1]!.end - 1 === seg.start ? seg.start + 1 : seg.start;
     for (let j = own; j < Math.min(seg.end, turn + 1); j++) {
       faradaic[j] = (input.currentA[j] as number) - s * chargingA;
       largest = Math.max(largest, Math.abs(faradaic[j]!));
     }
   }
   if (!(Math.abs(atTurnA) > Math.max(3 * input.noiseA, LEFT_SHARE * largest))) return null;
-  const held = heldContinuation(input.timeS, faradaic, before.start, turn, end, atTurnA);
+  // The switch before the turn: the start of the run of sweeps that ends at it.
+  let run = k - 1;
+  while (run > 0 && segments[run - 1]!.direction === before.direction) run--;
+  const held = heldContinuation(input.timeS, faradaic, segments[run]!.start, turn, end, atTurnA);
   if (!(held.share <= REST_SHARE)) return { kind: 'not-at-rest', share: held.share };
   return { kind: 'decay', startIndex: turn, currentA: held.currentA, chargingA, atTurnA };
 }
