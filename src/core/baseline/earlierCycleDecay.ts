@@ -107,19 +107,11 @@ function decayFromTurn(input: EarlierCycleInput, k: number, end: number): Earlie
   const step = chargingStep(input, turn, before, segments[k]!, sign(k - 1), sign(k));
   if (!step) return null;
   const { chargingA, atTurnA } = step;
-  // The faradaic history up to the turn, the charging taken out with each sweep's sign.
-  const faradaic = new Float64Array(turn + 1);
+  // The faradaic history up to the turn: the charging taken out with each sweep's sign.
+  const signs = sweepSigns(segments, turn + 1);
+  const faradaic = (j: number) => (input.currentA[j] as number) - (signs[j] as number) * chargingA;
   let largest = 0;
-  for (let m = 0; m < k; m++) {
-    const seg = segments[m]!;
-    const s = sign(m);
-    // A vertex shared with the sweep before belongs to that sweep.
-    const own = m > 0 && segments[m - 1]!.end - 1 === seg.start ? seg.start + 1 : seg.start;
-    for (let j = own; j < Math.min(seg.end, turn + 1); j++) {
-      faradaic[j] = (input.currentA[j] as number) - s * chargingA;
-      largest = Math.max(largest, Math.abs(faradaic[j]!));
-    }
-  }
+  for (let j = 0; j <= turn; j++) largest = Math.max(largest, Math.abs(faradaic(j)));
   if (!(Math.abs(atTurnA) > Math.max(3 * input.noiseA, LEFT_SHARE * largest))) return null;
   // The switch before the turn: the start of the run of sweeps that ends at it.
   let run = k - 1;
@@ -127,6 +119,16 @@ function decayFromTurn(input: EarlierCycleInput, k: number, end: number): Earlie
   const held = heldContinuation(input.timeS, faradaic, segments[run]!.start, turn, end, atTurnA);
   if (!(held.share <= REST_SHARE)) return { kind: 'not-at-rest', share: held.share };
   return { kind: 'decay', startIndex: turn, currentA: held.currentA, chargingA, atTurnA };
+}
+
+/** +1 on positive-going sweeps, −1 on negative-going ones, for the first `length` points; a vertex shared by two sweeps belongs to the earlier. */
+function sweepSigns(segments: SweepSegment[], length: number): Int8Array {
+  const out = new Int8Array(length);
+  for (const [m, seg] of segments.entries()) {
+    const own = m > 0 && segments[m - 1]!.end - 1 === seg.start ? seg.start + 1 : seg.start;
+    for (let j = own; j < Math.min(seg.end, length); j++) out[j] = seg.direction === 'positive' ? 1 : -1;
+  }
+  return out;
 }
 
 /**
@@ -173,7 +175,7 @@ function chargingStep(input: EarlierCycleInput, turn: number, before: SweepSegme
  * at the turn over its value at the switch before it (`switchAt`), the share of the product
  * still at the surface. The constant π^(−½) and the factor 2 of the step-function weights cancel.
  */
-function heldContinuation(timeS: Float64Array, faradaic: Float64Array, switchAt: number, turn: number, end: number, atTurnA: number): { currentA: Float64Array; share: number } {
+function heldContinuation(timeS: Float64Array, faradaic: (j: number) => number, switchAt: number, turn: number, end: number, atTurnA: number): { currentA: Float64Array; share: number } {
   const grid = blockGrid(timeS, faradaic, turn, end);
   const { t, i, turnAt } = grid;
   const n = t.length;
@@ -241,7 +243,7 @@ function uniformStart(t: Float64Array): number | null {
  * held over (previous end, own end], as the integral's step form takes it. Points after the turn
  * carry zeros, to be solved for.
  */
-function blockGrid(timeS: Float64Array, faradaic: Float64Array, turn: number, end: number): { t: Float64Array; i: Float64Array; turnAt: number } {
+function blockGrid(timeS: Float64Array, faradaic: (j: number) => number, turn: number, end: number): { t: Float64Array; i: Float64Array; turnAt: number } {
   const size = Math.max(1, Math.ceil(end / MAX_POINTS));
   const ends: number[] = [];
   for (let k = turn; k > 0; k -= size) ends.push(k);
@@ -256,7 +258,7 @@ function blockGrid(timeS: Float64Array, faradaic: Float64Array, turn: number, en
     t[b + 1] = timeS[last] as number;
     if (last <= turn) {
       let sum = 0;
-      for (let k = from; k <= last; k++) sum += faradaic[k] as number;
+      for (let k = from; k <= last; k++) sum += faradaic(k);
       i[b + 1] = sum / (last - from + 1);
     }
     from = last + 1;
