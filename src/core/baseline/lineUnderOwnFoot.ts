@@ -12,13 +12,16 @@
  * subtracted from the window before the line is fitted, and the height is measured again over the
  * new line (four passes).
  *
- * Only for a wave whose |Ep − Ep/2| is a known shape's (2.20 RT/nF for a dissolved couple, 1.763
- * for a Nernstian film; ± 10 %) and whose tail agrees (a dissolved couple's stays up, a film's
- * falls). A quasi-reversible or resistance-broadened wave that still passes lies further out than
- * its E½: the foot placed from its Ep is then smaller than the real one, so the correction falls
- * short. The diffusion shape starts far before the wave; a sweep that starts only 150 mV before E½
- * (with the solution at rest) has its own start-up current as well, and ip reads 1 % high there.
- * Null otherwise (the plain line is then used).
+ * For a wave whose |Ep − Ep/2| is a known shape's (2.20 RT/nF for a dissolved couple, 1.763 for a
+ * Nernstian film; ± 10 %) and whose tail agrees (a dissolved couple's stays up, a film's falls).
+ * A wider wave with a dissolved couple's tail has slow electron transfer: its foot rises more
+ * slowly (as e^(−αξ)) and reaches further, and its shape comes from kineticWaveShape.ts, chosen
+ * by the width measured over each pass's line (α = 0.5 up to an irreversible wave's 3.71 RT/nF,
+ * beyond it irreversible with α from the width). Near the irreversible end the width barely moves
+ * while the far foot still does, so a sweep that starts within about 300 mV of such a wave's Ep
+ * keeps part of the error (README, Known limits). The diffusion shape starts far before the wave;
+ * a sweep that starts only 150 mV before E½ (with the solution at rest) has its own start-up
+ * current as well, and ip reads 1 % high there. Null otherwise (the plain line is then used).
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
@@ -27,6 +30,7 @@ import { thermalVoltageV } from '../constants';
 import type { BaselineCurve } from './baselineTypes';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
 import { waveShapeFor, type WaveShape } from './knownWaveShapes';
+import { kineticWaveShapeFor, type KineticWaveShape } from './kineticWaveShape';
 
 const PASSES = 4;
 /** How far past Ep the tail is read (in RT/nF), and the least it may have kept of the height there. */
@@ -48,6 +52,7 @@ export function lineUnderOwnFoot(
   const xiFromPeak = (j: number) => -s * nfrt * (sig.potentialV[j]! - peak.potentialV);
   let foot = (_j: number) => 0;
   let shape: WaveShape | undefined;
+  let kinetic: KineticWaveShape | null = null;
   for (let pass = 0; pass <= PASSES; pass++) {
     const line = lineThrough(sig, fitStart, fitEnd, foot);
     if (!line) return null;
@@ -55,15 +60,35 @@ export function lineUnderOwnFoot(
     const height = s * (sig.locatingA[peak.index]! - under(peak.index));
     if (!(height > 0)) return null;
     const halfV = crossing(sig, (j) => s * (sig.locatingA[j]! - under(j)), peak.index, spanStart, -1, height / 2);
-    const found = halfV === null ? undefined : waveShapeFor(Math.abs(peak.potentialV - halfV) * nfrt);
-    if (!found || (shape && found !== shape)) return null;
-    if (pass === 0 && diffusing(sig, peak, under, height, nfrt, s) !== found.diffusing) return null;
-    shape = found;
-    if (pass < PASSES) foot = (j) => s * height * found.at(xiFromPeak(j));
+    if (halfV === null) return null;
+    const width = Math.abs(peak.potentialV - halfV) * nfrt;
+    const found = waveShapeFor(width);
+    if (pass === 0) {
+      const tail = diffusing(sig, peak, under, height, nfrt, s);
+      if (found) {
+        if (tail !== found.diffusing) return null;
+      } else {
+        // Wider than a reversible wave, with a dissolved species' tail: slow electron transfer.
+        kinetic = tail ? kineticWaveShapeFor(width) : null;
+        if (!kinetic) return null;
+      }
+    }
+    let at: (xi: number) => number;
+    if (kinetic) {
+      // The width is measured again over each new line; the shape follows it.
+      kinetic = kineticWaveShapeFor(width) ?? kinetic;
+      at = kinetic.at;
+    } else {
+      if (!found || (shape && found !== shape)) return null;
+      shape = found;
+      at = found.at;
+    }
+    if (pass < PASSES) foot = (j) => s * height * at(xiFromPeak(j));
   }
+  const words = kinetic ? kinetic.words : shape!.words;
   return linearPrePeakBaseline(
     { potentialV: sig.potentialV, currentA: sig.currentA, fitStart, fitEnd, spanStart, spanEnd: seg.end },
-    { less: { what: `the wave's own foot, from ${shape!.words}`, currentA: foot } },
+    { less: { what: `the wave's own foot, from ${words}`, currentA: foot } },
   ).curve;
 }
 
