@@ -46,6 +46,8 @@ export interface BaselineRequest {
   forwardDecayEnd?: number;
   /** n and T of the cell: the reversible shape of a previous wave (reversibleTailOfPrevious) is drawn with them. */
   wave?: { temperatureK: number; electronCount: number };
+  /** Potential of the peak's partner in its couple, where there is one (places a slow wave's foot, lineUnderOwnFoot.ts). */
+  partnerV?: number;
 }
 
 export interface BaselineOutcome {
@@ -145,7 +147,7 @@ function preWindow(sig: SweepSignals, peak: PeakCandidate, regionStart: number, 
   return w ? [seg.start + w.start, seg.start + w.end] : null;
 }
 
-type WindowRequest = Pick<BaselineRequest, 'regionStart' | 'marginPoints' | 'wave'>;
+type WindowRequest = Pick<BaselineRequest, 'regionStart' | 'marginPoints' | 'wave' | 'partnerV'>;
 
 /**
  * The pre-peak line; in a window found automatically, the foot of a wave of known shape (a
@@ -155,7 +157,7 @@ function linearCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, s
   const seg = sig.segments[peak.segmentIndex]!;
   const w = preWindow(sig, peak, r.regionStart, spec, r.marginPoints);
   if (!w || w[1] - w[0] < 2) return flatCurve(sig, peak, r.regionStart);
-  const footless = !spec?.anchorsV && r.wave ? lineUnderOwnFoot(sig, peak, w, r.wave) : null;
+  const footless = !spec?.anchorsV && r.wave ? lineUnderOwnFoot(sig, peak, w, r.wave, r.partnerV) : null;
   if (footless) return footless;
   const spanStart = Math.min(w[0], peak.index);
   return linearPrePeakBaseline({ ...sig, fitStart: w[0], fitEnd: w[1], spanStart, spanEnd: seg.end }).curve;

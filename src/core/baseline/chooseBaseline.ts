@@ -52,7 +52,7 @@ export function chooseBaseline(ctx: BaselineContext, cand: PeakCandidate): Basel
   const previous = method === 'nicholson' && spec === null && before ? (drawn.get(before) ?? null) : null;
   // A forward sweep that ends in a breakdown current: its wave's decay is fitted before the breakdown starts.
   const decayEnd = forward ? ctx.edgeSweeps?.get(forward.peak.segmentIndex) : undefined;
-  return { method, spec, regionStart: prePeakRegionStart(sig, cand, ordered), marginPoints: footMarginPoints(sig, cand, ctx.wave), forward, previous, wave: ctx.wave, ...(decayEnd !== undefined ? { forwardDecayEnd: decayEnd } : {}) };
+  return { method, spec, regionStart: prePeakRegionStart(sig, cand, ordered), marginPoints: footMarginPoints(sig, cand, ctx.wave), forward, previous, wave: ctx.wave, ...(fwd ? { partnerV: fwd.potentialV } : {}), ...(decayEnd !== undefined ? { forwardDecayEnd: decayEnd } : {}) };
 }
 
 function findBaselineSpec(specs: BaselineSpec[], c: PeakCandidate, cycle: number): BaselineSpec | null {

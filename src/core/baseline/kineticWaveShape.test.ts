@@ -22,15 +22,22 @@ describe('slow-electron-transfer wave', () => {
     expect(Math.abs(m.peakCurrentFunction / (0.4958 * Math.sqrt(alpha)) - 1)).toBeLessThan(0.01);
   });
 
-  it('picks a shape by width: none at a reversible wave\'s, 1 at the peak, a foot that falls away before it', () => {
-    expect(kineticWaveShapeFor(2.2)).toBeNull();
-    for (const width of [2.6, 3.2, 5]) {
-      const s = kineticWaveShapeFor(width)!;
-      expect(s.at(0)).toBeCloseTo(1, 3);
-      expect(s.at(3)).toBeLessThan(s.at(1));
-      expect(s.at(20)).toBeLessThan(0.01);
-    }
-    // Beyond an irreversible wave's width at α = 0.5 the wave is irreversible with α = 1.857/width.
-    expect(kineticWaveShapeFor(1.857 / 0.35)!.words).toMatch(/α = 0\.35/);
+  it('places a wave by its peak\'s distance from its couple\'s midpoint, and gives none where the width disagrees (α not 0.5)', () => {
+    // ψ = 1 at α = 0.5: |Ep − E°′| and |Ep − Ep/2| of that wave.
+    const m = slowWaveMeasures(1, 0.5);
+    expect(m.halfWidth).toBeGreaterThan(2.3);
+    expect(kineticWaveShapeFor(2.2, 3)).toBeNull();
+    const s = kineticWaveShapeFor(m.halfWidth, pastFormalOf(1))!;
+    expect(s.words).toMatch(/ψ ≈ 1\.0 /);
+    expect(s.at(0)).toBeCloseTo(1, 3);
+    expect(s.at(3)).toBeLessThan(s.at(1));
+    expect(s.at(20)).toBeLessThan(0.01);
+    // The same distance with a width 20 % off: α is not 0.5.
+    expect(kineticWaveShapeFor(m.halfWidth * 1.2, pastFormalOf(1))).toBeNull();
   });
 });
+
+/** The peak's distance past E°′ (RT/nF) of the α = 0.5 wave at ψ. */
+function pastFormalOf(psi: number): number {
+  return slowWaveMeasures(psi, 0.5).pastFormal;
+}

@@ -11,12 +11,9 @@
  *   (R. S. Nicholson, Anal. Chem. 37 (1965) 1351, eqs. 1-9; H. Matsuda, Y. Ayabe, Z. Elektrochem.
  *   59 (1955) 494, from memory). Solved by product integration with χ constant on each step of
  *   0.05 in σt, from ξ = +12 to ξ = −40, as reversibleWaveShape.ts solves the reversible case.
- * Which wave: one measurement, |Ep − Ep/2|, cannot give both ψ and α. Up to the width of an
- *   irreversible wave with α = 0.5 (1.857/0.5 = 3.71 RT/nF, Bard & Faulkner 2nd ed. (2001) eq.
- *   6.3.6), α is taken as 0.5 and ψ is the one whose wave has that width (shapes on a grid of ψ,
- *   blended by width); beyond it the wave is irreversible, with α = 1.857/width. The foot far before
- *   the wave rises as e^(−αξ), so an α that is wrong by 0.1 moves the foot 200 mV before E½ by
- *   about a fifth of its (then few per cent) size.
+ * Which wave: α is taken as 0.5, and ψ is placed by the peak's distance from the midpoint of its
+ *   couple (E°′ when α = 0.5); the wave's width must agree with that wave's (kineticWaveShapeFor).
+ *   A wave with no return peak, or one whose width says α is not 0.5, gets no shape.
  * Out: the shape relative to its peak, 1 at the peak, for ξ counted from the peak and decreasing
  *   along the sweep (an oxidation sweep is the same with ξ = −nF(E − E°′)/RT).
  */
@@ -26,13 +23,15 @@ const END_XI = -40;
 const STEP = 0.05;
 /** ψ of the shapes at α = 0.5, from nearly reversible to irreversible. */
 const PSI_GRID = [20, 7, 3, 2, 1.5, 1, 0.7, 0.5, 0.35, 0.25, 0.17, 0.1, 0.05, 0.02, 0.005];
-/** ψ of an irreversible wave (its width no longer moves with ψ). */
-const IRREVERSIBLE_PSI = 0.005;
-/** |Ep − Ep/2| of a totally irreversible wave is 1.857/α in units of RT/nF (Bard & Faulkner eq. 6.3.6). */
-const IRREVERSIBLE_WIDTH_TIMES_ALPHA = 1.857;
+/** Further down, for placing a wave by its peak's distance from E°′ (that still moves as ψ falls). */
+const PSI_FAR = [0.002, 0.0007, 0.0002, 0.00005];
+/** How far the measured width may stray from that of the wave placed by its peak (our margin: α = 0.3 or 0.7 strays 20 % and more). */
+const WIDTH_AGREES = 0.1;
 
 interface Shape {
   chi: Float64Array;
+  /** ξ of the peak past E°′ (positive), in units of RT/nF. */
+  pastFormal: number;
   /** Position of the peak in steps (fractional), and its χ. */
   peakAt: number;
   peak: number;
@@ -72,7 +71,7 @@ function solve(psi: number, alpha: number): Shape {
   let half = top;
   while (half > 0 && chi[half]! > peak / 2) half--;
   const halfAt = half + (peak / 2 - chi[half]!) / (chi[half + 1]! - chi[half]!);
-  const shape = { chi, peakAt, peak, halfWidth: (peakAt - halfAt) * STEP };
+  const shape = { chi, peakAt, peak, halfWidth: (peakAt - halfAt) * STEP, pastFormal: (peakAt + 0.5) * STEP - START_XI };
   shapes.set(key, shape);
   return shape;
 }
@@ -96,32 +95,40 @@ export interface KineticWaveShape {
 }
 
 /**
- * The shape of a diffusing wave whose |Ep − Ep/2| is `halfWidth` RT/nF, wider than a reversible
- * wave's 2.20; null at or below that width.
+ * The shape of a diffusing wave whose |Ep − Ep/2| is `halfWidth` RT/nF (wider than a reversible
+ * wave's 2.20) and whose peak lies `pastMidpoint` RT/nF from the midpoint of its couple (ΔEp/2,
+ * from the return peak). With α = 0.5 that midpoint is E°′, and the peak's distance from it
+ * places the wave on the ψ scale; the width must then agree with that wave's within WIDTH_AGREES,
+ * or α is not 0.5 and no shape is given (null), as at or below a reversible wave's width.
+ * The width alone does not place a wave: near the irreversible end it hardly moves while the far
+ * foot still does, and a shape placed by it (or an α taken from it) read irreversible waves far
+ * from α = 0.5 up to 11 % high from a start 575 mV before their peak (independent simulation).
  */
-export function kineticWaveShapeFor(halfWidth: number): KineticWaveShape | null {
-  const grid = PSI_GRID.map((psi) => solve(psi, 0.5));
-  if (!(halfWidth > grid[0]!.halfWidth)) return null;
-  const widest = grid[grid.length - 1]!;
-  if (halfWidth >= widest.halfWidth) {
-    const alpha = Math.min(0.5, Math.max(0.1, Math.round((IRREVERSIBLE_WIDTH_TIMES_ALPHA / halfWidth) * 100) / 100));
-    const s = solve(IRREVERSIBLE_PSI, alpha);
-    return { words: `an irreversible wave's shape with α = ${alpha.toFixed(2)} from its width (Nicholson 1965)`, at: (x) => valueAt(s, x) };
-  }
+export function kineticWaveShapeFor(halfWidth: number, pastMidpoint: number): KineticWaveShape | null {
+  const psis = [...PSI_GRID, ...PSI_FAR];
+  const all = psis.map((psi) => solve(psi, 0.5));
+  if (!(halfWidth > all[0]!.halfWidth)) return null;
+  const placed = blend(all, psis, (x) => x.pastFormal, pastMidpoint);
+  return Math.abs(halfWidth / placed.halfWidth - 1) <= WIDTH_AGREES ? placed : null;
+}
+
+/** The shapes on either side of `value` of a measure that grows along the grid, blended linearly in it. */
+function blend(shapesOnGrid: Shape[], psis: number[], measure: (s: Shape) => number, value: number): KineticWaveShape & { halfWidth: number } {
   let k = 1;
-  while (grid[k]!.halfWidth < halfWidth) k++;
-  const lo = grid[k - 1]!;
-  const hi = grid[k]!;
-  const f = (halfWidth - lo.halfWidth) / (hi.halfWidth - lo.halfWidth);
-  const psi = Math.exp(Math.log(PSI_GRID[k - 1]!) * (1 - f) + Math.log(PSI_GRID[k]!) * f);
+  while (k < shapesOnGrid.length - 1 && measure(shapesOnGrid[k]!) < value) k++;
+  const lo = shapesOnGrid[k - 1]!;
+  const hi = shapesOnGrid[k]!;
+  const f = Math.min(1, Math.max(0, (value - measure(lo)) / (measure(hi) - measure(lo))));
+  const psi = Math.exp(Math.log(psis[k - 1]!) * (1 - f) + Math.log(psis[k]!) * f);
   return {
-    words: `a quasi-reversible wave's shape, ψ ≈ ${psi.toPrecision(2)} with α = 0.5 from its width (Nicholson 1965)`,
+    words: `a quasi-reversible wave's shape, ψ ≈ ${psi.toPrecision(2)} with α = 0.5, placed by its peak's distance from the midpoint of its couple (Nicholson 1965)`,
     at: (x) => valueAt(lo, x) * (1 - f) + valueAt(hi, x) * f,
+    halfWidth: lo.halfWidth * (1 - f) + hi.halfWidth * f,
   };
 }
 
-/** |Ep − Ep/2| (RT/nF) and the peak of √π·χ of the wave at ψ and α, as the tables give them (for checks). */
-export function slowWaveMeasures(psi: number, alpha: number): { halfWidth: number; peakCurrentFunction: number } {
+/** |Ep − Ep/2| and |Ep − E°′| (RT/nF) and the peak of √π·χ of the wave at ψ and α (for checks). */
+export function slowWaveMeasures(psi: number, alpha: number): { halfWidth: number; pastFormal: number; peakCurrentFunction: number } {
   const s = solve(psi, alpha);
-  return { halfWidth: s.halfWidth, peakCurrentFunction: Math.sqrt(Math.PI) * s.peak };
+  return { halfWidth: s.halfWidth, pastFormal: s.pastFormal, peakCurrentFunction: Math.sqrt(Math.PI) * s.peak };
 }

@@ -15,13 +15,12 @@
  * For a wave whose |Ep − Ep/2| is a known shape's (2.20 RT/nF for a dissolved couple, 1.763 for a
  * Nernstian film; ± 10 %) and whose tail agrees (a dissolved couple's stays up, a film's falls).
  * A wider wave with a dissolved couple's tail has slow electron transfer: its foot rises more
- * slowly (as e^(−αξ)) and reaches further, and its shape comes from kineticWaveShape.ts, chosen
- * by the width measured over each pass's line (α = 0.5 up to an irreversible wave's 3.71 RT/nF,
- * beyond it irreversible with α from the width). Near the irreversible end the width barely moves
- * while the far foot still does, so a sweep that starts within about 300 mV of such a wave's Ep
- * keeps part of the error (README, Known limits). The diffusion shape starts far before the wave;
- * a sweep that starts only 150 mV before E½ (with the solution at rest) has its own start-up
- * current as well, and ip reads 1 % high there. Null otherwise (the plain line is then used).
+ * slowly (as e^(−αξ)) and reaches further, and its shape comes from kineticWaveShape.ts: α = 0.5,
+ * placed by the peak's distance from the midpoint of its couple (`partnerV`, the return peak), its
+ * width agreeing. A slow wave with no return peak, or one whose width says α is far from 0.5,
+ * keeps the plain line.
+ * The diffusion shape starts far before the wave; a sweep that starts only 150 mV before E½
+ * (with the solution at rest) has its own start-up current as well, and ip reads 1 % high there. Null otherwise (the plain line is then used).
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
@@ -42,6 +41,7 @@ export function lineUnderOwnFoot(
   peak: PeakCandidate,
   window: [number, number],
   wave: { temperatureK: number; electronCount: number },
+  partnerV?: number,
 ): BaselineCurve | null {
   const seg = sig.segments[peak.segmentIndex]!;
   const s = seg.direction === 'positive' ? 1 : -1;
@@ -50,6 +50,8 @@ export function lineUnderOwnFoot(
   const spanStart = Math.min(fitStart, peak.index);
   // ξ of the wave at point j, counted from its peak and decreasing along the sweep.
   const xiFromPeak = (j: number) => -s * nfrt * (sig.potentialV[j]! - peak.potentialV);
+  // The peak's distance from the midpoint of its couple (E°′ for α = 0.5), in RT/nF.
+  const pastMidpoint = partnerV === undefined ? undefined : (Math.abs(peak.potentialV - partnerV) / 2) * nfrt;
   let foot = (_j: number) => 0;
   let shape: WaveShape | undefined;
   let kinetic: KineticWaveShape | null = null;
@@ -69,14 +71,14 @@ export function lineUnderOwnFoot(
         if (tail !== found.diffusing) return null;
       } else {
         // Wider than a reversible wave, with a dissolved species' tail: slow electron transfer.
-        kinetic = tail ? kineticWaveShapeFor(width) : null;
+        kinetic = tail && pastMidpoint !== undefined ? kineticWaveShapeFor(width, pastMidpoint) : null;
         if (!kinetic) return null;
       }
     }
     let at: (xi: number) => number;
     if (kinetic) {
       // The width is measured again over each new line; the shape follows it.
-      kinetic = kineticWaveShapeFor(width) ?? kinetic;
+      kinetic = kineticWaveShapeFor(width, pastMidpoint!) ?? kinetic;
       at = kinetic.at;
     } else {
       if (!found || (shape && found !== shape)) return null;
