@@ -26,6 +26,24 @@ export async function waitForFiles(page: Page, count: number, timeout = 90_000):
   await waitForAnalysis(page);
 }
 
+/**
+ * Opens a main view (trace, series, fit, report) and waits until it is the one shown. On a busy
+ * machine a click can land while the layout still moves (a notice appears, a table grows) and
+ * miss its button; it is then made again, up to three times.
+ */
+export async function showView(page: Page, view: 'trace' | 'series' | 'fit' | 'report'): Promise<void> {
+  const button = page.getByTestId(`view-${view}`);
+  for (let attempt = 1; ; attempt++) {
+    await button.click();
+    try {
+      await page.waitForFunction((b) => document.querySelector(`[data-testid=view-${b}]`)?.getAttribute('aria-checked') === 'true', view, { timeout: 10_000, polling: 50 });
+      return;
+    } catch (err) {
+      if (attempt >= 3) throw err;
+    }
+  }
+}
+
 /** Waits until the selected file's analysis is up to date. */
 export async function waitForAnalysis(page: Page): Promise<void> {
   await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent === 'up to date', null, { timeout: 30_000, polling: 100 });

@@ -17,7 +17,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../../src/cli/main';
 import { simulateCv } from '../../src/core/simulation';
 import type { CvSimulationInput } from '../../src/core/simulation';
-import { coupleCells, demoFileCount, waitForAnalysis, waitForFiles } from './appHelpers';
+import { coupleCells, demoFileCount, waitForAnalysis, waitForFiles, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 const D = 1e-5;
@@ -53,7 +53,7 @@ async function folder(name: string, files: Record<string, string>): Promise<stri
 }
 
 async function openSeries(page: Page, group: string): Promise<void> {
-  await page.getByTestId('view-series').click();
+  await showView(page, 'series');
   await page.getByTestId('series-group').selectOption(group);
   await page.getByTestId('series-table').waitFor({ timeout: 30_000 });
 }
@@ -82,7 +82,7 @@ describe('the headers, the defaults and the windows', () => {
     await openSeries(page, 'pt wire');
     const d = Number(await page.getByTestId('series-table').getAttribute('data-d-first'));
     expect(Math.abs(d / D - 1)).toBeLessThan(0.05);
-    await page.getByTestId('view-trace').click();
+    await showView(page, 'trace');
   });
 
   it('Ru left unset while ΔEp grows with v is named as the default behind k°', async () => {

@@ -9,7 +9,7 @@
  *   (Bard & Faulkner 2001, §6.2), within 10 % (ohmic drop of 120 Ω and noise).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, waitForAnalysis, waitForFiles } from './appHelpers';
+import { demoFileCount, waitForAnalysis, waitForFiles, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 const SUPERSCRIPT: Record<string, string> = { '⁻': '-', '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9' };
@@ -58,7 +58,7 @@ describe('each series has its own cell', () => {
 
   it('the film series gives Γ from charge within 10 % of 6e-11 mol/cm²', async () => {
     await app.page.locator('[data-testid=file-row][data-file-name^="film_FcSAM"] .file-name').first().click();
-    await app.page.getByTestId('view-series').click();
+    await showView(app.page, 'series');
     await showSeries(app, 'film FcSAM');
     expect(await app.page.getByTestId('series-cell').textContent()).toContain('A = 0.0314 cm²');
     const gamma = await seriesValue(app, 'Γ from charge');
@@ -83,7 +83,7 @@ describe('each series has its own cell', () => {
     await showSeries(app, 'quasi FcAmide');
     await page.getByTestId('undo').click();
     await page.waitForFunction(() => (document.querySelector('[data-testid=area]') as HTMLInputElement | null)?.value === '0.0707', null, { timeout: 10_000 });
-    await page.getByTestId('view-trace').click();
+    await showView(page, 'trace');
   });
 
   it('stayed free of console errors, page errors and outside requests', () => {

@@ -5,7 +5,7 @@
  * enforced: an inline script, eval and new Function are refused.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, readPlot, waitForFiles } from './appHelpers';
+import { demoFileCount, readPlot, waitForFiles, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 function directives(policy: string): Map<string, string[]> {
@@ -38,10 +38,10 @@ describe('Content-Security-Policy of the built page', () => {
 
   it('the app works under it: workers read the demo, Plotly draws the trace and series plots and saves an SVG through the figure export', async () => {
     expect((await readPlot(app.page)).traces.length).toBeGreaterThan(0);
-    await app.page.getByTestId('view-series').click();
+    await showView(app.page, 'series');
     await app.page.getByTestId('series-table').waitFor({ timeout: 30_000 });
     expect((await readPlot(app.page, 'series-current-plot')).traces.length).toBeGreaterThan(0);
-    await app.page.getByTestId('view-trace').click();
+    await showView(app.page, 'trace');
     const plot = app.page.getByTestId('trace-plot');
     await plot.hover();
     const [download] = await Promise.all([app.page.waitForEvent('download', { timeout: 60_000 }), app.page.getByTestId('trace-svg').click()]);

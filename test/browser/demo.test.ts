@@ -4,7 +4,7 @@
  * demo series, and the polarographic switch flips the plot.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, readPlot, simulatedCsv, waitForFiles, waitForRedraw } from './appHelpers';
+import { demoFileCount, readPlot, simulatedCsv, waitForFiles, waitForRedraw, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 describe('demo data at start', () => {
@@ -62,12 +62,12 @@ describe('demo data at start', () => {
   });
 
   it('fits a scan-rate series from the demo files', async () => {
-    await app.page.getByTestId('view-series').click();
+    await showView(app.page, 'series');
     await app.page.getByTestId('series-table').waitFor({ timeout: 30_000 });
     expect(await app.page.getByTestId('series-table').textContent()).toMatch(/log\|ip\| vs log v slope\s*0\.\d{3}/);
     const plot = await readPlot(app.page, 'series-current-plot');
     expect(plot.traces.some((t) => t.name.includes('fit'))).toBe(true);
-    await app.page.getByTestId('view-trace').click();
+    await showView(app.page, 'trace');
   });
 
   it('opens the bench-safety note with the mercury and hydrogen cautions', async () => {

@@ -8,7 +8,7 @@ import { readFile } from 'node:fs/promises';
 import { unzipSync, strFromU8 } from 'fflate';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, waitForFiles } from './appHelpers';
+import { demoFileCount, waitForFiles, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 async function download(page: Page, testId: string): Promise<{ name: string; bytes: Buffer }> {
@@ -52,7 +52,7 @@ describe('exports', () => {
 
   it('a series plot as SVG', async () => {
     const page = app.page;
-    await page.getByTestId('view-series').click();
+    await showView(page, 'series');
     await page.getByTestId('series-table').waitFor({ timeout: 60_000 });
     await page.getByTestId('series-figure').selectOption('current');
     const svg = (await download(page, 'series-figure-svg')).bytes.toString('utf8');
@@ -62,7 +62,7 @@ describe('exports', () => {
 
   it('the notebook report shows formulas with sources, the parameters, the version and the checksums, and prints alone', async () => {
     const page = app.page;
-    await page.getByTestId('view-report').click();
+    await showView(page, 'report');
     await page.getByTestId('report-files').waitFor({ timeout: 60_000 });
     expect(await page.getByTestId('report-files').textContent()).toMatch(/[0-9a-f]{64}/);
     expect(await page.getByTestId('report-formulas').textContent()).toContain('Randles–Ševčík');
@@ -73,7 +73,7 @@ describe('exports', () => {
     expect(await page.locator('.column.left').isVisible()).toBe(false);
     expect(await page.getByTestId('report-view').isVisible()).toBe(true);
     await page.emulateMedia({ media: 'screen' });
-    await page.getByTestId('view-trace').click();
+    await showView(page, 'trace');
   });
 
   it('stayed free of console errors, page errors and outside requests', () => {

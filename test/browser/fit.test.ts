@@ -9,7 +9,7 @@
  */
 import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, dragAcrossPlot, seriousViolations, waitForFiles } from './appHelpers';
+import { demoFileCount, dragAcrossPlot, seriousViolations, waitForFiles, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 async function cell(app: OpenedApp, key: string, column: 'value' | 'error'): Promise<string> {
@@ -30,7 +30,7 @@ describe('fit view on the demo', () => {
   beforeAll(async () => {
     app = await openApp();
     await waitForFiles(app.page, demoFileCount());
-    await app.page.getByTestId('view-fit').click();
+    await showView(app.page, 'fit');
     await app.page.getByTestId('fit-group').selectOption('quasi FcAmide');
   });
   afterAll(async () => app?.close());
@@ -64,11 +64,11 @@ describe('fit view on the demo', () => {
 
   it('the notebook report carries the current fit: model, window and the parameter table', async () => {
     const page = app.page;
-    await page.getByTestId('view-report').click();
+    await showView(page, 'report');
     await page.getByTestId('report-fit').waitFor({ timeout: 30_000 });
     expect(await page.getByTestId('report-fit-model').textContent()).toMatch(/Model (E|EC), 1 couple, cycle 1; 6 files fitted together/);
     expect(await page.getByTestId('report-fit').locator('th', { hasText: 'E°′' }).count()).toBe(1);
-    await page.getByTestId('view-fit').click();
+    await showView(page, 'fit');
     await page.getByTestId('fit-results').waitFor();
   });
 
@@ -102,9 +102,9 @@ describe('fit view on the demo', () => {
     await page.getByTestId('fit-run').click();
     await waitForIteration(app, 1);
     // Another view opens and shows its plot while the fit runs in its worker.
-    await page.getByTestId('view-trace').click();
+    await showView(page, 'trace');
     await page.getByTestId('trace-plot').waitFor();
-    await page.getByTestId('view-fit').click();
+    await showView(page, 'fit');
     await page.getByTestId('fit-progress').waitFor();
     await page.getByTestId('fit-cancel').click();
     await page.waitForFunction(() => document.querySelector('[data-testid=fit-status]')?.textContent === 'cancelled', null, { timeout: 10_000 });

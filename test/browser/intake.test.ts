@@ -7,7 +7,7 @@ import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { coupleCells, demoFileCount, selectFileRow, simulatedCsv, waitForAnalysis, waitForFiles } from './appHelpers';
+import { coupleCells, demoFileCount, selectFileRow, simulatedCsv, waitForAnalysis, waitForFiles, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 const PNG_HEADER = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 0, 0, 0, 1, 0, 0, 0, 1]);
@@ -92,11 +92,11 @@ describe('picking files', () => {
     await writeFile(join(dir, 'readme.md'), 'not a table');
     await page.getByTestId('folder-input').setInputFiles(dir);
     await waitForFiles(page, demo + 5);
-    await page.getByTestId('view-series').click();
+    await showView(page, 'series');
     await page.getByTestId('series-group').selectOption('mini series');
     await page.getByTestId('series-table').waitFor({ timeout: 30_000 });
     expect(await page.getByTestId('series-table').textContent()).toContain('2 scan rates');
-    await page.getByTestId('view-trace').click();
+    await showView(page, 'trace');
     await rm(root, { recursive: true });
   });
 

@@ -6,7 +6,7 @@
  */
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoFileCount, selectFileRow, waitForFiles, waitForRedraw, readPlot } from './appHelpers';
+import { demoFileCount, selectFileRow, waitForFiles, waitForRedraw, readPlot, showView } from './appHelpers';
 import { openApp, type OpenedApp } from './harness';
 
 type Host = HTMLElement & { layout?: { shapes?: { type: string; x0: number; x1: number; fillcolor?: string }[]; annotations?: { text: string }[]; yaxis?: { title?: { text?: string } } }; data?: { name: string; fill?: string }[] };
@@ -77,7 +77,7 @@ describe('working window and series overlays', () => {
 
   it('the series overlay draws every file in order of scan rate, in the chosen scaling, with the fit bands', async () => {
     const page = app.page;
-    await page.getByTestId('view-series').click();
+    await showView(page, 'series');
     await page.getByTestId('series-group').selectOption('probe RuHex');
     await page.getByTestId('series-table').waitFor({ timeout: 60_000 });
     await page.waitForFunction(() => ((document.querySelector('[data-testid=series-overlay-plot]') as Host | null)?.data ?? []).length === 6, null, { timeout: 30_000 });
@@ -91,7 +91,7 @@ describe('working window and series overlays', () => {
     await page.getByTestId('overlay-cycle').selectOption('2');
     const current = await shapesOf(page, 'series-current-plot');
     expect(current.data.some((d) => d.name === 'fit, 95 % band' && d.fill === 'tonexty')).toBe(true);
-    await page.getByTestId('view-trace').click();
+    await showView(page, 'trace');
   });
 
   it('stayed free of console errors, page errors and outside requests', () => {
