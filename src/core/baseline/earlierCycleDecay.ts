@@ -83,6 +83,8 @@ export interface EarlierCycleInput {
 
 export function earlierCycleDecay(input: EarlierCycleInput, cycle: CycleRange): EarlierCycleDecay | NotAtRest | null {
   const { segments } = input;
+  // Nothing before the first cycle to carry (and nothing to compute for a one-cycle record).
+  if (!segments.some((s) => s.cycle < cycle.index)) return null;
   let least: number | null = null;
   // The turns at the starts of the cycle's sweeps, in order: the cycle's own start when it is a
   // turn, else (a cycle that starts inside a sweep) the first vertex within it, and so on.
@@ -95,7 +97,7 @@ export function earlierCycleDecay(input: EarlierCycleInput, cycle: CycleRange): 
     least = Math.min(least ?? Infinity, found.share);
   }
   // No turn brought the surface back to rest: said only where earlier cycles left a product.
-  return least !== null && cycle.index > 1 && segments.some((s) => s.cycle < cycle.index) ? { kind: 'not-at-rest', share: least } : null;
+  return least !== null ? { kind: 'not-at-rest', share: least } : null;
 }
 
 /** The decay from the turn that starts sweep k, or why there is none (null: nothing left to carry). */
@@ -117,7 +119,7 @@ function decayFromTurn(input: EarlierCycleInput, k: number, end: number): Earlie
   let run = k - 1;
   while (run > 0 && segments[run - 1]!.direction === before.direction) run--;
   const held = heldContinuation(input.timeS, faradaic, segments[run]!.start, turn, end, atTurnA);
-  if (!(held.share <= REST_SHARE)) return { kind: 'not-at-rest', share: held.share };
+  if (!held.currentA) return { kind: 'not-at-rest', share: held.share };
   return { kind: 'decay', startIndex: turn, currentA: held.currentA, chargingA, atTurnA };
 }
 
@@ -173,9 +175,9 @@ function chargingStep(input: EarlierCycleInput, turn: number, before: SweepSegme
  * The current over (turn, end) that keeps the semi-integral at its value at the turn, given the
  * faradaic history up to the turn; index `turn` itself carries `atTurnA`. Also the semi-integral
  * at the turn over its value at the switch before it (`switchAt`), the share of the product
- * still at the surface. The constant π^(−½) and the factor 2 of the step-function weights cancel.
+ * still at the surface; above REST_SHARE the current is not solved (null). The constant π^(−½) and the factor 2 of the step-function weights cancel.
  */
-function heldContinuation(timeS: Float64Array, faradaic: (j: number) => number, switchAt: number, turn: number, end: number, atTurnA: number): { currentA: Float64Array; share: number } {
+function heldContinuation(timeS: Float64Array, faradaic: (j: number) => number, switchAt: number, turn: number, end: number, atTurnA: number): { currentA: Float64Array | null; share: number } {
   const grid = blockGrid(timeS, faradaic, turn, end);
   const { t, i, turnAt } = grid;
   const n = t.length;
@@ -203,6 +205,9 @@ function heldContinuation(timeS: Float64Array, faradaic: (j: number) => number, 
   let atSwitch = turnAt;
   while (atSwitch > 1 && (t[atSwitch - 1] as number) >= (timeS[switchAt] as number)) atSwitch--;
   const share = Math.abs(held) / Math.abs(semiIntegral(atSwitch, atSwitch));
+  // Not back at rest (the first cycle's own switch, a slow couple): no decay is drawn, and the
+  // continuation, the costly part, is not solved.
+  if (!(share <= REST_SHARE)) return { currentA: null, share };
   for (let m = turnAt + 1; m < n; m++) {
     const own = ownWeight(m);
     x[m] = own > 0 ? (held - semiIntegral(m, m - 1)) / own : (x[m - 1] as number);
