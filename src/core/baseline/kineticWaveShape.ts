@@ -106,20 +106,24 @@ export interface KineticWaveShape {
  */
 export function kineticWaveShapeFor(halfWidth: number, pastMidpoint: number): KineticWaveShape | null {
   const psis = [...PSI_GRID, ...PSI_FAR];
-  const all = psis.map((psi) => solve(psi, 0.5));
-  if (!(halfWidth > all[0]!.halfWidth)) return null;
-  const placed = blend(all, psis, (x) => x.pastFormal, pastMidpoint);
+  if (!(halfWidth > solve(psis[0]!, 0.5).halfWidth)) return null;
+  // The peak's distance from E°′ grows as ψ falls: the two grid waves around it, by bisection
+  // (each wave is solved once, when first needed).
+  let lo = 0;
+  let hi = psis.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (solve(psis[mid]!, 0.5).pastFormal < pastMidpoint) lo = mid;
+    else hi = mid;
+  }
+  const placed = blend(solve(psis[lo]!, 0.5), solve(psis[hi]!, 0.5), psis[lo]!, psis[hi]!, pastMidpoint);
   return Math.abs(halfWidth / placed.halfWidth - 1) <= WIDTH_AGREES ? placed : null;
 }
 
-/** The shapes on either side of `value` of a measure that grows along the grid, blended linearly in it. */
-function blend(shapesOnGrid: Shape[], psis: number[], measure: (s: Shape) => number, value: number): KineticWaveShape & { halfWidth: number } {
-  let k = 1;
-  while (k < shapesOnGrid.length - 1 && measure(shapesOnGrid[k]!) < value) k++;
-  const lo = shapesOnGrid[k - 1]!;
-  const hi = shapesOnGrid[k]!;
-  const f = Math.min(1, Math.max(0, (value - measure(lo)) / (measure(hi) - measure(lo))));
-  const psi = Math.exp(Math.log(psis[k - 1]!) * (1 - f) + Math.log(psis[k]!) * f);
+/** The two waves around the peak's distance from E°′, blended linearly in it (held at the ends). */
+function blend(lo: Shape, hi: Shape, psiLo: number, psiHi: number, pastFormal: number): KineticWaveShape & { halfWidth: number } {
+  const f = Math.min(1, Math.max(0, (pastFormal - lo.pastFormal) / (hi.pastFormal - lo.pastFormal)));
+  const psi = Math.exp(Math.log(psiLo) * (1 - f) + Math.log(psiHi) * f);
   return {
     words: `a quasi-reversible wave's shape, ψ ≈ ${psi.toPrecision(2)} with α = 0.5, placed by its peak's distance from the midpoint of its couple (Nicholson 1965)`,
     at: (x) => valueAt(lo, x) * (1 - f) + valueAt(hi, x) * f,
