@@ -10,7 +10,8 @@
  *   χ = ψ·e^(−αξ)·[1 − M·(1 + e^ξ)]
  *   (R. S. Nicholson, Anal. Chem. 37 (1965) 1351, eqs. 1-9; H. Matsuda, Y. Ayabe, Z. Elektrochem.
  *   59 (1955) 494, from memory). Solved by product integration with χ constant on each step of
- *   0.05 in σt, from ξ = +12 to ξ = −40, as reversibleWaveShape.ts solves the reversible case.
+ *   0.05 in σt, from ξ = +12 to 2 RT/nF past the peak, as reversibleWaveShape.ts solves the
+ *   reversible case.
  * Which wave: α is taken as 0.5, and ψ is placed by the peak's distance from the midpoint of its
  *   couple (E°′ when α = 0.5); the wave's width must agree with that wave's (kineticWaveShapeFor).
  *   A wave with no return peak, or one whose width says α is not 0.5, gets no shape.
@@ -21,6 +22,8 @@
 const START_XI = 12;
 const END_XI = -40;
 const STEP = 0.05;
+/** How far past its peak (RT/nF) a wave is solved: the foot is what is read. */
+const PAST_PEAK = 2;
 /** ψ of the shapes at α = 0.5, from nearly reversible to irreversible. */
 const PSI_GRID = [20, 7, 3, 2, 1.5, 1, 0.7, 0.5, 0.35, 0.25, 0.17, 0.1, 0.05, 0.02, 0.005];
 /** Further down, for placing a wave by its peak's distance from E°′ (that still moves as ψ falls). */
@@ -51,6 +54,7 @@ function solve(psi: number, alpha: number): Shape {
   const w = new Float64Array(n);
   for (let d = 0; d < n; d++) w[d] = 2 * Math.sqrt(STEP) * (Math.sqrt(d + 1) - Math.sqrt(d));
   let top = 0;
+  let length = n;
   for (let k = 0; k < n; k++) {
     let m = 0;
     for (let j = 0; j < k; j++) m += chi[j]! * w[k - j]!;
@@ -59,6 +63,11 @@ function solve(psi: number, alpha: number): Shape {
     const both = 1 + Math.exp(xi);
     chi[k] = (kf * (1 - m * both)) / (1 + kf * w[0]! * both);
     if (chi[k]! > chi[top]!) top = k;
+    // Only the foot, the peak and its half-height point are read: stop PAST_PEAK beyond the peak.
+    if ((k - top) * STEP > PAST_PEAK) {
+      length = k + 1;
+      break;
+    }
   }
   // The peak between grid points (a parabola through the top three), and the half-height point before it.
   const a = chi[top - 1] ?? chi[top]!;
@@ -71,12 +80,12 @@ function solve(psi: number, alpha: number): Shape {
   let half = top;
   while (half > 0 && chi[half]! > peak / 2) half--;
   const halfAt = half + (peak / 2 - chi[half]!) / (chi[half + 1]! - chi[half]!);
-  const shape = { chi, peakAt, peak, halfWidth: (peakAt - halfAt) * STEP, pastFormal: (peakAt + 0.5) * STEP - START_XI };
+  const shape = { chi: chi.subarray(0, length), peakAt, peak, halfWidth: (peakAt - halfAt) * STEP, pastFormal: (peakAt + 0.5) * STEP - START_XI };
   shapes.set(key, shape);
   return shape;
 }
 
-/** The shape's current over its peak, ξ counted from the peak (0 before the table starts). */
+/** The shape's current over its peak, ξ counted from the peak (0 before the table starts; held at its last value past the end, 2 RT/nF past the peak). */
 function valueAt(s: Shape, xiFromPeak: number): number {
   const u = s.peakAt - xiFromPeak / STEP;
   if (u <= 0) return 0;
