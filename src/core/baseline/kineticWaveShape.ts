@@ -8,8 +8,8 @@
  *   Nicholson's ψ = k°/√(πDσ), the surface concentrations follow from the convolution integral
  *   M(σt) = ∫₀^{σt} χ(z)/√(σt − z) dz (C_O(0) = C*(1 − M), C_R(0) = C*·M), so that
  *   χ = ψ·e^(−αξ)·[1 − M·(1 + e^ξ)]
- *   (R. S. Nicholson, Anal. Chem. 37 (1965) 1351, eqs. 1-9; H. Matsuda, Y. Ayabe, Z. Elektrochem.
- *   59 (1955) 494, from memory). Solved by product integration with χ constant on each step of
+ *   (R. S. Nicholson, Anal. Chem. 37 (1965) 1351; H. Matsuda, Y. Ayabe, Z. Elektrochem. 59 (1955)
+ *   494; both from memory). Solved by product integration with χ constant on each step of
  *   0.05 in σt, from ξ = +12 to 2 RT/nF past the peak, as reversibleWaveShape.ts solves the
  *   reversible case.
  * Which wave: α is taken as 0.5, and ψ is placed by the peak's distance from the midpoint of its
@@ -28,7 +28,7 @@ const PAST_PEAK = 2;
 const PSI_GRID = [20, 7, 3, 2, 1.5, 1, 0.7, 0.5, 0.35, 0.25, 0.17, 0.1, 0.05, 0.02, 0.005];
 /** Further down, for placing a wave by its peak's distance from E°′ (that still moves as ψ falls). */
 const PSI_FAR = [0.002, 0.0007, 0.0002, 0.00005];
-/** How far the measured width may stray from that of the wave placed by its peak (our margin: α = 0.3 or 0.7 strays 20 % and more). */
+/** How far the measured width may stray from that of the wave placed by its peak (our margin; the αc 0.3 and 0.7 couples checked fall outside it). */
 const WIDTH_AGREES = 0.1;
 
 interface Shape {
