@@ -36,6 +36,7 @@
  *   starts ≥ 150 mV from E½); the charging current taken as constant in size; records longer
  *   than MAX_POINTS are integrated on blocks of points averaged together.
  */
+import { semiIntegralWeights } from './semiIntegralWeights';
 import { fitLinearModel } from '../regression/fitLinearModel';
 import type { CycleRange, SweepSegment } from '../types';
 
@@ -186,8 +187,7 @@ function heldContinuation(timeS: Float64Array, faradaic: (j: number) => number, 
   // Weight of the current held over (t[j−1], t[j]] at time t[m]: √(t[m] − t[j−1]) − √(t[m] − t[j]).
   // On evenly spaced blocks (the usual record) it depends on m − j alone, in block units, and is
   // computed once; the first block may be shorter (tau1 blocks long).
-  const w = new Float64Array(tau1 === null ? 0 : n);
-  for (let d = 0; d < w.length; d++) w[d] = Math.sqrt(d + 1) - Math.sqrt(d);
+  const w = semiIntegralWeights(tau1 === null ? 0 : n, 1);
   const semiIntegral = tau1 === null
     ? (m: number, upTo: number) => {
       let sum = 0;

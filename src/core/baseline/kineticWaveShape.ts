@@ -18,6 +18,7 @@
  * Out: the shape relative to its peak, 1 at the peak, for ξ counted from the peak and decreasing
  *   along the sweep (an oxidation sweep is the same with ξ = −nF(E − E°′)/RT).
  */
+import { semiIntegralWeights } from './semiIntegralWeights';
 
 const START_XI = 12;
 const END_XI = -40;
@@ -50,9 +51,8 @@ function solve(psi: number, alpha: number): Shape {
   if (known) return known;
   const n = Math.round((START_XI - END_XI) / STEP);
   const chi = new Float64Array(n);
-  // Weight of step j (χ_j on [jh, (j+1)h]) at x = (k+1)h: 2(√(x − jh) − √(x − (j+1)h)), a function of k − j.
-  const w = new Float64Array(n);
-  for (let d = 0; d < n; d++) w[d] = 2 * Math.sqrt(STEP) * (Math.sqrt(d + 1) - Math.sqrt(d));
+  // Weight of step j (χ_j on [jh, (j+1)h]) at x = (k+1)h, a function of k − j.
+  const w = semiIntegralWeights(n, 2 * Math.sqrt(STEP));
   let top = 0;
   let length = n;
   for (let k = 0; k < n; k++) {

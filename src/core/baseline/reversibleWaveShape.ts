@@ -10,6 +10,7 @@
  * Out: the shape relative to its peak, 1 at ξ = −1.109 (the peak, Ep = E½ − 28.5/n mV at 25 °C),
  *   for ξ decreasing along the sweep; an oxidation sweep is the same with ξ = −nF(E − E½)/RT.
  */
+import { semiIntegralWeights } from './semiIntegralWeights';
 
 const START_XI = 12;
 const END_XI = -60;
@@ -26,9 +27,8 @@ let table: Table | null = null;
 function solve(): Table {
   const n = Math.round((START_XI - END_XI) / STEP);
   const chi = new Float64Array(n);
-  // Weight of step j (χ_j on [jh, (j+1)h]) at x = (k+1)h: 2(√(x − jh) − √(x − (j+1)h)), a function of k − j.
-  const w = new Float64Array(n);
-  for (let d = 0; d < n; d++) w[d] = 2 * Math.sqrt(STEP) * (Math.sqrt(d + 1) - Math.sqrt(d));
+  // Weight of step j (χ_j on [jh, (j+1)h]) at x = (k+1)h, a function of k − j.
+  const w = semiIntegralWeights(n, 2 * Math.sqrt(STEP));
   let peak = 0;
   let peakAt = 0;
   for (let k = 0; k < n; k++) {
