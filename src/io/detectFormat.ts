@@ -33,25 +33,57 @@ const DELIMITERS: Delimiter[] = [',', ';', '\t', 'whitespace'];
 /** A delimiter in words, from the one table of choices: "semicolon", "tab", "spaces". */
 const delimiterName = (d: Delimiter): string => labelOf(DELIMITER_CHOICES, d);
 
-interface LineClass {
-  fields: number;
-  numbers: number;
-  data: boolean;
+/**
+ * Each line under one candidate: its field count, how many fields read as numbers, and whether it
+ * is a data row (two or more fields, two or more numbers, at least half the fields numeric or an
+ * instrument's token for a missing value).
+ */
+interface LineClasses {
+  fields: Int32Array;
+  numbers: Int32Array;
+  data: Uint8Array;
 }
 
-function classify(fields: string[], c: Candidate): LineClass {
-  let numbers = 0;
-  let numericLike = 0;
-  // Index loops: for…of allocates an iterator result per step in code not yet optimised, and this
-  // runs on every sampled line of a page's first files.
-  for (let i = 0; i < fields.length; i++) {
-    const f = fields[i] as string;
-    if (Number.isFinite(parseNumber(f, c.decimal === ','))) {
-      numbers++;
-      numericLike++;
-    } else if (f === '' || isNonFiniteToken(f)) numericLike++;
+// Plain index loops over typed arrays here and below: these run on every sampled line of every
+// candidate while a page's first files are read, and the engine compiles such code quickly (a
+// Map, iterators or closures in the loop made this step the costliest to optimise of the import).
+function classifyLines(split: string[][], decimalComma: boolean): LineClasses {
+  const n = split.length;
+  const out: LineClasses = { fields: new Int32Array(n), numbers: new Int32Array(n), data: new Uint8Array(n) };
+  for (let l = 0; l < n; l++) {
+    const fields = split[l] as string[];
+    let numbers = 0;
+    let numericLike = 0;
+    for (let i = 0; i < fields.length; i++) {
+      const f = fields[i] as string;
+      if (Number.isFinite(parseNumber(f, decimalComma))) {
+        numbers++;
+        numericLike++;
+      } else if (f === '' || isNonFiniteToken(f)) numericLike++;
+    }
+    out.fields[l] = fields.length;
+    out.numbers[l] = numbers;
+    out.data[l] = fields.length >= 2 && numbers >= 2 && numericLike * 2 >= fields.length ? 1 : 0;
   }
-  return { fields: fields.length, numbers, data: fields.length >= 2 && numbers >= 2 && numericLike * 2 >= fields.length };
+  return out;
+}
+
+/** The field count most data rows share; the wider one on a tie; 0 when there is no data row. */
+function modalWidth(cls: LineClasses): number {
+  const counts = new Map<number, number>();
+  let k = 0;
+  let best = 0;
+  for (let l = 0; l < cls.fields.length; l++) {
+    if (!cls.data[l]) continue;
+    const w = cls.fields[l] as number;
+    const count = (counts.get(w) ?? 0) + 1;
+    counts.set(w, count);
+    if (count > best || (count === best && w > k)) {
+      k = w;
+      best = count;
+    }
+  }
+  return k;
 }
 
 interface Scored {
@@ -64,27 +96,21 @@ interface Scored {
 }
 
 function scoreCandidate(lines: string[], split: string[][], c: Candidate): Scored | null {
-  const cls = split.map((f) => classify(f, c));
-  const widths = new Map<number, number>();
-  for (let i = 0; i < cls.length; i++) {
-    const x = cls[i] as LineClass;
-    if (x.data) widths.set(x.fields, (widths.get(x.fields) ?? 0) + 1);
-  }
-  let k = 0;
-  let best = 0;
-  for (const [w, count] of widths) if (count > best || (count === best && w > k)) [k, best] = [w, count];
-  if (best === 0) return null;
-  const isRow = (i: number) => cls[i]?.data === true && cls[i]?.fields === k;
-  const first = findTableStart(lines, isRow);
+  const cls = classifyLines(split, c.decimal === ',');
+  const k = modalWidth(cls);
+  if (k === 0) return null;
+  const rowOf = new Uint8Array(cls.fields.length);
+  for (let i = 0; i < rowOf.length; i++) rowOf[i] = cls.data[i] === 1 && cls.fields[i] === k ? 1 : 0;
+  const first = findTableStart(lines, rowOf);
   if (first < 0) return null;
   let last = first;
   let rows = 0;
   let numbers = 0;
-  for (let i = first; i < cls.length; i++) {
-    if (!isRow(i)) continue;
+  for (let i = first; i < rowOf.length; i++) {
+    if (!rowOf[i]) continue;
     last = i;
     rows++;
-    numbers += (cls[i] as LineClass).numbers;
+    numbers += cls.numbers[i] as number;
   }
   return { c, k, first, last, rows, numericFraction: numbers / (rows * k) };
 }
@@ -94,19 +120,23 @@ function scoreCandidate(lines: string[], split: string[][], c: Candidate): Score
  * inside) that is at least 3 rows and at least a tenth of the longest run long. A short block of
  * numbers in the preamble (a settings table, a results summary) is thus not taken for the data,
  * while exports joined one after another (blocks of similar length) all stay in.
+ * `isRow[i]` is 1 where line i is a row of the table's width.
  */
-function findTableStart(lines: string[], isRow: (i: number) => boolean): number {
-  const runs: { start: number; length: number }[] = [];
-  let current: { start: number; length: number } | null = null;
-  for (let i = 0; i < lines.length; i++) {
-    if (isRow(i)) {
-      if (!current) runs.push((current = { start: i, length: 0 }));
-      current.length++;
-    } else if ((lines[i] as string).trim() !== '') current = null;
+function findTableStart(lines: string[], isRow: Uint8Array): number {
+  // Run lengths, kept at each run's first line.
+  const runLength = new Int32Array(isRow.length);
+  let current = -1;
+  let longest = 0;
+  for (let i = 0; i < isRow.length; i++) {
+    if (isRow[i]) {
+      if (current < 0) current = i;
+      const length = ++runLength[current]!;
+      if (length > longest) longest = length;
+    } else if ((lines[i] as string).trim() !== '') current = -1;
   }
-  const longest = Math.max(0, ...runs.map((r) => r.length));
   const need = Math.min(longest, Math.max(3, Math.ceil(longest / 10)));
-  return runs.find((r) => r.length >= need)?.start ?? -1;
+  for (let i = 0; i < runLength.length; i++) if (runLength[i]! > 0 && runLength[i]! >= need) return i;
+  return -1;
 }
 
 function better(a: Scored, b: Scored | null): boolean {
