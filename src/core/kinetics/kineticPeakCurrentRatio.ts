@@ -24,10 +24,9 @@ const V_PER_S = 1;
 
 function forwardCathodicPeakA(k0CmPerS: number, alpha: number, stepV: number): number {
   const r = simulateCv({ mechanism: 'E', k0CmPerS, alpha, formalPotentialV: 0, startV: 0.5, switchV: -0.7, stepV, scanRateVPerS: V_PER_S,
-    diffusionOCm2PerS: D_CM2_PER_S, diffusionRCm2PerS: D_CM2_PER_S, concentrationOMolPerCm3: 1e-6, concentrationRMolPerCm3: 0 });
+    diffusionOCm2PerS: D_CM2_PER_S, diffusionRCm2PerS: D_CM2_PER_S, concentrationOMolPerCm3: 1e-6, concentrationRMolPerCm3: 0 }, { firstSweepOnly: true });
   let min = 0;
-  // The forward (first) sweep is the first half of the points.
-  for (let k = 0; k < r.currentA.length / 2; k++) min = Math.min(min, r.currentA[k] as number);
+  for (let k = 0; k < r.currentA.length; k++) min = Math.min(min, r.currentA[k] as number);
   return -min;
 }
 

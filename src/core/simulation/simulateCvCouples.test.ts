@@ -66,3 +66,16 @@ describe('simulateCvCouples', () => {
     expect(() => simulateCvCouples(cell, [])).toThrow(AnalysisError);
   });
 });
+
+describe('simulateCv firstSweepOnly', () => {
+  // A property of the method, no external source: the time loop is causal and the grid is the whole
+  // waveform's, so the first sweep run alone must reproduce the full run's first sweep exactly.
+  it('gives exactly the first sweep of the full run', () => {
+    const input = { mechanism: 'E' as const, k0CmPerS: 0.01, alpha: 0.4, startV: 0.4, switchV: -0.4, stepV: 0.002, scanRateVPerS: 0.5, cycles: 2 };
+    const full = simulateCv(input);
+    const first = simulateCv(input, { firstSweepOnly: true });
+    expect(first.potentialV.length).toBe(401);
+    expect(first.potentialV[400]).toBeCloseTo(-0.4, 12);
+    for (let k = 0; k < first.currentA.length; k++) expect(first.currentA[k]).toBe(full.currentA[k]);
+  });
+});

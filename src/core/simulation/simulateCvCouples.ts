@@ -37,11 +37,15 @@ export function simulateCvCouples(cell: Partial<CvSimulationInput>, couples: Rea
   const dtS = wave.intervalS / substeps;
   const totalTimeS = wave.timeS[wave.timeS.length - 1] as number;
   const built = inputs.map((q, j) => buildModel(q, options, dtS, totalTimeS, substeps, options.fixedGrids?.[j] ?? null));
-  assertAffordable(built.map((b) => b.numerics), wave.potentialV.length);
+  // The grid above is sized for the whole waveform (totalTimeS) even when only its first sweep is run.
+  const points = options.firstSweepOnly ? wave.pointsPerSweep + 1 : wave.potentialV.length;
+  const timeS = points === wave.timeS.length ? wave.timeS : wave.timeS.slice(0, points);
+  const potentialV = points === wave.potentialV.length ? wave.potentialV : wave.potentialV.slice(0, points);
+  assertAffordable(built.map((b) => b.numerics), points);
   const model = built.length === 1 ? (built[0] as { model: FaradaicModel }).model : new SumOfCouplesModel(built.map((b) => b.model));
-  const columns = runTimeLoop(model, wave.potentialV, { substeps, dtS, capacitanceF: p.doubleLayerFPerCm2 * p.areaCm2, uncompensatedOhm: p.uncompensatedOhm });
+  const columns = runTimeLoop(model, potentialV, { substeps, dtS, capacitanceF: p.doubleLayerFPerCm2 * p.areaCm2, uncompensatedOhm: p.uncompensatedOhm });
   const coupleNumerics = built.map((b) => b.numerics);
-  return { timeS: wave.timeS, potentialV: wave.potentialV, ...columns, numerics: coupleNumerics[0] as SimulationNumerics, coupleNumerics };
+  return { timeS, potentialV, ...columns, numerics: coupleNumerics[0] as SimulationNumerics, coupleNumerics };
 }
 
 /** Steps per output point so that each step moves the potential by at most maxStepThermal·RT/(nF). */

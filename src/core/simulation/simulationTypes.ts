@@ -110,6 +110,12 @@ export interface SimulateCvOptions {
    * @default none
    */
   fixedGrids?: ReadonlyArray<FixedGrid | null>;
+  /**
+   * Compute only the first sweep (start to switch): the columns then hold its points alone. The
+   * space grid stays the one of the whole waveform, so those points are exactly those of the full
+   * run. For a caller that reads the forward wave only. @default false
+   */
+  firstSweepOnly?: boolean;
 }
 
 /** First spacing and outer edge of an expanding grid, cm (the expansion ratio is `gridExpansion`). */
