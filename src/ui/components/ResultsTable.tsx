@@ -14,6 +14,10 @@ import { copyText } from '../clipboard';
 import { SeriesHeadline } from './SeriesHeadline';
 import { useSeriesScale } from './useSeriesCell';
 import { useRowWindow } from './useRowWindow';
+import { useHeldWhile } from './useHeldWhile';
+
+/** Least time between two refreshes of the table's rows while files are being read (ms). */
+const READING_TABLE_MS = 1000;
 
 interface Column { id: ResultsColumn; head: string; title?: string }
 
@@ -26,7 +30,9 @@ export function ResultsTable() {
   // Keyed on the results, not on the files: files change with every progress tick of an import,
   // and a file's name and series are read with its rows (cached per result, resultsTable.ts).
   const fileOrder = useHalfwave((s) => s.fileOrder);
-  const results = useHalfwave((s) => s.results);
+  // While files are read the table is refreshed once a second, not at every frame (useHeldWhile).
+  const reading = useHalfwave((s) => s.importBatch !== null);
+  const results = useHeldWhile(reading, useHalfwave((s) => s.results), READING_TABLE_MS);
   const scale = useSeriesScale(group);
   const [copied, setCopied] = useState<string | null>(null);
   const shownGroup = scope === 'series' ? group : null;
