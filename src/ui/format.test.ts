@@ -1,6 +1,6 @@
 /** Table formatting (hand-worked cases; common practice, no source). */
 import { describe, expect, it } from 'vitest';
-import { byNoise, bytes, count, digitsForNoise, fixed, scanRate, sci, sig } from './format';
+import { byNoise, bytes, count, digitsForInterval, digitsForNoise, fixed, scanRate, sci, sig, valueWithInterval } from './format';
 
 describe('format', () => {
   it('fixed and sig show a dash for missing values', () => {
@@ -38,5 +38,26 @@ describe('format', () => {
     expect(byNoise(0.123456, 0.0004, 1000, 1)).toBe('123.5');
     expect(byNoise(0.123456, null, 1000, 1)).toBe('123.5');
     expect(byNoise(0.123456, 0.00002, 1000, 1)).toBe('123.456');
+  });
+  // The same rule (JCGM 100:2008 §7.2.6) with the interval's half-width as the uncertainty;
+  // at least three significant digits (common practice, no source).
+  it('a value with its interval gets the digits the interval supports', () => {
+    const narrow: [number, number] = [0.9996e-5, 1.0004e-5];
+    const d = digitsForInterval(1.0e-5, narrow);
+    expect(d).toBe(5);
+    expect(sci(1.0e-5, d)).toBe('1.0000 × 10⁻⁵');
+    expect(sci(narrow[0], d)).not.toBe(sci(narrow[1], d));
+    expect(digitsForInterval(1.0e-5, [0.9e-5, 1.1e-5])).toBe(3);
+    expect(digitsForInterval(2.5e-6, [2.4e-6, 2.6e-6])).toBe(3);
+    expect(digitsForInterval(1.0e-5, [1.0e-5 - 2e-10, 1.0e-5 + 2e-10])).toBe(6);
+    expect(digitsForInterval(1.0e-5, null)).toBe(3);
+    expect(digitsForInterval(0, [1, 2])).toBe(3);
+  });
+
+  it('an interval too narrow for five digits is given as its relative half-width', () => {
+    expect(valueWithInterval(1.0e-5, [0.9e-5, 1.1e-5])).toEqual({ value: '1.00 × 10⁻⁵', interval: '9.00 × 10⁻⁶ to 1.10 × 10⁻⁵' });
+    expect(valueWithInterval(1.00097e-5, [1.00097e-5 - 4e-11, 1.00097e-5 + 4e-11])).toEqual({ value: '1.0010 × 10⁻⁵', interval: '±0.0004 %' });
+    expect(valueWithInterval(1.0e-5, [1.0e-5 - 1e-15, 1.0e-5 + 1e-15]).interval).toBe('within ±0.0001 %');
+    expect(valueWithInterval(1.0e-5, null)).toEqual({ value: '1.00 × 10⁻⁵', interval: null });
   });
 });

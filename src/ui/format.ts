@@ -56,6 +56,37 @@ export function digitsForNoise(uncertainty: number | null | undefined, maxDigits
   return Math.min(maxDigits, Math.max(0, digits));
 }
 
+/**
+ * Significant digits for a value given with a 95 % interval: as many as the interval's half-width
+ * supports (its own rule, `digitsForNoise`), never fewer than `least`, so a narrow interval no
+ * longer reads "1.00 to 1.00"; at most `most`.
+ */
+export function digitsForInterval(value: number | null | undefined, interval: readonly [number, number] | null | undefined, least = 3, most = 6): number {
+  if (value === null || value === undefined || !Number.isFinite(value) || value === 0 || !interval) return least;
+  const half = Math.abs(interval[1] - interval[0]) / 2;
+  if (!(half > 0) || !Number.isFinite(half)) return least;
+  // digitsForNoise counts decimals of a number near 1; scale the half-width to the value's leading digit.
+  const exponent = Math.floor(Math.log10(Math.abs(value)));
+  const decimals = digitsForNoise(half / 10 ** exponent, most) ?? 0;
+  return Math.min(most, Math.max(least, decimals + 1));
+}
+
+/** Most significant digits a value is printed with beside its interval. */
+const INTERVAL_DIGITS = 5;
+
+/**
+ * A value and its 95 % interval in words, each with the digits the interval supports: "1.002 ×
+ * 10⁻⁵" and "9.98 × 10⁻⁶ to 1.006 × 10⁻⁵". An interval too narrow for five digits to tell its
+ * ends apart (noise-free data) is given as its relative half-width instead: "±0.0004 %".
+ */
+export function valueWithInterval(value: number, interval: readonly [number, number] | null | undefined): { value: string; interval: string | null } {
+  if (!interval) return { value: sci(value, 3), interval: null };
+  const digits = digitsForInterval(value, interval, 3, INTERVAL_DIGITS + 1);
+  if (digits <= INTERVAL_DIGITS) return { value: sci(value, digits), interval: `${sci(interval[0], digits)} to ${sci(interval[1], digits)}` };
+  const relative = (Math.abs(interval[1] - interval[0]) / 2 / Math.abs(value)) * 100;
+  return { value: sci(value, INTERVAL_DIGITS), interval: relative < 1e-4 ? 'within ±0.0001 %' : `±${sig(relative, 1)} %` };
+}
+
 /** `value` in `factor` units with the decimals its uncertainty allows, else `fallback` decimals. */
 export function byNoise(value: number | null | undefined, uncertainty: number | null | undefined, factor: number, fallback: number): string {
   const d = digitsForNoise(uncertainty === null || uncertainty === undefined ? null : Math.abs(uncertainty * factor));

@@ -10,7 +10,7 @@ import { fitParameterRows } from '../../state/fitView';
 import { useHalfwave } from '../../state/react';
 import { reportModel } from '../../state/report';
 import { figureImageUrl } from '../figureExport';
-import { bytes, fixed, scanRate, sci } from '../format';
+import { bytes, fixed, scanRate, sci, valueWithInterval } from '../format';
 import { buildSeriesFigures } from '../plots/seriesFigures';
 import { useSeriesScale } from './useSeriesCell';
 
@@ -44,7 +44,7 @@ export function ReportView() {
       </table>
       <h3>Derived numbers, formulas and sources</h3>
       {model.series?.analysis.couples.map((c) => (
-        <p key={c.index}>Couple {c.index + 1}: {c.diffusion ? `D = ${sci(c.diffusion.diffusionCm2PerS)} cm²/s${c.diffusion.intervalCm2PerS ? ` (95 % interval ${sci(c.diffusion.intervalCm2PerS[0])} to ${sci(c.diffusion.intervalCm2PerS[1])})` : ''}; ` : ''}{c.verdict.label}</p>
+        <p key={c.index}>Couple {c.index + 1}: {c.diffusion ? diffusionText(c.diffusion) : ''}{c.verdict.label}</p>
       ))}
       <dl className="report-formulas" data-testid="report-formulas">
         {model.explanations.map((x) => (
@@ -66,6 +66,12 @@ export function ReportView() {
 }
 
 /** The series' whole-curve fit, while it is current: model, window, parameters with errors, and its notes. */
+/** "D = … cm²/s (95 % interval … to …); " with the digits the interval supports. */
+function diffusionText(d: { diffusionCm2PerS: number; intervalCm2PerS: [number, number] | null }): string {
+  const shown = valueWithInterval(d.diffusionCm2PerS, d.intervalCm2PerS);
+  return `D = ${shown.value} cm²/s${shown.interval ? ` (95 % interval ${shown.interval})` : ''}; `;
+}
+
 function ReportFit({ group }: { group: string }) {
   const entry = useHalfwave((s) => s.fits[group]);
   const current = useHalfwave((s) => s.fitIsCurrent(group));

@@ -6,7 +6,7 @@
 import type { ReactNode } from 'react';
 import type { Explanation } from '../../state/explain';
 import type { RunSeriesResult, SeriesCouple } from '../../state/types';
-import { DASH, sci } from '../format';
+import { DASH, sci, valueWithInterval } from '../format';
 import { Explained } from './Explained';
 
 const span = (r: [number, number] | null | undefined, digits = 3) => (r ? `${sci(r[0], digits)} to ${sci(r[1], digits)}` : '');
@@ -28,10 +28,13 @@ export function DReading({ result, c, explanation }: { result: RunSeriesResult; 
   if (d.status === 'range-only') {
     return <span data-testid="d-range-only">between <Explained explanation={explanation}>{span(d.rangeCm2PerS)} cm²/s</Explained> (range only: {d.note ?? 'D cannot be told apart from another unknown'}){mark}</span>;
   }
-  const ci = d.intervalCm2PerS ? ` (95 % interval ${span(d.intervalCm2PerS)})` : '';
-  const combined = d.combinedIntervalCm2PerS ? ` (with the uncertainty of area and concentration: ${span(d.combinedIntervalCm2PerS)})` : '';
+  // D and its interval with the digits the interval supports (at least three).
+  const shown = valueWithInterval(d.diffusionCm2PerS, d.intervalCm2PerS);
+  const ci = shown.interval ? ` (95 % interval ${shown.interval})` : '';
+  const withCell = d.combinedIntervalCm2PerS ? valueWithInterval(d.diffusionCm2PerS, d.combinedIntervalCm2PerS).interval : null;
+  const combined = withCell ? ` (with the uncertainty of area and concentration: ${withCell})` : '';
   const alphaRange = d.alphaEndsCm2PerS ? `; over αc ${span(d.alphaEndsCm2PerS)}` : '';
-  return <><Explained explanation={explanation}>{sci(d.diffusionCm2PerS, 3)} cm²/s</Explained>{ci}{combined}{alphaRange}{mark}</>;
+  return <><Explained explanation={explanation}>{shown.value} cm²/s</Explained>{ci}{combined}{alphaRange}{mark}</>;
 }
 
 export function K0Reading({ result, c, explanation }: { result: RunSeriesResult; c: SeriesCouple; explanation?: Explanation | undefined }): ReactNode {
