@@ -44,9 +44,10 @@ interface LineClasses {
   data: Uint8Array;
 }
 
-// Plain index loops over typed arrays here and below: these run on every sampled line of every
-// candidate while a page's first files are read, and the engine compiles such code quickly (a
-// Map, iterators or closures in the loop made this step the costliest to optimise of the import).
+// Plain index loops over typed arrays here and below, each in a small function of its own: these
+// run on every sampled line of every candidate while a page's first files are read, and the engine
+// compiles such code quickly (a Map, iterators or closures in one long loop made this step the
+// costliest to optimise of the import).
 function classifyLines(split: string[][], decimalComma: boolean): LineClasses {
   const n = split.length;
   const out: LineClasses = { fields: new Int32Array(n), numbers: new Int32Array(n), data: new Uint8Array(n) };
@@ -99,10 +100,22 @@ function scoreCandidate(lines: string[], split: string[][], c: Candidate): Score
   const cls = classifyLines(split, c.decimal === ',');
   const k = modalWidth(cls);
   if (k === 0) return null;
-  const rowOf = new Uint8Array(cls.fields.length);
-  for (let i = 0; i < rowOf.length; i++) rowOf[i] = cls.data[i] === 1 && cls.fields[i] === k ? 1 : 0;
+  const rowOf = rowsOfWidth(cls, k);
   const first = findTableStart(lines, rowOf);
   if (first < 0) return null;
+  const { last, rows, numbers } = tableFrom(rowOf, cls.numbers, first);
+  return { c, k, first, last, rows, numericFraction: numbers / (rows * k) };
+}
+
+/** 1 where a line is a data row of `k` fields. */
+function rowsOfWidth(cls: LineClasses, k: number): Uint8Array {
+  const rowOf = new Uint8Array(cls.fields.length);
+  for (let i = 0; i < rowOf.length; i++) rowOf[i] = cls.data[i] === 1 && cls.fields[i] === k ? 1 : 0;
+  return rowOf;
+}
+
+/** From the table's first row on: its last row, how many rows, how many numbers in them. */
+function tableFrom(rowOf: Uint8Array, numbersOf: Int32Array, first: number): { last: number; rows: number; numbers: number } {
   let last = first;
   let rows = 0;
   let numbers = 0;
@@ -110,9 +123,9 @@ function scoreCandidate(lines: string[], split: string[][], c: Candidate): Score
     if (!rowOf[i]) continue;
     last = i;
     rows++;
-    numbers += cls.numbers[i] as number;
+    numbers += numbersOf[i] as number;
   }
-  return { c, k, first, last, rows, numericFraction: numbers / (rows * k) };
+  return { last, rows, numbers };
 }
 
 /**
