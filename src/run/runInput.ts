@@ -86,13 +86,19 @@ export interface RunFileSource {
   warnings: ImportWarning[];
 }
 
-/** Names of every file some series or file uses as a blank. */
-export function blankNames(state: RunSources): Set<string> {
+/** blankNames per state: asked for each file of a reading and at each redraw, it walked every file each time. */
+const blankMemo = new WeakMap<object, { fileOrder: string[]; fileSettings: object; settings: object; seriesCells: object; names: ReadonlySet<string> }>();
+
+/** Names of every file some series or file uses as a blank. The same state gives the same (shared, not to be edited) set. */
+export function blankNames(state: RunSources): ReadonlySet<string> {
+  const hit = blankMemo.get(state.files);
+  if (hit && hit.fileOrder === state.fileOrder && hit.fileSettings === state.fileSettings && hit.settings === state.settings && hit.seriesCells === state.seriesCells) return hit.names;
   const out = new Set<string>();
   for (const g of new Set(Object.values(state.files).map((f) => f?.group))) {
     if (g !== undefined) for (const n of resolveSeriesCell(state, g).cell.blankFiles) out.add(n);
   }
   for (const fs of Object.values(state.fileSettings)) if (fs.blankFile) out.add(fs.blankFile);
+  blankMemo.set(state.files, { fileOrder: state.fileOrder, fileSettings: state.fileSettings, settings: state.settings, seriesCells: state.seriesCells, names: out });
   return out;
 }
 
