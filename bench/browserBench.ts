@@ -15,6 +15,8 @@
  *    demo files and then the 120 files as bytes already in memory (with the run snapshot the app
  *    sent with its own first file), nothing else running: the engine's own start-up, without
  *    the page's reading, drawing and bookkeeping.
+ * 5. On Linux, the CPU time of Chromium's threads over the batch, by role (bench/threadTime.ts):
+ *    who took the two cores.
  * All of it runs in three rounds, each in a fresh browser context; each figure is the median of
  * the rounds, printed with their range, and each ratio is taken within one round.
  */
@@ -29,6 +31,7 @@ import { nodeBatchMs } from './nodeBatch';
 import { demoFileNames } from '../scripts/demoBundle';
 import { smallCvFiles } from './scaleData';
 import type { BenchRow } from './types';
+import { chromiumThreads, threadTimeBetween } from './threadTime';
 
 const CHROMIUM = process.env.HALFWAVE_CHROMIUM ?? '/usr/bin/chromium';
 /** The build to time: dist/, or another build folder named in HALFWAVE_BENCH_DIST (to compare two builds at the same hour). */
@@ -153,6 +156,8 @@ interface Round {
   /** The batch in a fresh worker of the same build, demo first, nothing else running (WORKER_ALONE). */
   workerAloneMs: number;
   switchMs: number[];
+  /** CPU time over the batch by thread role (bench/threadTime.ts); null off Linux. */
+  batchCpu: ReturnType<typeof threadTimeBetween>;
 }
 
 /**
@@ -181,8 +186,10 @@ async function oneRound(browser: Browser, port: number, demoFiles: { name: strin
       w.benchWant = n;
       document.querySelector('[data-testid=file-input]')?.addEventListener('change', () => { w.benchMarks.picked = performance.now(); }, { capture: true, once: true });
     }, want);
+    const threadsBefore = chromiumThreads();
     await page.getByTestId('file-input').setInputFiles(paths);
     const batchPageMs = (await waitMark(page, `shown${want}`)) - (await waitMark(page, 'picked'));
+    const batchCpu = threadTimeBetween(threadsBefore, chromiumThreads());
     const batchNodeMs = (nodeBeforeMs + (await nodeBatchMs(files))) / 2;
     const coldNodeMs = coldNodeBatchMs(files.length);
     const switches: number[] = [];
@@ -190,7 +197,7 @@ async function oneRound(browser: Browser, port: number, demoFiles: { name: strin
     for (let k = 0; k < SWITCHES; k++) switches.push(await switchMs(page, files[(k * 17 + 7) % files.length]!.name));
     await page.evaluate((f) => { (window as unknown as { benchWorkerFiles: unknown }).benchWorkerFiles = f; }, { demo: demoFiles, batch: files });
     const workerAloneMs = await page.evaluate<number>(WORKER_ALONE);
-    return { loadEventMs, firstPlotMs, shownMs, demoNodeMs, batchPageMs, batchNodeMs, coldNodeMs, workerAloneMs, switchMs: switches };
+    return { loadEventMs, firstPlotMs, shownMs, demoNodeMs, batchPageMs, batchNodeMs, coldNodeMs, workerAloneMs, switchMs: switches, batchCpu };
   } finally {
     await context.close();
   }
@@ -206,6 +213,19 @@ function median(values: number[]): number {
 function range(values: number[], unit: string): string {
   const f = (v: number) => (unit === '×' ? v.toFixed(2) : Math.round(v).toLocaleString('en-US'));
   return `${f(Math.min(...values))}–${f(Math.max(...values))} over ${values.length} rounds`;
+}
+
+/** CPU time over the batch by thread role, when it could be read (Linux): where the two cores went. */
+function cpuRows(rounds: Round[]): BenchRow[] {
+  const cpu = rounds.map((r) => r.batchCpu).filter((c) => c !== null);
+  if (cpu.length !== rounds.length) return [];
+  const row = (name: string, values: number[], note: string): BenchRow => ({ name, value: median(values), unit: 'ms', note: `${range(values, 'ms')}; ${note}` });
+  return [
+    row('batch CPU: the workers', cpu.map((c) => c.workers), 'thread CPU time from /proc schedstat over the batch: the files\' worker, and the series\' worker when the demo\'s series are still being fitted'),
+    row('batch CPU: the page\'s thread', cpu.map((c) => c.page), 'store, React, Plotly, layout, the answers taken in'),
+    row('batch CPU: the renderer\'s pool', cpu.map((c) => c.pool), 'the engine\'s optimising compilers, raster, garbage collection'),
+    row('batch: the workers waited for a core', cpu.map((c) => c.workersWaited), 'time runnable but not running'),
+  ];
 }
 
 export async function runBrowserBench(): Promise<BenchRow[]> {
@@ -246,6 +266,7 @@ export async function runBrowserBench(): Promise<BenchRow[]> {
       row('the same work in a fresh worker alone', pick((r) => r.workerAloneMs), 'ms', 'same build and page, demo first, bytes from memory, no page work: what the engine alone costs'),
       row('worker alone / Node', pick((r) => r.workerAloneMs / r.batchNodeMs), '×', 'the floor under page / Node; the rest is the page\'s own share'),
       row(`switch file with ${want} loaded (median of ${SWITCHES} per round)`, pick((r) => median(r.switchMs)), 'ms', 'click → trace drawn again; goal < 100 ms'),
+      ...cpuRows(rounds),
     ];
   } finally {
     await browser.close();
