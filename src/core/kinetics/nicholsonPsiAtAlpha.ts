@@ -15,7 +15,8 @@
  *   Nicholson's table within 2 mV) at the couple's α and switching distance (rounded to 50 mV,
  *   0.1–0.8 V) and at the table's own, so the table stays the reference and only the difference is
  *   simulated. A mirror image makes an oxidation first with αc the same problem as a reduction first
- *   with 1 − αc, so every curve is simulated as a reduction first. Curves are cached per (α, switch).
+ *   with 1 − αc, so every curve is simulated as a reduction first. Curves are kept per (α, switch),
+ *   each grid point simulated only when a reading first needs it.
  */
 import { assertFiniteInRange } from '../errors';
 import { STANDARD_TEMPERATURE_K, inverseThermalVoltagePerV } from '../constants';
@@ -48,36 +49,57 @@ export interface NicholsonPsiAtAlphaResult {
 export const NICHOLSON_SWITCH_PAST_V = 0.1125;
 
 const PSI_GRID = [20, 10, 7, 5, 3, 2, 1.5, 1, 0.75, 0.5, 0.35, 0.25, 0.175, 0.1, 0.07];
-const curves = new Map<string, { deltaEpMv: number[]; lnPsi: number[] }>();
 
-/** ΔEp (mV, n = 1, 25 °C) of a simulated reduction-first cycle at each ψ of the grid. */
-function workingCurve(alpha: number, switchPastV: number): { deltaEpMv: number[]; lnPsi: number[] } {
+/**
+ * ΔEp (mV, n = 1, 25 °C) of a simulated reduction-first cycle at each ψ of the grid, simulated
+ * point by point as a lookup first needs it: a reading walks the grid from the fast end and stops
+ * at the first ΔEp above its own, so a near-reversible couple simulates two or three cycles of
+ * the fifteen. Each point, once simulated, is kept.
+ */
+interface WorkingCurve {
+  alpha: number;
+  switchPastV: number;
+  deltaEpMv: Array<number | undefined>;
+}
+
+const curves = new Map<string, WorkingCurve>();
+
+function workingCurve(alpha: number, switchPastV: number): WorkingCurve {
   const key = `${alpha.toFixed(3)}|${switchPastV.toFixed(4)}`;
-  const hit = curves.get(key);
-  if (hit) return hit;
-  const f = inverseThermalVoltagePerV(STANDARD_TEMPERATURE_K);
-  const deltaEpMv: number[] = [];
-  const lnPsi: number[] = [];
-  for (const psi of PSI_GRID) {
-    const k0CmPerS = psi * Math.sqrt(Math.PI * 1e-5 * f);
-    const r = simulateCv({ k0CmPerS, alpha, scanRateVPerS: 1, formalPotentialV: 0, startV: 0.45, switchV: -switchPastV, stepV: 0.001, diffusionOCm2PerS: 1e-5, diffusionRCm2PerS: 1e-5 });
-    const p = oneCyclePeaks(r, 'cathodic');
-    deltaEpMv.push((p.reverse.potentialV - p.forward.potentialV) * 1000);
-    lnPsi.push(Math.log(psi));
+  let curve = curves.get(key);
+  if (!curve) {
+    curve = { alpha, switchPastV, deltaEpMv: new Array<number | undefined>(PSI_GRID.length) };
+    curves.set(key, curve);
   }
-  const curve = { deltaEpMv, lnPsi };
-  curves.set(key, curve);
   return curve;
 }
 
+/** ΔEp (mV) of the curve's k-th grid point, simulated the first time it is asked for. */
+function deltaEpAt(curve: WorkingCurve, k: number): number {
+  const known = curve.deltaEpMv[k];
+  if (known !== undefined) return known;
+  const f = inverseThermalVoltagePerV(STANDARD_TEMPERATURE_K);
+  const k0CmPerS = (PSI_GRID[k] as number) * Math.sqrt(Math.PI * 1e-5 * f);
+  const r = simulateCv({ k0CmPerS, alpha: curve.alpha, scanRateVPerS: 1, formalPotentialV: 0, startV: 0.45, switchV: -curve.switchPastV, stepV: 0.001, diffusionOCm2PerS: 1e-5, diffusionRCm2PerS: 1e-5 });
+  const p = oneCyclePeaks(r, 'cathodic');
+  const d = (p.reverse.potentialV - p.forward.potentialV) * 1000;
+  curve.deltaEpMv[k] = d;
+  return d;
+}
+
 /** ln ψ at ΔEp by linear interpolation along the curve (ΔEp rises as ψ falls); clamped to its ends. */
-function lnPsiAt(curve: { deltaEpMv: number[]; lnPsi: number[] }, x: number): number {
-  const { deltaEpMv: d, lnPsi } = curve;
-  if (x <= d[0]!) return lnPsi[0]!;
-  for (let k = 1; k < d.length; k++) {
-    if (x <= d[k]!) return lnPsi[k - 1]! + ((x - d[k - 1]!) / (d[k]! - d[k - 1]!)) * (lnPsi[k]! - lnPsi[k - 1]!);
+function lnPsiAt(curve: WorkingCurve, x: number): number {
+  if (x <= deltaEpAt(curve, 0)) return Math.log(PSI_GRID[0] as number);
+  for (let k = 1; k < PSI_GRID.length; k++) {
+    const dk = deltaEpAt(curve, k);
+    if (x <= dk) {
+      const d0 = deltaEpAt(curve, k - 1);
+      const l0 = Math.log(PSI_GRID[k - 1] as number);
+      const l1 = Math.log(PSI_GRID[k] as number);
+      return l0 + ((x - d0) / (dk - d0)) * (l1 - l0);
+    }
   }
-  return lnPsi[lnPsi.length - 1]!;
+  return Math.log(PSI_GRID[PSI_GRID.length - 1] as number);
 }
 
 export function nicholsonPsiAtAlpha(deltaEpV: number, options: NicholsonPsiAtAlphaOptions = {}): NicholsonPsiAtAlphaResult {
