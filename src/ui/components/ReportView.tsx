@@ -65,13 +65,13 @@ export function ReportView() {
   );
 }
 
-/** The series' whole-curve fit, while it is current: model, window, parameters with errors, and its notes. */
 /** "D = … cm²/s (95 % interval … to …); " with the digits the interval supports. */
 function diffusionText(d: { diffusionCm2PerS: number; intervalCm2PerS: [number, number] | null }): string {
   const shown = valueWithInterval(d.diffusionCm2PerS, d.intervalCm2PerS);
   return `D = ${shown.value} cm²/s${shown.interval ? ` (95 % interval ${shown.interval})` : ''}; `;
 }
 
+/** The series' whole-curve fit, while it is current: model, window, parameters with errors, and its notes. */
 function ReportFit({ group }: { group: string }) {
   const entry = useHalfwave((s) => s.fits[group]);
   const current = useHalfwave((s) => s.fitIsCurrent(group));
