@@ -24,18 +24,22 @@ interface ProbeReport {
   rowTexts: Record<string, string[]>;
   /** Largest number of per-file progress bars shown at once. */
   maxRowBars: number;
+  /** Every distinct text of the series indicator ("Fitting 2 series across scan rates…"). */
+  seriesTexts: string[];
 }
 
 /** Starts the in-page probe: a MutationObserver that records progress texts. */
 async function startProbe(page: Page): Promise<void> {
   await page.evaluate(() => {
-    const report = { batchTexts: [] as string[], rowTexts: {} as Record<string, string[]>, maxRowBars: 0 };
+    const report = { batchTexts: [] as string[], rowTexts: {} as Record<string, string[]>, maxRowBars: 0, seriesTexts: [] as string[] };
     const note = (list: string[], text: string) => {
       if (!list.includes(text)) list.push(text);
     };
     const observer = new MutationObserver(() => {
       const batch = document.querySelector('[data-testid=import-progress]')?.textContent;
       if (batch) note(report.batchTexts, batch.trim());
+      const fitting = document.querySelector('[data-testid=series-progress]')?.textContent;
+      if (fitting) note(report.seriesTexts, fitting.trim());
       const reading = document.querySelectorAll('[data-testid=file-row][data-status=importing]');
       report.maxRowBars = Math.max(report.maxRowBars, document.querySelectorAll('[data-testid=file-row] progress').length);
       for (const row of reading) {
@@ -91,7 +95,11 @@ describe('many files and a million-row file', () => {
     await startProbe(page);
     await page.getByTestId('file-input').setInputFiles(paths);
     await waitForFiles(page, demo + SMALL_FILES);
+    // Once every file is read, the new series are fitted, and the intake says so until they are.
+    await page.waitForFunction(() => (window as unknown as { scaleProbe: { report: ProbeReport } }).scaleProbe.report.seriesTexts.length > 0
+      && !document.querySelector('[data-testid=series-progress]'), undefined, { timeout: 60_000 });
     const probe = await stopProbe(page);
+    expect(probe.seriesTexts.every((t) => /^Fitting \d+ series across scan rates…$/.test(t))).toBe(true);
     expect(await page.locator('[data-testid=file-row][data-status=ready]').count()).toBe(demo + SMALL_FILES);
     for (const f of [files[0]!, files[SMALL_FILES - 1]!]) {
       const meta = await page.locator(`[data-testid=file-row][data-file-name="${f.name}"] .file-meta`).textContent();

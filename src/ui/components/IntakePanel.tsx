@@ -33,6 +33,7 @@ export function IntakePanel() {
   const [over, setOver] = useState(false);
   const batch = useHalfwave((s) => s.importBatch);
   const count = useHalfwave((s) => s.fileOrder.length);
+  const fitting = useHalfwave((s) => Object.values(s.series).filter((e) => e.status === 'running').length);
 
   const take = (list: FileList | null) => {
     if (!list || list.length === 0) return;
@@ -93,6 +94,8 @@ export function IntakePanel() {
           Reading {Math.min(batch.done + 1, batch.total)} of {batch.total}
           <progress max={batch.total} value={batch.done} aria-label="files read" />
         </div>
+      ) : fitting > 0 ? (
+        <p className="batch" data-testid="series-progress" role="status">Fitting {fitting} series across scan rates…</p>
       ) : null}
       <FileList />
       <SelectedFileBar />
