@@ -12,6 +12,7 @@ import { describeLayout } from '../io/describeLayout';
 import { SOFTWARE } from '../version';
 import { resolveCell as resolveSeriesCell, type ResolvedCell, type SeriesCell } from './seriesCell';
 import { emptyFileSettings, type AnalysisSettings, type FileAnalysisSettings } from './settings';
+import { textDigest } from './textDigest';
 import type { ImportWarning } from '../io/errors';
 import type { Measurement } from '../io/types';
 
@@ -234,6 +235,15 @@ export function runAheadSources(ahead: RunAhead, file: Pick<RunFileSource, 'file
  */
 export function runRequestKey(request: { run: RunInput; only: string[] }): string {
   return JSON.stringify(request, (_key, value: unknown) => (ArrayBuffer.isView(value) ? `#${(value as Float64Array).length}` : value));
+}
+
+/**
+ * The run request's key as a short digest (textDigest.ts): what the worker sends back with a run
+ * made ahead, in place of the key's text (about 5,000 characters, which every one of a batch's
+ * answers carried across to the page).
+ */
+export function runRequestDigest(request: { run: RunInput; only: string[] }): string {
+  return textDigest(runRequestKey(request));
 }
 
 const subtracted = new WeakMap<object, { blank: object; currentA: Float64Array }>();

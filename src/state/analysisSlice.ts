@@ -4,7 +4,7 @@
  * the settings on screen.
  */
 import { CancelledError } from '../worker/errors';
-import { fileRunRequest, runRequestKey } from '../run/runInput';
+import { fileRunRequest, runRequestDigest } from '../run/runInput';
 import { resolveCell, sameTraceCell } from '../run/seriesCell';
 import { defaultSettings, emptyFileSettings } from '../run/settings';
 import type { RunFileResult } from '../core/analysis/runTypes';
@@ -33,7 +33,7 @@ export const createAnalysisSlice: SliceCreator<AnalysisSlice> = (set, get, deps)
       };
       const request = fileRunRequest(get(), id);
       // The worker that read the file analysed it already; its result stands when it ran the very request the page would send.
-      if (ahead && ahead.key === runRequestKey(request)) {
+      if (ahead && ahead.key === runRequestDigest(request)) {
         running.delete(id);
         done(ahead.result);
         return;

@@ -6,7 +6,7 @@
 import { describeError, CancelledError } from './errors';
 import { runHandler } from './handlers';
 import { startReading } from './importBytes';
-import { collectTransferables, type PageToWorker, type WorkerRequest, type WorkerToPage } from './protocol';
+import { answerTransferables, type PageToWorker, type WorkerRequest, type WorkerToPage } from './protocol';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 const running = new Map<number, AbortController>();
@@ -44,7 +44,7 @@ async function serve(req: WorkerRequest, ctrl: AbortController): Promise<void> {
       },
     });
     if (ctrl.signal.aborted) throw new CancelledError();
-    post({ type: 'result', requestId, request: req.type, output } as WorkerToPage, collectTransferables(output));
+    post({ type: 'result', requestId, request: req.type, output } as WorkerToPage, answerTransferables(req.type, output));
   } catch (err) {
     post(describeError(requestId, err));
   } finally {

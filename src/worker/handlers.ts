@@ -12,7 +12,7 @@ import { exportRun } from './exportRun';
 import { importBytes } from './importBytes';
 import { runFitRequest } from './fitRun';
 import type { ImportResult } from '../io/types';
-import { fileRunRequest, runAheadSources, runRequestKey, type RunAhead } from '../run/runInput';
+import { fileRunRequest, runAheadSources, runRequestDigest, type RunAhead } from '../run/runInput';
 import type { ProgressDetail, RequestInput, RequestOutput, RequestType, RunAheadResult } from './protocol';
 
 export interface HandlerContext {
@@ -61,7 +61,7 @@ export const handlers: { [K in RequestType]: Handler<K> } = {
 function runAhead(ahead: RunAhead, fileName: string, read: ImportResult, sha256: string | null): RunAheadResult | undefined {
   try {
     const request = fileRunRequest(runAheadSources(ahead, { fileName, measurement: read.measurement, sha256, warnings: read.warnings }), ahead.fileId);
-    const key = runRequestKey(request);
+    const key = runRequestDigest(request);
     return { key, result: analyzeRunFiles(request.run, request.only)[0] ?? null };
   } catch {
     return undefined;

@@ -67,7 +67,7 @@ export interface RequestMap {
   };
 }
 
-/** A file analysed where it was read: the key of the run request used (runRequestKey) and the file's result. */
+/** A file analysed where it was read: the digest of the run request used (runRequestDigest) and the file's result. */
 export interface RunAheadResult {
   key: string;
   result: RunFileResult | null;
@@ -130,6 +130,19 @@ export type WorkerToPage = ProgressMessage | ResultMessage | ErrorMessage;
  */
 export function inputTransferables(request: WorkerRequest): ArrayBuffer[] {
   return request.type === 'import' && request.input.data instanceof ArrayBuffer ? [request.input.data] : [];
+}
+
+/**
+ * The buffers the worker moves to the page with an answer. An import's and a file run's answers
+ * come by the hundred in a batch and hold only arrays made for them (a transfer detaches a
+ * buffer on the worker's side, so a cached array must never be among them:
+ * test/unit/transferSafety.test.ts runs each request again after moving its answer's buffers
+ * away): every buffer goes, down to the peaks' baselines. Copied instead, those made each
+ * answer about twice as costly to post and to take in (measured in Chromium). Other answers keep
+ * to the shallow depth of 6.
+ */
+export function answerTransferables(type: RequestType, output: unknown): ArrayBuffer[] {
+  return collectTransferables(output, type === 'import' || type === 'runFiles' ? 16 : 6);
 }
 
 /**
