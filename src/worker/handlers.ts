@@ -69,7 +69,7 @@ function runAhead(ahead: RunAhead, fileName: string, read: ImportResult, sha256:
 }
 
 /** Hex SHA-256 of the bytes (FIPS 180-4), or null where Web Crypto is unavailable. */
-export async function sha256Hex(data: ArrayBuffer): Promise<string | null> {
+export async function sha256Hex(data: ArrayBuffer | Uint8Array<ArrayBuffer>): Promise<string | null> {
   const subtle = globalThis.crypto?.subtle as SubtleCrypto | undefined;
   if (!subtle) return null;
   const digest = new Uint8Array(await subtle.digest('SHA-256', data));

@@ -3,7 +3,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { ImportError } from '../io/errors';
 import { createJoinedReader, importBytes } from './importBytes';
 
-const text = (b: ArrayBuffer) => new TextDecoder().decode(b);
+const text = (b: ArrayBuffer | Uint8Array) => new TextDecoder().decode(b);
 const now = (flush: () => void) => queueMicrotask(flush);
 
 describe('createJoinedReader', () => {
@@ -17,8 +17,9 @@ describe('createJoinedReader', () => {
     expect(out.map(text)).toEqual(['0.1,2e-6\n', '', 'E/V;I/A\n0,1', 'x'.repeat(1200), 'last']);
     // [0.1…, ''] joined, ['E/V…'] alone (the 1200-byte file would pass 1000 bytes), ['x'…] alone, ['last'] alone.
     expect(spy).toHaveBeenCalledTimes(4);
-    // Each answer is a buffer of its own.
+    // Each answer holds its file's bytes only: a buffer of its own, or its stretch of the joined read.
     expect(new Set(out).size).toBe(out.length);
+    expect(out.map((o) => o.byteLength)).toEqual(blobs.map((b) => b.size));
   });
 
   it('reads the files one by one when the joined read fails, so the error belongs to its file', async () => {

@@ -15,9 +15,12 @@ import { ImportError } from '../io/errors';
 const JOIN_FILES = 8;
 const JOIN_BYTES = 4 * 1024 * 1024;
 
+/** A file's bytes: its own buffer, or its stretch of a joined read. */
+export type Bytes = ArrayBuffer | Uint8Array<ArrayBuffer>;
+
 interface PendingRead {
   blob: Blob;
-  resolve: (bytes: ArrayBuffer) => void;
+  resolve: (bytes: Bytes) => void;
   reject: (err: unknown) => void;
 }
 
@@ -25,7 +28,7 @@ interface PendingRead {
  * A reader that joins the Blobs asked for before its next flush. `schedule` runs the flush: the
  * worker waits one timer turn, so that the requests already queued behind this one join it.
  */
-export function createJoinedReader(schedule: (flush: () => void) => void, joinFiles = JOIN_FILES, joinBytes = JOIN_BYTES): (blob: Blob) => Promise<ArrayBuffer> {
+export function createJoinedReader(schedule: (flush: () => void) => void, joinFiles = JOIN_FILES, joinBytes = JOIN_BYTES): (blob: Blob) => Promise<Bytes> {
   let queue: PendingRead[] = [];
   const readAlone = (r: PendingRead) => {
     r.blob.arrayBuffer().then(r.resolve, r.reject);
@@ -34,8 +37,10 @@ export function createJoinedReader(schedule: (flush: () => void) => void, joinFi
     if (group.length === 1) return readAlone(group[0] as PendingRead);
     new Blob(group.map((r) => r.blob)).arrayBuffer().then((all) => {
       let at = 0;
+      // Each file's bytes are a view into the joined read, not a copy: new memory costs a page
+      // fault per 4 KB when first written (see tableRows.ts), and the views go once the files are read.
       for (const r of group) {
-        r.resolve(all.slice(at, at + r.blob.size));
+        r.resolve(new Uint8Array(all, at, r.blob.size));
         at += r.blob.size;
       }
     }, () => group.forEach(readAlone));
@@ -56,14 +61,14 @@ export function createJoinedReader(schedule: (flush: () => void) => void, joinFi
     }
     if (group.length > 0) readJoined(group);
   };
-  return (blob) => new Promise<ArrayBuffer>((resolve, reject) => {
+  return (blob) => new Promise<Bytes>((resolve, reject) => {
     if (queue.length === 0) schedule(flush);
     queue.push({ blob, resolve, reject });
   });
 }
 
 const readJoined = createJoinedReader((flush) => setTimeout(flush, 0));
-const early = new WeakMap<Blob, Promise<ArrayBuffer>>();
+const early = new WeakMap<Blob, Promise<Bytes>>();
 
 export function startReading(data: ArrayBuffer | Blob): void {
   if (!(data instanceof Blob) || early.has(data)) return;
@@ -73,7 +78,7 @@ export function startReading(data: ArrayBuffer | Blob): void {
 }
 
 /** The file's bytes; a Blob that cannot be read gives ImportError UNREADABLE, naming the file. */
-export async function importBytes(fileName: string, data: ArrayBuffer | Blob): Promise<ArrayBuffer> {
+export async function importBytes(fileName: string, data: ArrayBuffer | Blob): Promise<Bytes> {
   if (!(data instanceof Blob)) return data;
   const reading = early.get(data) ?? data.arrayBuffer();
   early.delete(data);

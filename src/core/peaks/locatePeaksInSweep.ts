@@ -42,7 +42,7 @@ export function locatePeaksInSweep(sig: SweepSignals, segmentIndex: number, opti
   const start = ownStart(sig.segments, segmentIndex);
   const s = seg.direction === 'positive' ? 1 : -1;
   const direction: PeakDirection = s > 0 ? 'anodic' : 'cathodic';
-  const y = sig.locatingA.slice(start, seg.end).map((v) => s * v);
+  const y = signedStretch(sig.locatingA, start, seg.end, s);
   const found = options.windows
     ? options.windows.flatMap((w) => searchWindow(sig, start, y, w))
     : searchAutomatically(y, options);
@@ -60,6 +60,13 @@ export function locatePeaksInSweep(sig: SweepSignals, segmentIndex: number, opti
       origin: options.windows ? 'window' : 'auto',
     };
   });
+}
+
+/** a[start, end) times the sweep's sign (±1), so that its peaks are maxima. */
+function signedStretch(a: Float64Array, start: number, end: number, sign: number): Float64Array {
+  const y = new Float64Array(end - start);
+  for (let i = 0; i < y.length; i++) y[i] = sign * a[start + i]!;
+  return y;
 }
 
 interface Found { local: number; prominence: number; confidence: PeakConfidence; shoulder: boolean }

@@ -57,30 +57,51 @@ export function ownStart(segments: SweepSegment[], k: number): number {
   return prev && prev.end - 1 === seg.start ? seg.start + 1 : seg.start;
 }
 
+/**
+ * dE/dk of a sweep, kept from call to call up to SCRATCH_MAX points (the analysis runs to its end
+ * without yielding, so no other call meets it half-written): new memory costs a page fault per
+ * 4 KB when first written, and every sweep of every file needs one.
+ */
+const SCRATCH_MAX = 1 << 17;
+let slopeScratch = new Float64Array(0);
+
+function potentialSlope(n: number): Float64Array {
+  if (n > SCRATCH_MAX) return new Float64Array(n);
+  if (slopeScratch.length < n) slopeScratch = new Float64Array(Math.min(SCRATCH_MAX, Math.max(n, 2 * slopeScratch.length)));
+  return slopeScratch.subarray(0, n);
+}
+
+/** Each sweep of `y` filtered in place in a copy of `y` (a sweep too short for its window keeps its values). */
 function smoothSegments(
   y: Float64Array,
   segments: SweepSegment[],
   pick: (segment: SweepSegment) => SmoothingSetting | null,
   derivativeOf?: Float64Array,
 ): Float64Array {
-  const out = Float64Array.from(y);
-  for (const [k, seg] of segments.entries()) {
+  const out = y.slice();
+  for (let k = 0; k < segments.length; k++) {
+    const seg = segments[k]!;
     const setting = pick(seg);
     const start = ownStart(segments, k);
     const n = seg.end - start;
     if (!setting || n < setting.window || n < 3) continue;
     const part = y.subarray(start, seg.end);
-    let values: Float64Array;
+    const target = out.subarray(start, seg.end);
     if (derivativeOf) {
-      const dI = savitzkyGolayDerivative(part, { ...setting, order: Math.max(1, setting.order) });
-      const dE = savitzkyGolayDerivative(derivativeOf.subarray(start, seg.end), { ...setting, order: Math.max(1, setting.order) });
-      values = dI.map((v, k) => (dE[k] !== 0 ? v / dE[k]! : 0));
+      const options = { ...setting, order: Math.max(1, setting.order) };
+      savitzkyGolayDerivative(part, options, target);
+      const dE = savitzkyGolayDerivative(derivativeOf.subarray(start, seg.end), options, potentialSlope(n));
+      divideBy(target, dE);
     } else {
-      values = savitzkyGolaySmooth(part, setting);
+      savitzkyGolaySmooth(part, setting, target);
     }
-    out.set(values, start);
   }
   return out;
+}
+
+/** dI/dk ÷ dE/dk, in place: dI/dE (0 where the potential stands still). */
+function divideBy(dI: Float64Array, dE: Float64Array): void {
+  for (let i = 0; i < dI.length; i++) dI[i] = dE[i] !== 0 ? dI[i]! / dE[i]! : 0;
 }
 
 export interface PrepareSweepSignalsInput {

@@ -102,3 +102,30 @@ describe('savitzkyGolayDerivative', () => {
     expect(() => savitzkyGolayDerivative([1, 2, 3, 4, 5], { spacing: 0 })).toThrow(/spacing/);
   });
 });
+
+describe('written into a given array', () => {
+  // The same filter, so the same numbers bit for bit: a property of the code, no published value.
+  const y = Float64Array.from({ length: 400 }, (_, k) => Math.sin(k / 17) + 0.01 * Math.cos(k * 1.3));
+  it('gives what a new array gets, by convolution and by sliding moments, smoothing and derivative', () => {
+    for (const window of [7, 151]) {
+      const into = new Float64Array(y.length).fill(123);
+      expect(savitzkyGolaySmooth(y, { window, order: 2 }, into)).toBe(into);
+      expect(into).toEqual(savitzkyGolaySmooth(y, { window, order: 2 }));
+      const slope = new Float64Array(y.length).fill(-5);
+      expect(savitzkyGolayDerivative(y, { window, order: 2, spacing: 0.5 }, slope)).toBe(slope);
+      expect(slope).toEqual(savitzkyGolayDerivative(y, { window, order: 2, spacing: 0.5 }));
+    }
+  });
+
+  it('into a stretch of a longer array, leaving the rest', () => {
+    const out = new Float64Array(600).fill(9);
+    savitzkyGolaySmooth(y, { window: 11, order: 3 }, out.subarray(100, 500));
+    expect(out.subarray(100, 500)).toEqual(savitzkyGolaySmooth(y, { window: 11, order: 3 }));
+    expect(out[99]).toBe(9);
+    expect(out[500]).toBe(9);
+  });
+
+  it('refuses an array of another length', () => {
+    expect(() => savitzkyGolaySmooth(y, { window: 7, order: 2 }, new Float64Array(10))).toThrow(AnalysisError);
+  });
+});

@@ -94,14 +94,20 @@ function cachedCoefficients(window: number, order: number, derivative: number, p
  */
 const DIRECT_MAX_WINDOW = 101;
 
-function applyFilter(y: ArrayLike<number>, window: number, order: number, derivative: number): Float64Array {
+function applyFilter(y: ArrayLike<number>, window: number, order: number, derivative: number, into?: Float64Array): Float64Array {
   const n = y.length;
-  const out = new Float64Array(n);
+  if (into && into.length !== n) throw new AnalysisError('LENGTH_MISMATCH', `Savitzky–Golay output holds ${into.length} points, the signal ${n}`);
+  const out = into ?? new Float64Array(n);
   if (n === 0) return out;
   if (n < window) {
     throw new AnalysisError('TOO_FEW_POINTS', `Savitzky–Golay window ${window} is longer than the ${n}-point signal`);
   }
-  if (window > DIRECT_MAX_WINDOW && order <= MAX_MOMENT_ORDER) return filterBySlidingMoments(y, window, order, derivative);
+  if (window > DIRECT_MAX_WINDOW && order <= MAX_MOMENT_ORDER) {
+    const moved = filterBySlidingMoments(y, window, order, derivative);
+    if (!into) return moved;
+    into.set(moved);
+    return into;
+  }
   const m = (window - 1) / 2;
   const centre = cachedCoefficients(window, order, derivative, 0);
   for (let i = m; i < n - m; i++) {
@@ -124,16 +130,19 @@ function applyFilter(y: ArrayLike<number>, window: number, order: number, deriva
   return out;
 }
 
-/** Smoothed copy of `y`. */
-export function savitzkyGolaySmooth(y: ArrayLike<number>, options: SavitzkyGolayOptions = {}): Float64Array {
+/**
+ * Smoothed copy of `y`; written into `into` (as long as `y`, and not `y` itself) when given,
+ * which spares a new array: new memory costs a page fault per 4 KB when first written.
+ */
+export function savitzkyGolaySmooth(y: ArrayLike<number>, options: SavitzkyGolayOptions = {}, into?: Float64Array): Float64Array {
   const window = options.window ?? 5;
   const order = options.order ?? 2;
   checkWindow(window, order);
-  return applyFilter(y, window, order, 0);
+  return applyFilter(y, window, order, 0, into);
 }
 
-/** First derivative dy/dx of `y` sampled every `spacing` units of x. */
-export function savitzkyGolayDerivative(y: ArrayLike<number>, options: SavitzkyGolayDerivativeOptions = {}): Float64Array {
+/** First derivative dy/dx of `y` sampled every `spacing` units of x; written into `into` when given, as savitzkyGolaySmooth. */
+export function savitzkyGolayDerivative(y: ArrayLike<number>, options: SavitzkyGolayDerivativeOptions = {}, into?: Float64Array): Float64Array {
   const window = options.window ?? 5;
   const order = options.order ?? 2;
   const spacing = options.spacing ?? 1;
@@ -142,7 +151,7 @@ export function savitzkyGolayDerivative(y: ArrayLike<number>, options: SavitzkyG
   if (!Number.isFinite(spacing) || spacing === 0) {
     throw new AnalysisError('BAD_OPTION', `derivative spacing must be finite and non-zero, got ${spacing}`);
   }
-  const out = applyFilter(y, window, order, 1);
+  const out = applyFilter(y, window, order, 1, into);
   for (let i = 0; i < out.length; i++) out[i]! /= spacing;
   return out;
 }
