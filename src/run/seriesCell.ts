@@ -101,14 +101,37 @@ type GroupPreambles = { measurements: Measurement[]; fromFiles: ReturnType<typeo
  */
 const preambleMemo = new WeakMap<readonly string[], Map<string | null, GroupPreambles>>();
 
-function groupPreambles(state: CellSources, group: string | null): GroupPreambles {
-  const measurements: Measurement[] = [];
-  if (group !== null) {
-    for (let i = 0; i < state.fileOrder.length; i++) {
-      const f = state.files[state.fileOrder[i] as string];
-      if (f?.group === group && f.measurement) measurements.push(f.measurement);
-    }
+/**
+ * Each group's measurements in file order, found in one pass over the files per state (per files
+ * object and file order) for every group asked of it: a reading asks its series' cell several
+ * times per file, and one pass per question walked every loaded file each time.
+ */
+const measurementsMemo = new WeakMap<object, { fileOrder: readonly string[]; byGroup: Map<string, Measurement[]> }>();
+const NONE: Measurement[] = [];
+
+function groupMeasurements(state: CellSources, group: string): Measurement[] {
+  let hit = measurementsMemo.get(state.files);
+  if (!hit || hit.fileOrder !== state.fileOrder) {
+    hit = { fileOrder: state.fileOrder, byGroup: measurementsByGroup(state) };
+    measurementsMemo.set(state.files, hit);
   }
+  return hit.byGroup.get(group) ?? NONE;
+}
+
+function measurementsByGroup(state: CellSources): Map<string, Measurement[]> {
+  const byGroup = new Map<string, Measurement[]>();
+  for (let i = 0; i < state.fileOrder.length; i++) {
+    const f = state.files[state.fileOrder[i] as string];
+    if (!f?.measurement) continue;
+    const list = byGroup.get(f.group);
+    if (list) list.push(f.measurement);
+    else byGroup.set(f.group, [f.measurement]);
+  }
+  return byGroup;
+}
+
+function groupPreambles(state: CellSources, group: string | null): GroupPreambles {
+  const measurements = group === null ? NONE : groupMeasurements(state, group);
   let byGroup = preambleMemo.get(state.fileOrder);
   if (!byGroup) {
     byGroup = new Map();

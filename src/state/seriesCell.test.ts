@@ -130,6 +130,10 @@ describe('the memo the UI reads', () => {
     store.getState().seedSeriesCell('gold', { areaCm2: 0.05 });
     expect(resolveCell(store.getState(), 'gold').cell.areaCm2).toBe(0.05);
     expect(resolveCell(store.getState(), 'gold').origin.areaCm2).toBe('entered');
+    // A file moved to another series (the same file order, a new files object) leaves this one's count at once.
+    store.getState().setFileGroup(first as string, 'elsewhere');
+    expect(resolveCell(store.getState(), 'gold').fileCount).toBe(3);
+    expect(resolveCell(store.getState(), 'elsewhere').fileCount).toBe(1);
   });
 });
 
