@@ -12,10 +12,10 @@ import type { ParsedTable } from './parseTable';
 const PADDING_ALLOWANCE = 1 << 20;
 
 /**
- * Row buffers handed on from one table to the next. Memory a process has not used before costs a
- * page fault per 4 KB the first time it is written, about 10 µs each in a browser's worker on
- * this project's virtual machines, and every file of a batch needed about 60 KB of row buffers
- * for a moment (a 120-file batch: 1,500 fewer faults, the worker's CPU time 8 % less). A table
+ * Row buffers handed on from one table to the next, to spare new memory (why: core/scratch.ts):
+ * every file of a batch needed about 60 KB of row buffers for a moment (a 120-file batch: 1,500
+ * fewer page faults, the worker's CPU time 8 % less). Unlike a kept scratch array, a table's
+ * buffers live across yields, so they are lent from a pool. A table
  * takes buffers when it starts and gives them back once its columns are copied out (`finish`);
  * a table that fails keeps them, and they go with it. Two tables read at the same time (an
  * import yields between chunks) never share one: a buffer is in the pool or in one table.

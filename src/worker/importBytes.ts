@@ -38,7 +38,7 @@ export function createJoinedReader(schedule: (flush: () => void) => void, joinFi
     new Blob(group.map((r) => r.blob)).arrayBuffer().then((all) => {
       let at = 0;
       // Each file's bytes are a view into the joined read, not a copy: new memory costs a page
-      // fault per 4 KB when first written (see tableRows.ts), and the views go once the files are read.
+      // fault per 4 KB when first written (core/scratch.ts), and the views go once the files are read.
       for (const r of group) {
         r.resolve(new Uint8Array(all, at, r.blob.size));
         at += r.blob.size;

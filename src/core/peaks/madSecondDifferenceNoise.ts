@@ -11,6 +11,7 @@
  */
 import { medianOfSorted } from '../statistics/median';
 import { AnalysisError } from '../errors';
+import { keptScratch } from '../scratch';
 
 export interface MadSecondDifferenceNoiseOptions {
   /** First sample (inclusive). @default 0 */
@@ -19,27 +20,14 @@ export interface MadSecondDifferenceNoiseOptions {
   end?: number;
 }
 
-/**
- * The second differences are written into one array kept from call to call (up to SCRATCH_MAX
- * values; a longer trace gets its own): new memory costs a page fault per 4 KB on first use, and
- * the estimate runs twice per file. The function runs to its end without yielding, so no other
- * call can meet the array half-written.
- */
-const SCRATCH_MAX = 1 << 17;
-let scratch = new Float64Array(0);
+/** The second differences go into an array kept between calls (../scratch.ts): the estimate runs twice per file. */
+const differences = keptScratch();
 
 export function madSecondDifferenceNoise(currentA: ArrayLike<number>, options: MadSecondDifferenceNoiseOptions = {}): number {
   const start = options.start ?? 0;
   const end = options.end ?? currentA.length;
   if (end - start < 3) throw new AnalysisError('TOO_FEW_POINTS', `noise estimate needs at least 3 points, got ${end - start}`);
-  const need = Math.max(0, end - start - 2);
-  if (need > SCRATCH_MAX) return madOf(currentA, start, end, new Float64Array(need));
-  if (scratch.length < need) scratch = new Float64Array(Math.min(SCRATCH_MAX, Math.max(need, 2 * scratch.length)));
-  return madOf(currentA, start, end, scratch);
-}
-
-/** σ from the second differences of currentA[start, end), written into `d` (at least end − start − 2 long). */
-function madOf(currentA: ArrayLike<number>, start: number, end: number, d: Float64Array): number {
+  const d = differences(Math.max(0, end - start - 2));
   let count = 0;
   for (let k = start + 1; k < end - 1; k++) {
     const v = (currentA[k - 1] as number) - 2 * (currentA[k] as number) + (currentA[k + 1] as number);

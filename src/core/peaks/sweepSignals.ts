@@ -11,6 +11,7 @@ import type { SmoothingSetting } from '../smoothing/smoothingTypes';
 import type { SweepSegment } from '../types';
 import { savitzkyGolayDerivative, savitzkyGolaySmooth } from '../smoothing/savitzkyGolaySmooth';
 import { madSecondDifferenceNoise } from './madSecondDifferenceNoise';
+import { keptScratch } from '../scratch';
 
 export interface SweepSignals {
   potentialV: Float64Array;
@@ -57,19 +58,8 @@ export function ownStart(segments: SweepSegment[], k: number): number {
   return prev && prev.end - 1 === seg.start ? seg.start + 1 : seg.start;
 }
 
-/**
- * dE/dk of a sweep, kept from call to call up to SCRATCH_MAX points (the analysis runs to its end
- * without yielding, so no other call meets it half-written): new memory costs a page fault per
- * 4 KB when first written, and every sweep of every file needs one.
- */
-const SCRATCH_MAX = 1 << 17;
-let slopeScratch = new Float64Array(0);
-
-function potentialSlope(n: number): Float64Array {
-  if (n > SCRATCH_MAX) return new Float64Array(n);
-  if (slopeScratch.length < n) slopeScratch = new Float64Array(Math.min(SCRATCH_MAX, Math.max(n, 2 * slopeScratch.length)));
-  return slopeScratch.subarray(0, n);
-}
+/** dE/dk of a sweep, in an array kept between calls (../scratch.ts): every sweep of every file needs one. */
+const potentialSlope = keptScratch();
 
 /** Each sweep of `y` filtered in place in a copy of `y` (a sweep too short for its window keeps its values). */
 function smoothSegments(

@@ -132,7 +132,7 @@ function applyFilter(y: ArrayLike<number>, window: number, order: number, deriva
 
 /**
  * Smoothed copy of `y`; written into `into` (as long as `y`, and not `y` itself) when given,
- * which spares a new array: new memory costs a page fault per 4 KB when first written.
+ * which spares a new array (why: ../scratch.ts).
  */
 export function savitzkyGolaySmooth(y: ArrayLike<number>, options: SavitzkyGolayOptions = {}, into?: Float64Array): Float64Array {
   const window = options.window ?? 5;
