@@ -42,13 +42,19 @@ const SWITCHES = 7;
 
 /**
  * In-page probe: the first frame (performance.now(), ms since navigation) at which each condition
- * held. It looks once per animation frame, when the browser would show a change anyway: a probe
- * run on every DOM change would itself take the page's thread while the demo loads.
+ * held. Every condition reads the DOM, so it is looked at once in the first frame after the DOM
+ * changed (a MutationObserver asks for that frame), and never otherwise. The bench itself must not
+ * take the cores it measures: a probe run on every frame kept the browser drawing 60 frames a
+ * second (about 45 ms of CPU a second on this machine), and Playwright's polled waits
+ * (`waitForFunction` every 50 ms) took about 180 ms a second between the test runner and the
+ * browser. `benchWaitMark(name)` resolves once, when the mark is set: one call, no polling.
  * Plain text, not a function: the TypeScript runner would wrap a function in helpers the page lacks.
  */
 const PROBE = `(() => {
   const marks = {};
+  const waiters = [];
   window.benchMarks = marks;
+  window.benchWaitMark = (name) => marks[name] !== undefined ? Promise.resolve(marks[name]) : new Promise((resolve) => waiters.push({ name, resolve }));
   const ready = () => document.querySelectorAll('[data-testid=file-row][data-status=ready]').length;
   const busy = () => document.querySelector('[data-testid=import-progress]') !== null
     || document.querySelector('[data-testid=file-row][data-analysis=running], [data-testid=file-row][data-status=importing], [data-testid=file-row][data-status=queued]') !== null;
@@ -60,12 +66,25 @@ const PROBE = `(() => {
     if (want > 0 && ready() >= want && !busy() && plotRenders() > 0 && document.querySelector('[data-testid=couples-table], [data-testid=results-table]')) {
       marks['shown' + want] ??= now;
     }
+    for (let k = waiters.length - 1; k >= 0; k--) {
+      const w = waiters[k];
+      if (marks[w.name] !== undefined) {
+        waiters.splice(k, 1);
+        w.resolve(marks[w.name]);
+      }
+    }
   };
-  const frame = () => {
-    check();
-    requestAnimationFrame(frame);
+  let asked = false;
+  const ask = () => {
+    if (asked) return;
+    asked = true;
+    requestAnimationFrame(() => {
+      asked = false;
+      check();
+    });
   };
-  requestAnimationFrame(frame);
+  new MutationObserver(ask).observe(document, { subtree: true, childList: true, attributes: true, attributeFilter: ['data-status', 'data-analysis', 'data-renders'] });
+  ask();
 })();`;
 
 /** Keeps the run snapshot (`ahead`) the app sends with its first import, for the worker-alone run. */
@@ -108,20 +127,24 @@ const WORKER_ALONE = `(async () => {
 
 /**
  * Waits until no series has been fitting for half a second (a series is fitted 150 ms after its
- * last file is analysed).
+ * last file is analysed). Looked at in the page, every 50 ms, before anything is timed.
  */
 async function waitSeriesFitted(page: Page): Promise<void> {
-  await page.waitForFunction(() => {
-    const w = window as unknown as { benchSeriesSeen?: number; benchWant: number; benchMarks: Record<string, number> };
-    const now = performance.now();
-    if (document.querySelector('[data-testid=series-progress]')) w.benchSeriesSeen = now;
-    return now - (w.benchSeriesSeen ?? w.benchMarks[`shown${w.benchWant}`] ?? now) > 500;
-  }, undefined, { timeout: 600_000, polling: 50 });
+  await page.evaluate(`new Promise((resolve) => {
+    let seen = window.benchMarks['shown' + window.benchWant] ?? performance.now();
+    const look = () => {
+      const now = performance.now();
+      if (document.querySelector('[data-testid=series-progress]')) seen = now;
+      if (now - seen > 500) resolve();
+      else setTimeout(look, 50);
+    };
+    look();
+  })`);
 }
 
+/** The time of a probe mark, once it is set (one call that waits in the page). */
 async function waitMark(page: Page, name: string): Promise<number> {
-  await page.waitForFunction((n) => (window as unknown as { benchMarks: Record<string, number> }).benchMarks[n] !== undefined, name, { timeout: 600_000, polling: 50 });
-  return page.evaluate((n) => (window as unknown as { benchMarks: Record<string, number> }).benchMarks[n] as number, name);
+  return page.evaluate<number, string>((n) => (window as unknown as { benchWaitMark: (m: string) => Promise<number> }).benchWaitMark(n), name);
 }
 
 /** The same batch in a fresh Node process, first pass: the engine compiles as it goes (bench/nodeBatch.ts). */
