@@ -11,7 +11,8 @@ describe('createJoinedReader', () => {
 
   it('gives each file its own bytes when they are read joined, in groups of at most the files and bytes allowed', async () => {
     const spy = vi.spyOn(Blob.prototype, 'arrayBuffer');
-    const read = createJoinedReader(now, 2, 1000);
+    const limits = { files: 2, bytes: 1000 };
+    const read = createJoinedReader(now, limits, limits);
     const blobs = ['0.1,2e-6\n', '', 'E/V;I/A\n0,1', 'x'.repeat(1200), 'last'].map((t) => new Blob([t]));
     const out = await Promise.all(blobs.map(read));
     expect(out.map(text)).toEqual(['0.1,2e-6\n', '', 'E/V;I/A\n0,1', 'x'.repeat(1200), 'last']);
@@ -20,6 +21,17 @@ describe('createJoinedReader', () => {
     // Each answer holds its file's bytes only: a buffer of its own, or its stretch of the joined read.
     expect(new Set(out).size).toBe(out.length);
     expect(out.map((o) => o.byteLength)).toEqual(blobs.map((b) => b.size));
+  });
+
+  it('keeps the first group of a flush small and joins the rest in larger groups', async () => {
+    const spy = vi.spyOn(Blob.prototype, 'arrayBuffer');
+    const read = createJoinedReader(now, { files: 2, bytes: 1000 }, { files: 4, bytes: 1000 });
+    const texts = Array.from({ length: 9 }, (_, k) => `${k},${k * 2}e-6\n`);
+    const out = await Promise.all(texts.map((t) => read(new Blob([t]))));
+    expect(out.map(text)).toEqual(texts);
+    // Two files, then four, then the last three: three joined reads.
+    expect(spy).toHaveBeenCalledTimes(3);
+    expect(spy.mock.contexts.map((b) => (b as Blob).size)).toEqual([0, 2, 6].map((k) => texts.slice(k, k === 0 ? 2 : k + 4).join('').length));
   });
 
   it('reads the files one by one when the joined read fails, so the error belongs to its file', async () => {
