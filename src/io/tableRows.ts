@@ -15,11 +15,11 @@ const PADDING_ALLOWANCE = 1 << 20;
  * Row buffers handed on from one table to the next, to spare new memory (why: core/scratch.ts):
  * every file of a batch needed about 60 KB of row buffers for a moment (a 120-file batch: 1,500
  * fewer page faults, the worker's CPU time 8 % less). Unlike a kept scratch array, a table's
- * buffers live across yields, so they are lent from a pool. A table
- * takes buffers when it starts and gives them back once its columns are copied out (`finish`);
- * a table that fails keeps them, and they go with it. Two tables read at the same time (an
- * import yields between chunks) never share one: a buffer is in the pool or in one table.
- * Only buffers up to SPARE_MAX_LENGTH are kept, at most SPARE_COUNT of each kind.
+ * buffers live across yields, so they are lent from a pool. A table takes buffers when it starts
+ * and gives them back once its columns are copied out (`finish`); a table that fails keeps them,
+ * and they go with it. Two tables read at the same time (an import yields between chunks) never
+ * share one: a buffer is in the pool or in one table. Only buffers up to SPARE_MAX_LENGTH are
+ * kept, at most SPARE_COUNT of each kind.
  */
 const SPARE_MAX_LENGTH = 1 << 17;
 const SPARE_COUNT = 8;
