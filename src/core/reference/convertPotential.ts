@@ -23,6 +23,13 @@ import type { ReferenceId } from './referenceElectrodes';
 /** Typical E½ of Fc⁺/Fc in MeCN / 0.1 M Bu₄NPF₆, V vs SCE (Connelly & Geiger 1996, from memory). */
 export const TYPICAL_FERROCENE_VS_SCE_V = 0.4;
 
+/**
+ * How far E½ of Fc⁺/Fc moves with the solvent (V vs SCE, 0.1 M Bu₄NPF₆), Connelly & Geiger,
+ * Chem. Rev. 96 (1996) 877, Table 1 (from memory): MeCN +0.40, DMF +0.45, CH₂Cl₂ +0.46,
+ * acetone +0.48, THF +0.56.
+ */
+export const FERROCENE_SPREAD = 'it depends on solvent and electrolyte: +0.40 (MeCN), +0.45 (DMF), +0.46 (CH₂Cl₂), +0.48 (acetone), +0.56 V (THF) vs SCE, so the typical value can be off by 0.15 V; measure ferrocene in the same solution';
+
 export interface InternalStandard {
   /** Measured E½ of the internal standard (V) on the scale `scale`. */
   eHalfV: number;
@@ -103,7 +110,7 @@ function ferroceneVsShe(context: ConversionContext): ReferencePosition {
   const sce = referenceVsShe('SCE', context);
   return {
     eVsSheV: TYPICAL_FERROCENE_VS_SCE_V + sce.eVsSheV,
-    basis: `Fc⁺/Fc: typical +${TYPICAL_FERROCENE_VS_SCE_V} V vs SCE for MeCN/0.1 M Bu₄NPF₆ (Connelly & Geiger 1996), not measured — published values span +0.38…+0.45 V`,
+    basis: `Fc⁺/Fc: typical +${TYPICAL_FERROCENE_VS_SCE_V} V vs SCE for MeCN/0.1 M Bu₄NPF₆ (Connelly & Geiger, Chem. Rev. 96 (1996) 877, Table 1, from memory), not measured — ${FERROCENE_SPREAD}`,
     typical: true,
   };
 }

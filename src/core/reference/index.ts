@@ -3,3 +3,6 @@ export * from './referenceElectrodes';
 export * from './convertPotential';
 export * from './referenceOffset';
 export * from './referenceTemperature';
+export * from './referenceName';
+export * from './referenceCautions';
+export * from './hgOxideElectrode';
