@@ -117,10 +117,22 @@ export function parseAnalysisExtras(a: ParsedArgs): AnalysisExtras {
   return out;
 }
 
+/**
+ * The --fc-file companion among the files read, matched by the path as given or by its file name;
+ * a name that is none of them is refused here, in words, rather than as "no couple found".
+ */
+function standardFileOf(read: InputsRead, extras: AnalysisExtras): ReadFile | undefined {
+  const fc = extras.internalStandard?.kind === 'measured' ? extras.internalStandard.fileName : undefined;
+  if (fc === undefined) return undefined;
+  const hit = read.files.find((f) => f.path === fc) ?? read.files.find((f) => f.measurement.fileName === fc);
+  if (!hit) throw new UsageError(`--fc-file "${fc}" is not among the input files; list it with the files to analyse (by the same path or its file name)`);
+  return hit;
+}
+
 /** Each file read once, grouped into series as the screen groups them (io/groupIntoSeries.ts). */
 export function runFilesOf(read: InputsRead, extras: AnalysisExtras): RunFile[] {
-  const fc = extras.internalStandard?.kind === 'measured' ? extras.internalStandard.fileName : undefined;
-  const isStandard = (f: ReadFile) => fc !== undefined && (f.measurement.fileName === fc || f.path === fc);
+  const standard = standardFileOf(read, extras);
+  const isStandard = (f: ReadFile) => f === standard;
   const members = read.files.filter((f) => !isStandard(f));
   const groups = groupIntoSeries(members.map((f) => ({ name: f.measurement.fileName, folder: f.folder })), extras.seriesBy ?? 'auto');
   const keyOf = new Map<ReadFile, string>();
@@ -163,6 +175,10 @@ export function runInputOf(read: InputsRead, args: AnalyzeArgs, extras: Analysis
   }));
   const rates = blankFiles.map((b) => ({ fileName: b.measurement.fileName, scanRateVPerS: b.measurement.scanRateVPerS }));
   const files = runFilesOf(read, extras).map((f) => (blanks.length ? { ...f, blankFile: nearestBlank(f.voltammogram.scanRateVPerS, rates) } : f));
+  // The core finds the companion by its file name, whatever path named it on the command line.
+  const std = extras.internalStandard;
+  const standard = standardFileOf(read, extras);
+  if (std?.kind === 'measured' && standard) extras = { ...extras, internalStandard: { ...std, fileName: standard.measurement.fileName } };
   const keys = [...new Set(files.map((f) => f.series as string))];
   const report: RunInput['report'] = { outputConvention: extras.outputConvention ?? 'iupac' };
   if (args.referenceElectrode !== undefined) report.outputReference = args.referenceElectrode;

@@ -145,7 +145,9 @@ export function cellFromHeaders(measurements: readonly HeaderSource[]): CellFrom
         (values as Record<Field, unknown>)[key] = v;
         evidence[key] = found.evidence[key] as HeaderEvidence;
       } else if (values[key] !== v) {
-        notes.push(`${m.fileName} states ${FIELD_WORDS[key]} ${String(v)}, ${evidence[key]?.fileName ?? ''} ${String(values[key])}; the series uses the first.`);
+        // Each file is converted from the reference it states (core/analysis/runReference.ts); other values: the first.
+        const use = key === 'inputReference' ? 'each file is converted from its own' : 'the series uses the first';
+        notes.push(`${m.fileName} states ${FIELD_WORDS[key]} ${String(v)}, ${evidence[key]?.fileName ?? ''} ${String(values[key])}; ${use}.`);
       }
     }
   }

@@ -130,7 +130,11 @@ export function runContract(r: AnalyzeRunResult, givenAs: string[] = [], fits: r
   return {
     files: r.files.map((f, i) => fileEntry(f, givenAs[i] ?? f.fileName, r)),
     series: r.series.flatMap((s) => s.analysis.couples.map((c) => seriesEntry(s, c))),
-    warnings: r.warnings.map((w) => (w.fileName ? `${w.fileName}: ${w.message}` : w.series && r.series.length > 1 ? `${w.series}: ${w.message}` : w.message)),
+    // What the importer could only guess or doubt first (each message names its file), as the text report lists it.
+    warnings: [
+      ...r.files.flatMap((f) => f.provenance.importWarnings ?? []),
+      ...r.warnings.map((w) => (w.fileName ? `${w.fileName}: ${w.message}` : w.series && r.series.length > 1 ? `${w.series}: ${w.message}` : w.message)),
+    ],
     fits: fits.map(fitSheetEntry),
     seriesGroups: r.series.map((s) => ({
       series: s.key, files: s.fileNames,

@@ -49,7 +49,8 @@ async function screenNumbers(store: HalfwaveStore): Promise<Numbers> {
   for (const id of s.fileOrder) {
     const run = s.results[id]?.run;
     if (!run) throw new Error(`no result for ${s.files[id]?.fileName}`);
-    out.warnings.push(...run.warnings.map((w) => `${run.fileName}: ${w.message}`));
+    // What the importer could only guess or doubt: shown beside the file on screen, first among the contract's warnings.
+    out.warnings.push(...(run.provenance.importWarnings ?? []), ...run.warnings.map((w) => `${run.fileName}: ${w.message}`));
     for (const c of run.analysis.cycles) {
       for (const k of c.couples) {
         out.couples[`${run.fileName}|${c.index}|${k.index}`] = {

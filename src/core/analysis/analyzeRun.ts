@@ -12,7 +12,8 @@
 import { analyzeRunFile } from './analyzeRunFile';
 import { analyzeRunSeries } from './analyzeRunSeries';
 import { resolveCell, resolveMethod, resolveReport, resolveRun, type ResolvedRun } from './resolveRun';
-import { conversionContextOf, fileReference, settleInternalStandard } from './runReference';
+import { conversionContextOf, fileReference, seriesReferenceFacts } from './runReference';
+import { settleInternalStandard } from './runInternalStandard';
 import { RUN_METHODS } from './runMethods';
 import type { AnalyzeRunResult, CellValues, MethodOptions, ReportOptions, RunFileResult, RunInput, RunSeriesResult } from './runTypes';
 
@@ -24,11 +25,12 @@ function analyzeResolvedFiles(run: ResolvedRun, only?: ReadonlySet<string>): Run
   const firstPass = (i: number) => analyzeRunFile(run.files[i]!, cellOf.get(i)!, run.method, recorded).analysis;
   for (const s of run.series) {
     const context = conversionContextOf(s.cell, run.report);
-    settleInternalStandard(context, s.cell, run.files, s.fileIndices, firstPass);
+    const facts = seriesReferenceFacts(run.files, s.fileIndices);
+    settleInternalStandard(context, s.cell, run.files, s.fileIndices, firstPass, facts);
     for (const i of s.fileIndices) {
       const file = run.files[i]!;
       if (only && !only.has(file.input.fileName)) continue;
-      results[i] = analyzeRunFile(file, s.cell, run.method, fileReference(file, s.cell, run.report, context));
+      results[i] = analyzeRunFile(file, s.cell, run.method, fileReference(file, s.cell, run.report, context, facts));
     }
   }
   return results.filter((r) => r !== undefined);

@@ -1,27 +1,62 @@
 /**
  * Reference scales of a run: which scale each file was recorded on, the offset to the reported
- * scale, where the internal standard (Fc⁺/Fc) sits, and the plain-words basis of every scale used.
+ * scale, where the internal standard (Fc⁺/Fc) sits, the plain-words basis of every scale used and
+ * the cautions that go with them (reference/referenceCautions.ts).
  * Conversions go through SHE (reference/referenceOffset.ts, the same function the screen uses).
- * Rules (design): a file's scale is its series' `inputReference` when given, else its own
- * metadata; reporting on another scale needs a known recording scale (else UNKNOWN_REFERENCE).
+ * Rules (design): a file's scale is the one entered for its series when the user entered one,
+ * else the one its own metadata states, else its series' value (from another file's header, or
+ * the default); each file is converted from its own scale, so a series whose files state
+ * different references is converted file by file, with a warning. A file that states nothing in
+ * such a series has no scale (its neighbours disagree), and reporting on another scale then needs
+ * one (else UNKNOWN_REFERENCE).
  * A measured internal standard is the couple with E½ nearest `nearV` (within 0.15 V) in its file,
- * the median over files when several hold it.
+ * the median over files when several hold it; it is refused when it is the only couple of the
+ * series' own files (every potential would read 0 V vs Fc⁺/Fc).
  */
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { AnalysisError } from '../errors';
-import { findReferenceElectrode, referenceOffset, referenceTemperatureShift, resolveReferenceId } from '../reference';
+import { findReferenceElectrode, nonAqueousWord, readReferenceName, referenceCautions, referenceOffset, referenceTemperatureShift, resolveReferenceId } from '../reference';
 import type { ConversionContext, ReferenceId } from '../reference';
-import { median } from '../statistics/median';
 import { kelvinToCelsius } from '../units';
 import type { ResolvedRunFile } from './resolveRun';
 import type { FileReference, ResolvedCell, ResolvedReport, RunFileResult, RunWarning } from './runTypes';
-import type { VoltammogramAnalysis } from './types';
 
-/** The scale a file was recorded on: its series' choice, else its metadata, else unknown. */
-export function recordingScaleOf(file: ResolvedRunFile, cell: Pick<ResolvedCell, 'inputReference'>): ReferenceId | null {
-  if (cell.inputReference) return cell.inputReference;
+/** What the files of one series state about their scales, and what the internal standard's search found. */
+export interface SeriesReferenceFacts {
+  /** Distinct known scales stated by the series' own files (role 'series'), in file order. */
+  statedScales: ReferenceId[];
+  /** Sentences about the internal standard (where it was found, how far from the search potential). */
+  notes: string[];
+}
+
+/** The scale a file's own metadata states, or null (nothing stated, or a name not in the table). */
+function statedScaleOf(file: ResolvedRunFile): ReferenceId | null {
   const named = file.input.referenceElectrode;
   return named ? (findReferenceElectrode(named)?.id ?? null) : null;
+}
+
+/** Distinct scales the series' own files state. */
+export function seriesReferenceFacts(files: readonly ResolvedRunFile[], indices: readonly number[]): SeriesReferenceFacts {
+  const stated = indices.flatMap((i) => {
+    const f = files[i] as ResolvedRunFile;
+    const id = f.role === 'series' ? statedScaleOf(f) : null;
+    return id ? [id] : [];
+  });
+  return { statedScales: [...new Set(stated)], notes: [] };
+}
+
+const entered = (cell: Pick<ResolvedCell, 'origins'>) => (cell.origins.inputReference ?? 'entered') === 'entered';
+
+/**
+ * The scale a file was recorded on: the series' scale when the user entered it, else the file's
+ * own statement, else the series' scale (a header of another file, or the default) unless the
+ * series' files disagree.
+ */
+export function recordingScaleOf(file: ResolvedRunFile, cell: Pick<ResolvedCell, 'inputReference' | 'origins'>, facts?: Pick<SeriesReferenceFacts, 'statedScales'>): ReferenceId | null {
+  if (cell.inputReference && entered(cell)) return cell.inputReference;
+  if (file.input.referenceElectrode) return statedScaleOf(file);
+  if ((facts?.statedScales.length ?? 0) > 1) return null;
+  return cell.inputReference;
 }
 
 /** The conversion context of a series: pH, temperature, user values and a given internal standard. */
@@ -52,51 +87,57 @@ export function scaleOffset(input: ReferenceId | null, report: Pick<ResolvedRepo
   }
 }
 
-export function fileReference(file: ResolvedRunFile, cell: ResolvedCell, report: ResolvedReport, context: ConversionContext): FileReference {
+/** Why a file has no scale, in words, for the message that refuses a conversion. */
+function unknownScaleWhy(file: ResolvedRunFile, facts: Pick<SeriesReferenceFacts, 'statedScales'>): string {
   const named = file.input.referenceElectrode;
-  const why = named ? `its metadata names "${named}", which is not a known reference electrode` : 'neither the file nor its series says what it was recorded against';
-  return scaleOffset(recordingScaleOf(file, cell), report, context, file.input.fileName, why);
+  if (named) return `its metadata names "${named}", ${readReferenceName(named).refusal ?? 'which is not a known reference electrode'}`;
+  if (facts.statedScales.length > 1) return `it states no reference and the other files of its series state different ones (${facts.statedScales.join(', ')}), so none of them can be taken for it`;
+  return 'neither the file nor its series says what it was recorded against';
 }
 
-/**
- * Sets `context.internalStandard` from a measured couple: `firstPass(i)` analyses file i on its
- * recording scale. Searches the named file (any series) or else the series' own files.
- */
-export function settleInternalStandard(
-  context: ConversionContext,
-  cell: ResolvedCell,
-  files: ResolvedRunFile[],
-  seriesIndices: number[],
-  firstPass: (fileIndex: number) => VoltammogramAnalysis,
-): void {
-  const src = cell.internalStandard;
-  if (src?.kind !== 'measured') return;
-  const searched = src.fileName ? files.flatMap((f, i) => (f.input.fileName === src.fileName ? [i] : [])) : seriesIndices;
-  const hits: Array<{ eHalfV: number; scale: ReferenceId; fileName: string }> = [];
-  for (const i of searched) {
-    const f = files[i] as ResolvedRunFile;
-    const scale = recordingScaleOf(f, cell);
-    if (!scale) continue;
-    const near = (firstPass(i).cycles[0]?.couples ?? []).filter((c) => c.eHalfV !== null && Math.abs(c.eHalfV - src.nearV) <= 0.15)
-      .sort((a, b) => Math.abs((a.eHalfV as number) - src.nearV) - Math.abs((b.eHalfV as number) - src.nearV))[0];
-    if (near) hits.push({ eHalfV: near.eHalfV as number, scale, fileName: f.input.fileName });
+export function fileReference(file: ResolvedRunFile, cell: ResolvedCell, report: ResolvedReport, context: ConversionContext, facts: SeriesReferenceFacts = { statedScales: [], notes: [] }): FileReference {
+  const input = recordingScaleOf(file, cell, facts);
+  const ref = scaleOffset(input, report, context, file.input.fileName, unknownScaleWhy(file, facts));
+  const cautions = [...facts.notes, ...scaleCautions(file, cell, report, context, ref)];
+  return cautions.length ? { ...ref, cautions } : ref;
+}
+
+/** Between the internal standard's own scale and Fc⁺/Fc the measured E½ is the whole offset: no table value enters. */
+function measuredDirectly(ref: FileReference, context: ConversionContext): boolean {
+  const std = context.internalStandard?.scale;
+  return std !== undefined && ((ref.input === std && ref.output === 'Fc') || (ref.input === 'Fc' && ref.output === std));
+}
+
+/** Sentences about one file's scale: assumed fillings, an entered scale against the file's own, and referenceCautions. */
+function scaleCautions(file: ResolvedRunFile, cell: ResolvedCell, report: ResolvedReport, context: ConversionContext, ref: FileReference): string[] {
+  const out: string[] = [];
+  const named = file.input.referenceElectrode;
+  const stated = statedScaleOf(file);
+  const fileName = file.input.fileName;
+  if (named && ref.input === stated) {
+    const assumed = readReferenceName(named).assumption;
+    if (assumed) out.push(`${fileName}: ${assumed}`);
   }
-  const first = hits[0];
-  if (!first) {
-    throw new AnalysisError('NO_PEAK', `no couple with E½ within 0.15 V of ${src.nearV} V found for the internal standard${src.fileName ? ` in ${src.fileName}` : ''} (its file's recording scale must be known)`);
-  }
-  if (hits.some((h) => h.scale !== first.scale)) throw new AnalysisError('BAD_OPTION', 'the internal-standard files are on different reference scales');
-  context.internalStandard = {
-    eHalfV: median(hits.map((h) => h.eHalfV)), scale: first.scale, origin: `measured in ${[...new Set(hits.map((h) => h.fileName))].join(', ')}`,
-  };
+  if (stated && ref.input && stated !== ref.input) out.push(`${fileName} states "${named ?? ''}" (${stated}) but its series is set to ${ref.input}, which is used`);
+  const metadata = Object.values(file.input.provenance?.metadata ?? {}).join(' ');
+  const solvent = nonAqueousWord(`${metadata} ${named ?? ''}`);
+  const fc = report.outputReference === 'Fc' || ref.input === 'Fc' ? 'potentials on the Fc⁺/Fc scale'
+    : context.internalStandard !== undefined || cell.internalStandard !== null ? 'an Fc⁺/Fc internal standard' : null;
+  out.push(...referenceCautions({
+    used: [ref.input, ref.output, context.internalStandard?.scale ?? null].filter((x): x is ReferenceId => x !== null),
+    converted: ref.output !== null && ref.input !== ref.output && !measuredDirectly(ref, context),
+    nonAqueousBecause: fc ?? (solvent ? `the header names ${solvent}` : null),
+  }));
+  return out;
 }
 
 /** Plain-words basis of the scales a series used, and warnings for typical or disputed values. */
 export function describeSeriesReferences(files: RunFileResult[], output: ReferenceId | null, temperatureK: number): { basis: string[]; warnings: RunWarning[] } {
-  if (output === null) return { basis: ["potentials on each file's own recording scale (no conversion)"], warnings: [] };
+  if (output === null) return { basis: ["potentials on each file's own recording scale (no conversion)"], warnings: [...mixedScaleWarnings(files, null), ...cautionWarnings(files)] };
   // A file kept on its recording scale contributes its note, not a basis.
   const basis = [...new Set(files.flatMap((f) => f.reference.basis))];
   const warnings: RunWarning[] = files.flatMap((f) => (f.reference.note ? [{ code: 'REFERENCE' as const, fileName: f.fileName, message: f.reference.note }] : []));
+  warnings.push(...mixedScaleWarnings(files, output), ...cautionWarnings(files));
   for (const f of files.filter((x) => x.reference.typical).slice(0, 1)) warnings.push({ code: 'REFERENCE', message: `a typical, not measured, value sets the scale: ${f.reference.basis.join('; ')}` });
   const used = new Set<ReferenceId>([output, ...files.flatMap((f) => (f.reference.input ? [f.reference.input] : []))]);
   for (const id of used) {
@@ -111,4 +152,21 @@ export function describeSeriesReferences(files: RunFileResult[], output: Referen
     else if (withCoefficient.length) warnings.push({ code: 'TEMPERATURE', message: `${withCoefficient.join(', ')} taken at ${at} with its published temperature dependence (see the reference basis)` });
   }
   return { basis, warnings };
+}
+
+/** A series whose files were recorded against different references: converted file by file, or not comparable at all. */
+function mixedScaleWarnings(files: RunFileResult[], output: ReferenceId | null): RunWarning[] {
+  const members = files.filter((f) => f.role === 'series' && f.reference.input !== null);
+  const scales = [...new Set(members.map((f) => f.reference.input as ReferenceId))];
+  if (scales.length < 2) return [];
+  const each = members.map((f) => `${f.fileName}: ${String(f.reference.input)}`).join('; ');
+  const message = output === null
+    ? `the series mixes reference electrodes (${each}) and no scale to report on was chosen: its potentials are on different scales, so E½ and peak positions across the series are not comparable; choose a scale to report on`
+    : `the series mixes reference electrodes (${each}): each file was converted from its own stated scale to ${output}`;
+  return [{ code: 'REFERENCE', message }];
+}
+
+/** Every file's cautions, each sentence once. */
+function cautionWarnings(files: RunFileResult[]): RunWarning[] {
+  return [...new Set(files.flatMap((f) => f.reference.cautions ?? []))].map((message) => ({ code: 'REFERENCE' as const, message }));
 }

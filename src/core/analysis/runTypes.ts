@@ -227,6 +227,12 @@ export interface FileReference {
   typical: boolean;
   /** Why the file stayed on its recording scale although another was asked for; null otherwise. */
   note: string | null;
+  /**
+   * Cautions about this file's scales: a filling assumed from an unqualified name, mercury, the
+   * liquid junction, an aqueous reference with non-aqueous work, where the internal standard was
+   * found (runReference.ts). Absent when there is none.
+   */
+  cautions?: string[];
 }
 
 export interface RunFileResult {
