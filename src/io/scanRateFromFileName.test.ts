@@ -23,6 +23,16 @@ describe('scanRateFromFileName', () => {
     ['cycle3.csv', null],
     ['electrode5_scan.txt', null],
     ['measurement_1Vsample.txt', null],
+    ['run_0.1Vs_2.csv', 0.1],
+    // "vs" for versus: a number before it is no scan rate, but a rate elsewhere in the name is read.
+    ['Fc_5_vs_AgCl.csv', null],
+    ['sample_2_vs_SCE.csv', null],
+    ['run3_vs_Ag.csv', null],
+    ['ferrocene_0.1_vs_AgAgCl.csv', null],
+    ['couple_28 vs Fc.txt', null],
+    ['film_2vs_Ag.csv', null],
+    ['Fc_5_vs_AgCl_100mVs.csv', 0.1],
+    ['x_0.2_vs_SCE_v=0.05Vs.csv', 0.05],
   ];
   for (const [name, expected] of cases) {
     it(`${name} → ${expected ?? 'none'}`, () => {
