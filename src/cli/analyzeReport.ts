@@ -213,6 +213,7 @@ function sessionRunInput(read: InputsRead, args: AnalyzeArgs, extras: AnalysisEx
 /** Runs the analysis and prints it; returns the exit code. */
 export function runAnalysis(read: InputsRead, args: AnalyzeArgs, io: CliIo, extras: AnalysisExtras = {}): number {
   const blankFiles = extras.blankPaths ? readInputs(extras.blankPaths, { overrides: args.overrides }).files : [];
+  if (extras.sessionPath === undefined) assertScanRates(read);
   const input = extras.sessionPath !== undefined ? sessionRunInput(read, args, extras, extras.sessionPath, io) : runInputOf(read, args, extras, blankFiles);
   const result = analyzeRun(input);
   const givenAs = read.files.map((f) => f.path);
@@ -221,6 +222,15 @@ export function runAnalysis(read: InputsRead, args: AnalyzeArgs, io: CliIo, extr
   if (extras.jsonSheetPath !== undefined) writeOut(extras.jsonSheetPath, resultsSheetJson(result, meta));
   io.stdout(args.json ? `${JSON.stringify(runContract(result, givenAs), null, 2)}\n` : analyzeText(result));
   return 0;
+}
+
+/** A file with no usable scan rate stops the run, in the import's own words on what it found. */
+function assertScanRates(read: InputsRead): void {
+  for (const f of read.files) {
+    if (f.measurement.scanRateVPerS !== null) continue;
+    const w = f.warnings.find((x) => x.code === 'NO_SCAN_RATE');
+    if (w) throw new UsageError(`${w.message.replace(/; enter it to use rate-dependent analyses$/, '')}; give it with --scan-rate`);
+  }
 }
 
 function writeOut(path: string, text: string): void {

@@ -37,7 +37,7 @@ function formatOne(path: string, r: ImportResult): string {
   out += row('current kind', d.currentKind.explanation);
   const extras = [
     m.temperatureK ? `temperature ${(m.temperatureK.value - 273.15).toFixed(2)} °C (line ${m.temperatureK.line})` : '',
-    m.areaCm2 ? `area ${m.areaCm2.value} cm² (line ${m.areaCm2.line})` : '',
+    m.areaCm2 ? `area ${+m.areaCm2.value.toPrecision(6)} cm² (line ${m.areaCm2.line}${/π d²\/4/.test(m.areaCm2.text) ? `: ${m.areaCm2.text}` : ''})` : '',
     m.concentrationMolPerCm3 ? `concentration ${+(m.concentrationMolPerCm3.value * 1e6).toPrecision(6)} mM (line ${m.concentrationMolPerCm3.line})` : '',
   ].filter(Boolean);
   if (extras.length) out += row('preamble', extras.join('; '));

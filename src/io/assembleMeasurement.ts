@@ -31,7 +31,7 @@ export function assembleMeasurement(fileName: string, front: FrontMatter, table:
   const reference = chooseReference(fileName, pre, roles, header, warnings);
   const cols = buildColumns(fileName, table, roles, units, convention.value, pre.areaCm2, warnings);
   const written = pre.scanRateVPerS ?? scanRateInNames(header);
-  const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: written }, warnings);
+  const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: written, unitless: pre.scanRateWithoutUnit }, warnings);
   const doubt = !convention.overridden && !pre.convention ? reversedLoop(cols) : null;
   if (doubt) {
     convention = { ...convention, explanation: `${convention.explanation}; but the loop of cycle ${doubt.cycle} runs the polarographic way round (∮ i dE / ∮ |i dE| = ${doubt.orientation.toFixed(2)}): check` };

@@ -23,6 +23,8 @@ interface Input {
   timeS: Float64Array | null;
   segments: SweepSegment[];
   preamble: PreambleValue | null;
+  /** A scan-rate line with a number but no unit (readScanRate.ts unitlessScanRateLine), or null. */
+  unitless?: PreambleValue | null;
 }
 
 const fmt = (v: number) => (v >= 1 ? `${+v.toPrecision(4)} V/s` : `${+(v * 1000).toPrecision(4)} mV/s`);
@@ -40,10 +42,13 @@ export function chooseScanRate(input: Input, warnings: ImportWarning[]): ScanRat
   if (input.preamble) found.push({ source: 'metadata', value: input.preamble.value, why: `from line ${input.preamble.line}: "${input.preamble.text}"` });
   if (fromName) found.push({ source: 'filename', value: fromName.scanRateVPerS, why: `from the file name ("${fromName.match}")` });
   const chosen = found[0];
+  const bare = input.preamble ? null : (input.unitless ?? null);
   if (!chosen) {
-    warnings.push(makeWarning('NO_SCAN_RATE', `${fileName}: no scan rate found (no time column, no "scan rate" line, none in the file name); enter it to use rate-dependent analyses`));
-    return { guess: { value: null, overridden: false, explanation: 'scan rate unknown — no time column, no scan-rate line in the preamble, none in the file name' }, source: null };
+    const line = bare ? `line ${bare.line} ("${bare.text}") names a scan rate but gives no unit, so it was not used (${bare.value} mV/s or ${bare.value} V/s?)` : 'no "scan rate" line';
+    warnings.push(makeWarning('NO_SCAN_RATE', `${fileName}: no scan rate found (no time column, ${line}, none in the file name); enter it to use rate-dependent analyses`, bare ? [bare.line] : undefined));
+    return { guess: { value: null, overridden: false, explanation: `scan rate unknown — no time column, ${bare ? `a scan-rate line without a unit on line ${bare.line} (not used)` : 'no scan-rate line in the preamble'}, none in the file name` }, source: null };
   }
+  if (bare && chosen.source !== 'option') warnings.push(unitlessNote(fileName, bare, chosen));
   for (const other of found.slice(1)) {
     if (Math.abs(other.value - chosen.value) > 0.05 * chosen.value) {
       warnings.push(makeWarning('SCAN_RATE_DISAGREES', `${fileName}: scan rate ${fmt(chosen.value)} (${chosen.source}) differs from ${fmt(other.value)} (${other.source}, ${other.why}); ${fmt(chosen.value)} is used${unitHint(chosen, other.value)}`));
@@ -54,6 +59,13 @@ export function chooseScanRate(input: Input, warnings: ImportWarning[]): ScanRat
     guess: { value: chosen.value, overridden: chosen.source === 'option', explanation: `scan rate ${fmt(chosen.value)} — ${chosen.why}${others ? ` (also: ${others})` : ''}` },
     source: chosen.source,
   };
+}
+
+/** The bare number of a unit-less scan-rate line, compared with the rate used (read as mV/s and as V/s). */
+function unitlessNote(fileName: string, bare: PreambleValue, chosen: { source: ScanRateSource; value: number }): ImportWarning {
+  const near = (v: number) => Math.abs(v / chosen.value - 1) <= 0.05;
+  const reading = near(bare.value * 1e-3) ? `; read as mV/s it agrees` : near(bare.value) ? `; read as V/s it agrees` : `; it agrees with neither read as mV/s nor as V/s`;
+  return makeWarning('SCAN_RATE_NO_UNIT', `${fileName}: line ${bare.line} ("${bare.text}") names a scan rate but gives no unit, so it was not used; ${fmt(chosen.value)} from the ${chosen.source === 'time' ? 'time column' : chosen.source === 'filename' ? 'file name' : chosen.source} is used${reading}`, [bare.line]);
 }
 
 /** A disagreement by a factor of 1000 or 60 usually means the time column's unit is wrong. */

@@ -35,6 +35,41 @@ function table(header: string, pick: (r: number[]) => (number | string)[], cycle
 }
 const EI = (r: number[]) => [r[1] as number, (r[2] as number).toExponential(6)];
 
+describe('a preamble key that carries its unit', () => {
+  // 0.0707 cm² written as cm² in the key, and as 7.07 mm² (× 0.01 cm²/mm², SI Brochure Table 7).
+  it.each([
+    ['Area (cm2): 0.0707', 0.0707],
+    ['Area (mm2): 7.07', 0.0707],
+    ['Electrode area [mm²] = 7.07', 0.0707],
+    ['"Fläche";"0,0707 cm²"', 0.0707],
+  ])('"%s" gives %f cm², not the unit\'s exponent', (line, area) => {
+    const m = read('cell.txt', `${line}\n${table('E (V),I (A)', EI)}`).measurement;
+    expect(m.areaCm2?.value).toBeCloseTo(area, 12);
+    expect(m.areaCm2?.line).toBe(1);
+  });
+  // Area of a disk π d²/4 (elementary geometry): d = 3 mm → 0.0706858 cm².
+  it.each(['Diameter: 3 mm', 'Electrode diameter: 3 mm', 'Diameter (mm) = 3'])('"%s" gives the disk\'s area π d²/4', (line) => {
+    const m = read('disk.txt', `${line}\n${table('E (V),I (A)', EI)}`).measurement;
+    expect(m.areaCm2?.value).toBeCloseTo((Math.PI * 0.3 ** 2) / 4, 12);
+    expect(m.areaCm2?.text).toMatch(/π d²\/4/);
+  });
+  it('a counter electrode\'s diameter and an area in a unit it does not know are not taken', () => {
+    expect(read('a.txt', `Counter electrode diameter: 5 mm\n${table('E (V),I (A)', EI)}`).measurement.areaCm2).toBeNull();
+    expect(read('a.txt', `Area (in2): 0.011\n${table('E (V),I (A)', EI)}`).measurement.areaCm2).toBeNull();
+  });
+  // T/K = t/°C + 273.15 (SI Brochure sect. 2.3.1); 1 mM = 1e-6 mol/cm³ (1 L = 1000 cm³, Table 8).
+  it('temperature, concentration and scan rate with the unit in the key', () => {
+    const pre = 'Scan Rate (V/s) = 0.05\nTemperature (K): 298.15\nConcentration (mM): 2.5\n';
+    const m = read('k.txt', `${pre}${table('E (V),I (A)', EI)}`).measurement;
+    expect(m.scanRateVPerS).toBeCloseTo(0.05, 12);
+    expect(m.temperatureK?.value).toBeCloseTo(298.15, 9);
+    expect(m.concentrationMolPerCm3?.value).toBeCloseTo(2.5e-6, 18);
+    const c = read('c.txt', `Scan rate (mV/s): 50\nTemperature (°C): 25\n${table('E (V),I (A)', EI)}`).measurement;
+    expect(c.scanRateVPerS).toBeCloseTo(0.05, 12);
+    expect(c.temperatureK?.value).toBeCloseTo(298.15, 9);
+  });
+});
+
 describe('"vs" (versus) in a file name is no scan rate', () => {
   it.each(['Fc_5_vs_AgCl.csv', 'sample_2_vs_SCE.csv', 'run3_vs_Ag.csv', 'ferrocene_0.1_vs_AgAgCl.csv'])('%s: no rate from the name', (name) => {
     const r = read(name, table('E (V),I (A)', EI));
@@ -46,5 +81,22 @@ describe('"vs" (versus) in a file name is no scan rate', () => {
     const r = read('couple_28_vs_Fc.csv', table('t (s),E (V),I (A)', (x) => [x[0] as number, ...EI(x)]));
     expect(r.measurement.scanRateVPerS).toBeCloseTo(0.1, 6);
     expect(codes(r)).not.toContain('SCAN_RATE_DISAGREES');
+  });
+});
+
+describe('a scan-rate line without a unit', () => {
+  it('is not used, and the warning names it instead of saying there is none', () => {
+    const r = read('bare.txt', `Scan rate: 50\n${table('Potential (V),Current (A)', EI)}`);
+    expect(r.measurement.scanRateVPerS).toBeNull();
+    const w = r.warnings.find((x) => x.code === 'NO_SCAN_RATE');
+    expect(w?.message).toMatch(/line 1 \("Scan rate: 50"\) names a scan rate but gives no unit/);
+    expect(w?.lines).toEqual([1]);
+    expect(r.measurement.detection.scanRate.explanation).not.toMatch(/no scan-rate line/);
+  });
+  // 0.1 V/s from the time column (construction); "100" read as mV/s is 0.1 V/s (SI Table 7).
+  it('beside a time column, it is compared with the rate used', () => {
+    const r = read('bare.txt', `Scan rate: 100\n${table('t (s),E (V),I (A)', (x) => [x[0] as number, ...EI(x)])}`);
+    expect(r.measurement.scanRateVPerS).toBeCloseTo(0.1, 6);
+    expect(r.warnings.find((x) => x.code === 'SCAN_RATE_NO_UNIT')?.message).toMatch(/read as mV\/s it agrees/);
   });
 });

@@ -32,8 +32,11 @@ describe('readPreamble', () => {
     });
   }
 
-  it('a scan-rate line without any unit is not guessed', () => {
-    expect(readPreamble(['Scan rate: 100']).scanRateVPerS).toBeNull();
+  it('a scan-rate line without any unit is not guessed, but kept as seen', () => {
+    const r = readPreamble(['Operator: X', 'Scan rate: 100']);
+    expect(r.scanRateVPerS).toBeNull();
+    expect(r.scanRateWithoutUnit).toMatchObject({ value: 100, line: 2, text: 'Scan rate: 100' });
+    expect(readPreamble(['Scan rate (mV/s): 100']).scanRateWithoutUnit).toBeNull();
   });
 
   it('temperature, area, concentration and reference electrode in core units', () => {

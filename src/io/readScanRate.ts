@@ -31,6 +31,17 @@ export function readScanRateLine(text: string, line: number): PreambleValue | nu
   return positive(toNumber(num[1] as string) * f, line, text);
 }
 
+/**
+ * A line that names the scan rate and gives a number but no unit ("Scan rate: 50"): not read as a
+ * rate (50 could be mV/s or V/s), but kept so the import can say it saw the line and why it did
+ * not use it. Null when the line is no such line or does give a unit.
+ */
+export function unitlessScanRateLine(text: string, line: number): PreambleValue | null {
+  if (!RATE_WORDS.test(text) || readScanRateLine(text, line) || UNIT_IN_KEY.test(text)) return null;
+  const num = VALUE_AFTER_KEY.exec(text);
+  return num ? positive(toNumber(num[1] as string), line, text) : null;
+}
+
 /** A number followed by a scan-rate unit anywhere in the text ("j @ 50 mVs-1 (mA cm-2)"). */
 export function scanRateIn(text: string, line: number): PreambleValue | null {
   const m = VALUE_WITH_UNIT.exec(text);

@@ -138,7 +138,7 @@ export function resolveReport(r: ReportOptions = {}): ResolvedReport {
 function resolveFile(f: RunFile, blanks: RunBlank[]): ResolvedRunFile {
   const v = f.voltammogram;
   if (v.scanRateVPerS === null || v.scanRateVPerS === undefined) {
-    throw new AnalysisError('BAD_OPTION', `${f.fileName}: no scan rate (no time column, none in the metadata or the file name); give the scan rate`);
+    throw new AnalysisError('BAD_OPTION', `${f.fileName}: no scan rate the import could use (its warnings say what it found); give the scan rate`);
   }
   assertFiniteInRange(`scan rate of ${f.fileName} (V/s)`, v.scanRateVPerS, 1e-9);
   const peakWindows = f.trace?.peakWindows ?? [];
