@@ -8,6 +8,7 @@ import type { ColumnStats } from './columnStats';
 import { ImportError, listSome, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
 import { readHeader } from './headerNames';
+import { sweepCounterOf } from './sweepCounter';
 import type { HeaderReading } from './headerNames';
 import type { ColumnRole, DetectedColumn, ImportOverrides } from './types';
 
@@ -39,10 +40,11 @@ export function assignColumns(fileName: string, names: string[] | null, columns:
   dedupeRoles(slots, headers);
   applyOverrides(fileName, slots, stats, overrides);
   const warnings: ImportWarning[] = [];
-  inferMissing(slots, stats, warnings, fileName);
+  inferMissing(slots, stats, warnings, fileName, overrides.cycleColumn === -1);
   const find = (r: ColumnRole) => slots.findIndex((s) => s.role === r);
   const potential = find('potential');
   const current = find('current');
+  if (overrides.cycleColumn === undefined && potential >= 0) dropSweepCounter(fileName, slots, columns, potential, find('cycle'), warnings);
   if (potential < 0 || current < 0) {
     const numeric = stats.filter((s) => s.finite > 0).length;
     const list = listSome(slots.slice(0, 8).map((s, j) => `${j + 1}: ${names?.[j] ?? 'unnamed'} (${s.role ?? 'unknown'})`), slots.length, '; ');
@@ -64,6 +66,7 @@ function slotFromHeader(h: HeaderReading | null, s: ColumnStats): Slot {
   if (s.finite === 0) return { role: 'other', why: 'holds no numbers, ignored' };
   if (!h) return { role: null, why: '' };
   if (h.secondary) return { role: 'other', why: `header "${h.label}" names a second electrode or copy; kept as an extra column` };
+  if (h.setting) return { role: 'other', why: `header "${h.label}" names an instrument setting (range, gain, set value…), not a measured value; kept as an extra column` };
   if (!h.role) return { role: null, why: '' };
   const unit = h.unitText ? ` with unit ${h.unit?.symbol ?? h.unitText}${h.unitFrom === 'units row' ? ' from the units row' : ''}` : '';
   const kind = h.density ? ' (a current density)' : '';
@@ -71,23 +74,25 @@ function slotFromHeader(h: HeaderReading | null, s: ColumnStats): Slot {
 }
 
 /**
- * Of several current columns, the current is used: a column in amperes before a density, a
- * density that states its unit before one that does not, else the first. The others are kept as
+ * Of several current columns, the plain measured current is used: a column its name calls a
+ * current ("Current (A)") before one named only by its unit ("Ic (A)"), a current before a density,
+ * a density that states its unit before one that does not, else the first. The others are kept as
  * extra columns, and both sides say why.
  */
 function pickCurrentColumn(slots: Slot[], headers: (HeaderReading | null)[]): void {
-  const rank = (j: number) => (!headers[j]?.density ? 0 : headers[j]?.unit ? 1 : 2);
+  const rank = (j: number) => (headers[j]?.density ? (headers[j]?.unit ? 2 : 3) : headers[j]?.roleFromName ? 0 : 1);
   const cands = slots.map((s, j) => (s.role === 'current' ? j : -1)).filter((j) => j >= 0);
   if (cands.length < 2) return;
   const best = cands.reduce((a, b) => (rank(b) < rank(a) ? b : a));
   const what = (j: number) => `column ${j + 1} "${headers[j]?.label ?? ''}"${headers[j]?.density ? ` (a current density${headers[j]?.unit ? '' : ' with no unit'})` : ' (a current)'}`;
-  const reason = rank(best) === 0 ? 'a current is preferred to a density' : rank(best) === 1 ? 'it states its unit' : 'it comes first';
+  const REASONS = ['its name says current, the other is named only by its unit', 'a current is preferred to a density', 'it states its unit'];
+  const reason = (j: number) => (rank(best) === rank(j) ? 'it comes first' : rank(j) >= 2 && rank(best) < 2 ? REASONS[1] : (REASONS[rank(best)] as string));
   for (const j of cands) {
     if (j === best) continue;
-    slots[j] = { role: 'other', why: `${what(j)}: ${what(best)} is used as the current (${reason}); this one is kept as an extra column` };
+    slots[j] = { role: 'other', why: `${what(j)}: ${what(best)} is used as the current (${reason(j)}); this one is kept as an extra column` };
   }
   const chosen = slots[best] as Slot;
-  slots[best] = { role: 'current', why: `${chosen.why}; chosen over ${cands.filter((j) => j !== best).map(what).join(', ')}: ${reason}` };
+  slots[best] = { role: 'current', why: `${chosen.why}; chosen over ${cands.filter((j) => j !== best).map((j) => `${what(j)}: ${reason(j)}`).join(', ')}` };
 }
 
 function dedupeRoles(slots: Slot[], headers: (HeaderReading | null)[]): void {
@@ -119,7 +124,21 @@ function applyOverrides(fileName: string, slots: Slot[], stats: ColumnStats[], o
   }
 }
 
-function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarning[], fileName: string): void {
+/**
+ * A cycle column (named or guessed) that steps at every vertex counts sweeps, not cycles
+ * (sweepCounter.ts): it is kept as an extra column and the cycles are found from the potential.
+ */
+function dropSweepCounter(fileName: string, slots: Slot[], columns: Float64Array[], potential: number, cycle: number, warnings: ImportWarning[]): void {
+  if (cycle < 0) return;
+  const count = sweepCounterOf(columns[potential] as Float64Array, columns[cycle] as Float64Array);
+  if (!count) return;
+  const why = `steps at every turn of the potential (${count.steps} steps at its ${count.vertices} vertices), so it counts sweeps, not cycles (a cycle holds two sweeps); cycles are found from the potential and this column is kept as an extra column`;
+  slots[cycle] = { role: 'other', why };
+  warnings.push(makeWarning('CYCLE_COLUMN_IGNORED', `${fileName}: column ${cycle + 1} ${why}. If it does number cycles, choose it as the cycle column`));
+}
+
+/** `noCycle`: the user said the file has no cycle column, so none is guessed. */
+function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarning[], fileName: string, noCycle: boolean): void {
   // Kept incrementally (not recounted per column), so a file with 10⁶ columns stays linear.
   const roles = new Set<ColumnRole | null>(slots.map((s) => s.role));
   let freeCount = slots.reduce((n, s) => n + (s.role === null ? 1 : 0), 0);
@@ -138,7 +157,14 @@ function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarni
   const spare = () => freeCount - (roles.has('potential') ? 0 : 1) - (roles.has('current') ? 0 : 1);
   const st = (j: number) => stats[j] as ColumnStats;
   for (let j = 0; j < slots.length; j++) if (isFree(j) && spare() > 0 && looksLikeIndex(st(j))) set(j, 'index', 'index — counts 0, 1, 2… (or 1, 2, 3…) row by row');
-  for (let j = 0; j < slots.length; j++) if (isFree(j) && spare() > 0 && !roles.has('cycle') && looksLikeCycle(st(j), rows)) set(j, 'cycle', `cycle — small whole numbers that only rise (${st(j).distinct} values)`);
+  for (let j = 0; j < slots.length; j++) {
+    if (!isFree(j) || spare() <= 0 || roles.has('cycle') || !looksLikeCycle(st(j), rows)) continue;
+    if (!noCycle) set(j, 'cycle', `cycle — small whole numbers that only rise (${st(j).distinct} values)`);
+    else {
+      slots[j] = { role: 'other', why: 'small whole numbers that only rise, as cycle numbers do, but the user set no cycle column; kept as an extra column' };
+      freeCount--;
+    }
+  }
   // Of several rising columns (a single forward sweep rises too), time is the one starting nearest 0.
   const offset = (j: number) => Math.abs(st(j).min) / (st(j).max - st(j).min);
   let t: number | undefined;

@@ -23,6 +23,10 @@ export interface HeaderReading {
   density: boolean;
   /** A second working electrode or a second copy of a role ("I2", "WE2 current"). */
   secondary: boolean;
+  /** An instrument setting, not a measured value ("Current range (A)", "Gain", "I set (A)"). */
+  setting: boolean;
+  /** The role was read from the name's words ("Current"), not only from its unit ("Ic (A)"). */
+  roleFromName: boolean;
   /** "vs Ag/AgCl" and the like, when the header or its unit names a reference electrode. */
   reference: string | null;
   referenceFrom: 'name' | 'units row' | null;
@@ -42,6 +46,14 @@ const MAX_NAME_CHARS = 200;
 
 const SECONDARY = /^(i2|current\s*2|we\s*2\s*current|e2|we\s*2\s*potential|potential\s*2|j2)$/i;
 const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|power|resistance|freq|phase|ox\/red|control|status|flag|mode|comment/i;
+/**
+ * Settings of the instrument, written as columns beside the measured values: a current range, a
+ * gain, a sensitivity, a compliance or limit; for a current also a set, applied or target value
+ * (in a voltammogram the current is measured, the potential is the one applied). Common
+ * practice, no source.
+ */
+const SETTING_WORDS = /\b(range|gain|sensitivity|compliance|limits?|set\s*point|setpoint|bereich|verst[äa]rkung|empfindlichkeit|rango|ganancia|gamme|gamma|intervalo|zakres)\b/i;
+const CURRENT_SET_WORDS = /\b(set|applied|imposed|target|control(led)?|soll)\b/i;
 const VS = /\s+(?:vs\.?|versus|gegen)\s+([^()[\]]+?)(?=\s*[[(]|\s*\/\s*[kmµuμ]?V\b|$)/i;
 
 /** Splits "E vs Ag/AgCl (mV)" into label "E", unit "mV" and reference "Ag/AgCl"; `unitCell` is the units row's entry. */
@@ -63,11 +75,14 @@ export function readHeader(raw: string, unitCell = ''): HeaderReading {
   const density = unit?.kind === 'currentDensity' || (DENSITY_WORDS.test(label) && unit?.kind !== 'current');
   let role: ColumnRole | null = DENSITY_WORDS.test(label) ? 'current' : null;
   for (const [r, re] of ROLE_WORDS) if (!role && re.test(label)) role = r;
+  const roleFromName = role !== null;
   if (secondary) role = 'other';
   if (!role && unit) role = roleOfUnit(unit);
+  const setting = role !== 'time' && role !== 'cycle' && (SETTING_WORDS.test(label) || (role === 'current' && CURRENT_SET_WORDS.test(label)));
+  if (setting) role = 'other';
   if (!role && (OTHER_WORDS.test(label) || unit?.kind === 'charge')) role = 'other';
   return {
-    label, unit, density, secondary, role,
+    label, unit, density, secondary, setting, role, roleFromName,
     unitText: rowUnit ? unitCell.trim() : named.unitText,
     unitFrom: rowUnit ? 'units row' : named.unit ? 'name' : null,
     reference: reference ?? fromRow?.reference ?? named.reference,

@@ -84,6 +84,49 @@ describe('"vs" (versus) in a file name is no scan rate', () => {
   });
 });
 
+describe('an instrument-setting column beside the current', () => {
+  // The current read must be the measured column's numbers, unchanged (identity, no source needed).
+  it.each(['Current range (A)', 'Gain', 'I set (A)', 'Sensitivity (A/V)'])('"%s" before "Current (A)" does not win', (setting) => {
+    const r = read('set.csv', table(`Time (s),${setting},Potential (V),Current (A)`, (x) => [x[0] as number, 1e-4, ...EI(x)]));
+    const m = r.measurement;
+    expect(m.detection.columns[3]?.role).toBe('current');
+    expect(m.detection.columns[1]?.role).toBe('other');
+    expect(m.currentA[0]).toBeCloseTo(triangleRows(2)[0]?.[2] as number, 12);
+    expect(m.detection.columns[3]?.explanation).not.toMatch(/density/);
+  });
+  it('a current named by its word is preferred to one named only by its unit, and says so', () => {
+    const r = read('two.csv', table('Ic (A),E (V),Current (A)', (x) => [2e-7, ...EI(x)]));
+    expect(r.measurement.detection.columns[2]?.role).toBe('current');
+    expect(r.measurement.detection.columns[0]?.explanation).toMatch(/its name says current/);
+  });
+});
+
+describe('a column that numbers sweeps is not a cycle column', () => {
+  // Two cycles of two sweeps each (construction): a segment counter steps at all 3 vertices.
+  it('"Segment" stepping at every vertex is kept as an extra column, and 2 cycles are found', () => {
+    const r = read('seg.csv', table('Segment,E (V),I (A)', (x) => [x[3] as number, ...EI(x)]));
+    expect(r.measurement.cycles.length).toBe(2);
+    expect(r.measurement.cycleColumn).toBeNull();
+    expect(r.measurement.detection.columns[0]?.role).toBe('other');
+    expect(codes(r)).toContain('CYCLE_COLUMN_IGNORED');
+  });
+  it('a true cycle counter (one step per two sweeps) is still used', () => {
+    const r = read('cyc.csv', table('Cycle,E (V),I (A)', (x) => [x[4] as number, ...EI(x)], 3));
+    expect(r.measurement.cycles.length).toBe(3);
+    expect(r.measurement.detection.columns[0]?.role).toBe('cycle');
+    expect(codes(r)).not.toContain('CYCLE_COLUMN_IGNORED');
+  });
+  it('"no cycle column" (cycleColumn −1) also stops a guessed cycle column; choosing it by hand keeps it', () => {
+    const text = table('Segment,E (V),I (A)', (x) => [x[4] as number, ...EI(x)], 3);
+    expect(read('n.csv', text).measurement.detection.columns[0]?.role).toBe('cycle');
+    const none = read('n.csv', text, { cycleColumn: -1 }).measurement;
+    expect(none.detection.columns[0]?.role).toBe('other');
+    expect(none.cycleColumn).toBeNull();
+    const seg = read('s.csv', table('Segment,E (V),I (A)', (x) => [x[3] as number, ...EI(x)]), { cycleColumn: 0 }).measurement;
+    expect(seg.cycles.length).toBe(4);
+  });
+});
+
 describe('a scan-rate line without a unit', () => {
   it('is not used, and the warning names it instead of saying there is none', () => {
     const r = read('bare.txt', `Scan rate: 50\n${table('Potential (V),Current (A)', EI)}`);
