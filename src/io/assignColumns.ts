@@ -39,6 +39,7 @@ export function assignColumns(fileName: string, names: string[] | null, columns:
   pickCurrentColumn(slots, headers);
   dedupeRoles(slots, headers);
   applyOverrides(fileName, slots, stats, overrides);
+  if (overrides.potentialColumn === undefined && overrides.currentColumn === undefined) refuseForeignNames(fileName, names, headers, slots, stats);
   const warnings: ImportWarning[] = [];
   inferMissing(slots, stats, warnings, fileName, overrides.cycleColumn === -1);
   const find = (r: ColumnRole) => slots.findIndex((s) => s.role === r);
@@ -122,6 +123,23 @@ function applyOverrides(fileName: string, slots: Slot[], stats: ColumnStats[], o
     slots.forEach((s, j) => { if (s.role === role && j !== idx) slots[j] = { role: 'other', why: `was taken for ${role}, but the user chose column ${idx + 1}` }; });
     slots[idx] = { role, why: `${role} (set by the user)` };
   }
+}
+
+/**
+ * Names that all say something else: every named numeric column is another quantity by its word
+ * ("Freq", "Phase"), its role (time, cycle, index) or a unit that is no potential or current
+ * ("Z' (Ohm)"). Guessing roles from the numbers would then analyse a table that is not a
+ * voltammogram (an impedance spectrum's Z′ as the potential), so it is refused instead. A name
+ * that says nothing ("x", "Ch1") still leaves the roles to the numbers.
+ */
+function refuseForeignNames(fileName: string, names: string[] | null, headers: (HeaderReading | null)[], slots: Slot[], stats: ColumnStats[]): void {
+  if (!names || names.length !== slots.length) return;
+  const foreignUnit = (j: number) => !headers[j]?.unit && /[([][^)\]]*[a-zΩ°][^)\]]*[)\]]\s*$/i.test(names[j] ?? '');
+  const named = names.map((_, j) => j).filter((j) => (stats[j] as ColumnStats).finite > 0);
+  const sayElse = (j: number) => (headers[j]?.role && headers[j]?.role !== 'potential' && headers[j]?.role !== 'current') || foreignUnit(j);
+  if (named.length < 2 || slots.some((s) => s.role === 'potential' || s.role === 'current') || !named.every(sayElse)) return;
+  const list = listSome(named.map((j) => `"${(names[j] as string).trim()}"`), named.length);
+  throw new ImportError('NO_TABLE', fileName, `the column names (${list}) name no potential and no current, so this does not look like a voltammogram; if it is one, choose its potential and current columns with a column override`);
 }
 
 /**

@@ -143,3 +143,26 @@ describe('a scan-rate line without a unit', () => {
     expect(r.warnings.find((x) => x.code === 'SCAN_RATE_NO_UNIT')?.message).toMatch(/read as mV\/s it agrees/);
   });
 });
+
+describe('names that say what the columns are', () => {
+  // Unit words: volt, ampere and the SI prefixes milli, micro (SI Brochure, Table 7).
+  it('unit words "(Volts)", "(millivolts)", "(microamps)" are units, not lost', () => {
+    const r = read('words.csv', table('Potential (millivolts),Current (microamps)', (x) => [((x[1] as number) * 1000).toFixed(1), ((x[2] as number) * 1e6).toFixed(6)]));
+    expect(r.measurement.detection.potentialUnit.value).toBe('mV');
+    expect(r.measurement.detection.currentUnit.value).toBe('µA');
+    expect(r.measurement.currentA[0]).toBeCloseTo(triangleRows(2)[0]?.[2] as number, 12);
+    expect(codes(r)).not.toContain('ROLE_GUESSED');
+    const v = read('volts.csv', table('Potential (Volts),Current (Amps)', EI)).measurement.detection;
+    expect([v.potentialUnit.value, v.currentUnit.value]).toEqual(['V', 'A']);
+  });
+  it('a table whose names name no potential and no current (an impedance spectrum) is refused', () => {
+    const rows = Array.from({ length: 30 }, (_, k) => {
+      const f = 1e5 / 10 ** (k / 5);
+      return [f.toExponential(4), (50 + 1000 / (1 + (f / 100) ** 2)).toFixed(3), ((1000 * f) / 100 / (1 + (f / 100) ** 2)).toFixed(3), (-k * 2).toFixed(2)].join(',');
+    });
+    const text = `Freq (Hz),Z' (Ohm),-Z'' (Ohm),Phase (deg)\n${rows.join('\n')}\n`;
+    expect(() => read('spectrum.csv', text)).toThrow(/name no potential and no current/);
+    // Names that say nothing ("x", "y") still leave the roles to the numbers.
+    expect(read('xy.csv', table('x,y', EI)).measurement.detection.columns.map((c) => c.role)).toEqual(['potential', 'current']);
+  });
+});

@@ -42,7 +42,7 @@ export function normaliseUnitText(raw: string): string {
 
 /** Parses a unit symbol such as "mV", "uA", "µA/cm2", "ms", "min"; null when not recognised. */
 export function parseUnit(raw: string): ParsedUnit | null {
-  const u = normaliseUnitText(raw);
+  const u = unitWords(normaliseUnitText(raw));
   const time = /^(ms|µs|us|s|sec|secs|seconds?|min|mins|minutes?|h|hr|hours?)$/i.exec(u);
   if (time) return timeUnit(time[1] as string);
   const m = /^([kmµunp]?)(V|A|C)((?:\/|per)?(?:cm2|cm-2|mm2|mm-2|m2|m-2))?$/i.exec(u);
@@ -61,6 +61,17 @@ export function parseUnit(raw: string): ParsedUnit | null {
   // Factors to A/cm²: 1 mm² = 1e-2 cm², 1 m² = 1e4 cm² (SI Brochure Table 8 area units).
   const per = /mm/i.test(area) ? 'mm²' : /cm/i.test(area) ? 'cm²' : 'm²';
   return { kind: 'currentDensity', symbol: `${prefix}A/${per}`, factor: factor * (PER_AREA_TO_PER_CM2[per] as number) };
+}
+
+/**
+ * Units spelt out, as some exports write them: "Volts", "millivolts", "microamps", "Amperes",
+ * "nanoamperes" → V, mV, µA, A, nA. Only whole words of a potential or a current.
+ */
+function unitWords(u: string): string {
+  const m = /^(milli|micro|nano|pico|kilo)?(volts?|amps?|amperes?)$/i.exec(u);
+  if (!m) return u;
+  const prefix = { milli: 'm', micro: 'µ', nano: 'n', pico: 'p', kilo: 'k' }[(m[1] ?? '').toLowerCase()] ?? '';
+  return `${prefix}${/^v/i.test(m[2] as string) ? 'V' : 'A'}`;
 }
 
 function timeUnit(t: string): ParsedUnit {
