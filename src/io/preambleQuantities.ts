@@ -57,7 +57,11 @@ export function readDiameterArea(key: string, value: string, line: number, text:
   return dCm > 0 && dCm < 10 ? { value: diskAreaCm2(dCm), line, text: `${text} (disk of ${m[1]} ${unit}: π d²/4)` } : null;
 }
 
-/** Temperature in K; with no unit anywhere, °C is assumed (as labs write it). */
+/**
+ * Temperature in K. With no unit anywhere, a value up to 150 is taken as °C (as labs write it), one
+ * from 200 to 400 as K (no liquid cell runs at 200–400 °C in such files, and 298 read as °C would
+ * be 571 K), and anything else is not used; the text says which reading was made.
+ */
 export function readTemperature(key: string, value: string, line: number, text: string): PreambleValue | null {
   const m = new RegExp(`${NUMBER}\\s*(°\\s*C|ºC|deg\\s*C|C|K|°\\s*F|F)?\\b`, 'i').exec(value);
   if (!m) return null;
@@ -65,6 +69,11 @@ export function readTemperature(key: string, value: string, line: number, text: 
   const unit = written.replace(/[\s°º.]|deg(rees?)?/gi, '').replace(/^celsius$/i, 'C').replace(/^kelvin$/i, 'K').replace(/^fahrenheit$/i, 'F').toUpperCase();
   if (unit && !['C', 'K', 'F'].includes(unit)) return null;
   const v = toNumber(m[1] as string);
+  if (!unit) {
+    if (v >= 200 && v <= 400) return { value: v, line, text: `${text} (no unit: read as K)` };
+    if (!(v > -50 && v <= 150)) return null;
+    return { value: v + 273.15, line, text: `${text} (no unit: read as °C)` };
+  }
   const k = unit === 'K' ? v : unit === 'F' ? ((v - 32) * 5) / 9 + 273.15 : v + 273.15;
   return Number.isFinite(k) && k > 0 ? { value: k, line, text } : null;
 }

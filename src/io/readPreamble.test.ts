@@ -49,6 +49,20 @@ describe('readPreamble', () => {
     expect(readPreamble(['Temp: 300 K']).temperatureK?.value).toBeCloseTo(300, 10);
   });
 
+  it('a temperature without a unit: °C up to 150, K from 200 to 400, otherwise not used', () => {
+    // T/K = t/°C + 273.15 (SI Brochure sect. 2.3.1). 298 read as °C would be 571 K, a cell no
+    // liquid-electrolyte export describes: common practice, no source, for where the line falls.
+    const c = readPreamble(['Temperature: 25']).temperatureK;
+    expect(c?.value).toBeCloseTo(298.15, 10);
+    expect(c?.text).toContain('read as °C');
+    const k = readPreamble(['Temperature: 298.15']).temperatureK;
+    expect(k?.value).toBeCloseTo(298.15, 10);
+    expect(k?.text).toContain('read as K');
+    expect(readPreamble(['Temperature: 175']).temperatureK).toBeNull();
+    expect(readPreamble(['Temperature: 1000']).temperatureK).toBeNull();
+    expect(readPreamble(['Temperature: 298 K']).temperatureK?.value).toBeCloseTo(298, 10);
+  });
+
   it('the analyte concentration from a sample line, unless a concentration line says it', () => {
     const fromSample = readPreamble(['Sample: 0.5 mM invented compound in 0.1 M KCl']);
     expect(fromSample.concentrationMolPerCm3?.value).toBeCloseTo(0.5e-6, 18);
