@@ -64,7 +64,7 @@ function describeDiffusion(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOp
   const k = c.rateConstant;
   if (k?.status === 'value' && k.k0CmPerS !== null) {
     const used = k.perFile.filter((f) => f.k0CmPerS !== null);
-    const names = [...new Set(used.map((f) => (f.method === 'nicholson' ? `Nicholson's ψ (${o.psiMethod === 'table' ? 'table' : 'Lavagnini fit'})` : f.method === 'forward-peak' ? 'forward peak, eq. 2-5, E°′ given' : 'forward peak, eq. 2-5, E°′ from the return peak with simulated departures')))].join(' and ');
+    const names = [...new Set(used.map((f) => (f.method === 'nicholson' ? "Nicholson's ψ (table)" : f.method === 'lavagnini' ? "Nicholson's ψ (Lavagnini fit)" : f.method === 'forward-peak' ? 'forward peak, eq. 2-5, E°′ given' : 'forward peak, eq. 2-5, E°′ from the return peak with simulated departures')))].join(' and ');
     out.push(`k° = ${sci(k.k0CmPerS)} cm/s (${names}; median of ${used.length} file${used.length > 1 ? 's' : ''}; D_O/D_R = ${o.diffusionRatio}; D ${k.diffusionSource ?? ''})${span(k.rangeCmPerS, 'cm/s over αc')}`);
   } else if (k?.status === 'lower-bound') {
     out.push(`k° ≥ ${k.lowerBoundCmPerS === null ? '?' : sci(k.lowerBoundCmPerS, 2)} cm/s only: ${k.reason ?? ''}`);

@@ -13,7 +13,7 @@
  *     otherwise D cannot be separated from k_f and only its range is given.
  */
 import { STANDARD_TEMPERATURE_K, inverseThermalVoltagePerV } from '../constants';
-import { NICHOLSON_SWITCH_PAST_V, TABLE_RANGE_MV, followUpCurrentFunction, kineticPeakCurrentRatio, nicholsonPsiAtAlpha } from '../kinetics';
+import { NICHOLSON_SWITCH_PAST_V, TABLE_RANGE_MV, followUpCurrentFunction, kineticPeakCurrentRatio, nicholsonPsiAtAlpha, psiMethodInRange } from '../kinetics';
 import type { FitLineResult } from '../regression';
 import { RANDLES_SEVCIK_REVERSIBLE, randlesSevcikDiffusion, type RandlesSevcikOptions } from '../series';
 import type { PeakDirection } from '../peaks/peakTypes';
@@ -64,13 +64,13 @@ function scaledFit(points: SeriesPoint[], factor: (p: SeriesPoint) => number | n
   }));
 }
 
-/** K(ψ) of one file at αc: 1 below Nicholson's table, null beyond it or without ΔEp. */
+/** K(ψ) of one file at αc: 1 below Nicholson's table, null beyond it or without ΔEp (ψ from the table where the Lavagnini fit, when asked for, does not reach). */
 function kineticRatio(p: SeriesPoint, o: ResolvedSeriesOptions, forwardAlpha: number): number | null {
   if (p.deltaEpV === null) return null;
   const x25 = o.electronCount * p.deltaEpV * 1000 * (STANDARD_TEMPERATURE_K / o.temperatureK);
   if (x25 < TABLE_RANGE_MV[0]) return 1;
   if (x25 > TABLE_RANGE_MV[1]) return null;
-  const psi = nicholsonPsiAtAlpha(p.deltaEpV, { forwardAlpha, switchPastHalfWaveV: switchPastHalfWave(p), electronCount: o.electronCount, temperatureK: o.temperatureK, method: o.psiMethod });
+  const psi = nicholsonPsiAtAlpha(p.deltaEpV, { forwardAlpha, switchPastHalfWaveV: switchPastHalfWave(p), electronCount: o.electronCount, temperatureK: o.temperatureK, method: psiMethodInRange(x25, o.psiMethod) });
   return kineticPeakCurrentRatio(psi.psi, forwardAlpha);
 }
 

@@ -58,3 +58,31 @@ describe('uncompensated resistance against slow kinetics', () => {
     expect(rel(couple.rateConstant?.k0CmPerS, 0.005)).toBeLessThan(0.05);
   });
 });
+
+describe('ψ from the Lavagnini fit, asked for, on a series that runs past its range', () => {
+  // I. Lavagnini, R. Antiochia, F. Magno, Electroanalysis 16, 505 (2004): the closed form holds for
+  // 63 ≤ n·ΔEp ≤ 141 mV only. Simulated k° = 0.01 cm/s, αc = 0.5: ΔEp ≈ 85, 103 and 173 mV at 0.1, 0.3
+  // and 3 V/s, so the fastest file lies beyond the fit but inside Nicholson's table (Anal. Chem. 37,
+  // 1351 (1965), Table I: to 212 mV).
+  const { couple } = analyseSimulatedSeries({ k0CmPerS: 0.01, alpha: 0.5, startV: 0.5, switchV: -0.5, stepV: 0.001 }, [0.1, 0.3, 3], cell, { method: { psiMethod: 'lavagnini' } });
+  const k = couple.rateConstant!;
+
+  it('the run goes on: the file beyond 141 mV takes ψ from the table and says so', () => {
+    const [slow, mid, fast] = k.perFile;
+    expect(slow?.method).toBe('lavagnini');
+    expect(mid?.method).toBe('lavagnini');
+    expect(slow?.psi?.source).toBe('lavagnini-2004-fit');
+    expect(fast?.method).toBe('nicholson');
+    expect(fast?.psi?.source).toBe('nicholson-1965-table');
+    expect(fast?.note).toMatch(/outside 63–141 mV.*Nicholson's table/);
+    expect(slow?.note ?? null).toBeNull();
+  });
+
+  // The simulator's k° (0.01 cm/s) within 10 %: the fit runs up to 6.6 % above the table (Lavagnini
+  // et al. 2004, their comparison with Nicholson's Table I).
+  it('every file gives k° within 10 % of 0.01 cm/s, and D comes out too', () => {
+    for (const f of k.perFile) expect(rel(f.k0CmPerS, 0.01)).toBeLessThan(0.1);
+    expect(k.status).toBe('value');
+    expect(couple.diffusion).not.toBeNull();
+  });
+});

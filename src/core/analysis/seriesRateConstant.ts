@@ -10,7 +10,7 @@
  */
 import { AnalysisError } from '../errors';
 import { STANDARD_TEMPERATURE_K } from '../constants';
-import { TABLE_RANGE_MV, correctedIrreversibleRateConstant, forwardPeakRateConstant, nicholsonPsiAtAlpha, nicholsonRateConstant } from '../kinetics';
+import { LAVAGNINI_RANGE_MV, TABLE_RANGE_MV, correctedIrreversibleRateConstant, forwardPeakRateConstant, nicholsonPsiAtAlpha, nicholsonRateConstant, psiMethodInRange } from '../kinetics';
 import type { PeakDirection } from '../peaks/peakTypes';
 import type { OhmicWideningResult } from '../series/ohmicWidening';
 import type { SeriesPoint } from '../series/seriesPoint';
@@ -51,10 +51,11 @@ function k0At(p: SeriesPoint, c: Ctx, alphaC: number, x25: number): { k0: number
   const { dO, dR } = pair(c.dAt(alphaC), c.forward, o.diffusionRatio);
   if (x25 <= TABLE_RANGE_MV[1]) {
     const forwardAlpha = c.forward === 'cathodic' ? alphaC : 1 - alphaC;
-    const psi = nicholsonPsiAtAlpha(p.deltaEpV!, { forwardAlpha, switchPastHalfWaveV: switchPastHalfWave(p), electronCount: o.electronCount, temperatureK: o.temperatureK, method: o.psiMethod });
+    const used = psiMethodInRange(x25, o.psiMethod);
+    const psi = nicholsonPsiAtAlpha(p.deltaEpV!, { forwardAlpha, switchPastHalfWaveV: switchPastHalfWave(p), electronCount: o.electronCount, temperatureK: o.temperatureK, method: used });
     const k0 = nicholsonRateConstant({ psi: psi.psi, diffusionOxCm2PerS: dO, diffusionRedCm2PerS: dR, scanRateVPerS: p.scanRateVPerS, electronCount: o.electronCount }, { alpha: alphaC, temperatureK: o.temperatureK });
-    const source = o.psiMethod === 'table' ? 'nicholson-1965-table' as const : 'lavagnini-2004-fit' as const;
-    return { k0, method: 'nicholson', e0: null, psi: { psi: psi.psi, source, nDeltaEpMv25: x25 } };
+    const source = used === 'table' ? 'nicholson-1965-table' as const : 'lavagnini-2004-fit' as const;
+    return { k0, method: used === 'table' ? 'nicholson' : 'lavagnini', e0: null, psi: { psi: psi.psi, source, nDeltaEpMv25: x25 } };
   }
   const forwardPeak = c.forward === 'cathodic' ? p.epcV : p.epaV;
   if (o.formalPotentialV !== null && forwardPeak !== null) {
@@ -70,6 +71,12 @@ function k0At(p: SeriesPoint, c: Ctx, alphaC: number, x25: number): { k0: number
   return { k0: r.k0CmPerS, method: 'irreversible', e0: r.formalPotentialV, psi: null };
 }
 
+/** Why a file asked to use the Lavagnini fit took ψ from Nicholson's table, or null. */
+function psiNote(x25: number, method: PerFile['method'], o: ResolvedSeriesOptions): string | null {
+  if (o.psiMethod !== 'lavagnini' || method !== 'nicholson') return null;
+  return `n·ΔEp = ${x25.toFixed(1)} mV lies outside ${LAVAGNINI_RANGE_MV[0]}–${LAVAGNINI_RANGE_MV[1]} mV of the Lavagnini et al. (2004) fit: ψ from Nicholson's table (1965) for this file`;
+}
+
 function fileRateConstant(p: SeriesPoint, c: Ctx): PerFile {
   const none = { fileIndex: p.fileIndex, k0CmPerS: null, method: null, psi: null };
   const o = c.o;
@@ -82,7 +89,7 @@ function fileRateConstant(p: SeriesPoint, c: Ctx): PerFile {
   try {
     const head = k0At(p, c, alphaC, x25);
     const ends = (c.transfer.alphaCRange ?? [alphaC, alphaC]).map((a) => (a === alphaC ? head.k0 : k0At(p, c, a, x25).k0));
-    return { fileIndex: p.fileIndex, k0CmPerS: head.k0, method: head.method, psi: head.psi, rangeCmPerS: [Math.min(...ends, head.k0), Math.max(...ends, head.k0)], formalPotentialV: head.e0, reason: null };
+    return { fileIndex: p.fileIndex, k0CmPerS: head.k0, method: head.method, psi: head.psi, rangeCmPerS: [Math.min(...ends, head.k0), Math.max(...ends, head.k0)], formalPotentialV: head.e0, reason: null, note: psiNote(x25, head.method, o) };
   } catch (err) {
     return { ...none, reason: reasonOf(err) };
   }

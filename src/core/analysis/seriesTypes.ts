@@ -108,14 +108,20 @@ export interface SeriesRateConstant {
   perFile: Array<{
     fileIndex: number;
     k0CmPerS: number | null;
-    /** 'nicholson' inside 61–212 mV; beyond, 'irreversible' (both peaks, departures simulated) or 'forward-peak' (E°′ given). */
-    method: 'nicholson' | 'irreversible' | 'forward-peak' | null;
+    /**
+     * 'nicholson' (ψ from Nicholson's table) inside 61–212 mV, or 'lavagnini' (ψ from the Lavagnini
+     * fit, asked for, inside its 63–141 mV); beyond, 'irreversible' (both peaks, departures
+     * simulated) or 'forward-peak' (E°′ given).
+     */
+    method: 'nicholson' | 'lavagnini' | 'irreversible' | 'forward-peak' | null;
     psi: NicholsonPsiResult | null;
     /** k° at the ends of αc's range (cm/s). */
     rangeCmPerS?: [number, number] | null;
     /** E°′ this file's k° rests on (V), for the methods beyond the table. */
     formalPotentialV?: number | null;
     reason: string | null;
+    /** How this file's k° was had when it differs from what was asked (ψ from the table beyond the Lavagnini fit's range). */
+    note?: string | null;
   }>;
   /** k° is at least this (cm/s): from the reversible end of the table, or the apparent k° when ohmic drop may widen ΔEp. */
   lowerBoundCmPerS: number | null;

@@ -113,6 +113,15 @@ export function nicholsonPsi(deltaEpV: number, options: NicholsonPsiOptions = {}
   return { psi: nicholsonTablePsi(x), source: 'nicholson-1965-table', nDeltaEpMv25: x };
 }
 
+/**
+ * The ψ method a reading at X = n·ΔEp (mV, 25 °C) can use: the Lavagnini fit only inside its own
+ * 63–141 mV when it was asked for, Nicholson's table otherwise (the table spans 61–212 mV, so a
+ * file beyond the fit's range still gets ψ, from the source the fit itself approximates).
+ */
+export function psiMethodInRange(nDeltaEpMv25: number, asked: NicholsonPsiMethod): NicholsonPsiMethod {
+  return asked === 'lavagnini' && nDeltaEpMv25 >= LAVAGNINI_RANGE_MV[0] && nDeltaEpMv25 <= LAVAGNINI_RANGE_MV[1] ? 'lavagnini' : 'table';
+}
+
 function outOfRange(x: number, range: [number, number], what: string): AnalysisError {
   const side = x < range[0] ? 'too close to the reversible limit' : 'too wide (treat the couple as irreversible)';
   return new AnalysisError(
