@@ -98,9 +98,10 @@ function seriesEntry(s: RunSeriesResult, c: SeriesCouple) {
     k0Reason: c.rateConstant?.reason ?? null,
     E0: num(c.rateConstant?.formalPotentialV ?? null),
     E0Source: c.rateConstant?.formalPotentialSource ?? null,
+    E0Range: c.rateConstant?.formalPotentialRangeV ?? null,
     k0PerFile: (c.rateConstant?.perFile ?? []).map((k) => ({
       file: c.points.find((p) => p.fileIndex === k.fileIndex)?.fileName ?? null, k0: num(k.k0CmPerS), method: k.method, reason: k.reason,
-      range: k.rangeCmPerS ?? null, E0: num(k.formalPotentialV ?? null), note: k.note ?? null,
+      range: k.rangeCmPerS ?? null, E0: num(k.formalPotentialV ?? null), E0Range: k.formalPotentialRangeV ?? null, note: k.note ?? null,
     })),
     ohmic: c.ohmic ? { grows: c.ohmic.grows, ru: c.ohmic.ruOhm, explainingRu: num(c.ohmic.explainingRuOhm), share: num(c.ohmic.ohmicShare), limitsK0: c.ohmic.limitsK0, text: c.ohmic.text } : null,
     gammaFromSlope: num(c.surface?.coverageFromSlopeMolPerCm2),

@@ -84,7 +84,7 @@ export function analyzeRunSeries(key: string, given: ResolvedCell, method: Resol
     members.map((f) => ({ fileName: f.fileName, scanRateVPerS: f.scanRateVPerS, analysis: f.analysis })),
     {
       electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: cell.concentrationMolPerCm3, temperatureK: cell.temperatureK,
-      alpha: cell.alpha, transferElectronCount: cell.transferElectronCount, diffusionRatio: cell.diffusionRatio, diffusionCm2PerS: cell.diffusionCm2PerS,
+      alpha: cell.alpha, transferElectronCount: cell.transferElectronCount, transferElectronCountGiven: cell.transferElectronCountGiven, diffusionRatio: cell.diffusionRatio, diffusionCm2PerS: cell.diffusionCm2PerS,
       formalPotentialV: reportedFormalPotential(key, cell, members, early), ruOhm: cell.ruOhm, cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
     },
   );

@@ -29,7 +29,7 @@ export function resolveSeriesOptions(options: AnalyzeSeriesOptions): ResolvedSer
   const r = resolveMethod({ seriesCycle: cycle ?? 1, matchToleranceV: matchToleranceV ?? 0.12, psiMethod: psiMethod ?? 'table' });
   return {
     electronCount: c.electronCount, areaCm2: c.areaCm2, concentrationMolPerCm3: c.concentrationMolPerCm3, temperatureK: c.temperatureK, alpha: c.alpha,
-    transferElectronCount: c.transferElectronCount, diffusionRatio: c.diffusionRatio, diffusionCm2PerS: c.diffusionCm2PerS,
+    transferElectronCount: c.transferElectronCount, transferElectronCountGiven: c.transferElectronCountGiven, diffusionRatio: c.diffusionRatio, diffusionCm2PerS: c.diffusionCm2PerS,
     formalPotentialV: c.formalPotentialV, ruOhm: c.ruOhm, cycle: r.seriesCycle, matchToleranceV: r.matchToleranceV, psiMethod: r.psiMethod,
   };
 }

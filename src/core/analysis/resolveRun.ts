@@ -73,6 +73,7 @@ export function resolveCell(c: CellValues = {}): ResolvedCell {
     temperatureK,
     alpha: optional('cathodic transfer coefficient αc', c.alpha, 0.05, 0.95),
     transferElectronCount,
+    transferElectronCountGiven: c.transferElectronCount != null,
     formalPotentialV: optional('formal potential E°′ (V)', c.formalPotentialV, -10, 10),
     formalPotentialScale: c.formalPotentialScale === 'recording' ? 'recording' : 'reported',
     diffusionRatio,

@@ -193,6 +193,8 @@ export interface ResolvedCell {
   temperatureK: number;
   alpha: number | null;
   transferElectronCount: number;
+  /** nₐ came from the user; when not, and n > 1, k° and E°′ from the return peak are given over 1 ≤ nₐ ≤ n. */
+  transferElectronCountGiven: boolean;
   formalPotentialV: number | null;
   formalPotentialScale: 'reported' | 'recording';
   diffusionRatio: number;

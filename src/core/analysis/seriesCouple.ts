@@ -10,6 +10,7 @@
 import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
 import type { SeriesEvidence, Verdict } from '../couples/coupleTypes';
 import { classifySeriesCouple, electroactiveAreaFromStandard, followUpSignature, ohmicWidening } from '../series';
+import { weighOhmicAgainstKinetics, type OhmicWideningFile, type OhmicWideningResult } from '../series/ohmicWidening';
 import type { SeriesPoint } from '../series/seriesPoint';
 import { median } from '../statistics/median';
 import type { CoupleRef } from './matchSeriesCouples';
@@ -20,6 +21,7 @@ import { seriesFollowUp } from './seriesFollowUp';
 import { seriesRateConstant } from './seriesRateConstant';
 import { seriesSurface } from './seriesSurface';
 import { seriesTransferCoefficient } from './seriesTransferCoefficient';
+import { rateConstantOverTransferElectrons } from './seriesTransferElectrons';
 import type { SeriesCouple, SeriesFollowUp, SeriesRateConstant } from './seriesTypes';
 
 /** A of a reversible standard of known D from its forward slope (electroactiveAreaFromStandard.ts). */
@@ -59,10 +61,26 @@ function boundedIfReversible(k: SeriesRateConstant | null, verdict: Verdict): Se
   return { ...k, status: 'lower-bound', lowerBoundCmPerS: k.k0CmPerS, k0CmPerS: null, rangeCmPerS: null, reason: 'the series reads as reversible: the apparent k° is only a lower bound' };
 }
 
-function ohmicOf(points: SeriesPoint[], o: ResolvedSeriesOptions) {
-  const files = points.flatMap((p) => (p.deltaEpV !== null && p.reversibleDeltaEpV != null && p.peakCurrentSpanA != null
+function ohmicFiles(points: SeriesPoint[]): OhmicWideningFile[] {
+  return points.flatMap((p) => (p.deltaEpV !== null && p.reversibleDeltaEpV != null && p.peakCurrentSpanA != null
     ? [{ fileIndex: p.fileIndex, scanRateVPerS: p.scanRateVPerS, deltaEpV: p.deltaEpV, reversibleDeltaEpV: p.reversibleDeltaEpV, peakCurrentSpanA: p.peakCurrentSpanA }] : []));
+}
+
+function ohmicOf(points: SeriesPoint[], o: ResolvedSeriesOptions) {
+  const files = ohmicFiles(points);
   return files.length >= 2 ? ohmicWidening(files, { electronCount: o.electronCount, temperatureK: o.temperatureK, ruOhm: o.ruOhm }) : null;
+}
+
+/** Without Ru: the ohmic check weighed against the per-file k° (ohmicWidening.ts), and k° a lower bound when ohmic drop explains the widening as well. */
+function weighedOhmic(ohmic: OhmicWideningResult | null, k: SeriesRateConstant | null, points: SeriesPoint[], o: ResolvedSeriesOptions): { ohmic: OhmicWideningResult | null; rate: SeriesRateConstant | null } {
+  if (!ohmic || !k || k.status !== 'value' || k.k0CmPerS === null) return { ohmic, rate: k };
+  const k0ByFile = new Map(k.perFile.flatMap((f) => (f.k0CmPerS === null ? [] : [[f.fileIndex, [f.k0CmPerS, ...(f.k0AtAlphaEndsCmPerS ?? [])]] as [number, number[]]])));
+  const weighed = weighOhmicAgainstKinetics(ohmic, ohmicFiles(points), k0ByFile, o);
+  if (!weighed.limitsK0) return { ohmic, rate: k };
+  // Were all the widening kinetic, each file's k° would be at least its low end over αc; part of it
+  // ohmic, k° is larger still. The median of those low ends is the bound (robust to one file's scatter).
+  const lows = k.perFile.flatMap((f) => (f.k0CmPerS === null ? [] : [Math.min(f.k0CmPerS, ...(f.rangeCmPerS ?? []))]));
+  return { ohmic: weighed, rate: { ...k, status: 'lower-bound', k0CmPerS: null, rangeCmPerS: null, lowerBoundCmPerS: median(lows), reason: `${weighed.text}; were the widening all kinetic, k° would be ${k.k0CmPerS.toPrecision(3)} cm/s` } };
 }
 
 export function buildSeriesCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {
@@ -81,9 +99,21 @@ export function buildSeriesCouple(index: number, points: SeriesPoint[], first: C
   const followUp = signature ? seriesFollowUp(points, o, signature) : null;
   const transfer = diffusing ? seriesTransferCoefficient(points, kineticClass, forward, o) : null;
   const diffusion = transfer ? seriesDiffusion({ fit: forwardFit, kineticClass, points, forward, transfer, followUp }, o).diffusion : null;
-  const ohmic = diffusing && !followUp ? ohmicOf(points, o) : null;
+  const measuredOhmic = diffusing && !followUp ? ohmicOf(points, o) : null;
   const chemistry = followUp ? 'a follow-up reaction consumes the product and moves the return peak, so ΔEp is not a measure of electron-transfer kinetics (Nicholson & Shain 1964)' : null;
-  const rateConstant = transfer ? seriesRateConstant({ points, forward, diffusion, transfer, reversible: kineticClass === 'reversible', chemistry, ohmic }, o) : null;
+  const firstRate = transfer ? seriesRateConstant({ points, forward, reversible: kineticClass === 'reversible', chemistry, ohmic: measuredOhmic, diffusion, transfer }, o) : null;
+  const { ohmic, rate: headRate } = weighedOhmic(measuredOhmic, firstRate, points, o);
+  const rateInput = { points, forward, reversible: kineticClass === 'reversible', chemistry, ohmic };
+  // nₐ not given with n > 1: the return-peak methods are run at every possible nₐ.
+  const rateAtNa = (na: number) => {
+    const on = { ...o, transferElectronCount: na };
+    const t = seriesTransferCoefficient(points, kineticClass, forward, on);
+    if (t.alphaC === null) return null;
+    const d = seriesDiffusion({ fit: forwardFit, kineticClass, points, forward, transfer: t, followUp }, on).diffusion;
+    return seriesRateConstant({ ...rateInput, diffusion: d, transfer: t }, on);
+  };
+  const rateConstant = headRate && !o.transferElectronCountGiven && o.electronCount > 1 && !chemistry
+    ? rateConstantOverTransferElectrons(headRate, rateAtNa, o.electronCount) : headRate;
   const surface = cls.regime === 'surface' ? seriesSurface(points, o, forward) : null;
   // E½ of the files that have both peaks; none where no file has (a lone peak's Ep is not E½).
   const halves = points.flatMap((p) => (p.eHalfV !== null ? [p.eHalfV] : []));

@@ -71,7 +71,8 @@ function describeDiffusion(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOp
   } else if (k?.status === 'cannot-tell') {
     out.push(`k° cannot be told: ${k.reason ?? ''}`);
   }
-  if (k?.formalPotentialV != null) out.push(`E°′ = ${k.formalPotentialV.toFixed(4)} V (${k.formalPotentialSource ?? ''})`);
+  if (k?.formalPotentialV != null) out.push(`E°′ = ${k.formalPotentialV.toFixed(4)} V${k.formalPotentialRangeV ? ` (${k.formalPotentialRangeV.map((e) => e.toFixed(4)).join(' to ')} V)` : ''} (${k.formalPotentialSource ?? ''})`);
+  else if (k?.formalPotentialRangeV) out.push(`E°′ lies within ${k.formalPotentialRangeV.map((e) => e.toFixed(4)).join(' to ')} V (${k.formalPotentialSource ?? ''})`);
   return out;
 }
 
@@ -119,8 +120,11 @@ export function describeHalfWave(c: Omit<SeriesCouple, 'verdict'>): string {
     return c.kineticClass === 'reversible' ? 'E½ ≈ E°′ of the film (Nernstian, ΔEp ≈ 0)' : 'E½ is the peak midpoint of a slow film, not E°′: the peaks move apart unequally unless αc = 0.5 (Laviron 1979)';
   }
   if (c.kineticClass === 'reversible') return 'E½ = (Epa + Epc)/2 ≈ E°′ + (RT/2nF)·ln(D_R/D_O): E°′ when D_O = D_R';
-  const e0 = c.rateConstant?.formalPotentialV;
-  return `E½ is the peak midpoint (Epa + Epc)/2, not E°′: slow electron transfer moves the peaks apart unequally unless αc = 0.5${e0 != null ? `; E°′ = ${e0.toFixed(4)} V from the peak equation` : ''}`;
+  const k = c.rateConstant;
+  const e0 = k?.formalPotentialV;
+  const range = k?.formalPotentialRangeV ? ` (${k.formalPotentialRangeV.map((e) => e.toFixed(4)).join(' to ')} V)` : '';
+  const how = k?.formalPotentialSource?.startsWith('from E½') ? 'from the E½ of the file nearest reversibility' : 'from the peak equation';
+  return `E½ is the peak midpoint (Epa + Epc)/2, not E°′: slow electron transfer moves the peaks apart unequally unless αc = 0.5${e0 != null ? `; E°′ = ${e0.toFixed(4)} V${range} ${how}` : ''}`;
 }
 
 export function describeSeriesCouple(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptions): string[] {

@@ -13,7 +13,7 @@ import type { SeriesPoint } from '../series/seriesPoint';
 
 /** Series options after defaults and checks: the cell values the series uses, the cycle, the matching tolerance and the ψ method. */
 export type ResolvedSeriesOptions = Pick<ResolvedCell, 'electronCount' | 'areaCm2' | 'concentrationMolPerCm3' | 'temperatureK' | 'alpha'
-  | 'transferElectronCount' | 'diffusionRatio' | 'diffusionCm2PerS' | 'formalPotentialV' | 'ruOhm'> & { cycle: number; matchToleranceV: number; psiMethod: NicholsonPsiMethod };
+  | 'transferElectronCount' | 'transferElectronCountGiven' | 'diffusionRatio' | 'diffusionCm2PerS' | 'formalPotentialV' | 'ruOhm'> & { cycle: number; matchToleranceV: number; psiMethod: NicholsonPsiMethod };
 
 type PointValue = (p: SeriesPoint) => number | null;
 

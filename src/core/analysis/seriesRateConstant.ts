@@ -19,6 +19,7 @@ import { switchPastHalfWave } from './seriesDiffusion';
 import type { ResolvedSeriesOptions } from './seriesFits';
 import type { SeriesDiffusion, SeriesRateConstant, SeriesTransferCoefficient } from './seriesTypes';
 import { forwardAlphaNaFromC } from './seriesTransferCoefficient';
+import { rateConstantDrift, seriesFormalPotential } from './seriesFormalPotential';
 
 export interface RateConstantInput {
   points: SeriesPoint[];
@@ -88,8 +89,13 @@ function fileRateConstant(p: SeriesPoint, c: Ctx): PerFile {
   if (alphaC === null) return { ...none, reason: c.transfer.note ?? 'αc not known' };
   try {
     const head = k0At(p, c, alphaC, x25);
-    const ends = (c.transfer.alphaCRange ?? [alphaC, alphaC]).map((a) => (a === alphaC ? head.k0 : k0At(p, c, a, x25).k0));
-    return { fileIndex: p.fileIndex, k0CmPerS: head.k0, method: head.method, psi: head.psi, rangeCmPerS: [Math.min(...ends, head.k0), Math.max(...ends, head.k0)], formalPotentialV: head.e0, reason: null, note: psiNote(x25, head.method, o) };
+    const ends = (c.transfer.alphaCRange ?? [alphaC, alphaC]).map((a) => (a === alphaC ? head : k0At(p, c, a, x25)));
+    const k0s = ends.map((e) => e.k0);
+    const e0s = [head, ...ends].flatMap((e) => (e.e0 === null ? [] : [e.e0]));
+    return {
+      fileIndex: p.fileIndex, k0CmPerS: head.k0, method: head.method, psi: head.psi, rangeCmPerS: [Math.min(...k0s, head.k0), Math.max(...k0s, head.k0)], k0AtAlphaEndsCmPerS: [k0s[0]!, k0s[1]!],
+      formalPotentialV: head.e0, formalPotentialRangeV: e0s.length ? [Math.min(...e0s), Math.max(...e0s)] : null, reason: null, note: psiNote(x25, head.method, o),
+    };
   } catch (err) {
     return { ...none, reason: reasonOf(err) };
   }
@@ -123,12 +129,10 @@ export function seriesRateConstant(input: RateConstantInput, o: ResolvedSeriesOp
   const k0 = got.length ? median(got.map((f) => f.k0CmPerS!)) : null;
   const lows = got.map((f) => Math.min(f.rangeCmPerS?.[0] ?? Infinity, f.k0CmPerS!));
   const highs = got.map((f) => Math.max(f.rangeCmPerS?.[1] ?? 0, f.k0CmPerS!));
-  const e0s = got.flatMap((f) => (f.formalPotentialV == null ? [] : [f.formalPotentialV]));
   const base = {
     perFile, diffusionOxCm2PerS: pair(dBulk, input.forward, o.diffusionRatio).dO,
     diffusionSource: o.diffusionCm2PerS !== null ? 'given by the user' : 'fitted from this series (Randles–Ševčík)',
-    formalPotentialV: e0s.length ? median(e0s) : null,
-    formalPotentialSource: !e0s.length ? null : o.formalPotentialV !== null ? 'given by the user' : 'from the return peaks, their departure from eq. 2-5 simulated',
+    ...seriesFormalPotential(got, input, o),
   };
   const apparent = k0 !== null && got.length * 2 >= input.points.length ? k0 : null;
   const bound = Math.max(reversibleEndBound(c) ?? 0, apparent ?? 0) || null;
@@ -145,5 +149,11 @@ export function seriesRateConstant(input: RateConstantInput, o: ResolvedSeriesOp
       : { ...base, k0CmPerS: null, status: 'cannot-tell', rangeCmPerS: null, lowerBoundCmPerS: null, reason: why };
   }
   // The range holds every file at every end of αc's range: the files' own scatter belongs to it.
-  return { ...base, k0CmPerS: k0, status: 'value', rangeCmPerS: [Math.min(...lows, k0), Math.max(...highs, k0)], lowerBoundCmPerS: null, reason: null };
+  const rangeCmPerS: [number, number] = [Math.min(...lows, k0), Math.max(...highs, k0)];
+  const drift = rateConstantDrift(got, input.points);
+  if (drift) {
+    const doubt = base.formalPotentialSource && o.formalPotentialV === null ? { formalPotentialSource: `${base.formalPotentialSource} (a model whose k° drifts with v: doubtful)` } : {};
+    return { ...base, ...doubt, k0CmPerS: null, status: 'cannot-tell', rangeCmPerS, lowerBoundCmPerS: null, reason: drift.text, driftFold: drift.fold };
+  }
+  return { ...base, k0CmPerS: k0, status: 'value', rangeCmPerS, lowerBoundCmPerS: null, reason: null };
 }

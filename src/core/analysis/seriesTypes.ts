@@ -117,20 +117,32 @@ export interface SeriesRateConstant {
     psi: NicholsonPsiResult | null;
     /** k° at the ends of αc's range (cm/s). */
     rangeCmPerS?: [number, number] | null;
+    /** k° at the low and at the high end of αc's range (cm/s), in that order. */
+    k0AtAlphaEndsCmPerS?: [number, number] | null;
     /** E°′ this file's k° rests on (V), for the methods beyond the table. */
     formalPotentialV?: number | null;
+    /** That E°′ at the ends of αc's range (V). */
+    formalPotentialRangeV?: [number, number] | null;
     reason: string | null;
     /** How this file's k° was had when it differs from what was asked (ψ from the table beyond the Lavagnini fit's range). */
     note?: string | null;
   }>;
+  /** Fold change of the per-file k° over the rates when it drifts steadily (status 'cannot-tell'), else null or absent. */
+  driftFold?: number | null;
   /** k° is at least this (cm/s): from the reversible end of the table, or the apparent k° when ohmic drop may widen ΔEp. */
   lowerBoundCmPerS: number | null;
   /** D_O used (cm²/s) and where it came from. */
   diffusionOxCm2PerS: number | null;
   diffusionSource: string | null;
-  /** Median E°′ (V) from the methods beyond the table, with its origin. */
+  /**
+   * E°′ (V) with its origin: given; the median from the return peaks (methods beyond the table); or
+   * the E½ of the file nearest reversibility when that bounds E°′ more narrowly than the return-peak
+   * model over αc's range (seriesFormalPotential.ts).
+   */
   formalPotentialV?: number | null;
   formalPotentialSource?: string | null;
+  /** Where E°′ can lie (V): over αc's range (and nₐ when not given), or E½ ± half the file's widening. */
+  formalPotentialRangeV?: [number, number] | null;
 }
 
 export interface SeriesSurface {

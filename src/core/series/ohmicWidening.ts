@@ -18,7 +18,11 @@
  * Rules (ours; common practice, no source): ΔEp grows when the fastest file's exceeds the
  *   slowest's by more than 2/n mV (25 °C). With Ru given, k° is a lower bound when at a widening
  *   file that widens most the drop |Δi|·Ru is at least half the widening. Without Ru, k° is a lower bound when every
- *   file stays within n·ΔEp ≤ 72 mV (25 °C).
+ *   file stays within n·ΔEp ≤ 72 mV (25 °C), or (weighOhmicAgainstKinetics) when one Ru explains the
+ *   widening of every file at least as steadily as one k° does at its best αc within the range
+ *   used: ohmic drop widens ΔEp in proportion to the peak current, slow kinetics so that k° stays
+ *   the same at every rate, and the model whose per-file parameter scatters less cannot be set
+ *   aside, as long as the one Ru holds every file within ±11 % (OHMIC_STEADY_SPREAD).
  */
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { formatMillivolts, formatScanRate } from '../units';
@@ -74,6 +78,47 @@ export function ohmicWidening(files: OhmicWideningFile[], options: OhmicWidening
   const nearReversible = byRate.every((f) => f.deltaEpV * scale <= 0.072);
   const limitsK0 = grows && (ruOhm > 0 ? (ohmicShare ?? 0) >= 0.5 : nearReversible);
   return { ruOhm, perFile, grows, ohmicShare, explainingRuOhm, limitsK0, text: describe(grows, ruOhm, ohmicShare, explainingRuOhm, limitsK0, last, lastFile) };
+}
+
+/**
+ * Largest max/min of the per-file Ru for the widening to count as ohmic (ours; common practice, no
+ * source): simulated Nernstian couples with 150–300 Ω give one Ru within ±2 %; ±11 % leaves room
+ * for the peaks' reading.
+ */
+export const OHMIC_STEADY_SPREAD = 1.25;
+
+/** Files whose widening (n·ΔEp, 25 °C) is at least this (V) enter the per-file Ru: below it the reading's rounding dominates. */
+const WEIGHED_WIDENING_V = 0.003;
+
+/**
+ * Without Ru: the Ru each widening file alone would need, against the per-file k° (same files), each
+ * file's k° given at one or more αc (the same αc in the same place for every file). When the Ru
+ * scatter (max/min) is no larger than the smallest k° scatter over those αc, ohmic drop explains the
+ * series as well as slow kinetics and k° is only a lower bound (the result comes back with limitsK0
+ * and its text).
+ */
+export function weighOhmicAgainstKinetics(
+  ohmic: OhmicWideningResult, files: OhmicWideningFile[], k0ByFile: ReadonlyMap<number, readonly number[]>, options: Pick<OhmicWideningOptions, 'electronCount' | 'temperatureK'> = {},
+): OhmicWideningResult {
+  if (ohmic.ruOhm > 0 || ohmic.limitsK0 || !ohmic.grows) return ohmic;
+  const scale = (options.electronCount ?? 1) * (STANDARD_TEMPERATURE_K / (options.temperatureK ?? STANDARD_TEMPERATURE_K));
+  const rows = files.flatMap((f) => {
+    const w = f.deltaEpV - f.reversibleDeltaEpV;
+    const k = k0ByFile.get(f.fileIndex);
+    return w * scale >= WEIGHED_WIDENING_V && Math.abs(f.peakCurrentSpanA) > 0 && k !== undefined && k.length && k.every((x) => x > 0) ? [{ ru: w / Math.abs(f.peakCurrentSpanA), k }] : [];
+  });
+  const ways = Math.min(...rows.map((r) => r.k.length));
+  if (rows.length < 3) return ohmic;
+  const spread = (x: number[]) => Math.max(...x) / Math.min(...x);
+  const ruSpread = spread(rows.map((r) => r.ru));
+  const kSpread = Math.min(...Array.from({ length: ways }, (_, j) => spread(rows.map((r) => r.k[j]!))));
+  if (ruSpread > kSpread || ruSpread > OHMIC_STEADY_SPREAD) return ohmic;
+  const ru = Math.sqrt(Math.min(...rows.map((r) => r.ru)) * Math.max(...rows.map((r) => r.ru)));
+  const pct = (s: number) => `±${(((s - 1) / (s + 1)) * 100).toFixed(0)} %`;
+  return {
+    ...ohmic, limitsK0: true,
+    text: `ΔEp widens in proportion to the peak current, as an ohmic drop would: one Ru ≈ ${Number(ru.toPrecision(2))} Ω explains all ${rows.length} widening files within ${pct(ruSpread)}, while their k° agree only within ${pct(kSpread)}; without Ru, slow kinetics and ohmic drop cannot be told apart, so k° is only a lower bound (measure Ru, or vary the concentration)`,
+  };
 }
 
 function describe(grows: boolean, ruOhm: number, share: number | null, explaining: number | null, limits: boolean, last: OhmicWideningFile | undefined, lastFile: { wideningV: number; ohmicDropV: number | null } | undefined): string {
