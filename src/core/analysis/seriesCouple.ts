@@ -71,16 +71,16 @@ function ohmicOf(points: SeriesPoint[], o: ResolvedSeriesOptions) {
   return files.length >= 2 ? ohmicWidening(files, { electronCount: o.electronCount, temperatureK: o.temperatureK, ruOhm: o.ruOhm }) : null;
 }
 
-/** Without Ru: the ohmic check weighed against the per-file k° (ohmicWidening.ts), and k° a lower bound when ohmic drop explains the widening as well. */
+/**
+ * Without Ru: the ohmic check weighed against the per-file k° (ohmicWidening.ts). k° stays a value;
+ * when one Ru explains the widening as well, its reason says so, so the number cannot be read alone.
+ */
 function weighedOhmic(ohmic: OhmicWideningResult | null, k: SeriesRateConstant | null, points: SeriesPoint[], o: ResolvedSeriesOptions): { ohmic: OhmicWideningResult | null; rate: SeriesRateConstant | null } {
   if (!ohmic || !k || k.status !== 'value' || k.k0CmPerS === null) return { ohmic, rate: k };
   const k0ByFile = new Map(k.perFile.flatMap((f) => (f.k0CmPerS === null ? [] : [[f.fileIndex, [f.k0CmPerS, ...(f.k0AtAlphaEndsCmPerS ?? [])]] as [number, number[]]])));
   const weighed = weighOhmicAgainstKinetics(ohmic, ohmicFiles(points), k0ByFile, o);
-  if (!weighed.limitsK0) return { ohmic, rate: k };
-  // Were all the widening kinetic, each file's k° would be at least its low end over αc; part of it
-  // ohmic, k° is larger still. The median of those low ends is the bound (robust to one file's scatter).
-  const lows = k.perFile.flatMap((f) => (f.k0CmPerS === null ? [] : [Math.min(f.k0CmPerS, ...(f.rangeCmPerS ?? []))]));
-  return { ohmic: weighed, rate: { ...k, status: 'lower-bound', k0CmPerS: null, rangeCmPerS: null, lowerBoundCmPerS: median(lows), reason: `${weighed.text}; were the widening all kinetic, k° would be ${k.k0CmPerS.toPrecision(3)} cm/s` } };
+  if (weighed === ohmic) return { ohmic, rate: k };
+  return { ohmic: weighed, rate: { ...k, reason: k.reason ? `${k.reason}; ${weighed.text}` : weighed.text } };
 }
 
 export function buildSeriesCouple(index: number, points: SeriesPoint[], first: CoupleRef['couple'], o: ResolvedSeriesOptions): SeriesCouple {

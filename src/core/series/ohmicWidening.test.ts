@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { ohmicWidening } from './ohmicWidening';
+import { ohmicWidening, weighOhmicAgainstKinetics } from './ohmicWidening';
 
 // i·Ru moves each peak by the ohmic drop (Bard & Faulkner 2nd ed. §1.3.4, from memory); the rules on
 // top are ours (ohmicWidening.ts).
@@ -32,5 +32,20 @@ describe('ohmicWidening', () => {
     expect(ohmicWidening(flat).grows).toBe(false);
     expect(ohmicWidening(flat).limitsK0).toBe(false);
     expect(ohmicWidening([files[0]!]).limitsK0).toBe(false);
+  });
+
+  // Without Ru and beyond the near-reversible end: three files widening by 150 Ω × their
+  // peak-current span (i·Ru, as above). When one Ru holds them no less steadily than one k° does,
+  // k° stands and the text names that Ru; when k° holds them far more steadily, nothing is added
+  // (the weighing rules are ours).
+  const ohmicFiles = [20e-6, 60e-6, 180e-6].map((span, i) => ({ fileIndex: i, scanRateVPerS: 0.1 * 9 ** i, deltaEpV: 0.058 + 150 * span, reversibleDeltaEpV: 0.058, peakCurrentSpanA: span }));
+  it('without Ru: an ohmic-looking widening is named beside k°, never turned into a bound by itself', () => {
+    const base = ohmicWidening(ohmicFiles);
+    expect(base.limitsK0).toBe(false);
+    const drifting = weighOhmicAgainstKinetics(base, ohmicFiles, new Map([[0, [0.03]], [1, [0.036]], [2, [0.042]]]));
+    expect(drifting.limitsK0).toBe(false);
+    expect(drifting.text).toMatch(/one Ru ≈ 150 Ω .*k° is given as if all the widening were kinetic/);
+    const kinetic = weighOhmicAgainstKinetics(base, ohmicFiles.map((f, i) => ({ ...f, deltaEpV: f.deltaEpV + [0.02, 0, -0.01][i]! })), new Map([[0, [0.03]], [1, [0.03]], [2, [0.03]]]));
+    expect(kinetic).toBe(base);
   });
 });

@@ -17,12 +17,13 @@
  *   Nernstian couple with 300 Ω, corrected, still widens from 62 to 75 mV over 0.1–2 V/s).
  * Rules (ours; common practice, no source): ΔEp grows when the fastest file's exceeds the
  *   slowest's by more than 2/n mV (25 °C). With Ru given, k° is a lower bound when at a widening
- *   file that widens most the drop |Δi|·Ru is at least half the widening. Without Ru, k° is a lower bound when every
- *   file stays within n·ΔEp ≤ 72 mV (25 °C), or (weighOhmicAgainstKinetics) when one Ru explains the
- *   widening of every file at least as steadily as one k° does at its best αc within the range
- *   used: ohmic drop widens ΔEp in proportion to the peak current, slow kinetics so that k° stays
- *   the same at every rate, and the model whose per-file parameter scatters less cannot be set
- *   aside, as long as the one Ru holds every file within ±11 % (OHMIC_STEADY_SPREAD).
+ *   file that widens most the drop |Δi|·Ru is at least half the widening. Without Ru, k° is a lower
+ *   bound when every file stays within n·ΔEp ≤ 72 mV (25 °C). Beyond that, without Ru, k° stands
+ *   as if all the widening were kinetic, but when one Ru explains every file's widening within ±11 %
+ *   (OHMIC_STEADY_SPREAD) and no less steadily than one k° does (weighOhmicAgainstKinetics), the
+ *   text says so and names that Ru. It does not turn k° into a bound: over the ψ range where both
+ *   fit, the two scatter alike (a simulated k° = 0.01 cm/s series over one decade, with no Ru at
+ *   all, reads one Ru within ±0.7 % and k° within ±1.6 %), so which fits better says nothing.
  */
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { formatMillivolts, formatScanRate } from '../units';
@@ -93,9 +94,9 @@ const WEIGHED_WIDENING_V = 0.003;
 /**
  * Without Ru: the Ru each widening file alone would need, against the per-file k° (same files), each
  * file's k° given at one or more αc (the same αc in the same place for every file). When the Ru
- * scatter (max/min) is no larger than the smallest k° scatter over those αc, ohmic drop explains the
- * series as well as slow kinetics and k° is only a lower bound (the result comes back with limitsK0
- * and its text).
+ * scatter (max/min) is no larger than the smallest k° scatter over those αc, an uncompensated Ru
+ * would explain the series as well as slow kinetics: k° stands, and the text says so and names the
+ * Ru (limitsK0 unchanged).
  */
 export function weighOhmicAgainstKinetics(
   ohmic: OhmicWideningResult, files: OhmicWideningFile[], k0ByFile: ReadonlyMap<number, readonly number[]>, options: Pick<OhmicWideningOptions, 'electronCount' | 'temperatureK'> = {},
@@ -116,8 +117,8 @@ export function weighOhmicAgainstKinetics(
   const ru = Math.sqrt(Math.min(...rows.map((r) => r.ru)) * Math.max(...rows.map((r) => r.ru)));
   const pct = (s: number) => `±${(((s - 1) / (s + 1)) * 100).toFixed(0)} %`;
   return {
-    ...ohmic, limitsK0: true,
-    text: `ΔEp widens in proportion to the peak current, as an ohmic drop would: one Ru ≈ ${Number(ru.toPrecision(2))} Ω explains all ${rows.length} widening files within ${pct(ruSpread)}, while their k° agree only within ${pct(kSpread)}; without Ru, slow kinetics and ohmic drop cannot be told apart, so k° is only a lower bound (measure Ru, or vary the concentration)`,
+    ...ohmic,
+    text: `ΔEp widens in proportion to the peak current, as an ohmic drop would: one Ru ≈ ${Number(ru.toPrecision(2))} Ω explains all ${rows.length} widening files within ${pct(ruSpread)}, and their k° agree within ${pct(kSpread)}; from one concentration slow kinetics and ohmic drop cannot be told apart, so k° is given as if all the widening were kinetic: with an uncompensated Ru of that size it would be higher, up to reversible (measure Ru and enter it, or vary the concentration)`,
   };
 }
 
