@@ -18,6 +18,8 @@ import { chooseBaseline, type BaselineContext } from '../baseline/chooseBaseline
 import { pairPeaksIntoCouples } from '../couples/pairPeaksIntoCouples';
 import { buildCouple } from '../couples/buildCouple';
 import { thermalVoltageV } from '../constants';
+import { sweepStartOnFoot, usesStartedWave } from '../baseline/startedWaveFoot';
+import { usesOwnFoot } from '../baseline/lineUnderOwnFoot';
 
 const mv = formatMillivolts;
 
@@ -56,6 +58,7 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
     if (outcome.fallbackReason) warn('BASELINE_FALLBACK', `${cand.direction} peak at ${mv(cand.potentialV)}: extended-decay baseline not possible (${outcome.fallbackReason}); linear pre-peak line used`);
     drawn.set(cand, { peak: cand, evaluate: outcome.evaluate, background: outcome.background });
     const peak = measurePeak(sig, cand, outcome.curve, onFirst, outcome.background, (6 * thermalVoltageV(o.temperatureK)) / o.electronCount);
+    if (peak && onFirst && cand === ordered.find((c) => c.segmentIndex === firstSeg)) warnStartOnFoot(sig, cand, peak, partner.get(cand)?.potentialV, o, warn);
     if (peak) measured.set(cand, peak);
     else warn('LOW_SIGNAL', `${cand.direction} feature at ${mv(cand.potentialV)} does not rise above its baseline; dropped`);
   }
@@ -63,6 +66,26 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   const couples = buildCouples(sig, peaks, firstSeg, o, warn);
   if (peaks.length === 0) warn('NO_PEAKS', `no peak rose ${thresholdA.toExponential(3)} A above its surroundings in cycle ${cycle.index}`);
   return { index: cycle.index, peaks, couples, warnings, windowEdges };
+}
+
+/**
+ * A first sweep that starts on the wave's own foot (startedWaveFoot.ts): said always, with the
+ * distance, and loudly when the baseline could not take the started wave's current out.
+ */
+function warnStartOnFoot(sig: SweepSignals, cand: PeakCandidate, peak: PeakResult, partnerV: number | undefined, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void): void {
+  const n = o.electronCount;
+  const on = sweepStartOnFoot(sig, cand, n / thermalVoltageV(o.temperatureK), peak.halfPeakWidthV, partnerV);
+  if (!on) return;
+  const half = on.halfFromCouple ? "the couple's E½ (midpoint of its peaks)" : `its E½ (taken as Ep ${cand.direction === 'cathodic' ? '+' : '−'} ${(28.5 / n).toFixed(1)} mV, a reversible wave's)`;
+  const where = `${cand.direction} peak at ${mv(cand.potentialV)}: the sweep starts on the wave's foot, ${(on.startFromHalfV * 1000).toFixed(0)} mV before ${half} and ${(on.startFromPeakV * 1000).toFixed(0)} mV before Ep (a wave of this width carries about ${(100 * on.footAtStart).toFixed(1)} % of its peak there), with no background alone before the wave`;
+  const need = `start the sweep at least ${(200 / n).toFixed(0)} mV before E½ (README, Known limits)`;
+  if (usesStartedWave(peak.baseline)) {
+    warn('START_ON_FOOT', `${where}; the baseline takes out the current of a reversible wave swept from there out of a solution at rest (Nicholson & Shain 1964, eq. 24). It rests on that model and on the few points before the wave (their noise is extrapolated under the peak); a hold at the start potential would make ip and ΔEp wrong: ${need}`);
+  } else if (usesOwnFoot(peak.baseline)) {
+    warn('START_ON_FOOT', `${where}; the baseline takes out the wave's own foot as from a sweep started far before it, without the current of the start itself: ip and ΔEp may be off by several per cent; ${need}`);
+  } else {
+    warn('START_ON_FOOT', `${where}. UNRELIABLE: the started reversible wave's shape does not fit it (a hold at the start potential before the sweep, or not a reversible wave), and the pre-peak line runs through the rising foot, so ip (forward and return), ΔEp and the verdict are off (a reversible wave started 120 mV before E½ reads ip 20 % low, ΔEp 7 mV narrow); ${need}`);
+  }
 }
 
 function locateOnSweep(sig: SweepSignals, k: number, cycle: number, o: ResolvedAnalyzeOptions, thresholdA: number, warn: (c: AnalysisWarning['code'], m: string) => void, edges: WindowEdgeCurrent[]): PeakCandidate[] {

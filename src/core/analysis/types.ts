@@ -29,7 +29,8 @@ export type AnalysisWarningCode =
   | 'LOW_SIGNAL'
   | 'SPIKES'
   | 'WINDOW_EDGE'
-  | 'NOT_AT_REST';
+  | 'NOT_AT_REST'
+  | 'START_ON_FOOT';
 
 export interface AnalysisWarning {
   code: AnalysisWarningCode;

@@ -19,8 +19,9 @@
  * placed by the peak's distance from the midpoint of its couple (`partnerV`, the return peak), its
  * width agreeing. A slow wave with no return peak, or one whose width says α is far from 0.5,
  * keeps the plain line.
- * The diffusion shape starts far before the wave; a sweep that starts only 150 mV before E½
- * (with the solution at rest) has its own start-up current as well, and ip reads 1 % high there. Null otherwise (the plain line is then used).
+ * The diffusion shape starts far before the wave; where the record's first sweep starts so close
+ * that the foot carries over 0.3 % of the peak at its start (150 mV before E½ for n = 1), the
+ * started wave's own shape is used instead (startedWaveFoot.ts). Null otherwise (the plain line is then used).
  */
 import type { PeakCandidate } from '../peaks/locatePeaksInSweep';
 import type { SweepSignals } from '../peaks/sweepSignals';
@@ -30,8 +31,16 @@ import type { BaselineCurve } from './baselineTypes';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
 import { waveShapeFor, type WaveShape } from './knownWaveShapes';
 import { kineticWaveShapeFor, type KineticWaveShape } from './kineticWaveShape';
+import { lineThrough, lineUnderStartedFoot, sweepStartOnFoot } from './startedWaveFoot';
 
 const PASSES = 4;
+/** Said in the description of a line drawn under the wave's own foot (usesOwnFoot). */
+const OWN_FOOT_WORDS = "the wave's own foot";
+
+/** Whether a baseline was drawn under a wave's own foot of a far-started shape (this file). */
+export function usesOwnFoot(curve: BaselineCurve): boolean {
+  return curve.description.includes(OWN_FOOT_WORDS);
+}
 /** How far past Ep the tail is read (in RT/nF), and the least it may have kept of the height there. */
 const TAIL_AT = 3;
 const TAIL_KEPT = 0.5;
@@ -52,11 +61,16 @@ export function lineUnderOwnFoot(
   const xiFromPeak = (j: number) => -s * nfrt * (sig.potentialV[j]! - peak.potentialV);
   // The peak's distance from the midpoint of its couple (E°′ for α = 0.5), in RT/nF.
   const pastMidpoint = partnerV === undefined ? undefined : (Math.abs(peak.potentialV - partnerV) / 2) * nfrt;
+  // The record's first sweep (from rest) started on the wave's foot: the started wave's own shape.
+  if (peak.segmentIndex === 0 && sweepStartOnFoot(sig, peak, nfrt)) {
+    const started = lineUnderStartedFoot(sig, peak, window, nfrt);
+    if (started && diffusing(sig, peak, started.under, started.height, nfrt, s)) return started.curve;
+  }
   let foot = (_j: number) => 0;
   let shape: WaveShape | undefined;
   let kinetic: KineticWaveShape | null = null;
   for (let pass = 0; pass <= PASSES; pass++) {
-    const line = lineThrough(sig, fitStart, fitEnd, foot);
+    const line = lineThrough(sig, fitStart, fitEnd, (j) => sig.currentA[j]! - foot(j));
     if (!line) return null;
     const under = (j: number) => line.intercept + line.slope * sig.potentialV[j]!;
     const height = s * (sig.locatingA[peak.index]! - under(peak.index));
@@ -90,25 +104,8 @@ export function lineUnderOwnFoot(
   const words = kinetic ? kinetic.words : shape!.words;
   return linearPrePeakBaseline(
     { potentialV: sig.potentialV, currentA: sig.currentA, fitStart, fitEnd, spanStart, spanEnd: seg.end },
-    { less: { what: `the wave's own foot, from ${words}`, currentA: foot } },
+    { less: { what: `${OWN_FOOT_WORDS}, from ${words}`, currentA: foot } },
   ).curve;
-}
-
-/** Least-squares line I = intercept + slope·E through the window's current less `less` (closed form). */
-function lineThrough(sig: SweepSignals, from: number, to: number, less: (j: number) => number): { slope: number; intercept: number } | null {
-  // Potentials counted from the window's first point, for a well-conditioned sum.
-  const e0 = sig.potentialV[from]!;
-  let n = 0, sx = 0, sy = 0, sxx = 0, sxy = 0;
-  for (let j = from; j < to; j++) {
-    const x = sig.potentialV[j]! - e0;
-    const y = sig.currentA[j]! - less(j);
-    if (!Number.isFinite(x) || !Number.isFinite(y)) return null;
-    n++; sx += x; sy += y; sxx += x * x; sxy += x * y;
-  }
-  const det = n * sxx - sx * sx;
-  if (n < 2 || !(det !== 0)) return null;
-  const slope = (n * sxy - sx * sy) / det;
-  return { slope, intercept: (sy - slope * sx) / n - slope * e0 };
 }
 
 /**
