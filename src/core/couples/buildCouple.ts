@@ -13,6 +13,7 @@ import type { PeakDirection, PeakResult } from '../peaks/peakTypes';
 import { nicholsonPeakRatio } from '../baseline/nicholsonPeakRatio';
 import type { SweepSignals } from '../peaks/sweepSignals';
 import { classifyCouple } from './classifyCouple';
+import { switchChargingStep } from '../baseline/switchChargingStep';
 import type { PeakPair } from './pairPeaksIntoCouples';
 
 export interface BuildCoupleOptions {
@@ -70,20 +71,15 @@ export function buildCouple(sig: SweepSignals, peaks: PeakResult[], pair: PeakPa
 
 /**
  * Nicholson (1966): return peak and switching current from zero, signed along each sweep. The
- * formula wants faradaic currents; the double-layer charging current i_c flips sign at the switch
- * (Bard & Faulkner 2nd ed. §1.2, from memory), so half the current step across the switch (mean
- * of three points on each side) is taken off both (our correction; 0 without charging).
+ * formula wants faradaic currents; the double-layer charging current i_c flips sign at the switch,
+ * so half the charging step there (switchChargingStep.ts: each side's trend extrapolated to the
+ * switch, the faradaic kink apart) is taken off both (our correction; 0 without charging).
  */
 function empiricalRatio(sig: SweepSignals, fwd: PeakResult, ret: PeakResult, vertex: number): number {
   const sFwd = fwd.direction === 'anodic' ? 1 : -1;
-  const rStart = sig.segments[ret.segmentIndex]!.start;
-  const mean = (from: number, to: number) => {
-    let sum = 0;
-    for (let k = from; k < to; k++) sum += sig.currentA[k]!;
-    return sum / (to - from);
-  };
-  const after = Math.max(rStart, vertex + 1);
-  const chargingA = after + 3 <= sig.currentA.length ? (sFwd * (mean(vertex - 2, vertex + 1) - mean(after, after + 3))) / 2 : 0;
+  const rSeg = sig.segments[ret.segmentIndex]!;
+  const step = switchChargingStep({ potentialV: sig.potentialV, timeS: sig.timeS, currentA: sig.currentA, vertexIndex: vertex, returnStart: rSeg.start, returnEnd: rSeg.end });
+  const chargingA = step === null ? 0 : (sFwd * step) / 2;
   return nicholsonPeakRatio({
     forwardPeakA: fwd.heightA,
     returnPeakFromZeroA: -sFwd * ret.rawCurrentA - chargingA,
