@@ -39,6 +39,14 @@ describe('resultsSheetCsv', () => {
     expect(rows[0]?.file).toBe('run, 0.1 V/s.csv');
     expect(Number(rows[0]?.ipa_A)).toBeGreaterThan(0);
   });
+  // The return/forward ratio of a reduction-first trace is ipa/ipc (Nicholson, Anal. Chem. 38 (1966) 1406, by definition):
+  // its column is named by what it holds, return over forward, and holds that for this trace.
+  it('names the ratio column return/forward, and holds ipa/ipc for a reduction-first trace', () => {
+    const row = table(csv, 'couples')[0]!;
+    expect(Object.keys(row)).toContain('ip return / ip forward');
+    expect(Object.keys(row).some((k) => k.includes('ipc/ipa'))).toBe(false);
+    expect(Number(row['ip return / ip forward'])).toBeCloseTo(Number(row['ipa / µA']) / Number(row['ipc / µA']), 3);
+  });
   it('writes the series with D and its interval', () => {
     const s = table(csv, 'raw series');
     expect(s).toHaveLength(1);

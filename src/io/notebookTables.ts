@@ -79,7 +79,7 @@ export function couplesTable(r: AnalyzeRunResult): TextTable {
   return {
     name: 'couples',
     header: ['file', 'series', 'v / (mV s⁻¹)', 'cycle', 'couple', 'Epa / V', 'Epc / V', 'E½ / V', 'ΔEp / mV', `ipa / ${cu.unit}`, `ipc / ${cu.unit}`,
-      'ipc/ipa (return/forward)', '|Ep − Ep/2| of the forward peak / mV', 'reading', 'warnings', ...(anyDensity ? ['ipa, ipc per cm² of electrode'] : [])],
+      'ip return / ip forward', '|Ep − Ep/2| of the forward peak / mV', 'reading', 'warnings', ...(anyDensity ? ['ipa, ipc per cm² of electrode'] : [])],
     rows,
   };
 }

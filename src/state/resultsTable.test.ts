@@ -23,7 +23,7 @@ describe('results across files', () => {
     expect(byRate.map((r) => r.scanRateVPerS)).toEqual([0.5, 0.05]);
     expect(resultsRows(s, 'other')).toEqual([]);
     const tsv = resultsTsv(rows, 'SCE').split('\n');
-    expect(tsv[0]).toBe('file\tseries\tv / (V/s)\tcycle\tcouple\tEpa / V vs SCE\tEpc / V vs SCE\tE½ / V vs SCE\tΔEp / mV\tipa / µA\tipc / µA\tipc/ipa or ipa/ipc (return/forward)\t|Ep − Ep/2| forward / mV\treading\twarnings');
+    expect(tsv[0]).toBe('file\tseries\tv / (V/s)\tcycle\tcouple\tEpa / V vs SCE\tEpc / V vs SCE\tE½ / V vs SCE\tΔEp / mV\tipa / µA\tipc / µA\tip return / ip forward\t|Ep − Ep/2| forward / mV\treading\twarnings');
     const first = tsv[1]!.split('\t');
     expect(first[0]).toBe('slow_050mVs.csv');
     expect(first[2]).toBe('0.05');

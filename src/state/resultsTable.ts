@@ -106,7 +106,7 @@ export function resultsTsv(rows: ResultsRow[], scaleName: string): string {
   const perArea = currentColumnsPerArea(rows);
   const ipUnit = perArea === true ? 'µA cm⁻²' : perArea === 'mixed' ? 'µA or µA cm⁻²' : 'µA';
   const head = ['file', 'series', 'v / (V/s)', 'cycle', 'couple', `Epa / V vs ${scaleName}`, `Epc / V vs ${scaleName}`, `E½ / V vs ${scaleName}`, 'ΔEp / mV',
-    `ipa / ${ipUnit}`, `ipc / ${ipUnit}`, 'ipc/ipa or ipa/ipc (return/forward)', '|Ep − Ep/2| forward / mV', 'reading', 'warnings', ...(perArea === 'mixed' ? ['currents'] : [])];
+    `ipa / ${ipUnit}`, `ipc / ${ipUnit}`, 'ip return / ip forward', '|Ep − Ep/2| forward / mV', 'reading', 'warnings', ...(perArea === 'mixed' ? ['currents'] : [])];
   const lines = rows.map((r) => [r.fileName, r.group, cell(r.scanRateVPerS, 1, 3), String(r.cycle), String(r.couple + 1), cell(r.epaV), cell(r.epcV), cell(r.eHalfV),
     cell(r.deltaEpV, 1000, 4), cell(r.ipaA, 1e6), cell(r.ipcA, 1e6), cell(r.ratio, 1, 4), cell(r.forwardHalfWidthV, 1000, 4), r.readingText, String(r.warnings),
     ...(perArea === 'mixed' ? [r.perArea ? 'per cm²' : 'current'] : [])]
