@@ -17,6 +17,7 @@ import { baselineForPeak, type BaselineRef } from '../baseline/baselineForPeak';
 import { chooseBaseline, type BaselineContext } from '../baseline/chooseBaseline';
 import { pairPeaksIntoCouples } from '../couples/pairPeaksIntoCouples';
 import { buildCouple } from '../couples/buildCouple';
+import { reversibleDeltaEpLimitV, reversibleMidpointOffset } from '../couples/reversibleDeltaEpAtSwitch';
 import { thermalVoltageV } from '../constants';
 import { sweepStartOnFoot, usesStartedWave } from '../baseline/startedWaveFoot';
 import { usesOwnFoot } from '../baseline/lineUnderOwnFoot';
@@ -124,6 +125,26 @@ function locateWithWindows(sig: SweepSignals, k: number, forCycle: PeakWindow[],
   return real.length ? real : locatePeaksInSweep(sig, k, { ...options, windows: null });
 }
 
+/**
+ * A reversible couple turned close past its forward peak: its E½ is not E°′ (D_O = D_R) but moved
+ * towards the return peak. The forward peak stays 1.109·RT/nF before E½ (Nicholson & Shain 1964,
+ * Table I), so the measured ΔEp gives the offset, (ΔEp − 2.218·RT/nF)/2; the table's value at this
+ * switch (reversibleMidpointOffset) says when it is worth saying.
+ */
+function warnMidpointOffset(couple: Omit<CoupleResult, 'index'>, index: number, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void): void {
+  const forwardV = couple.forwardDirection === 'anodic' ? couple.epaV : couple.epcV;
+  if (couple.verdict.category !== 'reversible' || couple.switchPotentialV == null || forwardV === null || couple.deltaEpV === null) return;
+  const past = Math.abs(couple.switchPotentialV - forwardV);
+  const expected = reversibleMidpointOffset(past, { electronCount: o.electronCount, temperatureK: o.temperatureK });
+  if (expected.deltaEpV < MIDPOINT_OFFSET_NOTED_V) return;
+  const measured = Math.max(0, (couple.deltaEpV - reversibleDeltaEpLimitV(o.electronCount, o.temperatureK)) / 2);
+  const towards = couple.forwardDirection === 'cathodic' ? 'positive' : 'negative';
+  warn('MIDPOINT_OFFSET', `couple ${index + 1}: the switch lies only ${(past * 1000).toFixed(0)} mV past the forward peak, so E½ = (Epa + Epc)/2 lies about ${(measured * 1000).toFixed(1)} mV ${towards} of the couple's true E½ (E°′ when D_O = D_R): half of ΔEp's excess over 2.218·RT/nF, the return peak alone moving with the switch (Nicholson & Shain, Anal. Chem. 36 (1964) 706; Nicholson, Anal. Chem. 37 (1965) 1351, whose table, via Bard & Faulkner 2nd ed. §6.5, from memory, gives ${expected.inTable ? '' : 'at least '}${(expected.deltaEpV * 1000).toFixed(1)} mV here). Turn the sweep ≥ 270/n mV past the peak for E½ within 0.4 mV`);
+}
+
+/** Midpoint offsets from here on are said (V): the potentials are given to 0.1 mV (our choice). */
+const MIDPOINT_OFFSET_NOTED_V = 5e-4;
+
 /** Pairs the measured peaks (weighted by height, so small features stay single) and builds the couples. */
 function buildCouples(sig: SweepSignals, peaks: PeakResult[], firstSeg: number | undefined, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void): CoupleResult[] {
   const forwardDirection = firstSeg !== undefined && sig.segments[firstSeg]!.direction === 'negative' ? 'cathodic' : 'anodic';
@@ -139,6 +160,7 @@ function buildCouples(sig: SweepSignals, peaks: PeakResult[], firstSeg: number |
   return pairs.map((pair, index) => {
     const mapped = { anodic: pair.anodic === null ? null : a[pair.anodic]!, cathodic: pair.cathodic === null ? null : c[pair.cathodic]! };
     const couple = buildCouple(sig, peaks, mapped, forwardDirection, o);
+    warnMidpointOffset(couple, index, o, warn);
     if (mapped.anodic === null || mapped.cathodic === null) warn('UNPAIRED_PEAK', `${mapped.anodic === null ? 'cathodic' : 'anodic'} peak at ${mv((couple.epaV ?? couple.epcV)!)} has no partner`);
     return { index, ...couple };
   });

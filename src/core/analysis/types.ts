@@ -30,7 +30,8 @@ export type AnalysisWarningCode =
   | 'SPIKES'
   | 'WINDOW_EDGE'
   | 'NOT_AT_REST'
-  | 'START_ON_FOOT';
+  | 'START_ON_FOOT'
+  | 'MIDPOINT_OFFSET';
 
 export interface AnalysisWarning {
   code: AnalysisWarningCode;

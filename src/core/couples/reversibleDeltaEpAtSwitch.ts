@@ -53,6 +53,19 @@ export function reversibleDeltaEpAtSwitch(pastPeakV: number, options: Reversible
   return { deltaEpV: (yMv * scale) / (1000 * n), inTable: x >= (PAST_PEAK_MV[0] as number) };
 }
 
+/**
+ * How far the peak midpoint (Epa + Epc)/2 of a reversible couple lies from its E½ towards the return
+ * peak when the switch is this close: the forward peak stays 1.109·RT/nF before E½ (Nicholson &
+ * Shain, Anal. Chem. 36 (1964) 706, Table I) and only the return peak moves, so the midpoint moves
+ * by half of ΔEp's excess over 2.218·RT/nF (V, ≥ 0). Below the table's first row it is at least
+ * the first row's value (`inTable` false).
+ */
+export function reversibleMidpointOffset(pastPeakV: number, options: ReversibleDeltaEpAtSwitchOptions = {}): ReversibleDeltaEp {
+  const at = reversibleDeltaEpAtSwitch(pastPeakV, options);
+  const limit = reversibleDeltaEpLimitV(options.electronCount ?? 1, options.temperatureK ?? STANDARD_TEMPERATURE_K);
+  return { deltaEpV: (at.deltaEpV - limit) / 2, inTable: at.inTable };
+}
+
 function interpolate(x: number): number {
   const last = PAST_PEAK_MV.length - 1;
   if (x <= (PAST_PEAK_MV[0] as number)) return DELTA_EP_MV[0] as number;
