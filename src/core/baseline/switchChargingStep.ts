@@ -14,7 +14,8 @@
  * (τ = t − tλ), over SIDE_WINDOW of potential (at least MIN_POINTS points); the step is the
  * difference of the two at tλ (the first return point, inside the charging current's turn-over
  * in Ru·Cd time, left out). Where the noise hides the kink (c within three standard errors of 0,
- * Draper & Smith, Applied Regression Analysis, 3rd ed. (1998) ch. 5), the return side is a line.
+ * Draper & Smith, Applied Regression Analysis, 3rd ed. (1998) ch. 5), or has the sign of a charging
+ * current still turning over (Ru·Cd·A of several points) rather than the return sweep's, the return side is a line.
  * In: time (s), current (A, IUPAC), the vertex index and the first index of the return sweep.
  * Out: the step, forward minus return at the switch (A, IUPAC); null when a side has too few points.
  */
@@ -52,7 +53,10 @@ export function switchChargingStep(input: SwitchChargingStepInput): number | nul
   const tau = (k: number) => t[k]! - tv;
   const kinked = fitSide(first, after + 1, (k) => [1, tau(k), Math.sqrt(Math.max(0, tau(k)))], y);
   // Where the noise hides the kink (its √τ term within 3 standard errors of 0), a line has the smaller variance.
-  const resolved = kinked && kinked.standardErrors && Math.abs(kinked.coefficients[2]!) > 3 * kinked.standardErrors[2]!;
+  // The faradaic kink turns the current towards the return sweep's sign; a √τ term of the other sign is the
+  // charging current's own turn-over (Ru·Cd·A spanning several points), which a line passes through.
+  const forwardSign = Math.sign(e[v]! - e[v - 1]!);
+  const resolved = kinked && kinked.standardErrors && forwardSign * kinked.coefficients[2]! < 0 && Math.abs(kinked.coefficients[2]!) > 3 * kinked.standardErrors[2]!;
   const returnAt = resolved ? kinked.coefficients[0]! : fitSide(first, after + 1, (k) => [1, tau(k)], y)?.coefficients[0] ?? null;
   return forwardAt === null || returnAt === null ? null : forwardAt - returnAt;
 }
