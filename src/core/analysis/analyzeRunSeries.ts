@@ -73,6 +73,15 @@ function perAreaCell(key: string, cell: ResolvedCell, members: RunFileResult[], 
   return { cell: { ...cell, areaCm2: 1, origins: { ...cell.origins, areaCm2: 'header' } }, kind: 'density' };
 }
 
+/**
+ * The series' Ru against its currents: in Ω for currents; for densities (A/cm²) Ru·A (Ω·cm², as
+ * analyzeRunFile corrects those files' potentials), or 0 when no area is known (no drop then).
+ */
+function seriesRuOhm(kind: CurrentKind, given: ResolvedCell): number {
+  if (kind !== 'density') return given.ruOhm;
+  return given.areaCm2 !== null ? given.ruOhm * given.areaCm2 : 0;
+}
+
 /** `files`: the results of the series' files (internal-standard files are left out here). */
 export function analyzeRunSeries(key: string, given: ResolvedCell, method: ResolvedMethod, output: ReferenceId | null, files: RunFileResult[]): RunSeriesResult {
   const members = files.filter((f) => f.role === 'series');
@@ -85,7 +94,7 @@ export function analyzeRunSeries(key: string, given: ResolvedCell, method: Resol
     {
       electronCount: cell.electronCount, areaCm2: cell.areaCm2, concentrationMolPerCm3: cell.concentrationMolPerCm3, temperatureK: cell.temperatureK,
       alpha: cell.alpha, transferElectronCount: cell.transferElectronCount, transferElectronCountGiven: cell.transferElectronCountGiven, diffusionRatio: cell.diffusionRatio, diffusionCm2PerS: cell.diffusionCm2PerS,
-      formalPotentialV: reportedFormalPotential(key, cell, members, early), ruOhm: cell.ruOhm, cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
+      formalPotentialV: reportedFormalPotential(key, cell, members, early), ruOhm: seriesRuOhm(perArea.kind, given), cycle: method.seriesCycle, matchToleranceV: method.matchToleranceV, psiMethod: method.psiMethod,
     },
   );
   // An area from a density's slope would be a ratio to 1 cm², not an area.

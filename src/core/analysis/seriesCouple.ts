@@ -4,7 +4,8 @@
  * meaning of its E½, the refined verdict and the diagnostics. Sources are in the called methods;
  * the order of the steps is the design:
  *   regime and class (classifySeriesCouple) → follow-up signature (followUpSignature) → α
- *   (seriesTransferCoefficient) → D (seriesDiffusion) → ohmic check (ohmicWidening) → k°
+ *   (seriesTransferCoefficient) → D (seriesDiffusion; with Ru after each peak's ohmic deficit,
+ *   seriesOhmicDiffusion) → ohmic check (ohmicWidening) → k°
  *   (seriesRateConstant) → verdict (refineVerdictWithSeries), with k° never beside "reversible".
  */
 import { refineVerdictWithSeries } from '../couples/refineVerdictWithSeries';
@@ -15,7 +16,7 @@ import type { SeriesPoint } from '../series/seriesPoint';
 import { median } from '../statistics/median';
 import type { CoupleRef } from './matchSeriesCouples';
 import { describeSeriesCouple, describeHalfWave } from './seriesDiagnostics';
-import { seriesDiffusion } from './seriesDiffusion';
+import { seriesDiffusionWithOhmicDeficit } from './seriesOhmicDiffusion';
 import { fitAgainstScanRate, fitAgainstSqrtScanRate, fitForwardAgainstSqrtScanRate, fitLogLog, fitPeakShift, type ResolvedSeriesOptions } from './seriesFits';
 import { seriesFollowUp } from './seriesFollowUp';
 import { seriesRateConstant } from './seriesRateConstant';
@@ -98,8 +99,9 @@ export function buildSeriesCouple(index: number, points: SeriesPoint[], first: C
   const kineticClass = signature?.kind === 'kinetic-zone' ? 'reversible' : cls.kineticClass;
   const followUp = signature ? seriesFollowUp(points, o, signature) : null;
   const transfer = diffusing ? seriesTransferCoefficient(points, kineticClass, forward, o) : null;
-  const diffusion = transfer ? seriesDiffusion({ fit: forwardFit, kineticClass, points, forward, transfer, followUp }, o).diffusion : null;
   const measuredOhmic = diffusing && !followUp ? ohmicOf(points, o) : null;
+  const ohmicMayWiden = measuredOhmic?.limitsK0 === true;
+  const diffusion = transfer ? seriesDiffusionWithOhmicDeficit({ fit: forwardFit, kineticClass, points, forward, transfer, followUp }, o, ohmicMayWiden).diffusion : null;
   const chemistry = followUp ? 'a follow-up reaction consumes the product and moves the return peak, so ΔEp is not a measure of electron-transfer kinetics (Nicholson & Shain 1964)' : null;
   const firstRate = transfer ? seriesRateConstant({ points, forward, reversible: kineticClass === 'reversible', chemistry, ohmic: measuredOhmic, diffusion, transfer }, o) : null;
   const { ohmic, rate: headRate } = weighedOhmic(measuredOhmic, firstRate, points, o);
@@ -109,7 +111,7 @@ export function buildSeriesCouple(index: number, points: SeriesPoint[], first: C
     const on = { ...o, transferElectronCount: na };
     const t = seriesTransferCoefficient(points, kineticClass, forward, on);
     if (t.alphaC === null) return null;
-    const d = seriesDiffusion({ fit: forwardFit, kineticClass, points, forward, transfer: t, followUp }, on).diffusion;
+    const d = seriesDiffusionWithOhmicDeficit({ fit: forwardFit, kineticClass, points, forward, transfer: t, followUp }, on, ohmicMayWiden).diffusion;
     return seriesRateConstant({ ...rateInput, diffusion: d, transfer: t }, on);
   };
   const rateConstant = headRate && !o.transferElectronCountGiven && o.electronCount > 1 && !chemistry

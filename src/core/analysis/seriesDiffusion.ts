@@ -64,14 +64,19 @@ function scaledFit(points: SeriesPoint[], factor: (p: SeriesPoint) => number | n
   }));
 }
 
-/** K(ψ) of one file at αc: 1 below Nicholson's table, null beyond it or without ΔEp (ψ from the table where the Lavagnini fit, when asked for, does not reach). */
-function kineticRatio(p: SeriesPoint, o: ResolvedSeriesOptions, forwardAlpha: number): number | null {
+/** ψ of one file from ΔEp at αc: Infinity below Nicholson's table, null beyond it or without ΔEp (ψ from the table where the Lavagnini fit, when asked for, does not reach). */
+export function filePsi(p: SeriesPoint, o: ResolvedSeriesOptions, forwardAlpha: number): number | null {
   if (p.deltaEpV === null) return null;
   const x25 = o.electronCount * p.deltaEpV * 1000 * (STANDARD_TEMPERATURE_K / o.temperatureK);
-  if (x25 < TABLE_RANGE_MV[0]) return 1;
+  if (x25 < TABLE_RANGE_MV[0]) return Infinity;
   if (x25 > TABLE_RANGE_MV[1]) return null;
-  const psi = nicholsonPsiAtAlpha(p.deltaEpV, { forwardAlpha, switchPastHalfWaveV: switchPastHalfWave(p), electronCount: o.electronCount, temperatureK: o.temperatureK, method: psiMethodInRange(x25, o.psiMethod) });
-  return kineticPeakCurrentRatio(psi.psi, forwardAlpha);
+  return nicholsonPsiAtAlpha(p.deltaEpV, { forwardAlpha, switchPastHalfWaveV: switchPastHalfWave(p), electronCount: o.electronCount, temperatureK: o.temperatureK, method: psiMethodInRange(x25, o.psiMethod) }).psi;
+}
+
+/** K(ψ) of one file at αc: 1 below Nicholson's table, null beyond it or without ΔEp. */
+function kineticRatio(p: SeriesPoint, o: ResolvedSeriesOptions, forwardAlpha: number): number | null {
+  const psi = filePsi(p, o, forwardAlpha);
+  return psi === null ? null : psi === Infinity ? 1 : kineticPeakCurrentRatio(psi, forwardAlpha);
 }
 
 /**

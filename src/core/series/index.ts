@@ -12,3 +12,4 @@ export * from './combinedDiffusionInterval';
 export * from './lavironIrreversibleWave';
 export * from './ohmicWidening';
 export * from './followUpSignature';
+export * from './ohmicPeakCurrentRatio';
