@@ -81,7 +81,7 @@ export function baselineForPeak(sig: SweepSignals, peak: PeakCandidate, request:
       const under = fw!.background;
       return { curve: decay.curve, evaluate: decay.evaluate, background: (k) => under(k) ?? under(peak.index), fallbackReason: null };
     }
-    const why = prev ? 'the current after the previous peak does not decay cleanly enough to extend' : fw ? 'too few points between the forward peak and the switch for the extended decay' : 'no forward peak on the preceding sweep to extend';
+    const why = prev ? 'the current after the previous peak does not decay cleanly enough to extend' : fw ? "too few points between the forward peak and the switch for the extended decay. UNRELIABLE: the return sweep's own line takes the forward wave's decay, still flowing under the return peak, for background, so the return ip and the ratio read low (by tens of per cent for a slow couple); record a sweep turned further past the forward peak" : 'no forward peak on the preceding sweep to extend';
     return sampled(linearCurve(sig, peak, request, spec), why);
   }
   if (method === 'polynomial') return sampled(polynomialCurve(sig, peak, request, spec));

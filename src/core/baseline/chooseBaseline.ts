@@ -44,10 +44,13 @@ export function chooseBaseline(ctx: BaselineContext, cand: PeakCandidate): Basel
   const onFirst = cand.segmentIndex === ctx.firstSegment;
   const spec = findBaselineSpec(ctx.specs, cand, ctx.cycle);
   const closed = (fw: PeakCandidate) => forwardWaveClosed(sig, drawn.get(fw) ?? null);
-  const method = chooseMethod(spec, onFirst, ctx.defaults, cand, ordered, partner, closed);
+  const method = chooseMethod(spec, onFirst, ctx.defaults, cand, ordered, closed);
   const fwd = partner.get(cand);
-  const carried = method === 'nicholson' || (method === 'linear' && spec === null && !onFirst && fwd !== undefined && fwd.segmentIndex === cand.segmentIndex - 1 && closed(fwd));
-  const forward = carried && fwd ? (drawn.get(fwd) ?? null) : null;
+  const under = onFirst ? undefined : waveBeforeSwitch(cand, ordered);
+  const decaying = method === 'nicholson' ? (under ?? fwd) : undefined;
+  const switched = method === 'linear' && spec === null && !onFirst && fwd !== undefined && fwd.segmentIndex === cand.segmentIndex - 1 && closed(fwd) ? fwd : undefined;
+  const carriedFrom = decaying ?? switched;
+  const forward = carriedFrom ? (drawn.get(carriedFrom) ?? null) : null;
   const before = previousPeakOnSweep(cand, ordered);
   const previous = method === 'nicholson' && spec === null && before ? (drawn.get(before) ?? null) : null;
   // A forward sweep that ends in a breakdown current: its wave's decay is fitted before the breakdown starts.
@@ -64,9 +67,23 @@ export function previousPeakOnSweep(c: PeakCandidate, all: PeakCandidate[]): Pea
 }
 
 /**
+ * The forward wave whose decay runs on under a return peak: for the first peak of a return sweep,
+ * the last peak of the sweep before the switch, paired with it or not. That wave's current keeps
+ * decaying past the switch however far the switch lies from it (Nicholson, Anal. Chem. 38 (1966)
+ * 1406); the pairing of candidates, done before any baseline is drawn, often misses a small
+ * return peak far from the switch (its prominence is measured on that very decay), and a return
+ * peak of another couple sits on the same decay. Undefined for a later peak of the sweep.
+ */
+function waveBeforeSwitch(c: PeakCandidate, all: PeakCandidate[]): PeakCandidate | undefined {
+  if (all.find((p) => p.segmentIndex === c.segmentIndex) !== c) return undefined;
+  return all.filter((p) => p.segmentIndex === c.segmentIndex - 1).at(-1);
+}
+
+/**
  * Extended decay (Nicholson's convention) for a wave that follows another peak on its sweep, and
- * for the return peak next to the switch whose partner is the forward sweep's last peak, unless
- * that forward wave has closed before the switch (forwardWaveClosed); the pre-peak line otherwise. With returnBaseline 'linear' or 'polynomial' only the forward-sweep
+ * for the first return peak after the switch that sits on the forward sweep's last wave
+ * (waveBeforeSwitch), unless that forward wave has closed before the switch (forwardWaveClosed);
+ * the pre-peak line otherwise. With returnBaseline 'linear' or 'polynomial' only the forward-sweep
  * rule remains.
  */
 function chooseMethod(
@@ -75,7 +92,6 @@ function chooseMethod(
   defaults: BaselineDefaults,
   c: PeakCandidate,
   all: PeakCandidate[],
-  partner: Map<PeakCandidate, PeakCandidate>,
   closed: (forward: PeakCandidate) => boolean,
 ): BaselineMethod {
   if (spec) return spec.method;
@@ -83,11 +99,8 @@ function chooseMethod(
   if (onFirst) return following && defaults.forwardBaseline === 'linear' ? 'nicholson' : defaults.forwardBaseline;
   if (defaults.returnBaseline !== 'nicholson') return defaults.returnBaseline;
   if (following) return 'nicholson';
-  const fwd = partner.get(c);
-  const firstOnSweep = all.find((p) => p.segmentIndex === c.segmentIndex) === c;
-  const lastOnForward = fwd ? all.filter((p) => p.segmentIndex === fwd.segmentIndex).at(-1) === fwd : false;
-  const extend = fwd && fwd.segmentIndex === c.segmentIndex - 1 && firstOnSweep && lastOnForward && !closed(fwd);
-  return extend ? 'nicholson' : 'linear';
+  const under = waveBeforeSwitch(c, all);
+  return under && !closed(under) ? 'nicholson' : 'linear';
 }
 
 /**
