@@ -21,6 +21,7 @@ import { reversibleDeltaEpLimitV, reversibleMidpointOffset } from '../couples/re
 import { thermalVoltageV } from '../constants';
 import { sweepStartOnFoot, usesStartedWave } from '../baseline/startedWaveFoot';
 import { usesOwnFoot } from '../baseline/lineUnderOwnFoot';
+import { tiltedChargingBias } from '../baseline/tiltedChargingBias';
 
 const mv = formatMillivolts;
 
@@ -53,13 +54,17 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
     sig, ordered, partner, drawn, firstSegment: firstSeg, cycle: cycle.index, specs: o.baselines, edgeSweeps: new Map(windowEdges.map((e) => [e.segmentIndex, e.fromIndex])),
     defaults: { forwardBaseline: o.forwardBaseline, returnBaseline: o.returnBaseline }, wave: { temperatureK: o.temperatureK, electronCount: o.electronCount },
   };
+  // A later cycle's pre-wave stretch carries the earlier cycles' decay: its tilt is not the background's.
+  const firstCycle = cycle.index === sig.segments[0]?.cycle;
   for (const cand of ordered) {
     const onFirst = cand.segmentIndex === firstSeg;
-    const outcome = baselineForPeak(sig, cand, chooseBaseline(ctx, cand));
+    const request = chooseBaseline(ctx, cand);
+    const outcome = baselineForPeak(sig, cand, request);
     if (outcome.fallbackReason) warn('BASELINE_FALLBACK', `${cand.direction} peak at ${mv(cand.potentialV)}: extended-decay baseline not possible (${outcome.fallbackReason}); linear pre-peak line used`);
     drawn.set(cand, { peak: cand, evaluate: outcome.evaluate, background: outcome.background });
     const peak = measurePeak(sig, cand, outcome.curve, onFirst, outcome.background, (6 * thermalVoltageV(o.temperatureK)) / o.electronCount);
     if (peak && onFirst && cand === ordered.find((c) => c.segmentIndex === firstSeg)) warnStartOnFoot(sig, cand, peak, partner.get(cand)?.potentialV, o, warn);
+    if (peak && firstCycle && outcome.curve.method === 'nicholson' && request.forward && !request.previous) warnTiltedCharging(sig, request.forward, measured.get(request.forward.peak), peak, warn);
     if (peak) measured.set(cand, peak);
     else warn('LOW_SIGNAL', `${cand.direction} feature at ${mv(cand.potentialV)} does not rise above its baseline; dropped`);
   }
@@ -68,6 +73,30 @@ export function analyzeCycle(sig: SweepSignals, cycle: CycleRange, o: ResolvedAn
   if (peaks.length === 0) warn('NO_PEAKS', `no peak rose ${thresholdA.toExponential(3)} A above its surroundings in cycle ${cycle.index}`);
   return { index: cycle.index, peaks, couples, warnings, windowEdges };
 }
+
+/**
+ * A return peak on the extended forward decay under a tilted background (tiltedChargingBias.ts):
+ * said with the bound on its ip when that reaches TILT_NOTED of it, in the record's first cycle
+ * (a later one's pre-wave stretch carries the earlier cycles' decay). Only said: the numbers stay,
+ * since a leak current (slope kept) and a potential-dependent double layer (slope flipped) look
+ * alike on one trace.
+ */
+function warnTiltedCharging(sig: SweepSignals, forward: BaselineRef, forwardPeak: PeakResult | undefined, peak: PeakResult, warn: (c: AnalysisWarning['code'], m: string) => void): void {
+  const seg = sig.segments[forward.peak.segmentIndex]!;
+  // The forward line's fit window: its anchors that are points of the forward sweep (else the whole stretch before the peak).
+  const ends = (forwardPeak?.baseline.anchors ?? []).flatMap((a) => (a.index !== undefined && a.index >= seg.start && a.index < forward.peak.index ? [a.index] : []));
+  const window: [number, number] = ends.length >= 2 ? [Math.min(...ends), Math.max(...ends) + 1] : [seg.start, forward.peak.index];
+  const tilt = tiltedChargingBias(sig, forward.background, forward.peak.index, seg.end - 1, peak.potentialV, window, sig.noiseA);
+  if (!tilt || !(peak.heightA > 0)) return;
+  const share = tilt.biasA / peak.heightA;
+  if (share < TILT_NOTED || Math.abs(tilt.slopeAPerV) < TILT_SIGNIFICANT * tilt.slopeStdErrAPerV) return;
+  warn('BACKGROUND_TILT', `${peak.direction} peak at ${mv(peak.potentialV)}: the background before the forward wave is not flat (${(tilt.slopeAPerV * 1e6).toPrecision(3)} ± ${(tilt.slopeStdErrAPerV * 1e6).toPrecision(2)} µA/V). The return baseline keeps that slope past the switch, right for a leak current; if the tilt is double-layer charging (a capacitance that changes with potential, whose current turns sign with the sweep), this peak's ip is off by up to ${tilt.biasA.toExponential(2)} A (${(100 * share).toFixed(1)} %), and the ratio with it, the forward peak not. Subtract a blank recorded at the same scan rate (--blank)`);
+}
+
+/** A tilt bound from this share of the return ip on is said (our choice: 1 %, about the precision the return ip is read to). */
+const TILT_NOTED = 0.01;
+/** ... and only a slope this many standard errors from zero (our choice; 3σ, common practice, no source). */
+const TILT_SIGNIFICANT = 3;
 
 /**
  * A first sweep that starts on the wave's own foot (startedWaveFoot.ts): said always, with the

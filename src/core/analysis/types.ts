@@ -31,7 +31,8 @@ export type AnalysisWarningCode =
   | 'WINDOW_EDGE'
   | 'NOT_AT_REST'
   | 'START_ON_FOOT'
-  | 'MIDPOINT_OFFSET';
+  | 'MIDPOINT_OFFSET'
+  | 'BACKGROUND_TILT';
 
 export interface AnalysisWarning {
   code: AnalysisWarningCode;
