@@ -5,6 +5,7 @@
 import { assignColumns } from './assignColumns';
 import type { RoleAssignment } from './assignColumns';
 import { chooseScanRate } from './chooseScanRate';
+import { refuseNumberLikeColumns } from './droppedRows';
 import { loopOrientation } from '../core/sweeps/loopOrientation';
 import { makeWarning } from './errors';
 import type { ImportWarning } from './errors';
@@ -23,13 +24,14 @@ import type { ScanRateChoice } from './chooseScanRate';
 export function assembleMeasurement(fileName: string, front: FrontMatter, table: ParsedTable, o: ImportOverrides, warnings: ImportWarning[]): Measurement {
   const { pre } = front;
   const { header } = front;
+  refuseNumberLikeColumns(fileName, table, header.names, front.layout.decimalMark.value === ',');
   const roles = assignColumns(fileName, header.names, table.columns, o, header.units);
   warnings.push(...roles.warnings);
   let convention = chooseConvention(o, pre);
   const units = chooseUnits(fileName, roles, o, warnings);
   const kind = chooseCurrentKind(fileName, units, roles, pre.areaCm2, warnings);
   const reference = chooseReference(fileName, pre, roles, header, warnings);
-  const cols = buildColumns(fileName, table, roles, units, convention.value, pre.areaCm2, warnings);
+  const cols = buildColumns(fileName, table, roles, units, convention.value, pre.areaCm2, front.layout.decimalMark.value === ',', warnings);
   const written = pre.scanRateVPerS ?? scanRateInNames(header);
   const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: written, unitless: pre.scanRateWithoutUnit }, warnings);
   const doubt = !convention.overridden && !pre.convention ? reversedLoop(cols) : null;

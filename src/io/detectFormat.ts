@@ -6,6 +6,7 @@
  */
 import { ImportError } from './errors';
 import { isNonFiniteToken, parseNumber, splitFields } from './textLines';
+import { readUnusualNumber } from './unusualNumber';
 import { DELIMITER_CHOICES, labelOf } from './overrideChoices';
 import type { DecimalMark, Delimiter, Guess, ImportOverrides } from './types';
 
@@ -41,6 +42,8 @@ const delimiterName = (d: Delimiter): string => labelOf(DELIMITER_CHOICES, d);
 interface LineClasses {
   fields: Int32Array;
   numbers: Int32Array;
+  /** Numbers read only as grouped digits or with a D exponent (unusualNumber.ts). */
+  unusual: Int32Array;
   data: Uint8Array;
 }
 
@@ -50,20 +53,27 @@ interface LineClasses {
 // costliest to optimise of the import).
 function classifyLines(split: string[][], decimalComma: boolean): LineClasses {
   const n = split.length;
-  const out: LineClasses = { fields: new Int32Array(n), numbers: new Int32Array(n), data: new Uint8Array(n) };
+  const out: LineClasses = { fields: new Int32Array(n), numbers: new Int32Array(n), unusual: new Int32Array(n), data: new Uint8Array(n) };
   for (let l = 0; l < n; l++) {
     const fields = split[l] as string[];
     let numbers = 0;
     let numericLike = 0;
+    let unusual = 0;
     for (let i = 0; i < fields.length; i++) {
       const f = fields[i] as string;
       if (Number.isFinite(parseNumber(f, decimalComma))) {
         numbers++;
         numericLike++;
       } else if (f === '' || isNonFiniteToken(f)) numericLike++;
+      else if (readUnusualNumber(f, decimalComma)) {
+        numbers++;
+        numericLike++;
+        unusual++;
+      }
     }
     out.fields[l] = fields.length;
     out.numbers[l] = numbers;
+    out.unusual[l] = unusual;
     out.data[l] = fields.length >= 2 && numbers >= 2 && numericLike * 2 >= fields.length ? 1 : 0;
   }
   return out;
@@ -94,6 +104,8 @@ interface Scored {
   last: number;
   rows: number;
   numericFraction: number;
+  /** Fields of the table's rows read only as grouped digits or with a D exponent. */
+  unusual: number;
 }
 
 function scoreCandidate(lines: string[], split: string[][], c: Candidate): Scored | null {
@@ -104,7 +116,7 @@ function scoreCandidate(lines: string[], split: string[][], c: Candidate): Score
   const first = findTableStart(lines, rowOf);
   if (first < 0) return null;
   const { last, rows, numbers } = tableFrom(rowOf, cls.numbers, first);
-  return { c, k, first, last, rows, numericFraction: numbers / (rows * k) };
+  return { c, k, first, last, rows, numericFraction: numbers / (rows * k), unusual: tableFrom(rowOf, cls.unusual, first).numbers };
 }
 
 /** 1 where a line is a data row of `k` fields. */
@@ -155,7 +167,10 @@ function findTableStart(lines: string[], isRow: Uint8Array): number {
 function better(a: Scored, b: Scored | null): boolean {
   if (!b) return true;
   if (a.rows !== b.rows) return a.rows > b.rows;
-  return a.numericFraction > b.numericFraction + 1e-9;
+  if (Math.abs(a.numericFraction - b.numericFraction) > 1e-9) return a.numericFraction > b.numericFraction;
+  // "1,234" is 1234 under a decimal point and 1.234 under a decimal comma: the reading that needs
+  // no grouping wins a tie, so a decimal-comma table with three decimals stays as it was.
+  return a.unusual < b.unusual;
 }
 
 /** Widest table read (common practice, no source: exports hold a few to a few dozen columns). */

@@ -13,7 +13,10 @@
  * never changes. NOT_A_SWEEP: the potential turns back at nearly every point. BAD_OVERRIDE: a
  * user override that cannot apply. TOO_MANY_COLUMNS: rows wider than any export of one
  * voltammogram. RAGGED_TABLE: most rows far narrower than the table's first rows (padding them
- * would take memory out of all proportion to the file). UNREADABLE: the browser could not hand
+ * would take memory out of all proportion to the file). UNREADABLE_VALUES: more than half the
+ * rows lack a needed value (cells that are not numbers, such as ambiguous thousands separators or
+ * units in every cell). AMBIGUOUS_DECIMAL_COMMA: a comma-delimited table whose unquoted decimal
+ * commas split each number in two (the header names fewer columns than the rows hold). UNREADABLE: the browser could not hand
  * over the bytes of a picked file (moved, deleted or changed since the pick). INTERNAL: a fault in the importer
  * itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
  */
@@ -31,6 +34,8 @@ export type ImportErrorCode =
   | 'BAD_OVERRIDE'
   | 'TOO_MANY_COLUMNS'
   | 'RAGGED_TABLE'
+  | 'UNREADABLE_VALUES'
+  | 'AMBIGUOUS_DECIMAL_COMMA'
   | 'UNREADABLE'
   | 'INTERNAL';
 
@@ -56,6 +61,9 @@ export class ImportError extends Error {
 
 export type ImportWarningCode =
   | 'SKIPPED_ROWS'
+  | 'MANY_ROWS_DROPPED'
+  | 'LAST_ROW_CUT'
+  | 'NUMERIC_FOOTER'
   | 'REPEATED_HEADER'
   | 'ENCODING_GUESSED'
   | 'UNIT_ASSUMED'

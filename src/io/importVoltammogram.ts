@@ -14,9 +14,10 @@ import { detectHeader } from './detectHeader';
 import type { HeaderFound } from './detectHeader';
 import { describeDelimiter, detectLayout } from './detectFormat';
 import type { TableLayout } from './detectFormat';
-import { describeLines, ImportError, makeWarning } from './errors';
+import { ImportError, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
 import { createYielder } from './timeSlice';
+import { describeMark } from './unusualNumber';
 import { parseTable } from './parseTable';
 import type { ParsedTable } from './parseTable';
 import { readPreamble } from './readPreamble';
@@ -131,16 +132,30 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, r
   }
   const table = step.value;
   layout.delimiter.explanation = describeDelimiter(layout.delimiter.value, layout.delimiter.overridden, table.rowCount, table.rowCount + table.skippedCount, layout.fieldCount, layout.firstDataLine + 1);
+  layout.decimalMark.explanation += describeUnusual(table);
   tableWarnings(fileName, table, warnings);
   const measurement = assembleMeasurement(fileName, front, table, o, warnings);
   yield 1;
   return { measurement, warnings };
 }
 
-function tableWarnings(fileName: string, t: ParsedTable, warnings: ImportWarning[]): void {
-  if (t.skippedCount) {
-    warnings.push(makeWarning('SKIPPED_ROWS', `${fileName}: ${t.skippedCount} lines inside the table skipped (too few fields or not numbers) — lines ${describeLines(t.skippedLines, t.skippedCount)}`, t.skippedLines, t.skippedCount));
+/** "; digits grouped by ',' (comma) in column 3 read as one number (2096 values, first on line 215)". */
+function describeUnusual(t: ParsedTable): string {
+  const groups = new Map<string, ParsedTable['unusual']>();
+  for (const u of t.unusual) groups.set(u.kind + u.mark, [...(groups.get(u.kind + u.mark) ?? []), u]);
+  let out = '';
+  for (const g of groups.values()) {
+    const first = g[0] as ParsedTable['unusual'][number];
+    const cols = `column${g.length > 1 ? 's' : ''} ${g.map((u) => u.column + 1).join(', ')}`;
+    const count = g.reduce((n, u) => n + u.count, 0);
+    const where = `${count} values, first on line ${Math.min(...g.map((u) => u.firstLine))}`;
+    out += first.kind === 'grouped' ? `; digits grouped by ${describeMark(first.mark)} in ${cols} read as one number (${where})` : `; D exponents (1.5D-05 = 1.5e-05) in ${cols} (${where})`;
   }
+  return out;
+}
+
+function tableWarnings(fileName: string, t: ParsedTable, warnings: ImportWarning[]): void {
+  // Lines skipped inside the table are reported with the rows left out later (droppedRows.ts).
   if (t.repeatedHeaderCount) {
     warnings.push(makeWarning('REPEATED_HEADER', `${fileName}: the header line appears ${t.repeatedHeaderCount} more time(s) inside the table (several exports joined); ${t.seamLines} header/preamble lines at those seams were passed over`, undefined, t.repeatedHeaderCount));
   }

@@ -10,9 +10,20 @@
  */
 import Papa from 'papaparse';
 import { readPlainLines } from './plainRows';
-import { TableRows } from './tableRows';
+import { badLine, TableRows } from './tableRows';
+import type { UnreadableCells, UnusualCells } from './tableRows';
 import { parseNumber } from './textLines';
 import type { Delimiter } from './types';
+
+/** A repeated header line inside the table, before row `row`. */
+export interface HeaderSeam {
+  /** 0-based row of the table the repeated header stands before. */
+  row: number;
+  /** 1-based file line of the repeated header. */
+  line: number;
+  /** Its fields when they name the table's columns with other units; null for an exact repeat. */
+  names: string[] | null;
+}
 
 export interface TableSpec {
   delimiter: Delimiter;
@@ -24,6 +35,11 @@ export interface TableSpec {
   startLine: number;
   /** Trimmed header line text, to recognise repeats inside the table; null when none. */
   headerText: string | null;
+  /**
+   * Tells a line that names the header's columns with other units ("Potential (mV)" under a
+   * header "Potential (V)"), given its trimmed fields. @default none
+   */
+  sameNamesOtherUnits?: (fields: string[]) => boolean;
   /** For error messages. @default 'the file' */
   fileName?: string;
   /** 'papaparse' reads every chunk through papaparse (the reference the fast path is fuzzed against). @default 'auto' */
@@ -44,6 +60,14 @@ export interface ParsedTable {
   footerLines: number;
   firstFooterLine: number | null;
   lastDataLine: number;
+  /** Columns with grouped digits ("1,234.5") or D exponents, read as numbers. */
+  unusual: UnusualCells[];
+  /** Columns with fields no reader could read, in data rows. */
+  unreadable: UnreadableCells[];
+  /** First row after the last blank or non-data line between rows (0 when none). */
+  lastBlockRow: number;
+  /** Repeated header lines inside the table (the first 10,000). */
+  headerSeams: HeaderSeam[];
 }
 
 /** Characters per chunk: large enough that papaparse's per-call cost vanishes. */
@@ -80,16 +104,17 @@ function readQuotedChunk(chunk: string, firstLine: number, spec: TableSpec, rows
   let line = firstLine;
   for (const raw of parsed) {
     const fields = whitespace ? raw.filter((f) => f !== '') : raw;
-    const kind = readRow(fields, spec.fieldCount, spec.decimalComma, values);
+    const kind = readRow(fields, spec.fieldCount, spec.decimalComma, values, rows);
     if (kind === 'data') rows.data(values, fields.length, line);
-    else if (kind === 'bad') rows.bad(line, spec.headerText !== null && fields.map((f) => f.trim()).join('|') === spec.headerText);
+    else if (kind === 'bad') badLine(fields.map((f) => f.trim()), line, spec, rows);
+    else rows.blank();
     line++;
   }
   return line;
 }
 
 /** Reads one tokenised row into `values`: 'data', 'blank' or 'bad'. */
-function readRow(fields: string[], k: number, decimalComma: boolean, values: Float64Array): 'data' | 'blank' | 'bad' {
+function readRow(fields: string[], k: number, decimalComma: boolean, values: Float64Array, rows: TableRows): 'data' | 'blank' | 'bad' {
   const n = fields.length;
   if (n === 0 || (n === 1 && (fields[0] as string).trim() === '')) return 'blank';
   for (let j = k; j < n; j++) if ((fields[j] as string).trim() !== '') return 'bad';
@@ -97,7 +122,8 @@ function readRow(fields: string[], k: number, decimalComma: boolean, values: Flo
   // later only if one of them was needed (potential, current, time, cycle).
   let finite = 0;
   for (let j = 0; j < k; j++) {
-    const v = j < n ? parseNumber(fields[j] as string, decimalComma) : NaN;
+    let v = j < n ? parseNumber(fields[j] as string, decimalComma) : NaN;
+    if (v !== v && j < n) v = rows.readOther(fields[j] as string, j, decimalComma);
     values[j] = v;
     if (Number.isFinite(v)) finite++;
   }

@@ -7,6 +7,7 @@
  */
 import type { TableSpec } from './parseTable';
 import { scanNumber } from './scanNumber';
+import { badLine } from './tableRows';
 import type { TableRows } from './tableRows';
 
 const BLANK = 0;
@@ -23,16 +24,17 @@ export function readPlainLines(text: string, from: number, to: number, firstLine
   for (;;) {
     let end = text.indexOf('\n', start);
     if (end === -1 || end > to) end = to;
-    const kind = delimiter < 0 ? readSpaced(text, start, end, spec, values, width) : readDelimited(text, start, end, delimiter, spec, values, width);
+    const kind = delimiter < 0 ? readSpaced(text, start, end, spec, values, width, rows) : readDelimited(text, start, end, delimiter, spec, values, width, rows);
     if (kind === DATA) rows.data(values, width.n, line);
-    else if (kind === BAD) rows.bad(line, spec.headerText !== null && headerKey(text.slice(start, end), spec.delimiter) === spec.headerText);
+    else if (kind === BAD) badLine(headerFields(text.slice(start, end), spec.delimiter), line, spec, rows);
+    else rows.blank();
     line++;
     if (end >= to) return line;
     start = end + 1;
   }
 }
 
-function readDelimited(text: string, from: number, to: number, d: number, spec: TableSpec, values: Float64Array, width: { n: number }): Kind {
+function readDelimited(text: string, from: number, to: number, d: number, spec: TableSpec, values: Float64Array, width: { n: number }, rows: TableRows): Kind {
   const k = spec.fieldCount;
   let n = 0;
   let finite = 0;
@@ -40,8 +42,11 @@ function readDelimited(text: string, from: number, to: number, d: number, spec: 
   for (;;) {
     let b = a;
     while (b < to && text.charCodeAt(b) !== d) b++;
-    const f = takeField(text, a, b, n++, k, spec.decimalComma, values);
-    if (f === EXTRA) return BAD;
+    const f = takeField(text, a, b, n++, k, spec.decimalComma, values, rows);
+    if (f === EXTRA) {
+      rows.forgetRow();
+      return BAD;
+    }
     finite += f;
     if (b >= to) break;
     a = b + 1;
@@ -49,7 +54,7 @@ function readDelimited(text: string, from: number, to: number, d: number, spec: 
   return finish(text, from, to, n, finite, k, values, width);
 }
 
-function readSpaced(text: string, from: number, to: number, spec: TableSpec, values: Float64Array, width: { n: number }): Kind {
+function readSpaced(text: string, from: number, to: number, spec: TableSpec, values: Float64Array, width: { n: number }, rows: TableRows): Kind {
   const k = spec.fieldCount;
   let n = 0;
   let finite = 0;
@@ -59,8 +64,11 @@ function readSpaced(text: string, from: number, to: number, spec: TableSpec, val
     if (a >= to) break;
     let b = a;
     while (b < to && !isSpace(text.charCodeAt(b))) b++;
-    const f = takeField(text, a, b, n++, k, spec.decimalComma, values);
-    if (f === EXTRA) return BAD;
+    const f = takeField(text, a, b, n++, k, spec.decimalComma, values, rows);
+    if (f === EXTRA) {
+      rows.forgetRow();
+      return BAD;
+    }
     finite += f;
     a = b;
   }
@@ -70,9 +78,11 @@ function readSpaced(text: string, from: number, to: number, spec: TableSpec, val
 const EXTRA = -1;
 
 /** Reads field `j` (text[a, b)) into values[j]: 1 when finite, 0 when not, EXTRA for a non-empty field past the k-th. */
-function takeField(text: string, a: number, b: number, j: number, k: number, decimalComma: boolean, values: Float64Array): number {
+function takeField(text: string, a: number, b: number, j: number, k: number, decimalComma: boolean, values: Float64Array, rows: TableRows): number {
   if (j >= k) return text.slice(a, b).trim() === '' ? 0 : EXTRA;
-  const v = scanNumber(text, a, b, decimalComma);
+  let v = scanNumber(text, a, b, decimalComma);
+  // Grouped digits, D exponents, and a note on what could not be read: only for refused fields.
+  if (v !== v) v = rows.readOther(text.slice(a, b), j, decimalComma);
   values[j] = v;
   return v - v === 0 ? 1 : 0;
 }
@@ -88,8 +98,8 @@ function isSpace(c: number): boolean {
   return c === 32 || c === 9;
 }
 
-/** The line's fields as papaparse would give them, trimmed and joined by '|'. */
-function headerKey(line: string, delimiter: TableSpec['delimiter']): string {
+/** The line's fields as papaparse would give them, trimmed. */
+function headerFields(line: string, delimiter: TableSpec['delimiter']): string[] {
   const fields = delimiter === 'whitespace' ? line.split(/[ \t]/).filter((f) => f !== '') : line.split(delimiter);
-  return fields.map((f) => f.trim()).join('|');
+  return fields.map((f) => f.trim());
 }

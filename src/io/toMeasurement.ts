@@ -7,7 +7,8 @@
 import { findSweepSegments } from '../core/sweeps/findSweepSegments';
 import type { SweepSplit } from '../core/sweeps/findSweepSegments';
 import type { RoleAssignment } from './assignColumns';
-import { describeLines, ImportError, makeWarning } from './errors';
+import { reportDroppedRows } from './droppedRows';
+import { ImportError, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
 import type { ParsedTable } from './parseTable';
 import type { CurrentConvention, CurrentUnit, Guess, ImportOverrides, PotentialUnit, PreambleValue, TimeUnit } from './types';
@@ -87,11 +88,11 @@ function chooseTimeUnit(a: RoleAssignment, o: ImportOverrides): Guess<TimeUnit> 
 }
 
 /** Builds the core columns; throws TOO_FEW_POINTS or CONSTANT_POTENTIAL when nothing usable is left. */
-export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment, u: UnitChoice, convention: CurrentConvention, areaCm2: PreambleValue | null, warnings: ImportWarning[]): CoreColumns {
-  const needed = [a.potentialColumn, a.currentColumn, a.timeColumn, a.cycleColumn].filter((j): j is number => j !== null).map((j) => t.columns[j] as Float64Array);
-  const rows = finiteRows(needed, t.rowCount, t.lineOfRow);
+export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment, u: UnitChoice, convention: CurrentConvention, areaCm2: PreambleValue | null, decimalComma: boolean, warnings: ImportWarning[]): CoreColumns {
+  const neededColumns = [a.potentialColumn, a.currentColumn, a.timeColumn, a.cycleColumn].filter((j): j is number => j !== null);
+  const rows = finiteRows(neededColumns.map((j) => t.columns[j] as Float64Array), t.rowCount, t.lineOfRow);
   const { keep, kept, droppedCount, dropped } = rows;
-  if (droppedCount) warnings.push(makeWarning('SKIPPED_ROWS', `${fileName}: ${droppedCount} rows skipped because a needed value was not a finite number (NaN, Inf or empty) — lines ${describeLines(dropped, droppedCount)}`, dropped, droppedCount));
+  reportDroppedRows(fileName, t, a, neededColumns, decimalComma, { count: droppedCount, lines: dropped }, warnings);
   if (kept < 3) throw new ImportError('TOO_FEW_POINTS', fileName, `only ${kept} usable rows with a finite potential and current; a voltammogram needs at least 3`, { line: t.lineOfRow[0] ?? 1 });
   const pick = (j: number, factor: number) => keptValues(t.columns[j] as Float64Array, keep, kept, factor);
   const potentialV = pick(a.potentialColumn, POTENTIAL_FACTORS[u.potential.value]);
