@@ -10,6 +10,7 @@ import { AnalysisError } from '../core/errors';
 import { assembleMeasurement } from './assembleMeasurement';
 import { checkText, decodeBytes, rejectKnownBinaryText } from './decodeText';
 import type { DecodedText } from './decodeText';
+import { refuseSplitDecimalComma } from './decimalCommaSplit';
 import { detectHeader } from './detectHeader';
 import type { HeaderFound } from './detectHeader';
 import { describeDelimiter, detectLayout } from './detectFormat';
@@ -99,6 +100,7 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   const { text, lineEnding } = normaliseLineEnds(decoded.text);
   const sample = sampleLines(text);
   const layout = detectLayout(fileName, sample.lines, o);
+  refuseSplitDecimalComma(fileName, sample.lines, layout);
   const decimalComma = layout.decimalMark.value === ',';
   const header = detectHeader(fileName, sample.lines, layout.firstDataLine, layout.delimiter.value, decimalComma, layout.fieldCount, o);
   // Everything above the table but the names and units rows is read as preamble: comment lines
