@@ -120,7 +120,7 @@ function buildDetection(front: FrontMatter, table: ParsedTable, roles: RoleAssig
     scanRate: scan.guess,
     tableLines: { first: layout.firstDataLine + 1, last: table.lastDataLine },
     rowsRead: cols.rowsKept,
-    rowsSkipped: table.skippedCount + cols.rowsDropped,
+    rowsSkipped: table.skippedCount + cols.rowsDropped + (table.cutLastLine === null ? 0 : 1),
     headLines: front.headLines,
     footer: { lines: table.footerLines, firstLine: table.firstFooterLine },
     cycleCount: cols.split.cycles.length,

@@ -43,3 +43,31 @@ describe('comma delimiter with an unquoted decimal comma', () => {
     expect(r.measurement.potentialV[2]).toBeCloseTo(-0.19, 12);
   });
 });
+
+describe('a last row cut off', () => {
+  const rows = ['t/s,E/V,I/A'];
+  for (let i = 0; i < N; i++) {
+    const p = point(i);
+    rows.push(`${p.t.toFixed(2)},${p.e.toFixed(4)},${(p.iUa * 1e-6).toExponential(6)}`);
+  }
+  const whole = rows.join('\n');
+  it('"…,-2.5" under rows of "-2.570897e-06", no final line break → left out with LAST_ROW_CUT naming the line', () => {
+    const cut = whole.slice(0, whole.lastIndexOf(',') + 5);
+    const r = importVoltammogram('cut.csv', cut);
+    expect(r.measurement.potentialV.length).toBe(N - 1);
+    const w = r.warnings.find((x) => x.code === 'LAST_ROW_CUT');
+    expect(w?.lines).toEqual([N + 1]);
+    expect(w?.message).toContain('ends without a line break');
+  });
+  it('the same cut with a line break after it is still left out', () => {
+    const cut = `${whole.slice(0, whole.lastIndexOf(',') + 4)}\n`;
+    expect(importVoltammogram('cut2.csv', cut).measurement.potentialV.length).toBe(N - 1);
+  });
+  it('an intact file keeps every row; a file of varying shapes (shortest form of each number) is not judged', () => {
+    expect(importVoltammogram('whole.csv', whole).measurement.potentialV.length).toBe(N);
+    const varying = ['t/s,E/V,I/A', ...Array.from({ length: N }, (_, i) => { const p = point(i); return `${+p.t.toFixed(2)},${+p.e.toFixed(4)},${+(p.iUa * 1e-6).toPrecision(4)}`; })].join('\n');
+    const r = importVoltammogram('varying.csv', varying);
+    expect(r.measurement.potentialV.length).toBe(N);
+    expect(r.warnings.map((w) => w.code)).not.toContain('LAST_ROW_CUT');
+  });
+});

@@ -10,6 +10,7 @@ import { AnalysisError } from '../core/errors';
 import { assembleMeasurement } from './assembleMeasurement';
 import { checkText, decodeBytes, rejectKnownBinaryText } from './decodeText';
 import type { DecodedText } from './decodeText';
+import { cutTruncatedLastRow } from './cutLastRow';
 import { refuseSplitDecimalComma } from './decimalCommaSplit';
 import { detectHeader } from './detectHeader';
 import type { HeaderFound } from './detectHeader';
@@ -135,6 +136,7 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, r
   const table = step.value;
   layout.delimiter.explanation = describeDelimiter(layout.delimiter.value, layout.delimiter.overridden, table.rowCount, table.rowCount + table.skippedCount, layout.fieldCount, layout.firstDataLine + 1);
   layout.decimalMark.explanation += describeUnusual(table);
+  cutTruncatedLastRow(fileName, front.text, table, layout, layout.decimalMark.value === ',', warnings);
   tableWarnings(fileName, table, warnings);
   const measurement = assembleMeasurement(fileName, front, table, o, warnings);
   yield 1;

@@ -68,6 +68,10 @@ export interface ParsedTable {
   lastBlockRow: number;
   /** Repeated header lines inside the table (the first 10,000). */
   headerSeams: HeaderSeam[];
+  /** 1-based number of the text's last line (the empty one after a final line break included). */
+  lineCount: number;
+  /** Line of a last row left out as cut off (cutLastRow.ts), or null. */
+  cutLastLine: number | null;
 }
 
 /** Characters per chunk: large enough that papaparse's per-call cost vanishes. */
@@ -87,6 +91,8 @@ export function* parseTable(text: string, spec: TableSpec): Generator<number, Pa
     pos = end + 1;
     yield Math.min(1, (pos - spec.startOffset) / Math.max(1, text.length - spec.startOffset));
   }
+  // A text that ends with a line break at a chunk's seam has one more (empty) line than was read.
+  rows.out.lineCount = text.endsWith('\n') && pos === text.length ? line : line - 1;
   return rows.finish();
 }
 

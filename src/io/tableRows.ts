@@ -82,7 +82,7 @@ export class TableRows {
   private rowUnreadable: UnreadableCells[] = [];
   /** A blank or non-data line since the last data row. */
   private gap = false;
-  readonly out: ParsedTable = { columns: [], lineOfRow: new Int32Array(0), rowCount: 0, skippedLines: [], skippedCount: 0, repeatedHeaderCount: 0, seamLines: 0, footerLines: 0, firstFooterLine: null, lastDataLine: 0, unusual: [], unreadable: [], lastBlockRow: 0, headerSeams: [] };
+  readonly out: ParsedTable = { columns: [], lineOfRow: new Int32Array(0), rowCount: 0, skippedLines: [], skippedCount: 0, repeatedHeaderCount: 0, seamLines: 0, footerLines: 0, firstFooterLine: null, lastDataLine: 0, unusual: [], unreadable: [], lastBlockRow: 0, headerSeams: [], lineCount: 0, cutLastLine: null };
 
   constructor(private readonly k: number, textChars: number, private readonly fileName: string) {
     // A row of k fields takes at least 2k − 1 characters; start near the likely row count.
