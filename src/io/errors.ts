@@ -16,7 +16,9 @@
  * would take memory out of all proportion to the file). UNREADABLE_VALUES: more than half the
  * rows lack a needed value (cells that are not numbers, such as ambiguous thousands separators or
  * units in every cell). AMBIGUOUS_DECIMAL_COMMA: a comma-delimited table whose unquoted decimal
- * commas split each number in two (the header names fewer columns than the rows hold). UNREADABLE: the browser could not hand
+ * commas split each number in two (the header names fewer columns than the rows hold).
+ * UNITS_CHANGE: a repeated header inside the table names a unit that cannot be converted to the
+ * first header's. UNREADABLE: the browser could not hand
  * over the bytes of a picked file (moved, deleted or changed since the pick). INTERNAL: a fault in the importer
  * itself, still typed so that nothing untyped escapes (callers may treat it as exit 1).
  */
@@ -36,6 +38,7 @@ export type ImportErrorCode =
   | 'RAGGED_TABLE'
   | 'UNREADABLE_VALUES'
   | 'AMBIGUOUS_DECIMAL_COMMA'
+  | 'UNITS_CHANGE'
   | 'UNREADABLE'
   | 'INTERNAL';
 

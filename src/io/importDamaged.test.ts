@@ -71,3 +71,29 @@ describe('a last row cut off', () => {
     expect(r.warnings.map((w) => w.code)).not.toContain('LAST_ROW_CUT');
   });
 });
+
+describe('exports joined with a header that changes units', () => {
+  /** First half in V and A under "Potential (V)", second half under `secondHeader` in mV. */
+  function joined(secondHeader: string): string {
+    const rows = ['Time (s),Potential (V),Current (A)'];
+    for (let i = 0; i < N; i++) {
+      const p = point(i);
+      if (i === 161) rows.push(secondHeader);
+      const e = i <= 160 ? p.e.toFixed(4) : (p.e * 1000).toFixed(1);
+      rows.push(`${p.t.toFixed(2)},${e},${(p.iUa * 1e-6).toExponential(6)}`);
+    }
+    return rows.join('\n');
+  }
+  // 1 mV = 1e-3 V: BIPM, SI Brochure, 9th ed. (2019), Table 7.
+  it('the block under "Potential (mV)" is converted to V, and the warning names the line', () => {
+    const r = importVoltammogram('joined.csv', joined('Time (s),Potential (mV),Current (A)'));
+    expect(r.measurement.potentialV.length).toBe(N);
+    expect(r.measurement.potentialV[200]).toBeCloseTo(point(200).e, 12);
+    expect(r.measurement.cycles.length).toBe(1);
+    expect(r.warnings.find((w) => w.code === 'REPEATED_HEADER' && w.message.includes('from line 163'))).toBeDefined();
+  });
+  it('a repeat whose unit cannot be converted (mV → a charge in C) → UNITS_CHANGE with the line', () => {
+    const e = refusal('joined2.csv', joined('Time (s),Potential (C),Current (A)'));
+    expect([e.code, e.line, e.column]).toEqual(['UNITS_CHANGE', 163, 2]);
+  });
+});

@@ -11,6 +11,7 @@ import { assembleMeasurement } from './assembleMeasurement';
 import { checkText, decodeBytes, rejectKnownBinaryText } from './decodeText';
 import type { DecodedText } from './decodeText';
 import { cutTruncatedLastRow } from './cutLastRow';
+import { convertSeamBlocks, sameNamesOtherUnits } from './headerSeams';
 import { refuseSplitDecimalComma } from './decimalCommaSplit';
 import { detectHeader } from './detectHeader';
 import type { HeaderFound } from './detectHeader';
@@ -125,6 +126,7 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, r
     startOffset: front.startOffset,
     startLine: layout.firstDataLine + 1,
     headerText: front.header.headerKey,
+    sameNamesOtherUnits: sameNamesOtherUnits(front.header),
     fileName,
     reader,
   });
@@ -137,6 +139,7 @@ function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, r
   layout.delimiter.explanation = describeDelimiter(layout.delimiter.value, layout.delimiter.overridden, table.rowCount, table.rowCount + table.skippedCount, layout.fieldCount, layout.firstDataLine + 1);
   layout.decimalMark.explanation += describeUnusual(table);
   cutTruncatedLastRow(fileName, front.text, table, layout, layout.decimalMark.value === ',', warnings);
+  convertSeamBlocks(fileName, table, front.header, warnings);
   tableWarnings(fileName, table, warnings);
   const measurement = assembleMeasurement(fileName, front, table, o, warnings);
   yield 1;

@@ -39,7 +39,7 @@ export interface TableSpec {
    * Tells a line that names the header's columns with other units ("Potential (mV)" under a
    * header "Potential (V)"), given its trimmed fields. @default none
    */
-  sameNamesOtherUnits?: (fields: string[]) => boolean;
+  sameNamesOtherUnits?: ((fields: string[]) => boolean) | undefined;
   /** For error messages. @default 'the file' */
   fileName?: string;
   /** 'papaparse' reads every chunk through papaparse (the reference the fast path is fuzzed against). @default 'auto' */
