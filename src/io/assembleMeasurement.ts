@@ -12,6 +12,7 @@ import type { ImportWarning } from './errors';
 import type { HeaderFound } from './detectHeader';
 import type { FrontMatter } from './importVoltammogram';
 import { measurementId } from './measurementId';
+import { leaveOutNumericFooter } from './numericFooter';
 import type { ParsedTable } from './parseTable';
 import type { PreambleReading } from './readPreamble';
 import { scanRateIn } from './readScanRate';
@@ -27,6 +28,7 @@ export function assembleMeasurement(fileName: string, front: FrontMatter, table:
   refuseNumberLikeColumns(fileName, table, header.names, front.layout.decimalMark.value === ',');
   const roles = assignColumns(fileName, header.names, table.columns, o, header.units);
   warnings.push(...roles.warnings);
+  leaveOutNumericFooter(fileName, table, roles.potentialColumn, warnings);
   let convention = chooseConvention(o, pre);
   const units = chooseUnits(fileName, roles, o, warnings);
   const kind = chooseCurrentKind(fileName, units, roles, pre.areaCm2, warnings);

@@ -97,3 +97,26 @@ describe('exports joined with a header that changes units', () => {
     expect([e.code, e.line, e.column]).toEqual(['UNITS_CHANGE', 163, 2]);
   });
 });
+
+describe('a short numeric block after the table', () => {
+  const rows = ['t/s;E/V;I/A'];
+  for (let i = 0; i < N; i++) {
+    const p = point(i);
+    rows.push(`${p.t.toFixed(2)};${p.e.toFixed(4)};${(p.iUa * 1e-6).toExponential(6)}`);
+  }
+  it('a summary row after a blank line that does not continue the sweep → left out with NUMERIC_FOOTER naming its line', () => {
+    const text = `${rows.join('\n')}\n\nSummary (E/V; ipa/A; ipc/A)\n0.2000;4.0e-6;-3.1e-6\n`;
+    const r = importVoltammogram('footer.csv', text);
+    expect(r.measurement.potentialV.length).toBe(N);
+    expect(r.measurement.cycles.length).toBe(1);
+    const w = r.warnings.find((x) => x.code === 'NUMERIC_FOOTER');
+    expect(w?.lines).toEqual([N + 4]);
+    expect(r.measurement.detection.footer).toEqual({ lines: 2, firstLine: N + 3 });
+  });
+  it('the last rows after a blank line that continue the sweep are kept', () => {
+    const text = [...rows.slice(0, -2), '', ...rows.slice(-2)].join('\n');
+    const r = importVoltammogram('gap.csv', text);
+    expect(r.measurement.potentialV.length).toBe(N);
+    expect(r.warnings.map((w) => w.code)).not.toContain('NUMERIC_FOOTER');
+  });
+});
