@@ -61,8 +61,11 @@ const CONTROL_CHARACTER = /[\u0000-\u0008\u000b\u000e-\u001f\ufffd]/;
 export function decodeBytes(fileName: string, bytes: Uint8Array, forced?: TextEncoding): DecodedText {
   if (bytes.length === 0) throw new ImportError('EMPTY', fileName, 'the file is empty (0 bytes)');
   rejectKnownBinary(fileName, bytes.subarray(0, 16));
-  if (forced) return { text: decodeAs(fileName, bytes, forced), encoding: { value: forced, overridden: true, explanation: `encoding ${forced} (set by the user)` } };
   const bom = bomOf(bytes);
+  if (forced) {
+    refuseOtherUtf16(fileName, bytes, forced, bom);
+    return { text: decodeAs(fileName, bytes, forced), encoding: { value: forced, overridden: true, explanation: `encoding ${forced} (set by the user)` } };
+  }
   if (bom) return { text: decodeAs(fileName, bytes, bom), encoding: { value: bom, overridden: false, explanation: `encoding ${bom} — the file starts with a ${bom} byte-order mark` } };
   const utf16 = guessUtf16WithoutBom(bytes);
   if (utf16) {
@@ -105,8 +108,47 @@ function decodeAs(fileName: string, bytes: Uint8Array, encoding: TextEncoding): 
     // TextDecoder drops a BOM that matches its encoding by itself.
     return new TextDecoder(label, { fatal: encoding !== 'latin1' }).decode(bytes);
   } catch {
+    if (encoding === 'utf-8') throw invalidUtf8(fileName, bytes);
     throw new ImportError('ENCODING', fileName, `the bytes are not valid ${encoding} text; choose another encoding or re-export the file`);
   }
+}
+
+/**
+ * A forced encoding other than the UTF-16 the bytes show (a byte-order mark, or a zero in every
+ * other byte) would read every character wrong: refused with the likely encoding.
+ */
+function refuseOtherUtf16(fileName: string, bytes: Uint8Array, forced: TextEncoding, bom: TextEncoding | null): void {
+  const utf16 = bom === 'utf-16le' || bom === 'utf-16be' ? bom : guessUtf16WithoutBom(bytes);
+  if (!utf16 || utf16 === forced) return;
+  const why = bom === utf16 ? `it starts with the ${utf16} byte-order mark` : `every ${utf16 === 'utf-16le' ? 'second' : 'first'} byte of each pair is zero, as in ${utf16} text`;
+  throw new ImportError('ENCODING', fileName, `the encoding was set to ${forced}, but the bytes look like ${utf16} (${why}); choose ${utf16}, or leave the encoding to be detected`);
+}
+
+/** The first byte that breaks UTF-8 (RFC 3629 sect. 4, lead and continuation bytes), located by line and character. */
+function invalidUtf8(fileName: string, b: Uint8Array): ImportError {
+  const at = firstInvalidUtf8(b);
+  if (at < 0) return new ImportError('ENCODING', fileName, 'the bytes are not valid utf-8 text; choose another encoding (latin1?) or re-export the file');
+  const lineStart = b.subarray(0, at).lastIndexOf(0x0a) + 1;
+  let line = 1;
+  for (let i = b.indexOf(0x0a); i >= 0 && i < lineStart; i = b.indexOf(0x0a, i + 1)) line++;
+  const character = new TextDecoder('utf-8').decode(b.subarray(lineStart, at)).length + 1;
+  const hex = (b[at] as number).toString(16).toUpperCase().padStart(2, '0');
+  return new ImportError('ENCODING', fileName, `the byte 0x${hex} at line ${line}, character ${character} is not valid utf-8; the file is probably Latin-1 (Windows-1252): choose latin1, or leave the encoding to be detected`, { line });
+}
+
+function firstInvalidUtf8(b: Uint8Array): number {
+  for (let i = 0; i < b.length; ) {
+    const c = b[i] as number;
+    if (c < 0x80) {
+      i++;
+      continue;
+    }
+    const more = c >= 0xc2 && c <= 0xdf ? 1 : c >= 0xe0 && c <= 0xef ? 2 : c >= 0xf0 && c <= 0xf4 ? 3 : -1;
+    if (more < 0) return i;
+    for (let k = 1; k <= more; k++) if (((b[i + k] ?? 0) & 0xc0) !== 0x80) return i;
+    i += more + 1;
+  }
+  return -1;
 }
 
 /**

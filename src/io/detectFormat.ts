@@ -6,7 +6,8 @@
  */
 import { ImportError } from './errors';
 import { isNonFiniteToken, parseNumber, splitFields } from './textLines';
-import { readUnusualNumber } from './unusualNumber';
+import { readHeader } from './headerNames';
+import { readUnusualNumber, whyNotANumber } from './unusualNumber';
 import { DELIMITER_CHOICES, labelOf } from './overrideChoices';
 import type { DecimalMark, Delimiter, Guess, ImportOverrides } from './types';
 
@@ -257,6 +258,32 @@ function noTableError(fileName: string, lines: string[], overrides: ImportOverri
   if (numericLines >= 2) {
     return new ImportError('ONE_COLUMN', fileName, `found ${numericLines} lines holding a single number each, but a voltammogram needs at least a potential and a current column`, { line: firstNumeric + 1 });
   }
+  const cause = noTableCause(fileName, lines);
+  if (cause) return cause;
   const forced = overrides.delimiter || overrides.decimalMark ? ' with the delimiter/decimal mark you chose' : '';
   return new ImportError('NO_TABLE', fileName, `no table of numbers found${forced}: no run of lines splits into two or more numeric fields (looked at ${lines.length} lines)`);
+}
+
+/**
+ * The two usual reasons for finding no table, said with their line: cells that hold a number and
+ * its unit ("-0.1000 V"), and a header with no data rows under it.
+ */
+function noTableCause(fileName: string, lines: string[]): ImportError | null {
+  let headerAt = -1;
+  let anyNumber = false;
+  for (let i = 0; i < Math.min(lines.length, QUICK_LINES); i++) {
+    const line = lines[i] as string;
+    if (/\d/.test(line)) anyNumber = true;
+    for (const d of [',', ';', '\t'] as const) {
+      if (!line.includes(d)) continue;
+      const fields = splitFields(line, d);
+      const withUnit = fields.findIndex((f) => whyNotANumber(f, d !== ',' && /\d,\d/.test(f)).includes('unit'));
+      if (withUnit >= 0 && fields.length >= 2) {
+        return new ImportError('NO_TABLE', fileName, `no table of numbers found: the cells hold units as well as numbers ("${fields[withUnit]}"); export the values without units (the units belong in the header), or remove them`, { line: i + 1, column: withUnit + 1 });
+      }
+      if (headerAt < 0 && fields.length >= 2 && fields.filter((f) => readHeader(f).role !== null).length >= 2) headerAt = i;
+    }
+  }
+  if (headerAt >= 0 && !anyNumber) return new ImportError('NO_TABLE', fileName, 'the file has a header but no data rows under it', { line: headerAt + 1 });
+  return null;
 }

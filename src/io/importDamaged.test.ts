@@ -120,3 +120,45 @@ describe('a short numeric block after the table', () => {
     expect(r.warnings.map((w) => w.code)).not.toContain('NUMERIC_FOOTER');
   });
 });
+
+describe('clearer refusals', () => {
+  it('units written in every cell ("-0.1000 V") → NO_TABLE naming the line and column and saying so', () => {
+    const text = ['E,I', ...Array.from({ length: 40 }, (_, i) => `${point(i).e.toFixed(4)} V,${(point(i).iUa * 1e-6).toExponential(3)} A`)].join('\n');
+    const e = refusal('units.csv', text);
+    expect([e.code, e.line, e.column]).toEqual(['NO_TABLE', 2, 1]);
+    expect(e.message).toContain('the cells hold units');
+  });
+  it('a header and nothing under it → "a header but no data rows"', () => {
+    const e = refusal('empty.csv', 'Time (s),Potential (V),Current (A)\n');
+    expect(e.message).toContain('a header but no data rows');
+    expect(e.line).toBe(1);
+  });
+  // Encodings: RFC 3629 (UTF-8) sect. 4; ISO/IEC 8859-1 0xE9 = é; The Unicode Standard ch. 23.8 (U+FEFF BOM).
+  const latin1 = Uint8Array.from([...new TextEncoder().encode('Operator: Ren'), 0xe9, ...new TextEncoder().encode(['', 'E/V,I/A', ...Array.from({ length: 20 }, (_, i) => `${point(i).e.toFixed(3)},${point(i).iUa}`)].join('\n'))]);
+  it('utf-8 set for Latin-1 bytes → ENCODING naming line, character and byte, and suggesting latin1', () => {
+    let e: ImportError | null = null;
+    try {
+      importVoltammogram('latin.txt', latin1, { overrides: { encoding: 'utf-8' } });
+    } catch (err) {
+      e = err as ImportError;
+    }
+    expect(e?.code).toBe('ENCODING');
+    expect(e?.line).toBe(1);
+    expect(e?.message).toContain('0xE9 at line 1, character 14');
+    expect(e?.message).toContain('latin1');
+  });
+  it('utf-16be or latin1 set for UTF-16 LE bytes → ENCODING suggesting utf-16le', () => {
+    const text = 'E/V\tI/A\n0.1\t1e-6\n0.2\t2e-6\n0.3\t3e-6\n';
+    const le = new Uint8Array(text.length * 2);
+    for (let i = 0; i < text.length; i++) le[2 * i] = text.charCodeAt(i);
+    for (const encoding of ['utf-16be', 'latin1'] as const) {
+      try {
+        importVoltammogram('wide.txt', le, { overrides: { encoding } });
+        throw new Error('expected a refusal');
+      } catch (err) {
+        expect((err as ImportError).code).toBe('ENCODING');
+        expect((err as ImportError).message).toContain('choose utf-16le');
+      }
+    }
+  });
+});
