@@ -74,18 +74,21 @@ function sameValues(fields: string[], t: ParsedTable, r: number, decimalComma: b
 
 /** The line `back` lines above the text's last line, and up to `count` non-blank lines above it (nearest first). */
 function linesBefore(text: string, back: number, count: number): { last: string; above: string[] } | null {
+  // The start of the line that ends at `end` (exclusive); a line ending at 0 starts there too
+  // (lastIndexOf with a negative start would look at index 0 again, and never get past it).
+  const lineStart = (end: number) => (end <= 0 ? 0 : text.lastIndexOf('\n', end - 1) + 1);
   let end = text.length;
-  let start = text.lastIndexOf('\n', end - 1) + 1;
+  let start = lineStart(end);
   for (let b = 0; b < back; b++) {
     if (start === 0) return null;
     end = start - 1;
-    start = text.lastIndexOf('\n', end - 1) + 1;
+    start = lineStart(end);
   }
   const last = text.slice(start, end);
   const above: string[] = [];
   while (start > 0 && above.length < count) {
     end = start - 1;
-    start = text.lastIndexOf('\n', end - 1) + 1;
+    start = lineStart(end);
     const l = text.slice(start, end);
     if (l.trim() !== '') above.push(l);
   }

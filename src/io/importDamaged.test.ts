@@ -63,6 +63,12 @@ describe('a last row cut off', () => {
     const cut = `${whole.slice(0, whole.lastIndexOf(',') + 4)}\n`;
     expect(importVoltammogram('cut2.csv', cut).measurement.potentialV.length).toBe(N - 1);
   });
+  it('a short table that starts on the file\'s second line (a blank first line) is read, not looked at forever', () => {
+    // The look back for the rows above the last one must stop at the file's start (seen with a
+    // fuzzed input that began with a line break: the search never got past index 0).
+    const short = `\n${rows.slice(1, 9).join('\n')}`;
+    expect(importVoltammogram('short.csv', short).measurement.potentialV.length).toBe(8);
+  });
   it('an intact file keeps every row; a file of varying shapes (shortest form of each number) is not judged', () => {
     expect(importVoltammogram('whole.csv', whole).measurement.potentialV.length).toBe(N);
     const varying = ['t/s,E/V,I/A', ...Array.from({ length: N }, (_, i) => { const p = point(i); return `${+p.t.toFixed(2)},${+p.e.toFixed(4)},${+(p.iUa * 1e-6).toPrecision(4)}`; })].join('\n');
