@@ -32,7 +32,16 @@ export interface HeaderFound {
 /** Non-blank lines above the table searched for names and units (common practice, no source). */
 export const HEADER_BLOCK_LINES = 6;
 
+/**
+ * The names (or units) of a header line: `k` fields split on the table's delimiter; failing that,
+ * the same line read as exports also write it (`headerFields`). Null when no reading gives `k`.
+ */
 export function splitHeader(line: string, delimiter: Delimiter, k: number): string[] | null {
+  const plain = splitOnTableDelimiter(line, delimiter, k);
+  return plain ?? headerFields(line, delimiter, k);
+}
+
+function splitOnTableDelimiter(line: string, delimiter: Delimiter, k: number): string[] | null {
   if (delimiter !== 'whitespace') {
     const f = splitFields(line, delimiter);
     // One missing trailing name: the data rows end with a delimiter and the header does not.
@@ -43,6 +52,70 @@ export function splitHeader(line: string, delimiter: Delimiter, k: number): stri
   if (wide.length === k) return wide.map((s) => s.trim().replace(/^"(.*)"$/, '$1'));
   const narrow = splitFields(line, 'whitespace');
   return narrow.length === k ? narrow : null;
+}
+
+/** Longest line read as names by the ways of `headerFields` (common practice, no source). */
+const MAX_NAMES_LINE_CHARS = 2000;
+
+/** A comment mark before the names: "# t/s, E/V, I/A", "% time  potential  current". */
+const LEADING_MARK = /^\s*[#%]\s+(?=\S)/;
+
+/**
+ * Header lines that the table's own delimiter does not split into `k` names, read the ways exports
+ * write them (common practice, no source), each taken only when it gives exactly `k` non-empty names:
+ * 1. a unit or note in brackets holds the delimiter: "I (µA, cathodic positive),E (V)";
+ * 2. the header is delimited unlike the numbers: names by commas above tab-separated data;
+ * 3. single spaces between names that carry their units in brackets: "Time (s) Potential (V) Current (A)".
+ */
+function headerFields(line: string, delimiter: Delimiter, k: number): string[] | null {
+  // A names line is short; a long line (a hostile or damaged file) is not searched this way.
+  if (line.length > MAX_NAMES_LINE_CHARS) return null;
+  const text = line.replace(LEADING_MARK, '');
+  const tries: Array<string[] | null> = [
+    text === line ? null : splitOnTableDelimiter(text, delimiter, k),
+    ...(['\t', ';', ',', 'wide'] as const).map((d) => splitOutsideBrackets(text, d)),
+    namesWithBracketedUnits(text),
+  ];
+  for (const f of tries) if (f && f.length === k && f.every((x) => x !== '')) return f;
+  return null;
+}
+
+const OPEN = '([{';
+const CLOSE = ')]}';
+
+/** Splits on the delimiter (or on a tab or two or more spaces, "wide") outside brackets and quotes; null when the brackets do not balance. */
+function splitOutsideBrackets(line: string, d: '\t' | ';' | ',' | 'wide'): string[] | null {
+  const out: string[] = [];
+  let depth = 0;
+  let quoted = false;
+  let start = 0;
+  for (let i = 0; i < line.length; i++) {
+    const c = line[i] as string;
+    if (c === '"') quoted = !quoted;
+    if (quoted) continue;
+    if (OPEN.includes(c)) depth++;
+    else if (CLOSE.includes(c)) depth--;
+    if (depth < 0) return null;
+    if (depth > 0) continue;
+    const wideAt = d === 'wide' && (c === '\t' || (c === ' ' && line[i + 1] === ' '));
+    if (c === d || wideAt) {
+      out.push(line.slice(start, i));
+      if (wideAt) while (line[i + 1] === ' ' || line[i + 1] === '\t') i++;
+      start = i + 1;
+    }
+  }
+  if (depth !== 0 || quoted) return null;
+  out.push(line.slice(start));
+  const fields = out.map((f) => f.trim().replace(/^"(.*)"$/, '$1'));
+  return fields.length > 1 ? fields : null;
+}
+
+/** Words joined to the bracketed unit that follows them; each name must end in its unit. */
+function namesWithBracketedUnits(line: string): string[] | null {
+  const names = line.trim().match(/[^\s([{]+(?:\s*[([{][^)\]}]*[)\]}])+/g);
+  if (!names) return null;
+  // The names must use up the whole line (no stray words between them).
+  return names.join(' ').replace(/\s+/g, '') === line.replace(/\s+/g, '') ? names.map((n) => n.trim()) : null;
 }
 
 function mostlyText(fields: string[], decimalComma: boolean): boolean {

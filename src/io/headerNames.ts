@@ -117,7 +117,8 @@ function splitUnit(text: string): NamedUnit {
   for (const re of tries) {
     const m = re ? re.exec(text) : ['', '', text];
     const unitText = ((m?.[2] ?? '') as string).trim();
-    const found = m && unitText ? unitIn(unitText) : null;
+    // A note after the unit in the brackets: "(µA, cathodic positive)".
+    const found = m && unitText ? unitIn(unitText) ?? (re === tries[0] ? unitIn(unitText.split(/[,;]/)[0] as string) : null) : null;
     if (found) return { label: ((m?.[1] ?? '') as string).trim(), unitText, ...found };
   }
   return { label: text, unitText: '', unit: null, reference: null };

@@ -166,3 +166,38 @@ describe('names that say what the columns are', () => {
     expect(read('xy.csv', table('x,y', EI)).measurement.detection.columns.map((c) => c.role)).toEqual(['potential', 'current']);
   });
 });
+
+describe('header lines written unlike the numbers below them', () => {
+  // Header layouts (common practice, no source); unit factors as above (SI Brochure, Table 7).
+  // The current comes first in these files, so a header left unread would swap the roles.
+  const IE = (x: number[]) => [((x[2] as number) * 1e6).toFixed(5), x[1] as number];
+  const rolesAndUnits = (r: ReturnType<typeof read>) => {
+    const d = r.measurement.detection;
+    return [d.columns.map((c) => c.role), d.potentialUnit.value, d.currentUnit.value];
+  };
+  it('a note beside the unit in the brackets holds the delimiter: "I (µA, cathodic positive),E (V)"', () => {
+    const text = table('I (µA, cathodic positive),E (V)', (x) => [(-(x[2] as number) * 1e6).toFixed(5), x[1] as number]);
+    const r = read('pol.csv', text);
+    expect(rolesAndUnits(r)).toEqual([['current', 'potential'], 'V', 'µA']);
+    // Cathodic positive: the file's numbers are −i (IUPAC), read back as i.
+    expect(r.measurement.detection.currentConvention.value).toBe('polarographic');
+    expect(r.measurement.currentA[0]).toBeCloseTo(triangleRows(2)[0]?.[2] as number, 11);
+  });
+  it('names by commas above tab-separated numbers', () => {
+    const r = read('mixed.txt', table('I/µA,E/V', IE, 2, '\t'));
+    expect(rolesAndUnits(r)).toEqual([['current', 'potential'], 'V', 'µA']);
+  });
+  it('single spaces between names that carry their units in brackets', () => {
+    const r = read('spaced.txt', table('Current (µA) Potential (V)', IE, 2, ' '));
+    expect(rolesAndUnits(r)).toEqual([['current', 'potential'], 'V', 'µA']);
+    expect(r.measurement.detection.columns.map((c) => c.name)).toEqual(['Current (µA)', 'Potential (V)']);
+  });
+  it('a comment mark before the names', () => {
+    const r = read('marked.csv', table('# I/µA; E/V', IE, 2, ','));
+    expect(rolesAndUnits(r)).toEqual([['current', 'potential'], 'V', 'µA']);
+  });
+  it('a line that no reading splits into as many names as the table stays a preamble line', () => {
+    const r = read('odd.csv', `Run (3) of series (A)\n${table('', IE).trimStart()}`);
+    expect(r.measurement.detection.headerLine.value).toBeNull();
+  });
+});

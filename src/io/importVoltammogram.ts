@@ -14,6 +14,7 @@ import { cutTruncatedLastRow } from './cutLastRow';
 import { convertSeamBlocks, sameNamesOtherUnits } from './headerSeams';
 import { refuseSplitDecimalComma } from './decimalCommaSplit';
 import { detectHeader } from './detectHeader';
+import { readHeader } from './headerNames';
 import type { HeaderFound } from './detectHeader';
 import { describeDelimiter, detectLayout } from './detectFormat';
 import type { TableLayout } from './detectFormat';
@@ -23,7 +24,7 @@ import { createYielder } from './timeSlice';
 import { describeMark } from './unusualNumber';
 import { parseTable } from './parseTable';
 import type { ParsedTable } from './parseTable';
-import { readPreamble } from './readPreamble';
+import { readConvention, readPreamble } from './readPreamble';
 import type { PreambleReading } from './readPreamble';
 import { normaliseLineEnds, sampleLines } from './textLines';
 import type { ImportDetection, ImportOptions, ImportOverrides, ImportResult } from './types';
@@ -111,7 +112,10 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   const above = sample.lines.slice(0, layout.firstDataLine).map((l, i) => (i === namesLine || i === header.unitsLine ? '' : l));
   const preambleLines = above.filter((_, i) => i !== namesLine && i !== header.unitsLine);
   const headLines = sample.lines.slice(0, 40).map((l) => (l.length > 240 ? `${l.slice(0, 240)}…` : l));
-  return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre: readPreamble(above, 1), startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
+  const pre = readPreamble(above, 1);
+  // A convention stated in the current column's own name: "I (µA, cathodic positive)".
+  pre.convention ??= header.names?.filter((n) => readHeader(n).role === 'current').map((n) => readConvention(n, namesLine + 1)).find((c) => c !== null) ?? null;
+  return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre, startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
 }
 
 function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, reader: 'auto' | 'papaparse'): Generator<number, ImportResult> {

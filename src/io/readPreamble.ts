@@ -87,7 +87,8 @@ function addMetadata(md: Record<string, string>, key: string, value: string): vo
   md[k] = value;
 }
 
-function readConvention(text: string, line: number): PreambleReading['convention'] {
+/** The current sign convention a line of text states ("cathodic positive", "IUPAC"), or null. */
+export function readConvention(text: string, line: number): PreambleReading['convention'] {
   if (/polarographic|classical\s+convention|us\s+convention|cathodic\s+(currents?\s+)?(are\s+|is\s+)?positive|anodic\s+(currents?\s+)?(are\s+|is\s+)?negative/i.test(text)) return { value: 'polarographic', line, text };
   if (/\biupac\b|anodic\s+(currents?\s+)?(are\s+|is\s+)?positive|cathodic\s+(currents?\s+)?(are\s+|is\s+)?negative/i.test(text)) return { value: 'iupac', line, text };
   return null;
