@@ -114,8 +114,9 @@ function scoreCandidate(lines: string[], split: string[][], c: Candidate): Score
   const k = modalWidth(cls);
   if (k === 0) return null;
   const rowOf = rowsOfWidth(cls, k);
-  const first = findTableStart(lines, rowOf);
-  if (first < 0) return null;
+  const start = findTableStart(lines, rowOf);
+  if (start < 0) return null;
+  const first = reachBackOverDamage(lines, rowOf, cls, k, start);
   const { last, rows, numbers } = tableFrom(rowOf, cls.numbers, first);
   return { c, k, first, last, rows, numericFraction: numbers / (rows * k), unusual: tableFrom(rowOf, cls.unusual, first).numbers };
 }
@@ -163,6 +164,40 @@ function findTableStart(lines: string[], isRow: Uint8Array): number {
   const need = Math.min(longest, Math.max(3, Math.ceil(longest / 10)));
   for (let i = 0; i < runLength.length; i++) if (runLength[i]! > 0 && runLength[i]! >= need) return i;
   return -1;
+}
+
+/** Damaged lines bridged between the table and a few rows above it (common practice, no source). */
+const BRIDGED_LINES = 2;
+
+/**
+ * The table's start moved up over a damaged line or two ("0.49x0,1.2e-7", "--,--") to the few rows
+ * above them: those rows are the sweep's first points, not a preamble, and the damaged lines are
+ * then counted and located with the table's other left-out rows. A damaged line splits into the
+ * table's `k` fields, each a number or a missing-value token, or one or more of them a number; a
+ * names or units line (no number in it) right above the rows stops the search, as does a blank
+ * line between them.
+ */
+function reachBackOverDamage(lines: string[], isRow: Uint8Array, cls: LineClasses, k: number, start: number): number {
+  let first = start;
+  for (;;) {
+    let i = first - 1;
+    let damaged = 0;
+    while (i >= 0 && !isRow[i] && damaged <= BRIDGED_LINES && damagedRow(lines[i] as string, cls, k, i)) {
+      damaged++;
+      i--;
+    }
+    if (i < 0 || !isRow[i] || damaged === 0 || damaged > BRIDGED_LINES) return first;
+    // The run of rows above (blank lines inside it allowed, as in findTableStart).
+    let top = i;
+    for (let j = i - 1; j >= 0 && (isRow[j] || (lines[j] as string).trim() === ''); j--) if (isRow[j]) top = j;
+    first = top;
+  }
+}
+
+function damagedRow(line: string, cls: LineClasses, k: number, i: number): boolean {
+  if (line.trim() === '' || cls.fields[i] !== k) return false;
+  if ((cls.numbers[i] as number) >= 1) return true;
+  return line.split(/[,;\t ]+/).filter((f) => f !== '').every((f) => isNonFiniteToken(f));
 }
 
 function better(a: Scored, b: Scored | null): boolean {

@@ -34,7 +34,7 @@ export function reportDroppedRows(fileName: string, t: ParsedTable, a: RoleAssig
   const total = t.rowCount + t.skippedCount;
   const fraction = count / Math.max(1, total);
   if (fraction <= LOUD_DROP_FRACTION || count <= LOUD_DROP_ROWS) {
-    if (t.skippedCount) warnings.push(makeWarning('SKIPPED_ROWS', `${fileName}: ${t.skippedCount} lines inside the table skipped (too few fields or not numbers) — lines ${describeLines(t.skippedLines, t.skippedCount)}`, t.skippedLines, t.skippedCount));
+    if (t.skippedCount) warnings.push(makeWarning('SKIPPED_ROWS', `${fileName}: ${t.skippedCount} line${t.skippedCount === 1 ? '' : 's'} inside the table skipped (too few fields or not numbers) — line${t.skippedCount === 1 ? '' : 's'} ${describeLines(t.skippedLines, t.skippedCount)}`, t.skippedLines, t.skippedCount));
     if (dropped.count) warnings.push(makeWarning('SKIPPED_ROWS', `${fileName}: ${dropped.count} rows skipped because a needed value was not a finite number (NaN, Inf or empty) — lines ${describeLines(dropped.lines, dropped.count)}`, dropped.lines, dropped.count));
     return;
   }

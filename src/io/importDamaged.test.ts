@@ -37,6 +37,15 @@ describe('comma delimiter with an unquoted decimal comma', () => {
     expect(e.message).toMatch(/names 3 columns, but the rows split at ',' into 6 fields/);
     expect(e.message).toMatch(/';' or tab/);
   });
+  it('the same rows with no names above them: refused all the same, from the fixed decimals', () => {
+    const e = refusal('bare.csv', rows.slice(1).join('\n'));
+    expect(e.code).toBe('AMBIGUOUS_DECIMAL_COMMA');
+    expect(e.message).toMatch(/split at ',' into 6 fields .*always as many digits/);
+  });
+  it('whole numbers of changing width with no names (an index and a potential in mV) are read', () => {
+    const ints = Array.from({ length: N }, (_, i) => `${i},${Math.round(point(i).e * 1000)},${i % 7},${Math.round(point(i).iUa * 1000)}`);
+    expect(importVoltammogram('ints.csv', ints.join('\n')).measurement.potentialV.length).toBe(N);
+  });
   it('the same numbers quoted ("0,12") are read', () => {
     const quoted = rows.map((r, i) => (i === 0 ? r : r.replace(/(-?\d+,\d+)(?=,|$)/g, '"$1"')));
     const r = importVoltammogram('quoted.csv', quoted.join('\n'));
@@ -166,5 +175,35 @@ describe('clearer refusals', () => {
         expect((err as ImportError).message).toContain('choose utf-16le');
       }
     }
+  });
+});
+
+describe('a damaged line among the first rows', () => {
+  // The sweep's first points stay in; the damaged line is left out and located.
+  const rows = (bad: number, text: string) => {
+    const out = ['Potential (V),Current (µA)'];
+    for (let i = 0; i < N; i++) {
+      const p = point(i);
+      out.push(i === bad ? text : `${p.e.toFixed(4)},${p.iUa.toFixed(5)}`);
+    }
+    return `${out.join('\n')}\n`;
+  };
+  it.each([
+    ['a mistyped number', 2, '0.49x0,1.2'],
+    ['a missing-value row', 1, '--,--'],
+  ])('%s on the table\'s line %i: the rows above it are read, the header found', (_label, bad, text) => {
+    const r = importVoltammogram('early.csv', rows(bad, text));
+    const d = r.measurement.detection;
+    expect(d.headerLine.value).toBe(1);
+    expect(d.columns.map((c) => c.role)).toEqual(['potential', 'current']);
+    expect(r.measurement.potentialV.length).toBe(N - 1);
+    expect(r.measurement.potentialV[0]).toBeCloseTo(point(0).e, 9);
+    const skipped = r.warnings.find((w) => w.code === 'SKIPPED_ROWS');
+    expect(skipped?.message).toMatch(new RegExp(`1 line inside the table skipped .* line ${bad + 2}$`));
+  });
+  it('a short numeric block above the names stays a preamble', () => {
+    const r = importVoltammogram('pre.csv', `1,2\n3,4\n${rows(-1, '')}`);
+    expect(r.measurement.detection.headerLine.value).toBe(3);
+    expect(r.measurement.potentialV.length).toBe(N);
   });
 });
