@@ -10,3 +10,4 @@ export * from './correctedIrreversibleRateConstant';
 export * from './nicholsonPsiAtAlpha';
 export * from './jointFollowUpRateConstant';
 export * from './followUpCurrentFunction';
+export * from './lavironWorkingCurve';
