@@ -13,3 +13,4 @@ export * from './lavironIrreversibleWave';
 export * from './ohmicWidening';
 export * from './followUpSignature';
 export * from './ohmicPeakCurrentRatio';
+export * from './filmOhmicSeparation';
