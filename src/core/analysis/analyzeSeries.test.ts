@@ -122,7 +122,10 @@ describe('analyzeSeries', () => {
     expect(c?.alpha).toBeCloseTo(0.5, 8);
     expect(c?.logLog?.reading).toBe('adsorbed-or-capacitive');
     expect(c?.surface?.lavironAlpha).toBeCloseTo(0.5, 8);
-    expect(c?.surface?.ksPerS).toBeCloseTo(5, 6);
+    // k_s now comes from Laviron's general working curve for every file; the peaks here sit on his
+    // large-separation lines, which the curve meets only past 200 mV (the 1 V/s file is below), so 1 %.
+    expect(Math.abs(c!.surface!.ksPerS! / 5 - 1)).toBeLessThan(0.01);
+    expect(c?.surface?.ksStatus).toBe('value');
     // Cross-check of the k_s path against the standalone function.
     expect(lavironRateConstant({ deltaEpV: 0.3, scanRateVPerS: 10, electronCount: 1 })).toBeGreaterThan(0);
   });

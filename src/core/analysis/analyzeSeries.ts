@@ -119,6 +119,9 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
       const what = k.status === 'lower-bound' ? `k° is only a lower bound${k.lowerBoundCmPerS !== null ? ` (≥ ${k.lowerBoundCmPerS.toExponential(2)} cm/s)` : ''}` : 'k° cannot be told';
       out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: ${what}: ${k.reason ?? 'no file gave k°'}` });
     }
+    const s = c.surface;
+    if (s?.ksStatus === 'cannot-tell') out.push({ code: 'OHMIC_DROP', couple: c.index, message: `couple ${c.index} (film): k_s ${s.ksNote}` });
+    else if (s?.ohmicRuOhm != null && s.ksPerS !== null) out.push({ code: 'OHMIC_DROP', couple: c.index, message: `couple ${c.index} (film): ${s.ksNote}` });
     if (c.diffusion?.status === 'range-only') out.push({ code: 'NOT_DETERMINABLE', couple: c.index, message: `couple ${c.index}: ${c.diffusion.note ?? 'D cannot be told'}` });
     if (c.transferCoefficient?.note) out.push({ code: 'ELECTRON_COUNT', couple: c.index, message: `couple ${c.index}: ${c.transferCoefficient.note}` });
     const hint = c.regime === 'diffusion' ? suggestedElectronCount(c.points, o.electronCount, o.temperatureK) : null;

@@ -52,6 +52,9 @@ function seriesVerdict(first: Verdict, c: Omit<SeriesCouple, 'verdict'>, followU
     return { ...refined, category: 'inconclusive', label: 'not classified (ΔEp widens with v, but ohmic drop explains it as well as slow electron transfer)', reasons: [...refined.reasons, c.ohmic.text] };
   }
   if (c.regime !== 'surface' || c.kineticClass !== 'quasi-reversible' || refined.category !== 'adsorbed') return refined;
+  if (c.surface?.ksStatus === 'cannot-tell') {
+    return { ...refined, label: 'surface-confined (adsorbed; ΔEp widens with v — uncompensated resistance or slow electron transfer, cannot tell)', reasons: [...refined.reasons, regimeLine] };
+  }
   // The slowest file of a slow film looks Nernstian; the series shows the Laviron regime.
   return { ...refined, label: 'surface-confined (adsorbed; slow electron transfer, Laviron)', reasons: [...refined.reasons, regimeLine] };
 }

@@ -94,8 +94,16 @@ function describeSurface(c: Omit<SeriesCouple, 'verdict'>): string[] {
   if (s.coverageFromSlopeMolPerCm2 !== null) out.push(`Γ = ${sci(s.coverageFromSlopeMolPerCm2)} mol/cm² from the slope of ip against v (${s.coverageFromSlopeNote ?? ''})`);
   else if (s.coverageFromSlopeNote) out.push(`no Γ from the ip–v slope: ${s.coverageFromSlopeNote}`);
   if (s.lavironAlpha !== null) out.push(`Laviron αc = ${s.lavironAlpha.toFixed(3)} (cathodic transfer coefficient, from the Ep–log v lines of the files with n·ΔEp > 200 mV)`);
-  if (s.ksPerS !== null) out.push(`Laviron k_s = ${sci(s.ksPerS)} 1/s (files with n·ΔEp > 200 mV)`);
+  out.push(describeSurfaceRate(s));
   return out;
+}
+
+/** k_s in words, with its status. */
+function describeSurfaceRate(s: NonNullable<SeriesCouple['surface']>): string {
+  const range = s.ksRangePerS ? ` (range ${s.ksRangePerS.map((k) => sci(k)).join('–')} 1/s)` : '';
+  if (s.ksStatus === 'cannot-tell') return `k_s: ${s.ksNote}`;
+  if (s.ksStatus === 'lower-bound') return `k_s ≥ ${s.ksLowerBoundPerS === null ? '?' : sci(s.ksLowerBoundPerS)} 1/s only: ${s.ksNote}`;
+  return `Laviron k_s = ${sci(s.ksPerS!)} 1/s${s.ksStatus === 'estimate' ? ' (estimate)' : ''}${range}: ${s.ksNote}`;
 }
 
 /** First line: transport regime and kinetics in words; for a surface couple with the ΔEp evidence. */
@@ -105,6 +113,9 @@ function describeRegime(c: Omit<SeriesCouple, 'verdict'>, o: ResolvedSeriesOptio
   const first = pts[0];
   const last = pts[pts.length - 1];
   const n = o.electronCount;
+  if (c.kineticClass === 'quasi-reversible' && first && last && c.surface?.ksStatus === 'cannot-tell') {
+    return `surface, ΔEp widens with v — uncompensated resistance or slow electron transfer, cannot tell: n·ΔEp grows from ${mv(n * first.deltaEpV!)} at ${formatScanRate(first.scanRateVPerS)} to ${mv(n * last.deltaEpV!)} at ${formatScanRate(last.scanRateVPerS)}`;
+  }
   if (c.kineticClass === 'quasi-reversible' && first && last) {
     return `surface, slow electron transfer (Laviron): n·ΔEp grows from ${mv(n * first.deltaEpV!)} at ${formatScanRate(first.scanRateVPerS)} to ${mv(n * last.deltaEpV!)} at ${formatScanRate(last.scanRateVPerS)}`;
   }
@@ -117,7 +128,10 @@ export function describeHalfWave(c: Omit<SeriesCouple, 'verdict'>): string {
   if (c.eHalfV === null) return 'no E½: no file has both peaks of this couple (a lone peak gives Ep only)';
   if (c.followUp) return 'E½ is the peak midpoint (Epa + Epc)/2; the follow-up reaction moves the forward peak, so it is not E°′';
   if (c.regime === 'surface') {
-    return c.kineticClass === 'reversible' ? 'E½ ≈ E°′ of the film (Nernstian, ΔEp ≈ 0)' : 'E½ is the peak midpoint of a slow film, not E°′: the peaks move apart unequally unless αc = 0.5 (Laviron 1979)';
+    if (c.kineticClass === 'reversible') return 'E½ ≈ E°′ of the film (Nernstian, ΔEp ≈ 0)';
+    const s = c.surface;
+    const e0 = s?.formalPotentialV != null ? `; E°′ = ${s.formalPotentialV.toFixed(4)} V${s.formalPotentialRangeV ? ` (${s.formalPotentialRangeV.map((e) => e.toFixed(4)).join(' to ')} V)` : ''} from ${s.formalPotentialSource ?? ''}` : '';
+    return `E½ is the peak midpoint of a slow film, not E°′: the peaks move apart unequally unless αc = 0.5 (Laviron 1979)${e0}`;
   }
   if (c.kineticClass === 'reversible') return 'E½ = (Epa + Epc)/2 ≈ E°′ + (RT/2nF)·ln(D_R/D_O): E°′ when D_O = D_R';
   const k = c.rateConstant;

@@ -36,7 +36,7 @@ describe('Γ of a slow film from the ip–v slope', () => {
   it('mixed regimes (k_s = 10 1/s at 0.3, 1, 10 V/s): no slope Γ, and why', () => {
     const { couple } = analyseSimulatedSeries(film(0.5, 10), [0.3, 1, 10], cell, { noiseA: 1e-9 });
     expect(couple.surface?.coverageFromSlopeMolPerCm2).toBeNull();
-    expect(couple.surface?.coverageFromSlopeNote).toMatch(/mixes/);
+    expect(couple.surface?.coverageFromSlopeNote).toMatch(/mix regimes/);
     expect(Math.abs(couple.surface!.coverageFromChargeMolPerCm2! / 1e-10 - 1)).toBeLessThan(0.03);
   });
 });

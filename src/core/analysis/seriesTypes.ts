@@ -145,7 +145,7 @@ export interface SeriesRateConstant {
   formalPotentialRangeV?: [number, number] | null;
 }
 
-export interface SeriesSurface {
+export interface SeriesSurface extends SurfaceRate {
   coverageFromChargeMolPerCm2: number | null;
   /** Γ from the ip–v slope in the form the files' regime allows; null when they mix regimes. */
   coverageFromSlopeMolPerCm2: number | null;
@@ -159,11 +159,38 @@ export interface SeriesSurface {
   coverageFromSlopeNote?: string;
   /** |ip| (A) of the forward peak against v (V/s), all files. */
   fit: FitLineResult | null;
-  /** Laviron k_s, median over files with n·ΔEp > 200 mV (1/s). */
-  ksPerS: number | null;
-  ksPerFile: Array<{ fileIndex: number; ksPerS: number | null }>;
-  /** αc from the Laviron Ep–log v slopes (files with n·ΔEp > 200 mV), when both peaks move apart. */
+  /** αc from the Laviron Ep–log v slopes (files with n·ΔEp > 200 mV), when both peaks move apart and the two slopes agree with one αc and n. */
   lavironAlpha: number | null;
+  /** n implied by Laviron's two lines, (2.303RT/F)(1/|s_c| + 1/s_a); null without both lines. Added later, hence optional. */
+  lavironApparentElectronCount?: number | null;
+}
+
+/** k_s of a film with its status and range, E°′ from Laviron's working curve (seriesSurfaceRate.ts). */
+export interface SurfaceRate {
+  /** Median k_s over the files with n·ΔEp ≥ 5 mV at the headline αc (1/s); null unless status is 'value' or 'estimate'. */
+  ksPerS: number | null;
+  /**
+   * 'value' (αc given or from Laviron's lines, two files or more); 'estimate' (αc assumed, or one
+   * file: read with ksRangePerS); 'lower-bound' (ksLowerBoundPerS); 'cannot-tell' (ksNote says why:
+   * Laviron's lines inconsistent, the two Γ disagree, or ΔEp grows ∝ v as an uncompensated Ru's does).
+   */
+  ksStatus: 'value' | 'estimate' | 'lower-bound' | 'cannot-tell';
+  /** k_s of every file at every αc used (1/s). */
+  ksRangePerS: [number, number] | null;
+  ksLowerBoundPerS: number | null;
+  /** How k_s was had: files, αc and its origin, or why it is only a bound or cannot be told. */
+  ksNote: string;
+  /** Files behind the median. */
+  ksFileCount: number;
+  ksAlphaSource: 'given' | 'laviron' | 'assumed';
+  /** Per file: k_s at the headline αc, and over the αc used. */
+  ksPerFile: Array<{ fileIndex: number; ksPerS: number | null; rangePerS: [number, number] | null }>;
+  /** Ru (Ω) that would explain the widening as ohmic drop on a Nernstian film (filmOhmicSeparation.ts); null when it does not. */
+  ohmicRuOhm: number | null;
+  /** E°′ from both peaks on Laviron's working curve (V), median over files; with its range over files and αc. */
+  formalPotentialV: number | null;
+  formalPotentialRangeV: [number, number] | null;
+  formalPotentialSource: string | null;
 }
 
 export interface SeriesCouple {
@@ -207,7 +234,7 @@ export interface SeriesCouple {
 
 export type SeriesWarningCode =
   | 'SINGLE_SCAN_RATE' | 'NO_AREA' | 'NO_CONCENTRATION' | 'UNMATCHED_COUPLE' | 'NOT_DETERMINABLE'
-  | 'NONLINEAR' | 'DUPLICATE_SCAN_RATE' | 'MISSING_CYCLE' | 'ELECTRON_COUNT';
+  | 'NONLINEAR' | 'DUPLICATE_SCAN_RATE' | 'MISSING_CYCLE' | 'ELECTRON_COUNT' | 'OHMIC_DROP';
 
 export interface SeriesWarning {
   code: SeriesWarningCode;
