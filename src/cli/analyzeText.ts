@@ -35,6 +35,15 @@ function dText(c: SeriesCouple): string {
   return d.status === 'range-only' ? `cannot tell, in${rangeText(d.rangeCm2PerS)}` : `${e(d.diffusionCm2PerS)}${rangeText(d.rangeCm2PerS)}`;
 }
 
+/** k_s of a film with its range, or "≥ bound", or "cannot tell (uncompensated resistance?)". */
+function ksText(c: SeriesCouple): string {
+  const s = c.surface;
+  if (!s) return '—';
+  if (s.ksStatus === 'cannot-tell') return `cannot tell — uncompensated resistance?${s.ohmicRuOhm !== null ? ` (Ru ≈ ${s.ohmicRuOhm} Ω)` : ''}`;
+  if (s.ksStatus === 'lower-bound') return s.ksLowerBoundPerS === null ? '—' : `≥ ${e(s.ksLowerBoundPerS)}`;
+  return `${e(s.ksPerS)}${rangeText(s.ksRangePerS)}${s.ksStatus === 'estimate' ? ' (estimate)' : ''}`;
+}
+
 /** k° with its range over αc, or "≥ bound", or "cannot tell". */
 function k0Text(c: SeriesCouple): string {
   const k = c.rateConstant;
@@ -51,7 +60,7 @@ function seriesLines(c: SeriesCouple): string[] {
   const out = [`couple ${c.index}: ${half} over ${c.points.length} file(s); ${c.verdict.label}`];
   const surfaceFit = c.regime === 'surface' ? (c.surface?.fit ?? null) : null;
   if (surfaceFit) {
-    out.push(`  |ip| vs v: slope ${e(surfaceFit.slope)} A·s/V, intercept ${e(surfaceFit.intercept)} A, R² ${f(surfaceFit.r2, 5)}   k_s = ${e(c.surface?.ksPerS)} 1/s`);
+    out.push(`  |ip| vs v: slope ${e(surfaceFit.slope)} A·s/V, intercept ${e(surfaceFit.intercept)} A, R² ${f(surfaceFit.r2, 5)}   k_s = ${ksText(c)} 1/s`);
   } else if (fit) {
     const ci = fit.slopeInterval ? ` (95 % CI ${e(fit.slopeInterval[0])} to ${e(fit.slopeInterval[1])})` : '';
     out.push(`  |ip| vs v^½: slope ${e(fit.slope)} A·(V/s)^-½${ci}, intercept ${e(fit.intercept)} A, R² ${f(fit.r2, 5)}`);

@@ -118,7 +118,7 @@ const SERIES_COLUMNS = ['series', 'couple', 'E_half_V', 'E_half_meaning', 'files
   'alpha_c_cathodic', 'alpha_c_source', 'alpha_c_range_low', 'alpha_c_range_high', 'alpha_n_forward_wave', 'log_log_slope', 'log_log_reading',
   'Epa_shift_V_per_decade', 'Epc_shift_V_per_decade', 'k0_cm_per_s', 'k0_status', 'k0_range_low', 'k0_range_high', 'k0_lower_bound_cm_per_s', 'k0_reason',
   'E0_V', 'D_used_for_k0_cm2_per_s', 'ohmic_explaining_Ru_ohm', 'kf_per_s', 'kf_lower_bound_per_s', 'gamma_from_charge_mol_per_cm2',
-  'gamma_from_slope_mol_per_cm2', 'gamma_from_slope_form', 'laviron_alpha_c', 'ks_per_s', 'electroactive_area_cm2', 'anodic_slope_A_s05_V05', 'anodic_r2',
+  'gamma_from_slope_mol_per_cm2', 'gamma_from_slope_form', 'laviron_alpha_c', 'ks_per_s', 'ks_status', 'ks_range_low_per_s', 'ks_range_high_per_s', 'ks_lower_bound_per_s', 'ks_note', 'ohmic_Ru_film_ohm', 'E0_film_V', 'E0_film_range_low_V', 'E0_film_range_high_V', 'electroactive_area_cm2', 'anodic_slope_A_s05_V05', 'anodic_r2',
   'cathodic_slope_A_s05_V05', 'cathodic_r2', 'diagnostics'];
 
 function seriesRow(key: string, c: SeriesCouple): Cell[] {
@@ -134,7 +134,8 @@ function seriesRow(key: string, c: SeriesCouple): Cell[] {
     c.peakShift.anodic?.slopeVPerDecade, c.peakShift.cathodic?.slopeVPerDecade, k?.k0CmPerS, k?.status, k?.rangeCmPerS?.[0], k?.rangeCmPerS?.[1],
     k?.lowerBoundCmPerS, k?.reason, k?.formalPotentialV, k?.diffusionOxCm2PerS, c.ohmic?.explainingRuOhm, c.followUp?.rateConstantPerS,
     c.followUp?.lowerBoundPerS, c.surface?.coverageFromChargeMolPerCm2, c.surface?.coverageFromSlopeMolPerCm2, c.surface?.coverageFromSlopeForm,
-    c.surface?.lavironAlpha, c.surface?.ksPerS, c.electroactiveAreaCm2, c.anodicFit?.slope, c.anodicFit?.r2,
+    c.surface?.lavironAlpha, c.surface?.ksPerS, c.surface?.ksStatus, c.surface?.ksRangePerS?.[0], c.surface?.ksRangePerS?.[1], c.surface?.ksLowerBoundPerS, c.surface?.ksNote,
+    c.surface?.ohmicRuOhm, c.surface?.formalPotentialV, c.surface?.formalPotentialRangeV?.[0], c.surface?.formalPotentialRangeV?.[1], c.electroactiveAreaCm2, c.anodicFit?.slope, c.anodicFit?.r2,
     c.cathodicFit?.slope, c.cathodicFit?.r2, c.diagnostics.join('; ')];
 }
 

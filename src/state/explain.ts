@@ -95,14 +95,14 @@ function coverage(s: RunSeriesResult, c: SeriesCouple): Explanation | null {
 }
 
 function surfaceRate(s: RunSeriesResult, c: SeriesCouple): Explanation | null {
-  const ks = c.surface?.ksPerS;
-  if (ks === null || ks === undefined) return null;
-  const used = c.surface?.ksPerFile.filter((f) => f.ksPerS !== null).length ?? 0;
+  const f = c.surface;
+  if (!f || f.ksPerS === null) return null;
   return {
     key: 'ks', name: 'k_s',
-    formula: 'log k_s = α log(1−α) + (1−α) log α − log(RT/nFv) − α(1−α)nFΔEp/(2.303RT), for n·ΔEp > 200 mV; median over the files',
+    formula: "m = (RT/nF)·k_s/v from each file's n·ΔEp on Laviron's general working curve (integrated; for n·ΔEp > 200 mV it is log k_s = α log(1−α) + (1−α) log α − log(RT/nFv) − α(1−α)nFΔEp/(2.303RT)); median over the files",
     source: 'Laviron, J. Electroanal. Chem. 101, 19 (1979)',
-    inputs: [['files with n·ΔEp > 200 mV', String(used)], ['α', g(c.surface?.lavironAlpha ?? s.cell.alpha ?? 0.5, 3)], ...cellInputs(s, ['n', 'T'])], note: null,
+    inputs: [['files with n·ΔEp ≥ 5 mV', String(f.ksFileCount)], ['αc', f.ksAlphaSource === 'assumed' ? '0.5 assumed (range over 0.3–0.7)' : g(f.lavironAlpha ?? s.cell.alpha ?? 0.5, 3)], ...cellInputs(s, ['n', 'T'])],
+    note: f.ksStatus === 'value' ? null : f.ksNote,
   };
 }
 
