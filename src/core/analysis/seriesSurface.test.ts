@@ -32,6 +32,14 @@ describe('Γ of a slow film from the ip–v slope', () => {
     expect(couple.diagnostics.join(' ')).toMatch(/Laviron αc = 0\.\d+ \(cathodic transfer coefficient/);
   });
 
+  // Laviron 1979 (from memory): an irreversible oxidation peak has ψ = (1 − αc)/e, above the Nernstian
+  // 1/4 when 1 − αc > 0.68; such files must not pass for Nernstian ones by their peak height.
+  it('oxidation first, αc = 0.3, k_s = 10 1/s, 2–50 V/s: no Nernstian slope Γ, the irreversible one within 3 %', () => {
+    const { couple } = analyseSimulatedSeries({ ...film(0.3, 10), startV: -0.8, switchV: 1.0, areaCm2: 0.0707 }, [2, 5, 20, 50], cell, { noiseA: 1e-9 });
+    expect(couple.surface?.coverageFromSlopeForm).toBe('laviron-irreversible');
+    expect(Math.abs(couple.surface!.coverageFromSlopeMolPerCm2! / 1e-10 - 1)).toBeLessThan(0.03);
+  });
+
   // A series with one Nernstian and one slow file: neither form holds for the slope, so no slope Γ.
   it('mixed regimes (k_s = 10 1/s at 0.3, 1, 10 V/s): no slope Γ, and why', () => {
     const { couple } = analyseSimulatedSeries(film(0.5, 10), [0.3, 1, 10], cell, { noiseA: 1e-9 });

@@ -7,7 +7,7 @@
  *   and E°′ from his general working curve (seriesSurfaceRate.ts).
  * Γ reported: the charge's (kinetics do not change Q = nFAΓ); the slope's is a check beside it.
  * Choice of the slope form (ours): over the files whose forward peak lies within 1 % of the
- *   Nernstian n²F²AΓv/(4RT) on Laviron's working curve at every αc tried (NERNSTIAN_PEAK_TOLERANCE;
+ *   Nernstian n²F²AΓv/(4RT) on Laviron's working curve at αc = 0.5 and every αc tried (NERNSTIAN_PEAK_TOLERANCE;
  *   files with n·ΔEp < 5 mV count as Nernstian) when two scan rates or more are there; else over
  *   the files with n·ΔEp > 200 mV (irreversible limit), with αc given, else Laviron's α, else 0.5
  *   with the range over αc 0.3–0.7; else no slope Γ, and the charge stands alone.
@@ -31,12 +31,13 @@ export const NERNSTIAN_PEAK_TOLERANCE = 0.99;
 
 const distinctRates = (points: SeriesPoint[]) => new Set(points.map((p) => p.scanRateVPerS)).size;
 
-/** Files whose forward peak is Nernstian within 1 % at every αc read (below 5 mV: not read, Nernstian). */
+/** Files whose forward peak is Nernstian within 1 % at αc = 0.5 and at every αc read (below 5 mV: not read, Nernstian). */
 function nernstianFiles(points: SeriesPoint[], rows: SurfaceFileReading[]): SeriesPoint[] {
   return points.filter((p) => {
     if (p.deltaEpV === null) return false;
     const r = rows.find((x) => x.fileIndex === p.fileIndex);
-    return !r || r.atAlpha.every((a) => a !== null && a.forwardPeakRatio >= NERNSTIAN_PEAK_TOLERANCE);
+    const near = (x: number | null | undefined) => x != null && Math.abs(x - 1) <= 1 - NERNSTIAN_PEAK_TOLERANCE;
+    return !r || (near(r.midAlphaPeakRatio) && r.atAlpha.every((a) => near(a?.forwardPeakRatio)));
   });
 }
 

@@ -27,6 +27,11 @@ export interface SurfaceFileReading {
   deltaEpV: number;
   /** Per αc of the set, in its order; null where the curve does not reach the ΔEp. */
   atAlpha: Array<{ alphaC: number; ksPerS: number; formalPotentialV: number | null; forwardPeakRatio: number } | null>;
+  /**
+   * Forward ip over the Nernstian one at αc = 0.5, where it falls steadily with ΔEp (at a forward
+   * α above 0.68 the irreversible ψ = α/e exceeds 1/4, so the ratio alone does not bound ΔEp).
+   */
+  midAlphaPeakRatio: number | null;
   /** Ru (Ω) a Nernstian film would need for this ΔEp; null without a charge or beyond the table. */
   ohmicRuOhm: number | null;
 }
@@ -50,6 +55,9 @@ export function readSurfaceFiles(points: SeriesPoint[], alphas: readonly number[
     if (p.deltaEpV === null || o.electronCount * p.deltaEpV < KS_MIN_N_DELTA_EP_V) return [];
     const q = p.forwardChargeC ?? p.anodicChargeC ?? p.cathodicChargeC;
     const ru = q !== null && q !== 0 ? filmResistanceFromSeparation({ deltaEpV: p.deltaEpV, chargeC: q, scanRateVPerS: p.scanRateVPerS, electronCount: o.electronCount, temperatureK: o.temperatureK }) : null;
-    return [{ fileIndex: p.fileIndex, scanRateVPerS: p.scanRateVPerS, deltaEpV: p.deltaEpV, atAlpha: alphas.map((a) => atAlpha(p, a, o, forward)), ohmicRuOhm: ru }];
+    const at = alphas.map((a) => atAlpha(p, a, o, forward));
+    const j = alphas.indexOf(0.5);
+    const mid = j >= 0 ? at[j] ?? null : atAlpha(p, 0.5, o, forward);
+    return [{ fileIndex: p.fileIndex, scanRateVPerS: p.scanRateVPerS, deltaEpV: p.deltaEpV, atAlpha: at, midAlphaPeakRatio: mid?.forwardPeakRatio ?? null, ohmicRuOhm: ru }];
   });
 }
