@@ -40,8 +40,8 @@ function ksText(c: SeriesCouple): string {
   const s = c.surface;
   if (!s) return '—';
   if (s.ksStatus === 'cannot-tell') return `cannot tell — uncompensated resistance?${s.ohmicRuOhm !== null ? ` (Ru ≈ ${s.ohmicRuOhm} Ω)` : ''}`;
-  if (s.ksStatus === 'lower-bound') return s.ksLowerBoundPerS === null ? '—' : `≥ ${e(s.ksLowerBoundPerS)}`;
-  return `${e(s.ksPerS)}${rangeText(s.ksRangePerS)}${s.ksStatus === 'estimate' ? ' (estimate)' : ''}`;
+  if (s.ksStatus === 'lower-bound') return s.ksLowerBoundPerS === null ? '—' : `≥ ${e(s.ksLowerBoundPerS)} 1/s`;
+  return `${e(s.ksPerS)}${rangeText(s.ksRangePerS)} 1/s${s.ksStatus === 'estimate' ? ' (estimate)' : ''}`;
 }
 
 /** k° with its range over αc, or "≥ bound", or "cannot tell". */
@@ -60,7 +60,7 @@ function seriesLines(c: SeriesCouple): string[] {
   const out = [`couple ${c.index}: ${half} over ${c.points.length} file(s); ${c.verdict.label}`];
   const surfaceFit = c.regime === 'surface' ? (c.surface?.fit ?? null) : null;
   if (surfaceFit) {
-    out.push(`  |ip| vs v: slope ${e(surfaceFit.slope)} A·s/V, intercept ${e(surfaceFit.intercept)} A, R² ${f(surfaceFit.r2, 5)}   k_s = ${ksText(c)} 1/s`);
+    out.push(`  |ip| vs v: slope ${e(surfaceFit.slope)} A·s/V, intercept ${e(surfaceFit.intercept)} A, R² ${f(surfaceFit.r2, 5)}   k_s = ${ksText(c)}`);
   } else if (fit) {
     const ci = fit.slopeInterval ? ` (95 % CI ${e(fit.slopeInterval[0])} to ${e(fit.slopeInterval[1])})` : '';
     out.push(`  |ip| vs v^½: slope ${e(fit.slope)} A·(V/s)^-½${ci}, intercept ${e(fit.intercept)} A, R² ${f(fit.r2, 5)}`);
