@@ -1,6 +1,7 @@
 /** The readable `analyze` report (no --json): a couple table per file and cycle, then the series. */
 import type { AnalyzeRunResult } from '../core/analysis/runTypes';
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
+import { describeCapacitance } from '../core/series';
 import { formatFixed } from '../core/units';
 
 const f = (x: number | null | undefined, digits: number, scale = 1) =>
@@ -79,7 +80,7 @@ export function analyzeText(r: AnalyzeRunResult): string {
     parts.push('', `Series "${s.key}" (${s.fileNames.length} file${s.fileNames.length === 1 ? '' : 's'}):`);
     if (!s.analysis.couples.length) parts.push('  no couples found');
     for (const c of s.analysis.couples) parts.push(...seriesLines(c));
-    if (s.capacitance) parts.push(`  double-layer capacitance: ${s.capacitance.model === 'single-rate' ? '≤ ' : ''}${f(s.capacitance.capacitanceFPerCm2, 2, 1e6)} µF/cm²`);
+    if (s.capacitance) parts.push(`  double-layer capacitance Cd ${describeCapacitance(s.capacitance)}`);
   }
   // What the importer could only guess or doubt (each message names its file); --inspect has the rest.
   const read = r.files.flatMap((file) => file.provenance.importWarnings ?? []);

@@ -155,10 +155,10 @@ export function resultsSheetCsv(result: AnalyzeRunResult, meta: ResultsSheetMeta
   if (noted.length > 1) parts.push(['# table: left-out points and window edges', ...noted]);
   const withCd = result.series.filter((s) => s.capacitance);
   if (withCd.length) {
-    parts.push(['# table: raw double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'Cd_ci95_low', 'Cd_ci95_high', 'model', 'faradaic_tail_A_per_sqrt_V_per_s', 'line_intercept_A', 'line_r2', 'warning']),
+    parts.push(['# table: raw double-layer capacitance', row(['series', 'Cd_F_per_cm2', 'Cd_status', 'Cd_upper_bound_F_per_cm2', 'Cd_ci95_low', 'Cd_ci95_high', 'model', 'faradaic_tail_A_per_sqrt_V_per_s', 'line_intercept_A', 'line_r2', 'warning']),
       ...withCd.map((s) => {
         const c = s.capacitance;
-        return row([s.key, c?.capacitanceFPerCm2, c?.capacitanceIntervalFPerCm2?.[0], c?.capacitanceIntervalFPerCm2?.[1], c?.model, c?.faradaicTailAPerSqrtVPerS, c?.fit?.intercept, c?.fit?.r2, c?.warning]);
+        return row([s.key, c?.capacitanceFPerCm2, c?.status, c?.upperBoundFPerCm2, c?.capacitanceIntervalFPerCm2?.[0], c?.capacitanceIntervalFPerCm2?.[1], c?.model, c?.faradaicTailAPerSqrtVPerS, c?.fit?.intercept, c?.fit?.r2, c?.warning]);
       })]);
   }
   if (fits.length) parts.push(...rawFitTables(fits).map((t) => [`# table: ${t.name}`, ...t.rows.map(row)]));

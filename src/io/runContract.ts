@@ -163,7 +163,7 @@ export function runContract(r: AnalyzeRunResult, givenAs: string[] = [], fits: r
 function capacitanceOf(s: RunSeriesResult | undefined) {
   const c = s?.capacitance;
   return c ? {
-    Cd: c.capacitanceFPerCm2, pointwise: c.pointCapacitancesFPerCm2, CdCI95: c.capacitanceIntervalFPerCm2, model: c.model,
+    Cd: c.capacitanceFPerCm2, CdStatus: c.status, CdUpperBound: c.upperBoundFPerCm2, pointwise: c.pointCapacitancesFPerCm2, CdCI95: c.capacitanceIntervalFPerCm2, model: c.model,
     faradaicTail: c.faradaicTailAPerSqrtVPerS, warning: c.warning,
   } : null;
 }

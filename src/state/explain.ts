@@ -6,6 +6,7 @@
  */
 import type { RunSeriesResult } from '../core/analysis/runTypes';
 import type { SeriesCouple } from '../core/analysis/seriesTypes';
+import { describeCapacitance } from '../core/series/doubleLayerCapacitance';
 
 export type ExplainedKey = 'D' | 'k0' | 'alpha' | 'gamma' | 'ks' | 'kf' | 'Cd';
 
@@ -117,15 +118,21 @@ function followUp(s: RunSeriesResult, c: SeriesCouple): Explanation | null {
   };
 }
 
+/** Cd in words ("= value (95 % …)", "≤ bound", "not determined"), for the series view. */
+export function capacitanceText(cd: NonNullable<RunSeriesResult['capacitance']>): string {
+  return describeCapacitance(cd);
+}
+
 /** The explanation of the series' double-layer capacitance, when it was measured. */
 export function explainCapacitance(s: RunSeriesResult): Explanation | null {
   const cd = s.capacitance;
   if (!cd) return null;
+  const model = cd.model === 'charging+tail' ? 'gap/2 = A·Cd·v + c·v^½ over the scan rates (the v^½ term a diffusing couple\'s tail)' : cd.model === 'charging' ? 'gap/2 = A·Cd·v over two scan rates' : 'Cd ≤ gap/(2Av) at one scan rate';
   return {
     key: 'Cd', name: 'Cd',
-    formula: 'forward − reverse current gap = 2·A·Cd·v, so Cd = slope/(2A) of the half-gap against v',
-    source: 'Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), §1.2',
-    inputs: [['slope of gap/2 against v', cd.fit ? `${e(cd.fit.slope)} A (V/s)^-1, R² ${g(cd.fit.r2, 4)}` : 'one scan rate'], ...cellInputs(s, ['A'])], note: null,
+    formula: `forward − reverse current gap = 2·A·Cd·v, each gap the median over ± 10 mV, less a Nernstian film's own current; ${model}`,
+    source: 'Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001), §1.2 and §6.2; film: Laviron, J. Electroanal. Chem. 52 (1974) 355',
+    inputs: [['status', cd.status], ['slope of gap/2 against v', cd.fit ? `${e(cd.fit.slope)} A (V/s)^-1, R² ${g(cd.fit.r2, 4)}` : 'one scan rate'], ...cellInputs(s, ['A'])], note: cd.warning,
   };
 }
 

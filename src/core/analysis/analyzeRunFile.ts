@@ -10,11 +10,13 @@ import { hampelSpikes } from '../peaks/hampelSpikes';
 import type { BaselineSpec } from '../baseline/baselineTypes';
 import { AnalysisError } from '../errors';
 import { subtractBlank } from '../background';
-import { chargingCurrentGap } from '../series';
+import { chargingGapWindow } from '../series';
+import type { ChargingGapWindow } from '../series';
 import type { Voltammogram } from '../types';
 import { analyzeResolvedVoltammogram, type TraceOptions } from './analyzeVoltammogram';
 import type { ResolvedRunFile } from './resolveRun';
 import type { FileReference, ResolvedCell, ResolvedMethod, RunFileResult, RunWarning } from './runTypes';
+import { CAPACITANCE_WINDOW_HALF_WIDTH_V } from './seriesCapacitance';
 
 function shiftSpec(b: BaselineSpec, offsetV: number): BaselineSpec {
   const out: BaselineSpec = { ...b, fromV: b.fromV + offsetV, toV: b.toV + offsetV };
@@ -110,9 +112,11 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
   }
   const warnings = [...blankWarnings, ...traceWarnings(file, analysis, ruOhm)];
   let chargingGapA: number | null = null;
+  let chargingGapWindowRead: ChargingGapWindow | null = null;
   if (cell.capacitancePotentialV !== null) {
     try {
-      chargingGapA = chargingCurrentGap(analysed, cell.capacitancePotentialV, method.seriesCycle);
+      chargingGapWindowRead = chargingGapWindow(analysed, cell.capacitancePotentialV, method.seriesCycle, CAPACITANCE_WINDOW_HALF_WIDTH_V);
+      chargingGapA = chargingGapWindowRead.gapA[0]!;
     } catch (err) {
       if (!(err instanceof AnalysisError)) throw err;
       warnings.push({ code: 'CAPACITANCE', fileName, message: err.message });
@@ -120,6 +124,6 @@ export function analyzeRunFile(file: ResolvedRunFile, cell: ResolvedCell, method
   }
   return {
     fileName, series: file.series, role: file.role, scanRateVPerS: file.scanRateVPerS, scanRateSource: file.scanRateSource,
-    reference, analysis, analysedPotentialV: potentialV, chargingGapA, provenance: file.input.provenance ?? {}, pointCount: v.potentialV.length, currentKind: v.currentKind ?? 'current', blank, warnings,
+    reference, analysis, analysedPotentialV: potentialV, chargingGapA, chargingGapWindow: chargingGapWindowRead, provenance: file.input.provenance ?? {}, pointCount: v.potentialV.length, currentKind: v.currentKind ?? 'current', blank, warnings,
   };
 }

@@ -1,33 +1,19 @@
 /**
  * One scan-rate series of an analysis run, over its files' results: the series analysis
  * (analyzeSeries.ts) with the series' cell, the double-layer capacitance from the charging gaps
- * when a featureless potential was given, and the basis of the reference scales used.
+ * when a featureless potential was given (seriesCapacitance.ts), and the basis of the reference scales used.
  * Sources are named in the methods called (series/doubleLayerCapacitance.ts, analyzeSeries.ts).
  */
 import { AnalysisError } from '../errors';
-import { combinedDiffusionInterval, doubleLayerCapacitance } from '../series';
-import type { DoubleLayerCapacitanceResult } from '../series';
+import { combinedDiffusionInterval } from '../series';
 import type { ReferenceId } from '../reference';
 import type { CurrentKind } from '../types';
 import { analyzeResolvedSeries } from './analyzeSeries';
 import { defaultsUsed } from './defaultsUsed';
 import { describeSeriesReferences } from './runReference';
+import { seriesCapacitance } from './seriesCapacitance';
 import type { ResolvedCell, ResolvedMethod, RunFileResult, RunSeriesResult, RunWarning } from './runTypes';
 import type { SeriesAnalysis } from './seriesTypes';
-
-function capacitanceOf(files: RunFileResult[], cell: Pick<ResolvedCell, 'capacitancePotentialV' | 'areaCm2'>, warnings: RunWarning[], key: string): DoubleLayerCapacitanceResult | null {
-  const gaps = files.filter((f) => f.chargingGapA !== null);
-  if (cell.capacitancePotentialV === null || !gaps.length) return null;
-  if (cell.areaCm2 === null) {
-    warnings.push({ code: 'CAPACITANCE', series: key, message: 'double-layer capacitance needs the electrode area' });
-    return null;
-  }
-  const result = doubleLayerCapacitance({
-    scanRatesVPerS: gaps.map((f) => f.scanRateVPerS), gapCurrentsA: gaps.map((f) => Math.max(0, f.chargingGapA as number)), areaCm2: cell.areaCm2,
-  });
-  if (result.warning) warnings.push({ code: 'CAPACITANCE', series: key, message: `double-layer capacitance: ${result.warning}` });
-  return result;
-}
 
 /** D's interval with the stated uncertainty of A and C (GUM; combinedDiffusionInterval.ts), on each couple that has D. */
 function withCombinedIntervals(analysis: SeriesAnalysis, cell: Pick<ResolvedCell, 'areaRelativeUncertainty' | 'concentrationRelativeUncertainty'>): void {
@@ -103,7 +89,7 @@ export function analyzeRunSeries(key: string, given: ResolvedCell, method: Resol
   const warnings: RunWarning[] = [...early, ...analysis.warnings.map((w) => ({ code: 'SERIES' as const, series: key, message: w.message }))];
   const refs = describeSeriesReferences(members, output, cell.temperatureK);
   warnings.push(...refs.warnings.map((w) => ({ ...w, series: key })));
-  const capacitance = capacitanceOf(members, cell, warnings, key);
+  const capacitance = seriesCapacitance(members, cell, analysis, warnings, key);
   const defaults = defaultsUsed(key, cell, analysis);
   warnings.push(...defaults.warnings);
   return { key, fileNames: members.map((f) => f.fileName), cell: given, currentKind: perArea.kind, analysis, capacitance, referenceBasis: refs.basis, defaultsUsed: defaults.used, warnings };

@@ -9,7 +9,7 @@
 import type { BaselineMethod, BaselineSpec } from '../baseline/baselineTypes';
 import type { PeakWindow } from '../peaks/peakTypes';
 import type { ReferenceId } from '../reference';
-import type { DoubleLayerCapacitanceResult } from '../series';
+import type { ChargingGapWindow, DoubleLayerCapacitanceResult } from '../series';
 import type { SmoothingSetting } from '../smoothing/smoothingTypes';
 import type { CurrentConvention, CurrentKind, ScanRateSource, Voltammogram } from '../types';
 import type { SeriesAnalysis } from './seriesTypes';
@@ -250,6 +250,8 @@ export interface RunFileResult {
   analysedPotentialV: Float64Array | null;
   /** Forward − reverse current at the cell's capacitance potential (A), when asked for. */
   chargingGapA: number | null;
+  /** The gaps over ± 10 mV of that potential (chargingGapWindow), when asked for. */
+  chargingGapWindow: ChargingGapWindow | null;
   provenance: FileProvenance;
   pointCount: number;
   /** 'density' when the file's currents are A/cm² (no area known): its currents, D and Γ are per cm². */

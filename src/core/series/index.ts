@@ -6,6 +6,8 @@ export * from './peakPotentialVsLogScanRate';
 export * from './electroactiveAreaFromStandard';
 export * from './doubleLayerCapacitance';
 export * from './chargingCurrentGap';
+export * from './windowMedianGap';
+export * from './surfaceWaveCurrent';
 export * from './classifySeriesCouple';
 export type * from './seriesPoint';
 export * from './combinedDiffusionInterval';

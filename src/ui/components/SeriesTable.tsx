@@ -1,7 +1,7 @@
 /** Numbers of each series couple: fits with 95 % intervals, D, log–log reading, k°, Γ, k_s, k_f, Cd, verdict; each derived number explains itself. */
 import type { ReactNode } from 'react';
 import type { FitLineResult } from '../../core/regression/fitLine';
-import { explainCapacitance, explainCouple } from '../../state/explain';
+import { capacitanceText, explainCapacitance, explainCouple } from '../../state/explain';
 import type { RunSeriesResult, SeriesCouple } from '../../state/types';
 import { DASH, fixed, sci, sig } from '../format';
 import { Explained } from './Explained';
@@ -57,7 +57,7 @@ export function SeriesTable({ result }: { result: RunSeriesResult }) {
         </table>
       ))}
       {result.capacitance ? (
-        <p data-testid="series-cd">Double-layer capacitance Cd {result.capacitance.model === 'single-rate' ? '≤' : '='} <Explained explanation={cd ?? undefined}>{sci(result.capacitance.capacitanceFPerCm2 * 1e6, 3)} µF/cm²</Explained></p>
+        <p data-testid="series-cd">Double-layer capacitance Cd <Explained explanation={cd ?? undefined}>{capacitanceText(result.capacitance)}</Explained></p>
       ) : null}
       {result.analysis.warnings.length > 0 ? <ul className="notes">{result.analysis.warnings.map((w) => <li key={w.message}>{w.message}</li>)}</ul> : null}
     </div>
