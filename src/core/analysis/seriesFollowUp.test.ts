@@ -51,3 +51,32 @@ describe('a fast follow-up reaction in or near the kinetic zone', () => {
     expect(couple.diffusion!.rangeCm2PerS![0] / 1e-5).toBeGreaterThan(0.9);
   });
 });
+
+describe('a slow follow-up reaction and the pure kinetic zone (audit cases, our own scenarios)', () => {
+  // Nicholson & Shain 1964: at λ ≈ 0.01 the ratio is about 0.9 and rises towards 1 with v. The ratio
+  // lies 3 uncertainties below 1 at the slowest rate: named, with k_f from the working curve.
+  it('k_f = 0.02 1/s over 0.05–5 V/s: chemically coupled, k_f within its interval, not "reversible"', () => {
+    const { couple } = analyseSimulatedSeries({ ...ec(0.02), switchV: -0.25, startV: 0.3 }, [0.05, 0.2, 1, 5], cell, { noiseA: 5e-9 });
+    const ratios = couple.points.map((p) => p.nicholsonRatio!);
+    expect(Math.min(...ratios)).toBeGreaterThan(0.85);
+    expect(Math.min(...ratios)).toBeLessThan(0.94);
+    expect(couple.verdict.category).toBe('chemically-coupled');
+    expect(couple.followUp?.evidence.join(' ')).toMatch(/measurably below 1/);
+    expect(inRange(couple.followUp?.rangePerS, 0.02)).toBe(true);
+  });
+  // No reaction (k_f → 0): the ratios stay near 1 and nothing is named.
+  it('a reversible couple without chemistry stays reversible', () => {
+    const { couple } = analyseSimulatedSeries({ mechanism: 'E' as const, k0CmPerS: 1, startV: 0.3, switchV: -0.25, stepV: 0.001, doubleLayerFPerCm2: 2e-5 }, [0.05, 0.2, 1, 5], cell, { noiseA: 5e-9 });
+    expect(couple.followUp).toBeNull();
+    expect(couple.verdict.category).toBe('reversible');
+  });
+  // Pure kinetic zone (λ 10–1000): the zone agrees with the evidence, and the bound from the fastest
+  // file's width (followUpPeakWidth.ts) is far tighter than λ > 0.2 and still below the truth.
+  it('k_f = 2000 1/s over 0.05–5 V/s: zone "kinetic", k_f > several hundred 1/s, below 2000', () => {
+    const { couple } = analyseSimulatedSeries(ec(2000), [0.05, 0.2, 1, 5], cell, { noiseA: 5e-9 });
+    expect(couple.followUp?.zone).toBe('kinetic');
+    expect(couple.followUp!.lowerBoundPerS!).toBeGreaterThan(300);
+    expect(couple.followUp!.lowerBoundPerS!).toBeLessThan(2000);
+    expect(couple.followUp?.evidence.join(' ')).toMatch(/working curve of width/);
+  });
+});

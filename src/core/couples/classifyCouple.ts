@@ -100,7 +100,9 @@ function classifyFromNumbers(input: ClassifyCoupleInput, options: ClassifyCouple
     if (input.returnSweepRecorded === false) {
       return verdict('inconclusive', [`no ${missing} peak can be looked for: the sweep was never reversed`], 'not classified (no return sweep recorded)');
     }
-    return verdict('irreversible', [`no ${missing} partner peak was found for this wave`], 'irreversible (no return peak)');
+    // One trace cannot tell slow electron transfer from a fast one whose product a fast reaction
+    // consumes (EC, Nicholson & Shain, Anal. Chem. 36 (1964) 706): both lose the return peak.
+    return verdict('irreversible', [`no ${missing} partner peak was found for this wave: either slow electron transfer, or a fast one whose product a fast follow-up reaction consumes (EC); a scan-rate series tells them apart (the forward peak moving 29.6/n mV per decade, |Ep − Ep/2| = 1.857·RT/nF)`], 'irreversible (no return peak; or EC with a fast follow-up reaction)');
   }
   const dEp = input.deltaEpV;
   const surface = surfaceWaveReasons(input, evidence, u);

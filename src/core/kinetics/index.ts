@@ -11,3 +11,4 @@ export * from './nicholsonPsiAtAlpha';
 export * from './jointFollowUpRateConstant';
 export * from './followUpCurrentFunction';
 export * from './lavironWorkingCurve';
+export * from './followUpPeakWidth';

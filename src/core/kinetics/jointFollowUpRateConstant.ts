@@ -45,6 +45,9 @@ export interface JointFollowUpResult {
   lambdas: number[];
 }
 
+/** Standard uncertainty of one Nicholson ratio (baseline extrapolation, noise; our estimate). */
+export const FOLLOW_UP_RATIO_UNCERTAINTY = 0.03;
+
 type Curve = { lambdas: number[]; ratios: number[] };
 
 /** Ratio at λ, linear in ln λ between grid points, held at the ends. */
@@ -60,7 +63,7 @@ function ratioAt(c: Curve, lambda: number): number {
 export function jointFollowUpRateConstant(files: FollowUpFile[], options: JointFollowUpOptions = {}): JointFollowUpResult {
   const n = options.electronCount ?? 1;
   const t = options.temperatureK ?? STANDARD_TEMPERATURE_K;
-  const delta = options.ratioUncertainty ?? 0.03;
+  const delta = options.ratioUncertainty ?? FOLLOW_UP_RATIO_UNCERTAINTY;
   if (!files.length) throw new AnalysisError('EMPTY_INPUT', 'a k_f fit over the series needs at least one file with a return/forward ratio');
   files.forEach((f, i) => {
     assertFiniteInRange(`ratio of file ${i}`, f.ratio, 0, 2);

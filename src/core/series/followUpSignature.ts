@@ -8,8 +8,13 @@
  *   2nd ed. (2001) §12.3):
  *   - most files lose part of the return peak (their single-file verdict is chemically coupled);
  *   - the return/forward ratio rises towards 1 as v rises (less time for the reaction): its slope
- *     against log v is positive with a 95 % interval above 0, the lowest ratio is at most 0.8 and
- *     it rises by 0.15 or more (thresholds: common practice, no source);
+ *     against log v is positive with a 95 % interval above 0 (or, as the ratio levels off near 1,
+ *     it rises from the slowest to the fastest rate by 2√2 times the uncertainty of one ratio and
+ *     never falls back by more than twice it), and the lowest ratio lies below 1 by
+ *     at least twice the uncertainty of one ratio (0.03, FOLLOW_UP_RATIO_UNCERTAINTY: at most
+ *     0.94), so measurably; a reversible couple without chemistry reads 0.99–1.00 here (the
+ *     threshold: ours, no source). A slow reaction (λ ≲ 0.01, ratio 0.90 at the slowest rate) is
+ *     then named, and k_f comes from the working curve over the series;
  *   - pure kinetic zone: the return peak is missing or below 0.3 of the forward one in most files,
  *     the forward peak moves 29.6/n mV per decade of v in the sweep direction (within 30 %) and
  *     |Ep − Ep/2| = 1.857·RT/nF (within 15 %), the shape of an irreversible wave with αn replaced by
@@ -19,6 +24,7 @@
 import { thermalVoltageV } from '../constants';
 import type { VerdictCategory } from '../couples/coupleTypes';
 import type { PeakDirection } from '../peaks/peakTypes';
+import { FOLLOW_UP_RATIO_UNCERTAINTY } from '../kinetics/jointFollowUpRateConstant';
 import { fitLine } from '../regression';
 import type { SeriesPoint } from './seriesPoint';
 
@@ -33,6 +39,8 @@ export interface FollowUpSignatureInput {
 
 export interface FollowUpSignature {
   kind: 'majority' | 'rising-ratio' | 'kinetic-zone';
+  /** Whether the pure-kinetic-zone shape (shift and width) was seen, whatever the kind. */
+  kineticZone: boolean;
   evidence: string[];
 }
 
@@ -51,13 +59,20 @@ function risingRatio(points: SeriesPoint[], forward: PeakDirection): string | nu
   if (new Set(rows.map((x) => x.v)).size < 3) return null;
   const fit = fitLine(rows.map((x) => Math.log10(x.v)), rows.map((x) => x.r));
   const low = Math.min(...rows.map((x) => x.r));
-  const high = Math.max(...rows.map((x) => x.r));
   const ci = fit.slopeInterval;
-  if (!(fit.slope > 0) || !(ci && ci[0] > 0) || low > 0.8 || high - low < 0.15) return null;
-  const slow = rows.reduce((a, b) => (b.v < a.v ? b : a));
-  const fast = rows.reduce((a, b) => (b.v > a.v ? b : a));
+  const sorted = [...rows].sort((a, b) => a.v - b.v);
+  const slow = sorted[0]!;
+  const fast = sorted[sorted.length - 1]!;
+  const sigma = FOLLOW_UP_RATIO_UNCERTAINTY;
+  // A ratio that levels off near 1 is curved in log v, so the line's interval can miss a real rise:
+  // a rise from the slowest to the fastest rate beyond 2√2σ with no step down beyond 2σ is one too.
+  const steady = sorted.every((x, i) => i === 0 || x.r > sorted[i - 1]!.r - 2 * sigma);
+  const lineRises = fit.slope > 0 && ci !== null && ci[0] > 0;
+  const endsRise = steady && fast.r - slow.r >= 2 * Math.SQRT2 * sigma;
+  if (!(lineRises || endsRise) || low > 1 - 2 * sigma) return null;
   const rate = (v: number) => Number(v.toPrecision(6));
-  return `the return/forward ratio rises with scan rate, from ${slow.r.toFixed(2)} at ${rate(slow.v)} V/s to ${fast.r.toFixed(2)} at ${rate(fast.v)} V/s (${fit.slope.toFixed(2)} per decade, 95 % ${ci[0].toFixed(2)}–${ci[1].toFixed(2)}): the signature of a follow-up reaction (Nicholson & Shain 1964)`;
+  const how = lineRises ? `${fit.slope.toFixed(2)} per decade, 95 % ${ci[0].toFixed(2)}–${ci[1].toFixed(2)}` : `a rise of ${(fast.r - slow.r).toFixed(3)}, beyond 2√2 × ${sigma} for two ratios, never falling back by more than ${2 * sigma}`;
+  return `the return/forward ratio rises with scan rate, from ${slow.r.toFixed(2)} at ${rate(slow.v)} V/s to ${fast.r.toFixed(2)} at ${rate(fast.v)} V/s (${how}), and lies measurably below 1: the signature of a follow-up reaction (Nicholson & Shain 1964)`;
 }
 
 function kineticZone(input: FollowUpSignatureInput): string | null {
@@ -86,5 +101,5 @@ export function followUpSignature(input: FollowUpSignatureInput): FollowUpSignat
   if (zone) evidence.push(zone);
   if (!evidence.length) return null;
   const kind = input.majority === 'chemically-coupled' ? 'majority' : rising ? 'rising-ratio' : 'kinetic-zone';
-  return { kind, evidence };
+  return { kind, kineticZone: zone !== null, evidence };
 }
