@@ -1,16 +1,18 @@
 /**
  * One dissolved species under planar semi-infinite diffusion (with an optional first-order
  * homogeneous decay), advanced in time by the second-order backward differentiation formula
- * (BDF2), fully implicit, on an expanding grid with a conservative three-point (finite-volume)
+ * (BDF2), fully implicit, on an expanding grid with a compact three-point (Mehrstellen)
  * discretisation. The first step uses backward Euler (BDF1), which needs no history.
  * Source: BDF2 for electrochemical diffusion: D. Britz, T. Strutwolf, "Digital Simulation in
  *   Electrochemistry", 4th ed., Springer (2016), chapter on implicit methods (from memory);
  *   the scheme is A- and L-stable, so any time step is stable.
- * Equation per node i (control volume V_i, spacings h): V_i·dc_i/dt = D[(c_{i+1}−c_i)/h_i −
- *   (c_i−c_{i−1})/h_{i−1}] − k·V_i·c_i; at the surface node the second term is replaced by the
- *   flux q (mol cm⁻² s⁻¹) of this species into the electrode. The bulk node holds c_bulk.
+ * Equation per node i (spacings h, three weights m per node from compactDiffusionStencil.ts):
+ *   m_−(ċ + kc)_{i−1} + m_0(ċ + kc)_i + m_+(ċ + kc)_{i+1} = D[(c_{i+1}−c_i)/h_i − (c_i−c_{i−1})/h_{i−1}];
+ *   at the surface node the second term is replaced by the flux q (mol cm⁻² s⁻¹) of this species
+ *   into the electrode. The bulk node holds c_bulk. The systems stay tridiagonal.
  * Per step the surface concentration is a linear function of q: c_0 = intercept − q·slope.
  */
+import { compactDiffusionWeights, type CompactWeights } from './compactDiffusionStencil';
 import type { ExpandingGrid } from './expandingGrid';
 import { factorThomasFromBulkSide, substituteTowardsBulk, type ThomasFactor } from './solveTridiagonalThomas';
 
@@ -23,8 +25,10 @@ export class Bdf2DiffusionSpecies {
   private readonly factorBdf2: ThomasFactor;
   private active: ThomasFactor;
   private steps = 0;
-  /** −D/h of the last interval: couples node N−1 to the fixed bulk node. */
-  private readonly bulkCoupling: number;
+  /** Weights of the time-derivative (and decay) terms, compactDiffusionStencil.ts. */
+  private readonly weights: CompactWeights;
+  /** What the fixed bulk node adds to the last node's right-hand side, mol cm⁻² s⁻¹. */
+  private readonly bulkSource: number;
   /** After prepareStep: surface value without flux, and dc_0/dq (positive). */
   intercept = 0;
   slope = 0;
@@ -40,24 +44,27 @@ export class Bdf2DiffusionSpecies {
     this.latestMolPerCm3 = new Float64Array(n).fill(bulkMolPerCm3);
     this.previousMolPerCm3 = new Float64Array(n).fill(bulkMolPerCm3);
     this.u = new Float64Array(n);
+    this.weights = compactDiffusionWeights(grid.spacingCm);
     this.factorBdf1 = this.factor(diffusionCm2PerS, decayRatePerS, 1 / dtS);
     this.factorBdf2 = this.factor(diffusionCm2PerS, decayRatePerS, 1.5 / dtS);
     this.active = this.factorBdf1;
-    this.bulkCoupling = -diffusionCm2PerS / (grid.spacingCm[n - 1] as number);
+    // The bulk node's term (σ+k)·m_+·c_N − D·c_N/h, less the history m_+·σ·c_N it would carry.
+    this.bulkSource = (diffusionCm2PerS / (grid.spacingCm[n - 1] as number) - decayRatePerS * (this.weights.upper[n - 1] as number)) * bulkMolPerCm3;
   }
 
   private factor(d: number, k: number, sigma: number): ThomasFactor {
-    const { spacingCm: h, volumeCm: v } = this.grid;
-    const n = v.length;
+    const h = this.grid.spacingCm;
+    const m = this.weights;
+    const n = h.length;
     const lower = new Float64Array(n);
     const diag = new Float64Array(n);
     const upper = new Float64Array(n);
     for (let i = 0; i < n; i++) {
       const right = d / (h[i] as number);
       const left = i === 0 ? 0 : d / (h[i - 1] as number);
-      lower[i] = -left;
-      upper[i] = -right;
-      diag[i] = (sigma + k) * (v[i] as number) + left + right;
+      lower[i] = (sigma + k) * (m.lower[i] as number) - left;
+      upper[i] = (sigma + k) * (m.upper[i] as number) - right;
+      diag[i] = (sigma + k) * (m.diagonal[i] as number) + left + right;
     }
     return factorThomasFromBulkSide(lower, diag, upper);
   }
@@ -70,7 +77,7 @@ export class Bdf2DiffusionSpecies {
     const bdf2 = this.steps > 0;
     const f = bdf2 ? this.factorBdf2 : this.factorBdf1;
     this.active = f;
-    const v = this.grid.volumeCm;
+    const { lower: mL, diagonal: mD, upper: mU } = this.weights;
     const c = this.latestMolPerCm3;
     const p = this.previousMolPerCm3;
     const u = this.u;
@@ -79,11 +86,17 @@ export class Bdf2DiffusionSpecies {
     const a = bdf2 ? 2 / this.dtS : 1 / this.dtS;
     const b = bdf2 ? -0.5 / this.dtS : 0;
     const last = u.length - 1;
-    let uNext = ((v[last] as number) * (a * (c[last] as number) + b * (p[last] as number)) - this.bulkCoupling * this.bulkMolPerCm3) * (invDen[last] as number);
-    u[last] = uNext;
-    for (let i = last - 1; i >= 0; i--) {
-      uNext = ((v[i] as number) * (a * (c[i] as number) + b * (p[i] as number)) - (upper[i] as number) * uNext) * (invDen[i] as number);
+    // History H_j = a·c_j + b·p_j, weighted by the node's three weights (H of the bulk node is in bulkSource).
+    let hRight = 0;
+    let hHere = a * (c[last] as number) + b * (p[last] as number);
+    let uNext = 0;
+    for (let i = last; i >= 0; i--) {
+      const hLeft = i === 0 ? 0 : a * (c[i - 1] as number) + b * (p[i - 1] as number);
+      const rhs = (mL[i] as number) * hLeft + (mD[i] as number) * hHere + (mU[i] as number) * hRight;
+      uNext = (i === last ? rhs + this.bulkSource : rhs - (upper[i] as number) * uNext) * (invDen[i] as number);
       u[i] = uNext;
+      hRight = hHere;
+      hHere = hLeft;
     }
     this.intercept = uNext;
     this.slope = invDen[0] as number;
