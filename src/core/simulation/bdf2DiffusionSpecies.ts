@@ -2,7 +2,8 @@
  * One dissolved species under planar semi-infinite diffusion (with an optional first-order
  * homogeneous decay), advanced in time by the second-order backward differentiation formula
  * (BDF2), fully implicit, on an expanding grid with a compact three-point (Mehrstellen)
- * discretisation. The first step uses backward Euler (BDF1), which needs no history.
+ * discretisation. Each step's length and coefficients come from vertexStepSchedule.ts (backward
+ * Euler at a fresh start, variable-step BDF2 otherwise).
  * Source: BDF2 for electrochemical diffusion: D. Britz, T. Strutwolf, "Digital Simulation in
  *   Electrochemistry", 4th ed., Springer (2016), chapter on implicit methods (from memory);
  *   the scheme is A- and L-stable, so any time step is stable.
@@ -15,20 +16,21 @@
 import { compactDiffusionWeights, type CompactWeights } from './compactDiffusionStencil';
 import type { ExpandingGrid } from './expandingGrid';
 import { factorThomasFromBulkSide, substituteTowardsBulk, type ThomasFactor } from './solveTridiagonalThomas';
+import type { StepRule } from './vertexStepSchedule';
 
 export class Bdf2DiffusionSpecies {
   /** Concentrations at the latest completed step, mol/cm³ (nodes 0 … N−1). */
   latestMolPerCm3: Float64Array;
   private previousMolPerCm3: Float64Array;
   private readonly u: Float64Array;
-  private readonly factorBdf1: ThomasFactor;
-  private readonly factorBdf2: ThomasFactor;
-  private active: ThomasFactor;
-  private steps = 0;
+  /** Factorisations per step rule (vertexStepSchedule.ts), made as first needed. */
+  private readonly factors: (ThomasFactor | undefined)[] = [];
+  private active: ThomasFactor | null = null;
   /** Weights of the time-derivative (and decay) terms, compactDiffusionStencil.ts. */
   private readonly weights: CompactWeights;
   /** What the fixed bulk node adds to the last node's right-hand side, mol cm⁻² s⁻¹. */
   private readonly bulkSource: number;
+  private readonly diffusionCm2PerS: number;
   /** After prepareStep: surface value without flux, and dc_0/dq (positive). */
   intercept = 0;
   slope = 0;
@@ -37,17 +39,14 @@ export class Bdf2DiffusionSpecies {
     private readonly grid: ExpandingGrid,
     diffusionCm2PerS: number,
     private readonly bulkMolPerCm3: number,
-    decayRatePerS: number,
-    private readonly dtS: number,
+    private readonly decayRatePerS: number,
   ) {
     const n = grid.volumeCm.length;
     this.latestMolPerCm3 = new Float64Array(n).fill(bulkMolPerCm3);
     this.previousMolPerCm3 = new Float64Array(n).fill(bulkMolPerCm3);
     this.u = new Float64Array(n);
     this.weights = compactDiffusionWeights(grid.spacingCm);
-    this.factorBdf1 = this.factor(diffusionCm2PerS, decayRatePerS, 1 / dtS);
-    this.factorBdf2 = this.factor(diffusionCm2PerS, decayRatePerS, 1.5 / dtS);
-    this.active = this.factorBdf1;
+    this.diffusionCm2PerS = diffusionCm2PerS;
     // The bulk node's term (σ+k)·m_+·c_N − D·c_N/h, less the history m_+·σ·c_N it would carry.
     this.bulkSource = (diffusionCm2PerS / (grid.spacingCm[n - 1] as number) - decayRatePerS * (this.weights.upper[n - 1] as number)) * bulkMolPerCm3;
   }
@@ -73,9 +72,8 @@ export class Bdf2DiffusionSpecies {
    * Builds the right-hand side from the history and eliminates it (one fused pass from the bulk
    * towards the electrode); sets intercept and slope.
    */
-  prepareStep(): void {
-    const bdf2 = this.steps > 0;
-    const f = bdf2 ? this.factorBdf2 : this.factorBdf1;
+  prepareStep(rule: StepRule): void {
+    const f = this.factors[rule.id] ?? (this.factors[rule.id] = this.factor(this.diffusionCm2PerS, this.decayRatePerS, rule.sigmaPerS));
     this.active = f;
     const { lower: mL, diagonal: mD, upper: mU } = this.weights;
     const c = this.latestMolPerCm3;
@@ -83,8 +81,8 @@ export class Bdf2DiffusionSpecies {
     const u = this.u;
     const upper = f.upper;
     const invDen = f.inverseDenominator;
-    const a = bdf2 ? 2 / this.dtS : 1 / this.dtS;
-    const b = bdf2 ? -0.5 / this.dtS : 0;
+    const a = rule.latestWeightPerS;
+    const b = rule.previousWeightPerS;
     const last = u.length - 1;
     // History H_j = a·c_j + b·p_j, weighted by the node's three weights (H of the bulk node is in bulkSource).
     let hRight = 0;
@@ -108,7 +106,6 @@ export class Bdf2DiffusionSpecies {
     const older = this.previousMolPerCm3;
     this.previousMolPerCm3 = this.latestMolPerCm3;
     this.latestMolPerCm3 = older;
-    substituteTowardsBulk(this.active, this.u, this.intercept - fluxIntoElectrode * this.slope, this.latestMolPerCm3);
-    this.steps++;
+    substituteTowardsBulk(this.active as ThomasFactor, this.u, this.intercept - fluxIntoElectrode * this.slope, this.latestMolPerCm3);
   }
 }

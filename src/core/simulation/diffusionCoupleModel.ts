@@ -14,6 +14,7 @@ import { butlerVolmerFlux } from './butlerVolmerFlux';
 import type { ExpandingGrid } from './expandingGrid';
 import type { FaradaicModel } from './faradaicModel';
 import type { CvSimulationInput } from './simulationTypes';
+import type { StepRule } from './vertexStepSchedule';
 
 export class DiffusionCoupleModel implements FaradaicModel {
   private readonly oxidised: Bdf2DiffusionSpecies;
@@ -24,20 +25,19 @@ export class DiffusionCoupleModel implements FaradaicModel {
   constructor(
     private readonly input: CvSimulationInput,
     grid: ExpandingGrid,
-    dtS: number,
     decaying: 'O' | 'R' | 'none',
   ) {
     const kO = decaying === 'O' ? input.followUpRatePerS : 0;
     const kR = decaying === 'R' ? input.followUpRatePerS : 0;
-    this.oxidised = new Bdf2DiffusionSpecies(grid, input.diffusionOCm2PerS, input.concentrationOMolPerCm3, kO, dtS);
-    this.reduced = new Bdf2DiffusionSpecies(grid, input.diffusionRCm2PerS, input.concentrationRMolPerCm3, kR, dtS);
+    this.oxidised = new Bdf2DiffusionSpecies(grid, input.diffusionOCm2PerS, input.concentrationOMolPerCm3, kO);
+    this.reduced = new Bdf2DiffusionSpecies(grid, input.diffusionRCm2PerS, input.concentrationRMolPerCm3, kR);
     this.nf = input.electronCount * inverseThermalVoltagePerV(input.temperatureK);
     this.chargePerMol = input.electronCount * FARADAY_C_PER_MOL * input.areaCm2;
   }
 
-  prepareStep(): void {
-    this.oxidised.prepareStep();
-    this.reduced.prepareStep();
+  prepareStep(rule: StepRule): void {
+    this.oxidised.prepareStep(rule);
+    this.reduced.prepareStep(rule);
   }
 
   /** Net reduction rate J (mol cm⁻² s⁻¹) for this step at the given interfacial potential. */

@@ -3,8 +3,11 @@
  * then currentAt() as often as the ohmic-drop iteration needs, then finishStep() once with the
  * final interfacial potential.
  */
+import type { StepRule } from './vertexStepSchedule';
+
 export interface FaradaicModel {
-  prepareStep(): void;
+  /** Starts a time step of length `rule.dtS` with the backward-differentiation coefficients of `rule`. */
+  prepareStep(rule: StepRule): void;
   /** Faradaic current (A, anodic positive) at the end of this step if the interface sat at `interfacialV`. */
   currentAt(interfacialV: number): number;
   /** Commits the step at `interfacialV`. */
@@ -19,8 +22,8 @@ export interface FaradaicModel {
 export class SumOfCouplesModel implements FaradaicModel {
   constructor(private readonly parts: readonly FaradaicModel[]) {}
 
-  prepareStep(): void {
-    for (const m of this.parts) m.prepareStep();
+  prepareStep(rule: StepRule): void {
+    for (const m of this.parts) m.prepareStep(rule);
   }
 
   currentAt(interfacialV: number): number {

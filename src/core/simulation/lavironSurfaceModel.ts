@@ -14,6 +14,7 @@
 import { FARADAY_C_PER_MOL, inverseThermalVoltagePerV } from '../constants';
 import type { FaradaicModel } from './faradaicModel';
 import type { CvSimulationInput } from './simulationTypes';
+import type { StepRule } from './vertexStepSchedule';
 
 export class LavironSurfaceModel implements FaradaicModel {
   /** Γ_O at the last completed step, mol/cm². */
@@ -21,16 +22,19 @@ export class LavironSurfaceModel implements FaradaicModel {
   private readonly nf: number;
   private readonly chargePerMol: number;
 
-  constructor(
-    private readonly input: CvSimulationInput,
-    private readonly dtS: number,
-  ) {
+  /** Length of the current time step, s. */
+  private dtS = 0;
+
+  constructor(private readonly input: CvSimulationInput) {
     this.nf = input.electronCount * inverseThermalVoltagePerV(input.temperatureK);
     this.chargePerMol = input.electronCount * FARADAY_C_PER_MOL * input.areaCm2;
     this.oxidisedMolPerCm2 = this.equilibriumOxidised(input.startV);
   }
 
-  prepareStep(): void {}
+  prepareStep(rule: StepRule): void {
+    this.dtS = rule.dtS;
+    this.cacheV = Number.NaN;
+  }
 
   /** Γ_O in equilibrium at E: Γ·θ/(1+θ), θ = e^{nfη}, written to avoid overflow. */
   private equilibriumOxidised(potentialV: number): number {

@@ -2,8 +2,9 @@
  * Self-consistent interfacial potential under uncompensated resistance and double-layer
  * charging, solved at every time step.
  * Model: E_applied = E_int + R_u·(i_F(E_int) + i_C), i_C = A·C_dl·dE_int/dt, with dE_int/dt
- *   discretised by the same backward formula as the diffusion (BDF1 on the first step, then
- *   BDF2), so the charging and faradaic currents refer to the same instant.
+ *   discretised by the same backward formula as the diffusion (BDF1 after each vertex, then
+ *   variable-step BDF2, vertexStepSchedule.ts), so the charging and faradaic currents refer to
+ *   the same instant.
  * Source: the ohmic-drop model is the usual series R_u with a parallel C_dl‖Z_F interface
  *   (A. J. Bard, L. R. Faulkner, "Electrochemical Methods", 2nd ed. (2001), §1.2 and §1.3, from
  *   memory); the root finder is the Illinois variant of regula falsi (M. Dowell, P. Jarratt,

@@ -34,6 +34,34 @@ describe('simulateCv, charging current and ohmic drop', () => {
     }
   });
 
+  // Bard & Faulkner 2nd ed. §1.2.4, eq. 1.2.15 (numbering from memory): a ramp −v from rest on
+  // R_u in series with C gives i = −vC(1 − e^(−t/τ)), τ = R_u·C. The switch adds a ramp +2v from
+  // t_s (superposition, the circuit is linear): i = vC(1 − 2e^(−(t−t_s)/τ) + e^(−t/τ)), which
+  // rises monotonically to +vC and never overshoots it. Case of our own: A = 0.0707 cm²,
+  // C_dl = 40 µF/cm², R_u = 80 Ω (τ = 0.226 ms), 2 V/s, 1 mV points (Δt = 0.5 ms > τ).
+  it('a blank with Ru follows the analytic RC response through the switch within 0.1 % of vC (no overshoot)', () => {
+    const c = area * 40e-6;
+    const ru = 80;
+    const rate = 2;
+    const tau = ru * c;
+    const r = simulateCv({ ...blank, doubleLayerFPerCm2: 40e-6, uncompensatedOhm: ru, scanRateVPerS: rate, startV: 0.3, switchV: -0.5 });
+    const h = (r.currentA.length - 1) / 2;
+    const steady = rate * c;
+    let worst = 0;
+    let highest = -Infinity;
+    for (let k = 1; k < r.currentA.length; k++) {
+      const t = r.timeS[k] as number;
+      const ts = r.timeS[h] as number;
+      const expected = k <= h ? -steady * (1 - Math.exp(-t / tau)) : steady * (1 - 2 * Math.exp(-(t - ts) / tau) + Math.exp(-t / tau));
+      worst = Math.max(worst, Math.abs((r.currentA[k] as number) - expected));
+      if (k > h) highest = Math.max(highest, r.currentA[k] as number);
+    }
+    expect(worst / steady).toBeLessThan(1e-3);
+    expect(highest).toBeLessThanOrEqual(steady * (1 + 1e-3));
+    // 1 ms after the switch: vC(1 − 2e^(−1/0.2262)) = 5.520 µA.
+    expect((r.currentA[h + 2] as number) * 1e6).toBeCloseTo(5.520, 2);
+  });
+
   it.each(['E', 'EC', 'surface'] as const)('%s: applied potential = interfacial potential + i·Ru at every point (to 1 nV)', (mechanism) => {
     const ru = 500;
     const r = simulateCv({ mechanism, k0CmPerS: 0.05, surfaceRatePerS: 20, coverageMolPerCm2: 1e-9, doubleLayerFPerCm2: cdl, uncompensatedOhm: ru, cycles: 2 });

@@ -3,7 +3,8 @@
  * Mechanisms: E and EC (dissolved couple, semi-infinite linear diffusion, Butler–Volmer
  *   kinetics) and surface (adsorbed couple, Laviron kinetics); each with double-layer charging
  *   and uncompensated resistance solved self-consistently at every time step.
- * Method: fully implicit finite differences — BDF2 in time (BDF1 on the first step) on an
+ * Method: fully implicit finite differences — BDF2 in time (started afresh with BDF1 and short
+ *   steps at t = 0 and at every switch, vertexStepSchedule.ts) on an
  *   exponentially expanding space grid, compact three-point (Mehrstellen) discretisation, Thomas
  *   elimination run from the bulk so that the electrode boundary condition (Butler–Volmer with
  *   the unknown flux) is solved in closed form; the ohmic-drop coupling is a bracketed scalar
@@ -15,7 +16,7 @@
  * In: CvSimulationInput (units in the names). Out: columns timeS, potentialV (applied),
  *   currentA (total, IUPAC: anodic positive), interfacialPotentialV, faradaicCurrentA,
  *   chargingCurrentA. The first point (t = 0) carries the currents of the first time step
- *   (t = Δt), since an instantaneous current at t = 0 is undefined for a potential applied at t = 0.
+ *   (t = Δt/2^K, vertexStepSchedule.ts), since an instantaneous current at t = 0 is undefined for a potential applied at t = 0.
  * Default numerics and the accuracy they reach (measured with this code, n = 1, 1 mV points,
  *   sweep ±0.5 V around E°′; references in simulateCv.*.test.ts):
  *   time step ≤ 0.04·RT/(nF) of sweep (one step per 1 mV point), first spacing 0.02·√(D/(nfv)),

@@ -23,6 +23,7 @@ import { SumOfCouplesModel, type FaradaicModel } from './faradaicModel';
 import { LavironSurfaceModel } from './lavironSurfaceModel';
 import { DEFAULT_SIMULATION, type CoupleInput, type CvSimulationInput, type CvSimulationResult, type FixedGrid, type SimulateCvOptions, type SimulationNumerics } from './simulationTypes';
 import { triangularWaveform } from './triangularWaveform';
+import { vertexStepSchedule } from './vertexStepSchedule';
 import { resolveDecayingSpecies, validateSimulationInput, validateSimulationOptions } from './validateSimulationInput';
 
 export function simulateCvCouples(cell: Partial<CvSimulationInput>, couples: ReadonlyArray<Partial<CoupleInput>>, options: SimulateCvOptions = {}): CvSimulationResult {
@@ -36,14 +37,16 @@ export function simulateCvCouples(cell: Partial<CvSimulationInput>, couples: Rea
   const substeps = options.substepsPerPoint || Math.max(...inputs.map((q) => substepsFor(q, options, pointStepV)));
   const dtS = wave.intervalS / substeps;
   const totalTimeS = wave.timeS[wave.timeS.length - 1] as number;
-  const built = inputs.map((q, j) => buildModel(q, options, dtS, totalTimeS, substeps, options.fixedGrids?.[j] ?? null));
+  const built = inputs.map((q, j) => buildModel(q, options, totalTimeS, substeps, options.fixedGrids?.[j] ?? null));
   // The grid above is sized for the whole waveform (totalTimeS) even when only its first sweep is run.
   const points = options.firstSweepOnly ? wave.pointsPerSweep + 1 : wave.potentialV.length;
   const timeS = points === wave.timeS.length ? wave.timeS : wave.timeS.slice(0, points);
   const potentialV = points === wave.potentialV.length ? wave.potentialV : wave.potentialV.slice(0, points);
   assertAffordable(built.map((b) => b.numerics), points);
   const model = built.length === 1 ? (built[0] as { model: FaradaicModel }).model : new SumOfCouplesModel(built.map((b) => b.model));
-  const columns = runTimeLoop(model, potentialV, { substeps, dtS, capacitanceF: p.doubleLayerFPerCm2 * p.areaCm2, uncompensatedOhm: p.uncompensatedOhm });
+  const capacitanceF = p.doubleLayerFPerCm2 * p.areaCm2;
+  const schedule = vertexStepSchedule(dtS, capacitanceF * p.uncompensatedOhm);
+  const columns = runTimeLoop(model, potentialV, { substeps, schedule, vertexEvery: wave.pointsPerSweep, capacitanceF, uncompensatedOhm: p.uncompensatedOhm });
   const coupleNumerics = built.map((b) => b.numerics);
   return { timeS, potentialV, ...columns, numerics: coupleNumerics[0] as SimulationNumerics, coupleNumerics };
 }
@@ -67,15 +70,15 @@ function assertAffordable(all: SimulationNumerics[], points: number): void {
   }
 }
 
-function buildModel(p: CvSimulationInput, o: SimulateCvOptions, dtS: number, totalTimeS: number, substeps: number, fixed: FixedGrid | null): { model: FaradaicModel; numerics: SimulationNumerics } {
+function buildModel(p: CvSimulationInput, o: SimulateCvOptions, totalTimeS: number, substeps: number, fixed: FixedGrid | null): { model: FaradaicModel; numerics: SimulationNumerics } {
   if (p.mechanism === 'surface') {
-    return { model: new LavironSurfaceModel(p, dtS), numerics: { substepsPerPoint: substeps, spacePoints: 0, firstSpacingCm: 0, outerEdgeCm: 0 } };
+    return { model: new LavironSurfaceModel(p), numerics: { substepsPerPoint: substeps, spacePoints: 0, firstSpacingCm: 0, outerEdgeCm: 0 } };
   }
   const decaying = p.mechanism === 'EC' ? resolveDecayingSpecies(p, o.decayingSpecies ?? 'auto') : 'none';
   const { firstSpacingCm, outerEdgeCm } = fixed ?? automaticGrid(p, o, totalTimeS);
   const grid = expandingGrid(firstSpacingCm, o.gridExpansion ?? 1.08, outerEdgeCm);
   const numerics = { substepsPerPoint: substeps, spacePoints: grid.volumeCm.length, firstSpacingCm, outerEdgeCm };
-  return { model: new DiffusionCoupleModel(p, grid, dtS, decaying), numerics };
+  return { model: new DiffusionCoupleModel(p, grid, decaying), numerics };
 }
 
 /**
