@@ -41,19 +41,21 @@ export function runTimeLoop(model: FaradaicModel, appliedV: Float64Array, s: Tim
   const history: ChargingHistory = { sigmaPerS: 0, historyVPerS: 0 };
   let eNow = appliedV[0] as number;
   let ePrev = eNow;
+  let eOlder = eNow;
   let lastDtS = schedule.dtS;
   let first = true;
   let iF = 0;
   let iC = 0;
   const step = (rule: StepRule, appliedNow: number): void => {
     history.sigmaPerS = rule.sigmaPerS;
-    history.historyVPerS = rule.latestWeightPerS * eNow + rule.previousWeightPerS * ePrev;
+    history.historyVPerS = rule.latestWeightPerS * eNow + rule.previousWeightPerS * ePrev + rule.olderWeightPerS * eOlder;
     model.prepareStep(rule);
     // Linear extrapolation of the last two interfacial potentials seeds the root bracket.
     const eInt = solver.solve(appliedNow, history, eNow + (rule.dtS / lastDtS) * (eNow - ePrev));
     iF = model.currentAt(eInt);
     iC = chargingCurrentA(capacitanceF, history, eInt);
     model.finishStep(eInt);
+    eOlder = ePrev;
     ePrev = eNow;
     eNow = eInt;
     lastDtS = rule.dtS;
@@ -67,6 +69,8 @@ export function runTimeLoop(model: FaradaicModel, appliedV: Float64Array, s: Tim
   let level = schedule.halvings;
   let sinceVertex = 0;
   let restart = false;
+  // Steps of the base length in a row: from the third on, the last three values are Δt apart (BDF3).
+  let baseSteps = 0;
   for (let k = 1; k < total; k++) {
     const e0 = appliedV[k - 1] as number;
     const slope = ((appliedV[k] as number) - e0) / (unitsPerInterval * shortestS);
@@ -77,12 +81,13 @@ export function runTimeLoop(model: FaradaicModel, appliedV: Float64Array, s: Tim
       sinceVertex = 0;
     }
     for (let done = 0; done < unitsPerInterval;) {
-      let rule = restart ? schedule.restart : (schedule.equal[level] as StepRule);
+      let rule = restart ? schedule.restart : level === schedule.halvings && baseSteps >= 2 ? schedule.third : (schedule.equal[level] as StepRule);
       if (!restart && level < schedule.halvings && sinceVertex % (2 << level) === 0
         && ((2 << level) * shortestS <= schedule.fineStepS || sinceVertex * shortestS >= schedule.fineWindowS)) {
         level++;
         rule = schedule.doubled[level] as StepRule;
       }
+      baseSteps = restart || level < schedule.halvings ? 0 : baseSteps + 1;
       restart = false;
       done += 1 << level;
       if (level < schedule.halvings) sinceVertex += 1 << level;

@@ -3,7 +3,7 @@
  * charging, solved at every time step.
  * Model: E_applied = E_int + R_u·(i_F(E_int) + i_C), i_C = A·C_dl·dE_int/dt, with dE_int/dt
  *   discretised by the same backward formula as the diffusion (BDF1 after each vertex, then
- *   variable-step BDF2, vertexStepSchedule.ts), so the charging and faradaic currents refer to
+ *   variable-step BDF2, then BDF3, vertexStepSchedule.ts), so the charging and faradaic currents refer to
  *   the same instant.
  * Source: the ohmic-drop model is the usual series R_u with a parallel C_dl‖Z_F interface
  *   (A. J. Bard, L. R. Faulkner, "Electrochemical Methods", 2nd ed. (2001), §1.2 and §1.3, from

@@ -7,6 +7,32 @@ import { simulateCv } from './simulateCv';
 import { cathodicFirstPeaks } from './simulationTestSupport';
 
 const f = inverseThermalVoltagePerV(298.15);
+/** Maximum of π^½χ for a Nernstian wave (Simpson's rule in z, golden-section search in u). */
+function nernstPeakFunction(): { value: number; atU: number } {
+  const chi = (u: number): number => {
+    const n = 4000;
+    const zMax = Math.sqrt(u + 80);
+    const h = zMax / n;
+    let sum = 0;
+    for (let k = 0; k <= n; k++) {
+      const w = u - (k * h) ** 2;
+      const g = 1 / (4 * Math.cosh(w / 2) ** 2);
+      sum += (k === 0 || k === n ? 1 : k % 2 ? 4 : 2) * g;
+    }
+    return ((2 / Math.sqrt(Math.PI)) * (sum * h)) / 3;
+  };
+  let a = 0.5;
+  let b = 1.7;
+  const r = (Math.sqrt(5) - 1) / 2;
+  for (let k = 0; k < 60; k++) {
+    const c = b - r * (b - a);
+    const d = a + r * (b - a);
+    if (chi(c) > chi(d)) b = d;
+    else a = c;
+  }
+  return { value: chi((a + b) / 2), atU: (a + b) / 2 };
+}
+
 const base = { k0CmPerS: Infinity, formalPotentialV: 0, startV: 0.4, switchV: -0.5, areaCm2: 0.0707, concentrationOMolPerCm3: 1e-6, diffusionOCm2PerS: 7.6e-6, diffusionRCm2PerS: 7.6e-6 };
 
 describe('simulateCv, E mechanism, reversible limit', () => {
@@ -47,6 +73,23 @@ describe('simulateCv, E mechanism, reversible limit', () => {
     const r = simulateCv({ ...base, switchV: peakV - pastPeakMV / 1000, stepV: 0.0005 });
     const { cathodic, anodic } = cathodicFirstPeaks(r);
     expect(Math.abs((anodic.potentialV - cathodic.potentialV) * 1000 - deltaMV)).toBeLessThan(1);
+  });
+
+  // Nicholson & Shain, Anal. Chem. 36, 706 (1964), Table I: max π^½χ = 0.4463 at −28.5/n mV.
+  // More digits from the same exact current function, computed here independently of the
+  // simulator: π^½χ is the semi-derivative of the Nernst surface fraction 1/(1 + e^u), so
+  // π^½χ(u) = (2/√π)∫₀^∞ s′(u − z²) dz with s′(w) = 1/(4·cosh²(w/2)); its maximum is
+  // 0.446295 at u = 1.1090 (also 0.446295 with scipy's adaptive quadrature in a separate script).
+  it('exact reversible peak function: the quadrature gives 0.446295, which rounds to Table I', () => {
+    expect(nernstPeakFunction().value).toBeCloseTo(0.446295, 6);
+    expect(Number(nernstPeakFunction().value.toFixed(4))).toBe(0.4463);
+  });
+
+  it.each([0.1, 5])('default numerics: reversible peak current within 0.005 %% of 0.446295·nFAC(nFvD/RT)^½ (v = %f V/s)', (rate) => {
+    const r = simulateCv({ ...base, diffusionRCm2PerS: 7.6e-6, scanRateVPerS: rate, startV: 0.5, switchV: -0.5 });
+    const exact = nernstPeakFunction().value * F * 0.0707 * 1e-6 * Math.sqrt(f * rate * 7.6e-6);
+    const { cathodic } = cathodicFirstPeaks(r);
+    expect(Math.abs(-cathodic.currentA / exact - 1)).toBeLessThan(5e-5);
   });
 
   // Same sources: the current function and the peak offset scale with RT, so at 37 °C

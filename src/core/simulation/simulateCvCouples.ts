@@ -21,7 +21,7 @@ import { DiffusionCoupleModel } from './diffusionCoupleModel';
 import { expandingGrid } from './expandingGrid';
 import { SumOfCouplesModel, type FaradaicModel } from './faradaicModel';
 import { LavironSurfaceModel } from './lavironSurfaceModel';
-import { DEFAULT_SIMULATION, type CoupleInput, type CvSimulationInput, type CvSimulationResult, type FixedGrid, type SimulateCvOptions, type SimulationNumerics } from './simulationTypes';
+import { DEFAULT_NUMERICS, DEFAULT_SIMULATION, type CoupleInput, type CvSimulationInput, type CvSimulationResult, type FixedGrid, type SimulateCvOptions, type SimulationNumerics } from './simulationTypes';
 import { triangularWaveform } from './triangularWaveform';
 import { vertexStepSchedule } from './vertexStepSchedule';
 import { resolveDecayingSpecies, validateSimulationInput, validateSimulationOptions } from './validateSimulationInput';
@@ -54,7 +54,7 @@ export function simulateCvCouples(cell: Partial<CvSimulationInput>, couples: Rea
 /** Steps per output point so that each step moves the potential by at most maxStepThermal·RT/(nF). */
 function substepsFor(q: CvSimulationInput, o: SimulateCvOptions, pointStepV: number): number {
   const nf = q.electronCount * inverseThermalVoltagePerV(q.temperatureK);
-  const maxStep = o.maxStepThermal ?? (q.mechanism === 'surface' ? 0.002 : 0.04);
+  const maxStep = o.maxStepThermal ?? (q.mechanism === 'surface' ? DEFAULT_NUMERICS.maxStepThermalSurface : DEFAULT_NUMERICS.maxStepThermal);
   return Math.max(1, Math.ceil((nf * pointStepV) / maxStep));
 }
 
@@ -76,7 +76,7 @@ function buildModel(p: CvSimulationInput, o: SimulateCvOptions, totalTimeS: numb
   }
   const decaying = p.mechanism === 'EC' ? resolveDecayingSpecies(p, o.decayingSpecies ?? 'auto') : 'none';
   const { firstSpacingCm, outerEdgeCm } = fixed ?? automaticGrid(p, o, totalTimeS);
-  const grid = expandingGrid(firstSpacingCm, o.gridExpansion ?? 1.08, outerEdgeCm);
+  const grid = expandingGrid(firstSpacingCm, o.gridExpansion ?? DEFAULT_NUMERICS.gridExpansion, outerEdgeCm);
   const numerics = { substepsPerPoint: substeps, spacePoints: grid.volumeCm.length, firstSpacingCm, outerEdgeCm };
   return { model: new DiffusionCoupleModel(p, grid, decaying), numerics };
 }
@@ -91,7 +91,7 @@ export function automaticGrid(p: CvSimulationInput, o: SimulateCvOptions, totalT
   const dMax = Math.max(p.diffusionOCm2PerS, p.diffusionRCm2PerS);
   let layerCm = Math.sqrt(dMin / (nf * p.scanRateVPerS));
   if (p.mechanism === 'EC' && p.followUpRatePerS > 0) layerCm = Math.min(layerCm, Math.sqrt(dMin / p.followUpRatePerS));
-  const firstSpacingCm = (o.firstSpacingFraction ?? 0.02) * layerCm;
-  const outerEdgeCm = Math.max((o.outerEdgeDiffusionLengths ?? 6) * Math.sqrt(dMax * totalTimeS), 20 * firstSpacingCm);
+  const firstSpacingCm = (o.firstSpacingFraction ?? DEFAULT_NUMERICS.firstSpacingFraction) * layerCm;
+  const outerEdgeCm = Math.max((o.outerEdgeDiffusionLengths ?? DEFAULT_NUMERICS.outerEdgeDiffusionLengths) * Math.sqrt(dMax * totalTimeS), 20 * firstSpacingCm);
   return { firstSpacingCm, outerEdgeCm };
 }

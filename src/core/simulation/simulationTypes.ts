@@ -76,6 +76,19 @@ export const DEFAULT_SIMULATION: Readonly<CvSimulationInput> = Object.freeze({
   surfaceRatePerS: 1000,
 });
 
+/**
+ * Default numerics of the dissolved-couple simulation (simulateCv.ts gives the accuracy they
+ * reach): time step ≤ 0.04·RT/(nF) of sweep, first spacing 0.04 of the thinnest layer, spacing
+ * ratio 1.15, outer edge 6·√(D_max·t_total); the surface mechanism steps at ≤ 0.002·RT/(nF).
+ */
+export const DEFAULT_NUMERICS = Object.freeze({
+  maxStepThermal: 0.04,
+  maxStepThermalSurface: 0.002,
+  firstSpacingFraction: 0.04,
+  gridExpansion: 1.15,
+  outerEdgeDiffusionLengths: 6,
+});
+
 export interface SimulateCvOptions {
   /**
    * Time steps per output point. `0` chooses automatically so that each step moves the applied
@@ -90,10 +103,10 @@ export interface SimulateCvOptions {
   maxStepThermal?: number;
   /**
    * First grid spacing as a fraction of the smallest relevant layer thickness (diffusion layer
-   * √(D/(nfv)), and for EC the reaction layer √(D/k_f)). @default 0.02
+   * √(D/(nfv)), and for EC the reaction layer √(D/k_f)). @default 0.04
    */
   firstSpacingFraction?: number;
-  /** Ratio of consecutive grid spacings of the expanding grid. @default 1.08 */
+  /** Ratio of consecutive grid spacings of the expanding grid. @default 1.15 */
   gridExpansion?: number;
   /** Outer grid edge in units of √(D_max·t_total). @default 6 */
   outerEdgeDiffusionLengths?: number;

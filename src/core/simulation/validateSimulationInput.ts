@@ -3,7 +3,7 @@
  * AnalysisError('BAD_OPTION') that names the field and its value.
  */
 import { AnalysisError, assertFiniteInRange } from '../errors';
-import type { CvSimulationInput, SimulateCvOptions } from './simulationTypes';
+import { DEFAULT_NUMERICS, type CvSimulationInput, type SimulateCvOptions } from './simulationTypes';
 
 const MECHANISMS = ['E', 'EC', 'surface'];
 
@@ -50,9 +50,9 @@ export function validateSimulationOptions(o: SimulateCvOptions): void {
     throw new AnalysisError('BAD_OPTION', `substepsPerPoint must be 0 (automatic) or an integer up to 10000, got ${String(s)}`);
   }
   if (o.maxStepThermal !== undefined) assertFiniteInRange('maxStepThermal', o.maxStepThermal, 1e-5, 10);
-  assertFiniteInRange('firstSpacingFraction', o.firstSpacingFraction ?? 0.02, 1e-6, 1);
-  assertFiniteInRange('gridExpansion', o.gridExpansion ?? 1.08, 1, 3);
-  assertFiniteInRange('outerEdgeDiffusionLengths', o.outerEdgeDiffusionLengths ?? 6, 2, 50);
+  assertFiniteInRange('firstSpacingFraction', o.firstSpacingFraction ?? DEFAULT_NUMERICS.firstSpacingFraction, 1e-6, 1);
+  assertFiniteInRange('gridExpansion', o.gridExpansion ?? DEFAULT_NUMERICS.gridExpansion, 1, 3);
+  assertFiniteInRange('outerEdgeDiffusionLengths', o.outerEdgeDiffusionLengths ?? DEFAULT_NUMERICS.outerEdgeDiffusionLengths, 2, 50);
   const d = o.decayingSpecies ?? 'auto';
   if (d !== 'auto' && d !== 'O' && d !== 'R') {
     throw new AnalysisError('BAD_OPTION', `decayingSpecies must be auto, O or R, got ${String(d)}`);
