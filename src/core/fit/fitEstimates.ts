@@ -17,6 +17,7 @@ import { reportJacobian, residualsAt, type FitContext } from './fitProblem';
 import type { EstimateStatus, FitMechanism, FitModelValues, FitStage, ParameterEstimate } from './fitTypes';
 import { linearizedCovariance, type LinearizedCovariance } from './fitUncertainty';
 import { limitTau, profileParameter, type ProfileResult } from './profileParameter';
+import { reversibleLimitCheck } from './reversibleLimitCheck';
 
 export interface EstimatesResult {
   estimates: ParameterEstimate[];
@@ -49,9 +50,39 @@ export function fitEstimates(ctx: FitContext, values: FitModelValues, costA2: nu
     if (r.better && (!better || r.better.costA2 < better.costA2)) better = r.better;
     return r.estimate;
   });
+  reversibleLimits(ctx, values, estimates);
   const held = fixedEstimates(ctx, values, o.mechanism).map((e): ParameterEstimate => (o.confounded.includes(e.parameter)
     ? { ...e, free: true, status: 'undetermined', standardError: Infinity, interval: [null, null] } : e));
   return { estimates: [...estimates, ...held], covariance: cov, evaluations, better };
+}
+
+/**
+ * A fitted k° or k_s in the reversible zone at every scan rate, or whose peak shifts are below
+ * the point spacing (reversibleLimitCheck.ts), becomes a lower bound at the lower end of its
+ * interval; a rate constant that is a lower bound leaves its couple's α undetermined (α has no
+ * effect on a reversible wave). An α interval is never reported beyond 0–1.
+ */
+function reversibleLimits(ctx: FitContext, values: FitModelValues, estimates: ParameterEstimate[]): void {
+  for (const e of estimates) {
+    if ((e.parameter !== 'k0CmPerS' && e.parameter !== 'surfaceRatePerS') || e.status !== 'estimate' || e.couple === null) continue;
+    const check = reversibleLimitCheck(ctx, values, e.couple, e.parameter);
+    if (!check) continue;
+    e.status = 'lower-bound';
+    e.interval = [e.interval?.[0] ?? null, null];
+    e.reason = check.reason;
+  }
+  for (const e of estimates) {
+    if (e.parameter !== 'alpha') continue;
+    const rate = estimates.find((x) => (x.parameter === 'k0CmPerS' || x.parameter === 'surfaceRatePerS') && x.couple === e.couple);
+    if (rate?.status === 'lower-bound' && e.status !== 'undetermined') {
+      e.status = 'undetermined';
+      e.interval = [null, null];
+      e.standardError = Infinity;
+      e.reason = 'α has no effect on a reversible wave, and the rate constant is only a lower bound';
+    } else if (e.interval) {
+      e.interval = [e.interval[0] === null ? null : Math.max(e.interval[0], 0), e.interval[1] === null ? null : Math.min(e.interval[1], 1)];
+    }
+  }
 }
 
 /** Search limit on the side where a rate constant's regime changes: reversible for k° and k_s, no follow-up for k_f. */

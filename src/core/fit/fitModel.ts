@@ -33,7 +33,7 @@ export class FitModel {
 
   constructor(
     readonly records: readonly PreparedRecord[],
-    private readonly settings: ModelSettings,
+    readonly settings: ModelSettings,
     private numerics: SimulateCvOptions,
   ) {}
 

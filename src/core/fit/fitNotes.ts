@@ -29,6 +29,12 @@ export function describe(e: ParameterEstimate, coupleCount: number): string {
 }
 
 const fmt = (x: number) => Number(x.toPrecision(2)).toString();
+/** Two significant digits rounded away from what the data exclude: down for a lower bound, up for an upper one. */
+const fmtBound = (x: number, side: 'lower' | 'upper') => {
+  if (!(x > 0)) return fmt(x);
+  const unit = 10 ** (Math.floor(Math.log10(x)) - 1);
+  return Number(((side === 'lower' ? Math.floor(x / unit) : Math.ceil(x / unit)) * unit).toPrecision(2)).toString();
+};
 
 export function fitNotes(r: Pick<FitResult, 'parameters' | 'correlation' | 'converged' | 'stopReason'>, coupleCount: number): string[] {
   const notes: string[] = [];
@@ -36,9 +42,10 @@ export function fitNotes(r: Pick<FitResult, 'parameters' | 'correlation' | 'conv
   for (const e of r.parameters.filter((p) => p.free)) {
     const name = describe(e, coupleCount);
     const unit = UNITS[e.parameter];
-    if (e.status === 'lower-bound' && e.interval?.[0] != null) notes.push(`${name} > ${fmt(e.interval[0])} ${unit} at 95 %: ${WHY_LOWER[e.parameter] ?? 'the data set only a lower limit'} (profile likelihood)`);
-    if (e.status === 'upper-bound' && e.interval?.[1] != null) notes.push(`${name} < ${fmt(e.interval[1])} ${unit} at 95 %: ${WHY_UPPER[e.parameter] ?? 'the data set only an upper limit'} (profile likelihood)`);
-    if (e.status === 'undetermined') notes.push(`${name} is not determined by these data${e.parameter === 'alpha' ? ' (α has no effect on a reversible wave)' : ''}`);
+    if (e.status === 'lower-bound' && e.reason) notes.push(`${name} is only a lower bound${e.interval?.[0] != null ? ` (> ${fmtBound(e.interval[0], 'lower')} ${unit}, the lower end of its 95 % interval)` : ''}: ${e.reason}`);
+    else if (e.status === 'lower-bound' && e.interval?.[0] != null) notes.push(`${name} > ${fmtBound(e.interval[0], 'lower')} ${unit} at 95 %: ${WHY_LOWER[e.parameter] ?? 'the data set only a lower limit'} (profile likelihood)`);
+    if (e.status === 'upper-bound' && e.interval?.[1] != null) notes.push(`${name} < ${fmtBound(e.interval[1], 'upper')} ${unit} at 95 %: ${WHY_UPPER[e.parameter] ?? 'the data set only an upper limit'} (profile likelihood)`);
+    if (e.status === 'undetermined') notes.push(`${name} is not determined by these data${e.reason ? ` (${e.reason})` : e.parameter === 'alpha' ? ' (α has no effect on a reversible wave)' : ''}`);
     if (e.atSearchLimit && e.status === 'estimate') {
       const spec = PARAMETER_SPECS[e.parameter];
       notes.push(`${name} sits at the edge of its search range (${spec.lo}–${spec.hi}${unit ? ` ${unit}` : ''}): treat it as a limit, not a measurement`);

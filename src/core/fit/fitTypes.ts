@@ -114,6 +114,8 @@ export interface ParameterEstimate {
   status: EstimateStatus;
   /** The estimate sits at the edge of the range the fit searches. */
   atSearchLimit: boolean;
+  /** Why a bound or 'undetermined' was given, when the reason is not the profile likelihood alone. */
+  reason?: string;
 }
 
 export interface RecordFit {
