@@ -1,13 +1,16 @@
 /**
  * Assembles the FitResult of a finished fit: couples put in order of E°′ (estimates, values,
  * starting values and correlation labels follow), the per-voltammogram residuals, background
- * lines and model currents, the information criteria and the notes.
+ * lines and model currents, the information criteria and the notes (a systematic misfit,
+ * lackOfFit.ts, first).
  * Criteria: AIC = m·ln(S/m) + 2k (H. Akaike, IEEE Trans. Autom. Control 19 (1974) 716) and
  *   BIC = m·ln(S/m) + k·ln m (G. Schwarz, Ann. Stat. 6 (1978) 461), for Gaussian errors of
  *   unknown variance, k = free parameters including the background terms (from memory).
  */
 import type { EstimatesResult } from './fitEstimates';
 import { fitNotes } from './fitNotes';
+import { lackOfFit } from './lackOfFit';
+import type { StraightLine } from './backgroundProjection';
 import { residualsAt, type FitContext } from './fitProblem';
 import type { FitMechanism, FitModelValues, FitResult, RecordFit } from './fitTypes';
 
@@ -41,20 +44,21 @@ export function assembleFitResult(a: ReportInput): FitResult {
   const correlation = { labels, matrix: a.estimates.covariance.correlation.map((row) => row.map((x) => (x === null ? null : Number(x.toFixed(6))))) };
   const m = ctx.measuredA.length;
   const extra = ctx.background ? 2 * ctx.model.records.length : 0;
+  const residualsA = new Float64Array(m);
+  const lines = residualsAt(ctx, values, residualsA);
   const result: FitResult = {
     mechanism: a.mechanism, values: reorder(values), start: reorder(a.start), parameters, correlation, windowV: a.windowV,
     pointCount: m, rmsA: Math.sqrt(a.costA2 / m), residualStdA: a.estimates.covariance.residualStdA,
     degreesOfFreedom: a.estimates.covariance.degreesOfFreedom, iterations: a.iterations, evaluations: a.evaluations,
     converged: a.converged, stopReason: a.stopReason, criteria: informationCriteria(a.costA2, m, ctx.layout.size + extra),
-    records: recordFits(ctx, values), notes: [],
+    records: recordFits(ctx, residualsA, lines), notes: [],
   };
-  result.notes = [...fitNotes(result, values.couples.length), ...a.notes];
+  const misfit = lackOfFit(ctx.model.records, residualsA, a.mechanism).note;
+  result.notes = [...(misfit ? [misfit] : []), ...fitNotes(result, values.couples.length), ...a.notes];
   return result;
 }
 
-function recordFits(ctx: FitContext, values: FitModelValues): RecordFit[] {
-  const r = new Float64Array(ctx.measuredA.length);
-  const lines = residualsAt(ctx, values, r);
+function recordFits(ctx: FitContext, r: Float64Array, lines: StraightLine[] | null): RecordFit[] {
   return ctx.model.records.map((rec, k) => {
     const n = rec.indices.length;
     const modelA = new Float64Array(n);
