@@ -67,7 +67,8 @@ export function reversibleLimitCheck(ctx: FitContext, values: FitModelValues, co
     : `Λ = k°/(D·nFv/RT)^½ = ${regimeValue.toPrecision(2)} ${fastest}, within the reversible zone (Λ ≥ ${REVERSIBLE_LAMBDA}; Matsuda & Ayabe 1955)`;
   const shift = `the peaks lie ${(largestShiftV * 1e3).toPrecision(2)} mV or less from the Nernstian ones, below the ${(spacingV * 1e3).toPrecision(2)} mV point spacing`;
   const why = [reversibleZone ? zone : null, unresolved ? shift : null].filter(Boolean).join('; and ');
-  return { regimeValue, largestShiftV, spacingV, reason: `the fitted ${name} of ${rate.toPrecision(3)} is not a measurement: ${why}` };
+  const hold = `the other values come from the fit with this finite ${name}; hold ${name} at a large value (and α) to fit the Nernstian model itself`;
+  return { regimeValue, largestShiftV, spacingV, reason: `the fitted ${name} of ${rate.toPrecision(3)} is not a measurement: ${why}. ${hold}` };
 }
 
 function medianSpacingV(e: Float64Array): number {
