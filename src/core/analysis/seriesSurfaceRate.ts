@@ -12,7 +12,8 @@
  *     simulated Laviron films, αc 0.3–0.7, read within 3 % from two files past 200/n mV);
  *   - the slope Γ and the charge Γ disagree when they differ by more than 10 % (or the slope's
  *     range over αc misses the charge Γ by that much);
- *   - the per-file Ru (Nernstian film, all ΔEp ohmic) and the per-file k_s are weighed as in
+ *   - the per-file Ru (Nernstian film, all ΔEp ohmic) and the per-file k_s, over the files with
+ *     n·ΔEp ≥ 20 mV (KS_STEADY_MIN_N_DELTA_EP_V), are weighed as in
  *     series/ohmicWidening.ts: when one Ru explains every file within ±11 % (max/min 1.25) and no less
  *     steadily than one k_s at any αc of the range, or k_s drifts beyond max/min 1.25 at every αc,
  *     k_s cannot be told; when one k_s is steadier, but by less than 5 %, the Ru is named beside it;
@@ -60,8 +61,18 @@ export function surfaceAlphaSet(o: ResolvedSeriesOptions, lavironAlpha: number |
 /** k_s of every file at αc index j (files the curve reached). */
 const ksAt = (rows: SurfaceFileReading[], j: number) => rows.flatMap((r) => (r.atAlpha[j] ? [r.atAlpha[j].ksPerS] : []));
 
-/** Without Ru: one Ru against one k_s. Returns the reason k_s cannot be told, or a note, or nothing. */
-function weighOhmic(rows: SurfaceFileReading[], alphas: number[]): { cannotTell: string | null; note: string | null; ruOhm: number | null } {
+/**
+ * Smallest n·ΔEp (V) of a file that enters the steadiness test of weighOhmic. Near the Nernstian end
+ * a film's k_s varies about as 1/ΔEp (Laviron 1979), so a peak located to ±2–3 mV (a few points of a
+ * noisy film peak some 90/n mV wide) reads k_s to about ±30 % at 10 mV and ±12 % at 20 mV: such
+ * files still enter the median, but a drift among them is the reading's, not the film's (ours;
+ * common practice, no source).
+ */
+export const KS_STEADY_MIN_N_DELTA_EP_V = 0.02;
+
+/** Without Ru: one Ru against one k_s, over the files resolved well enough. Returns the reason k_s cannot be told, or a note, or nothing. */
+function weighOhmic(allRows: SurfaceFileReading[], alphas: number[], electronCount: number): { cannotTell: string | null; note: string | null; ruOhm: number | null } {
+  const rows = allRows.filter((r) => electronCount * r.deltaEpV >= KS_STEADY_MIN_N_DELTA_EP_V);
   const rus = rows.flatMap((r) => (r.ohmicRuOhm === null ? [] : [r.ohmicRuOhm]));
   const ks = alphas.map((_, j) => ksAt(rows, j)).filter((k) => k.length === rows.length && k.length >= 3);
   if (rus.length < 3 || rus.length < rows.length || !ks.length) return { cannotTell: null, note: null, ruOhm: null };
@@ -125,7 +136,7 @@ export function seriesSurfaceRate(input: SurfaceRateInput, o: ResolvedSeriesOpti
   const base = { ksPerFile: perFile, ksAlphaSource: source, ksFileCount: 0, ksRangePerS: null, ksLowerBoundPerS: null, ohmicRuOhm: null, formalPotentialV: null, formalPotentialRangeV: null, formalPotentialSource: null };
   const head = ksAt(rows, 0);
   const apparent = head.length ? ` (read as kinetics, the files would give k_s ≈ ${sci(median(head))} 1/s)` : '';
-  const weighed = o.ruOhm > 0 ? null : weighOhmic(rows, alphas);
+  const weighed = o.ruOhm > 0 ? null : weighOhmic(rows, alphas, o.electronCount);
   const doubts = [...input.doubts, ...(weighed?.cannotTell ? [weighed.cannotTell] : [])];
   if (doubts.length) {
     const ru = weighed?.ruOhm ?? null;
