@@ -32,11 +32,25 @@ function rows(s: RunSeriesResult, c: SeriesCouple): [string, ReactNode][] {
     ['k° (median over files)', <K0Reading result={s} c={c} explanation={x.k0} />],
     ['Ohmic drop', c.ohmic ? c.ohmic.text : DASH],
     ['Γ from charge / from slope', sf ? <Explained explanation={x.gamma}>{sci(sf.coverageFromChargeMolPerCm2, 3)} / {sci(sf.coverageFromSlopeMolPerCm2, 3)} mol/cm²</Explained> : DASH],
-    ['k_s (Laviron)', sf?.ksPerS != null ? <Explained explanation={x.ks}>{sci(sf.ksPerS, 3)} s⁻¹</Explained> : DASH],
+    ['k_s (Laviron)', <KsReading surface={sf} explanation={x.ks} />],
     ['k_f (follow-up reaction)', c.followUp?.rateConstantPerS != null ? <Explained explanation={x.kf}>{sci(c.followUp.rateConstantPerS, 3)} s⁻¹</Explained>
       : c.followUp?.lowerBoundPerS != null ? <Explained explanation={x.kf}>≥ {sci(c.followUp.lowerBoundPerS, 2)} s⁻¹</Explained> : DASH],
     ['Reading', c.verdict.label],
   ];
+}
+
+/**
+ * k_s with its status, as the run gives it: a value; an estimate with its range (αc assumed, or
+ * one file); a lower bound; or "cannot tell" with the reason (an uncompensated resistance, say).
+ */
+function KsReading({ surface: sf, explanation }: { surface: SeriesCouple['surface']; explanation: Parameters<typeof Explained>[0]['explanation'] }) {
+  if (!sf) return <>{DASH}</>;
+  // The note's head ("uncompensated resistance? (Ru ≈ 100 Ω would explain it)"); the whole reason is among the notes below.
+  if (sf.ksStatus === 'cannot-tell') return <span className="warn-text" data-testid="ks-reading">cannot tell — {sf.ksNote.replace(/^cannot tell — /, '').split(':')[0]}; see the notes below</span>;
+  if (sf.ksStatus === 'lower-bound') return sf.ksLowerBoundPerS === null ? <>{DASH}</> : <Explained explanation={explanation}>≥ {sci(sf.ksLowerBoundPerS, 2)} s⁻¹ (lower bound)</Explained>;
+  if (sf.ksPerS === null) return <>{DASH}</>;
+  const range = sf.ksStatus === 'estimate' && sf.ksRangePerS ? `; estimate, range ${sci(sf.ksRangePerS[0], 2)}–${sci(sf.ksRangePerS[1], 2)} s⁻¹` : '';
+  return <Explained explanation={explanation}>{sci(sf.ksPerS, 3)} s⁻¹{range}</Explained>;
 }
 
 export function SeriesTable({ result }: { result: RunSeriesResult }) {
