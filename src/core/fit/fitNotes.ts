@@ -56,7 +56,11 @@ export function fitNotes(r: Pick<FitResult, 'parameters' | 'correlation' | 'conv
 }
 
 function correlationNotes(r: Pick<FitResult, 'parameters' | 'correlation'>, coupleCount: number): string[] {
-  const free = r.parameters.filter((p) => p.free);
+  // The matrix's rows follow its labels: the fit's free parameters, which a rate held at the
+  // reversible limit has left though it is still reported as asked free.
+  const label = (p: FitResult['parameters'][number]) => (p.couple === null ? p.parameter : `${p.parameter}[${p.couple + 1}]`);
+  const byLabel = new Map(r.parameters.filter((p) => p.free).map((p) => [label(p), p]));
+  const free = r.correlation.labels.map((l) => byLabel.get(l)).filter((p) => p !== undefined);
   const { matrix } = r.correlation;
   const out: string[] = [];
   for (let i = 0; i < free.length; i++) {

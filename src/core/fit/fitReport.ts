@@ -40,7 +40,9 @@ export function assembleFitResult(a: ReportInput): FitResult {
   const rank = (j: number | null) => (j === null ? null : order.indexOf(j));
   const reorder = (v: FitModelValues): FitModelValues => ({ couples: order.map((j) => ({ ...v.couples[j]! })), shared: { ...v.shared } });
   const parameters = a.estimates.estimates.map((e) => ({ ...e, couple: rank(e.couple) }));
-  const labels = parameters.filter((p) => p.free).map((p) => (p.couple === null ? p.parameter : `${p.parameter}[${p.couple + 1}]`));
+  // The correlation is over the fit's free parameters (its layout), which a rate held at the
+  // reversible limit has left (fitVoltammograms.ts) though it is still reported as asked free.
+  const labels = ctx.layout.entries.map((e) => (e.couple === null ? e.parameter : `${e.parameter}[${(rank(e.couple) as number) + 1}]`));
   const correlation = { labels, matrix: a.estimates.covariance.correlation.map((row) => row.map((x) => (x === null ? null : Number(x.toFixed(6))))) };
   const m = ctx.measuredA.length;
   const extra = ctx.background ? 2 * ctx.model.records.length : 0;

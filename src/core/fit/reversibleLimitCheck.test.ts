@@ -60,4 +60,18 @@ describe('reversibleLimitCheck', () => {
     for (const end of alpha.interval ?? []) if (end !== null) expect(end >= 0 && end <= 1).toBe(true);
     expect(r.notes.some((n) => /only a lower bound|lower limit/.test(n))).toBe(true);
   });
+
+  // A Nernstian couple (Nicholson & Shain 1964): with k° only a lower bound, E°′ and D are those of
+  // the fit with k° and α held in the reversible zone (two free parameters left), within 0.2 mV and
+  // 0.2 % of the simulated values (the simulator's inputs).
+  it('with k° a lower bound, E°′ and D come from the fit at the reversible limit, k° and α out of the correlation', () => {
+    const records = noisyVoltammograms(WAVE, [{ k0CmPerS: Infinity, diffusionOCm2PerS: 1e-5, diffusionRCm2PerS: 1e-5, formalPotentialV: 0 }], RATES, 0.002);
+    const r = fitVoltammograms({ records, cell: TEST_CELL }, { free: ['formalPotentialV', 'k0CmPerS', 'alpha', 'diffusionOCm2PerS'] });
+    expect(estimateOf(r, 'k0CmPerS').status).toBe('lower-bound');
+    expect(r.notes.some((n) => n.startsWith('the other values are those of the fit at the reversible limit'))).toBe(true);
+    expect(r.criteria.parameterCount).toBe(2);
+    expect(r.correlation.labels).toEqual(['formalPotentialV[1]', 'diffusionOCm2PerS[1]']);
+    expect(Math.abs(estimateOf(r, 'formalPotentialV').value)).toBeLessThan(2e-4);
+    expect(Math.abs(estimateOf(r, 'diffusionOCm2PerS').value / 1e-5 - 1)).toBeLessThan(0.002);
+  });
 });
