@@ -74,14 +74,14 @@ export function fitVoltammograms(input: FitInput, options: FitVoltammogramsOptio
  */
 const LIMIT_COST_SHARE = 0.02;
 
-/** How far past its lower bound a rate constant is held for the fit at the reversible limit. */
+/** How far past its fitted value (or its lower bound, when higher) a rate constant is held for the fit at the reversible limit. */
 const REVERSIBLE_HOLD_FACTOR = 100;
 
 /**
  * A rate constant (k° or k_s) the data give only as a lower bound took, in the fit, whatever
  * finite value met the noise best, and the other parameters (E°′, D, k_f, C_dl) followed it. They
  * are taken instead from the fit again with that rate held far into the reversible zone
- * (REVERSIBLE_HOLD_FACTOR × its bound, within its search limit) and its α held (α has no effect
+ * (REVERSIBLE_HOLD_FACTOR × its fitted value or bound, within its search limit) and its α held (α has no effect
  * there): the model the data cannot tell from the fitted one, without the rate the data do not
  * give. Kept only when that fit's sum of squares is no worse than the first by more than
  * 4 residual variances (two standard errors on one parameter) or LIMIT_COST_SHARE of it
@@ -116,7 +116,7 @@ function refitAtReversibleLimit(ctx: FitContext, fit: ResolvedFit, stage: StageR
   limitEst.estimates = limitEst.estimates.map((e) => first.get(`${e.parameter}/${e.couple}`) ?? e);
   const names = [...new Set(bounded.map((e) => PARAMETER_SPECS[e.parameter as 'k0CmPerS'].label))].join(' and ');
   const tradeOff = ohmicTradeOff(ctx, est, bounded);
-  const note = `the other values are those of the fit at the reversible limit, ${heldAt.join(' and ')} (${REVERSIBLE_HOLD_FACTOR}× the fitted value) with α held: the data give ${names} only as a lower bound, and the fit with ${names} free had stopped at a finite value the noise allowed, moving the others with it`;
+  const note = `the other values are those of the fit at the reversible limit, ${heldAt.join(' and ')} (${REVERSIBLE_HOLD_FACTOR}× the fitted value, within its search limit) with α held: the data give ${names} only as a lower bound, and the fit with ${names} free had stopped at a finite value the noise allowed, moving the others with it`;
   return { ctx: limitCtx, stage: again, est: limitEst, note: tradeOff ? `${note}; ${tradeOff}` : note };
 }
 
