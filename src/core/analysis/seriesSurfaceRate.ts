@@ -23,7 +23,7 @@
  */
 import { thermalVoltageV } from '../constants';
 import { FILM_OHMIC_RHO_RANGE, nernstianFilmOhmicSeparation } from '../series/filmOhmicSeparation';
-import { OHMIC_STEADY_SPREAD } from '../series/ohmicWidening';
+import { OHMIC_STEADY_SPREAD, foldSpread, spreadPercent } from '../series/ohmicWidening';
 import type { SeriesPoint } from '../series/seriesPoint';
 import { median } from '../statistics/median';
 import { lavironRateConstantFromSeparation } from '../kinetics/lavironWorkingCurve';
@@ -47,8 +47,6 @@ export interface SurfaceRateInput {
   doubts: string[];
 }
 
-const spread = (x: number[]) => Math.max(...x) / Math.min(...x);
-const pct = (s: number) => `±${(((s - 1) / (s + 1)) * 100).toFixed(0)} %`;
 const sci = (x: number) => x.toExponential(2);
 
 /** The αc a film's k_s is read at: given, Laviron's, or 0.5 then the ends of the assumed range. */
@@ -76,10 +74,10 @@ function weighOhmic(allRows: SurfaceFileReading[], alphas: number[], electronCou
   const rus = rows.flatMap((r) => (r.ohmicRuOhm === null ? [] : [r.ohmicRuOhm]));
   const ks = alphas.map((_, j) => ksAt(rows, j)).filter((k) => k.length === rows.length && k.length >= 3);
   if (rus.length < 3 || rus.length < rows.length || !ks.length) return { cannotTell: null, note: null, ruOhm: null };
-  const ruSpread = spread(rus);
-  const kSpread = Math.min(...ks.map(spread));
+  const ruSpread = foldSpread(rus);
+  const kSpread = Math.min(...ks.map(foldSpread));
   const ru = Number(Math.sqrt(Math.min(...rus) * Math.max(...rus)).toPrecision(2));
-  const ohmicLine = `one uncompensated Ru ≈ ${ru} Ω (Nernstian film, all of ΔEp ohmic) explains all ${rus.length} files within ${pct(ruSpread)}, one k_s within ${pct(kSpread)}`;
+  const ohmicLine = `one uncompensated Ru ≈ ${ru} Ω (Nernstian film, all of ΔEp ohmic) explains all ${rus.length} files within ${spreadPercent(ruSpread)}, one k_s within ${spreadPercent(kSpread)}`;
   if (ruSpread <= OHMIC_STEADY_SPREAD && ruSpread <= kSpread) {
     return { cannotTell: `ΔEp grows in proportion to v, as an ohmic drop on a film does (∝ ip·Ru), not as Laviron kinetics do (∝ log v): ${ohmicLine}`, note: null, ruOhm: ru };
   }

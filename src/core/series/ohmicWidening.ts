@@ -88,6 +88,12 @@ export function ohmicWidening(files: OhmicWideningFile[], options: OhmicWidening
  */
 export const OHMIC_STEADY_SPREAD = 1.25;
 
+/** max/min of positive values: how steady one constant is over the files (1 = all equal). */
+export const foldSpread = (x: number[]): number => Math.max(...x) / Math.min(...x);
+
+/** A max/min spread as ± % about the geometric middle: 1.25 → "±11 %". */
+export const spreadPercent = (s: number): string => `±${(((s - 1) / (s + 1)) * 100).toFixed(0)} %`;
+
 /** Files whose widening (n·ΔEp, 25 °C) is at least this (V) enter the per-file Ru: below it the reading's rounding dominates. */
 const WEIGHED_WIDENING_V = 0.003;
 
@@ -110,15 +116,13 @@ export function weighOhmicAgainstKinetics(
   });
   const ways = Math.min(...rows.map((r) => r.k.length));
   if (rows.length < 3) return ohmic;
-  const spread = (x: number[]) => Math.max(...x) / Math.min(...x);
-  const ruSpread = spread(rows.map((r) => r.ru));
-  const kSpread = Math.min(...Array.from({ length: ways }, (_, j) => spread(rows.map((r) => r.k[j]!))));
+  const ruSpread = foldSpread(rows.map((r) => r.ru));
+  const kSpread = Math.min(...Array.from({ length: ways }, (_, j) => foldSpread(rows.map((r) => r.k[j]!))));
   if (ruSpread > kSpread || ruSpread > OHMIC_STEADY_SPREAD) return ohmic;
   const ru = Math.sqrt(Math.min(...rows.map((r) => r.ru)) * Math.max(...rows.map((r) => r.ru)));
-  const pct = (s: number) => `±${(((s - 1) / (s + 1)) * 100).toFixed(0)} %`;
   return {
     ...ohmic,
-    text: `ΔEp widens in proportion to the peak current, as an ohmic drop would: one Ru ≈ ${Number(ru.toPrecision(2))} Ω explains all ${rows.length} widening files within ${pct(ruSpread)}, and their k° agree within ${pct(kSpread)}; from one concentration slow kinetics and ohmic drop cannot be told apart, so k° is given as if all the widening were kinetic: with an uncompensated Ru of that size it would be higher, up to reversible (measure Ru and enter it, or vary the concentration)`,
+    text: `ΔEp widens in proportion to the peak current, as an ohmic drop would: one Ru ≈ ${Number(ru.toPrecision(2))} Ω explains all ${rows.length} widening files within ${spreadPercent(ruSpread)}, and their k° agree within ${spreadPercent(kSpread)}; from one concentration slow kinetics and ohmic drop cannot be told apart, so k° is given as if all the widening were kinetic: with an uncompensated Ru of that size it would be higher, up to reversible (measure Ru and enter it, or vary the concentration)`,
   };
 }
 
