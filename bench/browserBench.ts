@@ -10,7 +10,10 @@
  *    on a shared machine the same page can take half as long again from one hour to the next.
  * 2. The 120-file batch of bench/scaleData.ts picked at once, once the demo's series are fitted,
  *    read and analysed in the page, against the same work in Node through the worker's own
- *    handlers (one thread).
+ *    handlers (one thread). Node runs just before and just after the page's batch, each time once
+ *    the browser is quiet (threadTime.ts chromiumQuiet): after a batch the page fits the new
+ *    series and autosaves the files, about 0.2 s of its thread, and a Node run beside that read
+ *    up to 0.4 s long, which flattered the ratio.
  * 3. With those files loaded, a click on another file until its trace is drawn again (median).
  * 4. The floor under 2: a fresh analysis worker of the same build, in the same page, given the
  *    demo files and then the 120 files as bytes already in memory (with the run snapshot the app
@@ -32,7 +35,7 @@ import { nodeBatchMs } from './nodeBatch';
 import { demoFileNames } from '../scripts/demoBundle';
 import { smallCvFiles } from './scaleData';
 import type { BenchRow } from './types';
-import { chromiumThreads, threadTimeBetween } from './threadTime';
+import { chromiumQuiet, chromiumThreads, threadTimeBetween } from './threadTime';
 
 const CHROMIUM = process.env.HALFWAVE_CHROMIUM ?? '/usr/bin/chromium';
 /** The build to time: dist/, or another build folder named in HALFWAVE_BENCH_DIST (to compare two builds at the same hour). */
@@ -218,6 +221,7 @@ async function oneRound(browser: Browser, port: number, demoFiles: { name: strin
     // The demo's series are fitted once its files are read (about a second of a fresh worker):
     // the batch is picked when that is done, so that it is timed alone, as in Node.
     await waitSeriesFitted(page);
+    await chromiumQuiet();
     // Node's time is taken before and after the page's, and averaged: the machine's load drifts.
     const nodeBeforeMs = await nodeBatchMs(files);
     const want = demoCount + files.length;
@@ -230,6 +234,10 @@ async function oneRound(browser: Browser, port: number, demoFiles: { name: strin
     await page.getByTestId('file-input').setInputFiles(paths);
     const batchPageMs = (await waitMark(page, `shown${want}`)) - (await waitMark(page, 'picked'));
     const batchCpu = threadTimeBetween(threadsBefore, chromiumThreads());
+    // After the batch the page still works (the new series is fitted, the files are autosaved):
+    // Node's second run, the yardstick, waits until the browser is quiet, or the two share the cores.
+    await waitSeriesFitted(page);
+    await chromiumQuiet();
     const batchNodeMs = (nodeBeforeMs + (await nodeBatchMs(files))) / 2;
     const coldNodeMs = coldNodeBatchMs(files.length);
     const switches: number[] = [];
@@ -299,7 +307,7 @@ export async function runBrowserBench(): Promise<BenchRow[]> {
       row('the demo files read + analysed in Node', pick((r) => r.demoNodeMs), 'ms', 'one thread, warm, just before each round: the machine\'s speed at the time'),
       row('demo shown / its Node time', pick((r) => r.shownMs / r.demoNodeMs), '×'),
       row(`${SMALL_FILES} files read + analysed in the page`, pick((r) => r.batchPageMs), 'ms', 'from the pick to every file analysed'),
-      row('the same work in Node (one thread)', pick((r) => r.batchNodeMs), 'ms', 'worker handlers in-thread; mean of a run just before and just after the page\'s'),
+      row('the same work in Node (one thread)', pick((r) => r.batchNodeMs), 'ms', 'worker handlers in-thread; mean of a run just before and just after the page\'s, the browser quiet'),
       row('page / Node', pick((r) => r.batchPageMs / r.batchNodeMs), '×', 'each round\'s own ratio; goal ≤ 2'),
       row('the same work in a fresh Node process', pick((r) => r.coldNodeMs), 'ms', 'first pass, the engine compiling as it goes (as a page\'s worker must); for comparison, no goal'),
       row('page / fresh Node', pick((r) => r.batchPageMs / r.coldNodeMs), '×'),

@@ -67,3 +67,23 @@ export function threadTimeBetween(before: ThreadSnapshot, after: ThreadSnapshot)
   }
   return sum;
 }
+
+/**
+ * Resolves once Chromium's page, workers and pool have used under `idleMs` of CPU over a window of
+ * `windowMs` (or after `timeoutMs`): work the page does after what is timed (an autosave of the
+ * files, a fit) must not share the cores with the Node run that is the yardstick. Elsewhere than
+ * Linux it resolves at once. Returns whether the browser went quiet.
+ */
+export async function chromiumQuiet(windowMs = 300, idleMs = 5, timeoutMs = 15_000): Promise<boolean> {
+  const t0 = Date.now();
+  let before = chromiumThreads();
+  if (before.size === 0) return true;
+  while (Date.now() - t0 < timeoutMs) {
+    await new Promise((r) => setTimeout(r, windowMs));
+    const after = chromiumThreads();
+    const used = threadTimeBetween(before, after);
+    if (used && used.workers + used.page + used.pool < idleMs) return true;
+    before = after;
+  }
+  return false;
+}
