@@ -183,6 +183,24 @@ describe('analyzeSeries with one scan rate', () => {
     expect(c?.logLog).toBeNull();
     expect(r.warnings.map((w) => w.code)).toContain('SINGLE_SCAN_RATE');
   });
+
+  // Replicates at one rate: the line through the origin takes every file, so D comes from the
+  // mean peak (Randles–Ševčík, Bard & Faulkner 2nd ed. §6.2, computed: 16.5581 µA at 0.1 V/s ↔
+  // D = 7.6e-6 cm²/s), and the slope's interval from their scatter (Student's t, n − 1 = 3
+  // degrees of freedom). Before, D came from the first file alone (+2 % here).
+  it('averages replicate files and gives an interval from their scatter', () => {
+    const ips = [1.02, 0.99, 0.995, 0.995].map((f) => f * 16.5581e-6);
+    const files = ips.map((ip, i) => ({ fileName: `rep${i}`, scanRateVPerS: 0.1, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: ip, ipcA: ip }]) }));
+    const r = analyzeSeries(files, opts);
+    const c = r.couples[0];
+    expect(c?.forwardFit?.pointCount).toBe(4);
+    expect(Math.abs((c?.diffusion?.diffusionCm2PerS ?? 0) / 7.6e-6 - 1)).toBeLessThan(1e-4);
+    const [lo, hi] = c?.diffusion?.intervalCm2PerS ?? [NaN, NaN];
+    expect(lo).toBeLessThan(7.6e-6);
+    expect(hi).toBeGreaterThan(7.6e-6);
+    expect(c?.diffusion?.note).toMatch(/mean of 4 replicate peaks/);
+    expect(r.warnings.find((w) => w.code === 'SINGLE_SCAN_RATE')?.message).toMatch(/mean of the 4 files/);
+  });
 });
 
 describe('analyzeSeries k° for a reversible couple', () => {

@@ -103,7 +103,9 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
   const out: SeriesWarning[] = [];
   const rates = files.map((f) => f.scanRateVPerS);
   if (new Set(rates).size < 2) {
-    out.push({ code: 'SINGLE_SCAN_RATE', message: 'only one scan rate: slope and D come from a single peak through the origin; no linearity check, log–log slope or Ep–log v line' });
+    out.push({ code: 'SINGLE_SCAN_RATE', message: files.length > 1
+      ? `only one scan rate: slope and D come from the mean of the ${files.length} files' peaks through the origin; no linearity check, log–log slope or Ep–log v line`
+      : 'only one scan rate: slope and D come from a single peak through the origin; no linearity check, log–log slope or Ep–log v line' });
   } else if (new Set(rates).size < rates.length) {
     out.push({ code: 'DUPLICATE_SCAN_RATE', message: 'several files share a scan rate; each enters the fits as its own point' });
   }

@@ -36,7 +36,7 @@ function describeLines(c: Omit<SeriesCouple, 'verdict'>): string[] {
   const sf = c.regime === 'surface' ? (c.surface?.fit ?? null) : null;
   const f = sf ?? c.forwardFit;
   const against = sf ? 'v' : 'v^½';
-  if (f && f.pointCount > 1) {
+  if (f && f.pointCount > 1 && Number.isFinite(f.r2)) {
     const maxIp = Math.max(...c.points.map((p) => p.forwardIpA ?? 0));
     const rel = maxIp > 0 ? Math.abs(f.intercept) / maxIp : 0;
     out.push(`|ip| against ${against}: R² = ${f.r2.toFixed(4)}, intercept ${(rel * 100).toFixed(1)} % of the largest peak`);

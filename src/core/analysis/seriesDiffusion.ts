@@ -49,6 +49,13 @@ function dOf(fit: FitLineResult, cell: Cell, rs: RandlesSevcikOptions): Diffusio
   };
 }
 
+/** The note of a series recorded at one scan rate: the line through the origin, its replicates averaged. */
+function oneRateNote(peakCount: number): string {
+  return peakCount > 1
+    ? `one scan rate only: D from the mean of ${peakCount} replicate peaks through the origin (its interval from their scatter), with no check of linearity`
+    : 'one scan rate only: D from a single peak through the origin, with no check of linearity';
+}
+
 const statsOf = (x: DiffusionOfFit | null) => ({ slopeRelativeStdError: x?.rel ?? null, slopeDegreesOfFreedom: x?.dof ?? 0 });
 
 /** |Eλ − E½| of a file (V); when either is unknown, that of Nicholson's table (112.5 mV), so the table is used as it stands. */
@@ -182,7 +189,7 @@ export function seriesDiffusion(input: DiffusionInput, o: ResolvedSeriesOptions)
   const h = dOf(fit, cell, { temperatureK: o.temperatureK });
   const note = input.kineticClass === 'quasi-reversible' ? 'quasi-reversible couple: no ψ could be read, so the reversible form is used on the raw peaks and D is a lower bound'
     : input.kineticClass === 'inconclusive' ? 'kinetic class unclear: reversible form used'
-      : fit.pointCount === 1 ? 'one scan rate only: D from a single peak through the origin, with no check of linearity' : null;
+      : new Set(input.points.map((p) => p.scanRateVPerS)).size === 1 ? oneRateNote(fit.pointCount) : null;
   const interval: [number, number] | null = h.ends.length ? [h.ends[0]!, h.ends[1]!] : null;
   return { diffusion: { diffusionCm2PerS: h.d, intervalCm2PerS: interval, rangeCm2PerS: range([h.d, ...h.ends]), form: 'reversible', ...statsOf(h), alphaUsed: null, alphaSource: null, note }, reason: null };
 }

@@ -40,15 +40,16 @@ export function fitAgainstSqrtScanRate(points: SeriesPoint[], y: PointValue): Fi
 }
 
 /**
- * The forward |ip| against v^½; with a single scan rate, the line through the origin and that
- * one point (Randles–Ševčík has no intercept), with R² left undefined (NaN).
+ * The forward |ip| against v^½; with a single scan rate, the line through the origin (Randles–Ševčík
+ * has no intercept) and every file's forward peak at that rate: replicates average, and with two or
+ * more the slope's interval comes from their scatter. R² is left undefined (NaN).
  */
 export function fitForwardAgainstSqrtScanRate(points: SeriesPoint[]): FitLineResult | null {
   const fit = fitAgainstSqrtScanRate(points, (p) => p.forwardIpA);
   if (fit) return fit;
-  const one = points.find((p) => p.forwardIpA !== null && p.forwardIpA > 0);
-  if (!one || new Set(points.map((p) => p.scanRateVPerS)).size !== 1) return null;
-  return { ...fitLine([sqrtV(one)], [one.forwardIpA as number], { throughOrigin: true }), r2: Number.NaN };
+  const peaks = points.filter((p) => p.forwardIpA !== null && p.forwardIpA > 0);
+  if (peaks.length === 0 || new Set(points.map((p) => p.scanRateVPerS)).size !== 1) return null;
+  return { ...fitLine(peaks.map(sqrtV), peaks.map((p) => p.forwardIpA as number), { throughOrigin: true }), r2: Number.NaN };
 }
 
 /** |ip| against v; null with fewer than two scan rates. */

@@ -45,7 +45,7 @@ function currentFigure(c: SeriesCouple): Figure {
     points(c.points, xOf, (p) => p.ipaA, scale.factor, 'ipa', palette.anodic, markers.anodic),
     points(c.points, xOf, (p) => p.ipcA, scale.factor, 'ipc', palette.cathodic, markers.cathodic),
   );
-  if (fit) data.push(fitLine(fit, c.points.map(xOf), scale.factor, `forward-peak fit, R² ${fit.r2.toFixed(4)}`));
+  if (fit) data.push(fitLine(fit, c.points.map(xOf), scale.factor, Number.isFinite(fit.r2) ? `forward-peak fit, R² ${fit.r2.toFixed(4)}` : 'forward-peak line through the origin (one scan rate)'));
   const xTitle = surface ? 'v / (V s⁻¹)' : 'v½ / (V s⁻¹)½';
   return { data, layout: layout(xTitle, `|ip| / ${scale.unit}`, false) };
 }
