@@ -174,6 +174,24 @@ function warnMidpointOffset(couple: Omit<CoupleResult, 'index'>, index: number, 
 /** Midpoint offsets from here on are said (V): the potentials are given to 0.1 mV (our choice). */
 const MIDPOINT_OFFSET_NOTED_V = 5e-4;
 
+/**
+ * A couple whose ΔEp is narrower than any diffusing couple of this n allows (at least
+ * 2.218·RT/nF, more with the switch close: Nicholson & Shain, Anal. Chem. 36 (1964) 706;
+ * Nicholson, Anal. Chem. 37 (1965) 1351), yet too wide for an adsorbed layer: the same zone in
+ * which classifyCouple.ts gives no verdict (0.4·RT/nF below the reversible value, our margin).
+ * Said loudly, since its E½, ΔEp and anything read from them would otherwise pass as numbers.
+ */
+function warnNarrowDeltaEp(couple: Omit<CoupleResult, 'index'>, index: number, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void): void {
+  const e = couple.verdict.evidence;
+  const dEp = couple.deltaEpV;
+  if (couple.verdict.category !== 'inconclusive' || dEp === null) return;
+  const u = thermalVoltageV(o.temperatureK) / o.electronCount;
+  const expected = e.reversibleDeltaEpAtSwitchV ?? e.reversibleDeltaEpLimitV;
+  if (!(dEp < expected - 0.4 * u) || !(Math.abs(dEp) > 1.109 * u)) return;
+  const n = o.electronCount;
+  warn('NARROW_DELTA_EP', `couple ${index + 1}: ΔEp = ${mv(dEp)} is narrower than a diffusing couple allows for n = ${n} (at least ${mv(expected)} here; 2.218·RT/nF = ${mv(e.reversibleDeltaEpLimitV)}, Nicholson & Shain 1964). UNRELIABLE: its E½ and ΔEp are not measurements of the couple. Likely causes: peak potentials located imprecisely (noise on a broad top; smooth more, or average cycles), more electrons than n = ${n} (n = ${n + 1} allows ${mv(e.reversibleDeltaEpLimitV * n / (n + 1))}), or a partly adsorbed couple`);
+}
+
 /** Pairs the measured peaks (weighted by height, so small features stay single) and builds the couples. */
 function buildCouples(sig: SweepSignals, peaks: PeakResult[], firstSeg: number | undefined, o: ResolvedAnalyzeOptions, warn: (c: AnalysisWarning['code'], m: string) => void): CoupleResult[] {
   const forwardDirection = firstSeg !== undefined && sig.segments[firstSeg]!.direction === 'negative' ? 'cathodic' : 'anodic';
@@ -190,6 +208,7 @@ function buildCouples(sig: SweepSignals, peaks: PeakResult[], firstSeg: number |
     const mapped = { anodic: pair.anodic === null ? null : a[pair.anodic]!, cathodic: pair.cathodic === null ? null : c[pair.cathodic]! };
     const couple = buildCouple(sig, peaks, mapped, forwardDirection, o);
     warnMidpointOffset(couple, index, o, warn);
+    warnNarrowDeltaEp(couple, index, o, warn);
     if (mapped.anodic === null || mapped.cathodic === null) warn('UNPAIRED_PEAK', `${mapped.anodic === null ? 'cathodic' : 'anodic'} peak at ${mv((couple.epaV ?? couple.epcV)!)} has no partner`);
     return { index, ...couple };
   });

@@ -297,3 +297,22 @@ describe('current sign convention (IUPAC Gold Book; ASDL plotting conventions)',
     expect([b.epaV, b.epcV, b.ipaA, b.ipcA]).toEqual([a.epaV, a.epcV, a.ipaA, a.ipcA]);
   });
 });
+
+describe('a ΔEp narrower than diffusion allows', () => {
+  // Nicholson & Shain, Anal. Chem. 36 (1964) 706: a reversible ΔEp is 2.218·RT/nF at least, so it
+  // scales with T. A couple recorded at 200 K (ΔEp ≈ 2.218·R·200/F = 38.2 mV) and analysed as if at
+  // 25 °C (at least 57.0 mV) lies in the zone no diffusing couple reaches and no adsorbed one either:
+  // flagged as unreliable, with n + 1 named. Stated at its own temperature, the same trace is reversible.
+  const cold = simulatedVoltammogram({ ...base, temperatureK: 200, scanRateVPerS: 0.1 });
+  it('is flagged NARROW_DELTA_EP, and not at the trace\'s own temperature', () => {
+    const wrong = firstCouple(analyzeVoltammogram(cold));
+    expect(wrong.couple.deltaEpV!).toBeGreaterThan(0.036);
+    expect(wrong.couple.deltaEpV!).toBeLessThan(0.041);
+    const flag = wrong.cycle.warnings.find((w) => w.code === 'NARROW_DELTA_EP');
+    expect(flag?.message).toMatch(/UNRELIABLE/);
+    expect(flag?.message).toMatch(/n = 2 allows 28\.5 mV/);
+    const right = firstCouple(analyzeVoltammogram(cold, { temperatureK: 200 }));
+    expect(right.couple.verdict.category).toBe('reversible');
+    expect(right.cycle.warnings.map((w) => w.code)).not.toContain('NARROW_DELTA_EP');
+  });
+});

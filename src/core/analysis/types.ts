@@ -32,6 +32,7 @@ export type AnalysisWarningCode =
   | 'NOT_AT_REST'
   | 'START_ON_FOOT'
   | 'MIDPOINT_OFFSET'
+  | 'NARROW_DELTA_EP'
   | 'BACKGROUND_TILT';
 
 export interface AnalysisWarning {
