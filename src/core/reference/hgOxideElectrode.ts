@@ -38,3 +38,29 @@ export function hgOxideElectrodeVsSheV(base: 'NaOH' | 'KOH', molar: 0.1 | 1): nu
 export function hydroxideFillingPh(base: 'NaOH' | 'KOH', molar: 0.1 | 1, pKw = 13.995): number {
   return pKw + Math.log10(HYDROXIDE_ACTIVITY_COEFFICIENT[base][molar === 1 ? '1' : '0.1'] * molar);
 }
+
+/**
+ * E° of the acid form, HgO + 2H⁺ + 2e⁻ → Hg + H₂O, at 25 °C (V vs SHE): the OH⁻ form plus
+ * (ln 10)(RT/F)·pKw = 0.9256 V (Bard & Faulkner 2001, App. C, gives 0.926 V, from memory).
+ */
+export const HG_OXIDE_ACID_STANDARD_POTENTIAL_V = HG_OXIDE_STANDARD_POTENTIAL_V + Math.LN10 * thermalVoltageV(STANDARD_TEMPERATURE_K) * 13.995;
+
+/** The pH a hydroxide filling is usually stated at: 14 + log10 c (1 M → 14, 0.1 M → 13; common practice, no source). */
+export function hydroxideNominalPh(molar: 0.1 | 1): number {
+  return 14 + Math.log10(molar);
+}
+
+/**
+ * Hg/HgO in a hydroxide filling against an RHE in a solution of pH `pH` (V): both electrodes
+ * answer to pH alike (HgO + 2H⁺ + 2e⁻ → Hg + H₂O and 2H⁺ + 2e⁻ → H₂), so in the filling's own
+ * solution the pair reads E° of the acid form, 0.926 V, whatever the pH; in another solution
+ * 0.926 V + (ln 10)(RT/F)·(pH − pH_fill), no junction. The filling's pH is its nominal one
+ * (hydroxideNominalPh), the scale on which the pH of a hydroxide solution is usually given, so a
+ * pH stated the same way cancels: 1 M KOH at pH 14 gives 0.926 V, as E_RHE = E + 0.098 V +
+ * 0.0592·pH does. On the activity scale the same filling is at pH 13.87 (hydroxideFillingPh):
+ * going through SHE with the activity value of the electrode and a nominal pH would read 7–10 mV
+ * high. The E° is the 25 °C value; the pH slope is taken at `temperatureK`.
+ */
+export function hgOxideVsRheV(molar: 0.1 | 1, pH: number, temperatureK = STANDARD_TEMPERATURE_K): number {
+  return HG_OXIDE_ACID_STANDARD_POTENTIAL_V + Math.LN10 * thermalVoltageV(temperatureK) * (pH - hydroxideNominalPh(molar));
+}
