@@ -19,6 +19,18 @@ describe('polynomialCoefficients', () => {
     expect(c[1]).toBeCloseTo(0.5, 12);
   });
 
+  // Weighted least squares (Draper & Smith 1998, from memory): a weight of 2 counts a point twice, a
+  // weight of 0 leaves it out.
+  it('weights count a point as often as its weight says', () => {
+    const u = [-1, -0.5, 0, 0.5, 1];
+    const y = [0.2, 0.9, 1.1, 0.7, 0.4];
+    const weighted = polynomialCoefficients(u, y, 2, [2, 1, 0, 1, 1])!;
+    const repeated = polynomialCoefficients([-1, -1, -0.5, 0.5, 1], [0.2, 0.2, 0.9, 0.7, 0.4], 2)!;
+    weighted.forEach((c, k) => expect(c).toBeCloseTo(repeated[k]!, 12));
+    expect(polynomialCoefficients(u, y, 2, [1, 1, 1, 1, 1])).toEqual(polynomialCoefficients(u, y, 2));
+    expect(polynomialCoefficients(u, y, 2, [1, 0, 0, 0, 1])).toBeNull();
+  });
+
   it('returns null when there are fewer distinct abscissae than coefficients', () => {
     expect(polynomialCoefficients([0.5, 0.5, 0.5, 1, 1], [1, 2, 3, 4, 5], 2)).toBeNull();
   });
