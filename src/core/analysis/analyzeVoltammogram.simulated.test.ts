@@ -89,8 +89,8 @@ describe('analyzeVoltammogram on simulated reversible couples', () => {
 
   // Same dense trace: 2 % noise widens the parabola's window to the top 6 % of each peak, where a
   // diffusion wave's skew pulls a plain parabola's vertex outwards (ΔEp was 60.0 mV, 2 mV wide on
-  // average); its cubic term is taken off first (refinePeakDeskewed). Mean ΔEp of six seeds within
-  // 1 mV of Nicholson's value for this switch (measured about +0.6 mV).
+  // average); its cubic term is taken off first (peaks/peakVertex.ts). Mean ΔEp of six seeds within
+  // 1 mV of Nicholson's value for this switch (measured +0.05 mV).
   it('dense, noisy trace: the mean ΔEp of six seeds is the reversible one within 1 mV', () => {
     const widths = [1, 2, 3, 4, 5, 6].map((seed) => {
       const v = simulatedVoltammogram({ ...base, stepV: 0.0002 }, { noiseA: 0.02 * randlesSevcikA(1, 0.1), seed });

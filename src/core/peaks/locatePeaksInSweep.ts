@@ -3,18 +3,19 @@
  * minima on a negative-going one (IUPAC). The current is oriented so that wanted peaks point up.
  * Steps: prominent maxima of the locating-smoothed current (findProminentMaxima.ts), shoulders
  *   from its derivative (findShoulders.ts), a minimum prominence of max(minSignalToNoise·σ,
- *   minProminenceA, minRelativeProminence·current range), then Ep by a local parabola on the raw
- *   points within max(1 % of the prominence, 3σ) of the top (refinePeakQuadratic.ts; the narrow
- *   window keeps the bias from the peak's asymmetry near 0.1 mV on noise-free data, the 3σ floor
- *   widens it on noisy data). With user windows only the windows are searched: the highest
- *   point inside each, flagged 'low' confidence when it sits on the window edge.
+ *   minProminenceA, minRelativeProminence·current range), then Ep by a parabola on the raw points
+ *   of the peak's top, its skew taken off first (peakVertex.ts: the window reaches max(1 % of the
+ *   prominence, 3σ) and, on a peak symmetric enough for it to cost no bias, up to 20 % of the
+ *   prominence; a noisy Nernstian film's Ep scatters half as much or less than with the 3σ window
+ *   alone). With user windows only the windows are searched: the highest point inside each,
+ *   flagged 'low' confidence when it sits on the window edge.
  * Thresholds (common practice, no source): 'high' confidence from 3× the minimum prominence.
  */
 import type { PeakConfidence, PeakDirection, PeakWindow } from './peakTypes';
 import { savitzkyGolayDerivative } from '../smoothing/savitzkyGolaySmooth';
 import { findProminentMaxima, type ProminentMaximum } from './findProminentMaxima';
 import { findShoulders, type Shoulder } from './findShoulders';
-import { refinePeakQuadratic } from './refinePeakQuadratic';
+import { peakVertex } from './peakVertex';
 import { ownStart, type SweepSignals } from './sweepSignals';
 
 export interface PeakCandidate {
@@ -133,15 +134,9 @@ function searchWindow(sig: SweepSignals, start: number, y: Float64Array, w: Peak
   return [{ local: best, prominence: Math.max(prominence, 0), confidence: onEdge ? 'low' : 'high', shoulder: onEdge }];
 }
 
-/** Parabola on the raw points whose smoothed current lies within max(1 % of the prominence, 3σ) of the top. */
+/** Ep by peakVertex.ts on the raw points, its window chosen on the locating-smoothed current. */
 function refine(sig: SweepSignals, start: number, y: Float64Array, k: number, prominence: number, s: 1 | -1) {
-  const floor = y[k]! - Math.max(0.01 * prominence, 3 * sig.noiseA);
-  let a = k;
-  let b = k;
-  while (a > 0 && k - a < 100 && y[a - 1]! >= floor) a--;
-  while (b < y.length - 1 && b - k < 100 && y[b + 1]! >= floor) b++;
-  a = Math.max(0, Math.min(a, k - 2));
-  b = Math.min(y.length - 1, Math.max(b, k + 2));
-  if (b - a < 2) return null;
-  return refinePeakQuadratic({ potentialV: sig.potentialV, currentA: sig.currentA, from: start + a, to: start + b + 1 }, { orientation: s });
+  const top = { potentialV: sig.potentialV, level: (j: number) => y[j - start]!, raw: (j: number) => s * sig.currentA[j]!, lo: start, hi: start + y.length };
+  const v = peakVertex(top, start + k, prominence, sig.noiseA);
+  return v && { potentialV: v.potentialV, currentA: s * v.currentA };
 }

@@ -20,8 +20,8 @@ import type { BaselineCurve } from '../baseline/baselineTypes';
 import type { PeakResult } from './peakTypes';
 import { baselineAt } from '../baseline/baselineCurve';
 import type { PeakCandidate } from './locatePeaksInSweep';
-import type { SweepSignals } from './sweepSignals';
-import { reachOf, refinePeakDeskewed, refinePeakQuadratic } from './refinePeakQuadratic';
+import { ownStart, type SweepSignals } from './sweepSignals';
+import { peakVertex } from './peakVertex';
 import { crossing } from './levelCrossing';
 
 export function measurePeak(
@@ -70,58 +70,32 @@ export function measurePeak(
 
 /**
  * Ep measured on the current minus its background (a sloping charging current would otherwise
- * pull the raw extremum sideways): the same parabola fit as in locatePeaksInSweep, on raw − background.
- * An extended decay is not part of the background, so a return peak keeps the extremum of the
- * total faradaic current that the published ΔEp tables refer to. The parabola is fitted with the
- * peak's skew taken off (refinePeakDeskewed). Falls back to the located peak.
+ * pull the raw extremum sideways): the same vertex as in locatePeaksInSweep (peakVertex.ts: a
+ * parabola over a window that scales with the peak's height and skew, the skew taken off first),
+ * on raw − background, its window chosen on locating-smoothed − background. An extended decay is
+ * not part of the background, so a return peak keeps the extremum of the total faradaic current
+ * that the published ΔEp tables refer to. Falls back to the located peak.
  */
 function relocateAboveBackground(sig: SweepSignals, peak: PeakCandidate, background: (k: number) => number | null, s: 1 | -1): PeakCandidate {
   const seg = sig.segments[peak.segmentIndex]!;
-  const y = (k: number) => s * (sig.locatingA[k]! - (background(k) ?? NaN));
-  let k = peak.index;
-  while (k + 1 < seg.end && y(k + 1) > y(k)) k++;
-  while (k - 1 > seg.start && y(k - 1) > y(k)) k--;
-  const floor = y(k) - Math.max(0.01 * peak.prominenceA, 3 * sig.noiseA);
-  let a = k;
-  let b = k;
-  while (a - 1 > seg.start && k - a < 100 && y(a - 1) >= floor) a--;
-  while (b + 1 < seg.end && b - k < 100 && y(b + 1) >= floor) b++;
-  a = Math.max(seg.start, Math.min(a, k - 2));
-  b = Math.min(seg.end - 1, Math.max(b, k + 2));
-  const e = sig.potentialV.subarray(a, b + 1);
-  const c = Float64Array.from(e, (_, j) => sig.currentA[a + j]! - (background(a + j) ?? NaN));
-  if (!c.every(Number.isFinite) || c.length < 3) return peak;
-  const plain = refinePeakQuadratic({ potentialV: e, currentA: c, from: 0, to: c.length }, { orientation: s });
-  if (!plain) return peak;
-  const v = refinePeakDeskewed({ potentialV: e, currentA: c }, pointsNear(sig, seg, k, plain.potentialV, 2 * reachOf(e, plain.potentialV), background), plain, { orientation: s }) ?? plain;
-  const near = a + nearestIndex(e, v.potentialV);
-  return { ...peak, index: near, potentialV: v.potentialV, currentA: v.currentA + (background(near) ?? 0) };
+  const lo = ownStart(sig.segments, peak.segmentIndex);
+  const level = (k: number) => s * (sig.locatingA[k]! - (background(k) ?? NaN));
+  const raw = (k: number) => s * (sig.currentA[k]! - (background(k) ?? NaN));
+  let k = Math.max(peak.index, lo);
+  while (k + 1 < seg.end && level(k + 1) > level(k)) k++;
+  while (k - 1 > lo && level(k - 1) > level(k)) k--;
+  if (!Number.isFinite(level(k))) return peak;
+  const v = peakVertex({ potentialV: sig.potentialV, level, raw, lo, hi: seg.end }, k, peak.prominenceA, sig.noiseA);
+  if (!v) return peak;
+  const near = nearestIndex(sig.potentialV, lo, seg.end, k, v.potentialV);
+  return { ...peak, index: near, potentialV: v.potentialV, currentA: s * v.currentA + (background(near) ?? 0) };
 }
 
-/**
- * The sweep's points within `reachV` of a potential, as current minus background, walking out from
- * point `from` (on a sweep the potential is monotonic, so the walk stops at the first point beyond).
- */
-function pointsNear(sig: SweepSignals, seg: { start: number; end: number }, from: number, potentialV: number, reachV: number, background: (k: number) => number | null): { potentialV: number[]; currentA: number[] } {
-  const out: { potentialV: number[]; currentA: number[] } = { potentialV: [], currentA: [] };
-  const take = (k: number) => {
-    const e = sig.potentialV[k]!;
-    if (Math.abs(e - potentialV) > reachV) return false;
-    const c = sig.currentA[k]! - (background(k) ?? NaN);
-    if (Number.isFinite(c)) {
-      out.potentialV.push(e);
-      out.currentA.push(c);
-    }
-    return true;
-  };
-  for (let k = from; k >= seg.start && take(k); k--);
-  for (let k = from + 1; k < seg.end && take(k); k++);
-  return out;
-}
-
-function nearestIndex(e: Float64Array, potentialV: number): number {
-  let best = 0;
-  for (let j = 1; j < e.length; j++) if (Math.abs(e[j]! - potentialV) < Math.abs(e[best]! - potentialV)) best = j;
+/** The point of [lo, hi) nearest to a potential, walking from point `from` (a sweep's potential is monotonic). */
+function nearestIndex(e: Float64Array, lo: number, hi: number, from: number, potentialV: number): number {
+  let best = from;
+  for (let j = from - 1; j >= lo && Math.abs(e[j]! - potentialV) < Math.abs(e[best]! - potentialV); j--) best = j;
+  for (let j = best + 1; j < hi && Math.abs(e[j]! - potentialV) < Math.abs(e[best]! - potentialV); j++) best = j;
   return best;
 }
 

@@ -23,15 +23,16 @@ export interface PeakWindow {
 export interface PeakResult {
   direction: PeakDirection;
   /**
-   * Peak potential Ep (V): vertex of a local parabola fitted to the raw points minus their
-   * background (charging/leakage line; an extended decay of an earlier wave is not removed, so a
-   * return peak's Ep is the extremum the published ΔEp tables refer to), with the peak's skew
-   * (a cubic term) taken off first (refinePeakQuadratic.ts, refinePeakDeskewed).
+   * Peak potential Ep (V): vertex of a parabola fitted to the raw points of the peak's top minus
+   * their background (charging/leakage line; an extended decay of an earlier wave is not removed,
+   * so a return peak's Ep is the extremum the published ΔEp tables refer to), with the peak's skew
+   * (a cubic term) taken off first, over a window that reaches up to 20 % of a symmetric peak's
+   * height and less on a skewed one (peakVertex.ts).
    */
   potentialV: number;
   /** Baseline-corrected peak current, positive magnitude (A). */
   heightA: number;
-  /** Measured current at Ep (A, IUPAC sign), from the same parabola (background added back). */
+  /** Measured current at Ep (A, IUPAC sign): the vertex current of the narrow window's parabola (background added back). */
   rawCurrentA: number;
   /** Baseline current at Ep (A, IUPAC sign). */
   baselineCurrentA: number;
