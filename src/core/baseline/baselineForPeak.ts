@@ -151,7 +151,8 @@ type WindowRequest = Pick<BaselineRequest, 'regionStart' | 'marginPoints' | 'wav
 
 /**
  * The pre-peak line; in a window found automatically, the foot of a wave of known shape (a
- * reversible dissolved couple, a Nernstian film) is taken out before the fit (lineUnderOwnFoot.ts). A window the user set is fitted as it stands.
+ * reversible dissolved couple, a Nernstian film, a slow or totally irreversible wave) is taken out
+ * before the fit (lineUnderOwnFoot.ts). A window the user set is fitted as it stands.
  */
 function linearCurve(sig: SweepSignals, peak: PeakCandidate, r: WindowRequest, spec: BaselineSpec | null): BaselineCurve {
   const seg = sig.segments[peak.segmentIndex]!;

@@ -50,39 +50,49 @@ function solve(psi: number, alpha: number): Shape {
   const known = shapes.get(key);
   if (known) return known;
   const n = Math.round((START_XI - END_XI) / STEP);
+  const xiAt = (k: number) => START_XI - (k + 0.5) * STEP;
+  const { chi, peakAt, peak, halfAt } = solveSlowWave(n, STEP, (k) => psi * Math.exp(-alpha * xiAt(k)), (k) => 1 + Math.exp(xiAt(k)), PAST_PEAK);
+  const shape = { chi, peakAt, peak, halfWidth: (peakAt - halfAt) * STEP, pastFormal: (peakAt + 0.5) * STEP - START_XI };
+  shapes.set(key, shape);
+  return shape;
+}
+
+/**
+ * χ of a wave with slow electron transfer on steps of `step` in σt, by product integration with χ
+ * constant on each step: χ_k = r_k·(1 − M·b_k)/(1 + r_k·w₀·b_k), r_k the forward rate over
+ * √(πDσ) and b_k the back reaction's factor 1 + e^ξ (1 where it is left out, irreversibleWaveShape.ts).
+ * Only the foot, the peak and its half-height point are read: it stops `pastPeak` (in σt) past the
+ * peak. The peak between grid points is a parabola through the top three; the half-height point
+ * before it is interpolated linearly (both in steps).
+ */
+export function solveSlowWave(n: number, step: number, rate: (k: number) => number, back: (k: number) => number, pastPeak: number): { chi: Float64Array; peakAt: number; peak: number; halfAt: number } {
   const chi = new Float64Array(n);
   // Weight of step j (χ_j on [jh, (j+1)h]) at x = (k+1)h, a function of k − j.
-  const w = semiIntegralWeights(n, 2 * Math.sqrt(STEP));
+  const w = semiIntegralWeights(n, 2 * Math.sqrt(step));
   let top = 0;
   let length = n;
   for (let k = 0; k < n; k++) {
     let m = 0;
     for (let j = 0; j < k; j++) m += chi[j]! * w[k - j]!;
-    const xi = START_XI - (k + 0.5) * STEP;
-    const kf = psi * Math.exp(-alpha * xi);
-    const both = 1 + Math.exp(xi);
+    const kf = rate(k);
+    const both = back(k);
     chi[k] = (kf * (1 - m * both)) / (1 + kf * w[0]! * both);
     if (chi[k]! > chi[top]!) top = k;
-    // Only the foot, the peak and its half-height point are read: stop PAST_PEAK beyond the peak.
-    if ((k - top) * STEP > PAST_PEAK) {
+    if ((k - top) * step > pastPeak) {
       length = k + 1;
       break;
     }
   }
-  // The peak between grid points (a parabola through the top three), and the half-height point before it.
   const a = chi[top - 1] ?? chi[top]!;
   const c = chi[top + 1] ?? chi[top]!;
   const b = chi[top]!;
   const curve = a - 2 * b + c;
   const shift = curve < 0 ? (0.5 * (a - c)) / curve : 0;
   const peak = b - 0.25 * (a - c) * shift;
-  const peakAt = top + shift;
   let half = top;
   while (half > 0 && chi[half]! > peak / 2) half--;
   const halfAt = half + (peak / 2 - chi[half]!) / (chi[half + 1]! - chi[half]!);
-  const shape = { chi: chi.subarray(0, length), peakAt, peak, halfWidth: (peakAt - halfAt) * STEP, pastFormal: (peakAt + 0.5) * STEP - START_XI };
-  shapes.set(key, shape);
-  return shape;
+  return { chi: chi.subarray(0, length), peakAt: top + shift, peak, halfAt };
 }
 
 /** The shape's current over its peak, ξ counted from the peak (0 before the table starts; held at its last value past the end, 2 RT/nF past the peak). */

@@ -17,8 +17,11 @@
  * A wider wave with a dissolved couple's tail has slow electron transfer: its foot rises more
  * slowly (as e^(−αξ)) and reaches further, and its shape comes from kineticWaveShape.ts: α = 0.5,
  * placed by the peak's distance from the midpoint of its couple (`partnerV`, the return peak), its
- * width agreeing. A slow wave with no return peak, or one whose width says α is far from 0.5,
- * keeps the plain line.
+ * width agreeing. Any other slow wave (no return peak, or a width that says α is far from 0.5) is
+ * tried as totally irreversible (irreversibleWaveShape.ts: one shape for every α, α from the
+ * width), whose foot reaches furthest: a plain line read such waves 0.3–1.1 % low even from 0.7–0.9 V
+ * before their peak. That foot is taken out only where the window and the wave's rising part show
+ * it (showsIrreversibleFoot); otherwise the plain line stays.
  * The diffusion shape starts far before the wave; where the record's first sweep starts so close
  * that the foot carries over 0.3 % of the peak at its start (150 mV before E½ for n = 1), the
  * started wave's own shape is used instead (startedWaveFoot.ts). Null otherwise (the plain line is then used).
@@ -31,6 +34,7 @@ import type { BaselineCurve } from './baselineTypes';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
 import { waveShapeFor, type WaveShape } from './knownWaveShapes';
 import { kineticWaveShapeFor, type KineticWaveShape } from './kineticWaveShape';
+import { irreversibleWaveShapeFor, type IrreversibleWaveShape } from './irreversibleWaveShape';
 import { lineThrough, lineUnderStartedFoot, sweepStartOnFoot } from './startedWaveFoot';
 
 const PASSES = 4;
@@ -44,6 +48,11 @@ export function usesOwnFoot(curve: BaselineCurve): boolean {
 /** How far past Ep the tail is read (in RT/nF), and the least it may have kept of the height there. */
 const TAIL_AT = 3;
 const TAIL_KEPT = 0.5;
+/** A totally irreversible wave's foot is taken out only where the window shows it (showsIrreversibleFoot). */
+const FOOT_AGREES = 0.2;
+const FOOT_KNOWN = 0.25;
+const RISE_SHARE = 0.005;
+const RISE_NOISE = 2;
 
 export function lineUnderOwnFoot(
   sig: SweepSignals,
@@ -68,12 +77,17 @@ export function lineUnderOwnFoot(
   }
   let foot = (_j: number) => 0;
   let shape: WaveShape | undefined;
-  let kinetic: KineticWaveShape | null = null;
+  // A slow wave's shape, picked again by each pass's width: the α = 0.5 wave placed by its couple,
+  // else the totally irreversible wave of that width.
+  let slow: KineticWaveShape | IrreversibleWaveShape | null = null;
+  let pick: ((width: number) => KineticWaveShape | IrreversibleWaveShape | null) | null = null;
+  let under = (_j: number) => 0;
+  let height = 0;
   for (let pass = 0; pass <= PASSES; pass++) {
     const line = lineThrough(sig, fitStart, fitEnd, (j) => sig.currentA[j]! - foot(j));
     if (!line) return null;
-    const under = (j: number) => line.intercept + line.slope * sig.potentialV[j]!;
-    const height = s * (sig.locatingA[peak.index]! - under(peak.index));
+    under = (j: number) => line.intercept + line.slope * sig.potentialV[j]!;
+    height = s * (sig.locatingA[peak.index]! - under(peak.index));
     if (!(height > 0)) return null;
     const halfV = crossing(sig, (j) => s * (sig.locatingA[j]! - under(j)), peak.index, spanStart, -1, height / 2);
     if (halfV === null) return null;
@@ -85,15 +99,17 @@ export function lineUnderOwnFoot(
         if (tail !== found.diffusing) return null;
       } else {
         // Wider than a reversible wave, with a dissolved species' tail: slow electron transfer.
-        kinetic = tail && pastMidpoint !== undefined ? kineticWaveShapeFor(width, pastMidpoint) : null;
-        if (!kinetic) return null;
+        if (!tail) return null;
+        const placed = pastMidpoint === undefined ? null : kineticWaveShapeFor(width, pastMidpoint);
+        pick = placed ? (w) => kineticWaveShapeFor(w, pastMidpoint!) : irreversibleWaveShapeFor;
       }
     }
     let at: (xi: number) => number;
-    if (kinetic) {
+    if (pick) {
       // The width is measured again over each new line; the shape follows it.
-      kinetic = kineticWaveShapeFor(width, pastMidpoint!) ?? kinetic;
-      at = kinetic.at;
+      slow = pick(width) ?? slow;
+      if (!slow) return null;
+      at = slow.at;
     } else {
       if (!found || (shape && found !== shape)) return null;
       shape = found;
@@ -101,11 +117,64 @@ export function lineUnderOwnFoot(
     }
     if (pass < PASSES) foot = (j) => s * height * at(xiFromPeak(j));
   }
-  const words = kinetic ? kinetic.words : shape!.words;
+  if (slow && 'alpha' in slow) {
+    const irreversible = slow;
+    if (!showsIrreversibleFoot(sig, peak, window, under, height, (j) => irreversible.at(xiFromPeak(j)), s)) return null;
+  }
+  const words = slow ? slow.words : shape!.words;
   return linearPrePeakBaseline(
     { potentialV: sig.potentialV, currentA: sig.currentA, fitStart, fitEnd, spanStart, spanEnd: seg.end },
     { less: { what: `${OWN_FOOT_WORDS}, from ${words}`, currentA: foot } },
   ).curve;
+}
+
+/**
+ * Whether a wave given the totally irreversible shape (irreversibleWaveShape.ts) is one. One width
+ * cannot tell: a quasi-reversible couple with α far from 0.5, a reversible wave widened by an
+ * ohmic drop, or one followed by a chemical step can be as wide, and their foot before the wave is
+ * far smaller than the irreversible one's (the back reaction holds it near E°′). Taken out in full
+ * it then tilts the line the other way, and ip read 1–56 % high on simulated couples (k° 3e-4 to
+ * 3e-3 cm/s with α = 0.3, 1 kΩ at 1 V/s, EC) where the plain line read 0.05–10 % low. So the
+ * wave must show that foot where the line is fitted and that shape where it rises:
+ * - in the window, the foot's amplitude fitted freely beside the line (the same least squares with
+ *   the shape as a third column) lies within FOOT_AGREES + 2 standard errors of the wave's height,
+ *   and that standard error (from the noise σ) is at most FOOT_KNOWN of the height: a window too
+ *   noisy to see the foot keeps the plain line. On the simulations: irreversible waves 0.98–1.09
+ *   of the height, the others 0.02–0.87 (1.23 for one that starts on its foot, caught below);
+ * - from the window's end to the peak, the current over the line stays within
+ *   max(RISE_SHARE of the height, RISE_NOISE·σ) of the shape: irreversible waves 0.03–0.24 %
+ *   (0.4 % where the sweep starts on the foot), the others 0.36–7 %.
+ * Our criteria and margins, set on those simulations.
+ */
+function showsIrreversibleFoot(
+  sig: SweepSignals,
+  peak: PeakCandidate,
+  window: [number, number],
+  under: (j: number) => number,
+  height: number,
+  shape: (j: number) => number,
+  s: 1 | -1,
+): boolean {
+  const [from, to] = window;
+  // The foot's amplitude beside a free line: both taken off their own line through the window.
+  const ly = lineThrough(sig, from, to, (j) => s * sig.currentA[j]!);
+  const lf = lineThrough(sig, from, to, shape);
+  if (!ly || !lf) return false;
+  let sff = 0;
+  let sfy = 0;
+  for (let j = from; j < to; j++) {
+    const e = sig.potentialV[j]!;
+    const f = shape(j) - (lf.intercept + lf.slope * e);
+    sff += f * f;
+    sfy += f * (s * sig.currentA[j]! - (ly.intercept + ly.slope * e));
+  }
+  if (!(sff > 0)) return false;
+  const amplitude = sfy / sff;
+  const stdErr = sig.noiseA / Math.sqrt(sff);
+  if (!(stdErr <= FOOT_KNOWN * height) || !(Math.abs(amplitude / height - 1) <= FOOT_AGREES + (2 * stdErr) / height)) return false;
+  const limit = Math.max(RISE_SHARE * height, RISE_NOISE * sig.noiseA);
+  for (let j = to; j < peak.index; j++) if (!(Math.abs(s * (sig.locatingA[j]! - under(j)) - height * shape(j)) <= limit)) return false;
+  return true;
 }
 
 /**
