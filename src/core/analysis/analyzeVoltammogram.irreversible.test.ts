@@ -41,3 +41,26 @@ describe('analyzeVoltammogram on a totally irreversible couple', () => {
     for (const c of couples) expect(c.deltaEpV!).toBeLessThan(0.6);
   });
 });
+
+describe('a totally irreversible wave started on its own long foot', () => {
+  // Nicholson & Shain, Anal. Chem. 36 (1964) 706; Bard & Faulkner 2nd ed. §6.3 (from memory): far
+  // before its peak a totally irreversible wave's current is e^x, and with the peak at x = 0.21,
+  // √π·χ = 0.4958, the foot is 4.4·e^(−αnFξ/RT) of the peak: at α = 0.3, 1.3 % at 500 mV before
+  // Ep, 0.01 % at 900 mV. The first must be named (the sweep starts on the wave), the second not.
+  const epOf = (startV: number) => analyzeVoltammogram(simulatedVoltammogram({ k0CmPerS: 1e-5, alpha: 0.3, startV, switchV: -1.4 })).cycles[0]!.peaks.find((p) => p.direction === 'cathodic')!.potentialV;
+  const ep = epOf(0.6);
+  const onFoot = (before: number) => {
+    const a = analyzeVoltammogram(simulatedVoltammogram({ k0CmPerS: 1e-5, alpha: 0.3, startV: ep + before, switchV: -1.4 }));
+    return a.cycles[0]!.warnings.filter((w) => w.code === 'START_ON_FOOT');
+  };
+  it('is named START_ON_FOOT at 500 mV before Ep, with about 1 % of its peak there', () => {
+    const w = onFoot(0.5);
+    expect(w).toHaveLength(1);
+    const share = Number(/carries about ([\d.]+) %/.exec(w[0]!.message)?.[1]);
+    expect(share).toBeGreaterThan(0.9);
+    expect(share).toBeLessThan(1.7);
+  });
+  it('is not named at 900 mV before Ep', () => {
+    expect(onFoot(0.9)).toHaveLength(0);
+  });
+});

@@ -19,6 +19,7 @@ import { crossing } from '../peaks/levelCrossing';
 import type { BaselineCurve } from './baselineTypes';
 import { linearPrePeakBaseline } from './linearPrePeakBaseline';
 import { reversiblePeakXi, reversibleWaveShape, startedReversibleWave, type StartedReversibleWave } from './reversibleWaveShape';
+import { irreversibleWaveShapeFor } from './irreversibleWaveShape';
 
 /** |Ep − Ep/2| of a reversible wave in RT/nF (Bard & Faulkner 2nd ed. (2001) eq. 6.2.21). */
 const REVERSIBLE_HALF_WIDTH = 2.2;
@@ -46,14 +47,20 @@ export interface SweepStartOnFoot {
  * Null when the start lies far enough before the wave that its foot there is below
  * START_FOOT_LEVEL. A wider (slower) wave's foot reaches further, about in proportion to its
  * |Ep − Ep/2| (`halfPeakWidthV`; e^(−αξ) against e^(−ξ), our scaling), so the distance is counted in
- * units of that width.
+ * units of that width. A wave more than 10 % wider than a reversible one may be totally
+ * irreversible, whose foot is 4.4·e^(−αξ) of its peak with α from the width (irreversibleWaveShape.ts,
+ * Nicholson & Shain 1964): the larger of the two is taken, so that a slow wave started where its
+ * foot still carries a per cent of its peak is named (α = 0.3 started 500 mV before Ep: 1.3 %,
+ * which the scaled reversible foot put below 0.3 %).
  */
 export function sweepStartOnFoot(sig: SweepSignals, peak: PeakCandidate, nfrt: number, halfPeakWidthV?: number | null, partnerV?: number): SweepStartOnFoot | null {
   const seg = sig.segments[peak.segmentIndex]!;
   const s = seg.direction === 'positive' ? 1 : -1;
   const fromPeak = -s * (sig.potentialV[seg.start]! - peak.potentialV);
-  const widthScale = halfPeakWidthV ? Math.min(1, REVERSIBLE_HALF_WIDTH / (Math.abs(halfPeakWidthV) * nfrt)) : 1;
-  const footAtStart = reversibleWaveShape(fromPeak * nfrt * widthScale + reversiblePeakXi());
+  const halfXi = halfPeakWidthV ? Math.abs(halfPeakWidthV) * nfrt : null;
+  const widthScale = halfXi ? Math.min(1, REVERSIBLE_HALF_WIDTH / halfXi) : 1;
+  const slow = halfXi && halfXi > REVERSIBLE_HALF_WIDTH * (1 + WIDTH_TOLERANCE) ? irreversibleWaveShapeFor(halfXi) : null;
+  const footAtStart = Math.max(reversibleWaveShape(fromPeak * nfrt * widthScale + reversiblePeakXi()), slow ? slow.at(fromPeak * nfrt) : 0);
   if (!(footAtStart > START_FOOT_LEVEL)) return null;
   const half = partnerV === undefined ? peak.potentialV - (s * reversiblePeakXi()) / nfrt : (peak.potentialV + partnerV) / 2;
   return { startFromPeakV: fromPeak, startFromHalfV: -s * (sig.potentialV[seg.start]! - half), halfFromCouple: partnerV !== undefined, footAtStart };
