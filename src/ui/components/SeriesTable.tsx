@@ -59,7 +59,7 @@ export function SeriesTable({ result }: { result: RunSeriesResult }) {
     <div className="series-tables" data-testid="series-table" data-d-first={result.analysis.couples[0]?.diffusion?.diffusionCm2PerS ?? undefined}>
       {result.analysis.couples.map((c) => (
         <table key={c.index} className="data kv">
-          <caption>Couple {c.index + 1} · {c.points.length} scan rates</caption>
+          <caption>Couple {c.index + 1} · {filesAndRates(c.points)}</caption>
           <tbody>
             {rows(result, c).map(([k, v]) => (
               <tr key={k}><th scope="row">{k}</th><td className="wrap">{v}</td></tr>
@@ -76,4 +76,11 @@ export function SeriesTable({ result }: { result: RunSeriesResult }) {
       {result.analysis.warnings.length > 0 ? <ul className="notes">{result.analysis.warnings.map((w) => <li key={w.message}>{w.message}</li>)}</ul> : null}
     </div>
   );
+}
+
+/** "6 scan rates", or "12 files at 1 scan rate" where files share a rate. */
+function filesAndRates(points: ReadonlyArray<{ scanRateVPerS: number }>): string {
+  const rates = new Set(points.map((p) => p.scanRateVPerS)).size;
+  const r = `${rates} scan rate${rates === 1 ? '' : 's'}`;
+  return rates === points.length ? r : `${points.length} files at ${r}`;
 }

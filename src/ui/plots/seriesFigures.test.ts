@@ -4,7 +4,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { fitLine } from '../../state/testSupport';
-import { confidenceBand } from './seriesFigures';
+import { analyzeSeries } from '../../core/analysis/analyzeSeries';
+import { fakeAnalysis } from '../../core/analysis/seriesTestSupport';
+import { buildSeriesFigures, confidenceBand } from './seriesFigures';
 
 describe('confidenceBand', () => {
   // x = 1…4, y = 2.1, 3.9, 6.2, 7.8: slope 1.94, intercept 0.15, residuals 0.01, −0.13, 0.23, −0.11,
@@ -23,5 +25,19 @@ describe('confidenceBand', () => {
   });
   it('is absent without a residual degree of freedom', () => {
     expect(confidenceBand(fitLine([1, 2], [1, 2]), [1, 2])).toBeNull();
+  });
+});
+
+describe('the |ip| against v½ figure of one scan rate', () => {
+  // Randles–Ševčík has no intercept (Bard & Faulkner 2nd ed. §6.2): replicates at one rate give
+  // the line through the origin, drawn from the origin to their v½ (one point would draw nothing).
+  it('draws the line through the origin from x = 0', () => {
+    const files = [1.01, 0.99, 1].map((f, i) => ({ fileName: `rep${i}`, scanRateVPerS: 0.1, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: f * 16.5e-6, ipcA: f * 16.5e-6 }]) }));
+    const couple = analyzeSeries(files, { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 }).couples[0]!;
+    const line = buildSeriesFigures(couple, 'SHE').current.data.find((d) => (d as { name?: string }).name?.startsWith('forward-peak line')) as { x: number[]; y: number[] } | undefined;
+    expect(line).toBeDefined();
+    expect(line!.x[0]).toBe(0);
+    expect(line!.y[0]).toBe(0);
+    expect(line!.x[1]).toBeCloseTo(Math.sqrt(0.1), 12);
   });
 });

@@ -86,7 +86,8 @@ function points(ps: SeriesPoint[], x: (p: SeriesPoint) => number, y: Getter, fac
 }
 
 function fitLine(fit: FitLineResult, xs: number[], factor: number, name: string): Data {
-  const lo = Math.min(...xs);
+  // A line through the origin from one scan rate is drawn from the origin, or it would be a point.
+  const lo = new Set(xs).size === 1 && fit.intercept === 0 ? 0 : Math.min(...xs);
   const hi = Math.max(...xs);
   const x = [lo, hi];
   return {
