@@ -3,9 +3,7 @@
  * Applied Regression Analysis, 3rd ed. (1998), §1.4), worked by hand for four points.
  */
 import { describe, expect, it } from 'vitest';
-import { fitLine } from '../../state/testSupport';
-import { analyzeSeries } from '../../core/analysis/analyzeSeries';
-import { fakeAnalysis } from '../../core/analysis/seriesTestSupport';
+import { fitLine, oneRateSeriesCouple } from '../../state/testSupport';
 import { buildSeriesFigures, confidenceBand } from './seriesFigures';
 
 describe('confidenceBand', () => {
@@ -32,8 +30,7 @@ describe('the |ip| against v½ figure of one scan rate', () => {
   // Randles–Ševčík has no intercept (Bard & Faulkner 2nd ed. §6.2): replicates at one rate give
   // the line through the origin, drawn from the origin to their v½ (one point would draw nothing).
   it('draws the line through the origin from x = 0', () => {
-    const files = [1.01, 0.99, 1].map((f, i) => ({ fileName: `rep${i}`, scanRateVPerS: 0.1, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: f * 16.5e-6, ipcA: f * 16.5e-6 }]) }));
-    const couple = analyzeSeries(files, { areaCm2: 0.0707, concentrationMolPerCm3: 1e-6 }).couples[0]!;
+    const couple = oneRateSeriesCouple([1.01, 0.99, 1].map((f) => f * 16.5e-6));
     const line = buildSeriesFigures(couple, 'SHE').current.data.find((d) => (d as { name?: string }).name?.startsWith('forward-peak line')) as { x: number[]; y: number[] } | undefined;
     expect(line).toBeDefined();
     expect(line!.x[0]).toBe(0);
