@@ -35,7 +35,7 @@ export function assembleMeasurement(fileName: string, front: FrontMatter, table:
   const reference = chooseReference(fileName, pre, roles, header, warnings);
   const cols = buildColumns(fileName, table, roles, units, convention.value, pre.areaCm2, front.layout.decimalMark.value === ',', warnings);
   const written = pre.scanRateVPerS ?? scanRateInNames(header);
-  const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: written, unitless: pre.scanRateWithoutUnit }, warnings);
+  const scan = chooseScanRate({ fileName, override: o.scanRateVPerS, potentialV: cols.potentialV, timeS: cols.timeS, segments: cols.split.segments, preamble: written, unitless: pre.scanRateWithoutUnit, timeUnitAssumed: units.time !== null && !units.time.overridden && roles.headers[roles.timeColumn ?? -1]?.unit?.kind !== 'time' }, warnings);
   const doubt = !convention.overridden && !pre.convention ? reversedLoop(cols) : null;
   if (doubt) {
     convention = { ...convention, explanation: `${convention.explanation}; but the loop of cycle ${doubt.cycle} runs the polarographic way round (∮ i dE / ∮ |i dE| = ${doubt.orientation.toFixed(2)}): check` };

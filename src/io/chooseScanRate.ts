@@ -25,6 +25,8 @@ interface Input {
   preamble: PreambleValue | null;
   /** A scan-rate line with a number but no unit (readScanRate.ts unitlessScanRateLine), or null. */
   unitless?: PreambleValue | null;
+  /** True when the time column's unit was not in the file and seconds were assumed. */
+  timeUnitAssumed?: boolean;
 }
 
 const fmt = (v: number) => (v >= 1 ? `${+v.toPrecision(4)} V/s` : `${+(v * 1000).toPrecision(4)} mV/s`);
@@ -49,6 +51,9 @@ export function chooseScanRate(input: Input, warnings: ImportWarning[]): ScanRat
     return { guess: { value: null, overridden: false, explanation: `scan rate unknown — no time column, ${bare ? `a scan-rate line without a unit on line ${bare.line} (not used)` : 'no scan-rate line in the preamble'}, none in the file name` }, source: null };
   }
   if (bare && chosen.source !== 'option') warnings.push(unitlessNote(fileName, bare, chosen));
+  if (chosen.source === 'time' && input.timeUnitAssumed && !found.slice(1).some((f) => Math.abs(f.value / chosen.value - 1) <= 0.05)) {
+    warnings.push(makeWarning('UNIT_ASSUMED', `${fileName}: no time unit found; read as seconds, which gives ${fmt(chosen.value)}. In milliseconds it would be ${fmt(chosen.value * 1000)}, and every rate-dependent result with it (D goes as 1/v): set the time unit if the column is not in seconds`));
+  }
   for (const other of found.slice(1)) {
     if (Math.abs(other.value - chosen.value) > 0.05 * chosen.value) {
       warnings.push(makeWarning('SCAN_RATE_DISAGREES', `${fileName}: scan rate ${fmt(chosen.value)} (${chosen.source}) differs from ${fmt(other.value)} (${other.source}, ${other.why}); ${fmt(chosen.value)} is used${unitHint(chosen, other.value)}`));

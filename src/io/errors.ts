@@ -79,7 +79,8 @@ export type ImportWarningCode =
   | 'SCAN_RATE_NO_UNIT'
   | 'TIME_NOT_MONOTONIC'
   | 'CYCLE_COLUMN_IGNORED'
-  | 'CONVENTION_DOUBTED';
+  | 'CONVENTION_DOUBTED'
+  | 'MINUS_SIGNS_READ';
 
 export interface ImportWarning {
   code: ImportWarningCode;

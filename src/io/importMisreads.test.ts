@@ -201,3 +201,35 @@ describe('header lines written unlike the numbers below them', () => {
     expect(r.measurement.detection.headerLine.value).toBeNull();
   });
 });
+
+describe('numbers written with the typographic minus sign', () => {
+  // Unicode 15, U+2212 MINUS SIGN: text copied from a report carries it where an export writes "-".
+  it('are read as negative numbers, the same as with "-", and said once with the line', () => {
+    const plain = table('E (V),I (A)', EI);
+    const typographic = plain.replace(/-/g, '\u2212');
+    const a = read('plain.csv', plain);
+    const b = read('typographic.csv', typographic);
+    expect(Array.from(b.measurement.potentialV)).toEqual(Array.from(a.measurement.potentialV));
+    expect(Array.from(b.measurement.currentA)).toEqual(Array.from(a.measurement.currentA));
+    const w = b.warnings.find((x) => x.code === 'MINUS_SIGNS_READ');
+    expect(w?.lines).toEqual([2]);
+    expect(codes(a)).not.toContain('MINUS_SIGNS_READ');
+  });
+});
+
+describe('a time column without a unit', () => {
+  // The trace steps 5 mV every 50 ms: 0.1 V/s by construction. Written in ms under a bare "t",
+  // read as seconds it gives 0.1 mV/s, so the assumption is said with both readings.
+  const ms = (r: number[]) => [(r[0] as number) * 1000, r[1] as number, (r[2] as number).toExponential(6)];
+  it('is read as seconds and says what milliseconds would give', () => {
+    const r = read('bare_t.csv', table('t,E,I', ms));
+    expect(r.measurement.scanRateVPerS).toBeCloseTo(1e-4, 8);
+    const w = r.warnings.find((x) => x.code === 'UNIT_ASSUMED' && /time unit/.test(x.message));
+    expect(w?.message).toMatch(/0\.1 mV\/s.*100 mV\/s/);
+  });
+  it('says nothing when the unit is written, or when another source agrees', () => {
+    const s = (r: number[]) => [r[0] as number, r[1] as number, (r[2] as number).toExponential(6)];
+    expect(read('t_s.csv', table('t (s),E (V),I (A)', s)).warnings.some((x) => /time unit/.test(x.message))).toBe(false);
+    expect(read('bare_t.csv', `Scan rate: 100 mV/s\n${table('t,E,I', s)}`).warnings.some((x) => /time unit/.test(x.message))).toBe(false);
+  });
+});

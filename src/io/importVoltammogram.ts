@@ -100,7 +100,9 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   if (decoded.encoding.value === 'latin1' && !decoded.encoding.overridden) {
     warnings.push(makeWarning('ENCODING_GUESSED', `${fileName}: not valid UTF-8, read as Latin-1; check characters such as µ and °`));
   }
-  const { text, lineEnding } = normaliseLineEnds(decoded.text);
+  const ended = normaliseLineEnds(decoded.text);
+  const lineEnding = ended.lineEnding;
+  const text = plainMinusSigns(fileName, ended.text, warnings);
   const sample = sampleLines(text);
   const layout = detectLayout(fileName, sample.lines, o);
   refuseSplitDecimalComma(fileName, sample.lines, layout);
@@ -116,6 +118,25 @@ function readFrontMatter(fileName: string, data: ImportInput, o: ImportOverrides
   // A convention stated in the current column's own name: "I (µA, cathodic positive)".
   pre.convention ??= header.names?.filter((n) => readHeader(n).role === 'current').map((n) => readConvention(n, namesLine + 1)).find((c) => c !== null) ?? null;
   return { decoded, text, lineEnding, layout, header, preambleLines, headLines, pre, startOffset: sample.offsets[layout.firstDataLine] ?? 0 };
+}
+
+/**
+ * The typographic minus sign (U+2212, and its small and full-width forms), which text copied from
+ * a report or a word processor carries, read as the ASCII hyphen-minus that numbers are parsed with.
+ * Said once, with the first line that holds one.
+ */
+function plainMinusSigns(fileName: string, text: string, warnings: ImportWarning[]): string {
+  const at = text.search(/[\u2212\uFE63\uFF0D]/);
+  if (at === -1) return text;
+  const line = countLinesBefore(text, at) + 1;
+  warnings.push(makeWarning('MINUS_SIGNS_READ', `${fileName}: minus signs written as the typographic "−" (from line ${line} on) were read as "-"`, [line]));
+  return text.replace(/[\u2212\uFE63\uFF0D]/g, '-');
+}
+
+function countLinesBefore(text: string, at: number): number {
+  let n = 0;
+  for (let i = text.indexOf('\n'); i !== -1 && i < at; i = text.indexOf('\n', i + 1)) n++;
+  return n;
 }
 
 function* importSteps(fileName: string, data: ImportInput, o: ImportOverrides, reader: 'auto' | 'papaparse'): Generator<number, ImportResult> {

@@ -19,6 +19,8 @@ describe('readScanRateLine', () => {
     ['Velocità di scansione: 5 mV/s', 0.005],
     ['Velocidade de varredura: 100 mV/s', 0.1],
     ['Szybkość skanowania: 50 mV/s', 0.05],
+    ['scan_rate = 0.1 V/s', 0.1],
+    ['Sweep.Rate: 250 mV/s', 0.25],
   ];
   for (const [line, v] of lines) {
     it(`"${line}" → ${v} V/s`, () => {

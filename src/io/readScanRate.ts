@@ -8,7 +8,7 @@ import { NUMBER_PATTERN } from './textLines';
 import type { PreambleValue } from './types';
 import { scanRateUnitFactor } from './units';
 
-const RATE_WORDS = /(scan|sweep)\s*-?\s*rate|scanrate|sweeprate|^\s*v\s*[=:([]|vorschub|scangeschwindigkeit|velocidad\s+de\s+(barrido|escaneo|exploraci[oó]n)|vitesse\s+de\s+(balayage|scan)|velocit[aà]\s+di\s+scansione|(velocidade|taxa)\s+de\s+(varredura|varrimento)|szybko[sś][cć]\s+(skanowania|polaryzacji|przemiatania)/i;
+const RATE_WORDS = /(scan|sweep)[\s_.-]*rate|scanrate|sweeprate|^\s*v\s*[=:([]|vorschub|scangeschwindigkeit|velocidad\s+de\s+(barrido|escaneo|exploraci[oó]n)|vitesse\s+de\s+(balayage|scan)|velocit[aà]\s+di\s+scansione|(velocidade|taxa)\s+de\s+(varredura|varrimento)|szybko[sś][cć]\s+(skanowania|polaryzacji|przemiatania)/i;
 
 /** A potential per time unit as written: mV/s, mV s-1, V·s⁻¹, mVs-1, mV.s-1, Vps (checked by scanRateUnitFactor). */
 const RATE_UNIT = '([mµμu]?V\\s*(?:[/.·*]\\s*)?(?:s(?:ec)?(?:\\s*\\^?\\s*[-−⁻]\\s*[1¹])?|ps)(?![a-z]))';

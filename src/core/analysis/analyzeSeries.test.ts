@@ -203,6 +203,19 @@ describe('analyzeSeries with one scan rate', () => {
   });
 });
 
+describe('a D no liquid allows', () => {
+  // Randles–Ševčík (Bard & Faulkner 2nd ed. §6.2): ip ∝ D^½, so peaks 30× the computed ones mean
+  // D 900× larger, 6.8e-3 cm²/s: faster than H⁺ in water (9.31e-5 cm²/s at 25 °C, CRC Handbook,
+  // "Ionic conductivity and diffusion at infinite dilution", from memory). Flagged; 7.6e-6 is not.
+  it('is flagged IMPLAUSIBLE_D, an ordinary one not', () => {
+    const series = (f: number) => analyzeSeries(v.map((s, i) => ({ fileName: `d${i}`, scanRateVPerS: s, analysis: fakeAnalysis([{ epaV: 0.0295, epcV: -0.0295, ipaA: f * rev(s), ipcA: f * rev(s) }]) })), opts);
+    const fast = series(30);
+    expect(fast.couples[0]?.diffusion?.diffusionCm2PerS).toBeGreaterThan(6e-3);
+    expect(fast.warnings.find((w) => w.code === 'IMPLAUSIBLE_D')?.message).toMatch(/UNRELIABLE/);
+    expect(series(1).warnings.map((w) => w.code)).not.toContain('IMPLAUSIBLE_D');
+  });
+});
+
 describe('analyzeSeries k° for a reversible couple', () => {
   // Nicholson 1965 table (from memory): 61 mV ↔ ψ = 20, 63 mV ↔ 7 — steep, so one file at 63 mV
   // among reversible ones gives no k°, only the lower bound (design, common practice, no source).

@@ -130,12 +130,23 @@ function seriesWarnings(files: SeriesFileInput[], couples: SeriesCouple[], o: Re
     if (hint) {
       out.push({ code: 'ELECTRON_COUNT', couple: c.index, message: `couple ${c.index}: forward |Ep − Ep/2| = ${(hint.halfPeakWidthV * 1000).toFixed(1)} mV is narrower than any diffusing couple with n = ${o.electronCount} (2.20RT/nF = ${((2.2 * thermalVoltageV(o.temperatureK) * 1000) / o.electronCount).toFixed(1)} mV) and reads as n ≈ ${hint.electronCount}; D (∝ n⁻³) and k° assume n = ${o.electronCount} — rerun with n = ${hint.electronCount} if that is the couple's electron count` });
     }
+    const d = c.diffusion?.status === 'range-only' ? null : (c.diffusion?.diffusionCm2PerS ?? null);
+    if (d !== null && d > FASTEST_DIFFUSION_CM2_PER_S) {
+      out.push({ code: 'IMPLAUSIBLE_D', couple: c.index, message: `couple ${c.index}: D = ${d.toExponential(2)} cm²/s is UNRELIABLE: faster than any species diffuses in a liquid (H⁺ in water, the fastest, 9.3e-5 cm²/s at 25 °C). Check the scan rate (a time column in ms read as s makes D 1000× too large), the area, the concentration, the current unit and n` });
+    }
     if (c.regime === 'diffusion' && c.forwardFit && c.forwardFit.pointCount >= 3 && c.forwardFit.r2 < 0.98) {
       out.push({ code: 'NONLINEAR', couple: c.index, message: `couple ${c.index}: ip against v^½ is not straight (R² = ${c.forwardFit.r2.toFixed(3)})` });
     }
   }
   return out;
 }
+
+/**
+ * Above this D (cm²/s) no species diffuses in a liquid: H⁺ in water, the fastest, has 9.31e-5 at
+ * 25 °C (CRC Handbook of Chemistry and Physics, "Ionic conductivity and diffusion at infinite
+ * dilution", from memory); 1e-4 leaves room for warm solutions and rounding.
+ */
+const FASTEST_DIFFUSION_CM2_PER_S = 1e-4;
 
 /** Median Ep of a couple's lone peaks (for a couple that has no E½). */
 function lonePeakV(c: SeriesCouple): number | null {

@@ -234,7 +234,7 @@ export interface SeriesCouple {
 
 export type SeriesWarningCode =
   | 'SINGLE_SCAN_RATE' | 'NO_AREA' | 'NO_CONCENTRATION' | 'UNMATCHED_COUPLE' | 'NOT_DETERMINABLE'
-  | 'NONLINEAR' | 'DUPLICATE_SCAN_RATE' | 'MISSING_CYCLE' | 'ELECTRON_COUNT' | 'OHMIC_DROP';
+  | 'NONLINEAR' | 'DUPLICATE_SCAN_RATE' | 'MISSING_CYCLE' | 'ELECTRON_COUNT' | 'OHMIC_DROP' | 'IMPLAUSIBLE_D';
 
 export interface SeriesWarning {
   code: SeriesWarningCode;
