@@ -233,3 +233,13 @@ describe('a time column without a unit', () => {
     expect(read('bare_t.csv', `Scan rate: 100 mV/s\n${table('t,E,I', s)}`).warnings.some((x) => /time unit/.test(x.message))).toBe(false);
   });
 });
+
+describe('a cycle column that never changes', () => {
+  // Our triangle runs two cycles (−0.2 → 0.4 → −0.2 V twice); a "Cycle" column of 1 on every row
+  // numbers none of them, so the cycles come from the potential's turns, with a warning.
+  it('is set aside and the two cycles are found from the potential', () => {
+    const r = read('one_cycle_number.csv', table('Time (s),Potential (V),Current (A),Cycle', (row) => [row[0] as number, row[1] as number, (row[2] as number).toExponential(6), 1]));
+    expect(r.measurement.cycles).toHaveLength(2);
+    expect(r.warnings.find((w) => w.code === 'CYCLE_COLUMN_IGNORED')?.message).toMatch(/holds 1 on every row/);
+  });
+});

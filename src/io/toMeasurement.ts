@@ -102,8 +102,15 @@ export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment
   if (u.currentDensity && areaCm2) currentFactor *= areaCm2.value;
   const currentA = pick(a.currentColumn, currentFactor);
   const timeS = a.timeColumn !== null && u.time ? pick(a.timeColumn, TIME_FACTORS[u.time.value]) : null;
-  const cycleColumn = a.cycleColumn !== null ? pick(a.cycleColumn, 1) : null;
+  let cycleColumn = a.cycleColumn !== null ? pick(a.cycleColumn, 1) : null;
   const extraColumns: Record<string, Float64Array> = {};
+  const own = cycleColumn && isConstant(cycleColumn) ? findSweepSegments(potentialV) : null;
+  if (own && own.cycles.length > 1 && a.cycleColumn !== null) {
+    // One number on every row numbers no cycles: the potential's own turns split them.
+    warnings.push(makeWarning('CYCLE_COLUMN_IGNORED', `${fileName}: column ${a.cycleColumn + 1} holds ${cycleColumn![0]} on every row, but the potential runs ${own.cycles.length} cycles; cycles are found from the potential and the column is kept as an extra column`));
+    extraColumns[a.columns[a.cycleColumn]?.name ?? `column ${a.cycleColumn + 1}`] = cycleColumn!;
+    cycleColumn = null;
+  }
   a.columns.forEach((c) => {
     if ((c.role === 'other' || c.role === 'index') && (a.stats[c.index]?.finite ?? 0) > 0) {
       let key = c.name;
@@ -172,4 +179,11 @@ function assertPotentialChanges(fileName: string, e: Float64Array, column: numbe
   if (!(hi > lo)) {
     throw new ImportError('CONSTANT_POTENTIAL', fileName, `the potential column never changes (always ${lo} V), so this is not a voltammogram — is another column the potential?`, { line, column: column + 1 });
   }
+}
+
+/** Whether every value of a column is the same. */
+function isConstant(c: Float64Array): boolean {
+  const first = c[0];
+  for (let i = 1; i < c.length; i++) if (c[i] !== first) return false;
+  return true;
 }
