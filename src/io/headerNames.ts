@@ -45,7 +45,7 @@ const DENSITY_WORDS = /^(j|j\s*we|current\s*density|density|stromdichte|densidad
 const MAX_NAME_CHARS = 200;
 
 const SECONDARY = /^(i2|current\s*2|we\s*2\s*current|e2|we\s*2\s*potential|potential\s*2|j2)$/i;
-const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|power|resistance|freq|phase|ox\/red|control|status|flag|mode|comment/i;
+const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|power|resistance|freq|phase|ox\/red|control|status|flag|mode|comment|\breal\b|\bimag(inary)?\b|modulus|impedance|admittance|\bz\s*(['′″"]|re\b|im\b|real|imag)|\b(re|im)\s*\(\s*z\s*\)|\|\s*z\s*\|/i;
 /**
  * Settings of the instrument, written as columns beside the measured values: a current range, a
  * gain, a sensitivity, a compliance or limit; for a current also a set, applied or target value

@@ -162,6 +162,12 @@ describe('names that say what the columns are', () => {
     });
     const text = `Freq (Hz),Z' (Ohm),-Z'' (Ohm),Phase (deg)\n${rows.join('\n')}\n`;
     expect(() => read('spectrum.csv', text)).toThrow(/name no potential and no current/);
+    // Impedance named in words or as Z parts, without units, is refused the same way.
+    for (const names of ['Frequency,Real,Imag,Phase', 'Freq,Zre,Zim,Phase', 'freq,Re(Z),Im(Z),|Z|']) {
+      expect(() => read('spectrum_words.csv', `${names}\n${rows.join('\n')}\n`), names).toThrow(/name no potential and no current/);
+    }
+    // Primed names are refused too (no current column can be told).
+    expect(() => read('spectrum_primes.csv', `Freq,Z',Z'',phase\n${rows.join('\n')}\n`)).toThrow(/could not tell which column is the current/);
     // Names that say nothing ("x", "y") still leave the roles to the numbers.
     expect(read('xy.csv', table('x,y', EI)).measurement.detection.columns.map((c) => c.role)).toEqual(['potential', 'current']);
   });
