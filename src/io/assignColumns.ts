@@ -3,7 +3,7 @@
  * the user's override first, then the header text, then the shape of the numbers. Each choice
  * carries a sentence saying why, so the user can see and correct it.
  */
-import { columnStats, looksLikeCycle, looksLikeIndex, looksLikeTime } from './columnStats';
+import { columnStats, looksLikeCycle, looksLikeIndex, looksLikeSweep, looksLikeTime, sweepShape } from './columnStats';
 import type { ColumnStats } from './columnStats';
 import { ImportError, listSome, makeWarning } from './errors';
 import type { ImportWarning } from './errors';
@@ -37,11 +37,13 @@ export function assignColumns(fileName: string, names: string[] | null, columns:
   const stats = columns.map((c) => columnStats(c));
   const slots: Slot[] = headers.map((h, j) => slotFromHeader(h, stats[j] as ColumnStats));
   pickCurrentColumn(slots, headers);
+  const potentialNote = pickPotentialColumn(slots, headers, columns);
   dedupeRoles(slots, headers);
   applyOverrides(fileName, slots, stats, overrides);
   if (overrides.potentialColumn === undefined && overrides.currentColumn === undefined) refuseForeignNames(fileName, names, headers, slots, stats);
   const warnings: ImportWarning[] = [];
-  inferMissing(slots, stats, warnings, fileName, overrides.cycleColumn === -1);
+  if (potentialNote && overrides.potentialColumn === undefined) warnings.push(makeWarning('POTENTIAL_CHOSEN', `${fileName}: ${potentialNote}`));
+  inferMissing(slots, stats, columns, warnings, fileName, overrides.cycleColumn === -1);
   const find = (r: ColumnRole) => slots.findIndex((s) => s.role === r);
   const potential = find('potential');
   const current = find('current');
@@ -94,6 +96,52 @@ function pickCurrentColumn(slots: Slot[], headers: (HeaderReading | null)[]): vo
   }
   const chosen = slots[best] as Slot;
   slots[best] = { role: 'current', why: `${chosen.why}; chosen over ${cands.filter((j) => j !== best).map((j) => `${what(j)}: ${reason(j)}`).join(', ')}` };
+}
+
+/**
+ * Of several potential columns, the measured one is used: a column whose name marks the value the
+ * instrument was told to apply ("Set potential", "Potential applied") differs from the measured
+ * potential by the cell's response (an offset, the ohmic drop), so it is kept as an extra column
+ * whatever the order. A file whose only potential is a set value is read with it. Returns the note
+ * for the warnings, or null when there was nothing to choose or say.
+ */
+function pickPotentialColumn(slots: Slot[], headers: (HeaderReading | null)[], columns: Float64Array[]): string | null {
+  const cands = slots.map((s, j) => (s.role === 'potential' ? j : -1)).filter((j) => j >= 0);
+  const set = cands.filter((j) => headers[j]?.setValue);
+  if (!set.length) return null;
+  const what = (j: number) => `column ${j + 1} "${headers[j]?.label ?? ''}"`;
+  const measured = cands.filter((j) => !headers[j]?.setValue);
+  if (!measured.length) {
+    const only = set[0] as number;
+    const chosen = slots[only] as Slot;
+    const note = `its name marks the potential the instrument applied, not a measured one; no other potential column is there, so it is used as the potential`;
+    slots[only] = { role: 'potential', why: `${chosen.why}; ${note}` };
+    return `${what(only)} ${note}: a measured potential can differ from it (by the ohmic drop, or an offset of the instrument), so check the peak potentials`;
+  }
+  const best = measured[0] as number;
+  for (const j of set) {
+    slots[j] = { role: 'other', why: `its name marks the potential the instrument applied, not the measured one: ${what(best)} is used as the potential; this one is kept as an extra column` };
+  }
+  const chosen = slots[best] as Slot;
+  slots[best] = { role: 'potential', why: `${chosen.why}; chosen over ${set.map(what).join(', ')}, whose name marks an applied (set) value` };
+  const gap = medianGap(columns[best] as Float64Array, columns[set[0] as number] as Float64Array);
+  const unitsAgree = (headers[best]?.unit?.symbol ?? '') === (headers[set[0] as number]?.unit?.symbol ?? '');
+  const unit = headers[best]?.unit?.symbol ? ` ${headers[best]?.unit?.symbol}` : '';
+  const differ = gap !== null && unitsAgree ? ` (applied minus measured: ${gap > 0 ? '+' : ''}${fmt(gap)}${unit}, median over the rows)` : '';
+  return `${what(best)} is used as the potential; ${set.map(what).join(', ')} ${set.length > 1 ? 'name' : 'names'} the potential the instrument applied, not the measured one, and ${set.length > 1 ? 'are' : 'is'} kept as an extra column${differ}. If the applied potential is wanted, choose it with a column override`;
+}
+
+/** Median of b − a over the rows where both are numbers, or null when none are. */
+function medianGap(a: Float64Array, b: Float64Array): number | null {
+  const stride = Math.max(1, Math.floor(a.length / 20000));
+  const gaps: number[] = [];
+  for (let i = 0; i < a.length && i < b.length; i += stride) {
+    const d = (b[i] as number) - (a[i] as number);
+    if (Number.isFinite(d)) gaps.push(d);
+  }
+  if (!gaps.length) return null;
+  gaps.sort((x, y) => x - y);
+  return gaps[Math.floor(gaps.length / 2)] as number;
 }
 
 function dedupeRoles(slots: Slot[], headers: (HeaderReading | null)[]): void {
@@ -156,7 +204,7 @@ function dropSweepCounter(fileName: string, slots: Slot[], columns: Float64Array
 }
 
 /** `noCycle`: the user said the file has no cycle column, so none is guessed. */
-function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarning[], fileName: string, noCycle: boolean): void {
+function inferMissing(slots: Slot[], stats: ColumnStats[], columns: Float64Array[], warnings: ImportWarning[], fileName: string, noCycle: boolean): void {
   // Kept incrementally (not recounted per column), so a file with 10⁶ columns stays linear.
   const roles = new Set<ColumnRole | null>(slots.map((s) => s.role));
   let freeCount = slots.reduce((n, s) => n + (s.role === null ? 1 : 0), 0);
@@ -188,34 +236,52 @@ function inferMissing(slots: Slot[], stats: ColumnStats[], warnings: ImportWarni
   let t: number | undefined;
   for (let j = 0; j < slots.length; j++) if (isFree(j) && looksLikeTime(st(j)) && (t === undefined || offset(j) < offset(t))) t = j;
   if (t !== undefined && spare() > 0 && !roles.has('time')) set(t, 'time', 'time — rises steadily from row to row, starting nearest 0');
+  let shapeNote = '';
   if (!roles.has('potential') && freeCount > 0) {
-    const [j, why] = guessPotential(free(), stats);
+    const [j, why, note] = guessPotential(free(), stats, columns);
     set(j, 'potential', why);
+    shapeNote = note;
   }
-  if (!roles.has('current') && freeCount > 0) set(slots.findIndex((s) => s.role === null), 'current', 'current — the next unnamed numeric column after the potential');
+  if (!roles.has('current') && freeCount > 0) set(slots.findIndex((s) => s.role === null), 'current', 'current — the first unnamed numeric column left beside the potential');
   slots.forEach((s, j) => { if (s.role === null) slots[j] = { role: 'other', why: 'not recognised; kept as an extra column' }; });
   if (guessed.length) {
-    warnings.push(makeWarning('ROLE_GUESSED', `${fileName}: column roles guessed from the numbers, not from a header (${listSome(guessed)}); check them and override if wrong`));
+    warnings.push(makeWarning('ROLE_GUESSED', `${fileName}: column roles guessed from the numbers, not from a header (${listSome(guessed)})${shapeNote}; check them and override if wrong`));
   }
 }
 
 /**
- * The potential among unnamed columns: the first one (potential-then-current is the usual order),
- * unless the first is tiny (below 0.01, as currents in amperes are) while another is not, or
- * another rises and falls far more smoothly.
+ * The potential among unnamed columns, told by its shape: a swept potential runs as a triangle
+ * wave (nearly constant steps, few turns) and a current does not, whatever the column order or the
+ * size of the numbers. When the shape does not single out one column (a resistor's current is a
+ * triangle too; a noisy potential is none), the first one is taken (potential-then-current is the
+ * usual order), unless the first is tiny (below 0.01, as currents in amperes are) while another is
+ * not, or another rises and falls far more smoothly. The third value is the note for the warning.
  */
-function guessPotential(cands: number[], stats: ColumnStats[]): [number, string] {
+function guessPotential(cands: number[], stats: ColumnStats[], columns: Float64Array[]): [number, string, string] {
   const first = cands[0] as number;
   const s0 = stats[first] as ColumnStats;
+  if (cands.length > 1) {
+    const shapes = new Map(cands.map((j) => [j, sweepShape(columns[j] as Float64Array)]));
+    const sweeps = cands.filter((j) => looksLikeSweep(shapes.get(j) as ReturnType<typeof sweepShape>));
+    if (sweeps.length === 1) {
+      const j = sweeps[0] as number;
+      const sh = shapes.get(j) as ReturnType<typeof sweepShape>;
+      const shape = `runs as a triangle wave (${sh.turns} turns, ${Math.round(sh.steady * 100)} % of its steps within 25 % of ${fmt(sh.usualStep)})`;
+      const others = cands.filter((c) => c !== j).map((c) => `column ${c + 1}`).join(', ');
+      const swapped = j !== first ? ` (column ${first + 1} comes first, so the columns look swapped against the usual order, potential first)` : '';
+      const verdict = `${shape}, ${others} ${cands.length > 2 ? 'do' : 'does'} not${swapped}`;
+      return [j, `potential — told from the shape of the numbers: it ${verdict}`, `; the potential was told from the shape of the numbers: column ${j + 1} ${verdict}`];
+    }
+  }
   const larger = cands.find((j) => j !== first && s0.maxAbs < 0.01 && (stats[j] as ColumnStats).maxAbs >= 0.05);
   if (larger !== undefined) {
-    return [larger, `potential — values reach ${fmt((stats[larger] as ColumnStats).maxAbs)}, while column ${first + 1} stays below 0.01 as currents in amperes do`];
+    return [larger, `potential — values reach ${fmt((stats[larger] as ColumnStats).maxAbs)}, while column ${first + 1} stays below 0.01 as currents in amperes do`, ''];
   }
   const smoother = cands.find((j) => j !== first && (stats[j] as ColumnStats).wander * 3 < s0.wander);
   if (smoother !== undefined) {
-    return [smoother, `potential — it rises and falls smoothly (${fmt((stats[smoother] as ColumnStats).wander)} spans of travel against ${fmt(s0.wander)} for column ${first + 1})`];
+    return [smoother, `potential — it rises and falls smoothly (${fmt((stats[smoother] as ColumnStats).wander)} spans of travel against ${fmt(s0.wander)} for column ${first + 1})`, ''];
   }
-  return [first, 'potential — the first unnamed numeric column (the usual order is potential, then current)'];
+  return [first, 'potential — the first unnamed numeric column (the usual order is potential, then current)', ''];
 }
 
 function fmt(x: number): string {

@@ -80,3 +80,48 @@ export function looksLikeCycle(s: ColumnStats, rows: number): boolean {
 export function looksLikeTime(s: ColumnStats): boolean {
   return s.strictlyIncreasing && !looksLikeIndex(s) && s.min >= 0;
 }
+
+/**
+ * The shape of a swept potential: a triangle (or staircase) wave changes by nearly the same step
+ * from point to point and turns back only at its few vertices; a current, even a smooth one,
+ * changes by steps that grow and shrink through its peaks. Heuristic: common practice, no source.
+ * Over the evenly strided sample: `steps`, the non-zero steps between consecutive finite values;
+ * `usualStep`, their median size; `steady`, the share of them within 25 % of it; `turns`, the
+ * changes of direction among the steps at least half the usual step.
+ */
+export type SweepShape = { steps: number; usualStep: number; steady: number; turns: number };
+
+export function sweepShape(col: Float64Array, maxPoints = 20000): SweepShape {
+  const stride = Math.max(1, Math.floor(col.length / maxPoints));
+  const sizes: number[] = [];
+  const signs: number[] = [];
+  let prev = NaN;
+  for (let i = 0; i < col.length; i += stride) {
+    const v = col[i] as number;
+    if (!Number.isFinite(v)) continue;
+    if (prev === prev && v !== prev) {
+      sizes.push(Math.abs(v - prev));
+      signs.push(v > prev ? 1 : -1);
+    }
+    prev = v;
+  }
+  if (sizes.length < 3) return { steps: sizes.length, usualStep: 0, steady: 0, turns: 0 };
+  const sorted = Float64Array.from(sizes).sort();
+  const usualStep = sorted[Math.floor(sorted.length / 2)] as number;
+  let steadyCount = 0;
+  let turns = 0;
+  let lastSign = 0;
+  for (let i = 0; i < sizes.length; i++) {
+    const d = sizes[i] as number;
+    if (Math.abs(d - usualStep) <= 0.25 * usualStep) steadyCount++;
+    if (d < 0.5 * usualStep) continue;
+    if (lastSign !== 0 && signs[i] !== lastSign) turns++;
+    lastSign = signs[i] as number;
+  }
+  return { steps: sizes.length, usualStep, steady: steadyCount / sizes.length, turns };
+}
+
+/** Nearly constant steps (80 % within 25 % of the usual one) and few turns (one per 20 steps at most). */
+export function looksLikeSweep(s: SweepShape): boolean {
+  return s.steps >= 10 && s.steady >= 0.8 && s.turns * 20 <= s.steps;
+}

@@ -71,6 +71,7 @@ export type ImportWarningCode =
   | 'ENCODING_GUESSED'
   | 'UNIT_ASSUMED'
   | 'ROLE_GUESSED'
+  | 'POTENTIAL_CHOSEN'
   | 'CURRENT_DENSITY'
   | 'REFERENCE_DISAGREES'
   | 'NO_SCAN_RATE'

@@ -25,6 +25,12 @@ export interface HeaderReading {
   secondary: boolean;
   /** An instrument setting, not a measured value ("Current range (A)", "Gain", "I set (A)"). */
   setting: boolean;
+  /**
+   * A potential whose name marks the value the instrument was told to apply ("Set potential",
+   * "Potential applied", "E programmed", "Control potential"), not the one it measured. Still a
+   * potential; of two potential columns the other one is used (assignColumns.ts).
+   */
+  setValue: boolean;
   /** The role was read from the name's words ("Current"), not only from its unit ("Ic (A)"). */
   roleFromName: boolean;
   /** "vs Ag/AgCl" and the like, when the header or its unit names a reference electrode. */
@@ -54,6 +60,8 @@ const OTHER_WORDS = /charge|\bq\b|step|\bstep\b|temperature|temp|ece|counter|pow
  */
 const SETTING_WORDS = /\b(range|gain|sensitivity|compliance|limits?|set\s*point|setpoint|bereich|verst[äa]rkung|empfindlichkeit|rango|ganancia|gamme|gamma|intervalo|zakres)\b/i;
 const CURRENT_SET_WORDS = /\b(set|applied|imposed|target|control(led)?|soll)\b/i;
+/** Words that mark a potential as the instrument's program rather than its measurement (common practice, no source). */
+const POTENTIAL_SET_WORDS = /\b(set|applied|imposed|programm?ed|command(ed)?|control(led)?|nominal|target|soll|vorgabe|aplicad[oa]|impos[eé]e?|applicat[oa]|zadan[eya])\b|\bset\s*point\b|\bsetpoint\b/i;
 const VS = /\s+(?:vs\.?|versus|gegen)\s+([^()[\]]+?)(?=\s*[[(]|\s*\/\s*[kmµuμ]?V\b|$)/i;
 
 /** Splits "E vs Ag/AgCl (mV)" into label "E", unit "mV" and reference "Ag/AgCl"; `unitCell` is the units row's entry. */
@@ -78,11 +86,13 @@ export function readHeader(raw: string, unitCell = ''): HeaderReading {
   const roleFromName = role !== null;
   if (secondary) role = 'other';
   if (!role && unit) role = roleOfUnit(unit);
-  const setting = role !== 'time' && role !== 'cycle' && (SETTING_WORDS.test(label) || (role === 'current' && CURRENT_SET_WORDS.test(label)));
+  const setValue = role === 'potential' && POTENTIAL_SET_WORDS.test(label);
+  // A potential's set point is its applied value, read as a set potential rather than a setting.
+  const setting = role !== 'time' && role !== 'cycle' && !setValue && (SETTING_WORDS.test(label) || (role === 'current' && CURRENT_SET_WORDS.test(label)));
   if (setting) role = 'other';
   if (!role && (OTHER_WORDS.test(label) || unit?.kind === 'charge')) role = 'other';
   return {
-    label, unit, density, secondary, setting, role, roleFromName,
+    label, unit, density, secondary, setting, setValue, role, roleFromName,
     unitText: rowUnit ? unitCell.trim() : named.unitText,
     unitFrom: rowUnit ? 'units row' : named.unit ? 'name' : null,
     reference: reference ?? fromRow?.reference ?? named.reference,
