@@ -63,7 +63,13 @@ function restore(work: SweepSignals, sig: SweepSignals, d: EarlierCycleDecay): v
 
 function notAtRest(cycle: CycleAnalysis, share: number): CycleAnalysis {
   if (cycle.peaks.length === 0) return cycle;
-  const message = `this cycle starts before the earlier cycles' product is turned back (${(share * 100).toPrecision(2)} % of it still at the surface, from the semi-integral of the current): its baselines take it as a wave from rest, so its peak currents and ipa/ipc are not those of the couple; read cycle 1, or start the sweep further from the wave`;
+  // A share is measured against the semi-integral at the switch before; past 100 % (a record that
+  // did not start at rest, so that the earlier sweep's product is not all the product there) it
+  // measures nothing and is not given.
+  const how = share > 0 && share <= 1
+    ? `${(share * 100).toPrecision(2)} % of it still at the surface, from the semi-integral of the current`
+    : 'more of it at the surface than the earlier sweep made, by the semi-integral of the current: the record did not start at rest';
+  const message = `this cycle starts before the earlier cycles' product is turned back (${how}): its baselines take it as a wave from rest, so its peak currents and ipa/ipc are not those of the couple; read cycle 1, or start the sweep further from the wave`;
   return { ...cycle, warnings: [...cycle.warnings, { code: 'NOT_AT_REST', message, cycle: cycle.index }] };
 }
 
