@@ -104,12 +104,14 @@ export function buildColumns(fileName: string, t: ParsedTable, a: RoleAssignment
   const timeS = a.timeColumn !== null && u.time ? pick(a.timeColumn, TIME_FACTORS[u.time.value]) : null;
   let cycleColumn = a.cycleColumn !== null ? pick(a.cycleColumn, 1) : null;
   const extraColumns: Record<string, Float64Array> = {};
-  const own = cycleColumn && isConstant(cycleColumn) ? findSweepSegments(potentialV) : null;
-  if (own && own.cycles.length > 1 && a.cycleColumn !== null) {
+  if (a.cycleColumn !== null && cycleColumn && isConstant(cycleColumn)) {
     // One number on every row numbers no cycles: the potential's own turns split them.
-    warnings.push(makeWarning('CYCLE_COLUMN_IGNORED', `${fileName}: column ${a.cycleColumn + 1} holds ${cycleColumn![0]} on every row, but the potential runs ${own.cycles.length} cycles; cycles are found from the potential and the column is kept as an extra column`));
-    extraColumns[a.columns[a.cycleColumn]?.name ?? `column ${a.cycleColumn + 1}`] = cycleColumn!;
-    cycleColumn = null;
+    const cycles = findSweepSegments(potentialV).cycles.length;
+    if (cycles > 1) {
+      warnings.push(makeWarning('CYCLE_COLUMN_IGNORED', `${fileName}: column ${a.cycleColumn + 1} holds ${cycleColumn[0]} on every row, but the potential runs ${cycles} cycles; cycles are found from the potential and the column is kept as an extra column`));
+      extraColumns[a.columns[a.cycleColumn]?.name ?? `column ${a.cycleColumn + 1}`] = cycleColumn;
+      cycleColumn = null;
+    }
   }
   a.columns.forEach((c) => {
     if ((c.role === 'other' || c.role === 'index') && (a.stats[c.index]?.finite ?? 0) > 0) {

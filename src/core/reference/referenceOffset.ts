@@ -10,7 +10,7 @@
 import { STANDARD_TEMPERATURE_K } from '../constants';
 import { referenceVsShe, type ConversionContext } from './convertPotential';
 import { REFERENCE_ELECTRODES, type ReferenceId } from './referenceElectrodes';
-import { hgOxideVsRheV, hydroxideNominalPh } from './hgOxideElectrode';
+import { HG_OXIDE_ACID_STANDARD_POTENTIAL_V, hgOxideVsRheV, hydroxideNominalPh } from './hgOxideElectrode';
 
 export interface ReferenceOffset {
   /** Add to a potential on `from` to get it on `to` (V). */
@@ -61,7 +61,7 @@ function hgOxideAndRhe(from: ReferenceId, to: ReferenceId, context: ConversionCo
   const e = hgOxideVsRheV(molar, pH, context.temperatureK ?? STANDARD_TEMPERATURE_K);
   const label = REFERENCE_ELECTRODES.find((r) => r.id === hgo)?.label ?? hgo;
   const fill = hydroxideNominalPh(molar);
-  const basis = `${label} vs RHE at pH ${pH}: ${e.toFixed(4)} V = 0.9256 V + (ln 10)RT/F·(pH − ${fill.toFixed(1)}) (both answer to pH alike, so in the filling's own solution the pair reads E° of HgO + 2H⁺ + 2e⁻ → Hg + H₂O, 0.926 V, Bard & Faulkner 2001 App. C, from memory, whatever the pH; the filling's pH taken as 14 + log10 c, the pH given read on the same scale; no junction)`;
+  const basis = `${label} vs RHE at pH ${pH}: ${e.toFixed(4)} V = ${HG_OXIDE_ACID_STANDARD_POTENTIAL_V.toFixed(4)} V + (ln 10)RT/F·(pH − ${fill.toFixed(1)}) (both answer to pH alike, so in the filling's own solution the pair reads E° of HgO + 2H⁺ + 2e⁻ → Hg + H₂O, 0.926 V, Bard & Faulkner 2001 App. C, from memory, whatever the pH; the filling's pH taken as 14 + log10 c, the pH given read on the same scale; no junction)`;
   const offsetV = from === 'RHE' ? -e : e;
   return { offsetV, from, to, basis: [basis, rhe.basis], typical: false };
 }
